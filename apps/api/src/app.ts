@@ -1,0 +1,80 @@
+import cookieParser from 'cookie-parser';
+import express, { type Express } from 'express';
+import { pino, type Logger } from 'pino';
+import { pinoHttp } from 'pino-http';
+import type { DataSource } from 'typeorm';
+import type { Config } from './config';
+import { AppError, errorHandler } from './http/errors';
+import { openApiDocument } from './http/openapi';
+import { originCheck } from './http/origin-check';
+import { RouteRegistry } from './http/route-registry';
+import { securityHeaders } from './http/security-headers';
+import { staticWeb } from './http/static-web';
+import { auditRoutes } from './modules/audit/audit.routes';
+import { authRateLimits } from './modules/auth/auth-rate-limit';
+import { authRoutes } from './modules/auth/auth.routes';
+import { healthRoutes } from './modules/health/health.routes';
+import { mailDomainOf } from './modules/mail/outbound-mail.service';
+import { pieceRoutes } from './modules/pieces/pieces.routes';
+import { shopRoutes } from './modules/shop/shop.routes';
+import { teamRoutes } from './modules/team/team.routes';
+
+export interface AppDeps {
+  ds: DataSource;
+  config: Config;
+  logger?: Logger;
+}
+
+export interface GelpointApp {
+  app: Express;
+  registry: RouteRegistry;
+}
+
+/** The whole HTTP application, without listening: tests mount it on port 0. */
+export function createApp({ ds, config, logger = pino({ level: config.logLevel }) }: AppDeps): GelpointApp {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', config.trustProxy);
+  app.use(securityHeaders());
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+
+  const api = express.Router();
+  api.use(express.json({ limit: '100kb', strict: true }));
+  api.use(cookieParser());
+  api.use(originCheck());
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+
+  const limits = authRateLimits(config.authRatePer15Min);
+  api.post(['/auth/login', '/auth/password-reset', '/auth/register', '/invitations/:token/accept'], limits.perAddress, limits.perAccount);
+
+  const settings = {
+    jwtSecret: config.jwtSecret,
+    sessionHours: config.sessionHours,
+    secureCookies: config.publicUrl.startsWith('https://'),
+    publicUrl: config.publicUrl,
+    mailDomain: mailDomainOf(config.publicUrl),
+    resetMinutes: config.resetMinutes,
+    invitationDays: config.invitationDays,
+  };
+  const registry = new RouteRegistry(api, ds, config.jwtSecret);
+  healthRoutes(registry, ds);
+  authRoutes(registry, ds, settings);
+  shopRoutes(registry, ds);
+  teamRoutes(registry, ds, settings);
+  pieceRoutes(registry, ds);
+  auditRoutes(registry, ds);
+
+  api.get('/openapi.json', (_req, res) => {
+    res.json(openApiDocument(registry.routes, `${config.publicUrl}`));
+  });
+  api.use((req, _res, next) => next(new AppError('not_found', 'no_such_route', `there is no ${req.method} /api${req.path}; see /api/openapi.json`)));
+  api.use(errorHandler(logger));
+
+  app.use('/api', api);
+  app.use(staticWeb(config.webDist));
+  app.use(errorHandler(logger));
+  return { app, registry };
+}

@@ -1,0 +1,71 @@
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { z } from 'zod';
+import { databaseUrl } from '@gelpoint/db';
+
+const Env = z.object({
+  GELPOINT_HOST: z.string().default('127.0.0.1'),
+  GELPOINT_API_PORT: z.coerce.number().int().min(0).max(65535).default(8080),
+  GELPOINT_PUBLIC_URL: z.url().optional(),
+  GELPOINT_JWT_SECRET: z.string().min(32, 'GELPOINT_JWT_SECRET must be at least 32 characters').optional(),
+  GELPOINT_DATA_DIR: z.string().optional(),
+  GELPOINT_SESSION_HOURS: z.coerce.number().positive().max(24 * 90).default(24 * 7),
+  GELPOINT_INVITATION_DAYS: z.coerce.number().positive().max(60).default(7),
+  GELPOINT_RESET_MINUTES: z.coerce.number().positive().max(24 * 60).default(60),
+  GELPOINT_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  GELPOINT_WEB_DIST: z.string().optional(),
+  GELPOINT_AUTH_RATE_PER_15MIN: z.coerce.number().int().positive().default(30),
+  GELPOINT_TRUST_PROXY: z.string().default('loopback'),
+});
+
+export interface Config {
+  host: string;
+  port: number;
+  publicUrl: string;
+  jwtSecret: string;
+  databaseUrl: string;
+  sessionHours: number;
+  invitationDays: number;
+  resetMinutes: number;
+  logLevel: z.infer<typeof Env>['GELPOINT_LOG_LEVEL'];
+  webDist: string;
+  authRatePer15Min: number;
+  trustProxy: string;
+}
+
+function jwtSecretFrom(env: z.infer<typeof Env>): string {
+  if (env.GELPOINT_JWT_SECRET) return env.GELPOINT_JWT_SECRET;
+  if (env.GELPOINT_DATA_DIR) {
+    try {
+      const s = readFileSync(`${env.GELPOINT_DATA_DIR}/jwt-secret`, 'utf8').trim();
+      if (s.length >= 32) return s;
+    } catch {
+      // fall through to the message below
+    }
+  }
+  throw new Error('no JWT secret: set GELPOINT_JWT_SECRET (32+ characters) or start through npm start, which generates one');
+}
+
+/** Typed configuration, validated once at boot; a bad value stops the process with a sentence. */
+export function loadConfig(raw: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = Env.safeParse(raw);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
+    throw new Error(`bad configuration — ${lines.join('; ')}`);
+  }
+  const env = parsed.data;
+  return {
+    host: env.GELPOINT_HOST,
+    port: env.GELPOINT_API_PORT,
+    publicUrl: (env.GELPOINT_PUBLIC_URL ?? `http://${env.GELPOINT_HOST}:${env.GELPOINT_API_PORT}`).replace(/\/$/, ''),
+    jwtSecret: jwtSecretFrom(env),
+    databaseUrl: databaseUrl(raw),
+    sessionHours: env.GELPOINT_SESSION_HOURS,
+    invitationDays: env.GELPOINT_INVITATION_DAYS,
+    resetMinutes: env.GELPOINT_RESET_MINUTES,
+    logLevel: env.GELPOINT_LOG_LEVEL,
+    webDist: env.GELPOINT_WEB_DIST ?? fileURLToPath(new URL('../../web/dist/', import.meta.url)),
+    authRatePer15Min: env.GELPOINT_AUTH_RATE_PER_15MIN,
+    trustProxy: env.GELPOINT_TRUST_PROXY,
+  };
+}

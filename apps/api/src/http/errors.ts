@@ -1,0 +1,100 @@
+import type { ErrorRequestHandler } from 'express';
+import type { Logger } from 'pino';
+import { ZodError } from 'zod';
+
+export type ErrorKind =
+  | 'bad_request'
+  | 'unauthorized'
+  | 'forbidden'
+  | 'not_found'
+  | 'conflict'
+  | 'gone'
+  | 'payload_too_large'
+  | 'unprocessable'
+  | 'too_many_requests'
+  | 'unavailable';
+
+const statusOf: Record<ErrorKind, number> = {
+  bad_request: 400,
+  unauthorized: 401,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  gone: 410,
+  payload_too_large: 413,
+  unprocessable: 422,
+  too_many_requests: 429,
+  unavailable: 503,
+};
+
+/** A failure the caller can act on: a code for programs, a sentence for people, a kind for the status. */
+export class AppError extends Error {
+  constructor(
+    readonly kind: ErrorKind,
+    readonly code: string,
+    message: string,
+    readonly fields?: Record<string, string>,
+  ) {
+    super(message);
+  }
+  get status(): number {
+    return statusOf[this.kind];
+  }
+}
+
+export const notFound = (what: string) => new AppError('not_found', 'not_found', `no such ${what} in this shop`);
+
+export function fromZod(err: ZodError, where: 'body' | 'query' | 'path'): AppError {
+  const fields: Record<string, string> = {};
+  for (const issue of err.issues) {
+    const key = issue.path.length ? issue.path.join('.') : where;
+    fields[key] ??= issue.message;
+  }
+  const first = err.issues[0];
+  const label = first && first.path.length ? `${first.path.join('.')}: ` : '';
+  const unknownKeys = first?.code === 'unrecognized_keys' ? ` (${first.keys.join(', ')})` : '';
+  return new AppError('bad_request', 'invalid_input', `invalid ${where} — ${label}${first?.message ?? 'not valid'}${unknownKeys}`, fields);
+}
+
+const PG_UNAVAILABLE = new Set(['57P01', '57P02', '57P03', '08000', '08003', '08006', '08001', '08004']);
+
+function isDatabaseDown(err: unknown): boolean {
+  const e = err as { code?: string; message?: string } | undefined;
+  if (!e) return false;
+  if (e.code && PG_UNAVAILABLE.has(e.code)) return true;
+  if (e.code === 'ECONNREFUSED' || e.code === 'ECONNRESET') return true;
+  return /Connection terminated|timeout exceeded when trying to connect|connect ECONNREFUSED/.test(e.message ?? '');
+}
+
+/** Turns body-parser's own errors (bad JSON, too large) into ours. */
+function fromBodyParser(err: unknown): AppError | undefined {
+  const e = err as { type?: string; status?: number } | undefined;
+  if (e?.type === 'entity.parse.failed') return new AppError('bad_request', 'malformed_json', 'the request body is not valid JSON');
+  if (e?.type === 'entity.too.large') return new AppError('payload_too_large', 'body_too_large', 'the request body is too large');
+  if (e?.type === 'encoding.unsupported' || e?.type === 'charset.unsupported')
+    return new AppError('bad_request', 'unsupported_encoding', 'send the body as UTF-8 JSON');
+  if (e?.status && e.status >= 400 && e.status < 500 && e.type)
+    return new AppError('bad_request', 'bad_request', 'the request could not be read');
+  return undefined;
+}
+
+export function toAppError(err: unknown): AppError | undefined {
+  if (err instanceof AppError) return err;
+  if (err instanceof ZodError) return fromZod(err, 'body');
+  if (isDatabaseDown(err)) return new AppError('unavailable', 'database_unavailable', 'the database is not reachable right now; try again in a moment');
+  return fromBodyParser(err);
+}
+
+export function errorHandler(logger: Logger): ErrorRequestHandler {
+  return (err, req, res, _next) => {
+    const known = toAppError(err);
+    if (known) {
+      if (known.kind === 'unavailable') logger.warn({ err, path: req.path }, known.message);
+      if (known.kind === 'unavailable') res.setHeader('Retry-After', '5');
+      res.status(known.status).json({ error: { code: known.code, message: known.message, ...(known.fields ? { fields: known.fields } : {}) } });
+      return;
+    }
+    logger.error({ err, path: req.path }, 'unhandled error');
+    res.status(500).json({ error: { code: 'internal', message: 'something went wrong on our side; it has been logged' } });
+  };
+}

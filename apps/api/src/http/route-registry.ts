@@ -1,0 +1,81 @@
+import type { Request, Response, Router } from 'express';
+import type { DataSource } from 'typeorm';
+import type { ZodType } from 'zod';
+import type { Role } from '@gelpoint/contracts';
+import { authenticate, type AuthContext } from './auth-context';
+import { AppError, fromZod } from './errors';
+
+export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
+
+/** Who may call a route: anyone, any signed-in member, or members with one of these roles. */
+export type Access = 'public' | 'member' | readonly Role[];
+
+export interface RouteSpec {
+  method: Method;
+  /** Express path below /api, e.g. `/pieces/:id`. */
+  path: string;
+  summary: string;
+  tag: string;
+  access: Access;
+  body?: ZodType;
+  query?: ZodType;
+  params?: ZodType;
+  response?: ZodType;
+  /** Status on success; a handler returning undefined answers 204. */
+  status?: number;
+}
+
+export interface HandlerInput<A> {
+  body: any;
+  query: any;
+  params: any;
+  auth: A;
+  req: Request;
+  res: Response;
+}
+
+type Handler<A> = (input: HandlerInput<A>) => Promise<unknown> | unknown;
+
+export interface RegisteredRoute extends RouteSpec {
+  fullPath: string;
+}
+
+/** Every route goes through here: validation, authentication and role checks are not optional extras. */
+export class RouteRegistry {
+  readonly routes: RegisteredRoute[] = [];
+
+  constructor(
+    private readonly router: Router,
+    private readonly ds: DataSource,
+    private readonly jwtSecret: string,
+  ) {}
+
+  add(spec: RouteSpec & { access: 'public' }, handler: Handler<AuthContext | undefined>): void;
+  add(spec: RouteSpec, handler: Handler<AuthContext>): void;
+  add(spec: RouteSpec, handler: Handler<any>): void {
+    this.routes.push({ ...spec, fullPath: `/api${spec.path}` });
+    this.router[spec.method](spec.path, async (req: Request, res: Response) => {
+      const auth = await authenticate(req, this.ds, this.jwtSecret);
+      if (spec.access !== 'public') {
+        if (!auth) throw new AppError('unauthorized', 'signed_out', 'you are not signed in; sign in first');
+        if (spec.access !== 'member' && !spec.access.includes(auth.role)) {
+          throw new AppError('forbidden', 'role_forbidden', `your role (${auth.role}) cannot do this; it needs ${spec.access.join(' or ')}`);
+        }
+      }
+      const params = parse(spec.params, req.params, 'path');
+      const query = parse(spec.query, req.query, 'query');
+      const body = spec.body ? parse(spec.body, req.body ?? {}, 'body') : undefined;
+      const result = await handler({ body, query, params, auth, req, res });
+      if (res.headersSent) return;
+      if (result === undefined) res.status(204).end();
+      else res.status(spec.status ?? 200).json(result);
+    });
+  }
+}
+
+function parse(schema: ZodType | undefined, value: unknown, where: 'body' | 'query' | 'path'): unknown {
+  if (!schema) return value;
+  const r = schema.safeParse(value);
+  if (!r.success) throw fromZod(r.error, where);
+  return r.data;
+}

@@ -1,0 +1,72 @@
+import type { Response } from 'express';
+import type { EntityManager } from 'typeorm';
+import { Membership, Session, Shop, User } from '@gelpoint/db';
+import type { MeResponse, Role, SessionResponse } from '@gelpoint/contracts';
+import { SESSION_COOKIE, signSessionToken } from '../../http/auth-context';
+import { AppError } from '../../http/errors';
+import { shopView } from '../shop/shop-view';
+
+export interface SessionSettings {
+  jwtSecret: string;
+  sessionHours: number;
+  secureCookies: boolean;
+}
+
+export const userView = (u: User) => ({ id: u.id, email: u.email, name: u.name });
+
+/** Opens a session for the user in the shop and returns what sign-in answers with. */
+export async function openSession(
+  m: EntityManager,
+  s: SessionSettings,
+  user: User,
+  shopId: string,
+  userAgent: string,
+): Promise<SessionResponse> {
+  const membership = await m.findOneBy(Membership, { userId: user.id, shopId, status: 'active' });
+  if (!membership) throw new AppError('forbidden', 'not_a_member', 'you are not an active member of that shop');
+  const shop = await m.findOneByOrFail(Shop, { id: shopId });
+  const expiresAt = new Date(Date.now() + s.sessionHours * 3600_000);
+  const session = await m.save(m.create(Session, { userId: user.id, shopId, expiresAt, userAgent: userAgent.slice(0, 300) }));
+  const token = signSessionToken(s.jwtSecret, { sub: user.id, sid: session.id }, expiresAt);
+  return { token, expiresAt: expiresAt.toISOString(), user: userView(user), shop: shopView(shop), role: membership.role as Role };
+}
+
+export function setSessionCookie(res: Response, s: SessionSettings, session: SessionResponse): void {
+  res.cookie(SESSION_COOKIE, session.token, {
+    httpOnly: true,
+    sameSite: 'lax',
+    secure: s.secureCookies,
+    path: '/',
+    expires: new Date(session.expiresAt),
+  });
+}
+
+export function clearSessionCookie(res: Response, s: SessionSettings): void {
+  res.clearCookie(SESSION_COOKIE, { httpOnly: true, sameSite: 'lax', secure: s.secureCookies, path: '/' });
+}
+
+export async function revokeSessions(m: EntityManager, where: { userId: string; shopId?: string }): Promise<void> {
+  const qb = m
+    .createQueryBuilder()
+    .update(Session)
+    .set({ revokedAt: () => 'now()' })
+    .where('user_id = :userId AND revoked_at IS NULL', { userId: where.userId });
+  if (where.shopId) qb.andWhere('shop_id = :shopId', { shopId: where.shopId });
+  await qb.execute();
+}
+
+export async function describeMe(m: EntityManager, userId: string, shopId: string, role: Role): Promise<MeResponse> {
+  const user = await m.findOneByOrFail(User, { id: userId });
+  const shop = await m.findOneByOrFail(Shop, { id: shopId });
+  const shops: { shop_id: string; shop_name: string; role: Role }[] = await m.query(
+    `SELECT m.shop_id, s.name AS shop_name, m.role FROM memberships m JOIN shops s ON s.id = m.shop_id
+      WHERE m.user_id = $1 AND m.status = 'active' ORDER BY s.name`,
+    [userId],
+  );
+  return {
+    user: userView(user),
+    shop: shopView(shop),
+    role,
+    shops: shops.map((r) => ({ shopId: r.shop_id, shopName: r.shop_name, role: r.role })),
+  };
+}

@@ -1,0 +1,9 @@
+import type { Shop as ShopRow } from '@gelpoint/db';
+import type { Shop } from '@gelpoint/contracts';
+
+export const shopView = (s: ShopRow): Shop => ({
+  id: s.id,
+  name: s.name,
+  unitSystem: s.unitSystem,
+  scaleResolutionG: s.scaleResolutionG,
+});

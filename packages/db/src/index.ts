@@ -1,0 +1,5 @@
+export * from './entities';
+export { createDataSource, connectDataSource, type DataSourceOptions } from './data-source';
+export { databaseUrl } from './config';
+export { hashPassword, verifyPassword, verifyAgainstNothing } from './passwords';
+export { seedDemo, demoSignIns, DEMO_PASSWORD } from './seed/demo';
