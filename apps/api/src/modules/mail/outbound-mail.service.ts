@@ -1,8 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
-import { OutboundMail } from '@gelpoint/db';
-
-export const MAIL_CHANNEL = 'gelpoint_outbound_mail';
+import { OUTBOUND_MAIL_CHANNEL, OutboundMail } from '@gelpoint/db';
 
 export interface MailToSend {
   shopId: string | null;
@@ -35,7 +33,7 @@ export async function queueMail(m: EntityManager, mail: MailToSend, mailDomain: 
     })
     .orIgnore()
     .execute();
-  await m.query('SELECT pg_notify($1, $2)', [MAIL_CHANNEL, id]);
+  await m.query('SELECT pg_notify($1, $2)', [OUTBOUND_MAIL_CHANNEL, id]);
 }
 
 export function mailDomainOf(publicUrl: string): string {

@@ -1,0 +1,40 @@
+import { z } from 'zod';
+import { databaseUrl } from '@gelpoint/db';
+
+const Env = z.object({
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+  SMTP_SECURE: z.enum(['true', 'false']).default('false'),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  GELPOINT_MAIL_FROM: z.string().default('Gelpoint <no-reply@gelpoint.local>'),
+  GELPOINT_WORKER_CRON: z.string().default('* * * * *'),
+  GELPOINT_MAIL_BATCH: z.coerce.number().int().min(1).max(500).default(50),
+  GELPOINT_MAIL_RETRY_BASE_S: z.coerce.number().positive().default(30),
+  GELPOINT_MAIL_MAX_ATTEMPTS: z.coerce.number().int().min(1).max(100).default(20),
+  GELPOINT_MAIL_LEASE_S: z.coerce.number().int().min(5).default(120),
+  GELPOINT_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+});
+
+export interface WorkerConfig {
+  databaseUrl: string;
+  smtp: { host: string; port: number; secure: boolean; user?: string; password?: string };
+  mailFrom: string;
+  cron: string;
+  mail: { batch: number; retryBaseS: number; maxAttempts: number; leaseS: number };
+  logLevel: z.infer<typeof Env>['GELPOINT_LOG_LEVEL'];
+}
+
+export function loadWorkerConfig(raw: NodeJS.ProcessEnv = process.env): WorkerConfig {
+  const r = Env.safeParse(raw);
+  if (!r.success) throw new Error(`bad configuration — ${r.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
+  const e = r.data;
+  return {
+    databaseUrl: databaseUrl(raw),
+    smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, secure: e.SMTP_SECURE === 'true', user: e.SMTP_USER, password: e.SMTP_PASSWORD },
+    mailFrom: e.GELPOINT_MAIL_FROM,
+    cron: e.GELPOINT_WORKER_CRON,
+    mail: { batch: e.GELPOINT_MAIL_BATCH, retryBaseS: e.GELPOINT_MAIL_RETRY_BASE_S, maxAttempts: e.GELPOINT_MAIL_MAX_ATTEMPTS, leaseS: e.GELPOINT_MAIL_LEASE_S },
+    logLevel: e.GELPOINT_LOG_LEVEL,
+  };
+}

@@ -1,0 +1,49 @@
+import pg from 'pg';
+import type { Logger } from 'pino';
+import { OUTBOUND_MAIL_CHANNEL } from '@gelpoint/db';
+
+/**
+ * LISTENs for new mail so an invitation leaves within a second instead of at the next tick; the
+ * tick remains the safety net, so a lost connection only delays mail. Reconnects by itself.
+ */
+export function listenForMail(url: string, onWake: () => void, logger: Logger): { close(): Promise<void> } {
+  let client: pg.Client | undefined;
+  let closed = false;
+  let retry: NodeJS.Timeout | undefined;
+
+  const connect = async () => {
+    if (closed) return;
+    const c = new pg.Client({ connectionString: url, application_name: 'gelpoint-worker-listen' });
+    c.on('error', (err) => {
+      logger.warn({ err: err.message }, 'mail wake-up connection lost; reconnecting');
+      c.end().catch(() => undefined);
+      schedule();
+    });
+    c.on('notification', () => onWake());
+    try {
+      await c.connect();
+      await c.query(`LISTEN ${OUTBOUND_MAIL_CHANNEL}`);
+      client = c;
+      onWake();
+    } catch (err) {
+      logger.warn({ err: (err as Error).message }, 'cannot listen for mail yet; retrying');
+      c.end().catch(() => undefined);
+      schedule();
+    }
+  };
+  const schedule = () => {
+    if (closed || retry) return;
+    retry = setTimeout(() => {
+      retry = undefined;
+      void connect();
+    }, 2_000);
+  };
+  void connect();
+  return {
+    async close() {
+      closed = true;
+      if (retry) clearTimeout(retry);
+      await client?.end().catch(() => undefined);
+    },
+  };
+}

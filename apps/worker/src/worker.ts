@@ -1,0 +1,11 @@
+import type { Transporter } from 'nodemailer';
+import type { Logger } from 'pino';
+import type { DataSource } from 'typeorm';
+import type { WorkerConfig } from './config';
+import { drainOutboundMail, type DrainResult } from './mail/outbound-mail.sender';
+
+/** One pass over every kind of due work. Later jobs (reminders, analyses) join here. */
+export async function runDueWork(ds: DataSource, transport: Transporter, config: WorkerConfig, logger: Logger): Promise<{ mail: DrainResult }> {
+  const mail = await drainOutboundMail(ds, transport, { from: config.mailFrom, ...config.mail }, logger);
+  return { mail };
+}

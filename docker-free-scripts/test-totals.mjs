@@ -1,0 +1,26 @@
+// Prints the closing totals line of npm test from vitest's JSON report, counting the type-check and
+// the web build as one check each, so a failure there is never hidden behind green tests.
+import { existsSync, readFileSync } from 'node:fs';
+
+const [file, typecheck, build] = process.argv.slice(2);
+let passed = 0;
+let failed = 0;
+let skipped = 0;
+if (existsSync(file)) {
+  const r = JSON.parse(readFileSync(file, 'utf8'));
+  passed = r.numPassedTests ?? 0;
+  failed = (r.numFailedTests ?? 0) + (r.numFailedTestSuites ?? 0) - (r.testResults ?? []).filter((s) => s.status === 'failed' && (s.assertionResults ?? []).some((a) => a.status === 'failed')).length;
+  skipped = (r.numPendingTests ?? 0) + (r.numTodoTests ?? 0);
+} else {
+  failed += 1;
+  console.error('no test report was written: vitest did not run to the end');
+}
+for (const [name, ok] of [['type-check', typecheck], ['web build', build]]) {
+  if (ok === '1') passed += 1;
+  else {
+    failed += 1;
+    console.error(`${name} failed (see above)`);
+  }
+}
+console.log(`\n${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`);
+process.exit(failed > 0 ? 1 : 0);
