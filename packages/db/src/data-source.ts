@@ -22,7 +22,8 @@ export function createDataSource(opts: DataSourceOptions = {}): DataSource {
     installExtensions: false,
     migrationsRun: false,
     migrationsTableName: 'schema_migrations',
-    logging: ['error'],
+    // Query logging would print parameters (password hashes, tokens); failures reach our own error log.
+    logging: false,
     extra: {
       max: opts.poolSize ?? 10,
       application_name: opts.applicationName ?? 'gelpoint',

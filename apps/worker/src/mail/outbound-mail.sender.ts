@@ -36,8 +36,10 @@ export function retryDelayS(attempts: number, baseS: number): number {
  * out and the row is sent again with the same Message-ID, which the provider uses to drop the copy.
  */
 export async function claimDueMail(ds: DataSource, s: MailSenderSettings): Promise<ClaimedMail[]> {
+  // Wrapped in a CTE so the driver hands back rows (TypeORM answers a bare UPDATE with [rows, count]).
   return ds.query(
-    `UPDATE outbound_mail o
+    `WITH claimed AS (
+     UPDATE outbound_mail o
         SET status = 'sending', attempts = o.attempts + 1, locked_until = now() + make_interval(secs => $2)
       WHERE o.id IN (
         SELECT id FROM outbound_mail
@@ -46,7 +48,8 @@ export async function claimDueMail(ds: DataSource, s: MailSenderSettings): Promi
          ORDER BY next_attempt_at
          LIMIT $1
          FOR UPDATE SKIP LOCKED)
-      RETURNING o.id, o.message_id, o.to_address, o.subject, o.body_text, o.body_html, o.attempts`,
+      RETURNING o.id, o.message_id, o.to_address, o.subject, o.body_text, o.body_html, o.attempts)
+     SELECT * FROM claimed`,
     [s.batch, s.leaseS],
   );
 }

@@ -31,7 +31,7 @@ export async function listPieces(ds: DataSource, shopId: string, f: PieceFilter)
     .createQueryBuilder('p')
     .leftJoinAndSelect('p.createdBy', 'u')
     .where('p.shop_id = :shopId', { shopId })
-    .orderBy('p.updated_at', 'DESC')
+    .orderBy('p.updatedAt', 'DESC')
     .addOrderBy('p.id')
     .take(f.limit)
     .skip(f.offset);

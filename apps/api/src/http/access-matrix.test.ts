@@ -1,0 +1,139 @@
+import { describe, expect, it, beforeAll } from 'vitest';
+import type { Role, SessionResponse } from '@gelpoint/contracts';
+import { PASSWORD, bearer, createShop, uniqueEmail, useHarness, type ShopFixture } from '../test-support/harness';
+
+// Fixtures in the own shop use fresh lead sessions too: the matrix signs the lead out everywhere.
+// Every route × every caller: anonymous → 401, a role without the right → 403, a role with it → neither,
+// and another shop's object → 404. The table is written out here, apart from the code under test, and
+// must name every registered route, so a new route cannot ship without its access rule being checked.
+
+const h = useHarness();
+const ROLES: Role[] = ['lead', 'maker', 'apprentice'];
+
+interface World {
+  own: ShopFixture;
+  other: ShopFixture;
+  people: Record<Role, SessionResponse>;
+  otherIds: { piece: string; membership: string; invitation: string };
+}
+
+type Params = (w: World, shop: 'own' | 'other') => Promise<Record<string, string>>;
+interface Rule {
+  allowed: 'public' | 'member' | Role[];
+  body?: (w: World) => object;
+  params?: Params;
+}
+
+async function freshPiece(w: World, shop: 'own' | 'other'): Promise<string> {
+  const lead = shop === 'own' ? await sessionFor('lead') : w.other.lead;
+  return (await h.http().post('/api/pieces').set(bearer(lead)).send({ name: 'matrix piece' }).expect(201)).body.id;
+}
+
+async function freshInvitation(w: World, shop: 'own' | 'other'): Promise<string> {
+  const lead = shop === 'own' ? await sessionFor('lead') : w.other.lead;
+  return (await h.http().post('/api/shop/invitations').set(bearer(lead)).send({ email: uniqueEmail('mx'), role: 'maker' }).expect(201)).body.id;
+}
+
+async function membershipOf(lead: SessionResponse, userId: string): Promise<string> {
+  const members = (await h.http().get('/api/shop/members').set(bearer(lead)).expect(200)).body as { id: string; userId: string }[];
+  return members.find((m) => m.userId === userId)!.id;
+}
+
+const table: Record<string, Rule> = {
+  'GET /api/health': { allowed: 'public' },
+  'POST /api/auth/register': { allowed: 'public' },
+  'POST /api/auth/login': { allowed: 'public' },
+  'POST /api/auth/logout': { allowed: 'member' },
+  'POST /api/auth/logout-everywhere': { allowed: 'member' },
+  'GET /api/me': { allowed: 'member' },
+  'POST /api/auth/switch-shop': { allowed: 'member', body: (w) => ({ shopId: w.own.shopId }) },
+  'POST /api/auth/password-reset': { allowed: 'public' },
+  'POST /api/auth/password-reset/confirm': { allowed: 'public' },
+  'GET /api/shop': { allowed: 'member' },
+  'PATCH /api/shop': { allowed: ['lead'], body: () => ({ unitSystem: 'metric' }) },
+  'GET /api/shop/members': { allowed: 'member' },
+  'PATCH /api/shop/members/:id': {
+    allowed: ['lead'],
+    body: () => ({ role: 'apprentice' }),
+    params: async (w, shop) => ({ id: shop === 'own' ? await membershipOf(await sessionFor('lead'), w.people.apprentice.user.id) : w.otherIds.membership }),
+  },
+  'GET /api/shop/invitations': { allowed: ['lead'] },
+  'POST /api/shop/invitations': { allowed: ['lead'], body: () => ({ email: uniqueEmail('mx'), role: 'maker' }) },
+  'DELETE /api/shop/invitations/:id': { allowed: ['lead'], params: async (w, shop) => ({ id: shop === 'own' ? await freshInvitation(w, 'own') : w.otherIds.invitation }) },
+  'GET /api/invitations/:token': { allowed: 'public' },
+  'POST /api/invitations/:token/accept': { allowed: 'public' },
+  'GET /api/pieces': { allowed: 'member' },
+  'POST /api/pieces': { allowed: ['lead', 'maker'], body: () => ({ name: 'matrix piece' }) },
+  'GET /api/pieces/:id': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
+  'PATCH /api/pieces/:id': { allowed: ['lead', 'maker'], body: () => ({ notes: 'checked' }), params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
+  'DELETE /api/pieces/:id': { allowed: ['lead'], params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
+  'GET /api/audit': { allowed: ['lead'] },
+};
+
+const world = {} as World;
+beforeAll(async () => {
+  world.own = await createShop(h, 'Matrix shop');
+  world.other = await createShop(h, 'Other shop');
+  world.people = { lead: world.own.lead, maker: await world.own.member('maker'), apprentice: await world.own.member('apprentice') };
+  const otherMaker = await world.other.member('maker');
+  world.otherIds = {
+    piece: await freshPiece(world, 'other'),
+    membership: await membershipOf(world.other.lead, otherMaker.user.id),
+    invitation: await freshInvitation(world, 'other'),
+  };
+});
+
+/** A new session for each request, so routes that sign out cannot spoil the next check. */
+async function sessionFor(role: Role): Promise<SessionResponse> {
+  const email = world.people[role].user.email;
+  const res = await h.http().post('/api/auth/login').send({ email, password: PASSWORD, shopId: world.own.shopId });
+  if (res.status !== 200) throw new Error(`sign-in of the ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body;
+}
+
+function call(method: string, path: string, params: Record<string, string>, body: object | undefined, session?: SessionResponse) {
+  const url = path.replace(/:([A-Za-z]+)/g, (_m, k: string) => params[k] ?? `missing-${k}`);
+  const req = h.http()[method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](url);
+  if (session) req.set(bearer(session));
+  return body ? req.send(body) : req;
+}
+
+describe('access matrix', () => {
+  it('has a rule for exactly the registered routes', () => {
+    const registered = h.app.registry.routes.map((r) => `${r.method.toUpperCase()} ${r.fullPath}`).sort();
+    expect(registered).toEqual(Object.keys(table).sort());
+  });
+
+  it('answers each caller as the table says', async () => {
+    const failures: string[] = [];
+    for (const route of h.app.registry.routes) {
+      const key = `${route.method.toUpperCase()} ${route.fullPath}`;
+      const rule = table[key]!;
+      if (rule.allowed === 'public') continue;
+      const params = rule.params ? await rule.params(world, 'own') : {};
+      const anon = await call(route.method, route.fullPath, params, rule.body?.(world));
+      if (anon.status !== 401) failures.push(`${key} anonymous → ${anon.status}, want 401`);
+      for (const role of ROLES) {
+        const allowed = rule.allowed === 'member' || rule.allowed.includes(role);
+        const p = rule.params ? await rule.params(world, 'own') : {};
+        const res = await call(route.method, route.fullPath, p, rule.body?.(world), await sessionFor(role));
+        if (allowed && (res.status === 401 || res.status === 403 || res.status >= 500)) failures.push(`${key} ${role} → ${res.status}, want allowed`);
+        if (!allowed && res.status !== 403) failures.push(`${key} ${role} → ${res.status}, want 403`);
+        if (allowed && rule.params) {
+          const foreign = await call(route.method, route.fullPath, await rule.params(world, 'other'), rule.body?.(world), await sessionFor(role));
+          if (foreign.status !== 404) failures.push(`${key} ${role} with another shop's id → ${foreign.status}, want 404`);
+        }
+      }
+    }
+    expect(failures).toEqual([]);
+  });
+
+  it("never changes another shop's objects", async () => {
+    const piece = await h.http().get(`/api/pieces/${world.otherIds.piece}`).set(bearer(world.other.lead)).expect(200);
+    expect(piece.body.notes).toBe('');
+    const members = (await h.http().get('/api/shop/members').set(bearer(world.other.lead)).expect(200)).body as { id: string; role: string }[];
+    expect(members.find((m) => m.id === world.otherIds.membership)!.role).toBe('maker');
+    const invs = (await h.http().get('/api/shop/invitations').set(bearer(world.other.lead)).expect(200)).body as { id: string; status: string }[];
+    expect(invs.find((i) => i.id === world.otherIds.invitation)!.status).toBe('pending');
+  });
+});

@@ -1,0 +1,2 @@
+/** PostgreSQL NOTIFY channels shared by the API (which notifies) and the worker (which listens). */
+export const OUTBOUND_MAIL_CHANNEL = 'gelpoint_outbound_mail';

@@ -1,0 +1,40 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { DataSource } from 'typeorm';
+import { createDataSource } from '../data-source';
+import { Membership, Piece, Shop, User } from '../entities';
+import { verifyPassword } from '../passwords';
+import { DEMO_PASSWORD, demoSignIns, seedDemo } from './demo';
+
+// npm test seeds the e2e database with the real seed command before the tests run.
+let ds: DataSource;
+beforeAll(async () => {
+  const url = process.env.GELPOINT_E2E_DATABASE_URL;
+  if (!url) throw new Error('GELPOINT_E2E_DATABASE_URL is not set: run the tests through npm test');
+  ds = createDataSource({ url, poolSize: 2 });
+  await ds.initialize();
+});
+afterAll(() => ds?.destroy());
+
+describe('demo scenario', () => {
+  it('holds one shop with a lead, a maker and an apprentice who can sign in with the demo password', async () => {
+    const shops = await ds.getRepository(Shop).find();
+    expect(shops).toHaveLength(1);
+    for (const d of demoSignIns) {
+      const user = await ds.getRepository(User).findOneByOrFail({ email: d.email });
+      expect(await verifyPassword(DEMO_PASSWORD, user.passwordHash)).toBe(true);
+      const m = await ds.getRepository(Membership).findOneByOrFail({ userId: user.id, shopId: shops[0]!.id });
+      expect(m.role).toBe(d.role);
+    }
+    expect(demoSignIns.map((d) => d.role).sort()).toEqual(['apprentice', 'lead', 'maker']);
+  });
+
+  it('has pieces at several different stages', async () => {
+    const pieces = await ds.getRepository(Piece).find();
+    expect(new Set(pieces.map((p) => p.stage)).size).toBeGreaterThanOrEqual(4);
+  });
+
+  it('does nothing when run again', async () => {
+    expect(await seedDemo(ds)).toBe(false);
+    expect(await ds.getRepository(User).count()).toBe(3);
+  });
+});
