@@ -10,10 +10,25 @@ export class CliError extends Error {
   }
 }
 
+// node:util parseArgs reads "--flag -5" as a missing value; negative numbers are real input here
+// (temperatures below zero, levels below the origin, and volumes the user should hear are wrong).
+function attachNegativeValues(argv: string[]): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < argv.length; i++) {
+    const arg = argv[i]!;
+    const next = argv[i + 1];
+    if (arg.startsWith('--') && !arg.includes('=') && next !== undefined && /^-(\d|\.\d)/.test(next)) {
+      out.push(`${arg}=${next}`);
+      i++;
+    } else out.push(arg);
+  }
+  return out;
+}
+
 /** node:util parseArgs, with its errors turned into one readable line. */
 export function parseOptions<T extends ParseArgsConfig['options']>(argv: string[], options: T, allowPositionals = false) {
   try {
-    return parseArgs({ args: argv, options, allowPositionals, strict: true });
+    return parseArgs({ args: attachNegativeValues(argv), options, allowPositionals, strict: true });
   } catch (err) {
     throw new CliError(err instanceof Error ? err.message.split('\n')[0]! : String(err));
   }

@@ -1,0 +1,74 @@
+import { readFileSync } from 'node:fs';
+import { equivalentAge, parseCureReadingsCsv, type EquivalentAge } from '@gelpoint/core';
+import { CliError, numberOption, parseOptions, type Command } from '../command';
+
+const options = {
+  readings: { type: 'string' },
+  'ref-temp-c': { type: 'string' },
+  'activation-kj-mol': { type: 'string' },
+  'min-temp-c': { type: 'string' },
+  json: { type: 'boolean' },
+} as const;
+
+function readLog(path: string): string {
+  try {
+    return readFileSync(path, 'utf8');
+  } catch (err) {
+    const reason = err instanceof Error && 'code' in err ? String((err as NodeJS.ErrnoException).code) : 'unreadable';
+    throw new CliError(`cannot read ${path} (${reason}); give the path of a time,tempC CSV file`);
+  }
+}
+
+function summary(age: EquivalentAge, refTempC: number): string {
+  const line = (label: string, value: string) => `${label.padEnd(24)}${value}`;
+  const lines = [
+    line('readings', `${age.readings} (${age.firstTime} to ${age.lastTime})`),
+    line('elapsed', `${age.elapsedHours.toFixed(2)} h`),
+    line(`equivalent at ${refTempC} °C`, `${age.equivalentHoursAtRef.toFixed(2)} h`),
+    line('below minimum', `${age.stalledHours.toFixed(2)} h`),
+    'each reading holds until the next; the last one holds for zero time',
+  ];
+  return [...lines, ...age.cautions.map((c) => `${c.severity}: ${c.message}`)].join('\n');
+}
+
+/**
+ * gelpoint cure: equivalent age at the reference temperature from a logged `time,tempC` CSV.
+ * The sum runs from the first reading to the last: each reading holds until the next, so the
+ * last reading marks the end of the log and holds for zero time.
+ */
+export const command: Command = async (argv) => {
+  const { values } = parseOptions(argv, options);
+  if (!values.readings) throw new CliError('--readings is required (the path of a time,tempC CSV file)');
+  const refTempC = numberOption(values['ref-temp-c'], 'ref-temp-c', { required: true })!;
+  const activationKJPerMol = numberOption(values['activation-kj-mol'], 'activation-kj-mol', { required: true })!;
+  const minTempC = numberOption(values['min-temp-c'], 'min-temp-c');
+  const parsed = parseCureReadingsCsv(readLog(values.readings));
+  if (!parsed.ok) {
+    const issues = parsed.error.issues ?? [];
+    const first = issues[0]?.message ?? parsed.error.message;
+    const more = issues.length > 1 ? ` (and ${issues.length - 1} more bad row${issues.length > 2 ? 's' : ''}; nothing was imported)` : '';
+    throw new CliError(`${values.readings}: ${first}${more}`);
+  }
+  const age = equivalentAge({
+    readings: parsed.value,
+    refTempC,
+    activationEnergyKJPerMol: activationKJPerMol,
+    ...(minTempC === undefined ? {} : { minTempC }),
+  });
+  if (!age.ok) throw new CliError(age.error.message);
+  if (!values.json) return summary(age.value, refTempC);
+  const { spans, cautions, ...totals } = age.value;
+  return JSON.stringify(
+    {
+      ...totals,
+      refTempC,
+      activationEnergyKJPerMol: activationKJPerMol,
+      minTempC: minTempC ?? null,
+      lastReadingHoldsHours: 0,
+      spans: spans.map(({ from, to, tempC, stalled, equivalentHoursAtRef }) => ({ from, to, tempC, stalled, equivalentHoursAtRef })),
+      cautions: cautions.map(({ code, severity, message }) => ({ code, severity, message })),
+    },
+    null,
+    2,
+  );
+};

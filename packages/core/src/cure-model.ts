@@ -1,0 +1,209 @@
+import { hoursAtTemperature, rateFactor } from './arrhenius';
+import { caution, type Caution } from './cautions';
+import type { CureReading } from './cure-readings';
+import { equivalentAge, type CureSpan, type EquivalentAge } from './equivalent-age';
+import { checkZone, formatIsoInstant, msPerHour, parseIsoInstant } from './iso-time';
+import { fail, ok, type Result } from './result';
+import { activationEnergyOf, readyToMachineHOf, type ResinSystem } from './shelf';
+
+export type CureStageKey = 'gel' | 'next_layer_opens' | 'tack_free' | 'next_layer_closes' | 'demold' | 'full_cure' | 'ready_to_machine';
+
+export interface CureStage {
+  key: CureStageKey;
+  /** Data-sheet time, i.e. hours of cure at the reference temperature. */
+  equivalentHoursAtRef: number;
+}
+
+type CureTimes = Pick<ResinSystem, 'gelTimeH' | 'recoatWindow' | 'tackFreeH' | 'demoldH' | 'fullCureH' | 'readyToMachineH'>;
+
+/** The milestones of one pour in the order the cure reaches them. */
+export function cureStages(product: CureTimes): CureStage[] {
+  const stages: CureStage[] = [
+    { key: 'gel', equivalentHoursAtRef: product.gelTimeH },
+    { key: 'next_layer_opens', equivalentHoursAtRef: product.recoatWindow.earliestH },
+    { key: 'tack_free', equivalentHoursAtRef: product.tackFreeH },
+    { key: 'next_layer_closes', equivalentHoursAtRef: product.recoatWindow.latestH },
+    { key: 'demold', equivalentHoursAtRef: product.demoldH },
+    { key: 'full_cure', equivalentHoursAtRef: product.fullCureH },
+    { key: 'ready_to_machine', equivalentHoursAtRef: readyToMachineHOf(product) },
+  ];
+  // Stable sort keeps the listed order for stages a data sheet gives the same time.
+  return stages.sort((p, q) => p.equivalentHoursAtRef - q.equivalentHoursAtRef);
+}
+
+/** Share of full cure, 0..1. */
+export function cureProgress(equivalentHoursAtRef: number, product: Pick<ResinSystem, 'fullCureH'>): number {
+  return Math.min(1, Math.max(0, equivalentHoursAtRef / product.fullCureH));
+}
+
+/** The last stage the cure has reached, or null before gel. */
+export function stageReached(equivalentHoursAtRef: number, product: CureTimes): CureStageKey | null {
+  let reached: CureStageKey | null = null;
+  for (const stage of cureStages(product)) if (equivalentHoursAtRef >= stage.equivalentHoursAtRef) reached = stage.key;
+  return reached;
+}
+
+export type NextLayerWindowState = 'not_open' | 'open' | 'closed';
+
+/** Closed means the layer has gone past its recoat window and needs sanding before the next pour. */
+export function nextLayerWindow(equivalentHoursAtRef: number, product: Pick<ResinSystem, 'recoatWindow'>): NextLayerWindowState {
+  if (equivalentHoursAtRef < product.recoatWindow.earliestH) return 'not_open';
+  return equivalentHoursAtRef <= product.recoatWindow.latestH ? 'open' : 'closed';
+}
+
+export interface TimesAtTemperature {
+  tempC: number;
+  /** k(T)/k(Tref): above 1 cures faster than the data sheet. */
+  rateFactor: number;
+  /** Below the product's minimum temperature the times below are not reached at all. */
+  belowMinimum: boolean;
+  potLifeMin: number;
+  gelTimeH: number;
+  nextLayerOpensH: number;
+  nextLayerClosesH: number;
+  tackFreeH: number;
+  demoldH: number;
+  fullCureH: number;
+  readyToMachineH: number;
+}
+
+/** The data sheet's times scaled for one steady temperature (Arrhenius). */
+export function timesAtTemperature(product: ResinSystem, tempC: number): TimesAtTemperature {
+  const ea = activationEnergyOf(product);
+  const at = (hours: number) => hoursAtTemperature(hours, tempC, product.referenceTempC, ea);
+  return {
+    tempC,
+    rateFactor: rateFactor(tempC, product.referenceTempC, ea),
+    belowMinimum: tempC < product.minWorkTempC,
+    potLifeMin: at(product.potLifeMin),
+    gelTimeH: at(product.gelTimeH),
+    nextLayerOpensH: at(product.recoatWindow.earliestH),
+    nextLayerClosesH: at(product.recoatWindow.latestH),
+    tackFreeH: at(product.tackFreeH),
+    demoldH: at(product.demoldH),
+    fullCureH: at(product.fullCureH),
+    readyToMachineH: at(readyToMachineHOf(product)),
+  };
+}
+
+export interface StageTiming {
+  key: CureStageKey;
+  equivalentHoursAtRef: number;
+  reached: boolean;
+  /** When the logged history reached it (only when the spans that reached it are known). */
+  reachedAt: string | null;
+  /** For stages still ahead: when it will be reached at the assumed temperature; null if never (too cold). */
+  predictedAt: string | null;
+}
+
+export interface StagePredictionInput {
+  product: ResinSystem;
+  equivalentHoursAtRef: number;
+  /** The moment the equivalent age was taken. */
+  asOf: string;
+  /** The temperature expected from asOf on. */
+  assumedTempC: number;
+  zone?: string;
+}
+
+/** When each stage still ahead will be reached if the temperature holds at assumedTempC from asOf on. */
+export function predictStages(input: StagePredictionInput): Result<StageTiming[]> {
+  const asOf = parseIsoInstant(input.asOf);
+  if (!asOf.ok) return fail(asOf.error.code, `The time to predict from: ${asOf.error.message}`);
+  const zone = checkZone(input.zone ?? 'utc');
+  if (!zone.ok) return zone;
+  if (!Number.isFinite(input.assumedTempC)) return fail('temperature_invalid', `The assumed temperature must be a number in °C, got ${String(input.assumedTempC)}.`);
+  const { product } = input;
+  const rate = input.assumedTempC < product.minWorkTempC ? 0 : rateFactor(input.assumedTempC, product.referenceTempC, activationEnergyOf(product));
+  return ok(
+    cureStages(product).map((stage) => {
+      const remaining = stage.equivalentHoursAtRef - input.equivalentHoursAtRef;
+      const reached = remaining <= 0;
+      return {
+        key: stage.key,
+        equivalentHoursAtRef: stage.equivalentHoursAtRef,
+        reached,
+        reachedAt: null,
+        predictedAt: reached || rate === 0 ? null : formatIsoInstant(asOf.value + (remaining / rate) * msPerHour, zone.value),
+      };
+    }),
+  );
+}
+
+function whenReached(spans: CureSpan[], equivalentHoursAtRef: number): number | null {
+  let gained = 0;
+  for (const span of spans) {
+    if (span.rate > 0 && gained + span.equivalentHoursAtRef >= equivalentHoursAtRef) {
+      return span.fromMs + ((equivalentHoursAtRef - gained) / span.rate) * msPerHour;
+    }
+    gained += span.equivalentHoursAtRef;
+  }
+  return null;
+}
+
+export interface CureStatusInput {
+  product: ResinSystem;
+  readings: CureReading[];
+  /** When the layer was poured. */
+  pouredAt: string;
+  /** Now, or the moment to look at. */
+  asOf: string;
+  /** The plan's shop temperature: used where no reading exists and for predictions. */
+  assumedTempC: number;
+  zone?: string;
+}
+
+export interface CureStatus {
+  age: EquivalentAge;
+  progress: number;
+  stageReached: CureStageKey | null;
+  nextLayerWindow: NextLayerWindowState;
+  stages: StageTiming[];
+  cautions: Caution[];
+}
+
+/** Where one pour stands: from the pour to asOf on the logged history, then forward at the assumed temperature. */
+export function cureStatus(input: CureStatusInput): Result<CureStatus> {
+  const { product } = input;
+  const age = equivalentAge({
+    readings: input.readings,
+    refTempC: product.referenceTempC,
+    activationEnergyKJPerMol: activationEnergyOf(product),
+    minTempC: product.minWorkTempC,
+    window: { from: input.pouredAt, to: input.asOf },
+    assumedTempC: input.assumedTempC,
+    ...(input.zone === undefined ? {} : { zone: input.zone }),
+  });
+  if (!age.ok) return age;
+  const te = age.value.equivalentHoursAtRef;
+  const ahead = predictStages({ product, equivalentHoursAtRef: te, asOf: input.asOf, assumedTempC: input.assumedTempC, ...(input.zone === undefined ? {} : { zone: input.zone }) });
+  if (!ahead.ok) return ahead;
+  const stages = ahead.value.map((stage) => {
+    if (!stage.reached) return stage;
+    const at = whenReached(age.value.spans, stage.equivalentHoursAtRef);
+    return { ...stage, reachedAt: at === null ? null : formatIsoInstant(at, input.zone ?? 'utc') };
+  });
+  const cautions = [...age.value.cautions];
+  const windowState = nextLayerWindow(te, product);
+  if (windowState === 'closed') {
+    cautions.push(
+      caution(
+        'next_layer_window_closed',
+        'warning',
+        `The recoat window of "${product.name}" has closed; sand the surface (and clean off any blush) before pouring the next layer, as the TDS describes.`,
+        'layer',
+      ),
+    );
+  }
+  if (input.assumedTempC < product.minWorkTempC) {
+    cautions.push(
+      caution(
+        'cure_will_stall',
+        'warning',
+        `At the assumed ${input.assumedTempC} °C, below the product's minimum of ${product.minWorkTempC} °C, the cure will not move on; the stages ahead have no predicted time until the piece is warmed.`,
+        'plan',
+      ),
+    );
+  }
+  return ok({ age: age.value, progress: cureProgress(te, product), stageReached: stageReached(te, product), nextLayerWindow: windowState, stages, cautions });
+}

@@ -1,0 +1,371 @@
+import { batchCount } from './batches';
+import type { Caution } from './cautions';
+import { timesAtTemperature, type TimesAtTemperature } from './cure-model';
+import { woodCost, type WoodBlank, type WoodCost } from './cost';
+import { splitIntoLayers, type LayerSlice } from './layers';
+import { checkPigmentPct, mixBatch, mixedDensity, type MixResult } from './mix';
+import { pourPlanCautions } from './pour-plan-cautions';
+import { groupedTree, readGroupedTree, roundGrouped, type GroupedAmounts, type RoundedGroups } from './pour-plan-rounding';
+import { fail, ok, type Result } from './result';
+import { roundTree, stepsToAmount } from './rounding';
+import { sealCoatVolume } from './seal-coat';
+import { pigmentPricePerG, resinPricePerG, validatePigment, validateResinSystem, type Pigment, type ResinSystem } from './shelf';
+import type { ScaleResolutionG } from './unit-format';
+import { mm3ToMl } from './units';
+import type { VolumeCurve } from './volume-curve';
+
+/** Resin (A+B) left in each cup after pouring, by mass or by volume. */
+export type CupWaste = { massG: number } | { volumeMl: number };
+
+export interface PourPlanInput {
+  cavity: {
+    /** Volume below each level, levels from the cavity floor. */
+    curve: VolumeCurve;
+    /** Wood surface the resin touches: what the seal coat covers. */
+    wettedAreaMm2: number;
+    /** Resin depth at the deepest point when filled to fillLevelMm (depth map); leave out when the curve starts at that point. */
+    maxDepthMm?: number;
+  };
+  fillLevelMm: number;
+  deepPour: { product: ResinSystem; pigment?: { pigment: Pigment; pct: number } };
+  sealCoat?: { product: ResinSystem; filmThicknessMm: number; coats: number; absorptionFactor: number };
+  /** Extra resin on every layer, as a percentage of that layer's fill volume. */
+  overPourPct: number;
+  cupWaste: CupWaste;
+  scaleResolutionG: ScaleResolutionG;
+  shopTempC: number;
+  /** With humidity and the surface temperature the plan also checks the dew point. */
+  shopAir?: { rhPct: number; surfaceTempC: number };
+  wood?: WoodBlank;
+}
+
+export interface PartTotals {
+  partA: { grams: number; ml: number };
+  partB: { grams: number; ml: number };
+  pigment: { grams: number };
+  totalGrams: number;
+}
+
+export interface CostTotals {
+  resin: number;
+  pigment: number;
+  total: number;
+}
+
+export interface PlannedBatch extends MixResult {
+  /** 0-based, run-sheet order across the plan: seal coats first, then layers from the floor up. */
+  index: number;
+  pour: { kind: 'seal_coat'; coat: number } | { kind: 'layer'; layer: number };
+  cost: CostTotals;
+}
+
+export interface LayerPlan extends Omit<LayerSlice, 'fillVolumeMm3'> {
+  fillVolumeMl: number;
+  overPourMl: number;
+  pourVolumeMl: number;
+  batches: PlannedBatch[];
+  totals: PartTotals;
+  cost: CostTotals;
+}
+
+export interface SealCoatPlan {
+  productName: string;
+  wettedAreaMm2: number;
+  filmThicknessMm: number;
+  absorptionFactor: number;
+  volumeMl: number;
+  coats: { index: number; volumeMl: number; batches: PlannedBatch[]; totals: PartTotals; cost: CostTotals }[];
+  totals: PartTotals;
+  cost: CostTotals;
+}
+
+export interface PourPlan {
+  /** Every margin the plan adds, by name, so none is hidden inside a total. */
+  margins: {
+    overPour: { label: string; pct: number; volumeMl: number };
+    cupWaste: { label: string; perBatch: CupWaste; batches: number; resinG: number };
+  };
+  /** The steps everything shown is rounded to. */
+  resolution: { grams: ScaleResolutionG; ml: number; cost: number };
+  fill: { fillLevelMm: number; fillVolumeMl: number; pourVolumeMl: number; layerCount: number; layerThicknessMm: number; deepestResinMm: number };
+  sealCoat: SealCoatPlan | null;
+  layers: LayerPlan[];
+  deepPour: { productName: string; pigmentName: string | null; pigmentPct: number; totals: PartTotals; cost: CostTotals };
+  cost: { sealCoat: number; deepPour: number; wood: (WoodCost & { shownCost: number }) | null; piece: number };
+  /** The data sheet's times at the shop temperature. */
+  shopTimes: { deepPour: TimesAtTemperature; sealCoat: TimesAtTemperature | null };
+  /** appliesTo.kind 'product': index 0 is the deep-pour product, 1 the seal-coat product. */
+  cautions: Caution[];
+}
+
+export const mlStep = 0.1;
+export const costStep = 0.01;
+
+interface ExactBatch {
+  mix: MixResult;
+  pour: PlannedBatch['pour'];
+}
+
+function planProduct(product: ResinSystem, label: string): Result<ResinSystem> {
+  const checked = validateResinSystem(product);
+  if (!checked.ok) return fail(checked.error.code, `${label}: ${checked.error.message}`, checked.error.issues);
+  return checked;
+}
+
+function cupWasteResinG(cupWaste: CupWaste, densityGPerMl: number): number {
+  return 'massG' in cupWaste ? cupWaste.massG : cupWaste.volumeMl * densityGPerMl;
+}
+
+/** Splits one pour (a layer or a coat) into its fewest equal batches and mixes each exactly. */
+function exactBatches(product: ResinSystem, pourMl: number, cupWaste: CupWaste, pigmentPct: number, pour: (b: number) => PlannedBatch['pour']): Result<ExactBatch[]> {
+  const density = mixedDensity(product.mixRatio, product.densityAGPerMl, product.densityBGPerMl);
+  const wasteG = cupWasteResinG(cupWaste, density);
+  const count = batchCount({ deliveredResinG: pourMl * density, cupWasteResinG: wasteG, pigmentPct, maxBatchG: product.maxBatchG });
+  if (!count.ok) return fail(count.error.code, `${product.name}: ${count.error.message}`);
+  const mix = mixBatch({
+    target: { volumeMl: pourMl / count.value + wasteG / density },
+    ratio: product.mixRatio,
+    basis: product.mixRatio.basis,
+    densityAGPerMl: product.densityAGPerMl,
+    densityBGPerMl: product.densityBGPerMl,
+    pigmentPct,
+  });
+  if (!mix.ok) return mix;
+  return ok(Array.from({ length: count.value }, (_, b) => ({ mix: mix.value, pour: pour(b) })));
+}
+
+function grams(groups: ExactBatch[][]): GroupedAmounts {
+  return groups.map((batches) => batches.map(({ mix }) => [mix.partA.grams, mix.partB.grams, mix.pigment.grams]));
+}
+
+function millilitres(groups: ExactBatch[][]): GroupedAmounts {
+  return groups.map((batches) => batches.map(({ mix }) => [mix.partA.ml, mix.partB.ml]));
+}
+
+function partTotals(g: { total: number; parts: number[] }, ml: { parts: number[]; total: number }): PartTotals {
+  return {
+    partA: { grams: g.parts[0]!, ml: ml.parts[0]! },
+    partB: { grams: g.parts[1]!, ml: ml.parts[1]! },
+    pigment: { grams: g.parts[2]! },
+    totalGrams: g.total,
+  };
+}
+
+/** Totals as sums of the shown amounts one level down, never rounded on their own. */
+function addTotals(rows: PartTotals[]): PartTotals {
+  const add = (pick: (row: PartTotals) => number) => tidy(rows.reduce((acc, row) => acc + pick(row), 0));
+  return {
+    partA: { grams: add((r) => r.partA.grams), ml: add((r) => r.partA.ml) },
+    partB: { grams: add((r) => r.partB.grams), ml: add((r) => r.partB.ml) },
+    pigment: { grams: add((r) => r.pigment.grams) },
+    totalGrams: add((r) => r.totalGrams),
+  };
+}
+
+/** The shown grams and mL of every batch, with group and pour totals that are their sums. */
+function shownAmounts(groups: ExactBatch[][], scaleResolutionG: ScaleResolutionG) {
+  const g = roundGrouped(grams(groups), scaleResolutionG);
+  const ml = roundGrouped(millilitres(groups), mlStep);
+  const shownGroups = g.groups.map((group, gi) => {
+    const batches = group.batches.map((batch, bi) => partTotals(batch, ml.groups[gi]!.batches[bi]!));
+    return { batches, totals: addTotals(batches) };
+  });
+  return { groups: shownGroups, overall: addTotals(shownGroups.map((group) => group.totals)) };
+}
+
+// Sums of numbers on a 0.1 grid pick up float tails; shown amounts never have more than two decimals.
+function tidy(x: number): number {
+  return Math.round(x * 100) / 100;
+}
+
+function costOfBatch(batch: PartTotals, resinPerG: number, pigmentPerG: number): number[] {
+  return [(batch.partA.grams + batch.partB.grams) * resinPerG, batch.pigment.grams * pigmentPerG];
+}
+
+function costTotals(parts: number[]): CostTotals {
+  return { resin: parts[0]!, pigment: parts[1] ?? 0, total: tidy(parts.reduce((a, v) => a + v, 0)) };
+}
+
+function sumCosts(rows: CostTotals[]): CostTotals {
+  return {
+    resin: tidy(rows.reduce((a, r) => a + r.resin, 0)),
+    pigment: tidy(rows.reduce((a, r) => a + r.pigment, 0)),
+    total: tidy(rows.reduce((a, r) => a + r.total, 0)),
+  };
+}
+
+function groupCosts(rounded: RoundedGroups): { batches: CostTotals[]; group: CostTotals }[] {
+  return rounded.groups.map((group) => {
+    const batches = group.batches.map((b) => costTotals(b.parts));
+    return { batches, group: sumCosts(batches) };
+  });
+}
+
+export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
+  const deepProduct = planProduct(input.deepPour.product, 'Deep-pour product');
+  if (!deepProduct.ok) return deepProduct;
+  const deep = deepProduct.value;
+  const sealProduct = input.sealCoat ? planProduct(input.sealCoat.product, 'Seal-coat product') : null;
+  if (sealProduct && !sealProduct.ok) return sealProduct;
+  const pigmentChoice = input.deepPour.pigment;
+  if (pigmentChoice) {
+    const pigment = validatePigment(pigmentChoice.pigment);
+    if (!pigment.ok) return pigment;
+  }
+  const pigmentPct = checkPigmentPct(pigmentChoice?.pct ?? 0);
+  if (!pigmentPct.ok) return pigmentPct;
+  if (!Number.isFinite(input.overPourPct) || input.overPourPct < 0 || input.overPourPct > 100) {
+    return fail('over_pour_out_of_range', `The over-pour margin must be between 0 and 100 % of the fill, got ${String(input.overPourPct)}; a few percent is usual.`);
+  }
+  const wasteAmount = 'massG' in input.cupWaste ? input.cupWaste.massG : input.cupWaste.volumeMl;
+  if (!Number.isFinite(wasteAmount) || wasteAmount < 0) {
+    return fail('cup_waste_negative', `The cup-waste allowance must be zero or more, got ${String(wasteAmount)}; weigh what a scraped cup still holds.`);
+  }
+  if (input.scaleResolutionG !== 0.1 && input.scaleResolutionG !== 1) {
+    return fail('scale_resolution_unknown', `The scale resolution must be 0.1 g or 1 g, got ${String(input.scaleResolutionG)}.`);
+  }
+  if (!Number.isFinite(input.shopTempC)) return fail('temperature_invalid', `The shop temperature must be a number in °C, got ${String(input.shopTempC)}.`);
+
+  const slices = splitIntoLayers({
+    curve: input.cavity.curve,
+    fillLevelMm: input.fillLevelMm,
+    maxLayerMm: deep.maxLayerMm,
+    ...(input.cavity.maxDepthMm === undefined ? {} : { maxDepthMm: input.cavity.maxDepthMm }),
+  });
+  if (!slices.ok) return slices;
+
+  // Seal coat: one pour per coat, since each coat is mixed once the one before is tacky.
+  const sealGroups: ExactBatch[][] = [];
+  let sealVolumeMl = 0;
+  let sealPerCoatMl = 0;
+  if (input.sealCoat && sealProduct?.ok) {
+    const volume = sealCoatVolume({ wettedAreaMm2: input.cavity.wettedAreaMm2, ...input.sealCoat });
+    if (!volume.ok) return volume;
+    sealVolumeMl = volume.value.totalMl;
+    sealPerCoatMl = volume.value.perCoatMl;
+    for (let coat = 0; coat < input.sealCoat.coats; coat++) {
+      const batches = exactBatches(sealProduct.value, sealPerCoatMl, input.cupWaste, 0, () => ({ kind: 'seal_coat', coat }));
+      if (!batches.ok) return batches;
+      sealGroups.push(batches.value);
+    }
+  }
+
+  const layerVolumes = slices.value.map((slice) => {
+    const fillVolumeMl = mm3ToMl(slice.fillVolumeMm3);
+    const overPourMl = (fillVolumeMl * input.overPourPct) / 100;
+    return { fillVolumeMl, overPourMl, pourVolumeMl: fillVolumeMl + overPourMl };
+  });
+  const layerGroups: ExactBatch[][] = [];
+  for (let layer = 0; layer < slices.value.length; layer++) {
+    const batches = exactBatches(deep, layerVolumes[layer]!.pourVolumeMl, input.cupWaste, pigmentPct.value, () => ({ kind: 'layer', layer }));
+    if (!batches.ok) return batches;
+    layerGroups.push(batches.value);
+  }
+
+  const sealShown = shownAmounts(sealGroups, input.scaleResolutionG);
+  const deepShown = shownAmounts(layerGroups, input.scaleResolutionG);
+
+  const sealResinPerG = sealProduct?.ok ? resinPricePerG(sealProduct.value) : 0;
+  const deepResinPerG = resinPricePerG(deep);
+  const pigmentPerG = pigmentChoice ? pigmentPricePerG(pigmentChoice.pigment) : 0;
+  const sealCostAmounts = sealShown.groups.map((g) => g.batches.map((b) => costOfBatch(b, sealResinPerG, 0)));
+  const deepCostAmounts = deepShown.groups.map((g) => g.batches.map((b) => costOfBatch(b, deepResinPerG, pigmentPerG)));
+  const wood = input.wood ? woodCost(input.wood) : null;
+  if (wood && !wood.ok) return wood;
+  const sealCostTree = groupedTree(sealCostAmounts);
+  const deepCostTree = groupedTree(deepCostAmounts);
+  const woodExact = wood?.ok ? wood.value.cost : 0;
+  const pieceCost = roundTree({ exact: sealCostTree.exact + deepCostTree.exact + woodExact, children: [sealCostTree, deepCostTree, { exact: woodExact }] }, costStep);
+  const sealCosts = groupCosts(readGroupedTree(pieceCost.children[0]!, costStep));
+  const deepCosts = groupCosts(readGroupedTree(pieceCost.children[1]!, costStep));
+  const woodShown = stepsToAmount(pieceCost.children[2]!.steps, costStep);
+
+  let nextIndex = 0;
+  const planBatch = (exact: ExactBatch, shown: PartTotals, cost: CostTotals): PlannedBatch => ({
+    ...shown,
+    mixedDensityGPerMl: exact.mix.mixedDensityGPerMl,
+    index: nextIndex++,
+    pour: exact.pour,
+    cost,
+  });
+
+  const sealCoat: SealCoatPlan | null =
+    input.sealCoat && sealProduct?.ok
+      ? {
+          productName: sealProduct.value.name,
+          wettedAreaMm2: input.cavity.wettedAreaMm2,
+          filmThicknessMm: input.sealCoat.filmThicknessMm,
+          absorptionFactor: input.sealCoat.absorptionFactor,
+          volumeMl: sealVolumeMl,
+          coats: sealGroups.map((group, coat) => ({
+            index: coat,
+            volumeMl: sealPerCoatMl,
+            batches: group.map((exact, b) => planBatch(exact, sealShown.groups[coat]!.batches[b]!, sealCosts[coat]!.batches[b]!)),
+            totals: sealShown.groups[coat]!.totals,
+            cost: sealCosts[coat]!.group,
+          })),
+          totals: sealShown.overall,
+          cost: sumCosts(sealCosts.map((c) => c.group)),
+        }
+      : null;
+
+  const layers: LayerPlan[] = slices.value.map((slice, layer) => {
+    const { fillVolumeMm3: _volume, ...levels } = slice;
+    return {
+      ...levels,
+      ...layerVolumes[layer]!,
+      batches: layerGroups[layer]!.map((exact, b) => planBatch(exact, deepShown.groups[layer]!.batches[b]!, deepCosts[layer]!.batches[b]!)),
+      totals: deepShown.groups[layer]!.totals,
+      cost: deepCosts[layer]!.group,
+    };
+  });
+
+  const deepCostTotal = sumCosts(deepCosts.map((c) => c.group));
+  const sealCostTotal = sealCoat?.cost ?? { resin: 0, pigment: 0, total: 0 };
+  const fillVolumeMl = layerVolumes.reduce((a, l) => a + l.fillVolumeMl, 0);
+  const overPourMl = layerVolumes.reduce((a, l) => a + l.overPourMl, 0);
+  const batchTotal = sealGroups.flat().length + layerGroups.flat().length;
+  const deepDensity = mixedDensity(deep.mixRatio, deep.densityAGPerMl, deep.densityBGPerMl);
+  const sealDensity = sealProduct?.ok ? mixedDensity(sealProduct.value.mixRatio, sealProduct.value.densityAGPerMl, sealProduct.value.densityBGPerMl) : deepDensity;
+  const wasteResinG = sealGroups.flat().length * cupWasteResinG(input.cupWaste, sealDensity) + layerGroups.flat().length * cupWasteResinG(input.cupWaste, deepDensity);
+
+  const plan: PourPlan = {
+    margins: {
+      overPour: { label: 'Over-pour margin', pct: input.overPourPct, volumeMl: overPourMl },
+      cupWaste: { label: 'Cup waste per batch', perBatch: input.cupWaste, batches: batchTotal, resinG: wasteResinG },
+    },
+    resolution: { grams: input.scaleResolutionG, ml: mlStep, cost: costStep },
+    fill: {
+      fillLevelMm: input.fillLevelMm,
+      fillVolumeMl,
+      pourVolumeMl: fillVolumeMl + overPourMl,
+      layerCount: slices.value.length,
+      layerThicknessMm: slices.value[0]!.thicknessMm,
+      deepestResinMm: Math.max(...slices.value.map((s) => s.deepestResinMm)),
+    },
+    sealCoat,
+    layers,
+    deepPour: {
+      productName: deep.name,
+      pigmentName: pigmentChoice?.pigment.name ?? null,
+      pigmentPct: pigmentPct.value,
+      totals: deepShown.overall,
+      cost: deepCostTotal,
+    },
+    cost: {
+      sealCoat: sealCostTotal.total,
+      deepPour: deepCostTotal.total,
+      wood: wood?.ok ? { ...wood.value, shownCost: woodShown } : null,
+      piece: tidy(sealCostTotal.total + deepCostTotal.total + woodShown),
+    },
+    shopTimes: {
+      deepPour: timesAtTemperature(deep, input.shopTempC),
+      sealCoat: sealProduct?.ok ? timesAtTemperature(sealProduct.value, input.shopTempC) : null,
+    },
+    cautions: [],
+  };
+  const cautions = pourPlanCautions(input, plan, deep, sealProduct?.ok ? sealProduct.value : null);
+  if (!cautions.ok) return cautions;
+  plan.cautions = cautions.value;
+  return ok(plan);
+}

@@ -1,0 +1,46 @@
+/**
+ * Errors in core are values, never exceptions: every function that can refuse its input returns a
+ * `Result<T>`. Callers (browser, API, CLI) decide how to show the sentence; nothing here throws for
+ * bad input, so a half-typed form never crashes the live numbers.
+ */
+export interface CoreIssue {
+  /** 1-based row of an imported file, when the issue belongs to one. */
+  row?: number;
+  /** The input field the issue is about, when there is one. */
+  field?: string;
+  message: string;
+}
+
+export interface CoreError {
+  /** Stable, snake_case, for programs (the API maps codes to status codes). */
+  code: string;
+  /** One or more sentences for people: what was wrong and how to fix it. */
+  message: string;
+  /** Every individual problem, when there were several (e.g. all bad rows of a CSV). */
+  issues?: CoreIssue[];
+}
+
+export type Result<T> = { ok: true; value: T } | { ok: false; error: CoreError };
+
+export function ok<T>(value: T): Result<T> {
+  return { ok: true, value };
+}
+
+export function fail<T = never>(code: string, message: string, issues?: CoreIssue[]): Result<T> {
+  return issues ? { ok: false, error: { code, message, issues } } : { ok: false, error: { code, message } };
+}
+
+/** A check for a number that must be finite and above zero, phrased for the person who typed it. */
+export function requirePositive(value: number, label: string, code = 'not_positive'): Result<number> {
+  if (!Number.isFinite(value) || value <= 0) {
+    return fail(code, `${label} must be a number above zero, got ${String(value)}; enter a positive value.`);
+  }
+  return ok(value);
+}
+
+export function requireNonNegative(value: number, label: string, code = 'negative'): Result<number> {
+  if (!Number.isFinite(value) || value < 0) {
+    return fail(code, `${label} must be zero or more, got ${String(value)}; enter a value of 0 or above.`);
+  }
+  return ok(value);
+}
