@@ -34,7 +34,9 @@ describe('demo scenario', () => {
   });
 
   it('does nothing when run again', async () => {
+    const before = await ds.getRepository(User).count();
     expect(await seedDemo(ds)).toBe(false);
-    expect(await ds.getRepository(User).count()).toBe(3);
+    expect(await ds.getRepository(User).count()).toBe(before);
+    expect(await ds.getRepository(Shop).count()).toBe(1);
   });
 });

@@ -1,0 +1,67 @@
+import { hashKey, type QueryClient } from '@tanstack/react-query';
+import { createContext, useContext, type ReactNode } from 'react';
+import type { AppRouter } from './router';
+import { paths } from '../config/paths';
+import { authKeys } from '../features/auth/api/keys';
+
+export interface SessionControl {
+  /** After sign-in, registration or joining: go where the person was heading. */
+  signedIn(returnTo: string): Promise<void>;
+  /** After the shop switch: start again on Today, with the new shop's data. */
+  shopSwitched(): Promise<void>;
+  /** After an intentional sign-out. */
+  signedOut(): Promise<void>;
+  /** The API said the session is gone: sign in again and come back here. */
+  expired(): void;
+}
+
+const publicPaths: readonly string[] = [paths.signIn.path, paths.createShop.path, paths.forgotPassword.path, paths.resetPassword.path];
+
+export function createSessionControl(queryClient: QueryClient, getRouter: () => AppRouter): SessionControl {
+  let leaving = false;
+  const sessionHash = hashKey(authKeys.session());
+
+  // Forget the person first, so the sign-in page does not bounce back; drop their shop's data once the frame is gone.
+  const leave = async (href: string) => {
+    if (leaving) return;
+    leaving = true;
+    try {
+      queryClient.setQueryData(authKeys.session(), null);
+      await getRouter().navigate(href, { replace: true });
+      queryClient.removeQueries({ predicate: (query) => query.queryHash !== sessionHash });
+    } finally {
+      leaving = false;
+    }
+  };
+
+  return {
+    signedIn: async (returnTo) => {
+      await getRouter().navigate(returnTo, { replace: true });
+    },
+    shopSwitched: async () => {
+      await getRouter().navigate(paths.today.getHref(), { replace: true });
+    },
+    signedOut: () => leave(paths.signIn.getHref({ notice: 'signed-out' })),
+    expired: () => {
+      // Nobody was signed in to begin with: the loaders already send the visitor to sign in.
+      if (!queryClient.getQueryData(authKeys.session())) return;
+      // Mid-navigation, come back to the page that was being opened rather than the one being left.
+      const { navigation, location } = getRouter().state;
+      const { pathname, search } = navigation.location ?? location;
+      if (publicPaths.includes(pathname) || pathname.startsWith('/invitations/')) return;
+      void leave(paths.signIn.getHref({ returnTo: `${pathname}${search}`, notice: 'session-ended' }));
+    },
+  };
+}
+
+const SessionControlContext = createContext<SessionControl | null>(null);
+
+export function SessionControlProvider({ control, children }: { control: SessionControl; children: ReactNode }) {
+  return <SessionControlContext.Provider value={control}>{children}</SessionControlContext.Provider>;
+}
+
+export function useSessionControl(): SessionControl {
+  const control = useContext(SessionControlContext);
+  if (!control) throw new Error('useSessionControl needs SessionControlProvider above it in the tree.');
+  return control;
+}

@@ -1,0 +1,21 @@
+import { InvitationPreview } from '@gelpoint/contracts';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { authKeys } from './keys';
+
+/** What an e-mailed invitation offers: the shop, the role and the address it was sent to. */
+export function getInvitation(token: string, signal?: AbortSignal): Promise<InvitationPreview> {
+  return api.get(`/invitations/${encodeURIComponent(token)}`, InvitationPreview, signal ? { signal } : {});
+}
+
+export const invitationQueryOptions = (token: string) =>
+  queryOptions({
+    queryKey: authKeys.invitation(token),
+    queryFn: ({ signal }) => getInvitation(token, signal),
+    meta: { publicRequest: true },
+    retry: false,
+  });
+
+export function useInvitation(token: string) {
+  return useQuery(invitationQueryOptions(token));
+}

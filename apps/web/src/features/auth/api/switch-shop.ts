@@ -1,0 +1,19 @@
+import { SessionResponse, type SwitchShopRequest } from '@gelpoint/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+
+export function switchShop(body: SwitchShopRequest): Promise<SessionResponse> {
+  return api.post('/auth/switch-shop', body, SessionResponse);
+}
+
+export function useSwitchShop({ onSuccess }: { onSuccess?: (session: SessionResponse) => unknown } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: switchShop,
+    onSuccess: async (session) => {
+      // Every cached list belongs to the shop we just left.
+      queryClient.removeQueries();
+      await onSuccess?.(session);
+    },
+  });
+}

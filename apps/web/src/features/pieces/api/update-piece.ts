@@ -1,0 +1,25 @@
+import { Piece, type UpdatePieceRequest } from '@gelpoint/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { pieceKeys } from './keys';
+
+export interface UpdatePieceInput {
+  pieceId: string;
+  changes: UpdatePieceRequest;
+}
+
+export function updatePiece({ pieceId, changes }: UpdatePieceInput): Promise<Piece> {
+  return api.patch(`/pieces/${encodeURIComponent(pieceId)}`, changes, Piece);
+}
+
+export function useUpdatePiece({ onSuccess }: { onSuccess?: (piece: Piece) => unknown } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updatePiece,
+    onSuccess: async (piece) => {
+      queryClient.setQueryData(pieceKeys.detail(piece.id), piece);
+      await queryClient.invalidateQueries({ queryKey: pieceKeys.lists() });
+      await onSuccess?.(piece);
+    },
+  });
+}

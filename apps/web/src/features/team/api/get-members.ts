@@ -1,0 +1,21 @@
+import { Member } from '@gelpoint/contracts';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { z } from 'zod';
+import { api } from '../../../lib/api-client';
+import { teamKeys } from './keys';
+
+const MemberList = z.array(Member);
+
+export function getMembers(signal?: AbortSignal): Promise<Member[]> {
+  return api.get('/shop/members', MemberList, signal ? { signal } : {});
+}
+
+export const membersQueryOptions = () =>
+  queryOptions({
+    queryKey: teamKeys.memberList(),
+    queryFn: ({ signal }) => getMembers(signal),
+  });
+
+export function useMembers() {
+  return useQuery(membersQueryOptions());
+}

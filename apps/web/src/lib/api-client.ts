@@ -1,0 +1,97 @@
+import type { ZodType } from 'zod';
+import { env } from '../config/env';
+import { errorFromResponse, networkError, unexpectedResponse } from './api-error';
+
+export const csrfHeaderName = 'X-Gelpoint-Csrf';
+
+export type HttpMethod = 'GET' | 'HEAD' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+
+/** RFC 9110 §9.2.1 safe methods; every other method changes state and must carry the CSRF header. */
+export function isSafeMethod(method: HttpMethod): boolean {
+  return method === 'GET' || method === 'HEAD';
+}
+
+export type QueryValue = string | number | boolean | null | undefined;
+
+export function buildUrl(basePath: string, path: string, query?: Readonly<Record<string, QueryValue>>): string {
+  const base = basePath.replace(/\/+$/, '');
+  const tail = path.startsWith('/') ? path : `/${path}`;
+  const search = new URLSearchParams();
+  for (const [name, value] of Object.entries(query ?? {})) {
+    if (value === undefined || value === null || value === '') continue;
+    search.append(name, String(value));
+  }
+  const qs = search.toString();
+  return qs ? `${base}${tail}?${qs}` : `${base}${tail}`;
+}
+
+export interface RequestOptions {
+  query?: Readonly<Record<string, QueryValue>>;
+  signal?: AbortSignal;
+}
+
+export interface ApiClient {
+  get<T>(path: string, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
+  post<T>(path: string, body: unknown, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
+  patch<T>(path: string, body: unknown, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
+  /** For answers without content (204), such as sign-out or a password change. */
+  postWithoutContent(path: string, body?: unknown, options?: RequestOptions): Promise<void>;
+  delete(path: string, options?: RequestOptions): Promise<void>;
+}
+
+export interface ApiClientConfig {
+  basePath: string;
+  fetch?: typeof fetch;
+}
+
+export function createApiClient(config: ApiClientConfig): ApiClient {
+  const send = async (method: HttpMethod, path: string, body: unknown, options: RequestOptions = {}): Promise<Response> => {
+    const headers = new Headers({ Accept: 'application/json' });
+    if (!isSafeMethod(method)) headers.set(csrfHeaderName, '1');
+    const init: RequestInit = { method, headers, credentials: 'same-origin' };
+    if (body !== undefined) {
+      headers.set('Content-Type', 'application/json');
+      init.body = JSON.stringify(body);
+    }
+    if (options.signal) init.signal = options.signal;
+
+    const doFetch = config.fetch ?? globalThis.fetch;
+    let response: Response;
+    try {
+      response = await doFetch(buildUrl(config.basePath, path, options.query), init);
+    } catch (error) {
+      // A cancelled query must stay a cancellation, so the query library can tell it apart from a failure.
+      if (options.signal?.aborted) throw error;
+      throw networkError();
+    }
+    if (!response.ok) throw errorFromResponse(response.status, await response.text());
+    return response;
+  };
+
+  const readAs = async <T>(response: Response, schema: ZodType<T>): Promise<T> => {
+    const text = await response.text();
+    let json: unknown;
+    try {
+      json = JSON.parse(text);
+    } catch {
+      throw unexpectedResponse(response.status);
+    }
+    const parsed = schema.safeParse(json);
+    if (!parsed.success) throw unexpectedResponse(response.status);
+    return parsed.data;
+  };
+
+  return {
+    get: async (path, schema, options) => readAs(await send('GET', path, undefined, options), schema),
+    post: async (path, body, schema, options) => readAs(await send('POST', path, body, options), schema),
+    patch: async (path, body, schema, options) => readAs(await send('PATCH', path, body, options), schema),
+    postWithoutContent: async (path, body, options) => {
+      await send('POST', path, body, options);
+    },
+    delete: async (path, options) => {
+      await send('DELETE', path, undefined, options);
+    },
+  };
+}
+
+export const api: ApiClient = createApiClient({ basePath: env.apiBasePath });
