@@ -16,6 +16,12 @@ import { authRoutes } from './modules/auth/auth.routes';
 import { healthRoutes } from './modules/health/health.routes';
 import { mailDomainOf } from './modules/mail/outbound-mail.service';
 import { pieceRoutes } from './modules/pieces/pieces.routes';
+import { moldRoutes } from './modules/molds/molds.routes';
+import { Molds } from './modules/molds/molds.service';
+import { StlChecker } from './modules/molds/stl-check';
+import { pourPlanRoutes } from './modules/pour-plans/pour-plans.routes';
+import { PourPlans } from './modules/pour-plans/pour-plans.service';
+import { shelfRoutes } from './modules/shelf/shelf.routes';
 import { shopRoutes } from './modules/shop/shop.routes';
 import { teamRoutes } from './modules/team/team.routes';
 
@@ -66,6 +72,10 @@ export function createApp({ ds, config, logger = pino({ level: config.logLevel }
   teamRoutes(registry, ds, settings);
   pieceRoutes(registry, ds);
   auditRoutes(registry, ds);
+  shelfRoutes(registry, ds);
+  const molds = new Molds(ds, new StlChecker(config.maxStlTriangles));
+  moldRoutes(registry, molds, config.maxStlBytes);
+  pourPlanRoutes(registry, new PourPlans(ds, molds.cavityForPlan));
 
   api.get('/openapi.json', (_req, res) => {
     res.json(openApiDocument(registry.routes, `${config.publicUrl}`));

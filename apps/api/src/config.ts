@@ -16,6 +16,8 @@ const Env = z.object({
   GELPOINT_WEB_DIST: z.string().optional(),
   GELPOINT_AUTH_RATE_PER_15MIN: z.coerce.number().int().positive().default(30),
   GELPOINT_TRUST_PROXY: z.string().default('loopback'),
+  GELPOINT_MAX_STL_MB: z.coerce.number().positive().max(1024).default(100),
+  GELPOINT_MAX_STL_TRIANGLES: z.coerce.number().int().positive().max(20_000_000).default(5_000_000),
 });
 
 export interface Config {
@@ -31,6 +33,8 @@ export interface Config {
   webDist: string;
   authRatePer15Min: number;
   trustProxy: string;
+  maxStlTriangles: number;
+  maxStlBytes: number;
 }
 
 function jwtSecretFrom(env: z.infer<typeof Env>): string {
@@ -67,5 +71,7 @@ export function loadConfig(raw: NodeJS.ProcessEnv = process.env): Config {
     webDist: env.GELPOINT_WEB_DIST ?? fileURLToPath(new URL('../../web/dist/', import.meta.url)),
     authRatePer15Min: env.GELPOINT_AUTH_RATE_PER_15MIN,
     trustProxy: env.GELPOINT_TRUST_PROXY,
+    maxStlTriangles: env.GELPOINT_MAX_STL_TRIANGLES,
+    maxStlBytes: Math.round(env.GELPOINT_MAX_STL_MB * 1024 * 1024),
   };
 }

@@ -13,6 +13,8 @@ const Env = z.object({
   GELPOINT_MAIL_RETRY_BASE_S: z.coerce.number().positive().default(30),
   GELPOINT_MAIL_MAX_ATTEMPTS: z.coerce.number().int().min(1).max(100).default(20),
   GELPOINT_MAIL_LEASE_S: z.coerce.number().int().min(5).default(120),
+  GELPOINT_MAX_STL_TRIANGLES: z.coerce.number().int().positive().max(20_000_000).default(5_000_000),
+  GELPOINT_ANALYSIS_LEASE_S: z.coerce.number().int().min(30).default(600),
   GELPOINT_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 
@@ -22,6 +24,7 @@ export interface WorkerConfig {
   mailFrom: string;
   cron: string;
   mail: { batch: number; retryBaseS: number; maxAttempts: number; leaseS: number };
+  molds: { maxTriangles: number; leaseS: number; maxAttempts: number };
   logLevel: z.infer<typeof Env>['GELPOINT_LOG_LEVEL'];
 }
 
@@ -35,6 +38,7 @@ export function loadWorkerConfig(raw: NodeJS.ProcessEnv = process.env): WorkerCo
     mailFrom: e.GELPOINT_MAIL_FROM,
     cron: e.GELPOINT_WORKER_CRON,
     mail: { batch: e.GELPOINT_MAIL_BATCH, retryBaseS: e.GELPOINT_MAIL_RETRY_BASE_S, maxAttempts: e.GELPOINT_MAIL_MAX_ATTEMPTS, leaseS: e.GELPOINT_MAIL_LEASE_S },
+    molds: { maxTriangles: e.GELPOINT_MAX_STL_TRIANGLES, leaseS: e.GELPOINT_ANALYSIS_LEASE_S, maxAttempts: 3 },
     logLevel: e.GELPOINT_LOG_LEVEL,
   };
 }

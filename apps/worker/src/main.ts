@@ -2,7 +2,7 @@ import cron from 'node-cron';
 import { pino } from 'pino';
 import { connectDataSource, createDataSource } from '@gelpoint/db';
 import { loadWorkerConfig } from './config';
-import { listenForMail } from './mail/mail-wakeup';
+import { listenForWork } from './work-wakeup';
 import { smtpTransport } from './mail/smtp-transport';
 import { SerialRunner } from './serial-runner';
 import { runDueWork } from './worker';
@@ -33,7 +33,7 @@ const transport = smtpTransport(config.smtp);
 
 if (once) {
   const result = await runDueWork(ds, transport, config, logger);
-  process.stdout.write(`worker: sent ${result.mail.sent} mail, ${result.mail.failed} failed (will be retried)\n`);
+  process.stdout.write(`worker: sent ${result.mail.sent} mail, ${result.mail.failed} failed (will be retried); analysed ${result.molds} mould(s)\n`);
   transport.close();
   await ds.destroy();
   process.exit(0);
@@ -46,7 +46,7 @@ const runner = new SerialRunner(
   (err) => logger.error({ err }, 'worker pass failed; the next tick tries again'),
 );
 const task = cron.schedule(config.cron, () => runner.wake(), { name: 'gelpoint-tick', noOverlap: true });
-const wakeup = listenForMail(config.databaseUrl, () => runner.wake(), logger);
+const wakeup = listenForWork(config.databaseUrl, () => runner.wake(), logger);
 logger.info({ cron: config.cron }, 'worker started');
 runner.wake();
 

@@ -5,3 +5,6 @@ export * from './team';
 export * from './pieces';
 export * from './audit';
 export * from './health';
+export * from './shelf';
+export * from './molds';
+export * from './pour-plans';

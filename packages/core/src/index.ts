@@ -22,3 +22,4 @@ export * from './cure-readings';
 export * from './equivalent-age';
 export * from './cure-model';
 export * from './finish-coats';
+export * from './mold-cavity';

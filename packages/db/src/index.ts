@@ -3,4 +3,4 @@ export { createDataSource, connectDataSource, type DataSourceOptions } from './d
 export { databaseUrl } from './config';
 export { hashPassword, verifyPassword, verifyAgainstNothing } from './passwords';
 export { seedDemo, demoSignIns, DEMO_PASSWORD } from './seed/demo';
-export { OUTBOUND_MAIL_CHANNEL } from './channels';
+export { MOLD_ANALYSIS_CHANNEL, OUTBOUND_MAIL_CHANNEL } from './channels';

@@ -1,6 +1,7 @@
 import { describe, expect, it, beforeAll } from 'vitest';
 import type { Role, SessionResponse } from '@gelpoint/contracts';
 import { PASSWORD, bearer, createShop, uniqueEmail, useHarness, type ShopFixture } from '../test-support/harness';
+import { binaryStl, pocketMouldTriangles } from '../test-support/pocket-mould';
 
 // Fixtures in the own shop use fresh lead sessions too: the matrix signs the lead out everywhere.
 // Every route × every caller: anonymous → 401, a role without the right → 403, a role with it → neither,
@@ -14,7 +15,11 @@ interface World {
   own: ShopFixture;
   other: ShopFixture;
   people: Record<Role, SessionResponse>;
-  otherIds: { piece: string; membership: string; invitation: string };
+  otherIds: { piece: string; membership: string; invitation: string; resin: string; pigment: string; lot: string; plan: string; mold: string };
+  ownPiece: string;
+  ownResin: string;
+  ownPigment: string;
+  ownMold: string;
 }
 
 type Params = (w: World, shop: 'own' | 'other') => Promise<Record<string, string>>;
@@ -22,6 +27,7 @@ interface Rule {
   allowed: 'public' | 'member' | Role[];
   body?: (w: World) => object;
   params?: Params;
+  query?: string;
 }
 
 async function freshPiece(w: World, shop: 'own' | 'other'): Promise<string> {
@@ -33,6 +39,47 @@ async function freshInvitation(w: World, shop: 'own' | 'other'): Promise<string>
   const lead = shop === 'own' ? await sessionFor('lead') : w.other.lead;
   return (await h.http().post('/api/shop/invitations').set(bearer(lead)).send({ email: uniqueEmail('mx'), role: 'maker' }).expect(201)).body.id;
 }
+
+const leadOf = async (w: World, shop: 'own' | 'other') => (shop === 'own' ? sessionFor('lead') : w.other.lead);
+const created = async (w: World, shop: 'own' | 'other', path: string, body: object) =>
+  (await h.http().post(path).set(bearer(await leadOf(w, shop))).send(body).expect(201)).body.id as string;
+
+const sampleResin = (name = 'Matrix deep pour') => ({
+  name,
+  use: 'deep_pour',
+  mixRatio: { a: 2, b: 1, basis: 'volume' },
+  densityAGPerMl: 1.16,
+  densityBGPerMl: 0.98,
+  potLifeMin: 45,
+  gelTimeH: 8,
+  tackFreeH: 16,
+  recoatWindow: { earliestH: 12, latestH: 36 },
+  demoldH: 48,
+  fullCureH: 168,
+  referenceTempC: 22,
+  minWorkTempC: 16,
+  maxWorkTempC: 30,
+  maxLayerMm: 25,
+  maxBatchG: 4000,
+  pricePerKit: 120,
+  kitSizeG: 4500,
+  shelfLifeMonths: 12,
+});
+const freshResin = (w: World, shop: 'own' | 'other') => created(w, shop, '/api/shelf/resin-systems', sampleResin());
+const freshPigment = (w: World, shop: 'own' | 'other') =>
+  created(w, shop, '/api/shelf/pigments', { name: 'Matrix teal', kind: 'powder', recommendedPct: 1, maxPct: 3, pricePerPack: 9, packSizeG: 25 });
+const freshLot = async (w: World, shop: 'own' | 'other') =>
+  created(w, shop, '/api/shelf/lots', { part: 'A', resinSystemId: await freshResin(w, shop), lotNumber: 'MX-1', quantityG: 3000, receivedOn: '2026-11-01' });
+const planBody = (pieceId: string, resinSystemId: string) => ({
+  pieceId,
+  name: 'Matrix plan',
+  cavity: { source: 'shape', shape: { kind: 'rectangle', lengthMm: 200, widthMm: 100, depthMm: 20 } },
+  fillLevelMm: 20,
+  deepPour: { resinSystemId },
+  shopTempC: 21,
+});
+const freshPlan = async (w: World, shop: 'own' | 'other') => created(w, shop, '/api/pour-plans', planBody(await freshPiece(w, shop), await freshResin(w, shop)));
+const ownOrOther = (fresh: (w: World, shop: 'own') => Promise<string>, key: keyof World['otherIds']): Params => async (w, shop) => ({ id: shop === 'own' ? await fresh(w, 'own') : w.otherIds[key] });
 
 async function membershipOf(lead: SessionResponse, userId: string): Promise<string> {
   const members = (await h.http().get('/api/shop/members').set(bearer(lead)).expect(200)).body as { id: string; userId: string }[];
@@ -68,7 +115,39 @@ const table: Record<string, Rule> = {
   'PATCH /api/pieces/:id': { allowed: ['lead', 'maker'], body: () => ({ notes: 'checked' }), params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
   'DELETE /api/pieces/:id': { allowed: ['lead'], params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
   'GET /api/audit': { allowed: ['lead'] },
+  'GET /api/shelf/resin-systems': { allowed: 'member' },
+  'POST /api/shelf/resin-systems': { allowed: ['lead'], body: () => sampleResin() },
+  'GET /api/shelf/resin-systems/:id': { allowed: 'member', params: ownOrOther(freshResin, 'resin') },
+  'PUT /api/shelf/resin-systems/:id': { allowed: ['lead'], body: () => sampleResin('Renamed'), params: ownOrOther(freshResin, 'resin') },
+  'DELETE /api/shelf/resin-systems/:id': { allowed: ['lead'], params: ownOrOther(freshResin, 'resin') },
+  'GET /api/shelf/pigments': { allowed: 'member' },
+  'POST /api/shelf/pigments': { allowed: ['lead'], body: () => ({ name: 'Matrix ochre', kind: 'paste', recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }) },
+  'GET /api/shelf/pigments/:id': { allowed: 'member', params: ownOrOther(freshPigment, 'pigment') },
+  'PUT /api/shelf/pigments/:id': { allowed: ['lead'], body: () => ({ name: 'Matrix ochre', kind: 'paste', recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }), params: ownOrOther(freshPigment, 'pigment') },
+  'DELETE /api/shelf/pigments/:id': { allowed: ['lead'], params: ownOrOther(freshPigment, 'pigment') },
+  'GET /api/shelf/lots': { allowed: 'member' },
+  'POST /api/shelf/lots': { allowed: ['lead'], body: (w) => ({ part: 'pigment', pigmentId: w.ownPigment, lotNumber: 'MX-2', quantityG: 25, receivedOn: '2026-11-02' }) },
+  'GET /api/shelf/lots/:id': { allowed: 'member', params: ownOrOther(freshLot, 'lot') },
+  'PATCH /api/shelf/lots/:id': { allowed: ['lead'], body: () => ({ notes: 'checked' }), params: ownOrOther(freshLot, 'lot') },
+  'DELETE /api/shelf/lots/:id': { allowed: ['lead'], params: ownOrOther(freshLot, 'lot') },
+  'POST /api/molds': { allowed: ['lead', 'maker'] },
+  'GET /api/molds': { allowed: 'member' },
+  'GET /api/molds/:id': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
+  'GET /api/molds/:id/fill': { allowed: 'member', query: 'level=5', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
+  'GET /api/molds/:id/layers': { allowed: 'member', query: 'levels=4,6', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
+  'GET /api/molds/:id/stl': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
+  'DELETE /api/molds/:id': { allowed: ['lead', 'maker'], params: async (w, shop) => ({ id: shop === 'own' ? await uploadMold(w, 'own') : w.otherIds.mold }) },
+  'GET /api/pour-plans': { allowed: 'member' },
+  'POST /api/pour-plans': { allowed: ['lead', 'maker'], body: (w) => planBody(w.ownPiece, w.ownResin) },
+  'GET /api/pour-plans/:id': { allowed: 'member', params: ownOrOther(freshPlan, 'plan') },
+  'PUT /api/pour-plans/:id': { allowed: ['lead', 'maker'], body: (w) => planBody(w.ownPiece, w.ownResin), params: ownOrOther(freshPlan, 'plan') },
+  'DELETE /api/pour-plans/:id': { allowed: ['lead', 'maker'], params: ownOrOther(freshPlan, 'plan') },
 };
+
+async function uploadMold(w: World, shop: 'own' | 'other'): Promise<string> {
+  const res = await h.http().post('/api/molds').set(bearer(await leadOf(w, shop))).attach('file', binaryStl(pocketMouldTriangles({ outer: [40, 30, 10], pocket: [5, 5, 35, 25], floorZ: 4 })), 'm.stl').expect(202);
+  return res.body.id;
+}
 
 const world = {} as World;
 beforeAll(async () => {
@@ -80,7 +159,16 @@ beforeAll(async () => {
     piece: await freshPiece(world, 'other'),
     membership: await membershipOf(world.other.lead, otherMaker.user.id),
     invitation: await freshInvitation(world, 'other'),
+    resin: await freshResin(world, 'other'),
+    pigment: await freshPigment(world, 'other'),
+    lot: await freshLot(world, 'other'),
+    plan: await freshPlan(world, 'other'),
+    mold: await uploadMold(world, 'other'),
   };
+  world.ownPiece = await freshPiece(world, 'own');
+  world.ownResin = await freshResin(world, 'own');
+  world.ownPigment = await freshPigment(world, 'own');
+  world.ownMold = await uploadMold(world, 'own');
 });
 
 /** A new session for each request, so routes that sign out cannot spoil the next check. */
@@ -91,8 +179,8 @@ async function sessionFor(role: Role): Promise<SessionResponse> {
   return res.body;
 }
 
-function call(method: string, path: string, params: Record<string, string>, body: object | undefined, session?: SessionResponse) {
-  const url = path.replace(/:([A-Za-z]+)/g, (_m, k: string) => params[k] ?? `missing-${k}`);
+function call(method: string, path: string, params: Record<string, string>, body: object | undefined, session?: SessionResponse, query?: string) {
+  const url = path.replace(/:([A-Za-z]+)/g, (_m, k: string) => params[k] ?? `missing-${k}`) + (query ? `?${query}` : '');
   const req = h.http()[method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](url);
   if (session) req.set(bearer(session));
   return body ? req.send(body) : req;
@@ -111,16 +199,16 @@ describe('access matrix', () => {
       const rule = table[key]!;
       if (rule.allowed === 'public') continue;
       const params = rule.params ? await rule.params(world, 'own') : {};
-      const anon = await call(route.method, route.fullPath, params, rule.body?.(world));
+      const anon = await call(route.method, route.fullPath, params, rule.body?.(world), undefined, rule.query);
       if (anon.status !== 401) failures.push(`${key} anonymous → ${anon.status}, want 401`);
       for (const role of ROLES) {
         const allowed = rule.allowed === 'member' || rule.allowed.includes(role);
         const p = rule.params ? await rule.params(world, 'own') : {};
-        const res = await call(route.method, route.fullPath, p, rule.body?.(world), await sessionFor(role));
+        const res = await call(route.method, route.fullPath, p, rule.body?.(world), await sessionFor(role), rule.query);
         if (allowed && (res.status === 401 || res.status === 403 || res.status >= 500)) failures.push(`${key} ${role} → ${res.status}, want allowed`);
         if (!allowed && res.status !== 403) failures.push(`${key} ${role} → ${res.status}, want 403`);
         if (allowed && rule.params) {
-          const foreign = await call(route.method, route.fullPath, await rule.params(world, 'other'), rule.body?.(world), await sessionFor(role));
+          const foreign = await call(route.method, route.fullPath, await rule.params(world, 'other'), rule.body?.(world), await sessionFor(role), rule.query);
           if (foreign.status !== 404) failures.push(`${key} ${role} with another shop's id → ${foreign.status}, want 404`);
         }
       }

@@ -1,4 +1,4 @@
-import type { Request, Response, Router } from 'express';
+import type { Request, RequestHandler, Response, Router } from 'express';
 import type { DataSource } from 'typeorm';
 import type { ZodType } from 'zod';
 import type { Role } from '@gelpoint/contracts';
@@ -23,6 +23,10 @@ export interface RouteSpec {
   response?: ZodType;
   /** Status on success; a handler returning undefined answers 204. */
   status?: number;
+  /** Runs after the caller is known and allowed, before validation: e.g. reading a multipart upload. */
+  middleware?: RequestHandler[];
+  /** Extra text for the OpenAPI document, e.g. the multipart fields. */
+  requestNote?: string;
 }
 
 export interface HandlerInput<A> {
@@ -62,6 +66,7 @@ export class RouteRegistry {
           throw new AppError('forbidden', 'role_forbidden', `your role (${auth.role}) cannot do this; it needs ${spec.access.join(' or ')}`);
         }
       }
+      for (const mw of spec.middleware ?? []) await runMiddleware(mw, req, res);
       const params = parse(spec.params, req.params, 'path');
       const query = parse(spec.query, req.query, 'query');
       const body = spec.body ? parse(spec.body, req.body ?? {}, 'body') : undefined;
@@ -71,6 +76,12 @@ export class RouteRegistry {
       else res.status(spec.status ?? 200).json(result);
     });
   }
+}
+
+function runMiddleware(mw: RequestHandler, req: Request, res: Response): Promise<void> {
+  return new Promise((resolve, reject) => {
+    void mw(req, res, (err?: unknown) => (err ? reject(err) : resolve()));
+  });
 }
 
 function parse(schema: ZodType | undefined, value: unknown, where: 'body' | 'query' | 'path'): unknown {

@@ -1,12 +1,12 @@
 import pg from 'pg';
 import type { Logger } from 'pino';
-import { OUTBOUND_MAIL_CHANNEL } from '@gelpoint/db';
+import { MOLD_ANALYSIS_CHANNEL, OUTBOUND_MAIL_CHANNEL } from '@gelpoint/db';
 
 /**
- * LISTENs for new mail so an invitation leaves within a second instead of at the next tick; the
- * tick remains the safety net, so a lost connection only delays mail. Reconnects by itself.
+ * LISTENs for new work (mail, uploaded moulds) so an invitation leaves within a second instead of at
+ * the next tick; the tick remains the safety net, so a lost connection only delays it. Reconnects.
  */
-export function listenForMail(url: string, onWake: () => void, logger: Logger): { close(): Promise<void> } {
+export function listenForWork(url: string, onWake: () => void, logger: Logger): { close(): Promise<void> } {
   let client: pg.Client | undefined;
   let closed = false;
   let retry: NodeJS.Timeout | undefined;
@@ -15,7 +15,7 @@ export function listenForMail(url: string, onWake: () => void, logger: Logger): 
     if (closed) return;
     const c = new pg.Client({ connectionString: url, application_name: 'gelpoint-worker-listen' });
     c.on('error', (err) => {
-      logger.warn({ err: err.message }, 'mail wake-up connection lost; reconnecting');
+      logger.warn({ err: err.message }, 'wake-up connection lost; reconnecting');
       c.end().catch(() => undefined);
       schedule();
     });
@@ -23,10 +23,11 @@ export function listenForMail(url: string, onWake: () => void, logger: Logger): 
     try {
       await c.connect();
       await c.query(`LISTEN ${OUTBOUND_MAIL_CHANNEL}`);
+      await c.query(`LISTEN ${MOLD_ANALYSIS_CHANNEL}`);
       client = c;
       onWake();
     } catch (err) {
-      logger.warn({ err: (err as Error).message }, 'cannot listen for mail yet; retrying');
+      logger.warn({ err: (err as Error).message }, 'cannot listen for work yet; retrying');
       c.end().catch(() => undefined);
       schedule();
     }

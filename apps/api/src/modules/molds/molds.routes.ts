@@ -1,0 +1,49 @@
+import { z } from 'zod';
+import { CavityFill, FillQuery, Id, LayerVolumes, LayerVolumesQuery, MoldList, MoldListQuery, MoldUploadFields, MoldView } from '@gelpoint/contracts';
+import type { RouteRegistry } from '../../http/route-registry';
+import { stlUpload } from './mold-upload';
+import type { Molds } from './molds.service';
+
+const IdParams = z.object({ id: Id });
+
+export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number): void {
+  api.add(
+    {
+      method: 'post',
+      path: '/molds',
+      tag: 'molds',
+      summary: "Upload a mould's STL (multipart: file, units, up, name, pieceId); the analysis runs in the background",
+      access: ['lead', 'maker'],
+      middleware: [stlUpload(maxStlBytes)],
+      body: MoldUploadFields,
+      response: MoldView,
+      status: 202,
+    },
+    ({ auth, body, req }) => molds.upload(auth, req.file, body),
+  );
+  api.add({ method: 'get', path: '/molds', tag: 'molds', summary: 'Moulds of the shop, newest first', access: 'member', query: MoldListQuery, response: MoldList }, ({ auth, query }) => molds.list(auth.shopId, query));
+  api.add({ method: 'get', path: '/molds/:id', tag: 'molds', summary: 'A mould: analysis status and progress, and its cavity report when ready', access: 'member', params: IdParams, response: MoldView }, ({ auth, params }) =>
+    molds.get(auth.shopId, params.id),
+  );
+  api.add(
+    { method: 'get', path: '/molds/:id/fill', tag: 'molds', summary: 'Fill at a level (mm, report frame) with a dam, from the stored analysis', access: 'member', params: IdParams, query: FillQuery, response: CavityFill },
+    ({ auth, params, query }) => molds.fill(auth.shopId, params.id, query.level, query.dam, query.depthMap === 'true'),
+  );
+  api.add(
+    { method: 'get', path: '/molds/:id/layers', tag: 'molds', summary: 'Volume of each layer between the given levels (mm)', access: 'member', params: IdParams, query: LayerVolumesQuery, response: LayerVolumes },
+    ({ auth, params, query }) => molds.layers(auth.shopId, params.id, query.levels, query.dam),
+  );
+  api.add({ method: 'get', path: '/molds/:id/stl', tag: 'molds', summary: 'The uploaded STL, as a download', access: 'member', params: IdParams }, async ({ auth, params, res }) => {
+    const { bytes, fileName } = await molds.stl(auth.shopId, params.id);
+    // Never rendered by the browser: a download of an opaque type.
+    res.setHeader('Content-Type', 'application/octet-stream');
+    res.setHeader('Content-Disposition', `attachment; filename="${fileName}"`);
+    res.setHeader('Cache-Control', 'private, max-age=3600');
+    res.status(200).end(bytes);
+    return undefined;
+  });
+  api.add({ method: 'delete', path: '/molds/:id', tag: 'molds', summary: 'Delete a mould and its file', access: ['lead', 'maker'], params: IdParams }, async ({ auth, params }) => {
+    await molds.remove(auth, params.id);
+    return undefined;
+  });
+}

@@ -1,0 +1,146 @@
+import { createHash } from 'node:crypto';
+import type { DataSource, EntityManager } from 'typeorm';
+import { planCavityFromMold } from '@gelpoint/core';
+import { MOLD_ANALYSIS_CHANNEL, Mold, MoldFile, Piece, type MoldUnits, type UpAxis } from '@gelpoint/db';
+import type { Dam, MoldView } from '@gelpoint/contracts';
+import { curve, fillAt, layerVolumes } from '@gelpoint/mesh';
+import type { AuthContext } from '../../http/auth-context';
+import { AppError, notFound } from '../../http/errors';
+import { recordAudit } from '../audit/audit.service';
+import type { MoldCavityLookup } from '../pour-plans/pour-plans.service';
+import { AnalysisCache } from './mold-analysis-cache';
+import { fillView, moldView } from './mold-views';
+import type { StlChecker } from './stl-check';
+
+export interface UploadedStl {
+  originalname: string;
+  buffer: Buffer;
+  size: number;
+}
+
+export interface UploadFields {
+  units: MoldUnits;
+  up: UpAxis;
+  name?: string;
+  pieceId?: string;
+}
+
+/** Levels sampled for a plan's curve between the cavity's lowest point and the fill level. */
+const PLAN_CURVE_POINTS = 241;
+
+export class Molds {
+  private readonly cache = new AnalysisCache();
+
+  constructor(
+    private readonly ds: DataSource,
+    private readonly checker: StlChecker,
+  ) {}
+
+  async upload(auth: AuthContext, file: UploadedStl | undefined, fields: UploadFields): Promise<MoldView> {
+    if (!file) throw new AppError('bad_request', 'file_missing', 'attach the mould as an STL file in the part named "file"', { file: 'choose an STL file' });
+    if (!/\.stl$/i.test(file.originalname)) {
+      throw new AppError('unprocessable', 'not_an_stl_name', `"${file.originalname.slice(0, 80)}" does not end in .stl; export the mould as STL (binary or ASCII)`, { file: 'the file must be an .stl' });
+    }
+    const checked = await this.checker.check(file.buffer);
+    if (!checked.ok) throw new AppError('unprocessable', checked.error.code, checked.error.message, { file: checked.error.message });
+    const sha256 = createHash('sha256').update(file.buffer).digest('hex');
+    const id = await this.ds.transaction(async (m) => {
+      if (fields.pieceId && !(await m.findOneBy(Piece, { id: fields.pieceId, shopId: auth.shopId }))) throw notFound('piece');
+      const mold = await m.save(
+        m.create(Mold, {
+          shopId: auth.shopId,
+          pieceId: fields.pieceId ?? null,
+          // The stored name is ours to choose: the client's file name is kept only as text to show.
+          name: fields.name || file.originalname.replace(/\.stl$/i, '').slice(0, 120) || 'Mould',
+          fileName: file.originalname.slice(0, 200),
+          units: fields.units,
+          upAxis: fields.up,
+          sizeBytes: file.size,
+          sha256,
+          status: 'queued',
+          triangleCount: checked.triangles,
+          createdById: auth.userId,
+        }),
+      );
+      await m.insert(MoldFile, { moldId: mold.id, bytes: file.buffer });
+      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'mold.upload', objectType: 'mold', objectId: mold.id, detail: { name: mold.name, sha256, triangles: checked.triangles } });
+      await m.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, mold.id]);
+      return mold.id;
+    });
+    return this.get(auth.shopId, id);
+  }
+
+  async get(shopId: string, id: string): Promise<MoldView> {
+    const mold = await this.ds.getRepository(Mold).findOne({ where: { id, shopId }, select: selectWithoutAnalysis });
+    if (!mold) throw notFound('mould');
+    return moldView(mold);
+  }
+
+  async list(shopId: string, q: { pieceId?: string; limit: number; offset: number }) {
+    const qb = this.ds.getRepository(Mold).createQueryBuilder('m').select(summaryColumns.map((c) => `m.${c}`)).addSelect(`(m.report -> 'fillToTop' ->> 'volumeMm3')::float8`, 'fill_to_top').where('m.shop_id = :shopId', { shopId });
+    if (q.pieceId) qb.andWhere('m.piece_id = :pieceId', { pieceId: q.pieceId });
+    const total = await qb.getCount();
+    const { entities, raw } = await qb.orderBy('m.createdAt', 'DESC').addOrderBy('m.id').offset(q.offset).limit(q.limit).getRawAndEntities();
+    return {
+      total,
+      items: entities.map((e, i) => {
+        const { report: _r, ...rest } = moldView({ ...e, report: null } as Mold);
+        const v = (raw[i] as { fill_to_top: number | null }).fill_to_top;
+        return { ...rest, fillVolumeToTopMm3: v === null ? null : Number(v) };
+      }),
+    };
+  }
+
+  async stl(shopId: string, id: string): Promise<{ bytes: Buffer; fileName: string }> {
+    const rows: { bytes: Buffer; name: string }[] = await this.ds.query(
+      'SELECT f.bytes, m.name FROM mold_files f JOIN molds m ON m.id = f.mold_id WHERE m.id = $1 AND m.shop_id = $2',
+      [id, shopId],
+    );
+    if (!rows[0]) throw notFound('mould');
+    return { bytes: rows[0].bytes, fileName: `${rows[0].name.replace(/[^A-Za-z0-9_-]+/g, '-').slice(0, 60) || 'mould'}.stl` };
+  }
+
+  async remove(auth: AuthContext, id: string): Promise<void> {
+    await this.ds.transaction(async (m) => {
+      const mold = await m.findOne(Mold, { where: { id, shopId: auth.shopId }, select: { id: true, name: true } });
+      if (!mold) throw notFound('mould');
+      await m.delete(Mold, { id });
+      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'mold.delete', objectType: 'mold', objectId: id, detail: { name: mold.name } });
+    });
+  }
+
+  async fill(shopId: string, id: string, levelMm: number, dam: Dam, withDepthMap: boolean) {
+    const model = await this.cache.model(this.ds.manager, shopId, id);
+    const f = fillAt(model, levelMm, dam);
+    if (!f.ok) throw new AppError('bad_request', f.error.code, f.error.message, { level: f.error.message });
+    return fillView(f.value, withDepthMap);
+  }
+
+  async layers(shopId: string, id: string, levelsMm: number[], dam: Dam) {
+    const model = await this.cache.model(this.ds.manager, shopId, id);
+    const v = layerVolumes(model, levelsMm, dam);
+    if (!v.ok) throw new AppError('bad_request', v.error.code, v.error.message, { levels: v.error.message });
+    return { dam, layers: v.value.map((volumeMm3, i) => ({ fromMm: levelsMm[i]!, toMm: levelsMm[i + 1]!, volumeMm3 })) };
+  }
+
+  /** The pour plan's cavity at a fill level, from the stored analysis (same path the browser takes). */
+  readonly cavityForPlan: MoldCavityLookup = async (m: EntityManager, shopId, moldId, dam, fillLevelMm) => {
+    const model = await this.cache.model(m, shopId, moldId);
+    const f = fillAt(model, fillLevelMm, dam);
+    if (!f.ok) throw new AppError('unprocessable', f.error.code, f.error.message);
+    const bottom = model.analysis.bboxMm.min[2];
+    const levels = Array.from({ length: PLAN_CURVE_POINTS }, (_, i) => bottom + ((fillLevelMm - bottom) * i) / (PLAN_CURVE_POINTS - 1));
+    const c = curve(model, levels, dam);
+    if (!c.ok) throw new AppError('unprocessable', c.error.code, c.error.message);
+    const planned = planCavityFromMold({ curve: dedupeLevels(c.value), wettedAreaMm2: f.value.wettedAreaMm2, maxDepthMm: f.value.maxDepthMm }, fillLevelMm);
+    if (!planned.ok) throw new AppError('unprocessable', planned.error.code, planned.error.message);
+    return planned.value;
+  };
+}
+
+function dedupeLevels(points: { levelMm: number; volumeMm3: number }[]) {
+  return points.filter((p, i) => i === 0 || p.levelMm > points[i - 1]!.levelMm);
+}
+
+const summaryColumns = ['id', 'shopId', 'pieceId', 'name', 'fileName', 'units', 'upAxis', 'sizeBytes', 'sha256', 'status', 'progress', 'errorCode', 'errorMessage', 'createdAt', 'analysedAt'] as const;
+const selectWithoutAnalysis = Object.fromEntries([...summaryColumns, 'report'].map((c) => [c, true])) as Record<string, true>;

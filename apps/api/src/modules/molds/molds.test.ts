@@ -1,0 +1,93 @@
+import { spawnSync } from 'node:child_process';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { bearer, createShop, testDatabaseUrl, useHarness, type ShopFixture } from '../../test-support/harness';
+import { binaryStl, pocketMouldTriangles } from '../../test-support/pocket-mould';
+
+const h = useHarness({ GELPOINT_MAX_STL_MB: '1' });
+
+// Block 100 × 60 × 30 mm with an 80 × 40 mm pocket whose floor is at z = 10: a prism, so the fill to
+// level z is 80 · 40 · (z − 10) mm³ (CRC Concise Encyclopedia of Mathematics, prism volume = base × height).
+const pocket = pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 10, 90, 50], floorZ: 10 });
+const prism = (z: number) => 80 * 40 * (z - 10);
+
+/** The worker, as its own process, analysing what is queued (as the cron tick does). */
+function runWorkerOnce() {
+  const r = spawnSync(process.execPath, ['--import', 'tsx', 'apps/worker/src/main.ts', '--once'], {
+    cwd: join(import.meta.dirname, '../../../../..'),
+    env: { ...process.env, DATABASE_URL: testDatabaseUrl(), SMTP_PORT: '9', GELPOINT_LOG_LEVEL: 'silent' },
+    encoding: 'utf8',
+    timeout: 60_000,
+  });
+  expect(r.stderr).toBe('');
+  expect(r.status).toBe(0);
+}
+
+let shop: ShopFixture;
+let maker: Awaited<ReturnType<ShopFixture['member']>>;
+beforeAll(async () => {
+  shop = await createShop(h, 'Mould shop');
+  maker = await shop.member('maker');
+});
+
+const upload = (session: { token: string }, bytes: Buffer, fields: Record<string, string>, name = 'tray pocket.stl') => {
+  const req = h.http().post('/api/molds').set(bearer(session)).attach('file', bytes, name);
+  for (const [k, v] of Object.entries(fields)) req.field(k, v);
+  return req;
+};
+
+describe('mould upload and cavity report', () => {
+  it('analyses an uploaded STL in the worker and answers fills from what it stored', async () => {
+    const res = await upload(maker, binaryStl(pocket), { units: 'mm', up: 'z' }).expect(202);
+    expect(res.body).toMatchObject({ name: 'tray pocket', status: 'queued', units: 'mm', upAxis: 'z', report: null });
+    expect(res.body.sha256).toMatch(/^[0-9a-f]{64}$/);
+    runWorkerOnce();
+    const mold = (await h.http().get(`/api/molds/${res.body.id}`).set(bearer(maker)).expect(200)).body;
+    expect(mold.status).toBe('ready');
+    expect(mold.report.watertight).toBe(true);
+    expect(mold.report.bboxMm).toEqual({ min: [0, 0, 0], max: [100, 60, 30] });
+    expect(mold.report.fillToTop.volumeMm3).toBeCloseTo(prism(30), -1);
+    expect(mold.report.fillToTop.maxDepthMm).toBeCloseTo(20, 3);
+    expect(mold.report.fillToTop.trappedAirMm3).toBeCloseTo(0, 3);
+    // Wetted area: floor 80 × 40 plus walls 2 · (80 + 40) · 20 (rectangle areas).
+    expect(mold.report.fillToTop.wettedAreaMm2).toBeCloseTo(80 * 40 + 2 * (80 + 40) * 20, -1);
+    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 20, dam: 'outline' }).set(bearer(shop.lead)).expect(200)).body;
+    expect(fill.volumeMm3).toBeCloseTo(prism(20), -1);
+    expect(fill.depthMap).toBeUndefined();
+    const withMap = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 20, depthMap: 'true' }).set(bearer(maker)).expect(200)).body;
+    expect(Math.max(...withMap.depthMap.depthsMm)).toBeCloseTo(10, 3);
+    const layers = (await h.http().get(`/api/molds/${res.body.id}/layers`).query({ levels: '10,20,30' }).set(bearer(maker)).expect(200)).body;
+    expect(layers.layers.map((l: { volumeMm3: number }) => Math.round(l.volumeMm3))).toEqual([prism(20), prism(20)]);
+    const list = (await h.http().get('/api/molds').set(bearer(maker)).expect(200)).body;
+    expect(list.items.find((m: { id: string }) => m.id === res.body.id).fillVolumeToTopMm3).toBeCloseTo(prism(30), -1);
+    const stl = await h.http().get(`/api/molds/${res.body.id}/stl`).set(bearer(maker)).buffer(true).expect(200);
+    expect(stl.headers['content-type']).toBe('application/octet-stream');
+    expect(stl.headers['content-disposition']).toMatch(/^attachment;/);
+    expect(Buffer.compare(stl.body as Buffer, binaryStl(pocket))).toBe(0);
+  });
+
+  it('turns units into millimetres: the same numbers in centimetres hold 1000 times the volume', async () => {
+    const res = await upload(maker, binaryStl(pocket, 0.1), { units: 'cm' }).expect(202);
+    runWorkerOnce();
+    const mold = (await h.http().get(`/api/molds/${res.body.id}`).set(bearer(maker)).expect(200)).body;
+    // 1 cm = 10 mm (NIST SP 811): coordinates scaled by 0.1 and read as cm are the same mould.
+    expect(mold.report.fillToTop.volumeMm3).toBeCloseTo(prism(30), -1);
+  });
+
+  it('refuses bad files with the parser’s sentence, over-size files with 413, and apprentices with 403', async () => {
+    const bad = await upload(maker, Buffer.from('this is not a mesh at all, just words'), {}).expect(422);
+    expect(bad.body.error.code).toMatch(/^stl_/);
+    expect(bad.body.error.message.length).toBeGreaterThan(10);
+    const truncated = binaryStl(pocket).subarray(0, 84 + 50 * 3 + 7);
+    expect((await upload(maker, truncated, {}).expect(422)).body.error.code).toBe('stl_truncated');
+    expect((await upload(maker, binaryStl(pocket), {}, 'mould.exe').expect(422)).body.error.code).toBe('not_an_stl_name');
+    const huge = Buffer.alloc(1024 * 1024 + 10);
+    expect((await upload(maker, huge, {}).expect(413)).body.error.code).toBe('file_too_large');
+    await upload(maker, binaryStl(pocket), { units: 'furlongs' }).expect(400);
+    await h.http().post('/api/molds').set(bearer(maker)).send({ file: 'x' }).expect(400);
+    const apprentice = await shop.member('apprentice');
+    await upload(apprentice, binaryStl(pocket), {}).expect(403);
+    const n = await h.ds.query('SELECT count(*)::int AS n FROM molds WHERE shop_id = $1', [shop.shopId]);
+    expect(n[0].n).toBe(2);
+  });
+});

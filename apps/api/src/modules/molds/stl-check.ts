@@ -1,0 +1,51 @@
+import type { Worker } from 'node:worker_threads';
+import { tsWorker } from '../../ts-worker';
+
+export type StlCheck = { ok: true; triangles: number } | { ok: false; error: { code: string; message: string } };
+
+/**
+ * One long-lived thread that parses uploads to check them, so a bad file is refused at once with the
+ * parser's sentence while the event loop keeps serving others. Requests queue in order.
+ */
+export class StlChecker {
+  private worker?: Worker;
+  private nextId = 1;
+  private readonly waiting = new Map<number, (r: StlCheck) => void>();
+
+  constructor(private readonly maxTriangles: number) {}
+
+  private thread(): Worker {
+    if (this.worker) return this.worker;
+    const w = tsWorker(new URL('./stl-check.thread.ts', import.meta.url));
+    w.on('message', (m: StlCheck & { id: number }) => {
+      this.waiting.get(m.id)?.(m);
+      this.waiting.delete(m.id);
+    });
+    w.on('error', () => this.fail('the file could not be checked; send it again'));
+    w.on('exit', () => {
+      if (this.worker === w) this.worker = undefined;
+      this.fail('the file check stopped; send it again');
+    });
+    w.unref();
+    this.worker = w;
+    return w;
+  }
+
+  private fail(message: string) {
+    for (const resolve of this.waiting.values()) resolve({ ok: false, error: { code: 'stl_check_failed', message } });
+    this.waiting.clear();
+  }
+
+  check(bytes: Buffer): Promise<StlCheck> {
+    const id = this.nextId++;
+    return new Promise((resolve) => {
+      this.waiting.set(id, resolve);
+      // A copy goes to the thread: the request keeps its buffer to store it.
+      this.thread().postMessage({ id, bytes: new Uint8Array(bytes), maxTriangles: this.maxTriangles });
+    });
+  }
+
+  async close(): Promise<void> {
+    await this.worker?.terminate();
+  }
+}

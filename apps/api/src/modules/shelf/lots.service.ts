@@ -1,0 +1,103 @@
+import type { DataSource } from 'typeorm';
+import { Lot, Pigment, ResinSystem } from '@gelpoint/db';
+import type { LotInput, LotView } from '@gelpoint/contracts';
+import type { AuthContext } from '../../http/auth-context';
+import { AppError, notFound } from '../../http/errors';
+import { recordAudit } from '../audit/audit.service';
+import { likePattern } from './catalogue.service';
+import { lotView } from './shelf-views';
+
+export interface LotQuery {
+  q?: string;
+  part?: 'A' | 'B' | 'pigment';
+  productId?: string;
+  status: 'all' | 'in_stock' | 'low' | 'expired';
+  limit: number;
+  offset: number;
+}
+
+type LotRow = Lot & { productName: string };
+
+function baseQuery(ds: DataSource, shopId: string) {
+  return ds
+    .getRepository(Lot)
+    .createQueryBuilder('l')
+    .leftJoin(ResinSystem, 'r', 'r.id = l.resin_system_id')
+    .leftJoin(Pigment, 'g', 'g.id = l.pigment_id')
+    .addSelect('COALESCE(r.name, g.name)', 'product_name')
+    .where('l.shop_id = :shopId', { shopId });
+}
+
+async function withNames(qb: ReturnType<typeof baseQuery>): Promise<LotRow[]> {
+  const { entities, raw } = await qb.getRawAndEntities();
+  return entities.map((e, i) => Object.assign(e, { productName: String((raw[i] as { product_name: string }).product_name ?? '') }));
+}
+
+export async function listLots(ds: DataSource, shopId: string, q: LotQuery): Promise<{ items: LotView[]; total: number }> {
+  const qb = baseQuery(ds, shopId);
+  if (q.part) qb.andWhere('l.part = :part', { part: q.part });
+  if (q.productId) qb.andWhere('(l.resin_system_id = :pid OR l.pigment_id = :pid)', { pid: q.productId });
+  if (q.q) qb.andWhere('(l.lot_number ILIKE :like OR r.name ILIKE :like OR g.name ILIKE :like)', { like: likePattern(q.q) });
+  if (q.status === 'expired') qb.andWhere('l.expires_on < CURRENT_DATE');
+  if (q.status === 'low') qb.andWhere('l.remaining_g < l.quantity_g * 0.1');
+  if (q.status === 'in_stock') qb.andWhere('l.remaining_g > 0 AND (l.expires_on IS NULL OR l.expires_on >= CURRENT_DATE)');
+  const total = await qb.getCount();
+  const rows = await withNames(qb.orderBy('l.expires_on', 'ASC', 'NULLS LAST').addOrderBy('l.id').offset(q.offset).limit(q.limit));
+  return { items: rows.map(lotView), total };
+}
+
+export async function getLot(ds: DataSource, shopId: string, id: string): Promise<LotView> {
+  const [row] = await withNames(baseQuery(ds, shopId).andWhere('l.id = :id', { id }));
+  if (!row) throw notFound('lot');
+  return lotView(row);
+}
+
+export async function createLot(ds: DataSource, auth: AuthContext, input: LotInput & { resinSystemId: string | null; pigmentId: string | null }): Promise<LotView> {
+  const id = await ds.transaction(async (m) => {
+    // The product must be this shop's: another shop's id is "not found", as everywhere.
+    const owner = input.part === 'pigment' ? await m.findOneBy(Pigment, { id: input.pigmentId!, shopId: auth.shopId }) : await m.findOneBy(ResinSystem, { id: input.resinSystemId!, shopId: auth.shopId });
+    if (!owner) throw new AppError('not_found', 'not_found', `no such ${input.part === 'pigment' ? 'pigment' : 'resin system'} on this shop's shelf`);
+    const lot = await m.save(
+      m.create(Lot, {
+        shopId: auth.shopId,
+        part: input.part,
+        resinSystemId: input.resinSystemId,
+        pigmentId: input.pigmentId,
+        lotNumber: input.lotNumber,
+        quantityG: input.quantityG,
+        remainingG: input.quantityG,
+        receivedOn: input.receivedOn,
+        expiresOn: input.expiresOn ?? null,
+        notes: input.notes ?? '',
+      }),
+    );
+    await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'lot.create', objectType: 'lot', objectId: lot.id, detail: { lotNumber: lot.lotNumber, part: lot.part } });
+    return lot.id;
+  });
+  return getLot(ds, auth.shopId, id);
+}
+
+export async function updateLot(ds: DataSource, auth: AuthContext, id: string, change: Partial<Pick<Lot, 'lotNumber' | 'remainingG' | 'expiresOn' | 'notes'>>): Promise<LotView> {
+  await ds.transaction(async (m) => {
+    const lot = await m.findOne(Lot, { where: { id, shopId: auth.shopId }, lock: { mode: 'pessimistic_write' } });
+    if (!lot) throw notFound('lot');
+    if (change.remainingG !== undefined && change.remainingG > lot.quantityG) {
+      throw new AppError('bad_request', 'invalid_input', `remaining cannot exceed what was received (${lot.quantityG} g)`, { remainingG: `at most ${lot.quantityG} g` });
+    }
+    if (change.expiresOn && change.expiresOn < lot.receivedOn) {
+      throw new AppError('bad_request', 'invalid_input', 'a lot cannot expire before it was received', { expiresOn: `on or after ${lot.receivedOn}` });
+    }
+    await m.update(Lot, { id }, change);
+    await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'lot.update', objectType: 'lot', objectId: id, detail: { ...change } });
+  });
+  return getLot(ds, auth.shopId, id);
+}
+
+export async function deleteLot(ds: DataSource, auth: AuthContext, id: string): Promise<void> {
+  await ds.transaction(async (m) => {
+    const lot = await m.findOneBy(Lot, { id, shopId: auth.shopId });
+    if (!lot) throw notFound('lot');
+    await m.delete(Lot, { id });
+    await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'lot.delete', objectType: 'lot', objectId: id, detail: { lotNumber: lot.lotNumber } });
+  });
+}

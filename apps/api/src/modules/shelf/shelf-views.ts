@@ -1,0 +1,132 @@
+import { activationEnergyOf, readyToMachineHOf, type ResinSystem as CoreResinSystem, type Pigment as CorePigment } from '@gelpoint/core';
+import type { Lot, Pigment, ResinSystem } from '@gelpoint/db';
+import type { LotView, PigmentView, ResinSystemInput, ResinSystemView } from '@gelpoint/contracts';
+
+export function resinSystemView(r: ResinSystem): ResinSystemView {
+  return {
+    id: r.id,
+    name: r.name,
+    maker: r.maker,
+    use: r.use,
+    mixRatio: { a: r.ratioA, b: r.ratioB, basis: r.ratioBasis },
+    densityAGPerMl: r.densityAGPerMl,
+    densityBGPerMl: r.densityBGPerMl,
+    potLifeMin: r.potLifeMin,
+    gelTimeH: r.gelTimeH,
+    tackFreeH: r.tackFreeH,
+    recoatWindow: { earliestH: r.recoatEarliestH, latestH: r.recoatLatestH },
+    demoldH: r.demoldH,
+    fullCureH: r.fullCureH,
+    readyToMachineH: r.readyToMachineH,
+    referenceTempC: r.referenceTempC,
+    minWorkTempC: r.minWorkTempC,
+    maxWorkTempC: r.maxWorkTempC,
+    maxLayerMm: r.maxLayerMm,
+    maxBatchG: r.maxBatchG,
+    activationEnergyKJPerMol: r.activationEnergyKJPerMol,
+    effectiveActivationEnergyKJPerMol: activationEnergyOf(toCoreResinSystem(r)),
+    pricePerKit: r.pricePerKit,
+    kitSizeG: r.kitSizeG,
+    shelfLifeMonths: r.shelfLifeMonths,
+    archived: r.archivedAt !== null,
+    updatedAt: r.updatedAt.toISOString(),
+  };
+}
+
+/** Row columns from the validated form; the entity keeps the data sheet's values flat. */
+export function resinSystemColumns(input: Required<Omit<ResinSystemInput, 'maker'>> & { maker: string }) {
+  return {
+    name: input.name,
+    maker: input.maker,
+    use: input.use,
+    ratioA: input.mixRatio.a,
+    ratioB: input.mixRatio.b,
+    ratioBasis: input.mixRatio.basis,
+    densityAGPerMl: input.densityAGPerMl,
+    densityBGPerMl: input.densityBGPerMl,
+    potLifeMin: input.potLifeMin,
+    gelTimeH: input.gelTimeH,
+    tackFreeH: input.tackFreeH,
+    recoatEarliestH: input.recoatWindow.earliestH,
+    recoatLatestH: input.recoatWindow.latestH,
+    demoldH: input.demoldH,
+    fullCureH: input.fullCureH,
+    readyToMachineH: input.readyToMachineH,
+    referenceTempC: input.referenceTempC,
+    minWorkTempC: input.minWorkTempC,
+    maxWorkTempC: input.maxWorkTempC,
+    maxLayerMm: input.maxLayerMm,
+    maxBatchG: input.maxBatchG,
+    activationEnergyKJPerMol: input.activationEnergyKJPerMol,
+    pricePerKit: input.pricePerKit,
+    kitSizeG: input.kitSizeG,
+    shelfLifeMonths: input.shelfLifeMonths,
+  };
+}
+
+/** The shape packages/core computes with; also what a pour plan snapshots. */
+export function toCoreResinSystem(r: ResinSystem): CoreResinSystem {
+  return {
+    name: r.name,
+    use: r.use,
+    mixRatio: { a: r.ratioA, b: r.ratioB, basis: r.ratioBasis },
+    densityAGPerMl: r.densityAGPerMl,
+    densityBGPerMl: r.densityBGPerMl,
+    potLifeMin: r.potLifeMin,
+    gelTimeH: r.gelTimeH,
+    recoatWindow: { earliestH: r.recoatEarliestH, latestH: r.recoatLatestH },
+    tackFreeH: r.tackFreeH,
+    demoldH: r.demoldH,
+    fullCureH: r.fullCureH,
+    ...(r.readyToMachineH !== null ? { readyToMachineH: r.readyToMachineH } : {}),
+    referenceTempC: r.referenceTempC,
+    minWorkTempC: r.minWorkTempC,
+    maxWorkTempC: r.maxWorkTempC,
+    maxLayerMm: r.maxLayerMm,
+    maxBatchG: r.maxBatchG,
+    ...(r.activationEnergyKJPerMol !== null ? { activationEnergyKJPerMol: r.activationEnergyKJPerMol } : {}),
+    pricePerKit: r.pricePerKit,
+    kitSizeG: r.kitSizeG,
+    shelfLifeMonths: r.shelfLifeMonths,
+  };
+}
+
+export const readyToMachineH = (r: ResinSystem) => readyToMachineHOf(toCoreResinSystem(r));
+
+export function pigmentView(p: Pigment): PigmentView {
+  return {
+    id: p.id,
+    name: p.name,
+    kind: p.kind,
+    recommendedPct: p.recommendedPct,
+    maxPct: p.maxPct,
+    pricePerPack: p.pricePerPack,
+    packSizeG: p.packSizeG,
+    archived: p.archivedAt !== null,
+    updatedAt: p.updatedAt.toISOString(),
+  };
+}
+
+export function toCorePigment(p: Pigment): CorePigment {
+  return { name: p.name, kind: p.kind, recommendedPct: p.recommendedPct, maxPct: p.maxPct, price: { pricePerPack: p.pricePerPack, packSizeG: p.packSizeG } };
+}
+
+const today = () => new Date().toISOString().slice(0, 10);
+
+export function lotView(l: Lot & { productName: string }): LotView {
+  return {
+    id: l.id,
+    part: l.part,
+    resinSystemId: l.resinSystemId,
+    pigmentId: l.pigmentId,
+    productName: l.productName,
+    lotNumber: l.lotNumber,
+    quantityG: l.quantityG,
+    remainingG: l.remainingG,
+    receivedOn: l.receivedOn,
+    expiresOn: l.expiresOn,
+    notes: l.notes,
+    expired: l.expiresOn !== null && l.expiresOn < today(),
+    low: l.remainingG < l.quantityG * 0.1,
+  };
+}

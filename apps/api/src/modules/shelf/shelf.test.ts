@@ -1,0 +1,93 @@
+import { describe, expect, it } from 'vitest';
+import { bearer, createShop, useHarness } from '../../test-support/harness';
+
+const h = useHarness();
+
+const resinInput = (over: Record<string, unknown> = {}) => ({
+  name: 'Stillwater Deep 50',
+  maker: 'Invented Resins',
+  use: 'deep_pour',
+  mixRatio: { a: 2, b: 1, basis: 'volume' },
+  densityAGPerMl: 1.16,
+  densityBGPerMl: 0.98,
+  potLifeMin: 45,
+  gelTimeH: 8,
+  tackFreeH: 16,
+  recoatWindow: { earliestH: 12, latestH: 36 },
+  demoldH: 48,
+  fullCureH: 168,
+  referenceTempC: 22,
+  minWorkTempC: 16,
+  maxWorkTempC: 30,
+  maxLayerMm: 20,
+  maxBatchG: 4000,
+  pricePerKit: 120,
+  kitSizeG: 4500,
+  shelfLifeMonths: 12,
+  ...over,
+});
+
+describe('resin systems', () => {
+  it('keeps the data sheet and fills in the common-practice activation energy when it has none', async () => {
+    const shop = await createShop(h);
+    const res = await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput()).expect(201);
+    expect(res.body).toMatchObject({ name: 'Stillwater Deep 50', mixRatio: { a: 2, b: 1, basis: 'volume' }, activationEnergyKJPerMol: null, archived: false });
+    // "Rate doubles per 10 °C" (common practice): Ea = R·ln 2 / (1/T1 − 1/T2), T1 = 295.15 K, T2 = 305.15 K,
+    // R = 8.314462618 J/(mol·K) (CODATA 2018).
+    const expected = (8.314462618 * Math.LN2) / (1 / 295.15 - 1 / 305.15) / 1000;
+    expect(res.body.effectiveActivationEnergyKJPerMol).toBeCloseTo(expected, 3);
+    const given = await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ name: 'With Ea', activationEnergyKJPerMol: 60 })).expect(201);
+    expect(given.body.effectiveActivationEnergyKJPerMol).toBe(60);
+  });
+
+  it('says which data-sheet value is inconsistent', async () => {
+    const shop = await createShop(h);
+    const cases: [Record<string, unknown>, string][] = [
+      [{ recoatWindow: { earliestH: 40, latestH: 30 } }, 'recoatWindow'],
+      [{ minWorkTempC: 30, maxWorkTempC: 20 }, 'minWorkTempC'],
+      [{ demoldH: 200 }, 'demoldH'],
+      [{ densityAGPerMl: 0 }, 'densityAGPerMl'],
+      [{ mixRatio: { a: 2, b: 1, basis: 'mass' } }, 'mixRatio.basis'],
+      [{ maxBatchG: -5 }, 'maxBatchG'],
+    ];
+    for (const [over, field] of cases) {
+      const res = await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput(over)).expect(400);
+      expect(Object.keys(res.body.error.fields), JSON.stringify(over)).toContain(field);
+    }
+    expect((await h.http().get('/api/shelf/resin-systems').set(bearer(shop.lead)).expect(200)).body.total).toBe(0);
+  });
+
+  it('replaces, searches and archives', async () => {
+    const shop = await createShop(h);
+    const a = await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ name: 'Tabletop Clear' })).expect(201);
+    await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ name: 'River 100% Deep' })).expect(201);
+    const put = await h.http().put(`/api/shelf/resin-systems/${a.body.id}`).set(bearer(shop.lead)).send(resinInput({ name: 'Tabletop Clear v2', potLifeMin: 30 })).expect(200);
+    expect(put.body).toMatchObject({ name: 'Tabletop Clear v2', potLifeMin: 30 });
+    expect((await h.http().get('/api/shelf/resin-systems').query({ q: '100%' }).set(bearer(shop.lead)).expect(200)).body.items.map((r: { name: string }) => r.name)).toEqual(['River 100% Deep']);
+    await h.http().delete(`/api/shelf/resin-systems/${a.body.id}`).set(bearer(shop.lead)).expect(204);
+    expect((await h.http().get('/api/shelf/resin-systems').set(bearer(shop.lead)).expect(200)).body.total).toBe(1);
+    const all = await h.http().get('/api/shelf/resin-systems').query({ includeArchived: 'true' }).set(bearer(shop.lead)).expect(200);
+    expect(all.body.items.find((r: { id: string }) => r.id === a.body.id).archived).toBe(true);
+  });
+});
+
+describe('lots', () => {
+  it('tracks stock, low and expired lots, and only against this shop’s products', async () => {
+    const shop = await createShop(h);
+    const other = await createShop(h);
+    const resin = await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput()).expect(201);
+    const foreign = await h.http().post('/api/shelf/resin-systems').set(bearer(other.lead)).send(resinInput()).expect(201);
+    const fresh = await h.http().post('/api/shelf/lots').set(bearer(shop.lead)).send({ part: 'A', resinSystemId: resin.body.id, lotNumber: 'A-2611', quantityG: 3000, receivedOn: '2026-11-01', expiresOn: '2099-11-01' }).expect(201);
+    expect(fresh.body).toMatchObject({ productName: 'Stillwater Deep 50', remainingG: 3000, expired: false, low: false });
+    const old = await h.http().post('/api/shelf/lots').set(bearer(shop.lead)).send({ part: 'B', resinSystemId: resin.body.id, lotNumber: 'B-1901', quantityG: 1500, receivedOn: '2019-01-01', expiresOn: '2020-01-01' }).expect(201);
+    expect(old.body.expired).toBe(true);
+    const low = await h.http().patch(`/api/shelf/lots/${fresh.body.id}`).set(bearer(shop.lead)).send({ remainingG: 200 }).expect(200);
+    expect(low.body.low).toBe(true);
+    await h.http().patch(`/api/shelf/lots/${fresh.body.id}`).set(bearer(shop.lead)).send({ remainingG: 5000 }).expect(400);
+    expect((await h.http().get('/api/shelf/lots').query({ status: 'expired' }).set(bearer(shop.lead)).expect(200)).body.items.map((l: { lotNumber: string }) => l.lotNumber)).toEqual(['B-1901']);
+    expect((await h.http().get('/api/shelf/lots').query({ status: 'low' }).set(bearer(shop.lead)).expect(200)).body.items.map((l: { lotNumber: string }) => l.lotNumber)).toEqual(['A-2611']);
+    await h.http().post('/api/shelf/lots').set(bearer(shop.lead)).send({ part: 'A', resinSystemId: foreign.body.id, lotNumber: 'X', quantityG: 1, receivedOn: '2026-11-01' }).expect(404);
+    await h.http().post('/api/shelf/lots').set(bearer(shop.lead)).send({ part: 'pigment', resinSystemId: resin.body.id, lotNumber: 'X', quantityG: 1, receivedOn: '2026-11-01' }).expect(400);
+    await h.http().post('/api/shelf/lots').set(bearer(shop.lead)).send({ part: 'A', resinSystemId: resin.body.id, lotNumber: 'X', quantityG: 1, receivedOn: '2026-11-01', expiresOn: '2026-10-01' }).expect(400);
+  });
+});

@@ -1,0 +1,37 @@
+import { curve, fillAt, type CavityAnalysis } from '@gelpoint/mesh';
+import type { CavityReport } from '@gelpoint/contracts';
+
+const CURVE_POINTS = 101;
+
+/** What people read about a mould, kept beside the analysis so the screen needs no engine call. */
+export function cavityReport(analysis: CavityAnalysis): CavityReport {
+  const top = analysis.bboxMm.max[2];
+  const points = curve(analysis, CURVE_POINTS, 'outline');
+  const full = fillAt(analysis, top, 'outline');
+  if (!points.ok) throw new Error(points.error.message);
+  if (!full.ok) throw new Error(full.error.message);
+  const f = full.value;
+  const seen = new Set<string>();
+  const warnings = [...analysis.warnings, ...f.warnings].filter((w) => (seen.has(w.code) ? false : (seen.add(w.code), true)));
+  return {
+    triangles: analysis.triangles,
+    watertight: analysis.watertight,
+    bboxMm: analysis.bboxMm,
+    enclosedVolumeMm3: analysis.enclosedVolumeMm3,
+    method: f.method,
+    estimatedErrorPct: f.estimatedErrorPct,
+    resolutionMm: f.resolutionMm,
+    warnings: warnings.map((w) => ({ code: w.code, message: w.message })),
+    curve: points.value,
+    fillToTop: {
+      levelMm: f.levelMm,
+      dam: f.dam,
+      volumeMm3: f.volumeMm3,
+      wettedAreaMm2: f.wettedAreaMm2,
+      maxDepthMm: f.maxDepthMm,
+      trappedAirMm3: f.trappedAirMm3,
+      warnings: f.warnings.map((w) => ({ code: w.code, message: w.message })),
+      depthMap: { originMm: f.depthMap.originMm, cellMm: f.depthMap.cellMm, nx: f.depthMap.nx, ny: f.depthMap.ny, depthsMm: Array.from(f.depthMap.depthsMm, (d) => Math.round(d * 1000) / 1000) },
+    },
+  };
+}

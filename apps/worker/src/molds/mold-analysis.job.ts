@@ -1,0 +1,104 @@
+import { tsWorker } from '../ts-worker';
+import type { Logger } from 'pino';
+import type { DataSource } from 'typeorm';
+import type { AnalysisMessage, AnalysisRequest } from './mold-analysis.thread';
+
+export interface MoldAnalysisSettings {
+  maxTriangles: number;
+  /** How long a claim holds; a worker that dies mid-analysis frees the mould after this. */
+  leaseS: number;
+  maxAttempts: number;
+}
+
+interface ClaimedMold {
+  id: string;
+  units: AnalysisRequest['units'];
+  up_axis: AnalysisRequest['up'];
+  attempts: number;
+}
+
+export async function claimQueuedMold(ds: DataSource, s: MoldAnalysisSettings): Promise<ClaimedMold | undefined> {
+  const rows: ClaimedMold[] = await ds.query(
+    `WITH claimed AS (
+       UPDATE molds m SET status = 'analysing', attempts = m.attempts + 1, progress = 0.05,
+              locked_until = now() + make_interval(secs => $1), updated_at = now()
+        WHERE m.id = (
+          SELECT id FROM molds
+           WHERE status = 'queued' OR (status = 'analysing' AND locked_until < now())
+           ORDER BY created_at
+           LIMIT 1
+           FOR UPDATE SKIP LOCKED)
+       RETURNING m.id, m.units, m.up_axis, m.attempts)
+     SELECT * FROM claimed`,
+    [s.leaseS],
+  );
+  return rows[0];
+}
+
+function runThread(req: AnalysisRequest, onProgress: (v: number) => void): Promise<Extract<AnalysisMessage, { type: 'done' | 'refused' }>> {
+  return new Promise((resolve, reject) => {
+    const w = tsWorker(new URL('./mold-analysis.thread.ts', import.meta.url), { resourceLimits: { maxOldGenerationSizeMb: 4096 } });
+    let settled = false;
+    w.on('message', (m: AnalysisMessage) => {
+      if (m.type === 'progress') return onProgress(m.value);
+      settled = true;
+      resolve(m);
+      void w.terminate();
+    });
+    w.on('error', (err) => {
+      settled = true;
+      reject(err);
+    });
+    w.on('exit', (code) => {
+      if (!settled) reject(new Error(`the analysis thread stopped (exit ${code})`));
+    });
+    w.postMessage(req, [req.bytes.buffer as ArrayBuffer]);
+  });
+}
+
+/** Analyses one queued mould, if any; returns whether it found one. */
+export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, logger: Logger): Promise<boolean> {
+  const mold = await claimQueuedMold(ds, s);
+  if (!mold) return false;
+  const log = logger.child({ moldId: mold.id });
+  try {
+    const [file] = (await ds.query('SELECT bytes FROM mold_files WHERE mold_id = $1', [mold.id])) as [{ bytes: Buffer } | undefined];
+    if (!file) throw new Error('the STL bytes are missing');
+    await ds.query('UPDATE molds SET progress = 0.15 WHERE id = $1', [mold.id]);
+    const bytes = new Uint8Array(file.bytes.buffer.slice(file.bytes.byteOffset, file.bytes.byteOffset + file.bytes.byteLength));
+    const outcome = await runThread({ bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles }, (value) => {
+      void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing'`, [mold.id, value]).catch(() => undefined);
+    });
+    if (outcome.type === 'refused') {
+      await ds.query(
+        `UPDATE molds SET status = 'failed', error_code = $2, error_message = $3, progress = 1, locked_until = NULL, updated_at = now() WHERE id = $1`,
+        [mold.id, outcome.code, outcome.message],
+      );
+      log.info({ code: outcome.code }, 'mould refused by the engine');
+      return true;
+    }
+    await ds.query(
+      `UPDATE molds SET status = 'ready', progress = 1, analysis = $2, report = $3, triangle_count = $4, analysed_at = now(),
+              error_code = NULL, error_message = NULL, locked_until = NULL, updated_at = now()
+        WHERE id = $1`,
+      [mold.id, JSON.stringify(outcome.analysis), JSON.stringify(outcome.report), outcome.triangles],
+    );
+    log.info('mould analysed');
+  } catch (err) {
+    const giveUp = mold.attempts >= s.maxAttempts;
+    const message = err instanceof Error ? err.message : String(err);
+    await ds.query(
+      `UPDATE molds SET status = $2, error_code = $3, error_message = $4, locked_until = NULL, updated_at = now() WHERE id = $1`,
+      giveUp ? [mold.id, 'failed', 'analysis_failed', `the analysis failed ${mold.attempts} times (${message}); upload the mould again or simplify it`] : [mold.id, 'queued', null, null],
+    );
+    log.error({ err: message, attempts: mold.attempts }, giveUp ? 'mould analysis failed for good' : 'mould analysis failed; queued again');
+  }
+  return true;
+}
+
+/** Every queued mould, one after another. */
+export async function analyseQueuedMolds(ds: DataSource, s: MoldAnalysisSettings, logger: Logger): Promise<number> {
+  let n = 0;
+  while (await analyseNextMold(ds, s, logger)) n++;
+  return n;
+}

@@ -1,0 +1,31 @@
+import { parentPort } from 'node:worker_threads';
+import { analyzeCavity, parseStl, prepareMesh, type FileUnits, type UpAxis } from '@gelpoint/mesh';
+import { cavityReport } from './cavity-report';
+
+export interface AnalysisRequest {
+  bytes: Uint8Array;
+  units: FileUnits;
+  up: UpAxis;
+  maxTriangles: number;
+}
+
+export type AnalysisMessage =
+  | { type: 'progress'; value: number }
+  | { type: 'done'; analysis: unknown; report: unknown; triangles: number }
+  | { type: 'refused'; code: string; message: string };
+
+const post = (m: AnalysisMessage) => parentPort!.postMessage(m);
+
+// The engine runs here, off the worker's event loop, so ticks and mail keep going during a big mould.
+parentPort!.once('message', (req: AnalysisRequest) => {
+  const soup = parseStl(req.bytes, { maxTriangles: req.maxTriangles });
+  if (!soup.ok) return post({ type: 'refused', code: soup.error.code, message: soup.error.message });
+  post({ type: 'progress', value: 0.3 });
+  const mesh = prepareMesh(soup.value, { units: req.units, up: req.up });
+  if (!mesh.ok) return post({ type: 'refused', code: mesh.error.code, message: mesh.error.message });
+  post({ type: 'progress', value: 0.5 });
+  const analysis = analyzeCavity(mesh.value);
+  if (!analysis.ok) return post({ type: 'refused', code: analysis.error.code, message: analysis.error.message });
+  post({ type: 'progress', value: 0.9 });
+  post({ type: 'done', analysis: analysis.value, report: cavityReport(analysis.value), triangles: analysis.value.triangles });
+});

@@ -1,0 +1,84 @@
+import { z } from 'zod';
+import { Id, Timestamp, UserRef, requiredText } from './common';
+import { Dam } from './molds';
+
+const positive = (label: string, max: number) =>
+  z.number({ message: `${label} must be a number` }).gt(0, { message: `${label} must be above zero` }).max(max, { message: `${label} must be at most ${max}` });
+const nonNegative = (label: string, max: number) =>
+  z.number({ message: `${label} must be a number` }).min(0, { message: `${label} must be zero or more` }).max(max, { message: `${label} must be at most ${max}` });
+
+export const QuickShape = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('rectangle'), lengthMm: positive('length', 10_000), widthMm: positive('width', 10_000), depthMm: positive('depth', 2_000) }).strict(),
+    z.object({ kind: z.literal('channel'), lengthMm: positive('length', 10_000), widthMm: positive('width', 10_000), depthMm: positive('depth', 2_000) }).strict(),
+    z.object({ kind: z.literal('cylinder'), diameterMm: positive('diameter', 10_000), depthMm: positive('depth', 2_000) }).strict(),
+    z
+      .object({
+        kind: z.literal('area_depth'),
+        areaMm2: positive('area', 1e8),
+        averageDepthMm: positive('average depth', 2_000),
+        maxDepthMm: positive('deepest point', 2_000).optional(),
+        perimeterMm: positive('perimeter', 100_000).optional(),
+      })
+      .strict(),
+  ],
+  { message: 'the shape must be rectangle, channel, cylinder or area_depth' },
+);
+export type QuickShape = z.infer<typeof QuickShape>;
+
+export const PlanCavity = z.discriminatedUnion(
+  'source',
+  [
+    z.object({ source: z.literal('mold'), moldId: Id, dam: Dam.default('outline') }).strict(),
+    z.object({ source: z.literal('shape'), shape: QuickShape }).strict(),
+  ],
+  { message: 'the cavity comes from a mould (source: mold) or a quick shape (source: shape)' },
+);
+
+export const PourPlanInput = z
+  .object({
+    pieceId: Id,
+    name: requiredText(120, 'name'),
+    cavity: PlanCavity,
+    /** For a mould: the level in its report frame (mm). For a quick shape: the depth from its floor (mm). */
+    fillLevelMm: z.number({ message: 'fill level must be a number (mm)' }).refine(Number.isFinite, { message: 'fill level must be finite' }),
+    deepPour: z.object({ resinSystemId: Id, pigmentId: Id.nullable().default(null), pigmentPct: nonNegative('pigment loading', 100).default(0) }).strict(),
+    sealCoat: z
+      .object({ resinSystemId: Id, filmThicknessMm: positive('film thickness', 5), coats: z.number().int().min(1).max(10), absorptionFactor: z.number().min(1).max(5) })
+      .strict()
+      .nullable()
+      .default(null),
+    overPourPct: nonNegative('over-pour', 100).default(5),
+    cupWaste: z.union([z.object({ massG: nonNegative('cup waste', 10_000) }).strict(), z.object({ volumeMl: nonNegative('cup waste', 10_000) }).strict()]).default({ massG: 5 }),
+    shopTempC: z.number({ message: 'shop temperature must be a number (°C)' }).min(-30).max(60),
+    shopAir: z.object({ rhPct: z.number().min(0).max(100), surfaceTempC: z.number().min(-30).max(80) }).strict().nullable().default(null),
+    wood: z
+      .object({ lengthMm: positive('wood length', 10_000), widthMm: positive('wood width', 5_000), thicknessMm: positive('wood thickness', 1_000), pricePerBoardFoot: nonNegative('price per board foot', 100_000) })
+      .strict()
+      .nullable()
+      .default(null),
+  })
+  .strict();
+export type PourPlanInput = z.input<typeof PourPlanInput>;
+
+export const PourPlanView = z.object({
+  id: Id,
+  pieceId: Id,
+  moldId: Id.nullable(),
+  name: z.string(),
+  inputs: z.record(z.string(), z.unknown()),
+  /** The shelf values the plan used, as they were when it was saved. */
+  productSnapshot: z.record(z.string(), z.unknown()),
+  /** The computed plan (layers, batches, seal coat, cost, cautions) from packages/core. */
+  result: z.record(z.string(), z.unknown()),
+  createdBy: UserRef.nullable(),
+  createdAt: Timestamp,
+  updatedAt: Timestamp,
+});
+export type PourPlanView = z.infer<typeof PourPlanView>;
+
+export const PourPlanList = z.object({ items: z.array(PourPlanView.omit({ result: true, inputs: true, productSnapshot: true }).extend({ totalGrams: z.number() })), total: z.number().int() });
+export const PourPlanListQuery = z
+  .object({ pieceId: Id.optional(), limit: z.coerce.number().int().min(1).max(200).default(50), offset: z.coerce.number().int().min(0).max(1_000_000).default(0) })
+  .strict();

@@ -1,0 +1,148 @@
+import { z } from 'zod';
+import { Id, Timestamp, requiredText, text } from './common';
+
+const positive = (label: string, max: number) =>
+  z.number({ message: `${label} must be a number` }).gt(0, { message: `${label} must be above zero` }).max(max, { message: `${label} must be at most ${max}` });
+const nonNegative = (label: string, max: number) =>
+  z.number({ message: `${label} must be a number` }).min(0, { message: `${label} must be zero or more` }).max(max, { message: `${label} must be at most ${max}` });
+const tempC = (label: string) =>
+  z.number({ message: `${label} must be a number (°C)` }).min(-40, { message: `${label} must be at least −40 °C` }).max(150, { message: `${label} must be at most 150 °C` });
+
+export const ResinUse = z.enum(['seal', 'deep_pour', 'casting', 'coating'], { message: 'use must be seal, deep_pour, casting or coating' });
+export const RatioBasis = z.enum(['weight', 'volume'], { message: 'the ratio basis must be weight or volume' });
+
+const resinSystemFields = {
+  name: requiredText(120, 'name'),
+  maker: text(120, 'maker').default(''),
+  use: ResinUse,
+  mixRatio: z.object({ a: positive('part A of the ratio', 1000), b: positive('part B of the ratio', 1000), basis: RatioBasis }),
+  densityAGPerMl: positive('density of part A', 5),
+  densityBGPerMl: positive('density of part B', 5),
+  potLifeMin: positive('pot life', 10_000),
+  gelTimeH: positive('gel time', 1000),
+  tackFreeH: positive('tack-free time', 1000),
+  recoatWindow: z.object({ earliestH: nonNegative('earliest recoat', 1000), latestH: positive('latest recoat', 10_000) }),
+  demoldH: positive('demold time', 10_000),
+  fullCureH: positive('full cure time', 10_000),
+  readyToMachineH: positive('ready-to-machine time', 10_000).nullable().default(null),
+  referenceTempC: tempC('reference temperature'),
+  minWorkTempC: tempC('minimum working temperature'),
+  maxWorkTempC: tempC('maximum working temperature'),
+  maxLayerMm: positive('maximum layer thickness', 1000),
+  maxBatchG: positive('maximum batch mass', 1_000_000),
+  activationEnergyKJPerMol: positive('activation energy', 500).nullable().default(null),
+  pricePerKit: nonNegative('price per kit', 1_000_000),
+  kitSizeG: positive('kit size', 10_000_000),
+  shelfLifeMonths: positive('shelf life', 600),
+};
+
+const resinSystemRules = <T extends z.ZodType<{ recoatWindow?: { earliestH: number; latestH: number }; minWorkTempC?: number; maxWorkTempC?: number; demoldH?: number; fullCureH?: number }>>(s: T) =>
+  s
+    .refine((v) => !v.recoatWindow || v.recoatWindow.earliestH <= v.recoatWindow.latestH, { message: 'the recoat window must open before it closes', path: ['recoatWindow'] })
+    .refine((v) => v.minWorkTempC === undefined || v.maxWorkTempC === undefined || v.minWorkTempC < v.maxWorkTempC, {
+      message: 'the minimum working temperature must be below the maximum',
+      path: ['minWorkTempC'],
+    })
+    .refine((v) => v.demoldH === undefined || v.fullCureH === undefined || v.demoldH <= v.fullCureH, { message: 'demold cannot come after full cure', path: ['demoldH'] });
+
+export const ResinSystemInput = resinSystemRules(z.object(resinSystemFields).strict());
+export type ResinSystemInput = z.input<typeof ResinSystemInput>;
+
+export const ResinSystemView = z.object({
+  id: Id,
+  ...resinSystemFields,
+  name: z.string(),
+  maker: z.string(),
+  readyToMachineH: z.number().nullable(),
+  activationEnergyKJPerMol: z.number().nullable(),
+  /** The activation energy the cure model uses: the data sheet's, or the common-practice default. */
+  effectiveActivationEnergyKJPerMol: z.number(),
+  archived: z.boolean(),
+  updatedAt: Timestamp,
+});
+export type ResinSystemView = z.infer<typeof ResinSystemView>;
+
+export const PigmentKind = z.enum(['powder', 'paste', 'liquid'], { message: 'kind must be powder, paste or liquid' });
+
+const pigmentFields = {
+  name: requiredText(120, 'name'),
+  kind: PigmentKind,
+  recommendedPct: nonNegative('recommended loading', 100),
+  maxPct: positive('maximum loading', 100),
+  pricePerPack: nonNegative('price per pack', 1_000_000),
+  packSizeG: positive('pack size', 1_000_000),
+};
+export const PigmentInput = z
+  .object(pigmentFields)
+  .strict()
+  .refine((v) => v.recommendedPct <= v.maxPct, { message: 'the recommended loading cannot be above the maximum', path: ['recommendedPct'] });
+export type PigmentInput = z.input<typeof PigmentInput>;
+
+export const PigmentView = z.object({ id: Id, ...pigmentFields, name: z.string(), archived: z.boolean(), updatedAt: Timestamp });
+export type PigmentView = z.infer<typeof PigmentView>;
+
+export const LotPart = z.enum(['A', 'B', 'pigment'], { message: 'part must be A, B or pigment' });
+const IsoDate = z.iso.date({ message: 'must be a date like 2026-12-01' });
+
+export const LotInput = z
+  .object({
+    part: LotPart,
+    resinSystemId: Id.nullable().default(null),
+    pigmentId: Id.nullable().default(null),
+    lotNumber: requiredText(80, 'lot number'),
+    quantityG: positive('quantity', 10_000_000),
+    receivedOn: IsoDate,
+    expiresOn: IsoDate.nullable().default(null),
+    notes: text(1000, 'notes').default(''),
+  })
+  .strict()
+  .refine((v) => (v.part === 'pigment' ? v.pigmentId && !v.resinSystemId : v.resinSystemId && !v.pigmentId), {
+    message: 'a part A or B lot names its resin system; a pigment lot names its pigment',
+    path: ['part'],
+  })
+  .refine((v) => !v.expiresOn || v.expiresOn >= v.receivedOn, { message: 'a lot cannot expire before it was received', path: ['expiresOn'] });
+export type LotInput = z.input<typeof LotInput>;
+
+export const LotUpdate = z
+  .object({ lotNumber: requiredText(80, 'lot number'), remainingG: nonNegative('remaining quantity', 10_000_000), expiresOn: IsoDate.nullable(), notes: text(1000, 'notes') })
+  .partial()
+  .strict();
+
+export const LotView = z.object({
+  id: Id,
+  part: LotPart,
+  resinSystemId: Id.nullable(),
+  pigmentId: Id.nullable(),
+  productName: z.string(),
+  lotNumber: z.string(),
+  quantityG: z.number(),
+  remainingG: z.number(),
+  receivedOn: z.string(),
+  expiresOn: z.string().nullable(),
+  notes: z.string(),
+  expired: z.boolean(),
+  low: z.boolean().describe('less than a tenth of what was received is left'),
+});
+export type LotView = z.infer<typeof LotView>;
+
+export const ShelfListQuery = z
+  .object({
+    q: text(120, 'search').optional(),
+    includeArchived: z.enum(['true', 'false']).optional(),
+    limit: z.coerce.number().int().min(1).max(500).default(100),
+    offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
+  })
+  .strict();
+
+export const LotListQuery = z
+  .object({
+    q: text(120, 'search').optional(),
+    part: LotPart.optional(),
+    productId: Id.optional(),
+    status: z.enum(['all', 'in_stock', 'low', 'expired']).default('all'),
+    limit: z.coerce.number().int().min(1).max(500).default(100),
+    offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
+  })
+  .strict();
+
+export const Page = <T extends z.ZodType>(item: T) => z.object({ items: z.array(item), total: z.number().int() });

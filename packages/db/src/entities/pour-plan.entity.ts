@@ -1,0 +1,38 @@
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { CreatedAt, UpdatedAt } from './columns';
+import { Mold } from './mold.entity';
+import { Piece } from './piece.entity';
+import { Shop } from './shop.entity';
+import { User } from './user.entity';
+
+/**
+ * A saved pour plan: the maker's inputs, a snapshot of the shelf values it used (a later edit of the
+ * shelf does not rewrite it) and the result the server computed from both.
+ */
+@Entity({ name: 'pour_plans' })
+@Index('pour_plans_shop_piece_idx', ['shopId', 'pieceId'])
+export class PourPlan {
+  @PrimaryGeneratedColumn('uuid', { primaryKeyConstraintName: 'pour_plans_pkey' }) id!: string;
+  @Column({ name: 'shop_id', type: 'uuid' }) shopId!: string;
+  @Column({ name: 'piece_id', type: 'uuid' }) pieceId!: string;
+  @Column({ name: 'mold_id', type: 'uuid', nullable: true }) moldId!: string | null;
+  @Column({ type: 'text' }) name!: string;
+  @Column({ type: 'jsonb' }) inputs!: Record<string, unknown>;
+  @Column({ name: 'product_snapshot', type: 'jsonb' }) productSnapshot!: Record<string, unknown>;
+  @Column({ type: 'jsonb' }) result!: Record<string, unknown>;
+  @Column({ name: 'created_by_id', type: 'uuid', nullable: true }) createdById!: string | null;
+  @ManyToOne(() => Shop, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'shop_id', foreignKeyConstraintName: 'pour_plans_shop_fk' })
+  shop?: Shop;
+  @ManyToOne(() => Piece, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'piece_id', foreignKeyConstraintName: 'pour_plans_piece_fk' })
+  piece?: Piece;
+  @ManyToOne(() => Mold, { onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'mold_id', foreignKeyConstraintName: 'pour_plans_mold_fk' })
+  mold?: Mold | null;
+  @ManyToOne(() => User, { onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'created_by_id', foreignKeyConstraintName: 'pour_plans_created_by_fk' })
+  createdBy?: User | null;
+  @CreatedAt() createdAt!: Date;
+  @UpdatedAt() updatedAt!: Date;
+}
