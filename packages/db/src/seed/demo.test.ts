@@ -33,6 +33,16 @@ describe('demo scenario', () => {
     expect(new Set(pieces.map((p) => p.stage)).size).toBeGreaterThanOrEqual(4);
   });
 
+  it('stocks the shelf with products, pigments and lots, one of them expired and one low', async () => {
+    const resins: { use: string }[] = await ds.query('SELECT use FROM resin_systems');
+    expect(new Set(resins.map((r) => r.use))).toEqual(new Set(['deep_pour', 'coating', 'casting']));
+    const lots: { expired: boolean; low: boolean }[] = await ds.query(
+      'SELECT expires_on < CURRENT_DATE AS expired, remaining_g < quantity_g * 0.1 AS low FROM lots',
+    );
+    expect(lots.some((l) => l.expired)).toBe(true);
+    expect(lots.some((l) => l.low)).toBe(true);
+  });
+
   it('does nothing when run again', async () => {
     const before = await ds.getRepository(User).count();
     expect(await seedDemo(ds)).toBe(false);

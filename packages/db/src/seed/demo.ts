@@ -1,6 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { Membership, Piece, Shop, User, type PieceStage, type Role } from '../entities';
 import { hashPassword } from '../passwords';
+import { seedDemoShelf } from './demo-shelf';
 
 // The demo scenario is invented: a small shop, its three people and a few pieces at different stages.
 export const DEMO_PASSWORD = 'gelpoint-demo';
@@ -70,6 +71,7 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
         m.create(Piece, { shopId: shop.id, name: p.name, wood: p.wood, notes: p.notes, stage: p.stage, createdById: users.get(p.by)!.id }),
       );
     }
+    await seedDemoShelf(m, shop.id);
     return true;
   });
 }
