@@ -14,13 +14,15 @@ import { auditRoutes } from './modules/audit/audit.routes';
 import { authRateLimits } from './modules/auth/auth-rate-limit';
 import { authRoutes } from './modules/auth/auth.routes';
 import { healthRoutes } from './modules/health/health.routes';
-import { mailDomainOf } from './modules/mail/outbound-mail.service';
+import { mailDomainOf } from '@gelpoint/db';
 import { pieceRoutes } from './modules/pieces/pieces.routes';
 import { moldRoutes } from './modules/molds/molds.routes';
 import { Molds } from './modules/molds/molds.service';
 import { StlChecker } from './modules/molds/stl-check';
 import { pourPlanRoutes } from './modules/pour-plans/pour-plans.routes';
 import { PourPlans } from './modules/pour-plans/pour-plans.service';
+import { pourRoutes } from './modules/pours/pours.routes';
+import { Pours } from './modules/pours/pours.service';
 import { shelfRoutes } from './modules/shelf/shelf.routes';
 import { shopRoutes } from './modules/shop/shop.routes';
 import { teamRoutes } from './modules/team/team.routes';
@@ -76,6 +78,7 @@ export function createApp({ ds, config, logger = pino({ level: config.logLevel }
   const molds = new Molds(ds, new StlChecker(config.maxStlTriangles));
   moldRoutes(registry, molds, config.maxStlBytes);
   pourPlanRoutes(registry, new PourPlans(ds, molds.cavityForPlan));
+  pourRoutes(registry, ds, new Pours(ds));
 
   api.get('/openapi.json', (_req, res) => {
     res.json(openApiDocument(registry.routes, `${config.publicUrl}`));

@@ -7,6 +7,7 @@ const Env = z.object({
   SMTP_SECURE: z.enum(['true', 'false']).default('false'),
   SMTP_USER: z.string().optional(),
   SMTP_PASSWORD: z.string().optional(),
+  GELPOINT_PUBLIC_URL: z.url().default('http://127.0.0.1:8080'),
   GELPOINT_MAIL_FROM: z.string().default('Gelpoint <no-reply@gelpoint.local>'),
   GELPOINT_WORKER_CRON: z.string().default('* * * * *'),
   GELPOINT_MAIL_BATCH: z.coerce.number().int().min(1).max(500).default(50),
@@ -15,6 +16,11 @@ const Env = z.object({
   GELPOINT_MAIL_LEASE_S: z.coerce.number().int().min(5).default(120),
   GELPOINT_MAX_STL_TRIANGLES: z.coerce.number().int().positive().max(20_000_000).default(5_000_000),
   GELPOINT_ANALYSIS_LEASE_S: z.coerce.number().int().min(30).default(600),
+  GELPOINT_WORKER_JOBS: z
+    .string()
+    .default('reminders,mail,molds')
+    .transform((s) => s.split(',').map((x) => x.trim()).filter(Boolean))
+    .pipe(z.array(z.enum(['reminders', 'mail', 'molds'], { message: 'GELPOINT_WORKER_JOBS lists reminders, mail and/or molds' })).min(1)),
   GELPOINT_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 
@@ -22,6 +28,9 @@ export interface WorkerConfig {
   databaseUrl: string;
   smtp: { host: string; port: number; secure: boolean; user?: string; password?: string };
   mailFrom: string;
+  /** Which kinds of work this worker takes on (a dedicated analysis worker, say). */
+  jobs: ('reminders' | 'mail' | 'molds')[];
+  publicUrl: string;
   cron: string;
   mail: { batch: number; retryBaseS: number; maxAttempts: number; leaseS: number };
   molds: { maxTriangles: number; leaseS: number; maxAttempts: number };
@@ -36,6 +45,8 @@ export function loadWorkerConfig(raw: NodeJS.ProcessEnv = process.env): WorkerCo
     databaseUrl: databaseUrl(raw),
     smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, secure: e.SMTP_SECURE === 'true', user: e.SMTP_USER, password: e.SMTP_PASSWORD },
     mailFrom: e.GELPOINT_MAIL_FROM,
+    jobs: e.GELPOINT_WORKER_JOBS,
+    publicUrl: e.GELPOINT_PUBLIC_URL.replace(/\/$/, ''),
     cron: e.GELPOINT_WORKER_CRON,
     mail: { batch: e.GELPOINT_MAIL_BATCH, retryBaseS: e.GELPOINT_MAIL_RETRY_BASE_S, maxAttempts: e.GELPOINT_MAIL_MAX_ATTEMPTS, leaseS: e.GELPOINT_MAIL_LEASE_S },
     molds: { maxTriangles: e.GELPOINT_MAX_STL_TRIANGLES, leaseS: e.GELPOINT_ANALYSIS_LEASE_S, maxAttempts: 3 },

@@ -8,3 +8,4 @@ export * from './health';
 export * from './shelf';
 export * from './molds';
 export * from './pour-plans';
+export * from './pours';

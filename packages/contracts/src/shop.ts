@@ -13,6 +13,7 @@ export const Shop = z.object({
   name: z.string(),
   unitSystem: UnitSystem,
   scaleResolutionG: z.number(),
+  offRatioTolerancePct: z.number().describe('weighed A:B may differ from the target by this much before a batch is flagged'),
 });
 export type Shop = z.infer<typeof Shop>;
 
@@ -21,6 +22,7 @@ export const UpdateShopRequest = z
     name: requiredText(120, 'shop name'),
     unitSystem: UnitSystem,
     scaleResolutionG: ScaleResolutionG,
+    offRatioTolerancePct: z.number({ message: 'the off-ratio tolerance must be a number (%)' }).min(0.5, { message: 'the off-ratio tolerance must be at least 0.5 %' }).max(20, { message: 'the off-ratio tolerance must be at most 20 %' }),
   })
   .partial()
   .strict();

@@ -23,3 +23,4 @@ export * from './equivalent-age';
 export * from './cure-model';
 export * from './finish-coats';
 export * from './mold-cavity';
+export * from './pour-cure';

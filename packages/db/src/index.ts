@@ -4,3 +4,5 @@ export { databaseUrl } from './config';
 export { hashPassword, verifyPassword, verifyAgainstNothing } from './passwords';
 export { seedDemo, demoSignIns, DEMO_PASSWORD } from './seed/demo';
 export { MOLD_ANALYSIS_CHANNEL, OUTBOUND_MAIL_CHANNEL } from './channels';
+export { queueMail, mailDomainOf, type MailToSend } from './outbound-mail';
+export { toCorePigment, toCoreResinSystem } from './shelf-values';

@@ -1,3 +1,4 @@
+import type { Test } from 'supertest';
 import { describe, expect, it, beforeAll } from 'vitest';
 import type { Role, SessionResponse } from '@gelpoint/contracts';
 import { PASSWORD, bearer, createShop, uniqueEmail, useHarness, type ShopFixture } from '../test-support/harness';
@@ -15,7 +16,9 @@ interface World {
   own: ShopFixture;
   other: ShopFixture;
   people: Record<Role, SessionResponse>;
-  otherIds: { piece: string; membership: string; invitation: string; resin: string; pigment: string; lot: string; plan: string; mold: string };
+  otherIds: { piece: string; membership: string; invitation: string; resin: string; pigment: string; lot: string; plan: string; mold: string; pour: string };
+  ownPlan: string;
+  ownPour: string;
   ownPiece: string;
   ownResin: string;
   ownPigment: string;
@@ -28,6 +31,8 @@ interface Rule {
   body?: (w: World) => object;
   params?: Params;
   query?: string;
+  /** For routes that take CSV or multipart rather than JSON. */
+  raw?: (req: Test) => Test;
 }
 
 async function freshPiece(w: World, shop: 'own' | 'other'): Promise<string> {
@@ -79,6 +84,7 @@ const planBody = (pieceId: string, resinSystemId: string) => ({
   shopTempC: 21,
 });
 const freshPlan = async (w: World, shop: 'own' | 'other') => created(w, shop, '/api/pour-plans', planBody(await freshPiece(w, shop), await freshResin(w, shop)));
+const freshPour = async (w: World, shop: 'own' | 'other') => created(w, shop, '/api/pours', { pourPlanId: await freshPlan(w, shop) });
 const ownOrOther = (fresh: (w: World, shop: 'own') => Promise<string>, key: keyof World['otherIds']): Params => async (w, shop) => ({ id: shop === 'own' ? await fresh(w, 'own') : w.otherIds[key] });
 
 async function membershipOf(lead: SessionResponse, userId: string): Promise<string> {
@@ -142,6 +148,19 @@ const table: Record<string, Rule> = {
   'GET /api/pour-plans/:id': { allowed: 'member', params: ownOrOther(freshPlan, 'plan') },
   'PUT /api/pour-plans/:id': { allowed: ['lead', 'maker'], body: (w) => planBody(w.ownPiece, w.ownResin), params: ownOrOther(freshPlan, 'plan') },
   'DELETE /api/pour-plans/:id': { allowed: ['lead', 'maker'], params: ownOrOther(freshPlan, 'plan') },
+  'GET /api/pours': { allowed: 'member' },
+  'POST /api/pours': { allowed: 'member', body: (w) => ({ pourPlanId: w.ownPlan }) },
+  'GET /api/pours/:id': { allowed: 'member', params: ownOrOther(freshPour, 'pour') },
+  'POST /api/pours/:id/batches': { allowed: 'member', body: () => ({ planBatchIndex: 0, weighedAG: 10, weighedBG: 5 }), params: ownOrOther(freshPour, 'pour') },
+  'POST /api/pours/:id/readings': { allowed: 'member', body: () => ({ readings: [{ at: '2026-11-01T10:00:00Z', tempC: 20 }] }), params: ownOrOther(freshPour, 'pour') },
+  'POST /api/pours/:id/readings/csv': { allowed: 'member', raw: (r) => r.set('Content-Type', 'text/csv').send('2026-11-01T10:00:00Z,20\n'), params: ownOrOther(freshPour, 'pour') },
+  'POST /api/pours/:id/checks': { allowed: 'member', raw: (r) => r.field('stage', 'gelled'), params: ownOrOther(freshPour, 'pour') },
+  'GET /api/pours/:id/checks/:checkId/photo': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownPour : w.otherIds.pour, checkId: '00000000-0000-4000-8000-000000000000' }) },
+  'POST /api/pours/:id/release': { allowed: ['lead'], params: ownOrOther(freshPour, 'pour') },
+  'POST /api/pours/:id/machined': { allowed: ['lead', 'maker'], body: () => ({ finishCoats: 1, hoursBetweenCoats: 12 }), params: ownOrOther(freshPour, 'pour') },
+  'GET /api/today': { allowed: 'member' },
+  'POST /api/shop/ingest-token': { allowed: ['lead'] },
+  'POST /api/ingest/readings': { allowed: 'public' },
 };
 
 async function uploadMold(w: World, shop: 'own' | 'other'): Promise<string> {
@@ -164,7 +183,10 @@ beforeAll(async () => {
     lot: await freshLot(world, 'other'),
     plan: await freshPlan(world, 'other'),
     mold: await uploadMold(world, 'other'),
+    pour: await freshPour(world, 'other'),
   };
+  world.ownPlan = await freshPlan(world, 'own');
+  world.ownPour = await freshPour(world, 'own');
   world.ownPiece = await freshPiece(world, 'own');
   world.ownResin = await freshResin(world, 'own');
   world.ownPigment = await freshPigment(world, 'own');
@@ -179,10 +201,13 @@ async function sessionFor(role: Role): Promise<SessionResponse> {
   return res.body;
 }
 
-function call(method: string, path: string, params: Record<string, string>, body: object | undefined, session?: SessionResponse, query?: string) {
+function call(method: string, path: string, params: Record<string, string>, rule: Rule, session?: SessionResponse) {
+  const body = rule.body?.(world);
+  const query = rule.query;
   const url = path.replace(/:([A-Za-z]+)/g, (_m, k: string) => params[k] ?? `missing-${k}`) + (query ? `?${query}` : '');
   const req = h.http()[method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](url);
   if (session) req.set(bearer(session));
+  if (rule.raw) return rule.raw(req);
   return body ? req.send(body) : req;
 }
 
@@ -199,22 +224,22 @@ describe('access matrix', () => {
       const rule = table[key]!;
       if (rule.allowed === 'public') continue;
       const params = rule.params ? await rule.params(world, 'own') : {};
-      const anon = await call(route.method, route.fullPath, params, rule.body?.(world), undefined, rule.query);
+      const anon = await call(route.method, route.fullPath, params, rule);
       if (anon.status !== 401) failures.push(`${key} anonymous → ${anon.status}, want 401`);
       for (const role of ROLES) {
         const allowed = rule.allowed === 'member' || rule.allowed.includes(role);
         const p = rule.params ? await rule.params(world, 'own') : {};
-        const res = await call(route.method, route.fullPath, p, rule.body?.(world), await sessionFor(role), rule.query);
+        const res = await call(route.method, route.fullPath, p, rule, await sessionFor(role));
         if (allowed && (res.status === 401 || res.status === 403 || res.status >= 500)) failures.push(`${key} ${role} → ${res.status}, want allowed`);
         if (!allowed && res.status !== 403) failures.push(`${key} ${role} → ${res.status}, want 403`);
         if (allowed && rule.params) {
-          const foreign = await call(route.method, route.fullPath, await rule.params(world, 'other'), rule.body?.(world), await sessionFor(role), rule.query);
+          const foreign = await call(route.method, route.fullPath, await rule.params(world, 'other'), rule, await sessionFor(role));
           if (foreign.status !== 404) failures.push(`${key} ${role} with another shop's id → ${foreign.status}, want 404`);
         }
       }
     }
     expect(failures).toEqual([]);
-  });
+  }, 180_000);
 
   it("never changes another shop's objects", async () => {
     const piece = await h.http().get(`/api/pieces/${world.otherIds.piece}`).set(bearer(world.other.lead)).expect(200);

@@ -13,13 +13,21 @@ import { ResinSystem } from './resin-system.entity';
 import { Pigment } from './pigment.entity';
 import { Lot } from './lot.entity';
 import { PourPlan } from './pour-plan.entity';
+import { Pour } from './pour.entity';
+import { PourBatch } from './pour-batch.entity';
+import { TemperatureReading } from './temperature-reading.entity';
+import { CureCheck } from './cure-check.entity';
+import { Reminder } from './reminder.entity';
 
-export { AuditEvent, Invitation, Lot, Membership, Mold, MoldFile, OutboundMail, PasswordReset, Piece, Pigment, PourPlan, ResinSystem, Session, Shop, User };
+export { AuditEvent, CureCheck, Invitation, Lot, Pour, PourBatch, Reminder, TemperatureReading, Membership, Mold, MoldFile, OutboundMail, PasswordReset, Piece, Pigment, PourPlan, ResinSystem, Session, Shop, User };
 export type { MoldStatus, MoldUnits, UpAxis } from './mold.entity';
 export type { ResinUse } from './resin-system.entity';
 export type { LotPart } from './lot.entity';
+export type { PourStatus } from './pour.entity';
+export type { CureCheckStage } from './cure-check.entity';
+export type { ReminderKind } from './reminder.entity';
 export type { Role } from './membership.entity';
 export type { PieceStage } from './piece.entity';
 export type { OutboundMailStatus } from './outbound-mail.entity';
 
-export const entities = [Shop, User, Membership, Invitation, PasswordReset, Session, Piece, AuditEvent, OutboundMail, Mold, MoldFile, ResinSystem, Pigment, Lot, PourPlan];
+export const entities = [Shop, User, Membership, Invitation, PasswordReset, Session, Piece, AuditEvent, OutboundMail, Mold, MoldFile, ResinSystem, Pigment, Lot, PourPlan, Pour, PourBatch, TemperatureReading, CureCheck, Reminder];

@@ -43,6 +43,14 @@ describe('demo scenario', () => {
     expect(lots.some((l) => l.low)).toBe(true);
   });
 
+  it('has a pour whose demold check is already due, and a piece cured enough to release', async () => {
+    const due: { kind: string; title: string }[] = await ds.query(`SELECT kind, title FROM reminders WHERE status = 'pending' AND due_at <= now()`);
+    expect(due.map((r) => r.kind)).toEqual(['demold_check']);
+    expect(due[0]!.title).toContain('River table');
+    const ready: { n: number }[] = await ds.query(`SELECT count(*)::int AS n FROM reminders WHERE kind = 'ready_to_machine' AND status = 'sent'`);
+    expect(ready[0]!.n).toBe(1);
+  });
+
   it('does nothing when run again', async () => {
     const before = await ds.getRepository(User).count();
     expect(await seedDemo(ds)).toBe(false);

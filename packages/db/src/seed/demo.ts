@@ -1,6 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { Membership, Piece, Shop, User, type PieceStage, type Role } from '../entities';
 import { hashPassword } from '../passwords';
+import { seedDemoPours } from './demo-pours';
 import { seedDemoShelf } from './demo-shelf';
 
 // The demo scenario is invented: a small shop, its three people and a few pieces at different stages.
@@ -72,6 +73,7 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
       );
     }
     await seedDemoShelf(m, shop.id);
+    await seedDemoPours(m, shop.id, users);
     return true;
   });
 }

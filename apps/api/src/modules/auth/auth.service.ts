@@ -5,7 +5,7 @@ import type { LoginRequest, PasswordResetConfirm, RegisterRequest, SessionRespon
 import { AppError } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { passwordResetMail } from '../mail/mail-templates';
-import { queueMail } from '../mail/outbound-mail.service';
+import { queueMail } from '@gelpoint/db';
 import { openSession, revokeSessions, type SessionSettings } from './session.service';
 
 export interface AuthSettings extends SessionSettings {

@@ -15,7 +15,7 @@ const prism = (z: number) => 80 * 40 * (z - 10);
 function runWorkerOnce() {
   const r = spawnSync(process.execPath, ['--import', 'tsx', 'apps/worker/src/main.ts', '--once'], {
     cwd: join(import.meta.dirname, '../../../../..'),
-    env: { ...process.env, DATABASE_URL: testDatabaseUrl(), SMTP_PORT: '9', GELPOINT_LOG_LEVEL: 'silent' },
+    env: { ...process.env, DATABASE_URL: testDatabaseUrl(), GELPOINT_WORKER_JOBS: 'molds', GELPOINT_LOG_LEVEL: 'silent' },
     encoding: 'utf8',
     timeout: 60_000,
   });

@@ -1,13 +1,12 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { buildPourPlan, type PlanCavity, type PourPlan as CorePourPlan } from '@gelpoint/core';
-import { Piece, Pigment, PourPlan, ResinSystem } from '@gelpoint/db';
+import { Piece, Pigment, PourPlan, ResinSystem, toCorePigment, toCoreResinSystem } from '@gelpoint/db';
 import type { PourPlanInput, PourPlanView } from '@gelpoint/contracts';
 import { PourPlanInput as PourPlanInputSchema } from '@gelpoint/contracts';
 import type { z } from 'zod';
 import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
-import { toCorePigment, toCoreResinSystem } from '../shelf/shelf-views';
 import { quickShapeCavity } from './plan-cavity';
 
 type PlanInput = z.output<typeof PourPlanInputSchema>;

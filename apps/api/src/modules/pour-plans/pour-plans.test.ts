@@ -77,7 +77,7 @@ describe('pour plans', () => {
     const mold = (await h.http().post('/api/molds').set(bearer(maker)).attach('file', stl, 'pocket.stl').field('pieceId', piece.id).expect(202)).body;
     const r = spawnSync(process.execPath, ['--import', 'tsx', 'apps/worker/src/main.ts', '--once'], {
       cwd: join(import.meta.dirname, '../../../../..'),
-      env: { ...process.env, DATABASE_URL: testDatabaseUrl(), SMTP_PORT: '9', GELPOINT_LOG_LEVEL: 'silent' },
+      env: { ...process.env, DATABASE_URL: testDatabaseUrl(), GELPOINT_WORKER_JOBS: 'molds', GELPOINT_LOG_LEVEL: 'silent' },
       encoding: 'utf8',
       timeout: 60_000,
     });

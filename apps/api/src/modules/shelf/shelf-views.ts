@@ -1,5 +1,5 @@
-import { activationEnergyOf, readyToMachineHOf, type ResinSystem as CoreResinSystem, type Pigment as CorePigment } from '@gelpoint/core';
-import type { Lot, Pigment, ResinSystem } from '@gelpoint/db';
+import { activationEnergyOf } from '@gelpoint/core';
+import { toCoreResinSystem, type Lot, type Pigment, type ResinSystem } from '@gelpoint/db';
 import type { LotView, PigmentView, ResinSystemInput, ResinSystemView } from '@gelpoint/contracts';
 
 export function resinSystemView(r: ResinSystem): ResinSystemView {
@@ -64,34 +64,6 @@ export function resinSystemColumns(input: Required<Omit<ResinSystemInput, 'maker
   };
 }
 
-/** The shape packages/core computes with; also what a pour plan snapshots. */
-export function toCoreResinSystem(r: ResinSystem): CoreResinSystem {
-  return {
-    name: r.name,
-    use: r.use,
-    mixRatio: { a: r.ratioA, b: r.ratioB, basis: r.ratioBasis },
-    densityAGPerMl: r.densityAGPerMl,
-    densityBGPerMl: r.densityBGPerMl,
-    potLifeMin: r.potLifeMin,
-    gelTimeH: r.gelTimeH,
-    recoatWindow: { earliestH: r.recoatEarliestH, latestH: r.recoatLatestH },
-    tackFreeH: r.tackFreeH,
-    demoldH: r.demoldH,
-    fullCureH: r.fullCureH,
-    ...(r.readyToMachineH !== null ? { readyToMachineH: r.readyToMachineH } : {}),
-    referenceTempC: r.referenceTempC,
-    minWorkTempC: r.minWorkTempC,
-    maxWorkTempC: r.maxWorkTempC,
-    maxLayerMm: r.maxLayerMm,
-    maxBatchG: r.maxBatchG,
-    ...(r.activationEnergyKJPerMol !== null ? { activationEnergyKJPerMol: r.activationEnergyKJPerMol } : {}),
-    pricePerKit: r.pricePerKit,
-    kitSizeG: r.kitSizeG,
-    shelfLifeMonths: r.shelfLifeMonths,
-  };
-}
-
-export const readyToMachineH = (r: ResinSystem) => readyToMachineHOf(toCoreResinSystem(r));
 
 export function pigmentView(p: Pigment): PigmentView {
   return {
@@ -107,9 +79,6 @@ export function pigmentView(p: Pigment): PigmentView {
   };
 }
 
-export function toCorePigment(p: Pigment): CorePigment {
-  return { name: p.name, kind: p.kind, recommendedPct: p.recommendedPct, maxPct: p.maxPct, price: { pricePerPack: p.pricePerPack, packSizeG: p.packSizeG } };
-}
 
 const today = () => new Date().toISOString().slice(0, 10);
 

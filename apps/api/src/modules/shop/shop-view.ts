@@ -6,4 +6,5 @@ export const shopView = (s: ShopRow): Shop => ({
   name: s.name,
   unitSystem: s.unitSystem,
   scaleResolutionG: s.scaleResolutionG,
+  offRatioTolerancePct: s.offRatioTolerancePct,
 });

@@ -7,7 +7,7 @@ import { recordAudit } from '../audit/audit.service';
 import { newToken, tokenHash, type AuthSettings } from '../auth/auth.service';
 import { openSession } from '../auth/session.service';
 import { invitationMail } from '../mail/mail-templates';
-import { queueMail } from '../mail/outbound-mail.service';
+import { queueMail } from '@gelpoint/db';
 
 export interface InvitationSettings extends AuthSettings {
   invitationDays: number;

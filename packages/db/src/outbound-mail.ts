@@ -1,10 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
-import { OUTBOUND_MAIL_CHANNEL, OutboundMail } from '@gelpoint/db';
+import { OUTBOUND_MAIL_CHANNEL } from './channels';
+import { OutboundMail } from './entities';
 
 export interface MailToSend {
   shopId: string | null;
-  /** One message per key, ever: a retried request cannot queue the same mail twice. */
+  /** One message per key, ever: a retried request or a second worker cannot queue the same mail twice. */
   dedupeKey: string;
   to: string;
   subject: string;
@@ -14,10 +15,11 @@ export interface MailToSend {
 /**
  * Queues a message in the caller's transaction; the worker sends it (woken at once by NOTIFY, which
  * PostgreSQL delivers only on commit). The Message-ID is fixed here so a resend is recognisable.
+ * Returns false when a message with that key was already queued.
  */
-export async function queueMail(m: EntityManager, mail: MailToSend, mailDomain: string): Promise<void> {
+export async function queueMail(m: EntityManager, mail: MailToSend, mailDomain: string): Promise<boolean> {
   const id = randomUUID();
-  await m
+  const inserted = await m
     .createQueryBuilder()
     .insert()
     .into(OutboundMail)
@@ -34,6 +36,7 @@ export async function queueMail(m: EntityManager, mail: MailToSend, mailDomain: 
     .orIgnore()
     .execute();
   await m.query('SELECT pg_notify($1, $2)', [OUTBOUND_MAIL_CHANNEL, id]);
+  return (inserted.identifiers.length > 0 && inserted.raw.length > 0) || false;
 }
 
 export function mailDomainOf(publicUrl: string): string {

@@ -1,0 +1,58 @@
+import type { CureState } from '@gelpoint/core';
+import type { PourBatch, Reminder } from '@gelpoint/db';
+import type { BatchView, ReminderView } from '@gelpoint/contracts';
+import { z } from 'zod';
+import type { CureView } from '@gelpoint/contracts';
+
+export function cureView(state: CureState): z.infer<typeof CureView> {
+  const s = state.status;
+  return {
+    step: state.step?.key ?? null,
+    productName: state.step?.product.name ?? null,
+    pouredAt: state.pouredAt?.toISOString() ?? null,
+    equivalentHoursAtRef: s?.age.equivalentHoursAtRef ?? 0,
+    progress: s?.progress ?? 0,
+    stageReached: s?.stageReached ?? null,
+    nextLayerWindow: s?.nextLayerWindow ?? null,
+    assumedHours: s?.age.assumedHours ?? 0,
+    stalledHours: s?.age.stalledHours ?? 0,
+    readyToMachine: Boolean(state.isLastStep && s?.stages.find((x) => x.key === 'ready_to_machine')?.reached),
+    stages: s?.stages.map((x) => ({ key: x.key, equivalentHoursAtRef: x.equivalentHoursAtRef, reached: x.reached, reachedAt: x.reachedAt, predictedAt: x.predictedAt })) ?? [],
+    cautions: s?.cautions.map((c) => ({ code: c.code, severity: c.severity, message: c.message })) ?? [],
+  };
+}
+
+export const reminderView = (r: Reminder): ReminderView => ({
+  id: r.id,
+  kind: r.kind,
+  step: r.step,
+  dueAt: r.dueAt.toISOString(),
+  status: r.status,
+  assumed: r.assumed,
+  title: r.title,
+  sentAt: r.sentAt?.toISOString() ?? null,
+});
+
+export const batchView = (b: PourBatch): BatchView => ({
+  id: b.id,
+  planBatchIndex: b.planBatchIndex,
+  step: b.step,
+  mixedBy: b.mixedBy ? { id: b.mixedBy.id, name: b.mixedBy.name } : null,
+  mixedAt: b.mixedAt.toISOString(),
+  lotA: b.lotANumber,
+  lotB: b.lotBNumber,
+  lotPigment: b.lotPigmentNumber,
+  targetAG: b.targetAG,
+  targetBG: b.targetBG,
+  targetPigmentG: b.targetPigmentG,
+  weighedAG: b.weighedAG,
+  weighedBG: b.weighedBG,
+  weighedPigmentG: b.weighedPigmentG,
+  offRatioPct: b.offRatioPct,
+  ambientTempC: b.ambientTempC,
+  surfaceTempC: b.surfaceTempC,
+  rhPct: b.rhPct,
+  dewPointC: b.dewPointC,
+  warnings: b.warnings,
+  notes: b.notes,
+});

@@ -1,0 +1,25 @@
+export interface DueReminder {
+  id: string;
+  title: string;
+  kind: string;
+  due_at: Date;
+  assumed: boolean;
+  pour_id: string;
+  shop_id: string;
+  piece_name: string;
+  plan_name: string;
+}
+
+/** The e-mail a due reminder becomes. Plain text: it reads on any phone in the shop. */
+export function reminderMail(r: DueReminder, publicUrl: string): { subject: string; text: string } {
+  const basis = r.assumed
+    ? 'This time rests partly on the plan’s assumed shop temperature, not only on logged readings: check the piece before you act.'
+    : 'This time comes from the temperatures logged for the pour.';
+  return {
+    subject: r.title,
+    text:
+      `${r.title}\n\nPiece: ${r.piece_name}\nPlan: ${r.plan_name}\nDue: ${r.due_at.toUTCString()}\n\n${basis}\n\n` +
+      `Open the pour: ${publicUrl}/pours/${r.pour_id}\n\n` +
+      'Check by hand before demolding or machining, wear gloves and eye protection, and follow the product’s SDS and TDS.\n\n— Gelpoint',
+  };
+}

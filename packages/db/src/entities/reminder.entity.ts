@@ -1,0 +1,40 @@
+import { Check, Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { CreatedAt, UpdatedAt } from './columns';
+import { Pour } from './pour.entity';
+
+export type ReminderKind =
+  | 'seal_coat_window_opens'
+  | 'seal_coat_window_closes'
+  | 'next_layer_window_opens'
+  | 'next_layer_window_closes'
+  | 'demold_check'
+  | 'ready_to_machine'
+  | 'finish_coat_due';
+
+/**
+ * A reminder is a row: recomputed while pending when readings or batches arrive, claimed by one
+ * worker when due, and turned into outbound mail in the same transaction, so it is sent once.
+ */
+@Entity({ name: 'reminders' })
+@Check('reminders_status_check', `status IN ('pending', 'sent', 'cancelled')`)
+@Index('reminders_due_idx', ['status', 'dueAt'])
+@Index('reminders_pour_key', ['pourId', 'kind', 'step'], { unique: true })
+export class Reminder {
+  @PrimaryGeneratedColumn('uuid', { primaryKeyConstraintName: 'reminders_pkey' }) id!: string;
+  @Column({ name: 'shop_id', type: 'uuid' }) shopId!: string;
+  @Column({ name: 'pour_id', type: 'uuid' }) pourId!: string;
+  @Column({ type: 'text' }) kind!: ReminderKind;
+  /** Which step it belongs to: 'seal_coat:1', 'layer:2', 'finish:3'. */
+  @Column({ type: 'text' }) step!: string;
+  @Column({ name: 'due_at', type: 'timestamptz' }) dueAt!: Date;
+  @Column({ type: 'text', default: 'pending' }) status!: 'pending' | 'sent' | 'cancelled';
+  /** True when the due time rests on the assumed temperature rather than logged readings. */
+  @Column({ type: 'boolean', default: false }) assumed!: boolean;
+  @Column({ type: 'text' }) title!: string;
+  @Column({ name: 'sent_at', type: 'timestamptz', nullable: true }) sentAt!: Date | null;
+  @ManyToOne(() => Pour, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'pour_id', foreignKeyConstraintName: 'reminders_pour_fk' })
+  pour?: Pour;
+  @CreatedAt() createdAt!: Date;
+  @UpdatedAt() updatedAt!: Date;
+}
