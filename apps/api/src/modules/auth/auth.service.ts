@@ -6,6 +6,7 @@ import { AppError } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { passwordResetMail } from '../mail/mail-templates';
 import { queueMail } from '@gelpoint/db';
+import { checkNewPassword } from './password-policy';
 import { openSession, revokeSessions, type SessionSettings } from './session.service';
 
 export interface AuthSettings extends SessionSettings {
@@ -20,6 +21,7 @@ export const tokenHash = (token: string) => createHash('sha256').update(token).d
 const isUniqueViolation = (err: unknown) => (err as { code?: string }).code === '23505';
 
 export async function register(ds: DataSource, s: AuthSettings, input: RegisterRequest, userAgent: string): Promise<SessionResponse> {
+  checkNewPassword(input.password, input);
   const passwordHash = await hashPassword(input.password);
   try {
     return await ds.transaction(async (m) => {
@@ -74,8 +76,9 @@ export async function requestPasswordReset(ds: DataSource, s: AuthSettings, emai
 export async function confirmPasswordReset(ds: DataSource, input: PasswordResetConfirm): Promise<void> {
   const passwordHash = await hashPassword(input.password);
   await ds.transaction(async (m) => {
-    const reset = await m.findOne(PasswordReset, { where: { tokenHash: tokenHash(input.token) }, lock: { mode: 'pessimistic_write' } });
+    const reset = await m.findOne(PasswordReset, { where: { tokenHash: tokenHash(input.token) }, relations: { user: true }, lock: { mode: 'pessimistic_write', tables: ['password_resets'] } });
     if (!reset) throw new AppError('not_found', 'reset_not_found', 'this reset link is not valid; ask for a new one');
+    checkNewPassword(input.password, reset.user!);
     if (reset.usedAt) throw new AppError('gone', 'reset_used', 'this reset link was already used; ask for a new one');
     if (reset.expiresAt.getTime() <= Date.now()) throw new AppError('gone', 'reset_expired', 'this reset link has expired; ask for a new one');
     await m.update(PasswordReset, { id: reset.id }, { usedAt: new Date() });

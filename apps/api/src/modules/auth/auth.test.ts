@@ -31,6 +31,14 @@ describe('registration and sign-in', () => {
     expect(res.body.error.fields.password).toMatch(/at least 8/);
   });
 
+  it('refuses common passwords and ones built from the e-mail (OWASP ASVS 6.2.4)', async () => {
+    for (const [password, why] of [['password1', 'commonly used'], ['qwertyuiop', 'commonly used'], ['sawdust-fan@example.test', 'e-mail']] as const) {
+      const res = await h.http().post('/api/auth/register').send({ shopName: 'S', name: 'N', email: 'sawdust-fan@example.test', password }).expect(400);
+      expect(res.body.error.code).toBe('weak_password');
+      expect(res.body.error.fields.password).toMatch(why);
+    }
+  });
+
   it('answers malformed JSON with a 400, not a 500', async () => {
     const res = await h.http().post('/api/auth/login').set('Content-Type', 'application/json').send('{"email": ').expect(400);
     expect(res.body.error.code).toBe('malformed_json');

@@ -5,6 +5,7 @@ import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { newToken, tokenHash, type AuthSettings } from '../auth/auth.service';
+import { checkNewPassword } from '../auth/password-policy';
 import { openSession } from '../auth/session.service';
 import { invitationMail } from '../mail/mail-templates';
 import { queueMail } from '@gelpoint/db';
@@ -104,6 +105,7 @@ export async function acceptInvitation(ds: DataSource, s: InvitationSettings, to
       }
     } else {
       if (!input.name) throw new AppError('bad_request', 'invalid_input', 'your name is required to create the account', { name: 'your name is required' });
+      checkNewPassword(input.password, { email: inv.email, name: input.name });
       user = await m.save(m.create(User, { email: inv.email, name: input.name, passwordHash: newHash }));
     }
     const existing = await m.findOneBy(Membership, { userId: user.id, shopId: inv.shopId });
