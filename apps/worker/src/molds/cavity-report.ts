@@ -5,8 +5,13 @@ const CURVE_POINTS = 101;
 
 /** What people read about a mould, kept beside the analysis so the screen needs no engine call. */
 export function cavityReport(analysis: CavityAnalysis): CavityReport {
+  const bottom = analysis.bboxMm.min[2];
   const top = analysis.bboxMm.max[2];
-  const points = curve(analysis, CURVE_POINTS, 'outline');
+  const levels = Array.from({ length: CURVE_POINTS }, (_, i) => bottom + ((top - bottom) * i) / (CURVE_POINTS - 1));
+  // The floor is where the curve bends; sampling it exactly keeps layer plans from starting too high.
+  const floor = analysis.exact?.lowestFloorMm;
+  if (floor !== undefined && floor > bottom && floor < top) levels.push(floor);
+  const points = curve(analysis, [...new Set(levels)].sort((a, b) => a - b), 'outline');
   const full = fillAt(analysis, top, 'outline');
   if (!points.ok) throw new Error(points.error.message);
   if (!full.ok) throw new Error(full.error.message);

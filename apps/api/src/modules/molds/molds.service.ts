@@ -130,7 +130,10 @@ export class Molds {
     if (!f.ok) throw new AppError('unprocessable', f.error.code, f.error.message);
     const bottom = model.analysis.bboxMm.min[2];
     const levels = Array.from({ length: PLAN_CURVE_POINTS }, (_, i) => bottom + ((fillLevelMm - bottom) * i) / (PLAN_CURVE_POINTS - 1));
-    const c = curve(model, levels, dam);
+    // The floor is where the curve bends; sampling it exactly keeps the first layer from starting too high.
+    const floor = model.analysis.exact?.lowestFloorMm;
+    if (floor !== undefined && floor > bottom && floor < fillLevelMm) levels.push(floor);
+    const c = curve(model, levels.sort((a, b) => a - b), dam);
     if (!c.ok) throw new AppError('unprocessable', c.error.code, c.error.message);
     const planned = planCavityFromMold({ curve: dedupeLevels(c.value), wettedAreaMm2: f.value.wettedAreaMm2, maxDepthMm: f.value.maxDepthMm }, fillLevelMm);
     if (!planned.ok) throw new AppError('unprocessable', planned.error.code, planned.error.message);
