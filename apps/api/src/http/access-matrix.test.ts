@@ -2,6 +2,7 @@ import type { Test } from 'supertest';
 import { describe, expect, it, beforeAll } from 'vitest';
 import type { Role, SessionResponse } from '@gelpoint/contracts';
 import { PASSWORD, bearer, createShop, uniqueEmail, useHarness, type ShopFixture } from '../test-support/harness';
+import { resinInput } from '../test-support/fixtures';
 import { binaryStl, pocketMouldTriangles } from '../test-support/pocket-mould';
 
 // Fixtures in the own shop use fresh lead sessions too: the matrix signs the lead out everywhere.
@@ -49,28 +50,7 @@ const leadOf = async (w: World, shop: 'own' | 'other') => (shop === 'own' ? sess
 const created = async (w: World, shop: 'own' | 'other', path: string, body: object) =>
   (await h.http().post(path).set(bearer(await leadOf(w, shop))).send(body).expect(201)).body.id as string;
 
-const sampleResin = (name = 'Matrix deep pour') => ({
-  name,
-  use: 'deep_pour',
-  mixRatio: { a: 2, b: 1, basis: 'volume' },
-  densityAGPerMl: 1.16,
-  densityBGPerMl: 0.98,
-  potLifeMin: 45,
-  gelTimeH: 8,
-  tackFreeH: 16,
-  recoatWindow: { earliestH: 12, latestH: 36 },
-  demoldH: 48,
-  fullCureH: 168,
-  referenceTempC: 22,
-  minWorkTempC: 16,
-  maxWorkTempC: 30,
-  maxLayerMm: 25,
-  maxBatchG: 4000,
-  pricePerKit: 120,
-  kitSizeG: 4500,
-  shelfLifeMonths: 12,
-});
-const freshResin = (w: World, shop: 'own' | 'other') => created(w, shop, '/api/shelf/resin-systems', sampleResin());
+const freshResin = (w: World, shop: 'own' | 'other') => created(w, shop, '/api/shelf/resin-systems', resinInput());
 const freshPigment = (w: World, shop: 'own' | 'other') =>
   created(w, shop, '/api/shelf/pigments', { name: 'Matrix teal', kind: 'powder', recommendedPct: 1, maxPct: 3, pricePerPack: 9, packSizeG: 25 });
 const freshLot = async (w: World, shop: 'own' | 'other') =>
@@ -122,9 +102,9 @@ const table: Record<string, Rule> = {
   'DELETE /api/pieces/:id': { allowed: ['lead'], params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
   'GET /api/audit': { allowed: ['lead'] },
   'GET /api/shelf/resin-systems': { allowed: 'member' },
-  'POST /api/shelf/resin-systems': { allowed: ['lead'], body: () => sampleResin() },
+  'POST /api/shelf/resin-systems': { allowed: ['lead'], body: () => resinInput() },
   'GET /api/shelf/resin-systems/:id': { allowed: 'member', params: ownOrOther(freshResin, 'resin') },
-  'PUT /api/shelf/resin-systems/:id': { allowed: ['lead'], body: () => sampleResin('Renamed'), params: ownOrOther(freshResin, 'resin') },
+  'PUT /api/shelf/resin-systems/:id': { allowed: ['lead'], body: () => resinInput({ name: 'Renamed' }), params: ownOrOther(freshResin, 'resin') },
   'DELETE /api/shelf/resin-systems/:id': { allowed: ['lead'], params: ownOrOther(freshResin, 'resin') },
   'GET /api/shelf/pigments': { allowed: 'member' },
   'POST /api/shelf/pigments': { allowed: ['lead'], body: () => ({ name: 'Matrix ochre', kind: 'paste', recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }) },

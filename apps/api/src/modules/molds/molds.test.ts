@@ -1,7 +1,6 @@
-import { spawnSync } from 'node:child_process';
-import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { bearer, createShop, testDatabaseUrl, useHarness, type ShopFixture } from '../../test-support/harness';
+import { analyseQueuedMoulds } from '../../test-support/fixtures';
+import { bearer, createShop, useHarness, type ShopFixture } from '../../test-support/harness';
 import { binaryStl, pocketMouldTriangles } from '../../test-support/pocket-mould';
 
 const h = useHarness({ GELPOINT_MAX_STL_MB: '1' });
@@ -11,17 +10,6 @@ const h = useHarness({ GELPOINT_MAX_STL_MB: '1' });
 const pocket = pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 10, 90, 50], floorZ: 10 });
 const prism = (z: number) => 80 * 40 * (z - 10);
 
-/** The worker, as its own process, analysing what is queued (as the cron tick does). */
-function runWorkerOnce() {
-  const r = spawnSync(process.execPath, ['--import', 'tsx', 'apps/worker/src/main.ts', '--once'], {
-    cwd: join(import.meta.dirname, '../../../../..'),
-    env: { ...process.env, DATABASE_URL: testDatabaseUrl(), GELPOINT_WORKER_JOBS: 'molds', GELPOINT_LOG_LEVEL: 'silent' },
-    encoding: 'utf8',
-    timeout: 60_000,
-  });
-  expect(r.stderr).toBe('');
-  expect(r.status).toBe(0);
-}
 
 let shop: ShopFixture;
 let maker: Awaited<ReturnType<ShopFixture['member']>>;
@@ -41,7 +29,7 @@ describe('mould upload and cavity report', () => {
     const res = await upload(maker, binaryStl(pocket), { units: 'mm', up: 'z' }).expect(202);
     expect(res.body).toMatchObject({ name: 'tray pocket', status: 'queued', units: 'mm', upAxis: 'z', report: null });
     expect(res.body.sha256).toMatch(/^[0-9a-f]{64}$/);
-    runWorkerOnce();
+    analyseQueuedMoulds();
     const mold = (await h.http().get(`/api/molds/${res.body.id}`).set(bearer(maker)).expect(200)).body;
     expect(mold.status).toBe('ready');
     expect(mold.report.watertight).toBe(true);
@@ -68,7 +56,7 @@ describe('mould upload and cavity report', () => {
 
   it('turns units into millimetres: the same numbers in centimetres hold 1000 times the volume', async () => {
     const res = await upload(maker, binaryStl(pocket, 0.1), { units: 'cm' }).expect(202);
-    runWorkerOnce();
+    analyseQueuedMoulds();
     const mold = (await h.http().get(`/api/molds/${res.body.id}`).set(bearer(maker)).expect(200)).body;
     // 1 cm = 10 mm (NIST SP 811): coordinates scaled by 0.1 and read as cm are the same mould.
     expect(mold.report.fillToTop.volumeMm3).toBeCloseTo(prism(30), -1);

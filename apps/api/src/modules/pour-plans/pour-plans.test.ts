@@ -1,33 +1,10 @@
-import { spawnSync } from 'node:child_process';
-import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { bearer, createShop, testDatabaseUrl, useHarness } from '../../test-support/harness';
+import { analyseQueuedMoulds, resinInput as resin } from '../../test-support/fixtures';
+import { bearer, createShop, useHarness } from '../../test-support/harness';
 import { binaryStl, pocketMouldTriangles } from '../../test-support/pocket-mould';
 
 const h = useHarness();
 
-const resin = (over: Record<string, unknown> = {}) => ({
-  name: 'Stillwater Deep 50',
-  use: 'deep_pour',
-  mixRatio: { a: 2, b: 1, basis: 'volume' },
-  densityAGPerMl: 1.16,
-  densityBGPerMl: 0.98,
-  potLifeMin: 45,
-  gelTimeH: 8,
-  tackFreeH: 16,
-  recoatWindow: { earliestH: 12, latestH: 36 },
-  demoldH: 48,
-  fullCureH: 168,
-  referenceTempC: 22,
-  minWorkTempC: 16,
-  maxWorkTempC: 30,
-  maxLayerMm: 20,
-  maxBatchG: 4000,
-  pricePerKit: 120,
-  kitSizeG: 4500,
-  shelfLifeMonths: 12,
-  ...over,
-});
 
 async function setUp() {
   const shop = await createShop(h);
@@ -75,13 +52,7 @@ describe('pour plans', () => {
     const { maker, product, piece } = await setUp();
     const stl = binaryStl(pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 10, 90, 50], floorZ: 10 }));
     const mold = (await h.http().post('/api/molds').set(bearer(maker)).attach('file', stl, 'pocket.stl').field('pieceId', piece.id).expect(202)).body;
-    const r = spawnSync(process.execPath, ['--import', 'tsx', 'apps/worker/src/main.ts', '--once'], {
-      cwd: join(import.meta.dirname, '../../../../..'),
-      env: { ...process.env, DATABASE_URL: testDatabaseUrl(), GELPOINT_WORKER_JOBS: 'molds', GELPOINT_LOG_LEVEL: 'silent' },
-      encoding: 'utf8',
-      timeout: 60_000,
-    });
-    expect(r.status).toBe(0);
+    analyseQueuedMoulds();
     const body = { pieceId: piece.id, name: 'From the mould', cavity: { source: 'mold', moldId: mold.id }, fillLevelMm: 30, deepPour: { resinSystemId: product.id }, overPourPct: 0, shopTempC: 22 };
     const plan = (await h.http().post('/api/pour-plans').set(bearer(maker)).send(body).expect(201)).body;
     // The pocket is a prism 80 × 40 × 20 mm = 64 mL (CRC, prism volume); 20 mm is one layer.

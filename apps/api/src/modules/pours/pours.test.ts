@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { resinInput } from '../../test-support/fixtures';
 import { bearer, createShop, useHarness } from '../../test-support/harness';
 
 const h = useHarness();
@@ -8,35 +9,12 @@ const iso = (msAgo: number) => new Date(Date.now() - msAgo).toISOString();
 // Q = 5000 K, the ASTM C1074 worked example's value: Ea = Q·R = 5000 × 8.314462618 J/mol.
 const EA_FOR_Q5000 = (5000 * 8.314462618) / 1000;
 
-const resin = (over: Record<string, unknown> = {}) => ({
-  name: 'Stillwater Deep 50',
-  use: 'deep_pour',
-  mixRatio: { a: 2, b: 1, basis: 'weight' },
-  densityAGPerMl: 1.16,
-  densityBGPerMl: 0.98,
-  potLifeMin: 45,
-  gelTimeH: 8,
-  tackFreeH: 16,
-  recoatWindow: { earliestH: 12, latestH: 36 },
-  demoldH: 48,
-  fullCureH: 168,
-  referenceTempC: 20,
-  minWorkTempC: 5,
-  maxWorkTempC: 30,
-  maxLayerMm: 25,
-  maxBatchG: 4000,
-  activationEnergyKJPerMol: EA_FOR_Q5000,
-  pricePerKit: 120,
-  kitSizeG: 4500,
-  shelfLifeMonths: 12,
-  ...over,
-});
 
 async function world() {
   const shop = await createShop(h);
   const maker = await shop.member('maker');
   const apprentice = await shop.member('apprentice');
-  const product = (await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resin()).expect(201)).body;
+  const product = (await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ mixRatio: { a: 2, b: 1, basis: 'weight' }, referenceTempC: 20, minWorkTempC: 5, maxLayerMm: 25, activationEnergyKJPerMol: EA_FOR_Q5000 })).expect(201)).body;
   const piece = (await h.http().post('/api/pieces').set(bearer(maker)).send({ name: 'Walnut tray' }).expect(201)).body;
   const plan = (
     await h

@@ -1,31 +1,9 @@
 import { describe, expect, it } from 'vitest';
+import { resinInput } from '../../test-support/fixtures';
 import { bearer, createShop, useHarness } from '../../test-support/harness';
 
 const h = useHarness();
 
-const resinInput = (over: Record<string, unknown> = {}) => ({
-  name: 'Stillwater Deep 50',
-  maker: 'Invented Resins',
-  use: 'deep_pour',
-  mixRatio: { a: 2, b: 1, basis: 'volume' },
-  densityAGPerMl: 1.16,
-  densityBGPerMl: 0.98,
-  potLifeMin: 45,
-  gelTimeH: 8,
-  tackFreeH: 16,
-  recoatWindow: { earliestH: 12, latestH: 36 },
-  demoldH: 48,
-  fullCureH: 168,
-  referenceTempC: 22,
-  minWorkTempC: 16,
-  maxWorkTempC: 30,
-  maxLayerMm: 20,
-  maxBatchG: 4000,
-  pricePerKit: 120,
-  kitSizeG: 4500,
-  shelfLifeMonths: 12,
-  ...over,
-});
 
 describe('resin systems', () => {
   it('keeps the data sheet and fills in the common-practice activation energy when it has none', async () => {
