@@ -1,0 +1,134 @@
+import { mkdtemp, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { encodeStlAscii, encodeStlBinary } from '@gelpoint/mesh';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { cellSolid, mapped, revolvedPocketBlock } from '../../../../packages/mesh/test/moulds';
+import { CliError } from '../command';
+import { command } from './mold';
+
+// A 32 × 24 × 12 mm block with a 20 × 16 mm pocket from z = 5 up: at 10 mm it holds
+// 20 × 16 × 5 = 1600 mm³ on a wetted 20 × 16 floor plus 2 × (20 + 16) × 5 of walls.
+const pocket = cellSolid([0, 6, 26, 32], [0, 4, 20, 24], [0, 5, 12], (i, j, k) => !(i === 1 && j === 1 && k === 1));
+const expectedVolume = 20 * 16 * 5;
+const expectedWetted = 20 * 16 + 2 * (20 + 16) * 5;
+
+let dir = '';
+const files: Record<string, string> = {};
+beforeAll(async () => {
+  dir = await mkdtemp(join(tmpdir(), 'gelpoint-mold-'));
+  const write = async (name: string, bytes: Uint8Array | string): Promise<void> => {
+    files[name] = join(dir, name);
+    await writeFile(files[name]!, bytes);
+  };
+  await write('pocket.stl', encodeStlBinary(pocket, 'solid pocket'));
+  await write('pocket-ascii.stl', encodeStlAscii(pocket, { lineEnding: '\r\n' }));
+  // The same pocket drawn in inches with y up: file (x, y, z) = (x, z, −y) / 25.4 (NIST SP 811).
+  await write('pocket-in-yup.stl', encodeStlBinary(mapped(pocket, (x, y, z) => [x / 25.4, z / 25.4, -y / 25.4])));
+  await write('bowl.stl', encodeStlBinary(revolvedPocketBlock({ halfSide: 15, bottomZ: 0, topZ: 20, profile: [[0, 12], [6, 12], [10, 20]], segments: 64 })));
+  await write('broken.stl', encodeStlBinary(pocket).subarray(0, 300));
+  await write('undercut.stl', encodeStlBinary(cellSolid([0, 5, 15, 25, 35, 40], [0, 5, 15, 25, 35, 40], [0, 5, 10, 20],
+    (i, j, k) => !((k === 2 && i === 2 && j === 2) || (k === 1 && i >= 1 && i <= 3 && j >= 1 && j <= 3)))));
+});
+
+interface Report {
+  triangles: number;
+  watertight: boolean;
+  bboxMm: { min: number[]; max: number[] };
+  enclosedVolumeMm3: number | null;
+  fill: { levelMm: number; dam: string; volumeMm3: number; wettedAreaMm2: number; maxDepthMm: number; trappedAirMm3: number };
+  curve?: { levelMm: number; volumeMm3: number }[];
+  method: string;
+  estimatedErrorPct: number;
+  warnings: { code: string; message: string }[];
+}
+
+async function json(argv: string[]): Promise<Report> {
+  return JSON.parse(await command([...argv, '--json'])) as Report;
+}
+
+describe('gelpoint mold --json', () => {
+  it('prints exactly the report fields', async () => {
+    const out = await json([files['pocket.stl']!, '--level', '10']);
+    expect(Object.keys(out)).toEqual(['triangles', 'watertight', 'bboxMm', 'enclosedVolumeMm3', 'fill', 'method', 'estimatedErrorPct', 'warnings']);
+    expect(Object.keys(out.fill)).toEqual(['levelMm', 'dam', 'volumeMm3', 'wettedAreaMm2', 'maxDepthMm', 'trappedAirMm3']);
+    expect(out.triangles).toBe(pocket.triangleCount);
+    expect(out.watertight).toBe(true);
+    expect(out.bboxMm).toEqual({ min: [0, 0, 0], max: [32, 24, 12] });
+    expect(out.enclosedVolumeMm3).toBeCloseTo(32 * 24 * 12 - 20 * 16 * 7, 6);
+    expect(out.fill).toMatchObject({ levelMm: 10, dam: 'outline' });
+    expect(out.fill.volumeMm3).toBeCloseTo(expectedVolume, 6);
+    expect(out.fill.wettedAreaMm2).toBeCloseTo(expectedWetted, 6);
+    expect(out.fill.maxDepthMm).toBeCloseTo(5, 9);
+    expect(out.fill.trappedAirMm3).toBe(0);
+    expect(out.method).toBe('exact');
+    expect(out.warnings).toEqual([]);
+  });
+
+  it('reads the level in the file’s units along its up axis: inches, y up', async () => {
+    const out = await json([files['pocket-in-yup.stl']!, '--units', 'in', '--up', 'y', '--level', String(10 / 25.4)]);
+    expect(out.fill.levelMm).toBeCloseTo(10, 9);
+    expect(out.fill.volumeMm3).toBeCloseTo(expectedVolume, 3);
+    expect(out.bboxMm.max[2]! - out.bboxMm.min[2]!).toBeCloseTo(12, 4);
+  });
+
+  it('gives the same answer for the ASCII file, and the curve when asked', async () => {
+    const ascii = await json([files['pocket-ascii.stl']!, '--level', '10', '--curve', '5', '--dam', 'box']);
+    const binary = await json([files['pocket.stl']!, '--level', '10', '--dam', 'box']);
+    expect(ascii.fill).toEqual(binary.fill);
+    expect(ascii.curve).toHaveLength(5);
+    expect(ascii.curve![4]).toEqual({ levelMm: 12, volumeMm3: expect.closeTo(20 * 16 * 7, 6) as unknown as number });
+    expect(ascii.curve![0]!.volumeMm3).toBe(0);
+  });
+
+  it('warns about trapped air under an overhang', async () => {
+    const out = await json([files['undercut.stl']!, '--level', '20']);
+    expect(out.method).toBe('columns');
+    expect(out.fill.trappedAirMm3).toBeGreaterThan(3900);
+    expect(out.warnings.map((w) => w.code)).toContain('trapped_air');
+  });
+});
+
+describe('gelpoint mold, readable', () => {
+  it('reports millilitres and litres for a metric file', async () => {
+    const text = await command([files['pocket.stl']!, '--level', '10']);
+    const [, ml, litres] = /resin +([\d.]+) mL \(([\d.]+) L\)/.exec(text) ?? [];
+    expect(Number(ml)).toBeCloseTo(expectedVolume / 1000, 3);
+    expect(Number(litres)).toBeCloseTo(expectedVolume / 1e6, 6);
+    expect(text).toMatch(/fill level +10\.00 mm/);
+  });
+
+  it('reports US fluid ounces and gallons for a file in inches (NIST SP 811)', async () => {
+    const text = await command([files['pocket-in-yup.stl']!, '--units', 'in', '--up', 'y', '--level', String(10 / 25.4)]);
+    // 1600 mm³ = 1.6 mL = 1.6 / 29.5735295625 US fl oz = 1.6 / 3785.411784 US gal.
+    const [, ounces, gallons] = /resin +([\d.]+) US fl oz \(([\d.]+) US gal\)/.exec(text) ?? [];
+    expect(Number(ounces)).toBeCloseTo(1.6 / 29.5735295625, 4);
+    expect(Number(gallons)).toBeCloseTo(1.6 / 3785.411784, 7);
+    expect(text).toMatch(/fill level +0\.3937 in/);
+    expect(text).toContain('in²');
+  });
+});
+
+describe('gelpoint mold, bad input', () => {
+  const failure = async (argv: string[]): Promise<string> => {
+    try {
+      await command(argv);
+    } catch (err) {
+      expect(err).toBeInstanceOf(CliError);
+      expect((err as Error).message).not.toContain('\n');
+      return (err as Error).message;
+    }
+    throw new Error('expected a CliError');
+  };
+
+  it('names the problem in one line', async () => {
+    expect(await failure([join(dir, 'missing.stl'), '--level', '3'])).toMatch(/cannot read .*missing\.stl.*ENOENT/);
+    expect(await failure([files['broken.stl']!, '--level', '3'])).toMatch(/cut short/);
+    expect(await failure([files['pocket.stl']!, '--level', 'ten'])).toMatch(/--level must be a number/);
+    expect(await failure([files['pocket.stl']!])).toMatch(/--level is required/);
+    expect(await failure([files['pocket.stl']!, '--level', '3', '--colour', 'red'])).toMatch(/colour/);
+    expect(await failure([files['pocket.stl']!, '--level', '3', '--units', 'ft'])).toMatch(/--units must be mm, cm or in/);
+    expect(await failure([files['pocket.stl']!, '--level', '3', '--curve', '1'])).toMatch(/--curve/);
+    expect(await failure(['--level', '3'])).toMatch(/STL file/);
+  });
+});

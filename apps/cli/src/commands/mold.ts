@@ -1,0 +1,130 @@
+import { readFile } from 'node:fs/promises';
+import {
+  analyzeStl, curve, fillAt, mmPerUnit, readAnalysis,
+  type CavityFill, type CavityModel, type CurvePoint, type Dam, type FileUnits, type MeshWarning, type UpAxis,
+} from '@gelpoint/mesh';
+import { CliError, numberOption, parseOptions, type Command } from '../command';
+
+const options = {
+  units: { type: 'string' },
+  up: { type: 'string' },
+  level: { type: 'string' },
+  dam: { type: 'string' },
+  curve: { type: 'string' },
+  json: { type: 'boolean' },
+} as const;
+
+// NIST SP 811, appendix B: 1 US fl oz = 29.5735295625 mL; 1 US gal = 231 in³ = 3.785411784 L.
+const mm3PerMl = 1000;
+const mlPerUsFluidOunce = 29.5735295625;
+const mlPerUsGallon = 3785.411784;
+
+interface MoldReport {
+  triangles: number;
+  watertight: boolean;
+  bboxMm: { min: [number, number, number]; max: [number, number, number] };
+  enclosedVolumeMm3: number | null;
+  fill: { levelMm: number; dam: Dam; volumeMm3: number; wettedAreaMm2: number; maxDepthMm: number; trappedAirMm3: number };
+  curve?: CurvePoint[];
+  method: CavityFill['method'];
+  estimatedErrorPct: number;
+  warnings: MeshWarning[];
+}
+
+function oneOf<T extends string>(value: string | undefined, flag: string, allowed: readonly T[], fallback: T): T {
+  if (value === undefined) return fallback;
+  if ((allowed as readonly string[]).includes(value)) return value as T;
+  throw new CliError(`--${flag} must be ${allowed.join(', ').replace(/, ([^,]*)$/, ' or $1')}, got "${value}"`);
+}
+
+/** Four significant figures, without exponents: 15914, 252.6, 1.600, 0.0002526. */
+function figures(value: number): string {
+  if (value === 0) return '0';
+  if (Math.abs(value) >= 1000) return value.toFixed(0);
+  const decimals = Math.max(0, 3 - Math.floor(Math.log10(Math.abs(value))));
+  return value.toFixed(Math.min(decimals, 12));
+}
+
+function volumeText(volumeMm3: number, units: FileUnits): string {
+  const ml = volumeMm3 / mm3PerMl;
+  if (units === 'in') return `${figures(ml / mlPerUsFluidOunce)} US fl oz (${figures(ml / mlPerUsGallon)} US gal)`;
+  return `${figures(ml)} mL (${figures(ml / 1000)} L)`;
+}
+
+function readable(file: string, report: MoldReport, units: FileUnits, up: UpAxis): string {
+  const scale = mmPerUnit[units];
+  const length = (mm: number): string => `${figures(mm / scale)} ${units}`;
+  const area = (mm2: number): string => `${figures(mm2 / (scale * scale))} ${units}²`;
+  const { min, max } = report.bboxMm;
+  const f = report.fill;
+  const lines = [
+    `Cavity report for ${file}`,
+    `  mesh          ${report.triangles} triangles, ${report.watertight ? 'watertight' : 'not watertight'}`
+      + (report.enclosedVolumeMm3 === null ? '' : `, encloses ${volumeText(report.enclosedVolumeMm3, units)}`),
+    `  size          ${[0, 1, 2].map((k) => length(max[k]! - min[k]!)).join(' × ')} (x × y × z, ${up === 'z' ? 'z up' : `file axis ${up} turned to point up`})`,
+    `  fill level    ${length(f.levelMm)} (${f.dam === 'box' ? 'box dam around the bounding box' : 'dams along the outline'})`,
+    `  resin         ${volumeText(f.volumeMm3, units)}`,
+    `  wetted area   ${area(f.wettedAreaMm2)} (floor and walls, for the seal coat)`,
+    `  deepest       ${length(f.maxDepthMm)}`,
+    `  trapped air   ${volumeText(f.trappedAirMm3, units)}`,
+    `  method        ${report.method}, estimated error ${report.estimatedErrorPct.toPrecision(2)} %`,
+  ];
+  if (report.curve) {
+    lines.push('  volume by level');
+    for (const p of report.curve) lines.push(`    ${length(p.levelMm).padStart(14)}  ${volumeText(p.volumeMm3, units)}`);
+  }
+  for (const w of report.warnings) lines.push(`  caution: ${w.message}`);
+  return lines.join('\n');
+}
+
+/**
+ * gelpoint mold FILE: the cavity report of a mould's STL at one level. The level is given in the
+ * file's units along its up axis, the same numbers the maker reads in the CAD program.
+ */
+export const command: Command = async (argv) => {
+  const { values, positionals } = parseOptions(argv, options, true);
+  if (positionals.length !== 1) throw new CliError(positionals.length === 0 ? 'give the mould\'s STL file (gelpoint mold FILE --level L)' : `give one STL file, got ${positionals.length}`);
+  const file = positionals[0]!;
+  const units = oneOf(values.units, 'units', ['mm', 'cm', 'in'] as const, 'mm');
+  const up = oneOf(values.up, 'up', ['x', 'y', 'z'] as const, 'z');
+  const dam = oneOf(values.dam, 'dam', ['outline', 'box'] as const, 'outline');
+  const level = numberOption(values.level, 'level', { required: true })!;
+  const curveCount = numberOption(values.curve, 'curve');
+  if (curveCount !== undefined && (!Number.isInteger(curveCount) || curveCount < 2)) {
+    throw new CliError(`--curve must be a whole number of levels, at least 2, got "${values.curve}"`);
+  }
+
+  let bytes: Uint8Array;
+  try {
+    bytes = new Uint8Array(await readFile(file));
+  } catch (err) {
+    const reason = err instanceof Error && 'code' in err ? String((err as NodeJS.ErrnoException).code) : 'unreadable';
+    throw new CliError(`cannot read "${file}" (${reason}); check the path`);
+  }
+  const levelMm = level * mmPerUnit[units];
+  const analysis = analyzeStl(bytes, { units, up, levelsMm: [levelMm] });
+  if (!analysis.ok) throw new CliError(analysis.error.message);
+  const model: CavityModel = unwrap(readAnalysis(analysis.value));
+  const fill = unwrap(fillAt(model, levelMm, dam));
+  const a = analysis.value;
+  const report: MoldReport = {
+    triangles: a.triangles,
+    watertight: a.watertight,
+    bboxMm: a.bboxMm,
+    enclosedVolumeMm3: a.enclosedVolumeMm3,
+    fill: {
+      levelMm: fill.levelMm, dam: fill.dam, volumeMm3: fill.volumeMm3,
+      wettedAreaMm2: fill.wettedAreaMm2, maxDepthMm: fill.maxDepthMm, trappedAirMm3: fill.trappedAirMm3,
+    },
+    ...(curveCount === undefined ? {} : { curve: unwrap(curve(model, curveCount, dam)) }),
+    method: fill.method,
+    estimatedErrorPct: fill.estimatedErrorPct,
+    warnings: [...a.warnings, ...fill.warnings].map((w) => ({ code: w.code, message: w.message })),
+  };
+  return values.json ? JSON.stringify(report, null, 2) : readable(file, report, units, up);
+};
+
+function unwrap<T>(result: { ok: true; value: T } | { ok: false; error: { message: string } }): T {
+  if (!result.ok) throw new CliError(result.error.message);
+  return result.value;
+}

@@ -1,0 +1,83 @@
+/**
+ * How the triangles meet along their edges. A mould surface that holds resin must be closed:
+ * every edge shared by exactly two triangles that run along it in opposite directions.
+ */
+export interface EdgeTopology {
+  edgeCount: number;
+  /** Edges used by one triangle only (holes in the surface). */
+  openEdges: number;
+  /** Edges used by three or more triangles. */
+  nonManifoldEdges: number;
+  /** Edges shared by two triangles that run along it in the same direction (one of them is wound backwards). */
+  misorientedEdges: number;
+  /** For half-edge 3t + k (from corner k to corner k + 1 of triangle t): the triangle across it, or -1. Empty unless asked for. */
+  neighbour: Int32Array;
+  /** 1 where the triangle across the half-edge runs along it in the same direction. Empty unless asked for. */
+  sameDirection: Uint8Array;
+}
+
+/**
+ * Groups half-edges by their lower vertex index (a counting sort, no hash map), then pairs them
+ * inside each small group by their upper vertex.
+ */
+export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNeighbours = false): EdgeTopology {
+  const halfEdges = triangles.length;
+  const start = new Uint32Array(vertexCount + 1);
+  for (let e = 0; e < halfEdges; e++) {
+    const a = triangles[e]!, b = triangles[e % 3 === 2 ? e - 2 : e + 1]!;
+    start[(a < b ? a : b) + 1]!++;
+  }
+  for (let v = 0; v < vertexCount; v++) start[v + 1]! += start[v]!;
+  const fill = start.slice(0, vertexCount);
+  // Each entry: the half-edge, and its upper vertex with the direction in the top bit, so the
+  // pairing pass below reads memory in order.
+  const grouped = new Uint32Array(withNeighbours ? halfEdges : 0);
+  const upperWay = new Uint32Array(halfEdges);
+  for (let e = 0; e < halfEdges; e++) {
+    const a = triangles[e]!, b = triangles[e % 3 === 2 ? e - 2 : e + 1]!;
+    const at = fill[a < b ? a : b]!++;
+    if (withNeighbours) grouped[at] = e;
+    upperWay[at] = a < b ? (b | 0x80000000) >>> 0 : a;
+  }
+
+  const neighbour = withNeighbours ? new Int32Array(halfEdges).fill(-1) : new Int32Array(0);
+  const sameDirection = new Uint8Array(withNeighbours ? halfEdges : 0);
+  // Entries already paired are overwritten with this mark (no vertex has the largest index).
+  const done = 0xffffffff;
+  let edgeCount = 0, openEdges = 0, nonManifoldEdges = 0, misorientedEdges = 0;
+
+  for (let v = 0; v < vertexCount; v++) {
+    const from = start[v]!, to = start[v + 1]!;
+    for (let i = from; i < to; i++) {
+      const way = upperWay[i]!;
+      if (way === done) continue;
+      const upper = way & 0x7fffffff;
+      let uses = 1;
+      let j2 = -1, way2 = 0;
+      for (let j = i + 1; j < to; j++) {
+        const other = upperWay[j]!;
+        if (other === done || (other & 0x7fffffff) !== upper) continue;
+        upperWay[j] = done;
+        uses++;
+        if (j2 < 0) { j2 = j; way2 = other; }
+      }
+      edgeCount++;
+      if (uses === 1) {
+        openEdges++;
+      } else if (uses > 2) {
+        nonManifoldEdges++;
+      } else {
+        const same = way >>> 31 === way2 >>> 31 ? 1 : 0;
+        if (same) misorientedEdges++;
+        if (withNeighbours) {
+          const e1 = grouped[i]!, e2 = grouped[j2]!;
+          neighbour[e1] = (e2 / 3) | 0;
+          neighbour[e2] = (e1 / 3) | 0;
+          sameDirection[e1] = same;
+          sameDirection[e2] = same;
+        }
+      }
+    }
+  }
+  return { edgeCount, openEdges, nonManifoldEdges, misorientedEdges, neighbour, sameDirection };
+}

@@ -1,0 +1,164 @@
+import { readAnalysis } from './analysis-codec';
+import type { CavityAnalysis, CavityFill, CavityModel, CurvePoint, MethodFigures } from './cavity-analysis';
+import { columnCurve } from './column-curve';
+import { columnFill } from './column-fill';
+import { checkDam, type Dam } from './dam';
+import { LevelQuantity, seriesFillErrorMm3, seriesValue } from './level-series';
+import { fail, ok, type MeshWarning, type Result } from './result';
+
+/** Either the stored analysis (decoded on each call) or a model from readAnalysis (decoded once). */
+export type CavitySource = CavityAnalysis | CavityModel;
+
+function modelOf(source: CavitySource): Result<CavityModel> {
+  return source.kind === 'gelpoint-cavity-model' ? ok(source) : readAnalysis(source);
+}
+
+function checkLevel(levelMm: number): Result<number> {
+  if (typeof levelMm !== 'number' || !Number.isFinite(levelMm)) {
+    return fail('level_invalid', `The fill level must be a finite number of millimetres, got ${String(levelMm)}.`);
+  }
+  return ok(levelMm);
+}
+
+function percent(errorMm3: number, volumeMm3: number): number {
+  return volumeMm3 > 0 ? (100 * errorMm3) / volumeMm3 : 0;
+}
+
+/** Fill volume by the exact series: outline fill, plus the box dam's table and under-face resin. */
+function exactVolume(model: CavityModel, h: number, dam: Dam): number {
+  const facts = model.analysis.exact!;
+  const zMin = model.analysis.bboxMm.min[2];
+  let volume = seriesValue(model.series, LevelQuantity.Fill, h);
+  if (dam === 'box' && h > zMin) volume += facts.tableAreaMm2 * (h - zMin) + seriesValue(model.series, LevelQuantity.UnderBox, h);
+  return Math.max(0, volume);
+}
+
+function exactErrorMm3(model: CavityModel, h: number): number {
+  return seriesFillErrorMm3(model.series, h) + model.analysis.exact!.unseenMm3;
+}
+
+/**
+ * Resin up to level h (mm, Z-up frame) with the given dam: volume, wetted area, deepest column,
+ * trapped air, the depth map, and which method answered with what error estimate.
+ */
+export function fillAt(source: CavitySource, levelMm: number, dam: Dam = 'outline'): Result<CavityFill> {
+  const model = modelOf(source);
+  if (!model.ok) return model;
+  const level = checkLevel(levelMm);
+  if (!level.ok) return level;
+  const damChecked = checkDam(dam);
+  if (!damChecked.ok) return damChecked;
+  const { analysis, series, grid } = model.value;
+  const h = level.value;
+  const zMin = analysis.bboxMm.min[2];
+  const columns = columnFill(grid, h, dam, zMin);
+  const columnFigures = {
+    volumeMm3: columns.volumeMm3,
+    estimatedErrorPct: percent(columns.errorMm3, columns.volumeMm3),
+    resolutionMm: Math.max(grid.cellX, grid.cellY),
+  };
+  const wettedAreaMm2 = Math.max(0, seriesValue(series, LevelQuantity.Wetted, h) + (dam === 'box' ? seriesValue(series, LevelQuantity.WettedBox, h) : 0));
+
+  let volumeMm3: number, trappedAirMm3: number, maxDepthMm: number, estimatedErrorPct: number;
+  let exact: MethodFigures | null = null;
+  if (analysis.method === 'exact') {
+    const facts = analysis.exact!;
+    volumeMm3 = exactVolume(model.value, h, dam);
+    estimatedErrorPct = percent(exactErrorMm3(model.value, h), volumeMm3);
+    exact = { volumeMm3, estimatedErrorPct };
+    trappedAirMm3 = dam === 'box' ? Math.max(0, seriesValue(series, LevelQuantity.TrappedBox, h)) : 0;
+    maxDepthMm = Math.max(0, h - facts.lowestFloorMm);
+    const tableReached = facts.tableAreaMm2 > 0 || (facts.raisedUndersideTopMm !== null && h <= facts.raisedUndersideTopMm);
+    if (dam === 'box' && tableReached) maxDepthMm = Math.max(maxDepthMm, h - zMin);
+  } else {
+    volumeMm3 = columns.volumeMm3;
+    estimatedErrorPct = columnFigures.estimatedErrorPct;
+    trappedAirMm3 = columns.trappedAirMm3;
+    maxDepthMm = columns.maxDepthMm;
+  }
+
+  const warnings: MeshWarning[] = [];
+  const box = analysis.bboxMm;
+  const boxVolume = (box.max[0] - box.min[0]) * (box.max[1] - box.min[1]) * (box.max[2] - box.min[2]);
+  if (trappedAirMm3 > 1e-6 * boxVolume) {
+    warnings.push({
+      code: 'trapped_air',
+      message: `About ${(trappedAirMm3 / 1000).toPrecision(3)} mL of space below the level sits under overhangs where the resin cannot reach it, so air will be trapped there: vent those pockets or turn the mould so they open upwards.`,
+    });
+  }
+  if (analysis.method === 'columns' && estimatedErrorPct > analysis.targetErrorPct) {
+    warnings.push({
+      code: 'accuracy_target_missed',
+      message: `The fill is within about ${estimatedErrorPct.toPrecision(2)} % rather than the ${analysis.targetErrorPct} % asked for: the column grid hit its size limit. Add a little more margin to the pour.`,
+    });
+  }
+
+  return ok({
+    levelMm: h,
+    dam,
+    volumeMm3,
+    wettedAreaMm2,
+    maxDepthMm,
+    trappedAirMm3,
+    method: analysis.method,
+    resolutionMm: analysis.method === 'columns' ? columnFigures.resolutionMm : null,
+    estimatedErrorPct,
+    exact,
+    columns: columnFigures,
+    depthMap: { originMm: [grid.originX, grid.originY], cellMm: [grid.cellX, grid.cellY], nx: grid.nx, ny: grid.ny, depthsMm: columns.depthsMm },
+    warnings,
+  });
+}
+
+/** Evenly spaced levels from the mould's lowest z to its highest z. */
+function evenLevels(model: CavityModel, count: number): number[] {
+  const { min, max } = model.analysis.bboxMm;
+  return Array.from({ length: count }, (_, k) => (k === count - 1 ? max[2] : min[2] + ((max[2] - min[2]) * k) / (count - 1)));
+}
+
+/**
+ * The volume-versus-level curve: at `levels` evenly spaced levels from the mould's lowest to its
+ * highest z when given a count (at least 2), or at the given levels (mm).
+ */
+export function curve(source: CavitySource, levels: number | number[], dam: Dam = 'outline'): Result<CurvePoint[]> {
+  const model = modelOf(source);
+  if (!model.ok) return model;
+  const damChecked = checkDam(dam);
+  if (!damChecked.ok) return damChecked;
+  let points: number[];
+  if (typeof levels === 'number') {
+    if (!Number.isInteger(levels) || levels < 2) {
+      return fail('level_invalid', `The curve needs a whole number of levels, at least 2, got ${String(levels)}.`);
+    }
+    points = evenLevels(model.value, levels);
+  } else {
+    if (!levels.every((h) => typeof h === 'number' && Number.isFinite(h))) {
+      return fail('level_invalid', 'Every curve level must be a finite number of millimetres.');
+    }
+    points = levels;
+  }
+  const m = model.value;
+  if (m.analysis.method === 'exact') {
+    return ok(points.map((levelMm) => ({ levelMm, volumeMm3: exactVolume(m, levelMm, dam) })));
+  }
+  const order = points.map((_, i) => i).sort((a, b) => points[a]! - points[b]!);
+  const sorted = Float64Array.from(order.map((i) => points[i]!));
+  const volumes = columnCurve(m.grid, sorted, dam, m.analysis.bboxMm.min[2]);
+  const out: CurvePoint[] = new Array(points.length);
+  order.forEach((i, k) => { out[i] = { levelMm: points[i]!, volumeMm3: volumes[k]! }; });
+  return ok(out);
+}
+
+/** Volume of each layer between consecutive levels (mm, ascending): n levels give n − 1 layers. */
+export function layerVolumes(source: CavitySource, levelsMm: number[], dam: Dam = 'outline'): Result<number[]> {
+  if (levelsMm.length < 2) return fail('level_invalid', `Layers need at least two levels (the bottom and the top of the first layer), got ${levelsMm.length}.`);
+  for (let i = 1; i < levelsMm.length; i++) {
+    if (!(levelsMm[i]! >= levelsMm[i - 1]!)) {
+      return fail('levels_not_ascending', `Layer level ${i + 1} (${String(levelsMm[i])} mm) is below the level before it; list the layer levels from the bottom up.`);
+    }
+  }
+  const points = curve(source, levelsMm, dam);
+  if (!points.ok) return points;
+  const v = points.value;
+  return ok(v.slice(1).map((p, i) => Math.max(0, p.volumeMm3 - v[i]!.volumeMm3)));
+}

@@ -1,0 +1,327 @@
+import { knotLocator } from './level-knots';
+import { triangleBelow, type TriangleBelow } from './triangle-fill';
+import type { TriangleTable } from './triangle-table';
+import { wetWithBox, wetWithOutline, type WettingClasses } from './wetting-classes';
+
+/**
+ * Quantities that are sums of per-triangle closed forms, as functions of the level h:
+ *  fill        resin held with the outline dam: Σ over up-facing faces of shadow × depth(h)
+ *  wetted      mould surface touching resin with the outline dam: Σ area × share(h)
+ *  wettedBox   what the box dam adds: walls that face the table inside the box
+ *  underBox    what the box dam adds below raised undersides: resin on the table under a face
+ *              that looks down, while the level is still below that face
+ *  trappedBox  free space under such a face once the level has passed it (cut off from the pour)
+ * Each is a piecewise polynomial of degree ≤ 3 whose pieces change only at corner heights (and at
+ * ceilings), so it is stored as cubic pieces between knots.
+ */
+export const enum LevelQuantity {
+  Fill = 0,
+  Wetted = 1,
+  WettedBox = 2,
+  UnderBox = 3,
+  TrappedBox = 4,
+}
+export const levelQuantityCount = 5;
+
+export interface LevelSeries {
+  /** Ascending; knots[0] is the mould's lowest z, the last its highest z. */
+  knots: Float64Array;
+  /** Piece k of quantity q, valid for knots[k] < h ≤ knots[k + 1]: c0..c3 at (q * pieces + k) * 4, in t = h − knots[k]. */
+  coefficients: Float64Array;
+  /** Per quantity: value at the top knot and slope above it. */
+  endValue: Float64Array;
+  endSlope: Float64Array;
+  /** True when the knots hold every corner height and ceiling: each piece is then the exact polynomial. */
+  complete: boolean;
+  /** When not complete: a bound on the fill's interpolation error on each piece (mm³). */
+  fillPieceErrorMm3: Float32Array | null;
+}
+
+/** Exact sums at a set of levels: values and slopes, from below (left) and from above (right). */
+interface LevelSamples {
+  valueLeft: Float64Array;
+  slopeLeft: Float64Array;
+  valueRight: Float64Array;
+  slopeRight: Float64Array;
+}
+
+/** Knots per block of the run arrays; each block keeps its own origin so sums stay small. */
+const blockSize = 32;
+/** Ranges this short are evaluated point by point instead of as a run. */
+const shortRange = 4;
+
+/**
+ * Evaluates every quantity at the ascending `points`, exactly. Between its corner heights a
+ * triangle's contribution is one polynomial of degree ≤ 3 in h, so over the points inside each
+ * such range it is added once, as a run in difference arrays of polynomial coefficients (in blocks
+ * of points with their own origin, which keeps the sums free of cancellation); points that are a
+ * corner height or a ceiling, where the limits from below and above differ, and very short ranges
+ * are evaluated directly. The cost is O(triangles + points), however many points a tall wall spans.
+ */
+export function sampleLevels(
+  points: Float64Array, table: TriangleTable, classes: WettingClasses, zMin: number, cornerShadow: Float64Array | null = null,
+): LevelSamples {
+  const n = points.length;
+  const size = levelQuantityCount * n;
+  const samples: LevelSamples = {
+    valueLeft: new Float64Array(size), slopeLeft: new Float64Array(size),
+    valueRight: new Float64Array(size), slopeRight: new Float64Array(size),
+  };
+  const { valueLeft, slopeLeft, valueRight, slopeRight } = samples;
+  // runs[(q * 4 + i) * (n + 1) + k]: coefficient i of quantity q, as differences over k.
+  const runs = new Float64Array(levelQuantityCount * 4 * (n + 1));
+  const below: TriangleBelow = { share: 0, shareSlope: 0, depth: 0 };
+  // Per-range polynomials in w = h − z0: share (3 coefficients), depth (4), then per quantity (4).
+  const share = new Float64Array(3), depth = new Float64Array(4), quantity = new Float64Array(4);
+
+  // Unbounded ranges (above a triangle, below one) are linear in h: plain difference arrays.
+  const linear = new Float64Array(levelQuantityCount * 2 * (n + 1));
+  const addRun = (q: number, from: number, to: number, z0: number): void => {
+    for (let lo = from; lo < to;) {
+      const blockStart = lo - (lo % blockSize);
+      const hi = Math.min(to, blockStart + blockSize);
+      const d = points[blockStart]! - z0;
+      const c0 = quantity[0]!, c1 = quantity[1]!, c2 = quantity[2]!, c3 = quantity[3]!;
+      const e0 = c0 + d * (c1 + d * (c2 + d * c3)), e1 = c1 + d * (2 * c2 + 3 * c3 * d), e2 = c2 + 3 * c3 * d, e3 = c3;
+      const base = q * 4 * (n + 1);
+      runs[base + lo]! += e0; runs[base + hi]! -= e0;
+      runs[base + (n + 1) + lo]! += e1; runs[base + (n + 1) + hi]! -= e1;
+      runs[base + 2 * (n + 1) + lo]! += e2; runs[base + 2 * (n + 1) + hi]! -= e2;
+      runs[base + 3 * (n + 1) + lo]! += e3; runs[base + 3 * (n + 1) + hi]! -= e3;
+      lo = hi;
+    }
+  };
+
+  // The triangle being added; one object reused so the helpers below are created once.
+  const tri = { z0: 0, z1: 0, z2: 0, shadowArea: 0, area: 0, up: false, down: false, wetQ: -1, wetEnd: 0 };
+  const { atLeast, above } = knotLocator(points);
+
+  const direct = (k: number, right: boolean, both: boolean, wetToo: boolean): void => {
+    const h = points[k]!;
+    triangleBelow(tri.z0, tri.z1, tri.z2, h, right, below);
+    const value = right ? valueRight : valueLeft;
+    const slope = right ? slopeRight : slopeLeft;
+    if (tri.up) {
+      const v = tri.shadowArea * below.depth, dv = tri.shadowArea * below.share;
+      value[LevelQuantity.Fill * n + k]! += v; slope[LevelQuantity.Fill * n + k]! += dv;
+      if (both) { valueRight[LevelQuantity.Fill * n + k]! += v; slopeRight[LevelQuantity.Fill * n + k]! += dv; }
+    }
+    if (tri.down) {
+      const head = h - zMin;
+      const v1 = tri.shadowArea * (1 - below.share) * head, d1 = tri.shadowArea * (1 - below.share - below.shareSlope * head);
+      const v2 = tri.shadowArea * (head * below.share - below.depth), d2 = tri.shadowArea * head * below.shareSlope;
+      value[LevelQuantity.UnderBox * n + k]! += v1; slope[LevelQuantity.UnderBox * n + k]! += d1;
+      value[LevelQuantity.TrappedBox * n + k]! += v2; slope[LevelQuantity.TrappedBox * n + k]! += d2;
+      if (both) {
+        valueRight[LevelQuantity.UnderBox * n + k]! += v1; slopeRight[LevelQuantity.UnderBox * n + k]! += d1;
+        valueRight[LevelQuantity.TrappedBox * n + k]! += v2; slopeRight[LevelQuantity.TrappedBox * n + k]! += d2;
+      }
+    }
+    if (tri.wetQ >= 0 && wetToo) {
+      const v = tri.area * below.share, dv = tri.area * below.shareSlope;
+      value[tri.wetQ * n + k]! += v; slope[tri.wetQ * n + k]! += dv;
+      if (both) { valueRight[tri.wetQ * n + k]! += v; slopeRight[tri.wetQ * n + k]! += dv; }
+    }
+  };
+
+  /** Adds a + b·h over points [from, to) for quantity q. */
+  const addLinear = (q: number, from: number, to: number, a: number, b: number): void => {
+    if (to <= from) return;
+    const base = q * 2 * (n + 1);
+    linear[base + from]! += a; linear[base + to]! -= a;
+    linear[base + (n + 1) + from]! += b; linear[base + (n + 1) + to]! -= b;
+  };
+
+  /**
+   * One open range of points inside a branch, where the contribution is the polynomial in
+   * share/depth that `setBranch` wrote (in w = h − z0): short ones point by point, long ones as runs.
+   */
+  const branch = (from: number, to: number, setBranch: () => void): void => {
+    if (to <= from) return;
+    if (to - from <= shortRange) {
+      for (let k = from; k < to; k++) direct(k, false, true, k < tri.wetEnd);
+      return;
+    }
+    setBranch();
+    if (tri.up) {
+      for (let i = 0; i < 4; i++) quantity[i] = tri.shadowArea * depth[i]!;
+      addRun(LevelQuantity.Fill, from, to, tri.z0);
+    }
+    if (tri.down) {
+      // (1 − share)(w + g) and (w + g)·share − depth, with g = z0 − zMin.
+      const s0 = share[0]!, s1 = share[1]!, s2 = share[2]!, g = tri.z0 - zMin;
+      quantity[0] = tri.shadowArea * (1 - s0) * g;
+      quantity[1] = tri.shadowArea * ((1 - s0) - s1 * g);
+      quantity[2] = tri.shadowArea * (-s1 - s2 * g);
+      quantity[3] = tri.shadowArea * -s2;
+      addRun(LevelQuantity.UnderBox, from, to, tri.z0);
+      quantity[0] = tri.shadowArea * (g * s0 - depth[0]!);
+      quantity[1] = tri.shadowArea * (s0 + g * s1 - depth[1]!);
+      quantity[2] = tri.shadowArea * (s1 + g * s2 - depth[2]!);
+      quantity[3] = tri.shadowArea * (s2 - depth[3]!);
+      addRun(LevelQuantity.TrappedBox, from, to, tri.z0);
+    }
+    if (tri.wetQ >= 0) {
+      quantity[0] = tri.area * share[0]!; quantity[1] = tri.area * share[1]!; quantity[2] = tri.area * share[2]!; quantity[3] = 0;
+      addRun(tri.wetQ, from, Math.min(to, tri.wetEnd), tri.z0);
+    }
+  };
+  const setLower = (): void => {
+    const lower = (tri.z1 - tri.z0) * (tri.z2 - tri.z0);
+    share[0] = 0; share[1] = 0; share[2] = 1 / lower;
+    depth[0] = 0; depth[1] = 0; depth[2] = 0; depth[3] = 1 / (3 * lower);
+  };
+  const setUpper = (): void => {
+    const span = tri.z2 - tri.z0, z10 = tri.z1 - tri.z0, z21 = tri.z2 - tri.z1, upper = z21 * span;
+    share[0] = 1 - (span * span) / upper; share[1] = (2 * span) / upper; share[2] = -1 / upper;
+    depth[0] = (z10 * z10) / (3 * span) - z10 - (z21 * z21 * z21 - span * span * span) / (3 * upper);
+    depth[1] = 1 - (span * span) / upper; depth[2] = span / upper; depth[3] = -1 / (3 * upper);
+  };
+
+  for (let t = 0; t < table.count; t++) {
+    const facing = table.facing[t]!;
+    const wet = classes.wet[t]!;
+    if (facing === 0 && wet === 0) continue;
+    const z0 = table.sortedZ[3 * t]!, z1 = table.sortedZ[3 * t + 1]!, z2 = table.sortedZ[3 * t + 2]!;
+    const shadowArea = Math.abs(table.shadowArea[t]!), area = table.area[t]!;
+    // A ceiling only cuts the face off from wetting; the fill sums are used where there is none.
+    const ceiling = classes.ceiling[t]!;
+    const up = facing > 0, down = facing < 0;
+    const wetQ = wet & wetWithOutline ? LevelQuantity.Wetted : wet & wetWithBox ? LevelQuantity.WettedBox : -1;
+    // Most corners fall between points, and then the index of the first point above is the same.
+    const i0a = atLeast(z0), i0b = points[i0a] === z0 ? above(z0, i0a) : i0a;
+    const i1a = z1 === z0 ? i0a : atLeast(z1), i1b = z1 === z0 ? i0b : points[i1a] === z1 ? above(z1, i1a) : i1a;
+    const i2a = z2 === z1 ? i1a : atLeast(z2), i2b = z2 === z1 ? i1b : points[i2a] === z2 ? above(z2, i2a) : i2a;
+    const wetEnd = ceiling === Infinity ? n : atLeast(ceiling);
+    tri.z0 = z0; tri.z1 = z1; tri.z2 = z2; tri.shadowArea = shadowArea; tri.area = area;
+    tri.up = up; tri.down = down; tri.wetQ = wetQ; tri.wetEnd = wetEnd;
+
+    if (cornerShadow && up) {
+      // For the error bound: the pieces holding a corner strictly inside them.
+      if (i0a > 0 && i0a < n && i0a === i0b) cornerShadow[i0a - 1]! += shadowArea;
+      if (i1a > 0 && i1a < n && i1a === i1b && i1a !== i0a) cornerShadow[i1a - 1]! += shadowArea;
+      if (i2a > 0 && i2a < n && i2a === i2b && i2a !== i1a) cornerShadow[i2a - 1]! += shadowArea;
+    }
+    // Below a face that looks down, before the level reaches it, the table holds resin beneath it.
+    if (down) addLinear(LevelQuantity.UnderBox, 0, i0a, -shadowArea * zMin, shadowArea);
+    if (z1 > z0) branch(i0b, i1a, setLower);
+    if (z2 > z1) branch(i1b, i2a, setUpper);
+    // Above the triangle: fill grows with the whole shadow, the share is 1, trapped space is fixed.
+    const mean = (z0 + z1 + z2) / 3;
+    if (up) addLinear(LevelQuantity.Fill, i2b, n, -shadowArea * mean, shadowArea);
+    if (down) addLinear(LevelQuantity.TrappedBox, i2b, n, shadowArea * (mean - zMin), 0);
+    if (wetQ >= 0) addLinear(wetQ, i2b, wetEnd, area, 0);
+
+    // Corner heights: both limits, directly.
+    for (let k = i0a; k < i0b; k++) { direct(k, false, false, points[k]! <= ceiling); direct(k, true, false, points[k]! < ceiling); }
+    if (z1 !== z0) for (let k = i1a; k < i1b; k++) { direct(k, false, false, points[k]! <= ceiling); direct(k, true, false, points[k]! < ceiling); }
+    if (z2 !== z1) for (let k = i2a; k < i2b; k++) { direct(k, false, false, points[k]! <= ceiling); direct(k, true, false, points[k]! < ceiling); }
+    // At the ceiling itself the face is still wet from below, no longer from above.
+    if (wetQ >= 0 && ceiling !== Infinity && ceiling !== z0 && ceiling !== z1 && ceiling !== z2) {
+      for (let k = wetEnd; k < n && points[k] === ceiling; k++) {
+        triangleBelow(z0, z1, z2, ceiling, false, below);
+        valueLeft[wetQ * n + k]! += area * below.share;
+        slopeLeft[wetQ * n + k]! += area * below.shareSlope;
+      }
+    }
+  }
+
+  for (let q = 0; q < levelQuantityCount; q++) {
+    const base = q * 4 * (n + 1), linearBase = q * 2 * (n + 1);
+    let c0 = 0, c1 = 0, c2 = 0, c3 = 0, a = 0, b = 0;
+    for (let k = 0; k < n; k++) {
+      c0 += runs[base + k]!; c1 += runs[base + (n + 1) + k]!; c2 += runs[base + 2 * (n + 1) + k]!; c3 += runs[base + 3 * (n + 1) + k]!;
+      a += linear[linearBase + k]!; b += linear[linearBase + (n + 1) + k]!;
+      const sOff = points[k]! - points[k - (k % blockSize)]!;
+      const v = c0 + sOff * (c1 + sOff * (c2 + sOff * c3)) + a + b * points[k]!;
+      const dv = c1 + sOff * (2 * c2 + 3 * c3 * sOff) + b;
+      valueLeft[q * n + k]! += v; slopeLeft[q * n + k]! += dv;
+      valueRight[q * n + k]! += v; slopeRight[q * n + k]! += dv;
+    }
+  }
+  return samples;
+}
+
+/** Cubic Hermite pieces through exact values and one-sided slopes: exact wherever the function is one cubic. */
+export function hermitePieces(knots: Float64Array, samples: LevelSamples): Float64Array {
+  const n = knots.length, pieces = n - 1;
+  const coefficients = new Float64Array(levelQuantityCount * pieces * 4);
+  for (let q = 0; q < levelQuantityCount; q++) {
+    for (let k = 0; k < pieces; k++) {
+      const width = knots[k + 1]! - knots[k]!;
+      const y0 = samples.valueRight[q * n + k]!, m0 = samples.slopeRight[q * n + k]!;
+      const y1 = samples.valueLeft[q * n + k + 1]!, m1 = samples.slopeLeft[q * n + k + 1]!;
+      const secant = (y1 - y0) / width;
+      const at = (q * pieces + k) * 4;
+      coefficients[at] = y0;
+      coefficients[at + 1] = m0;
+      coefficients[at + 2] = (3 * secant - 2 * m0 - m1) / width;
+      coefficients[at + 3] = (m0 + m1 - 2 * secant) / (width * width);
+    }
+  }
+  return coefficients;
+}
+
+/** The value of quantity q at level h (the limit from below at a knot). */
+export function seriesValue(series: LevelSeries, q: LevelQuantity, h: number): number {
+  const knots = series.knots;
+  const last = knots.length - 1;
+  if (!(h > knots[0]!)) return 0;
+  if (h > knots[last]!) return series.endValue[q]! + series.endSlope[q]! * (h - knots[last]!);
+  let lo = 0, hi = last;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >>> 1;
+    if (knots[mid]! < h) lo = mid; else hi = mid;
+  }
+  const t = h - knots[lo]!;
+  const at = (q * last + lo) * 4;
+  const c = series.coefficients;
+  return c[at]! + t * (c[at + 1]! + t * (c[at + 2]! + t * c[at + 3]!));
+}
+
+/** Bound on the fill's interpolation error (mm³) on the piece holding h; 0 when the series is exact. */
+export function seriesFillErrorMm3(series: LevelSeries, h: number): number {
+  const errors = series.fillPieceErrorMm3;
+  if (!errors) return 0;
+  const knots = series.knots;
+  const last = knots.length - 1;
+  if (!(h > knots[0]!) || h > knots[last]!) return 0;
+  let lo = 0, hi = last;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >>> 1;
+    if (knots[mid]! < h) lo = mid; else hi = mid;
+  }
+  return errors[lo]!;
+}
+
+/**
+ * Bound on the interpolation error of the fill on each piece, when the knots are not complete.
+ * The Hermite cubic reproduces every cubic, so on a piece only triangles with a corner strictly
+ * inside it contribute error, each through g = shadow · depth(h), whose second derivative
+ * shadow · share'(h) is never negative and integrates to at most shadow over the piece. By the
+ * Peano kernel theorem (the interpolation reproduces linear functions), |error| ≤ sup|K| · ∫ g''
+ * with K the kernel of the hinge (t − s)₊; for cubic Hermite on a piece of width Δ, sup|K| = 4Δ/27
+ * (approached by a hinge just inside the piece, at a third of the way along).
+ */
+function fillPieceBounds(knots: Float64Array, cornerShadow: Float64Array): Float32Array {
+  const bounds = new Float32Array(knots.length - 1);
+  for (let k = 0; k + 1 < knots.length; k++) bounds[k] = (4 / 27) * (knots[k + 1]! - knots[k]!) * cornerShadow[k]! * (1 + 1e-6);
+  return bounds;
+}
+
+/** Builds the series on the given knots, with the fill's error bound per piece when they are not complete. */
+export function buildLevelSeries(
+  knots: Float64Array, complete: boolean, table: TriangleTable, classes: WettingClasses, zMin: number,
+): LevelSeries {
+  const n = knots.length;
+  const cornerShadow = complete ? null : new Float64Array(n - 1);
+  const samples = sampleLevels(knots, table, classes, zMin, cornerShadow);
+  const coefficients = hermitePieces(knots, samples);
+  const endValue = new Float64Array(levelQuantityCount);
+  const endSlope = new Float64Array(levelQuantityCount);
+  for (let q = 0; q < levelQuantityCount; q++) {
+    endValue[q] = samples.valueRight[q * n + n - 1]!;
+    endSlope[q] = samples.slopeRight[q * n + n - 1]!;
+  }
+  return { knots, coefficients, endValue, endSlope, complete, fillPieceErrorMm3: cornerShadow ? fillPieceBounds(knots, cornerShadow) : null };
+}

@@ -1,0 +1,48 @@
+/**
+ * Per-triangle quantities every stage needs, computed once into flat typed arrays.
+ * With n = (b − a) × (c − a) for corners a, b, c (outward winding): the triangle's area is |n|/2
+ * and the signed area of its shadow on the table is n_z/2 (positive when it faces up).
+ */
+export interface TriangleTable {
+  count: number;
+  /** n_z / 2: signed area of the triangle's shadow on the xy plane. */
+  shadowArea: Float64Array;
+  /** |n| / 2. */
+  area: Float64Array;
+  /** Lowest, middle and highest corner z, three per triangle. */
+  sortedZ: Float64Array;
+  /** 1 up, -1 down, 0 exactly vertical (no shadow). */
+  facing: Int8Array;
+  /** Within 1e-5 of vertical: its wetting is decided like a wall's, by the space beside it. */
+  steep: Uint8Array;
+}
+
+/** Slope below which a face counts as a wall: float32 exports leave this much noise on vertical faces. */
+export const steepNormalZ = 1e-5;
+
+export function buildTriangleTable(positions: Float64Array, triangles: Uint32Array): TriangleTable {
+  const count = triangles.length / 3;
+  const shadowArea = new Float64Array(count);
+  const area = new Float64Array(count);
+  const sortedZ = new Float64Array(count * 3);
+  const facing = new Int8Array(count);
+  const steep = new Uint8Array(count);
+  for (let t = 0; t < count; t++) {
+    const a = 3 * triangles[3 * t]!, b = 3 * triangles[3 * t + 1]!, c = 3 * triangles[3 * t + 2]!;
+    const ax = positions[a]!, ay = positions[a + 1]!, az = positions[a + 2]!;
+    const ux = positions[b]! - ax, uy = positions[b + 1]! - ay, uz = positions[b + 2]! - az;
+    const vx = positions[c]! - ax, vy = positions[c + 1]! - ay, vz = positions[c + 2]! - az;
+    const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
+    const len = Math.sqrt(nx * nx + ny * ny + nz * nz);
+    shadowArea[t] = nz / 2;
+    area[t] = len / 2;
+    facing[t] = nz > 0 ? 1 : nz < 0 ? -1 : 0;
+    steep[t] = Math.abs(nz) <= steepNormalZ * len ? 1 : 0;
+    let z0 = az, z1 = positions[b + 2]!, z2 = positions[c + 2]!;
+    if (z0 > z1) { const s = z0; z0 = z1; z1 = s; }
+    if (z1 > z2) { const s = z1; z1 = z2; z2 = s; }
+    if (z0 > z1) { const s = z0; z0 = z1; z1 = s; }
+    sortedZ[3 * t] = z0; sortedZ[3 * t + 1] = z1; sortedZ[3 * t + 2] = z2;
+  }
+  return { count, shadowArea, area, sortedZ, facing, steep };
+}

@@ -1,0 +1,166 @@
+import { toZUpMm, type UpAxis } from './frame';
+import type { TriangleSoup } from './stl/triangle-soup';
+
+export interface WeldedMesh {
+  /** Three coordinates per vertex, millimetres, Z-up. */
+  positionsMm: Float64Array;
+  /** Three vertex indices per triangle, in the file's winding. */
+  triangles: Uint32Array;
+  vertexCount: number;
+  triangleCount: number;
+  /** Triangles dropped because two of their corners became the same vertex. */
+  degenerateDropped: number;
+}
+
+export interface WeldFrame {
+  up: UpAxis;
+  /** Millimetres per file unit. */
+  scale: number;
+  /** 0: corners weld only when bit-identical; above 0: corners weld when they share a cell of this size (mm). */
+  toleranceMm: number;
+}
+
+function mix(a: number, b: number, c: number): number {
+  let h = Math.imul(a, 0x9e3779b1) ^ Math.imul(b, 0x85ebca77) ^ Math.imul(c, 0xc2b2ae3d);
+  h ^= h >>> 15;
+  h = Math.imul(h, 0x2c1b3c6d);
+  h ^= h >>> 12;
+  return h >>> 0;
+}
+
+/** A second mix for the big table, so its slots do not follow the recent-corner cache's bits. */
+function spread(hash: number): number {
+  const h = Math.imul(hash ^ (hash >>> 16), 0x7feb352d);
+  return (h ^ (h >>> 15)) >>> 0;
+}
+
+/**
+ * Corners → vertex ids by open addressing on three 32-bit keys per vertex. The table and the key
+ * store grow by doubling, so a closed mesh (about one vertex per six corners) never pays for the
+ * worst case of a soup with no shared corners.
+ */
+class VertexTable {
+  keys: Uint32Array;
+  count = 0;
+  private slots: Int32Array;
+  private mask: number;
+
+  constructor(expected: number) {
+    let size = 1024;
+    while (size < expected * 2) size *= 2;
+    this.slots = new Int32Array(size).fill(-1);
+    this.mask = size - 1;
+    this.keys = new Uint32Array(3 * Math.max(256, expected));
+  }
+
+  idOf(kx: number, ky: number, kz: number, hash: number): number {
+    const keys = this.keys;
+    let h = spread(hash) & this.mask;
+    for (;;) {
+      const slot = this.slots[h]!;
+      if (slot < 0) break;
+      if (keys[3 * slot] === kx && keys[3 * slot + 1] === ky && keys[3 * slot + 2] === kz) return slot;
+      h = (h + 1) & this.mask;
+    }
+    const id = this.count++;
+    if (3 * this.count > this.keys.length) {
+      const grown = new Uint32Array(this.keys.length * 2);
+      grown.set(this.keys);
+      this.keys = grown;
+    }
+    this.keys[3 * id] = kx; this.keys[3 * id + 1] = ky; this.keys[3 * id + 2] = kz;
+    this.slots[h] = id;
+    if (2 * this.count > this.slots.length) this.grow();
+    return id;
+  }
+
+  private grow(): void {
+    const size = this.slots.length * 2;
+    this.slots = new Int32Array(size).fill(-1);
+    this.mask = size - 1;
+    for (let v = 0; v < this.count; v++) {
+      let h = spread(mix(this.keys[3 * v]!, this.keys[3 * v + 1]!, this.keys[3 * v + 2]!)) & this.mask;
+      while (this.slots[h]! >= 0) h = (h + 1) & this.mask;
+      this.slots[h] = v;
+    }
+  }
+}
+
+/**
+ * Turns the triangle soup into an indexed mesh by merging corners that are the same point, and
+ * writes the result in the Z-up millimetre frame.
+ */
+export function weldSoup(soup: TriangleSoup, frame: WeldFrame): WeldedMesh {
+  const corners = soup.triangleCount * 3;
+  const cornerVertex = new Uint32Array(corners);
+  const table = new VertexTable(Math.ceil(corners / 5));
+  const p = soup.positions;
+  let positionsMm: Float64Array;
+
+  if (frame.toleranceMm > 0) {
+    // Keys are the corner's cell on a grid of the tolerance; prepareMesh keeps cell numbers
+    // within 32 bits, so equal keys mean equal cells.
+    const inv = 1 / frame.toleranceMm;
+    const scratch = new Float64Array(3);
+    const firstCorner: number[] = [];
+    for (let c = 0; c < corners; c++) {
+      toZUpMm(p[3 * c]!, p[3 * c + 1]!, p[3 * c + 2]!, frame.up, frame.scale, scratch, 0);
+      const kx = Math.round(scratch[0]! * inv) >>> 0, ky = Math.round(scratch[1]! * inv) >>> 0, kz = Math.round(scratch[2]! * inv) >>> 0;
+      const before = table.count;
+      cornerVertex[c] = table.idOf(kx, ky, kz, mix(kx, ky, kz));
+      if (table.count > before) firstCorner.push(c);
+    }
+    positionsMm = new Float64Array(table.count * 3);
+    for (let v = 0; v < table.count; v++) {
+      const c = firstCorner[v]!;
+      toZUpMm(p[3 * c]!, p[3 * c + 1]!, p[3 * c + 2]!, frame.up, frame.scale, positionsMm, 3 * v);
+    }
+  } else {
+    const bits = new Uint32Array(p.buffer, p.byteOffset, corners * 3);
+    // Files list neighbouring triangles one after another, so most corners were seen a moment
+    // ago: a small direct-mapped cache of recent corners skips the big table for them.
+    const recentMask = 16383;
+    const recentId = new Int32Array(recentMask + 1).fill(-1);
+    const recentKey = new Uint32Array(3 * (recentMask + 1));
+    for (let c = 0; c < corners; c++) {
+      // -0 and +0 are the same point; their bit patterns are not.
+      let bx = bits[3 * c]!, by = bits[3 * c + 1]!, bz = bits[3 * c + 2]!;
+      if (bx === 0x80000000) bx = 0;
+      if (by === 0x80000000) by = 0;
+      if (bz === 0x80000000) bz = 0;
+      const hash = mix(bx, by, bz);
+      const r = hash & recentMask;
+      const cached = recentId[r]!;
+      if (cached >= 0 && recentKey[3 * r] === bx && recentKey[3 * r + 1] === by && recentKey[3 * r + 2] === bz) {
+        cornerVertex[c] = cached;
+        continue;
+      }
+      const id = table.idOf(bx, by, bz, hash);
+      cornerVertex[c] = id;
+      recentId[r] = id;
+      recentKey[3 * r] = bx; recentKey[3 * r + 1] = by; recentKey[3 * r + 2] = bz;
+    }
+    // The keys are the corners' float32 bits: read them back as coordinates.
+    const coordinates = new Float32Array(table.keys.buffer, 0, table.count * 3);
+    positionsMm = new Float64Array(table.count * 3);
+    for (let v = 0; v < table.count; v++) {
+      toZUpMm(coordinates[3 * v]!, coordinates[3 * v + 1]!, coordinates[3 * v + 2]!, frame.up, frame.scale, positionsMm, 3 * v);
+    }
+  }
+
+  let kept = 0;
+  for (let t = 0; t < soup.triangleCount; t++) {
+    const a = cornerVertex[3 * t]!, b = cornerVertex[3 * t + 1]!, c = cornerVertex[3 * t + 2]!;
+    if (a === b || b === c || a === c) continue;
+    // Compacting in place: a kept triangle never lands ahead of where it was read.
+    cornerVertex[3 * kept] = a; cornerVertex[3 * kept + 1] = b; cornerVertex[3 * kept + 2] = c;
+    kept++;
+  }
+  return {
+    positionsMm,
+    triangles: kept === soup.triangleCount ? cornerVertex : cornerVertex.slice(0, kept * 3),
+    vertexCount: table.count,
+    triangleCount: kept,
+    degenerateDropped: soup.triangleCount - kept,
+  };
+}
