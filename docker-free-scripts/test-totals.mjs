@@ -9,7 +9,9 @@ let skipped = 0;
 if (existsSync(file)) {
   const r = JSON.parse(readFileSync(file, 'utf8'));
   passed = r.numPassedTests ?? 0;
-  failed = (r.numFailedTests ?? 0) + (r.numFailedTestSuites ?? 0) - (r.testResults ?? []).filter((s) => s.status === 'failed' && (s.assertionResults ?? []).some((a) => a.status === 'failed')).length;
+  // A file that failed to load (or whose hooks failed) has no failed test of its own: count it once.
+  const brokenFiles = (r.testResults ?? []).filter((s) => s.status === 'failed' && !(s.assertionResults ?? []).some((a) => a.status === 'failed')).length;
+  failed = (r.numFailedTests ?? 0) + brokenFiles;
   skipped = (r.numPendingTests ?? 0) + (r.numTodoTests ?? 0);
 } else {
   failed += 1;
