@@ -8,7 +8,7 @@ const hour = 3_600_000;
 interface DemoPour {
   pieceName: string;
   planName: string;
-  cavity: ReturnType<typeof channelCavity>;
+  shape: { kind: 'channel' | 'rectangle'; lengthMm: number; widthMm: number; depthMm: number };
   fillLevelMm: number;
   sealCoat: boolean;
   pigmentPct: number;
@@ -26,7 +26,7 @@ const demoPours: DemoPour[] = [
   {
     pieceName: 'River table, 1.8 m',
     planName: 'Channel pour, smoky teal',
-    cavity: channelCavity({ lengthMm: 1800, widthMm: 180, depthMm: 45 }),
+    shape: { kind: 'channel', lengthMm: 1800, widthMm: 180, depthMm: 45 },
     fillLevelMm: 45,
     sealCoat: true,
     pigmentPct: 1,
@@ -38,7 +38,7 @@ const demoPours: DemoPour[] = [
   {
     pieceName: 'Coaster set of six',
     planName: 'Six clear coasters',
-    cavity: rectangleCavity({ lengthMm: 6 * 95, widthMm: 95, depthMm: 8 }),
+    shape: { kind: 'rectangle', lengthMm: 6 * 95, widthMm: 95, depthMm: 8 },
     fillLevelMm: 8,
     sealCoat: false,
     pigmentPct: 0,
@@ -60,7 +60,9 @@ export async function seedDemoPours(m: EntityManager, shopId: string, people: Ma
   const lotOf = async (part: 'A' | 'B', resinSystemId: string) => m.findOneByOrFail(Lot, { shopId, part, resinSystemId });
 
   for (const d of demoPours) {
-    if (!d.cavity.ok) throw new Error(d.cavity.error.message);
+    const { kind, ...size } = d.shape;
+    const cavity = kind === 'channel' ? channelCavity(size) : rectangleCavity(size);
+    if (!cavity.ok) throw new Error(cavity.error.message);
     const piece = await m.findOneByOrFail(Piece, { shopId, name: d.pieceName });
     const snapshot = {
       deepPour: { id: deep.id, ...toCoreResinSystem(deep) },
@@ -71,7 +73,7 @@ export async function seedDemoPours(m: EntityManager, shopId: string, people: Ma
     const inputs = {
       pieceId: piece.id,
       name: d.planName,
-      cavity: { source: 'shape', shape: { kind: 'demo' } },
+      cavity: { source: 'shape', shape: d.shape },
       fillLevelMm: d.fillLevelMm,
       deepPour: { resinSystemId: deep.id, pigmentId: snapshot.pigment?.id ?? null, pigmentPct: d.pigmentPct },
       sealCoat: d.sealCoat ? { resinSystemId: seal.id, filmThicknessMm: 0.15, coats: 1, absorptionFactor: 1.3 } : null,
@@ -80,7 +82,7 @@ export async function seedDemoPours(m: EntityManager, shopId: string, people: Ma
       shopTempC: d.tempC,
     };
     const planned = buildPourPlan({
-      cavity: { curve: d.cavity.value.curve, wettedAreaMm2: d.cavity.value.wettedAreaMm2 },
+      cavity: { curve: cavity.value.curve, wettedAreaMm2: cavity.value.wettedAreaMm2 },
       fillLevelMm: d.fillLevelMm,
       deepPour: { product: snapshot.deepPour, ...(snapshot.pigment ? { pigment: { pigment: snapshot.pigment, pct: d.pigmentPct } } : {}) },
       ...(snapshot.sealCoat ? { sealCoat: { product: snapshot.sealCoat, filmThicknessMm: 0.15, coats: 1, absorptionFactor: 1.3 } } : {}),
