@@ -15,6 +15,36 @@ export interface AuditLink {
   before?: string;
 }
 
+export interface NewMouldLink {
+  pieceId?: string;
+}
+
+export interface ShelfLink {
+  tab?: 'resin-systems' | 'pigments' | 'lots';
+  q?: string;
+  page?: number;
+  sort?: string;
+  dir?: 'ascending' | 'descending';
+  archived?: boolean;
+  status?: string;
+  part?: string;
+}
+
+export interface PourPlansLink {
+  pieceId?: string;
+  page?: number;
+}
+
+export interface CureBoardLink {
+  status?: 'active' | 'released' | 'machined' | 'all';
+  readyToday?: boolean;
+  page?: number;
+}
+
+export interface NewPourLink {
+  planId?: string;
+}
+
 function withSearch(path: string, entries: Record<string, string | number | undefined>): string {
   const search = new URLSearchParams();
   for (const [name, value] of Object.entries(entries)) {
@@ -56,9 +86,81 @@ export const paths = {
     getHref: (pieceId: string) => `/pieces/${encodeURIComponent(pieceId)}`,
   },
   moulds: { path: '/moulds', getHref: () => '/moulds' },
-  pourPlans: { path: '/pour-plans', getHref: () => '/pour-plans' },
-  cureBoard: { path: '/cure-board', getHref: () => '/cure-board' },
-  shelf: { path: '/shelf', getHref: () => '/shelf' },
+  newMould: {
+    path: '/moulds/new',
+    getHref: (link: NewMouldLink = {}) => withSearch('/moulds/new', { pieceId: link.pieceId }),
+  },
+  mould: {
+    path: '/moulds/:moldId',
+    getHref: (moldId: string) => `/moulds/${encodeURIComponent(moldId)}`,
+  },
+  pourPlans: {
+    path: '/pour-plans',
+    getHref: (link: PourPlansLink = {}) =>
+      withSearch('/pour-plans', { pieceId: link.pieceId, page: link.page !== undefined && link.page > 1 ? link.page : undefined }),
+  },
+  newPourPlan: {
+    path: '/pieces/:pieceId/pour-plans/new',
+    getHref: (pieceId: string) => `/pieces/${encodeURIComponent(pieceId)}/pour-plans/new`,
+  },
+  pourPlan: {
+    path: '/pour-plans/:planId',
+    getHref: (planId: string) => `/pour-plans/${encodeURIComponent(planId)}`,
+  },
+  editPourPlan: {
+    path: '/pour-plans/:planId/edit',
+    getHref: (planId: string) => `/pour-plans/${encodeURIComponent(planId)}/edit`,
+  },
+  runSheet: {
+    path: '/pour-plans/:planId/run-sheet',
+    getHref: (planId: string) => `/pour-plans/${encodeURIComponent(planId)}/run-sheet`,
+  },
+  cureBoard: {
+    path: '/cure-board',
+    getHref: (link: CureBoardLink = {}) =>
+      withSearch('/cure-board', {
+        status: link.status === 'active' ? undefined : link.status,
+        readyToday: link.readyToday ? 'true' : undefined,
+        page: link.page !== undefined && link.page > 1 ? link.page : undefined,
+      }),
+  },
+  newPour: {
+    path: '/pours/new',
+    getHref: (link: NewPourLink = {}) => withSearch('/pours/new', { planId: link.planId }),
+  },
+  pour: {
+    path: '/pours/:pourId',
+    getHref: (pourId: string) => `/pours/${encodeURIComponent(pourId)}`,
+  },
+  shelf: {
+    path: '/shelf',
+    getHref: (link: ShelfLink = {}) =>
+      withSearch('/shelf', {
+        tab: link.tab === 'resin-systems' ? undefined : link.tab,
+        q: link.q,
+        page: link.page !== undefined && link.page > 1 ? link.page : undefined,
+        sort: link.sort,
+        dir: link.sort && link.dir === 'descending' ? link.dir : undefined,
+        archived: link.archived ? 'true' : undefined,
+        status: link.status,
+        part: link.part,
+      }),
+  },
+  newResinSystem: { path: '/shelf/resin-systems/new', getHref: () => '/shelf/resin-systems/new' },
+  resinSystem: {
+    path: '/shelf/resin-systems/:resinSystemId',
+    getHref: (resinSystemId: string) => `/shelf/resin-systems/${encodeURIComponent(resinSystemId)}`,
+  },
+  newPigment: { path: '/shelf/pigments/new', getHref: () => '/shelf/pigments/new' },
+  pigment: {
+    path: '/shelf/pigments/:pigmentId',
+    getHref: (pigmentId: string) => `/shelf/pigments/${encodeURIComponent(pigmentId)}`,
+  },
+  newLot: { path: '/shelf/lots/new', getHref: () => '/shelf/lots/new' },
+  lot: {
+    path: '/shelf/lots/:lotId',
+    getHref: (lotId: string) => `/shelf/lots/${encodeURIComponent(lotId)}`,
+  },
   team: { path: '/team', getHref: () => '/team' },
   shopSettings: { path: '/shop-settings', getHref: () => '/shop-settings' },
   audit: {

@@ -34,6 +34,8 @@ export interface ApiClient {
   get<T>(path: string, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
   post<T>(path: string, body: unknown, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
   patch<T>(path: string, body: unknown, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
+  /** A full replacement: the API stores the body as the whole new entry. */
+  put<T>(path: string, body: unknown, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
   /** For answers without content (204), such as sign-out or a password change. */
   postWithoutContent(path: string, body?: unknown, options?: RequestOptions): Promise<void>;
   delete(path: string, options?: RequestOptions): Promise<void>;
@@ -85,6 +87,7 @@ export function createApiClient(config: ApiClientConfig): ApiClient {
     get: async (path, schema, options) => readAs(await send('GET', path, undefined, options), schema),
     post: async (path, body, schema, options) => readAs(await send('POST', path, body, options), schema),
     patch: async (path, body, schema, options) => readAs(await send('PATCH', path, body, options), schema),
+    put: async (path, body, schema, options) => readAs(await send('PUT', path, body, options), schema),
     postWithoutContent: async (path, body, options) => {
       await send('POST', path, body, options);
     },

@@ -1,0 +1,126 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { launchBrowser, watchedPage } from './support/browser';
+import { E2eStack } from './support/stack';
+
+type Vec3 = [number, number, number];
+
+function cross(a: Vec3, b: Vec3): Vec3 {
+  return [a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2], a[0] * b[1] - a[1] * b[0]];
+}
+
+function minus(a: Vec3, b: Vec3): Vec3 {
+  return [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
+}
+
+/**
+ * A 100 × 60 × 30 mm block with an 80 × 40 × 20 mm pocket cut from the top, as a closed, outward-wound
+ * binary STL: every quad is listed counter-clockwise as seen from outside the solid.
+ */
+function pocketBlockStl(): { bytes: Buffer; signedVolumeMm3: number } {
+  const quads: [Vec3, Vec3, Vec3, Vec3][] = [
+    [[0, 0, 0], [0, 60, 0], [100, 60, 0], [100, 0, 0]],
+    [[0, 0, 0], [100, 0, 0], [100, 0, 30], [0, 0, 30]],
+    [[100, 0, 0], [100, 60, 0], [100, 60, 30], [100, 0, 30]],
+    [[100, 60, 0], [0, 60, 0], [0, 60, 30], [100, 60, 30]],
+    [[0, 60, 0], [0, 0, 0], [0, 0, 30], [0, 60, 30]],
+    [[0, 0, 30], [100, 0, 30], [90, 10, 30], [10, 10, 30]],
+    [[100, 0, 30], [100, 60, 30], [90, 50, 30], [90, 10, 30]],
+    [[100, 60, 30], [0, 60, 30], [10, 50, 30], [90, 50, 30]],
+    [[0, 60, 30], [0, 0, 30], [10, 10, 30], [10, 50, 30]],
+    [[90, 10, 10], [10, 10, 10], [10, 10, 30], [90, 10, 30]],
+    [[90, 50, 10], [90, 10, 10], [90, 10, 30], [90, 50, 30]],
+    [[10, 50, 10], [90, 50, 10], [90, 50, 30], [10, 50, 30]],
+    [[10, 10, 10], [10, 50, 10], [10, 50, 30], [10, 10, 30]],
+    [[10, 10, 10], [90, 10, 10], [90, 50, 10], [10, 50, 10]],
+  ];
+  const triangles = quads.flatMap(([a, b, c, d]) => [[a, b, c], [a, c, d]] as [Vec3, Vec3, Vec3][]);
+  const bytes = Buffer.alloc(84 + 50 * triangles.length);
+  bytes.write('gelpoint e2e pocket block', 0, 'latin1');
+  bytes.writeUInt32LE(triangles.length, 80);
+  let signedVolumeMm3 = 0;
+  triangles.forEach(([a, b, c], t) => {
+    const n = cross(minus(b, a), minus(c, a));
+    const length = Math.hypot(...n);
+    const at = 84 + 50 * t;
+    [...n.map((v) => v / length), ...a, ...b, ...c].forEach((v, i) => bytes.writeFloatLE(v, at + 4 * i));
+    signedVolumeMm3 += (a[0] * (b[1] * c[2] - b[2] * c[1]) - a[1] * (b[0] * c[2] - b[2] * c[0]) + a[2] * (b[0] * c[1] - b[1] * c[0])) / 6;
+  });
+  return { bytes, signedVolumeMm3 };
+}
+
+const stack = new E2eStack();
+let browser: Browser;
+
+beforeAll(async () => {
+  await stack.start();
+  browser = await launchBrowser();
+}, 60_000);
+afterAll(async () => {
+  await browser?.close();
+  await stack.stop();
+});
+
+describe('the mould screen in a real browser', () => {
+  it('uploads a pocket block as the maker, reads 64 mL at the rim and 32 mL at half depth, and shows it in 3D', { timeout: 90_000 }, async () => {
+    const stl = pocketBlockStl();
+    // Divergence theorem (signed tetrahedra): the solid is the block less the pocket, 100·60·30 − 80·40·20 mm³,
+    // so the file is closed and wound outward as the analysis expects.
+    expect(stl.signedVolumeMm3).toBeCloseTo(100 * 60 * 30 - 80 * 40 * 20, 6);
+
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const { page, watch } = await watchedPage(context, stack.baseUrl);
+    await page.goto(`${stack.baseUrl}/moulds`);
+    await page.waitForURL(/\/sign-in/);
+    await page.getByLabel('Email').fill('maker@gelpoint.test');
+    await page.getByLabel('Password').fill('gelpoint-demo');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL(/\/moulds$/);
+
+    // The quick shape works in the browser alone. CRC Concise Encyclopedia of Mathematics: a right prism holds base × height, 80 × 40 × 20 mm³ = 64 mL.
+    const measure = page.getByRole('form', { name: 'Measure the cavity' });
+    await measure.getByLabel('Length (mm)').fill('80');
+    await measure.getByLabel('Width (mm)').fill('40');
+    await measure.getByLabel('Depth (mm)').fill('20');
+    await expect.poll(() => measure.getByText('64.0 mL').isVisible()).toBe(true);
+
+    await page.getByRole('link', { name: 'Upload an STL' }).first().click();
+    await page.waitForURL(/\/moulds\/new$/);
+    const name = `E2E pocket block ${Date.now()}`;
+    const form = page.getByRole('form', { name: 'Upload a mould' });
+    await form.getByLabel('STL file').setInputFiles({ name: 'pocket-block.stl', mimeType: 'model/stl', buffer: stl.bytes });
+    await expect.poll(() => form.getByText('Read as millimetres, the mould is 100.0 mm × 60.0 mm × 30.0 mm.').isVisible()).toBe(true);
+    await form.getByLabel('Name', { exact: true }).fill(name);
+    await form.getByRole('button', { name: 'Upload and measure' }).click();
+    await page.waitForURL(/\/moulds\/[0-9a-f-]{36}$/);
+
+    // Prism formula (CRC): the pocket holds 80 × 40 × 20 mm³ = 64 000 mm³ = 64 mL up to its rim, the top of the mould.
+    const volume = page.getByTestId('fill-volume');
+    await expect.poll(() => volume.textContent(), { timeout: 30_000 }).toBe('64.0 mL');
+    await expect.poll(() => page.locator('[data-testid="mold-3d"] canvas').count(), { timeout: 15_000 }).toBe(1);
+
+    const level = page.getByLabel('Fill level', { exact: true });
+    // Half the pocket's depth: its floor stands 10 mm above the block's underside, so 20 mm above the lowest point; 80 × 40 × 10 mm³ = 32 mL.
+    await level.fill('20');
+    await expect.poll(() => volume.textContent()).toBe('32.0 mL');
+    await level.fill('30');
+    await expect.poll(() => volume.textContent()).toBe('64.0 mL');
+
+    await page.getByLabel('Layer thickness').fill('6');
+    const layers = page.getByRole('table', { name: /Layers from the cavity floor/ });
+    // A 20 mm deep pour with at most 6 mm a layer takes ⌈20 / 6⌉ = 4 equal layers, the last ending at the rim.
+    await expect.poll(() => layers.getByRole('row').count()).toBe(5);
+    await expect.poll(() => layers.getByRole('row').last().getByRole('cell').nth(2).textContent()).toBe('30.0 mm');
+    await expect.poll(() => page.getByText(/Layer lines at/).count()).toBe(1);
+
+    await expect.poll(() => page.getByRole('img', { name: 'Resin depth map' }).count()).toBe(1);
+    await expect.poll(() => page.getByText('Watertight').isVisible()).toBe(true);
+
+    await page.getByRole('button', { name: 'Delete mould' }).click();
+    await page.getByRole('button', { name: 'Delete for good' }).click();
+    await page.waitForURL(/\/moulds$/);
+    await expect.poll(() => page.getByText(name).count()).toBe(0);
+    expect(watch.problems).toEqual([]);
+    await context.close();
+  });
+});

@@ -1,0 +1,101 @@
+import { useQuery, type QueryClient } from '@tanstack/react-query';
+import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Alert } from '../../../../components/ui/Alert';
+import { ButtonLink } from '../../../../components/ui/ButtonLink';
+import { Card } from '../../../../components/ui/Card';
+import { DateTime } from '../../../../components/ui/DateTime';
+import { DocumentTitle } from '../../../../components/ui/DocumentTitle';
+import { ErrorAlert } from '../../../../components/ui/ErrorAlert';
+import { PageHeader } from '../../../../components/ui/PageHeader';
+import { PageSpinner } from '../../../../components/ui/PageSpinner';
+import { TextLink } from '../../../../components/ui/TextLink';
+import { paths } from '../../../../config/paths';
+import { pieceQueryOptions } from '../../../../features/pieces/api/get-piece';
+import { pourPlanQueryOptions, usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
+import { DeletePourPlanButton } from '../../../../features/pour-plans/components/DeletePourPlanButton';
+import { PlanResult } from '../../../../features/pour-plans/components/PlanResult';
+import { SnapshotDetails } from '../../../../features/pour-plans/components/SnapshotDetails';
+import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
+import { readSavedPlan } from '../../../../features/pour-plans/utils/saved-plan';
+import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
+import { requireSession } from '../../../session-loaders';
+import { useSignedInSession } from '../../../signed-in-session';
+import { readId } from './read-id';
+
+export const createLoader =
+  (queryClient: QueryClient) =>
+  async ({ params, request }: LoaderFunctionArgs) => {
+    await requireSession(queryClient, request);
+    const planId = readId(params, 'planId', 'pour plan');
+    const [plan] = await Promise.all([queryClient.ensureQueryData(pourPlanQueryOptions(planId)), queryClient.ensureQueryData(shopQueryOptions())]);
+    await queryClient.ensureQueryData(pieceQueryOptions(plan.pieceId));
+    return null;
+  };
+
+export function Component() {
+  const planId = readId(useParams(), 'planId', 'pour plan');
+  const session = useSignedInSession();
+  const navigate = useNavigate();
+  const plan = usePourPlan(planId);
+  const shop = useShop();
+  const piece = useQuery({ ...pieceQueryOptions(plan.data?.pieceId ?? ''), enabled: Boolean(plan.data) });
+  const mayPlan = mayPlanPours(session.role);
+
+  if (plan.error) return <ErrorAlert error={plan.error} />;
+  if (shop.error) return <ErrorAlert error={shop.error} />;
+  if (!plan.data || !shop.data) return <PageSpinner label="Loading the plan…" />;
+  const current = plan.data;
+  const saved = readSavedPlan(current);
+
+  return (
+    <>
+      <DocumentTitle title={current.name} />
+      <PageHeader
+        eyebrow="Pour plan"
+        title={current.name}
+        description={
+          <>
+            For <TextLink to={paths.piece.getHref(current.pieceId)}>{piece.data?.name ?? 'its piece'}</TextLink>, saved <DateTime iso={current.updatedAt} />
+            {current.createdBy ? ` by ${current.createdBy.name}` : ''}.
+          </>
+        }
+        actions={
+          <>
+            <ButtonLink to={paths.runSheet.getHref(current.id)}>Run sheet</ButtonLink>
+            {mayPlan ? (
+              <>
+                {saved.ok && saved.value.input ? (
+                  <ButtonLink variant="secondary" to={paths.editPourPlan.getHref(current.id)}>
+                    Edit plan
+                  </ButtonLink>
+                ) : null}
+                <DeletePourPlanButton planId={current.id} name={current.name} onDeleted={() => navigate(paths.pourPlans.getHref({ pieceId: current.pieceId }), { replace: true })} />
+              </>
+            ) : null}
+          </>
+        }
+      />
+      {saved.ok ? (
+        <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+          <section aria-labelledby="stored-result" className="flex flex-col gap-3">
+            <h2 id="stored-result" className="text-xl font-bold text-walnut-900">
+              The saved plan
+            </h2>
+            <p className="text-ink-soft">These are the numbers the server worked out and stored when the plan was saved.</p>
+            <PlanResult plan={saved.value.plan} unitSystem={shop.data.unitSystem} />
+          </section>
+          <Card title="Shelf values it was made with">
+            <SnapshotDetails snapshot={saved.value.snapshot} unitSystem={shop.data.unitSystem} />
+          </Card>
+        </div>
+      ) : (
+        <Alert tone="error" title="This plan's stored numbers cannot be shown" live="none">
+          {saved.error.message}
+        </Alert>
+      )}
+      <p className="mt-6">
+        <TextLink to={paths.pourPlans.getHref({ pieceId: current.pieceId })}>Back to this piece&apos;s pour plans</TextLink>
+      </p>
+    </>
+  );
+}

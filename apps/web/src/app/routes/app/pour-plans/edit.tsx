@@ -1,0 +1,98 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Alert } from '../../../../components/ui/Alert';
+import { DocumentTitle } from '../../../../components/ui/DocumentTitle';
+import { ErrorAlert } from '../../../../components/ui/ErrorAlert';
+import { PageHeader } from '../../../../components/ui/PageHeader';
+import { PageSpinner } from '../../../../components/ui/PageSpinner';
+import { TextLink } from '../../../../components/ui/TextLink';
+import { paths } from '../../../../config/paths';
+import { pourPlanQueryOptions, usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
+import { useUpdatePourPlan } from '../../../../features/pour-plans/api/update-pour-plan';
+import { PourPlanner } from '../../../../features/pour-plans/components/PourPlanner';
+import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
+import { plannerValuesOf } from '../../../../features/pour-plans/utils/planner-values';
+import { readSavedPlan, unreadableInputsMessage } from '../../../../features/pour-plans/utils/saved-plan';
+import { pigmentsQueryOptions, usePigments } from '../../../../features/shelf/api/get-pigments';
+import { resinSystemsQueryOptions, useResinSystems } from '../../../../features/shelf/api/get-resin-systems';
+import { wholeShelfQuery } from '../../../../features/shelf/utils/shelf-queries';
+import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
+import { roleLabel } from '../../../../lib/roles';
+import { requireSession } from '../../../session-loaders';
+import { useSignedInSession } from '../../../signed-in-session';
+import { readId } from './read-id';
+
+export const createLoader =
+  (queryClient: QueryClient) =>
+  async ({ params, request }: LoaderFunctionArgs) => {
+    await requireSession(queryClient, request);
+    const planId = readId(params, 'planId', 'pour plan');
+    await Promise.all([
+      queryClient.ensureQueryData(pourPlanQueryOptions(planId)),
+      queryClient.ensureQueryData(shopQueryOptions()),
+      queryClient.ensureQueryData(resinSystemsQueryOptions(wholeShelfQuery)),
+      queryClient.ensureQueryData(pigmentsQueryOptions(wholeShelfQuery)),
+    ]);
+    return null;
+  };
+
+export function Component() {
+  const planId = readId(useParams(), 'planId', 'pour plan');
+  const session = useSignedInSession();
+  const navigate = useNavigate();
+  const plan = usePourPlan(planId);
+  const shop = useShop();
+  const resinSystems = useResinSystems(wholeShelfQuery);
+  const pigments = usePigments(wholeShelfQuery);
+  const update = useUpdatePourPlan({ onSuccess: (saved) => navigate(paths.pourPlan.getHref(saved.id), { replace: true }) });
+
+  const failed = plan.error ?? shop.error ?? resinSystems.error ?? pigments.error;
+  const body = () => {
+    if (!mayPlanPours(session.role)) {
+      return (
+        <Alert tone="warning" title="Your role can't change pour plans" live="none">
+          You are signed in as {roleLabel(session.role).toLowerCase()}. Makers and the shop lead change plans.
+        </Alert>
+      );
+    }
+    if (failed) return <ErrorAlert error={failed} />;
+    if (!plan.data || !shop.data || !resinSystems.data || !pigments.data) return <PageSpinner label="Loading the plan…" />;
+    const saved = readSavedPlan(plan.data);
+    if (!saved.ok || !saved.value.input) {
+      return (
+        <Alert tone="error" title="This plan cannot be opened in the planner" live="none">
+          {saved.ok ? unreadableInputsMessage : saved.error.message}
+        </Alert>
+      );
+    }
+    return (
+      <PourPlanner
+        key={plan.data.updatedAt}
+        pieceId={plan.data.pieceId}
+        initialValues={plannerValuesOf(saved.value.input)}
+        resinSystems={resinSystems.data.items}
+        pigments={pigments.data.items}
+        unitSystem={shop.data.unitSystem}
+        scaleResolutionG={shop.data.scaleResolutionG}
+        submitLabel="Save changes"
+        busy={update.isPending}
+        save={(input) => update.mutateAsync({ planId, values: input })}
+      />
+    );
+  };
+
+  return (
+    <>
+      <DocumentTitle title={plan.data ? `Edit ${plan.data.name}` : 'Edit pour plan'} />
+      <PageHeader
+        eyebrow="Pour plan"
+        title={plan.data ? `Edit ${plan.data.name}` : 'Edit pour plan'}
+        description="Saving works the whole plan out again with the shelf as it is now, and takes a new snapshot of it."
+      />
+      {body()}
+      <p className="mt-6">
+        <TextLink to={paths.pourPlan.getHref(planId)}>Back to the plan</TextLink>
+      </p>
+    </>
+  );
+}

@@ -1,0 +1,72 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Card } from '../../../../components/ui/Card';
+import { DocumentTitle } from '../../../../components/ui/DocumentTitle';
+import { PageHeader } from '../../../../components/ui/PageHeader';
+import { QueryResult } from '../../../../components/ui/QueryResult';
+import { TextLink } from '../../../../components/ui/TextLink';
+import { paths } from '../../../../config/paths';
+import { lotQueryOptions, useLot } from '../../../../features/shelf/api/get-lot';
+import { useUpdateLot } from '../../../../features/shelf/api/update-lot';
+import { DeleteLotButton } from '../../../../features/shelf/components/DeleteLotButton';
+import { LotEditForm } from '../../../../features/shelf/components/LotEditForm';
+import { LotSheet } from '../../../../features/shelf/components/LotSheet';
+import { LotStateMark } from '../../../../features/shelf/components/LotStateMark';
+import { lotStateOf } from '../../../../features/shelf/utils/lot-status';
+import { mayKeepShelf } from '../../../../features/shelf/utils/shelf-access';
+import { lotPartWords } from '../../../../features/shelf/utils/shelf-words';
+import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
+import { requireSession } from '../../../session-loaders';
+import { useSignedInSession } from '../../../signed-in-session';
+import { readId } from './read-id';
+
+export const createLoader =
+  (queryClient: QueryClient) =>
+  async ({ params, request }: LoaderFunctionArgs) => {
+    await requireSession(queryClient, request);
+    const id = readId(params, 'lotId', 'lot');
+    await Promise.all([queryClient.ensureQueryData(lotQueryOptions(id)), queryClient.ensureQueryData(shopQueryOptions())]);
+    return null;
+  };
+
+export function Component() {
+  const id = readId(useParams(), 'lotId', 'lot');
+  const session = useSignedInSession();
+  const navigate = useNavigate();
+  const lot = useLot(id);
+  const shop = useShop();
+  const update = useUpdateLot();
+  const mayKeep = mayKeepShelf(session.role);
+  const backToLots = paths.shelf.getHref({ tab: 'lots' });
+
+  return (
+    <QueryResult query={lot} loadingLabel="Loading the lot…">
+      {(current) => (
+        <>
+          <DocumentTitle title={`Lot ${current.lotNumber}`} />
+          <PageHeader
+            eyebrow={`Shelf · ${lotPartWords[current.part]}`}
+            title={`Lot ${current.lotNumber}`}
+            description={
+              <span className="flex flex-wrap items-center gap-2">
+                {current.productName} <LotStateMark state={lotStateOf(current)} />
+              </span>
+            }
+            actions={mayKeep ? <DeleteLotButton lot={current} onDeleted={() => navigate(backToLots, { replace: true })} /> : null}
+          />
+          <QueryResult query={shop} loadingLabel="Loading the shop's units…">
+            {(s) => <LotSheet lot={current} unitSystem={s.unitSystem} />}
+          </QueryResult>
+          {mayKeep ? (
+            <Card title="Correct this lot" className="mt-6 max-w-3xl">
+              <LotEditForm key={current.id} lot={current} busy={update.isPending} save={(changes) => update.mutateAsync({ lotId: current.id, changes })} />
+            </Card>
+          ) : null}
+          <p className="mt-6">
+            <TextLink to={backToLots}>Back to the lots</TextLink>
+          </p>
+        </>
+      )}
+    </QueryResult>
+  );
+}

@@ -1,0 +1,68 @@
+import { formatLength, type UnitSystem } from '@gelpoint/core';
+import { useState } from 'react';
+import { Field } from '../../../components/ui/Field';
+import { Input } from '../../../components/ui/Input';
+import { lengthInputStep, lengthInputValue, mmToShopLength, readLengthInput, shopLengthToMm, shopLengthUnit } from '../utils/length-input';
+
+export interface FillLevelControlProps {
+  /** Height above the mould's lowest point, mm. */
+  heightMm: number;
+  /** The mould's full height, the highest level there is. */
+  spanMm: number;
+  unitSystem: UnitSystem;
+  onChange: (heightMm: number) => void;
+}
+
+/** A slider for feel and a number for precision, both on the same level in the shop's length unit. */
+export function FillLevelControl({ heightMm, spanMm, unitSystem, onChange }: FillLevelControlProps) {
+  const [text, setText] = useState(() => lengthInputValue(heightMm, unitSystem));
+  const [error, setError] = useState<string | null>(null);
+  const unit = shopLengthUnit(unitSystem);
+  const bounds = { minMm: 0, maxMm: spanMm };
+
+  const typed = (next: string) => {
+    setText(next);
+    const read = readLengthInput(next, unitSystem, bounds, 'Fill level');
+    if (!read.ok) {
+      setError(read.error.message);
+      return;
+    }
+    setError(null);
+    onChange(read.value);
+  };
+
+  const slid = (next: number) => {
+    const levelMm = Math.min(spanMm, Math.max(0, shopLengthToMm(next, unitSystem)));
+    setText(lengthInputValue(levelMm, unitSystem));
+    setError(null);
+    onChange(levelMm);
+  };
+
+  return (
+    <div className="flex flex-col gap-3">
+      <Field
+        label="Fill level"
+        hint={`Height of the resin surface above the mould’s lowest point, in ${unit}: from 0 to ${formatLength(spanMm, unitSystem).text} at the top.`}
+        error={error ?? undefined}
+      >
+        {(control) => (
+          <div className="flex items-center gap-2">
+            <Input {...control} inputMode="decimal" autoComplete="off" className="max-w-40 tabular-nums" value={text} onChange={(e) => typed(e.target.value)} />
+            <span className="text-ink-soft">{unit}</span>
+          </div>
+        )}
+      </Field>
+      <input
+        type="range"
+        aria-label="Fill level, slider"
+        min={0}
+        max={mmToShopLength(spanMm, unitSystem)}
+        step={lengthInputStep(unitSystem)}
+        value={mmToShopLength(heightMm, unitSystem)}
+        aria-valuetext={`${formatLength(heightMm, unitSystem).text} above the lowest point`}
+        onChange={(e) => slid(Number(e.target.value))}
+        className="h-touch w-full accent-resin-500"
+      />
+    </div>
+  );
+}

@@ -1,0 +1,168 @@
+import { Canvas, useThree } from '@react-three/fiber';
+import { useEffect, useMemo } from 'react';
+import { BufferGeometry, DataTexture, DoubleSide, Float32BufferAttribute, Matrix4, NearestFilter, RGBAFormat, type BufferGeometry as Geometry } from 'three';
+import { OrbitControls, STLLoader } from 'three-stdlib';
+import type { CavityReport, DepthMap, MoldUnits, UpAxis } from '../types';
+import { mmPerFileUnit } from '../utils/file-units';
+import { upAxisTurn } from '../utils/up-axis-turn';
+
+export interface MoldSceneProps {
+  stl: ArrayBuffer;
+  upAxis: UpAxis;
+  units: MoldUnits;
+  bboxMm: CavityReport['bboxMm'];
+  /** Absolute level in the report frame. */
+  levelMm: number;
+  layerLevelsMm: readonly number[];
+  /** Where resin stands at the level; without it the surface spans the bounding box. */
+  footprint: DepthMap | undefined;
+  describedBy: string;
+}
+
+const woodColour = '#a98560';
+const resinColour = '#d69824';
+const lineColour = '#3e2a17';
+const paperColour = '#fbf8f3';
+
+/** The file's triangles in the report's frame: the same turn and scale the cavity engine applied. */
+function moldGeometry(stl: ArrayBuffer, upAxis: UpAxis, units: MoldUnits): Geometry {
+  const geometry = new STLLoader().parse(stl);
+  const m = upAxisTurn(upAxis);
+  const s = mmPerFileUnit(units);
+  geometry.applyMatrix4(new Matrix4().set(m[0] * s, m[1] * s, m[2] * s, 0, m[3] * s, m[4] * s, m[5] * s, 0, m[6] * s, m[7] * s, m[8] * s, 0, 0, 0, 0, 1));
+  // Many exporters write zero normals; faces lit from their own corners always read right.
+  geometry.computeVertexNormals();
+  return geometry;
+}
+
+/** A rectangle just outside the bounding box at each level, where one layer meets the next. */
+function layerLineGeometry(bboxMm: CavityReport['bboxMm'], levelsMm: readonly number[]): Geometry {
+  const margin = 0.03 * Math.max(bboxMm.max[0] - bboxMm.min[0], bboxMm.max[1] - bboxMm.min[1]);
+  const x0 = bboxMm.min[0] - margin;
+  const x1 = bboxMm.max[0] + margin;
+  const y0 = bboxMm.min[1] - margin;
+  const y1 = bboxMm.max[1] + margin;
+  const points: number[] = [];
+  for (const z of levelsMm) {
+    points.push(x0, y0, z, x1, y0, z, x1, y0, z, x1, y1, z, x1, y1, z, x0, y1, z, x0, y1, z, x0, y0, z);
+  }
+  const geometry = new BufferGeometry();
+  geometry.setAttribute('position', new Float32BufferAttribute(points, 3));
+  return geometry;
+}
+
+const resinRgb = [214, 152, 36] as const;
+
+/** The wet columns of the depth map as an opaque-or-clear texture, so the resin surface shows only where resin is. */
+function footprintTexture(map: DepthMap): DataTexture {
+  const pixels = new Uint8Array(map.nx * map.ny * 4);
+  map.depthsMm.forEach((depthMm, i) => {
+    if (!(depthMm > 0)) return;
+    pixels.set([...resinRgb, 255], i * 4);
+  });
+  // Row iy of the map is row iy of the texture from the bottom, the plane's −y edge: the same way round.
+  const texture = new DataTexture(pixels, map.nx, map.ny, RGBAFormat);
+  texture.magFilter = NearestFilter;
+  texture.minFilter = NearestFilter;
+  texture.needsUpdate = true;
+  return texture;
+}
+
+interface ResinSurface {
+  centre: [number, number];
+  size: [number, number];
+  texture: DataTexture | null;
+}
+
+function resinSurface(bboxMm: CavityReport['bboxMm'], footprint: DepthMap | undefined): ResinSurface {
+  if (!footprint) {
+    const size: [number, number] = [(bboxMm.max[0] - bboxMm.min[0]) * 1.02, (bboxMm.max[1] - bboxMm.min[1]) * 1.02];
+    return { centre: [(bboxMm.max[0] + bboxMm.min[0]) / 2, (bboxMm.max[1] + bboxMm.min[1]) / 2], size, texture: null };
+  }
+  const size: [number, number] = [footprint.nx * footprint.cellMm[0], footprint.ny * footprint.cellMm[1]];
+  return { centre: [footprint.originMm[0] + size[0] / 2, footprint.originMm[1] + size[1] / 2], size, texture: footprintTexture(footprint) };
+}
+
+function Controls({ target }: { target: readonly [number, number, number] }) {
+  const camera = useThree((state) => state.camera);
+  const canvas = useThree((state) => state.gl.domElement);
+  const invalidate = useThree((state) => state.invalidate);
+  const [tx, ty, tz] = target;
+  useEffect(() => {
+    const controls = new OrbitControls(camera, canvas);
+    controls.target.set(tx, ty, tz);
+    // The focusable element is the Canvas's wrapper, so the arrow keys are heard there.
+    controls.listenToKeyEvents(canvas.closest<HTMLElement>('[data-mold-scene]') ?? canvas);
+    controls.update();
+    const redraw = () => invalidate();
+    controls.addEventListener('change', redraw);
+    return () => {
+      controls.removeEventListener('change', redraw);
+      controls.dispose();
+    };
+  }, [camera, canvas, invalidate, tx, ty, tz]);
+  return null;
+}
+
+/** The mould in 3D, Z up as the report measured it, with the resin surface at the fill level and the layer lines. */
+export default function MoldScene({ stl, upAxis, units, bboxMm, levelMm, layerLevelsMm, footprint, describedBy }: MoldSceneProps) {
+  const geometry = useMemo(() => moldGeometry(stl, upAxis, units), [stl, upAxis, units]);
+  useEffect(() => () => geometry.dispose(), [geometry]);
+  const layerLines = useMemo(() => layerLineGeometry(bboxMm, layerLevelsMm), [bboxMm, layerLevelsMm]);
+  useEffect(() => () => layerLines.dispose(), [layerLines]);
+  const surface = useMemo(() => resinSurface(bboxMm, footprint), [bboxMm, footprint]);
+  useEffect(() => () => surface.texture?.dispose(), [surface]);
+
+  const size = [0, 1, 2].map((k) => bboxMm.max[k]! - bboxMm.min[k]!);
+  const centre = [0, 1, 2].map((k) => (bboxMm.max[k]! + bboxMm.min[k]!) / 2) as [number, number, number];
+  const reach = Math.max(...size) * 1.9;
+  const camera = {
+    position: [centre[0] + reach * 0.55, centre[1] - reach * 0.8, centre[2] + reach * 0.65] as [number, number, number],
+    up: [0, 0, 1] as [number, number, number],
+    fov: 40,
+    near: reach / 200,
+    far: reach * 20,
+  };
+
+  return (
+    <Canvas
+      frameloop="demand"
+      dpr={[1, 2]}
+      camera={camera}
+      data-mold-scene=""
+      tabIndex={0}
+      aria-describedby={describedBy}
+      aria-label="The mould in 3D: drag to turn, scroll to zoom, arrow keys to move"
+      role="img"
+    >
+      <color attach="background" args={[paperColour]} />
+      <ambientLight intensity={0.7} />
+      <directionalLight position={[centre[0] + reach, centre[1] - reach, centre[2] + reach * 2]} intensity={1.6} />
+      <directionalLight position={[centre[0] - reach, centre[1] + reach, centre[2] + reach]} intensity={0.5} />
+      <mesh geometry={geometry}>
+        <meshStandardMaterial color={woodColour} roughness={0.85} metalness={0} />
+      </mesh>
+      <mesh position={[surface.centre[0], surface.centre[1], levelMm]}>
+        <planeGeometry args={surface.size} />
+        {/* Pulled forward in depth so a level at the rim is not hidden inside the rim's own face. */}
+        <meshStandardMaterial
+          key={surface.texture ? surface.texture.uuid : 'plain'}
+          color={surface.texture ? '#ffffff' : resinColour}
+          map={surface.texture}
+          transparent
+          opacity={0.7}
+          side={DoubleSide}
+          depthWrite={false}
+          polygonOffset
+          polygonOffsetFactor={-2}
+        />
+      </mesh>
+      {layerLevelsMm.length > 0 ? (
+        <lineSegments geometry={layerLines}>
+          <lineBasicMaterial color={lineColour} />
+        </lineSegments>
+      ) : null}
+      <Controls target={centre} />
+    </Canvas>
+  );
+}

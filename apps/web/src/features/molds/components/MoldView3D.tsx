@@ -1,0 +1,72 @@
+import { formatLength, formatVolume, mm3ToMl, type UnitSystem } from '@gelpoint/core';
+import { lazy, Suspense, useId } from 'react';
+import { ErrorAlert } from '../../../components/ui/ErrorAlert';
+import { Spinner } from '../../../components/ui/Spinner';
+import { useMoldStl } from '../api/get-mold-stl';
+import type { CavityFill, CavityReport, DepthMap, MoldView } from '../types';
+import { SceneErrorBoundary } from './SceneErrorBoundary';
+
+// three.js and the renderer load only when a mould's page draws it, never with the rest of the app.
+const MoldScene = lazy(() => import('./MoldScene'));
+
+export interface MoldView3DProps {
+  mold: MoldView;
+  report: CavityReport;
+  fill: CavityFill;
+  levelMm: number;
+  layerLevelsMm: readonly number[];
+  footprint: DepthMap | undefined;
+  unitSystem: UnitSystem;
+}
+
+export function MoldView3D({ mold, report, fill, levelMm, layerLevelsMm, footprint, unitSystem }: MoldView3DProps) {
+  const descriptionId = useId();
+  const stl = useMoldStl(mold.id);
+  const lowestMm = report.bboxMm.min[2];
+  const size = [0, 1, 2].map((k) => formatLength(report.bboxMm.max[k]! - report.bboxMm.min[k]!, unitSystem).text).join(' × ');
+  const layers =
+    layerLevelsMm.length > 2
+      ? ` Layer lines at ${layerLevelsMm
+          .slice(1, -1)
+          .map((z) => formatLength(z - lowestMm, unitSystem).text)
+          .join(', ')}.`
+      : '';
+  const fallback = (
+    <div className="flex h-full items-center justify-center">
+      <Spinner label="Loading the 3D view…" />
+    </div>
+  );
+
+  return (
+    <figure className="flex flex-col gap-2">
+      <div className="h-80 overflow-hidden rounded-xl border border-line bg-paper sm:h-96" data-testid="mold-3d">
+        <SceneErrorBoundary>
+          {stl.data ? (
+            <Suspense fallback={fallback}>
+              <MoldScene
+                stl={stl.data}
+                upAxis={mold.upAxis}
+                units={mold.units}
+                bboxMm={report.bboxMm}
+                levelMm={levelMm}
+                layerLevelsMm={layerLevelsMm}
+                footprint={footprint}
+                describedBy={descriptionId}
+              />
+            </Suspense>
+          ) : stl.isError ? (
+            <div className="p-4">
+              <ErrorAlert error={stl.error} live="none" />
+            </div>
+          ) : (
+            fallback
+          )}
+        </SceneErrorBoundary>
+      </div>
+      <figcaption id={descriptionId} className="text-sm text-ink-soft">
+        The mould, {size}, Z up as measured. The resin surface stands {formatLength(levelMm - lowestMm, unitSystem).text} above its lowest point:{' '}
+        {formatVolume(mm3ToMl(fill.volumeMm3), unitSystem).text}, {formatLength(fill.maxDepthMm, unitSystem).text} deep at the deepest spot.{layers}
+      </figcaption>
+    </figure>
+  );
+}

@@ -1,0 +1,23 @@
+import { PourPlanList } from '@gelpoint/contracts';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { z } from 'zod';
+import { api } from '../../../lib/api-client';
+import type { PlanListQuery } from '../utils/plan-list-filters';
+import { pourPlanKeys } from './keys';
+
+export type PourPlanPage = z.infer<typeof PourPlanList>;
+
+export function getPourPlans(query: PlanListQuery, signal?: AbortSignal): Promise<PourPlanPage> {
+  return api.get('/pour-plans', PourPlanList, { query: { ...query }, ...(signal ? { signal } : {}) });
+}
+
+export const pourPlansQueryOptions = (query: PlanListQuery) =>
+  queryOptions({
+    queryKey: pourPlanKeys.list(query),
+    queryFn: ({ signal }) => getPourPlans(query, signal),
+    placeholderData: keepPreviousData,
+  });
+
+export function usePourPlans(query: PlanListQuery) {
+  return useQuery(pourPlansQueryOptions(query));
+}

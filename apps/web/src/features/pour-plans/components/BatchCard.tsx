@@ -1,0 +1,79 @@
+import { formatTemperature, formatWeighedMass, type Caution, type ScaleResolutionG, type UnitSystem } from '@gelpoint/core';
+import { useId } from 'react';
+import { mixRatioWords } from '../utils/mix-ratio-words';
+import { formatMinutes } from '../utils/plan-format';
+import type { RunSheetBatch } from '../utils/run-sheet';
+import { CautionList } from './CautionList';
+
+export interface BatchCardProps {
+  batch: RunSheetBatch;
+  cautions: readonly Caution[];
+  unitSystem: UnitSystem;
+  scaleResolutionG: ScaleResolutionG;
+}
+
+function Amount({ part, grams }: { part: string; grams: string }) {
+  return (
+    <div className="flex flex-col rounded-lg border-2 border-walnut-800 px-3 py-2" data-print-border>
+      <span className="text-sm font-semibold uppercase tracking-wide">{part}</span>
+      <span className="text-3xl font-bold tabular-nums">{grams}</span>
+    </div>
+  );
+}
+
+function Blank({ label }: { label: string }) {
+  return (
+    <span className="inline-flex items-end gap-2">
+      {label}
+      <span aria-hidden="true" className="inline-block w-28 border-b-2 border-walnut-800" data-print-border />
+    </span>
+  );
+}
+
+/** One cup as the apprentice weighs it: what goes in, how much of each part, and the blanks to fill in. */
+export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG }: BatchCardProps) {
+  const mixedId = useId();
+  const grams = (g: number) => formatWeighedMass(g, unitSystem, scaleResolutionG).text;
+  return (
+    <article
+      aria-label={`Cup ${batch.order} of ${batch.of}`}
+      className="run-sheet-card flex flex-col gap-3 rounded-xl border-2 border-walnut-800 bg-white p-4"
+      data-print-border
+    >
+      <header className="flex flex-wrap items-baseline justify-between gap-2">
+        <h3 className="text-2xl font-bold">
+          Cup {batch.order} of {batch.of}
+        </h3>
+        <p className="text-lg font-semibold">
+          {batch.pourLabel} · batch {batch.batchInPour} of {batch.batchesInPour}
+        </p>
+      </header>
+      <p className="text-lg">
+        <strong>{batch.product.name}</strong> · mix ratio {mixRatioWords(batch.product.mixRatio)} · weigh the grams below
+      </p>
+      <div className="grid grid-cols-2 gap-2 sm:grid-cols-4">
+        <Amount part="Part A" grams={grams(batch.partAG)} />
+        <Amount part="Part B" grams={grams(batch.partBG)} />
+        <Amount part={batch.pigmentName ? `Pigment: ${batch.pigmentName}` : 'Pigment'} grams={batch.pigmentG > 0 ? grams(batch.pigmentG) : 'none'} />
+        <Amount part="Cup total" grams={grams(batch.totalG)} />
+      </div>
+      <p className="text-lg font-semibold">
+        pot life {formatMinutes(batch.potLifeMin)} at {formatTemperature(batch.shopTempC, unitSystem).text}
+      </p>
+      <p className="flex flex-wrap gap-x-6 gap-y-3 text-base">
+        <Blank label="Lot A" />
+        <Blank label="Lot B" />
+        <Blank label="Lot pigment" />
+      </p>
+      <p className="flex flex-wrap items-end gap-x-3 gap-y-2 text-base">
+        <input id={mixedId} type="checkbox" className="size-6 accent-walnut-800" />
+        <label htmlFor={mixedId} className="font-semibold">
+          Mixed
+        </label>
+        <Blank label="by" />
+        <Blank label="at" />
+      </p>
+      <CautionList cautions={cautions} label={`Cautions for cup ${batch.order}`} />
+    </article>
+  );
+}

@@ -1,0 +1,287 @@
+import type { PigmentView, ResinSystemView } from '@gelpoint/contracts';
+import type { UnitSystem } from '@gelpoint/core';
+import { useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { Button } from '../../../components/ui/Button';
+import { ChoiceGroup } from '../../../components/ui/ChoiceGroup';
+import { Field } from '../../../components/ui/Field';
+import { FormAlert } from '../../../components/ui/FormAlert';
+import { Input } from '../../../components/ui/Input';
+import { Select } from '../../../components/ui/Select';
+import { isApiError } from '../../../lib/api-error';
+import { errorNotice } from '../../../lib/error-notice';
+import { useMold } from '../api/get-mold';
+import { usePieceMolds } from '../api/get-piece-molds';
+import { useLivePlan } from '../hooks/use-live-plan';
+import { formDefaultsOf } from '../utils/form-defaults';
+import { optionalNumber, requiredNumber } from '../utils/number-input';
+import { absorptionOptions, moldOptions, pigmentOptions, productOptions, shapeOptions } from '../utils/planner-options';
+import { fieldOfIssuePath, plannerResolver } from '../utils/planner-validation';
+import type { PlannerValues, SavedPlanInput } from '../utils/planner-values';
+import { LivePlanPanel } from './LivePlanPanel';
+import { FieldGrid, PlannerSection, Switch } from './PlannerSection';
+
+export interface PourPlannerProps {
+  pieceId: string;
+  initialValues: PlannerValues;
+  resinSystems: readonly ResinSystemView[];
+  pigments: readonly PigmentView[];
+  unitSystem: UnitSystem;
+  scaleResolutionG: number;
+  submitLabel: string;
+  busy: boolean;
+  save: (input: SavedPlanInput) => Promise<unknown>;
+}
+
+const sourceChoices = [
+  { value: 'shape', label: 'A quick shape', hint: 'measure the cavity and enter it' },
+  { value: 'mold', label: "The piece's mould", hint: 'from the cavity report of its STL' },
+];
+const damChoices = [
+  { value: 'outline', label: 'Dams along the outline', hint: 'resin only where the mould is' },
+  { value: 'box', label: 'A box dam', hint: 'around the whole bounding box' },
+];
+const cupWasteUnits = [
+  { value: 'g', label: 'g per cup' },
+  { value: 'mL', label: 'mL per cup' },
+];
+
+/** The maker's pour planner: inputs on one side, the plan they make on the other, recomputed as they type. */
+export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, unitSystem, scaleResolutionG, submitLabel, busy, save }: PourPlannerProps) {
+  const [formError, setFormError] = useState<string | null>(null);
+  const form = useForm<PlannerValues, unknown, SavedPlanInput>({ resolver: plannerResolver(pieceId), defaultValues: formDefaultsOf(initialValues) });
+  const { errors } = form.formState;
+  const values = useWatch({ control: form.control }) as PlannerValues;
+  const live = useLivePlan({ values, pieceId, resinSystems, pigments, scaleResolutionG });
+  const molds = usePieceMolds(pieceId);
+  const chosenMold = useMold(values.cavity?.source === 'mold' && values.cavity.moldId ? values.cavity.moldId : null);
+  const moldSpan = chosenMold.data?.report?.bboxMm;
+  const readyMolds = molds.data ? moldOptions(molds.data.items) : [];
+
+  const source = values.cavity?.source ?? 'shape';
+  const kind = values.cavity?.shape?.kind ?? 'rectangle';
+  const sealOn = Boolean(values.sealCoat?.enabled);
+  const airOn = Boolean(values.shopAir?.enabled);
+  const woodOn = Boolean(values.wood?.enabled);
+  const chosenPigment = pigments.find((p) => p.id === values.deepPour?.pigmentId);
+
+  const number = (name: Parameters<typeof form.register>[0]) => form.register(name, { setValueAs: requiredNumber });
+  const optional = (name: Parameters<typeof form.register>[0]) => form.register(name, { setValueAs: optionalNumber });
+  const pigmentField = form.register('deepPour.pigmentId', {
+    onChange: (event: { target: { value: string } }) => {
+      const pigment = pigments.find((p) => p.id === event.target.value);
+      if (pigment && !(Number(form.getValues('deepPour.pigmentPct')) > 0)) form.setValue('deepPour.pigmentPct', pigment.recommendedPct);
+    },
+  });
+
+  const onSubmit = form.handleSubmit(async (input) => {
+    setFormError(null);
+    try {
+      await save(input);
+    } catch (error) {
+      let placed = false;
+      if (isApiError(error)) {
+        for (const [path, message] of Object.entries(error.fields)) {
+          form.setError(fieldOfIssuePath(path.split('.')) as Parameters<typeof form.setError>[0], { type: 'server', message }, { shouldFocus: !placed });
+          placed = true;
+        }
+      }
+      setFormError(isApiError(error) ? error.message : errorNotice(error).message);
+    }
+  });
+
+  return (
+    <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+      <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5" aria-label="Pour plan">
+        <FormAlert message={formError} title="Could not save the pour plan" />
+        <Field label="Plan name" hint="How the run sheet and the cure board will call it." error={errors.name?.message} required>
+          {(control) => <Input {...control} maxLength={120} {...form.register('name')} />}
+        </Field>
+
+        <PlannerSection legend="Cavity">
+          <ChoiceGroup legend="Cavity from" choices={sourceChoices} error={errors.cavity?.source?.message} inputProps={form.register('cavity.source')} />
+          {source === 'shape' ? (
+            <>
+              <Field label="Shape of the cavity" error={errors.cavity?.shape?.kind?.message} required>
+                {(control) => <Select {...control} options={shapeOptions} {...form.register('cavity.shape.kind')} />}
+              </Field>
+              <FieldGrid>
+                {kind === 'rectangle' || kind === 'channel' ? (
+                  <>
+                    <Field label="Length (mm)" error={errors.cavity?.shape?.lengthMm?.message} required>
+                      {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.lengthMm')} />}
+                    </Field>
+                    <Field label="Width (mm)" error={errors.cavity?.shape?.widthMm?.message} required>
+                      {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.widthMm')} />}
+                    </Field>
+                  </>
+                ) : null}
+                {kind === 'cylinder' ? (
+                  <Field label="Diameter (mm)" error={errors.cavity?.shape?.diameterMm?.message} required>
+                    {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.diameterMm')} />}
+                  </Field>
+                ) : null}
+                {kind === 'area_depth' ? (
+                  <>
+                    <Field label="Outline area (mm²)" error={errors.cavity?.shape?.areaMm2?.message} required>
+                      {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.areaMm2')} />}
+                    </Field>
+                    <Field label="Average depth (mm)" error={errors.cavity?.shape?.averageDepthMm?.message} required>
+                      {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.averageDepthMm')} />}
+                    </Field>
+                    <Field label="Deepest point (mm)" hint="Leave empty for a flat floor." error={errors.cavity?.shape?.maxDepthMm?.message}>
+                      {(control) => <Input {...control} inputMode="decimal" {...optional('cavity.shape.maxDepthMm')} />}
+                    </Field>
+                    <Field label="Outline perimeter (mm)" hint="Leave empty to estimate the walls from a circle of the same area." error={errors.cavity?.shape?.perimeterMm?.message}>
+                      {(control) => <Input {...control} inputMode="decimal" {...optional('cavity.shape.perimeterMm')} />}
+                    </Field>
+                  </>
+                ) : (
+                  <Field label="Depth (mm)" error={errors.cavity?.shape?.depthMm?.message} required>
+                    {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.depthMm')} />}
+                  </Field>
+                )}
+              </FieldGrid>
+            </>
+          ) : (
+            <>
+              {molds.isError ? <p className="text-ember-700">The piece&apos;s moulds cannot be listed right now: {errorNotice(molds.error).message}</p> : null}
+              {molds.data && readyMolds.length === 0 ? <p className="text-ink-soft">This piece has no mould with a finished cavity report yet. Plan with a quick shape meanwhile.</p> : null}
+              <Field label="Mould" error={errors.cavity?.moldId?.message} required>
+                {(control) => <Select {...control} options={readyMolds} emptyOption="Choose the mould" {...form.register('cavity.moldId')} />}
+              </Field>
+              <ChoiceGroup legend="How the pour is contained" choices={damChoices} error={errors.cavity?.dam?.message} inputProps={form.register('cavity.dam')} />
+            </>
+          )}
+          <Field
+            label="Fill level (mm)"
+            hint={
+              source === 'shape'
+                ? 'Measured up from the floor of the cavity; its full depth fills it to the rim.'
+                : moldSpan
+                  ? `In the mould report's own frame: the mould runs from ${moldSpan.min[2].toFixed(1)} mm to ${moldSpan.max[2].toFixed(1)} mm.`
+                  : "The level in the mould report's own frame."
+            }
+            error={errors.fillLevelMm?.message}
+            required
+          >
+            {(control) => <Input {...control} inputMode="decimal" {...number('fillLevelMm')} />}
+          </Field>
+        </PlannerSection>
+
+        <PlannerSection legend="Deep pour" hint="The product decides how thick each layer and how heavy each cup may be.">
+          <Field label="Deep-pour product" error={errors.deepPour?.resinSystemId?.message} required>
+            {(control) => (
+              <Select {...control} options={productOptions(resinSystems, values.deepPour?.resinSystemId ?? '', unitSystem)} emptyOption="Choose from the shelf" {...form.register('deepPour.resinSystemId')} />
+            )}
+          </Field>
+          <FieldGrid>
+            <Field label="Pigment" error={errors.deepPour?.pigmentId?.message}>
+              {(control) => <Select {...control} options={pigmentOptions(pigments, values.deepPour?.pigmentId ?? '')} emptyOption="No pigment" {...pigmentField} />}
+            </Field>
+            {chosenPigment ? (
+              <Field
+                label="Pigment (% of resin mass)"
+                hint={`Recommended ${chosenPigment.recommendedPct} %, at most ${chosenPigment.maxPct} %.`}
+                error={errors.deepPour?.pigmentPct?.message}
+                required
+              >
+                {(control) => <Input {...control} inputMode="decimal" {...number('deepPour.pigmentPct')} />}
+              </Field>
+            ) : null}
+          </FieldGrid>
+        </PlannerSection>
+
+        <PlannerSection legend="Seal coat">
+          <Switch label="Seal the wood first" hint="A thin coat that closes the pores, so the deep pour does not bubble out of the wood." inputProps={form.register('sealCoat.enabled')} />
+          {sealOn ? (
+            <>
+              <Field label="Seal-coat product" error={errors.sealCoat?.resinSystemId?.message} required>
+                {(control) => (
+                  <Select {...control} options={productOptions(resinSystems, values.sealCoat?.resinSystemId ?? '', unitSystem)} emptyOption="Choose from the shelf" {...form.register('sealCoat.resinSystemId')} />
+                )}
+              </Field>
+              <FieldGrid>
+                <Field label="Film thickness (mm)" hint="A seal coat is a few tenths of a millimetre." error={errors.sealCoat?.filmThicknessMm?.message} required>
+                  {(control) => <Input {...control} inputMode="decimal" {...number('sealCoat.filmThicknessMm')} />}
+                </Field>
+                <Field label="Coats" error={errors.sealCoat?.coats?.message} required>
+                  {(control) => <Input {...control} inputMode="numeric" {...number('sealCoat.coats')} />}
+                </Field>
+              </FieldGrid>
+              <Field label="How much the wood soaks up" hint="Common-practice starting points; test scraps tell the truth for your wood." error={values.sealCoat?.absorption === 'custom' ? undefined : errors.sealCoat?.absorptionFactor?.message} required>
+                {(control) => <Select {...control} options={absorptionOptions} emptyOption="Choose the wood" {...form.register('sealCoat.absorption')} />}
+              </Field>
+              {values.sealCoat?.absorption === 'custom' ? (
+                <Field label="Absorption factor (× the film)" hint="1 means the wood takes up nothing; 2 means it drinks as much again." error={errors.sealCoat?.absorptionFactor?.message} required>
+                  {(control) => <Input {...control} inputMode="decimal" {...number('sealCoat.absorptionFactor')} />}
+                </Field>
+              ) : null}
+            </>
+          ) : null}
+        </PlannerSection>
+
+        <PlannerSection legend="Margins" hint="Named extras, so no total hides them.">
+          <FieldGrid>
+            <Field label="Over-pour (% of each layer)" hint="A small extra that makes sure the fill is full." error={errors.overPourPct?.message} required>
+              {(control) => <Input {...control} inputMode="decimal" {...number('overPourPct')} />}
+            </Field>
+            <Field label="Cup waste, per cup" hint="What a scraped cup still holds." error={errors.cupWaste?.amount?.message} required>
+              {(control) => <Input {...control} inputMode="decimal" {...number('cupWaste.amount')} />}
+            </Field>
+            <Field label="Cup waste is weighed in">
+              {(control) => <Select {...control} options={cupWasteUnits} {...form.register('cupWaste.unit')} />}
+            </Field>
+          </FieldGrid>
+        </PlannerSection>
+
+        <PlannerSection legend="Shop">
+          <Field label="Shop temperature (°C)" hint="The times of the data sheet are stretched or shortened for it." error={errors.shopTempC?.message} required>
+            {(control) => <Input {...control} inputMode="decimal" {...number('shopTempC')} />}
+          </Field>
+          <Switch label="Check the dew point" hint="With the humidity and the wood's surface temperature, the plan warns about condensation and amine blush." inputProps={form.register('shopAir.enabled')} />
+          {airOn ? (
+            <FieldGrid>
+              <Field label="Relative humidity (%)" error={errors.shopAir?.rhPct?.message} required>
+                {(control) => <Input {...control} inputMode="decimal" {...number('shopAir.rhPct')} />}
+              </Field>
+              <Field label="Surface temperature (°C)" error={errors.shopAir?.surfaceTempC?.message} required>
+                {(control) => <Input {...control} inputMode="decimal" {...number('shopAir.surfaceTempC')} />}
+              </Field>
+            </FieldGrid>
+          ) : null}
+        </PlannerSection>
+
+        <PlannerSection legend="Wood blank">
+          <Switch label="Add the wood to the cost" hint="Priced by the board foot (144 cubic inches)." inputProps={form.register('wood.enabled')} />
+          {woodOn ? (
+            <FieldGrid>
+              <Field label="Blank length (mm)" error={errors.wood?.lengthMm?.message} required>
+                {(control) => <Input {...control} inputMode="decimal" {...number('wood.lengthMm')} />}
+              </Field>
+              <Field label="Blank width (mm)" error={errors.wood?.widthMm?.message} required>
+                {(control) => <Input {...control} inputMode="decimal" {...number('wood.widthMm')} />}
+              </Field>
+              <Field label="Blank thickness (mm)" error={errors.wood?.thicknessMm?.message} required>
+                {(control) => <Input {...control} inputMode="decimal" {...number('wood.thicknessMm')} />}
+              </Field>
+              <Field label="Price per board foot (shop currency)" error={errors.wood?.pricePerBoardFoot?.message} required>
+                {(control) => <Input {...control} inputMode="decimal" {...number('wood.pricePerBoardFoot')} />}
+              </Field>
+            </FieldGrid>
+          ) : null}
+        </PlannerSection>
+
+        <div>
+          <Button type="submit" busy={busy} busyLabel="Saving…">
+            {submitLabel}
+          </Button>
+        </div>
+      </form>
+      {/* On wide screens the numbers stay in view beside the form and scroll on their own. */}
+      <div tabIndex={0} role="region" aria-label="Live numbers of this plan" className="xl:sticky xl:top-4 xl:max-h-[calc(100dvh-2rem)] xl:overflow-y-auto xl:pr-1">
+        <LivePlanPanel live={live} unitSystem={unitSystem} />
+      </div>
+    </div>
+  );
+}

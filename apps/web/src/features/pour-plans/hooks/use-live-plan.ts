@@ -1,0 +1,75 @@
+import type { PigmentView, ResinSystemView } from '@gelpoint/contracts';
+import type { MoldFillFacts, Result } from '@gelpoint/core';
+import { useMemo } from 'react';
+import { errorNotice } from '../../../lib/error-notice';
+import { useMold } from '../api/get-mold';
+import { useMoldFill } from '../api/get-mold-fill';
+import { useMoldLayers } from '../api/get-mold-layers';
+import { valuesKey } from '../utils/form-defaults';
+import { livePourPlan, type LivePlan } from '../utils/live-plan';
+import { curveFromLayerVolumes, planCurveLevels } from '../utils/mold-curve';
+import type { PlannerValues } from '../utils/planner-values';
+import { checkPlanner, type PlannerCheck } from '../utils/planner-validation';
+import { useDebouncedValue } from './use-debounced-value';
+
+// Long enough to let a number be typed, short enough to feel live.
+const settleMs = 250;
+
+export interface LivePlanState {
+  check: PlannerCheck;
+  result: Result<LivePlan> | null;
+  /** The numbers shown are for what was typed a moment ago; new ones are on their way. */
+  updating: boolean;
+  /** Why the mould's numbers are missing, when they are. */
+  moldProblem: string | null;
+}
+
+export interface UseLivePlanInput {
+  values: PlannerValues;
+  pieceId: string;
+  resinSystems: readonly ResinSystemView[];
+  pigments: readonly PigmentView[];
+  scaleResolutionG: number;
+}
+
+/** The plan for the form as it stands, computed in the browser with core once the typing settles. */
+export function useLivePlan({ values, pieceId, resinSystems, pigments, scaleResolutionG }: UseLivePlanInput): LivePlanState {
+  const key = valuesKey(values);
+  const settled = useDebouncedValue(values, key, settleMs);
+  const settledKey = valuesKey(settled);
+  const check = useMemo(() => checkPlanner(settled, pieceId), [settled, pieceId]);
+
+  const cavity = check.ok ? check.input.cavity : null;
+  const moldRequest = check.ok && cavity?.source === 'mold' ? { moldId: cavity.moldId, levelMm: check.input.fillLevelMm, dam: cavity.dam } : null;
+  const mold = useMold(moldRequest?.moldId ?? null);
+  const fill = useMoldFill(moldRequest);
+  const report = mold.data?.report ?? null;
+  const levelMm = moldRequest?.levelMm;
+  // The curve is sampled with the chosen dam from the mould's lowest point, as the server samples it when saving.
+  const levelsMm = useMemo(() => (report && levelMm !== undefined ? planCurveLevels(report.bboxMm.min[2], levelMm) : []), [report, levelMm]);
+  const layers = useMoldLayers(moldRequest && levelsMm.length >= 2 ? { moldId: moldRequest.moldId, levelsMm, dam: moldRequest.dam } : null);
+  const moldFacts = useMemo<MoldFillFacts | null>(() => {
+    // Answers fetched for another level or dam must not be mixed with this one.
+    const top = layers.data?.layers.at(-1)?.toMm;
+    if (!fill.data || fill.data.levelMm !== levelMm || top !== levelsMm.at(-1) || layers.data?.dam !== moldRequest?.dam) return null;
+    return { curve: curveFromLayerVolumes(layers.data?.layers ?? []), wettedAreaMm2: fill.data.wettedAreaMm2, maxDepthMm: fill.data.maxDepthMm };
+  }, [fill.data, layers.data, levelMm, levelsMm, moldRequest?.dam]);
+
+  const result = useMemo(
+    () => (check.ok ? livePourPlan(check.input, { resinSystems, pigments, scaleResolutionG, moldFacts }) : null),
+    [check, resinSystems, pigments, scaleResolutionG, moldFacts],
+  );
+
+  return {
+    check,
+    result,
+    updating: key !== settledKey || mold.isFetching || fill.isFetching || layers.isFetching,
+    moldProblem: moldProblemOf(mold.error ?? fill.error ?? layers.error, Boolean(mold.data && !report)),
+  };
+}
+
+function moldProblemOf(error: unknown, withoutReport: boolean): string | null {
+  if (error) return errorNotice(error).message;
+  if (withoutReport) return 'This mould has no finished cavity report yet. Wait for its analysis, or plan with a quick shape.';
+  return null;
+}

@@ -1,0 +1,16 @@
+/**
+ * Form inputs hand over text. A required number left empty becomes NaN, which the contract refuses with its own
+ * sentence ("fill level must be a number (mm)"); an optional one becomes null, meaning "not given".
+ */
+export function requiredNumber(raw: unknown): number {
+  if (typeof raw === 'number') return raw;
+  const text = String(raw ?? '').trim().replace(',', '.');
+  return text === '' ? Number.NaN : Number(text);
+}
+
+export function optionalNumber(raw: unknown): number | null {
+  if (raw === null || raw === undefined) return null;
+  if (typeof raw === 'number') return Number.isNaN(raw) ? null : raw;
+  const text = String(raw).trim().replace(',', '.');
+  return text === '' ? null : Number(text);
+}

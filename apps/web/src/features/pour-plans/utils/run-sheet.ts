@@ -1,0 +1,77 @@
+import type { PlannedBatch, PourPlan } from '@gelpoint/core';
+import type { PlanSnapshot, SnapshotProduct } from './saved-plan';
+
+export interface RunSheetBatch {
+  /** The plan's own batch index (0-based), which its cautions refer to. */
+  index: number;
+  /** 1-based place in the order of mixing across the whole plan. */
+  order: number;
+  of: number;
+  /** "Seal coat 1", "Layer 2". */
+  pourLabel: string;
+  /** 1-based within its pour, e.g. batch 2 of 3 of layer 1. */
+  batchInPour: number;
+  batchesInPour: number;
+  product: SnapshotProduct;
+  pigmentName: string | null;
+  partAG: number;
+  partBG: number;
+  pigmentG: number;
+  totalG: number;
+  /** Pot life at the shop temperature the plan was made for. */
+  potLifeMin: number;
+  shopTempC: number;
+}
+
+interface Pour {
+  label: string;
+  batches: readonly PlannedBatch[];
+  product: SnapshotProduct;
+  potLifeMin: number;
+  shopTempC: number;
+  pigmentName: string | null;
+}
+
+/**
+ * Every cup of the plan in the order it is mixed: the seal coats first, each coat once the one before is tacky,
+ * then the layers from the floor up. Amounts are the plan's own rounded grams, so the sheet adds up as the plan does.
+ */
+export function runSheetBatches(plan: PourPlan, snapshot: PlanSnapshot): RunSheetBatch[] {
+  const pours: Pour[] = [];
+  const sealTimes = plan.shopTimes.sealCoat;
+  if (plan.sealCoat && snapshot.sealCoat && sealTimes) {
+    for (const coat of plan.sealCoat.coats) {
+      pours.push({ label: `Seal coat ${coat.index + 1}`, batches: coat.batches, product: snapshot.sealCoat, potLifeMin: sealTimes.potLifeMin, shopTempC: sealTimes.tempC, pigmentName: null });
+    }
+  }
+  for (const layer of plan.layers) {
+    pours.push({
+      label: `Layer ${layer.index + 1}`,
+      batches: layer.batches,
+      product: snapshot.deepPour,
+      potLifeMin: plan.shopTimes.deepPour.potLifeMin,
+      shopTempC: plan.shopTimes.deepPour.tempC,
+      pigmentName: plan.deepPour.pigmentName,
+    });
+  }
+  const rows = pours.flatMap((pour) =>
+    pour.batches.map((batch, b) => ({
+      index: batch.index,
+      row: {
+        pourLabel: pour.label,
+        batchInPour: b + 1,
+        batchesInPour: pour.batches.length,
+        product: pour.product,
+        pigmentName: batch.pigment.grams > 0 ? pour.pigmentName : null,
+        partAG: batch.partA.grams,
+        partBG: batch.partB.grams,
+        pigmentG: batch.pigment.grams,
+        totalG: batch.totalGrams,
+        potLifeMin: pour.potLifeMin,
+        shopTempC: pour.shopTempC,
+      },
+    })),
+  );
+  rows.sort((p, q) => p.index - q.index);
+  return rows.map(({ index, row }, i) => ({ index, order: i + 1, of: rows.length, ...row }));
+}

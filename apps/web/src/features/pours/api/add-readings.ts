@@ -1,0 +1,22 @@
+import { ReadingsAdded } from '@gelpoint/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { ReadingsAddedAnswer } from '../types';
+import { refreshPour } from './refresh-pour';
+
+export interface ReadingInput {
+  at: string;
+  tempC: number;
+}
+
+export function addReadings(pourId: string, readings: ReadingInput[]): Promise<ReadingsAddedAnswer> {
+  return api.post(`/pours/${encodeURIComponent(pourId)}/readings`, { readings }, ReadingsAdded);
+}
+
+export function useAddReading(pourId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (reading: ReadingInput) => addReadings(pourId, [reading]),
+    onSuccess: () => refreshPour(queryClient, pourId),
+  });
+}

@@ -1,0 +1,23 @@
+import { LotView, Page } from '@gelpoint/contracts';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { z } from 'zod';
+import { api } from '../../../lib/api-client';
+import { pourKeys, type LotChoicesQuery } from './keys';
+
+const LotPage = Page(LotView);
+export type LotChoices = z.infer<typeof LotPage>;
+
+/** Every lot of one part of one product, expired ones included: the mixing form offers those with stock left. */
+export function getLotChoices(query: LotChoicesQuery, signal?: AbortSignal): Promise<LotChoices> {
+  return api.get('/shelf/lots', LotPage, { query: { ...query, status: 'all', limit: 100 }, ...(signal ? { signal } : {}) });
+}
+
+export const lotChoicesQueryOptions = (query: LotChoicesQuery) =>
+  queryOptions({
+    queryKey: pourKeys.lotChoices(query),
+    queryFn: ({ signal }) => getLotChoices(query, signal),
+  });
+
+export function useLotChoices(query: LotChoicesQuery | null) {
+  return useQuery({ ...lotChoicesQueryOptions(query ?? { part: 'A', productId: '' }), enabled: query !== null });
+}

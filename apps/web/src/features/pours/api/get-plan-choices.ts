@@ -1,0 +1,24 @@
+import { PourPlanList } from '@gelpoint/contracts';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { z } from 'zod';
+import { api } from '../../../lib/api-client';
+import { pourKeys } from './keys';
+
+export type PlanChoices = z.infer<typeof PourPlanList>;
+
+/** The most plans one page offers to start a pour from (the API's largest page). */
+export const planChoicesLimit = 200;
+
+export function getPlanChoices(signal?: AbortSignal): Promise<PlanChoices> {
+  return api.get('/pour-plans', PourPlanList, { query: { limit: planChoicesLimit }, ...(signal ? { signal } : {}) });
+}
+
+export const planChoicesQueryOptions = () =>
+  queryOptions({
+    queryKey: pourKeys.planChoices(),
+    queryFn: ({ signal }) => getPlanChoices(signal),
+  });
+
+export function usePlanChoices() {
+  return useQuery(planChoicesQueryOptions());
+}

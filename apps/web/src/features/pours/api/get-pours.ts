@@ -1,0 +1,25 @@
+import { PourList } from '@gelpoint/contracts';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { PourPage } from '../types';
+import type { CureBoardQuery } from '../utils/cure-board-filters';
+import { pourKeys } from './keys';
+
+/** The board moves on its own as pours cure; a minute is finer than any stage. */
+export const boardRefreshMs = 60_000;
+
+export function getPours(query: CureBoardQuery, signal?: AbortSignal): Promise<PourPage> {
+  return api.get('/pours', PourList, { query: { ...query }, ...(signal ? { signal } : {}) });
+}
+
+export const poursQueryOptions = (query: CureBoardQuery) =>
+  queryOptions({
+    queryKey: pourKeys.list(query),
+    queryFn: ({ signal }) => getPours(query, signal),
+    placeholderData: keepPreviousData,
+    refetchInterval: boardRefreshMs,
+  });
+
+export function usePours(query: CureBoardQuery) {
+  return useQuery(poursQueryOptions(query));
+}

@@ -1,0 +1,21 @@
+import { TodayView } from '@gelpoint/contracts';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { Today } from '../types';
+import { boardRefreshMs } from './get-pours';
+import { pourKeys } from './keys';
+
+export function getToday(signal?: AbortSignal): Promise<Today> {
+  return api.get('/today', TodayView, signal ? { signal } : {});
+}
+
+export const todayQueryOptions = () =>
+  queryOptions({
+    queryKey: pourKeys.today(),
+    queryFn: ({ signal }) => getToday(signal),
+    refetchInterval: boardRefreshMs,
+  });
+
+export function useToday() {
+  return useQuery(todayQueryOptions());
+}

@@ -1,0 +1,26 @@
+import { PourView } from '@gelpoint/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { pourKeys } from './keys';
+
+export interface StartPourInput {
+  pourPlanId: string;
+  notifyUserIds: string[];
+}
+
+export function startPour(input: StartPourInput): Promise<PourView> {
+  return api.post('/pours', input, PourView);
+}
+
+export function useStartPour({ onSuccess }: { onSuccess?: (pour: PourView) => unknown } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: startPour,
+    onSuccess: async (pour) => {
+      queryClient.setQueryData(pourKeys.detail(pour.id), pour);
+      await queryClient.invalidateQueries({ queryKey: pourKeys.lists() });
+      await queryClient.invalidateQueries({ queryKey: pourKeys.today() });
+      await onSuccess?.(pour);
+    },
+  });
+}

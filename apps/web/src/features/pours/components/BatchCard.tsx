@@ -1,0 +1,100 @@
+import type { BatchView, Shop } from '@gelpoint/contracts';
+import { useId, useState } from 'react';
+import { Button } from '../../../components/ui/Button';
+import { cx } from '../../../lib/cx';
+import { useMixingStart } from '../hooks/use-mixing-start';
+import type { RunSheetCup } from '../utils/plan-run-sheet';
+import { LogBatchForm } from './LogBatchForm';
+import { LoggedBatch } from './LoggedBatch';
+import { PotLifeClock } from './PotLifeClock';
+import { TargetAmounts } from './TargetAmounts';
+
+export interface BatchCardProps {
+  pourId: string;
+  cup: RunSheetCup;
+  of: number;
+  logged: BatchView | undefined;
+  shop: Shop;
+  /** Whether batches can still be logged (the pour is open). */
+  open: boolean;
+  /** The next cup to mix gets a stronger frame. */
+  isNext: boolean;
+}
+
+/** One cup of the run sheet: its targets, its pot-life clock and its log. */
+export function BatchCard({ pourId, cup, of, logged, shop, open, isNext }: BatchCardProps) {
+  const headingId = useId();
+  const [logging, setLogging] = useState(false);
+  const mixing = useMixingStart(pourId, cup.index);
+
+  return (
+    <section
+      aria-labelledby={headingId}
+      className={cx('flex flex-col gap-4 rounded-xl border bg-white p-4 shadow-sm sm:p-6', isNext ? 'border-2 border-walnut-800' : 'border-line')}
+    >
+      <header className="flex flex-wrap items-start justify-between gap-3">
+        <div>
+          <h3 id={headingId} className="text-2xl font-bold text-walnut-900">
+            Cup {cup.order} of {of}
+          </h3>
+          <p className="text-ink-soft">
+            {cup.pourLabel} · batch {cup.batchInPour} of {cup.batchesInPour} · {cup.product.name}
+          </p>
+        </div>
+        {logged ? (
+          <span className="inline-flex items-center gap-1.5 rounded-full border border-moss-600 bg-moss-50 px-3 py-1 font-semibold text-moss-700">
+            <span aria-hidden="true">✓</span> Logged
+          </span>
+        ) : (
+          <span className="inline-flex items-center gap-1.5 rounded-full border border-walnut-300 bg-paper px-3 py-1 font-semibold text-walnut-800">
+            <span aria-hidden="true">○</span> To mix
+          </span>
+        )}
+      </header>
+
+      {logged ? null : (
+        <TargetAmounts
+          partAG={cup.targetAG}
+          partBG={cup.targetBG}
+          pigmentG={cup.targetPigmentG}
+          totalG={cup.totalG}
+          pigmentName={cup.pigment?.name ?? null}
+          unitSystem={shop.unitSystem}
+          scaleResolutionG={shop.scaleResolutionG}
+        />
+      )}
+
+      {open && (!logged || mixing.startedAtMs !== null) ? (
+        <PotLifeClock
+          potLifeMin={cup.product.potLifeMin}
+          startedAtMs={mixing.startedAtMs}
+          cupName={`cup ${cup.order}`}
+          onStart={() => {
+            mixing.start();
+            setLogging(true);
+          }}
+          onReset={mixing.clear}
+        />
+      ) : null}
+
+      {logged ? (
+        <LoggedBatch batch={logged} unitSystem={shop.unitSystem} scaleResolutionG={shop.scaleResolutionG} />
+      ) : !open ? null : logging ? (
+        <LogBatchForm
+          pourId={pourId}
+          cup={cup}
+          shop={shop}
+          mixingStartedAtMs={mixing.startedAtMs}
+          onLogged={() => setLogging(false)}
+          onCancel={() => setLogging(false)}
+        />
+      ) : (
+        <div>
+          <Button variant={isNext ? 'primary' : 'secondary'} className="min-h-12! px-5 text-lg" onClick={() => setLogging(true)}>
+            Log this batch
+          </Button>
+        </div>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,24 @@
+import type { ReminderView } from '@gelpoint/contracts';
+import { cx } from '../../../lib/cx';
+import { RelativeTime } from './RelativeTime';
+
+const statusWords = { pending: 'due', sent: 'sent', cancelled: 'cancelled' } as const;
+
+/** The pour's reminders, soonest first; cancelled ones are left out. */
+export function PourReminders({ reminders }: { reminders: readonly ReminderView[] }) {
+  const shown = reminders.filter((r) => r.status !== 'cancelled').sort((p, q) => Date.parse(p.dueAt) - Date.parse(q.dueAt));
+  if (shown.length === 0) return <p className="text-ink-soft">No reminders yet; they are set once the first cup is logged.</p>;
+  return (
+    <ul className="flex flex-col gap-2" aria-label="Reminders of this pour">
+      {shown.map((reminder) => (
+        <li key={reminder.id} className={cx('flex flex-wrap items-baseline gap-x-3 rounded-lg px-3 py-2', reminder.status === 'sent' ? 'bg-paper text-ink-soft' : 'bg-resin-50')}>
+          <span className="font-semibold text-ink">{reminder.title}</span>
+          <span>
+            {statusWords[reminder.status]} <RelativeTime iso={reminder.dueAt} />
+          </span>
+          {reminder.assumed ? <span className="text-sm text-ink-soft">(time rests on the assumed temperature)</span> : null}
+        </li>
+      ))}
+    </ul>
+  );
+}

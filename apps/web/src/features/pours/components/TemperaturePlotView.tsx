@@ -1,0 +1,108 @@
+import { useId } from 'react';
+import { formatDateTime } from '../../../lib/format';
+import type { TemperaturePlot } from '../utils/temperature-plot';
+
+/**
+ * Logged temperatures over time, each held until the next reading as the cure sum counts it; stretches without
+ * readings are dashed and labelled "assumed", and the product's minimum working temperature is a line of its own.
+ */
+export function TemperaturePlotView({ plot, minimumLabel }: { plot: TemperaturePlot; minimumLabel: string }) {
+  const titleId = useId();
+  const descId = useId();
+  const { frame } = plot;
+  const readingSpans = plot.spans.filter((s) => s.source === 'reading');
+  const assumedSpans = plot.spans.filter((s) => s.source === 'assumed');
+  const from = new Date(plot.fromMs).toISOString();
+  const to = new Date(plot.toMs).toISOString();
+  const t = (v: number) => `${v.toFixed(0)} ${plot.unit}`;
+  return (
+    <figure className="flex flex-col gap-2">
+      <svg
+        role="img"
+        aria-labelledby={titleId}
+        aria-describedby={descId}
+        viewBox={`0 0 ${frame.width} ${frame.height}`}
+        className="h-auto w-full rounded-lg border border-line bg-white"
+      >
+        <title id={titleId}>Temperature log</title>
+        <desc id={descId}>
+          {`${plot.dots.length} readings from ${formatDateTime(from)} to ${formatDateTime(to)}; ${assumedSpans.length} stretches assumed; minimum working temperature ${t(plot.minimum.temp)}.`}
+        </desc>
+        {plot.yTicks.map((tick) => (
+          <g key={tick.value}>
+            <line x1={frame.left} x2={frame.width - frame.right} y1={tick.y} y2={tick.y} className="stroke-line" strokeWidth={1} />
+            <text x={frame.left - 6} y={tick.y + 4} textAnchor="end" className="fill-ink-soft text-[11px]">
+              {t(tick.value)}
+            </text>
+          </g>
+        ))}
+        <line x1={frame.left} x2={frame.width - frame.right} y1={plot.minimum.y} y2={plot.minimum.y} className="stroke-ember-600" strokeWidth={2} strokeDasharray="2 3" />
+        <text x={frame.width - frame.right} y={plot.minimum.y - 5} textAnchor="end" className="fill-ember-700 text-[11px] font-semibold">
+          {minimumLabel}
+        </text>
+        {assumedSpans.map((span) => (
+          <g key={`a-${span.from}`}>
+            <rect x={span.x1} y={frame.top} width={Math.max(0, span.x2 - span.x1)} height={frame.height - frame.top - frame.bottom} className="fill-paper-deep" opacity={0.7} />
+            <line x1={span.x1} x2={span.x2} y1={span.y} y2={span.y} className="stroke-walnut-500" strokeWidth={3} strokeDasharray="8 6" />
+            {span.x2 - span.x1 > 48 ? (
+              <text x={(span.x1 + span.x2) / 2} y={span.y - 7} textAnchor="middle" className="fill-walnut-700 text-[11px] font-semibold">
+                assumed
+              </text>
+            ) : null}
+          </g>
+        ))}
+        {readingSpans.map((span, i) => {
+          const next = readingSpans[i + 1];
+          return (
+            <g key={`r-${span.from}`}>
+              <line x1={span.x1} x2={span.x2} y1={span.y} y2={span.y} className={span.stalled ? 'stroke-ember-600' : 'stroke-resin-600'} strokeWidth={3} />
+              {next && Math.abs(next.x1 - span.x2) < 0.5 ? <line x1={span.x2} x2={span.x2} y1={span.y} y2={next.y} className="stroke-resin-600" strokeWidth={1.5} /> : null}
+            </g>
+          );
+        })}
+        {plot.pouredX !== null ? (
+          <g>
+            <line x1={plot.pouredX} x2={plot.pouredX} y1={frame.top} y2={frame.height - frame.bottom} className="stroke-walnut-800" strokeWidth={1.5} />
+            <text
+              x={plot.pouredX > frame.width - frame.right - 60 ? plot.pouredX - 4 : plot.pouredX + 4}
+              y={frame.top + 10}
+              textAnchor={plot.pouredX > frame.width - frame.right - 60 ? 'end' : 'start'}
+              className="fill-walnut-800 text-[11px] font-semibold"
+            >
+              poured
+            </text>
+          </g>
+        ) : null}
+        {plot.dots.map((dot) => (
+          <circle key={dot.at} cx={dot.x} cy={dot.y} r={4} className="fill-walnut-900" />
+        ))}
+        <text x={frame.left} y={frame.height - 10} className="fill-ink-soft text-[11px]">
+          {formatDateTime(from)}
+        </text>
+        <text x={frame.width - frame.right} y={frame.height - 10} textAnchor="end" className="fill-ink-soft text-[11px]">
+          {formatDateTime(to)}
+        </text>
+      </svg>
+      <figcaption className="flex flex-wrap gap-x-5 gap-y-1 text-sm text-ink-soft">
+        <span className="flex items-center gap-1.5">
+          <svg aria-hidden="true" viewBox="0 0 24 8" className="h-2 w-6">
+            <line x1="0" x2="24" y1="4" y2="4" className="stroke-resin-600" strokeWidth="3" />
+          </svg>
+          logged, held until the next reading
+        </span>
+        <span className="flex items-center gap-1.5">
+          <svg aria-hidden="true" viewBox="0 0 24 8" className="h-2 w-6">
+            <line x1="0" x2="24" y1="4" y2="4" className="stroke-walnut-500" strokeWidth="3" strokeDasharray="6 4" />
+          </svg>
+          assumed (no reading)
+        </span>
+        <span className="flex items-center gap-1.5">
+          <svg aria-hidden="true" viewBox="0 0 24 8" className="h-2 w-6">
+            <line x1="0" x2="24" y1="4" y2="4" className="stroke-ember-600" strokeWidth="2" strokeDasharray="2 3" />
+          </svg>
+          {minimumLabel}
+        </span>
+      </figcaption>
+    </figure>
+  );
+}

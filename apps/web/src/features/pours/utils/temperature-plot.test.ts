@@ -1,0 +1,104 @@
+import { describe, expect, it } from 'vitest';
+import { temperaturePlot, type PlotFrame } from './temperature-plot';
+
+const frame: PlotFrame = { width: 600, height: 240, left: 40, right: 20, top: 20, bottom: 20 };
+const product = { referenceTempC: 22, minWorkTempC: 16 };
+
+// Coordinates are the affine map of SVG user space, worked by hand:
+// x = left + (t − t0)/(t1 − t0)·(width − left − right), y = top + (high − T)/(high − low)·(height − top − bottom).
+describe('temperaturePlot', () => {
+  it('holds each reading until the next and marks the unlogged stretch after the last as assumed', () => {
+    const plot = temperaturePlot({
+      readings: [
+        { at: '2026-03-01T00:00:00Z', tempC: 20 },
+        { at: '2026-03-01T06:00:00Z', tempC: 14 },
+      ],
+      pouredAt: '2026-03-01T00:00:00Z',
+      asOf: '2026-03-01T12:00:00Z',
+      assumedTempC: 21,
+      product,
+      unitSystem: 'metric',
+      frame,
+    });
+    expect(plot).not.toBeNull();
+    const p = plot!;
+    // Temperatures 14, 20, 21 and the 16 °C minimum on 5 °C steps: 10 to 25 °C.
+    expect(p.yTicks.map((t) => t.value)).toEqual([10, 15, 20, 25]);
+    expect(p.spans.map((s) => s.source)).toEqual(['reading', 'assumed']);
+    const [logged, assumed] = p.spans;
+    expect(logged!.x1).toBeCloseTo(40, 9);
+    // 6 h of 12 h across 540 units: 40 + 270.
+    expect(logged!.x2).toBeCloseTo(310, 9);
+    // 20 °C on 10..25 over 200 units: 20 + (25 − 20)/15·200.
+    expect(logged!.y).toBeCloseTo(20 + (5 / 15) * 200, 9);
+    expect(assumed!.temp).toBe(21);
+    expect(assumed!.x2).toBeCloseTo(580, 9);
+    // 16 °C: 20 + 9/15·200.
+    expect(p.minimum.y).toBeCloseTo(20 + (9 / 15) * 200, 9);
+    expect(p.dots).toHaveLength(2);
+  });
+
+  it('marks a span below the minimum as stalled', () => {
+    const plot = temperaturePlot({
+      readings: [
+        { at: '2026-03-01T00:00:00Z', tempC: 12 },
+        { at: '2026-03-01T04:00:00Z', tempC: 18 },
+      ],
+      pouredAt: '2026-03-01T00:00:00Z',
+      asOf: '2026-03-01T04:00:00Z',
+      assumedTempC: 20,
+      product,
+      unitSystem: 'metric',
+      frame,
+    });
+    expect(plot?.spans).toHaveLength(1);
+    expect(plot?.spans[0]?.stalled).toBe(true);
+  });
+
+  it('plots a US shop in °F on 10 °F steps', () => {
+    // NIST SP 811: 20 °C = 68 °F, 16 °C = 60.8 °F.
+    const plot = temperaturePlot({
+      readings: [{ at: '2026-03-01T00:00:00Z', tempC: 20 }],
+      pouredAt: '2026-03-01T00:00:00Z',
+      asOf: '2026-03-01T02:00:00Z',
+      assumedTempC: 20,
+      product,
+      unitSystem: 'us',
+      frame,
+    });
+    expect(plot?.unit).toBe('°F');
+    expect(plot?.dots[0]?.temp).toBeCloseTo(68, 9);
+    expect(plot?.minimum.temp).toBeCloseTo(60.8, 9);
+    expect(plot?.yTicks.map((t) => t.value)).toEqual([60, 70]);
+  });
+
+  it('draws the assumed temperature alone before any reading is logged', () => {
+    const plot = temperaturePlot({ readings: [], pouredAt: '2026-03-01T00:00:00Z', asOf: '2026-03-01T03:00:00Z', assumedTempC: 19, product, unitSystem: 'metric', frame });
+    expect(plot?.spans.map((s) => s.source)).toEqual(['assumed']);
+    expect(plot?.dots).toEqual([]);
+  });
+
+  it('counts only from the pour, even when the page’s clock lags behind it', () => {
+    const plot = temperaturePlot({
+      readings: [
+        { at: '2026-03-01T00:00:00Z', tempC: 20 },
+        { at: '2026-03-01T02:00:00Z', tempC: 21 },
+      ],
+      pouredAt: '2026-03-01T06:00:00Z',
+      asOf: '2026-03-01T05:59:30Z',
+      assumedTempC: 19,
+      product,
+      unitSystem: 'metric',
+      frame,
+    });
+    // The readings before the pour are shown as dots but add no cure, as in core's windowed sum.
+    expect(plot?.dots).toHaveLength(2);
+    expect(plot?.spans).toEqual([]);
+    // 6 h of 6 h: the right edge, 40 + 540.
+    expect(plot?.pouredX).toBeCloseTo(580, 9);
+  });
+
+  it('has nothing to plot with neither readings nor a pour', () => {
+    expect(temperaturePlot({ readings: [], pouredAt: null, asOf: '2026-03-01T03:00:00Z', assumedTempC: 19, product, unitSystem: 'metric', frame })).toBeNull();
+  });
+});

@@ -1,0 +1,118 @@
+import { activationEnergyOf, equivalentAge, parseIsoInstant, type CureReading, type UnitSystem } from '@gelpoint/core';
+import { hourMs } from './relative-time';
+import { temperatureFromC } from './shop-units';
+
+export interface PlotFrame {
+  width: number;
+  height: number;
+  left: number;
+  right: number;
+  top: number;
+  bottom: number;
+}
+
+export const defaultPlotFrame: PlotFrame = { width: 640, height: 240, left: 48, right: 16, top: 16, bottom: 36 };
+
+export interface PlotSpan {
+  source: 'reading' | 'assumed';
+  /** Below the product's minimum: counted in time, adds nothing to the cure. */
+  stalled: boolean;
+  from: string;
+  to: string;
+  x1: number;
+  x2: number;
+  y: number;
+  /** The temperature held over the span, in the shop's unit. */
+  temp: number;
+}
+
+export interface TemperaturePlot {
+  frame: PlotFrame;
+  unit: '°C' | '°F';
+  fromMs: number;
+  toMs: number;
+  spans: PlotSpan[];
+  dots: { x: number; y: number; at: string; temp: number }[];
+  minimum: { y: number; temp: number };
+  /** Where the cure clock starts, when a cup has been logged. */
+  pouredX: number | null;
+  yTicks: { y: number; value: number }[];
+}
+
+export interface TemperaturePlotInput {
+  readings: readonly CureReading[];
+  /** When the cure clock started; null before the first batch is logged. */
+  pouredAt: string | null;
+  asOf: string;
+  assumedTempC: number;
+  product: { referenceTempC: number; minWorkTempC: number; activationEnergyKJPerMol?: number | undefined };
+  unitSystem: UnitSystem;
+  frame?: PlotFrame;
+}
+
+const toMs = (iso: string) => {
+  const parsed = parseIsoInstant(iso);
+  return parsed.ok ? parsed.value : Number.NaN;
+};
+
+/**
+ * The cure log's temperature plot: each reading held until the next, and the stretches where core had to assume the
+ * plan's temperature, exactly as core's equivalent-age sum counts them. Coordinates are SVG user units.
+ */
+export function temperaturePlot(input: TemperaturePlotInput): TemperaturePlot | null {
+  const frame = input.frame ?? defaultPlotFrame;
+  const readings = input.readings.filter((r) => Number.isFinite(toMs(r.at))).sort((p, q) => toMs(p.at) - toMs(q.at));
+  if (readings.length === 0 && input.pouredAt === null) return null;
+
+  const ea = activationEnergyOf({ referenceTempC: input.product.referenceTempC, ...(input.product.activationEnergyKJPerMol === undefined ? {} : { activationEnergyKJPerMol: input.product.activationEnergyKJPerMol }) });
+  const asOfMs = toMs(input.asOf);
+  const pouredMs = input.pouredAt === null ? Number.NaN : toMs(input.pouredAt);
+  // A page's clock can lag the server's by a moment: a pour logged "after now" still counts from its own time.
+  const untilIso = asOfMs >= pouredMs ? input.asOf : input.pouredAt!;
+  const age =
+    Number.isFinite(pouredMs)
+      ? equivalentAge({ readings: [...readings], refTempC: input.product.referenceTempC, activationEnergyKJPerMol: ea, minTempC: input.product.minWorkTempC, window: { from: input.pouredAt!, to: untilIso }, assumedTempC: input.assumedTempC })
+      : readings.length > 1
+        ? equivalentAge({ readings: [...readings], refTempC: input.product.referenceTempC, activationEnergyKJPerMol: ea, minTempC: input.product.minWorkTempC })
+        : null;
+  const coreSpans = age?.ok ? age.value.spans : [];
+
+  const times = [...readings.map((r) => toMs(r.at)), ...coreSpans.flatMap((s) => [s.fromMs, s.toMs])];
+  if (Number.isFinite(pouredMs)) times.push(pouredMs);
+  let fromMs = Math.min(...times);
+  let untilMs = Math.max(...times);
+  if (!(untilMs > fromMs)) {
+    fromMs -= hourMs / 2;
+    untilMs += hourMs / 2;
+  }
+
+  const shown = (tempC: number) => temperatureFromC(tempC, input.unitSystem);
+  const temps = [...readings.map((r) => shown(r.tempC)), ...coreSpans.map((s) => shown(s.tempC)), shown(input.product.minWorkTempC)];
+  const step = input.unitSystem === 'us' ? 10 : 5;
+  let low = Math.floor(Math.min(...temps) / step) * step;
+  let high = Math.ceil(Math.max(...temps) / step) * step;
+  if (high === low) {
+    low -= step;
+    high += step;
+  }
+
+  const plotWidth = frame.width - frame.left - frame.right;
+  const plotHeight = frame.height - frame.top - frame.bottom;
+  const x = (ms: number) => frame.left + ((ms - fromMs) / (untilMs - fromMs)) * plotWidth;
+  const y = (temp: number) => frame.top + ((high - temp) / (high - low)) * plotHeight;
+
+  const yTicks: { y: number; value: number }[] = [];
+  for (let value = low; value <= high + 1e-9; value += step) yTicks.push({ y: y(value), value });
+
+  return {
+    frame,
+    unit: input.unitSystem === 'us' ? '°F' : '°C',
+    fromMs,
+    toMs: untilMs,
+    spans: coreSpans.map((s) => ({ source: s.source, stalled: s.stalled, from: s.from, to: s.to, x1: x(s.fromMs), x2: x(s.toMs), y: y(shown(s.tempC)), temp: shown(s.tempC) })),
+    dots: readings.map((r) => ({ x: x(toMs(r.at)), y: y(shown(r.tempC)), at: r.at, temp: shown(r.tempC) })),
+    minimum: { y: y(shown(input.product.minWorkTempC)), temp: shown(input.product.minWorkTempC) },
+    pouredX: Number.isFinite(pouredMs) ? x(pouredMs) : null,
+    yTicks,
+  };
+}

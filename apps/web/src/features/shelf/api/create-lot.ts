@@ -1,0 +1,20 @@
+import { LotView, type LotInput } from '@gelpoint/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { shelfKeys } from './keys';
+
+export function createLot(body: LotInput): Promise<LotView> {
+  return api.post('/shelf/lots', body, LotView);
+}
+
+export function useCreateLot({ onSuccess }: { onSuccess?: (lot: LotView) => unknown } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createLot,
+    onSuccess: async (lot) => {
+      queryClient.setQueryData(shelfKeys.lot(lot.id), lot);
+      await queryClient.invalidateQueries({ queryKey: shelfKeys.lotLists() });
+      await onSuccess?.(lot);
+    },
+  });
+}

@@ -1,0 +1,24 @@
+import { Page, PigmentView } from '@gelpoint/contracts';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { z } from 'zod';
+import { api } from '../../../lib/api-client';
+import type { ShelfListQuery } from '../utils/shelf-queries';
+import { shelfKeys } from './keys';
+
+export const PigmentPage = Page(PigmentView);
+export type PigmentPage = z.infer<typeof PigmentPage>;
+
+export function getPigments(query: ShelfListQuery, signal?: AbortSignal): Promise<PigmentPage> {
+  return api.get('/shelf/pigments', PigmentPage, { query: { ...query }, ...(signal ? { signal } : {}) });
+}
+
+export const pigmentsQueryOptions = (query: ShelfListQuery) =>
+  queryOptions({
+    queryKey: shelfKeys.pigmentList(query),
+    queryFn: ({ signal }) => getPigments(query, signal),
+    placeholderData: keepPreviousData,
+  });
+
+export function usePigments(query: ShelfListQuery) {
+  return useQuery(pigmentsQueryOptions(query));
+}

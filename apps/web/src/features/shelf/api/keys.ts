@@ -1,0 +1,17 @@
+import type { LotListQuery, ShelfListQuery } from '../utils/shelf-queries';
+
+export const shelfKeys = {
+  all: ['shelf'] as const,
+  resinSystems: () => [...shelfKeys.all, 'resin-systems'] as const,
+  resinSystemLists: () => [...shelfKeys.resinSystems(), 'list'] as const,
+  resinSystemList: (query: ShelfListQuery) => [...shelfKeys.resinSystemLists(), query] as const,
+  resinSystem: (resinSystemId: string) => [...shelfKeys.resinSystems(), 'detail', resinSystemId] as const,
+  pigments: () => [...shelfKeys.all, 'pigments'] as const,
+  pigmentLists: () => [...shelfKeys.pigments(), 'list'] as const,
+  pigmentList: (query: ShelfListQuery) => [...shelfKeys.pigmentLists(), query] as const,
+  pigment: (pigmentId: string) => [...shelfKeys.pigments(), 'detail', pigmentId] as const,
+  lots: () => [...shelfKeys.all, 'lots'] as const,
+  lotLists: () => [...shelfKeys.lots(), 'list'] as const,
+  lotList: (query: LotListQuery) => [...shelfKeys.lotLists(), query] as const,
+  lot: (lotId: string) => [...shelfKeys.lots(), 'detail', lotId] as const,
+};

@@ -1,0 +1,28 @@
+import { ResinSystemView, type ResinSystemInput } from '@gelpoint/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { shelfKeys } from './keys';
+import { api } from '../../../lib/api-client';
+
+export interface UpdateResinSystemInput {
+  resinSystemId: string;
+  /** The whole data sheet: the API replaces the entry, it does not merge. */
+  values: ResinSystemInput;
+}
+
+export function updateResinSystem({ resinSystemId, values }: UpdateResinSystemInput): Promise<ResinSystemView> {
+  return api.put(`/shelf/resin-systems/${encodeURIComponent(resinSystemId)}`, values, ResinSystemView);
+}
+
+export function useUpdateResinSystem({ onSuccess }: { onSuccess?: (resinSystem: ResinSystemView) => unknown } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateResinSystem,
+    onSuccess: async (resinSystem) => {
+      queryClient.setQueryData(shelfKeys.resinSystem(resinSystem.id), resinSystem);
+      // Lots show the product's name.
+      await queryClient.invalidateQueries({ queryKey: shelfKeys.resinSystemLists() });
+      await queryClient.invalidateQueries({ queryKey: shelfKeys.lotLists() });
+      await onSuccess?.(resinSystem);
+    },
+  });
+}

@@ -1,0 +1,84 @@
+import { PigmentInput, PigmentKind, type PigmentView } from '@gelpoint/contracts';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm, type FieldPath } from 'react-hook-form';
+import type { z } from 'zod';
+import { Button } from '../../../components/ui/Button';
+import { Field } from '../../../components/ui/Field';
+import { FormAlert } from '../../../components/ui/FormAlert';
+import { Input } from '../../../components/ui/Input';
+import { Select } from '../../../components/ui/Select';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { newPigmentDefaults, pigmentInputOf } from '../utils/form-defaults';
+import { requiredNumber } from '../utils/number-fields';
+import { pigmentKindWords } from '../utils/shelf-words';
+import { FormSection } from './FormSection';
+
+type FormInput = z.input<typeof PigmentInput>;
+type FormOutput = z.output<typeof PigmentInput>;
+
+const kindOptions = PigmentKind.options.map((kind) => ({ value: kind, label: pigmentKindWords[kind] }));
+const fieldNames: readonly FieldPath<FormInput>[] = ['name', 'kind', 'recommendedPct', 'maxPct', 'pricePerPack', 'packSizeG'];
+
+export interface PigmentFormProps {
+  pigment?: PigmentView;
+  submitLabel: string;
+  busyLabel: string;
+  busy: boolean;
+  save: (values: FormOutput) => Promise<unknown>;
+}
+
+export function PigmentForm({ pigment, submitLabel, busyLabel, busy, save }: PigmentFormProps) {
+  const [formError, setFormError] = useState<string | null>(null);
+  const form = useForm<FormInput, unknown, FormOutput>({
+    resolver: zodResolver(PigmentInput),
+    defaultValues: pigment ? pigmentInputOf(pigment) : newPigmentDefaults,
+  });
+  const { errors } = form.formState;
+  const number = (name: FieldPath<FormInput>) => form.register(name, { setValueAs: requiredNumber });
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    setFormError(null);
+    try {
+      await save(values);
+      form.reset(values);
+    } catch (error) {
+      setFormError(applyServerErrors(error, form.setError, fieldNames));
+    }
+  });
+
+  return (
+    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-6" aria-label={pigment ? `Edit ${pigment.name}` : 'New pigment'}>
+      <FormAlert message={formError} title="Could not save the pigment" />
+      <FormSection legend="Pigment">
+        <Field label="Name" error={errors.name?.message} required>
+          {(control) => <Input {...control} maxLength={120} {...form.register('name')} />}
+        </Field>
+        <Field label="Kind" error={errors.kind?.message} required>
+          {(control) => <Select {...control} options={kindOptions} {...form.register('kind')} />}
+        </Field>
+      </FormSection>
+      <FormSection legend="Loading" hint="Pigment is weighed as a share of the mass of part A and part B together.">
+        <Field label="Recommended loading (% of resin mass)" error={errors.recommendedPct?.message} required>
+          {(control) => <Input {...control} inputMode="decimal" {...number('recommendedPct')} />}
+        </Field>
+        <Field label="Maximum loading (% of resin mass)" hint="Above this the resin may not cure fully." error={errors.maxPct?.message} required>
+          {(control) => <Input {...control} inputMode="decimal" {...number('maxPct')} />}
+        </Field>
+      </FormSection>
+      <FormSection legend="Price">
+        <Field label="Price per pack (shop currency)" error={errors.pricePerPack?.message} required>
+          {(control) => <Input {...control} inputMode="decimal" {...number('pricePerPack')} />}
+        </Field>
+        <Field label="Pack size (g)" error={errors.packSizeG?.message} required>
+          {(control) => <Input {...control} inputMode="decimal" {...number('packSizeG')} />}
+        </Field>
+      </FormSection>
+      <div>
+        <Button type="submit" busy={busy} busyLabel={busyLabel}>
+          {submitLabel}
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,22 @@
+import type { PigmentView } from '@gelpoint/contracts';
+import { formatMass, type UnitSystem } from '@gelpoint/core';
+import { pigmentKindWords } from '../utils/shelf-words';
+import { DataSheet } from './DataSheet';
+
+export function PigmentSheet({ pigment: p, unitSystem }: { pigment: PigmentView; unitSystem: UnitSystem }) {
+  return (
+    <DataSheet
+      groups={[
+        {
+          title: 'Loading',
+          rows: [
+            { term: 'Kind', value: pigmentKindWords[p.kind] },
+            { term: 'Recommended', value: `${p.recommendedPct} % of resin mass` },
+            { term: 'Maximum', value: `${p.maxPct} % of resin mass` },
+          ],
+        },
+        { title: 'Price', rows: [{ term: 'Pack', value: `${p.pricePerPack.toFixed(2)} for ${formatMass(p.packSizeG, unitSystem).text}` }] },
+      ]}
+    />
+  );
+}

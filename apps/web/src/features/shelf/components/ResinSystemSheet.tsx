@@ -1,0 +1,58 @@
+import type { ResinSystemView } from '@gelpoint/contracts';
+import { formatLength, formatMass, formatTemperature, type UnitSystem } from '@gelpoint/core';
+import { mixRatioText, resinUseWords } from '../utils/shelf-words';
+import { DataSheet } from './DataSheet';
+
+export function ResinSystemSheet({ resinSystem: r, unitSystem }: { resinSystem: ResinSystemView; unitSystem: UnitSystem }) {
+  const temp = (tempC: number) => formatTemperature(tempC, unitSystem).text;
+  return (
+    <DataSheet
+      groups={[
+        {
+          title: 'Product',
+          rows: [
+            { term: 'Maker', value: r.maker || 'Not noted' },
+            { term: 'Use', value: resinUseWords[r.use] },
+            { term: 'Shelf life', value: `${r.shelfLifeMonths} months` },
+          ],
+        },
+        {
+          title: 'Mix',
+          rows: [
+            { term: 'Mix ratio', value: mixRatioText(r.mixRatio) },
+            { term: 'Density of part A', value: `${r.densityAGPerMl} g/mL` },
+            { term: 'Density of part B', value: `${r.densityBGPerMl} g/mL` },
+          ],
+        },
+        {
+          title: `Times at ${temp(r.referenceTempC)}`,
+          rows: [
+            { term: 'Pot life', value: `${r.potLifeMin} min` },
+            { term: 'Gel time', value: `${r.gelTimeH} h` },
+            { term: 'Tack-free', value: `${r.tackFreeH} h` },
+            { term: 'Recoat window', value: `${r.recoatWindow.earliestH} h to ${r.recoatWindow.latestH} h` },
+            { term: 'Demold', value: `${r.demoldH} h` },
+            { term: 'Full cure', value: `${r.fullCureH} h` },
+            { term: 'Ready to machine', value: r.readyToMachineH === null ? 'at full cure' : `${r.readyToMachineH} h` },
+            {
+              term: 'Activation energy used',
+              value: `${r.effectiveActivationEnergyKJPerMol.toFixed(1)} kJ/mol${r.activationEnergyKJPerMol === null ? ' (common-practice default)' : ''}`,
+            },
+          ],
+        },
+        {
+          title: 'Limits',
+          rows: [
+            { term: 'Maximum layer', value: formatLength(r.maxLayerMm, unitSystem).text },
+            { term: 'Maximum batch', value: formatMass(r.maxBatchG, unitSystem).text },
+            { term: 'Working temperature', value: `${temp(r.minWorkTempC)} to ${temp(r.maxWorkTempC)}` },
+          ],
+        },
+        {
+          title: 'Price',
+          rows: [{ term: 'Kit', value: `${r.pricePerKit.toFixed(2)} for ${formatMass(r.kitSizeG, unitSystem).text}` }],
+        },
+      ]}
+    />
+  );
+}

@@ -1,0 +1,90 @@
+import type { ResinSystemView } from '@gelpoint/contracts';
+import { formatLength, formatMass, type UnitSystem } from '@gelpoint/core';
+import { Link } from 'react-router';
+import { Table, Td, Th, Thead, Tr } from '../../../components/ui/Table';
+import { paths } from '../../../config/paths';
+import { sortRows, type SortState, type SortValue } from '../utils/table-sort';
+import { mixRatioText, resinUseWords } from '../utils/shelf-words';
+import { ArchivedMark } from './ArchivedMark';
+import { SortableTh } from './SortableTh';
+
+function sortValue(product: ResinSystemView, key: string): SortValue {
+  switch (key) {
+    case 'name':
+      return product.name;
+    case 'use':
+      return resinUseWords[product.use];
+    case 'potLifeMin':
+      return product.potLifeMin;
+    case 'maxLayerMm':
+      return product.maxLayerMm;
+    case 'maxBatchG':
+      return product.maxBatchG;
+    case 'pricePerKg':
+      return product.pricePerKit / product.kitSizeG;
+    default:
+      return null;
+  }
+}
+
+export interface ResinSystemsTableProps {
+  resinSystems: readonly ResinSystemView[];
+  unitSystem: UnitSystem;
+  sort: SortState | undefined;
+  onSort: (key: string) => void;
+}
+
+export function ResinSystemsTable({ resinSystems, unitSystem, sort, onSort }: ResinSystemsTableProps) {
+  const rows = sortRows(resinSystems, sort, sortValue);
+  const header = { sort, onSort };
+  return (
+    <Table caption="Resin systems on the shelf">
+      <Thead>
+        <tr>
+          <SortableTh sortKey="name" {...header}>
+            Product
+          </SortableTh>
+          <SortableTh sortKey="use" {...header}>
+            Use
+          </SortableTh>
+          <Th>Mix ratio</Th>
+          <SortableTh sortKey="potLifeMin" {...header}>
+            Pot life
+          </SortableTh>
+          <SortableTh sortKey="maxLayerMm" {...header}>
+            Maximum layer
+          </SortableTh>
+          <SortableTh sortKey="maxBatchG" {...header}>
+            Maximum batch
+          </SortableTh>
+          <SortableTh sortKey="pricePerKg" {...header}>
+            Price per kit
+          </SortableTh>
+        </tr>
+      </Thead>
+      <tbody>
+        {rows.map((product) => (
+          <Tr key={product.id}>
+            <Td>
+              <Link to={paths.resinSystem.getHref(product.id)} className="font-semibold text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4">
+                {product.name}
+              </Link>
+              {product.archived ? <ArchivedMark /> : null}
+              {product.maker ? <span className="block text-sm text-ink-soft">{product.maker}</span> : null}
+            </Td>
+            <Td>{resinUseWords[product.use]}</Td>
+            <Td>{mixRatioText(product.mixRatio)}</Td>
+            <Td>
+              {product.potLifeMin} min at {product.referenceTempC} °C
+            </Td>
+            <Td>{formatLength(product.maxLayerMm, unitSystem).text}</Td>
+            <Td>{formatMass(product.maxBatchG, unitSystem).text}</Td>
+            <Td>
+              {product.pricePerKit.toFixed(2)} for {formatMass(product.kitSizeG, unitSystem).text}
+            </Td>
+          </Tr>
+        ))}
+      </tbody>
+    </Table>
+  );
+}

@@ -1,0 +1,3 @@
+import { LotPart } from '@gelpoint/contracts';
+
+export const lotParts = LotPart.options;

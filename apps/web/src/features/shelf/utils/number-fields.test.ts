@@ -1,0 +1,28 @@
+import { ResinSystemInput } from '@gelpoint/contracts';
+import { describe, expect, it } from 'vitest';
+import { optionalNumber, optionalText, requiredNumber } from './number-fields';
+
+describe('number fields', () => {
+  it('reads typed numbers, a decimal comma too', () => {
+    expect(requiredNumber('1.16')).toBe(1.16);
+    expect(requiredNumber(' 0,97 ')).toBe(0.97);
+    expect(optionalNumber('55')).toBe(55);
+  });
+
+  it('turns an empty required field into NaN and an empty optional one into null', () => {
+    expect(requiredNumber('')).toBeNaN();
+    expect(optionalNumber('  ')).toBeNull();
+    expect(optionalNumber(Number.NaN)).toBeNull();
+    expect(optionalText('')).toBeNull();
+    expect(optionalText(' 2027-01-31 ')).toBe('2027-01-31');
+  });
+
+  // Reference: the API's own zod contract must refuse an empty required number with its sentence, and accept null.
+  it('hands the contract values it refuses or accepts in its own words', () => {
+    const shape = ResinSystemInput.safeParse({ potLifeMin: requiredNumber(''), activationEnergyKJPerMol: optionalNumber('') });
+    expect(shape.success).toBe(false);
+    const messages = shape.error!.issues.map((issue) => `${issue.path.join('.')}: ${issue.message}`);
+    expect(messages).toContain('potLifeMin: pot life must be a number');
+    expect(messages.some((m) => m.startsWith('activationEnergyKJPerMol'))).toBe(false);
+  });
+});

@@ -1,0 +1,21 @@
+/**
+ * Form inputs hand over text. A required number that is left empty becomes NaN, which the contract refuses with its
+ * own sentence ("pot life must be a number"); an optional one becomes null, which the contract reads as "not given".
+ */
+export function requiredNumber(raw: unknown): number {
+  if (typeof raw === 'number') return raw;
+  const text = String(raw ?? '').trim().replace(',', '.');
+  return text === '' ? Number.NaN : Number(text);
+}
+
+export function optionalNumber(raw: unknown): number | null {
+  if (raw === null || raw === undefined) return null;
+  if (typeof raw === 'number') return Number.isNaN(raw) ? null : raw;
+  const text = String(raw).trim().replace(',', '.');
+  return text === '' ? null : Number(text);
+}
+
+export function optionalText(raw: unknown): string | null {
+  const text = String(raw ?? '').trim();
+  return text === '' ? null : text;
+}
