@@ -59,6 +59,13 @@ describe('the foundation in a real browser', () => {
     expect(joined.watch.problems).toEqual([]);
     await invitee.close();
 
+    await page.goto(`${stack.baseUrl}/shop-settings`);
+    await page.getByLabel('Off-ratio tolerance (%)').fill('4');
+    await page.getByRole('button', { name: 'Save settings' }).click();
+    await expect.poll(() => page.getByText('Settings saved').isVisible()).toBe(true);
+    await page.getByRole('button', { name: 'Issue a thermometer token' }).click();
+    await expect.poll(async () => (await page.getByLabel('Thermometer token').textContent())?.length ?? 0).toBeGreaterThan(20);
+
     await page.getByRole('button', { name: 'Sign out' }).first().click();
     await page.waitForURL(/\/sign-in/);
     await page.goto(`${stack.baseUrl}/pieces`);

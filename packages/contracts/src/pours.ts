@@ -148,3 +148,4 @@ export const TodayView = z.object({
 });
 
 export const IngestToken = z.object({ token: z.string().describe('shown once: give it to the shop thermometer as X-Gelpoint-Ingest-Token') });
+export type IngestToken = z.infer<typeof IngestToken>;

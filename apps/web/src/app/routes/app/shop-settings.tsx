@@ -8,6 +8,7 @@ import { QueryResult } from '../../../components/ui/QueryResult';
 import { authKeys } from '../../../features/auth/api/keys';
 import { shopQueryOptions, useShop } from '../../../features/shop/api/get-shop';
 import { ShopSettingsForm } from '../../../features/shop/components/ShopSettingsForm';
+import { ThermometerToken } from '../../../features/shop/components/ThermometerToken';
 import { can } from '../../../lib/authorization';
 import { useSignedInSession } from '../../signed-in-session';
 import { requireSession } from '../../session-loaders';
@@ -36,7 +37,8 @@ function SettingsArea() {
   const queryClient = useQueryClient();
   const shop = useShop();
   return (
-    <Card className="max-w-2xl">
+    <div className="flex max-w-2xl flex-col gap-6">
+    <Card>
       <QueryResult query={shop} loadingLabel="Loading the settings…">
         {(current) => (
           <ShopSettingsForm
@@ -48,5 +50,9 @@ function SettingsArea() {
         )}
       </QueryResult>
     </Card>
+    <Card>
+      <ThermometerToken />
+    </Card>
+    </div>
   );
 }

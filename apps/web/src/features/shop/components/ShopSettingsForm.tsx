@@ -15,10 +15,16 @@ import { useUpdateShop } from '../api/update-shop';
 // Radio inputs hand over strings; the scale resolution travels as a number.
 const SettingsFields = UpdateShopRequest.required().extend({
   scaleResolutionG: z.enum(['0.1', '1'], { message: 'choose a scale resolution' }).transform(Number).pipe(ScaleResolutionG),
+  offRatioTolerancePct: z
+    .string()
+    .trim()
+    .min(1, { message: 'the off-ratio tolerance is required' })
+    .transform(Number)
+    .pipe(UpdateShopRequest.shape.offRatioTolerancePct.unwrap()),
 });
 type SettingsInput = z.input<typeof SettingsFields>;
 type SettingsValues = z.output<typeof SettingsFields>;
-const fieldNames = ['name', 'unitSystem', 'scaleResolutionG'] as const;
+const fieldNames = ['name', 'unitSystem', 'scaleResolutionG', 'offRatioTolerancePct'] as const;
 
 const unitChoices = [
   { value: 'metric', label: 'Metric', hint: 'millimetres, millilitres, grams' },
@@ -39,6 +45,7 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
       name: shop.name,
       unitSystem: shop.unitSystem,
       scaleResolutionG: shop.scaleResolutionG === 0.1 ? '0.1' : '1',
+      offRatioTolerancePct: String(shop.offRatioTolerancePct),
     },
   });
   const update = useUpdateShop({ onSuccess: onSaved });
@@ -49,7 +56,12 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
     setSaved(false);
     try {
       const updated = await update.mutateAsync(values);
-      form.reset({ name: updated.name, unitSystem: updated.unitSystem, scaleResolutionG: updated.scaleResolutionG === 0.1 ? '0.1' : '1' });
+      form.reset({
+        name: updated.name,
+        unitSystem: updated.unitSystem,
+        scaleResolutionG: updated.scaleResolutionG === 0.1 ? '0.1' : '1',
+        offRatioTolerancePct: String(updated.offRatioTolerancePct),
+      });
       setSaved(true);
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, fieldNames));
@@ -70,6 +82,14 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
         error={errors.scaleResolutionG?.message}
         inputProps={form.register('scaleResolutionG')}
       />
+      <Field
+        label="Off-ratio tolerance (%)"
+        hint="A batch whose weighed A:B differs from the run sheet by more than this is flagged when it is logged."
+        error={errors.offRatioTolerancePct?.message}
+        required
+      >
+        {(control) => <Input {...control} inputMode="decimal" {...form.register('offRatioTolerancePct')} />}
+      </Field>
       <div>
         <Button type="submit" busy={update.isPending} busyLabel="Saving…">
           Save settings

@@ -2,6 +2,7 @@ import { Id } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { data, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
+import { ButtonLink } from '../../../../components/ui/ButtonLink';
 import { Card } from '../../../../components/ui/Card';
 import { DateTime } from '../../../../components/ui/DateTime';
 import { DocumentTitle } from '../../../../components/ui/DocumentTitle';
@@ -54,9 +55,20 @@ export function Component() {
             title={current.name}
             description={<PieceStageBadge stage={current.stage} />}
             actions={
-              mayDelete ? (
-                <DeletePieceButton piece={current} onDeleted={() => navigate(paths.pieces.getHref(), { replace: true })} />
-              ) : null
+              <>
+                <ButtonLink variant="secondary" to={paths.pourPlans.getHref({ pieceId: current.id })}>
+                  Pour plans
+                </ButtonLink>
+                {mayEdit ? (
+                  <>
+                    <ButtonLink variant="secondary" to={paths.newMould.getHref({ pieceId: current.id })}>
+                      Upload its mould
+                    </ButtonLink>
+                    <ButtonLink to={paths.newPourPlan.getHref(current.id)}>Plan a pour</ButtonLink>
+                  </>
+                ) : null}
+                {mayDelete ? <DeletePieceButton piece={current} onDeleted={() => navigate(paths.pieces.getHref(), { replace: true })} /> : null}
+              </>
             }
           />
           {mayEdit ? (

@@ -62,6 +62,9 @@ export function Component() {
         actions={
           <>
             <ButtonLink to={paths.runSheet.getHref(current.id)}>Run sheet</ButtonLink>
+            <ButtonLink variant="secondary" to={paths.newPour.getHref({ planId: current.id })}>
+              Start the pour
+            </ButtonLink>
             {mayPlan ? (
               <>
                 {saved.ok && saved.value.input ? (
