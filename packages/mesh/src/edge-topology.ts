@@ -23,9 +23,12 @@ export interface EdgeTopology {
 export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNeighbours = false): EdgeTopology {
   const halfEdges = triangles.length;
   const start = new Uint32Array(vertexCount + 1);
-  for (let e = 0; e < halfEdges; e++) {
-    const a = triangles[e]!, b = triangles[e % 3 === 2 ? e - 2 : e + 1]!;
+  // Triangle by triangle, its three half-edges a→b, b→c, c→a (no modulo per half-edge).
+  for (let e = 0; e < halfEdges; e += 3) {
+    const a = triangles[e]!, b = triangles[e + 1]!, c = triangles[e + 2]!;
     start[(a < b ? a : b) + 1]!++;
+    start[(b < c ? b : c) + 1]!++;
+    start[(c < a ? c : a) + 1]!++;
   }
   for (let v = 0; v < vertexCount; v++) start[v + 1]! += start[v]!;
   const fill = start.slice(0, vertexCount);
@@ -33,11 +36,15 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
   // pairing pass below reads memory in order.
   const grouped = new Uint32Array(withNeighbours ? halfEdges : 0);
   const upperWay = new Uint32Array(halfEdges);
-  for (let e = 0; e < halfEdges; e++) {
-    const a = triangles[e]!, b = triangles[e % 3 === 2 ? e - 2 : e + 1]!;
-    const at = fill[a < b ? a : b]!++;
-    if (withNeighbours) grouped[at] = e;
-    upperWay[at] = a < b ? (b | 0x80000000) >>> 0 : a;
+  for (let e = 0; e < halfEdges; e += 3) {
+    const a = triangles[e]!, b = triangles[e + 1]!, c = triangles[e + 2]!;
+    const at0 = fill[a < b ? a : b]!++;
+    upperWay[at0] = a < b ? (b | 0x80000000) >>> 0 : a;
+    const at1 = fill[b < c ? b : c]!++;
+    upperWay[at1] = b < c ? (c | 0x80000000) >>> 0 : b;
+    const at2 = fill[c < a ? c : a]!++;
+    upperWay[at2] = c < a ? (a | 0x80000000) >>> 0 : c;
+    if (withNeighbours) { grouped[at0] = e; grouped[at1] = e + 1; grouped[at2] = e + 2; }
   }
 
   const neighbour = withNeighbours ? new Int32Array(halfEdges).fill(-1) : new Int32Array(0);

@@ -94,7 +94,7 @@ export function sampleLevels(
 
   // The triangle being added; one object reused so the helpers below are created once.
   const tri = { z0: 0, z1: 0, z2: 0, shadowArea: 0, area: 0, up: false, down: false, wetQ: -1, wetEnd: 0 };
-  const { atLeast, above } = knotLocator(points);
+  const { atLeast, atLeastFrom, above } = knotLocator(points);
 
   const direct = (k: number, right: boolean, both: boolean, wetToo: boolean): void => {
     const h = points[k]!;
@@ -190,8 +190,9 @@ export function sampleLevels(
     const wetQ = wet & wetWithOutline ? LevelQuantity.Wetted : wet & wetWithBox ? LevelQuantity.WettedBox : -1;
     // Most corners fall between points, and then the index of the first point above is the same.
     const i0a = atLeast(z0), i0b = points[i0a] === z0 ? above(z0, i0a) : i0a;
-    const i1a = z1 === z0 ? i0a : atLeast(z1), i1b = z1 === z0 ? i0b : points[i1a] === z1 ? above(z1, i1a) : i1a;
-    const i2a = z2 === z1 ? i1a : atLeast(z2), i2b = z2 === z1 ? i1b : points[i2a] === z2 ? above(z2, i2a) : i2a;
+    // The next corner is usually a point or two further on: look there before the buckets.
+    const i1a = z1 === z0 ? i0a : atLeastFrom(z1, i0b), i1b = z1 === z0 ? i0b : points[i1a] === z1 ? above(z1, i1a) : i1a;
+    const i2a = z2 === z1 ? i1a : atLeastFrom(z2, i1b), i2b = z2 === z1 ? i1b : points[i2a] === z2 ? above(z2, i2a) : i2a;
     const wetEnd = ceiling === Infinity ? n : atLeast(ceiling);
     tri.z0 = z0; tri.z1 = z1; tri.z2 = z2; tri.shadowArea = shadowArea; tri.area = area;
     tri.up = up; tri.down = down; tri.wetQ = wetQ; tri.wetEnd = wetEnd;

@@ -53,15 +53,20 @@ class VertexTable {
     this.keys = new Uint32Array(3 * Math.max(256, expected));
   }
 
+  /** The id of the vertex with these keys; a new id when they were not seen before. */
   idOf(kx: number, ky: number, kz: number, hash: number): number {
-    const keys = this.keys;
-    let h = spread(hash) & this.mask;
+    // Locals, and the rare insertion kept out of line, so this stays small enough to inline.
+    const keys = this.keys, slots = this.slots, mask = this.mask;
+    let h = spread(hash) & mask;
     for (;;) {
-      const slot = this.slots[h]!;
-      if (slot < 0) break;
+      const slot = slots[h]!;
+      if (slot < 0) return this.add(kx, ky, kz, h);
       if (keys[3 * slot] === kx && keys[3 * slot + 1] === ky && keys[3 * slot + 2] === kz) return slot;
-      h = (h + 1) & this.mask;
+      h = (h + 1) & mask;
     }
+  }
+
+  private add(kx: number, ky: number, kz: number, h: number): number {
     const id = this.count++;
     if (3 * this.count > this.keys.length) {
       const grown = new Uint32Array(this.keys.length * 2);
