@@ -1,3 +1,7 @@
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { analyseQueuedMoulds } from '../../test-support/fixtures';
 import { bearer, createShop, useHarness, type ShopFixture } from '../../test-support/harness';
@@ -54,6 +58,28 @@ describe('mould upload and cavity report', () => {
     expect(Buffer.compare(stl.body as Buffer, binaryStl(pocket))).toBe(0);
   });
 
+  it('gives the same numbers as the gelpoint mold command for the same file', async () => {
+    const stl = binaryStl(pocket);
+    const dir = mkdtempSync(join(tmpdir(), 'gelpoint-cli-'));
+    const file = join(dir, 'pocket.stl');
+    writeFileSync(file, stl);
+    const cli = spawnSync(process.execPath, ['apps/cli/bin/gelpoint.mjs', 'mold', file, '--level', '25', '--dam', 'box', '--json'], {
+      cwd: join(import.meta.dirname, '../../../../..'),
+      encoding: 'utf8',
+      timeout: 60_000,
+    });
+    rmSync(dir, { recursive: true, force: true });
+    expect(cli.stderr).toBe('');
+    const report = JSON.parse(cli.stdout);
+    const res = await upload(maker, stl, { units: 'mm' }).expect(202);
+    analyseQueuedMoulds();
+    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 25, dam: 'box' }).set(bearer(maker)).expect(200)).body;
+    expect(fill.volumeMm3).toBeCloseTo(report.fill.volumeMm3, 6);
+    expect(fill.wettedAreaMm2).toBeCloseTo(report.fill.wettedAreaMm2, 6);
+    expect(fill.maxDepthMm).toBeCloseTo(report.fill.maxDepthMm, 6);
+    expect(fill.trappedAirMm3).toBeCloseTo(report.fill.trappedAirMm3, 6);
+  });
+
   it('turns units into millimetres: the same numbers in centimetres hold 1000 times the volume', async () => {
     const res = await upload(maker, binaryStl(pocket, 0.1), { units: 'cm' }).expect(202);
     analyseQueuedMoulds();
@@ -76,6 +102,6 @@ describe('mould upload and cavity report', () => {
     const apprentice = await shop.member('apprentice');
     await upload(apprentice, binaryStl(pocket), {}).expect(403);
     const n = await h.ds.query('SELECT count(*)::int AS n FROM molds WHERE shop_id = $1', [shop.shopId]);
-    expect(n[0].n).toBe(2);
+    expect(n[0].n).toBe(3);
   });
 });
