@@ -1,18 +1,15 @@
 import { PigmentInput, PigmentKind, type PigmentView } from '@gelpoint/contracts';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm, type FieldPath } from 'react-hook-form';
 import type { z } from 'zod';
-import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
-import { FormAlert } from '../../../components/ui/FormAlert';
 import { Input } from '../../../components/ui/Input';
 import { Select } from '../../../components/ui/Select';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useProductForm } from '../hooks/use-product-form';
 import { newPigmentDefaults, pigmentInputOf } from '../utils/form-defaults';
-import { requiredNumber } from '../utils/number-fields';
 import { pigmentKindWords } from '../utils/shelf-words';
 import { FormSection } from './FormSection';
+import { ProductForm } from './ProductForm';
 
 type FormInput = z.input<typeof PigmentInput>;
 type FormOutput = z.output<typeof PigmentInput>;
@@ -29,27 +26,23 @@ export interface PigmentFormProps {
 }
 
 export function PigmentForm({ pigment, submitLabel, busyLabel, busy, save }: PigmentFormProps) {
-  const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<FormInput, unknown, FormOutput>({
     resolver: zodResolver(PigmentInput),
     defaultValues: pigment ? pigmentInputOf(pigment) : newPigmentDefaults,
   });
   const { errors } = form.formState;
-  const number = (name: FieldPath<FormInput>) => form.register(name, { setValueAs: requiredNumber });
-
-  const onSubmit = form.handleSubmit(async (values) => {
-    setFormError(null);
-    try {
-      await save(values);
-      form.reset(values);
-    } catch (error) {
-      setFormError(applyServerErrors(error, form.setError, fieldNames));
-    }
-  });
+  const { formError, onSubmit, number } = useProductForm(form, fieldNames, save);
 
   return (
-    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-6" aria-label={pigment ? `Edit ${pigment.name}` : 'New pigment'}>
-      <FormAlert message={formError} title="Could not save the pigment" />
+    <ProductForm
+      label={pigment ? `Edit ${pigment.name}` : 'New pigment'}
+      errorTitle="Could not save the pigment"
+      formError={formError}
+      onSubmit={onSubmit}
+      submitLabel={submitLabel}
+      busyLabel={busyLabel}
+      busy={busy}
+    >
       <FormSection legend="Pigment">
         <Field label="Name" error={errors.name?.message} required>
           {(control) => <Input {...control} maxLength={120} {...form.register('name')} />}
@@ -74,11 +67,6 @@ export function PigmentForm({ pigment, submitLabel, busyLabel, busy, save }: Pig
           {(control) => <Input {...control} inputMode="decimal" {...number('packSizeG')} />}
         </Field>
       </FormSection>
-      <div>
-        <Button type="submit" busy={busy} busyLabel={busyLabel}>
-          {submitLabel}
-        </Button>
-      </div>
-    </form>
+    </ProductForm>
   );
 }

@@ -1,20 +1,18 @@
 import { ResinSystemInput, ResinUse, type ResinSystemView } from '@gelpoint/contracts';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm, useWatch, type FieldPath } from 'react-hook-form';
 import type { z } from 'zod';
-import { Button } from '../../../components/ui/Button';
 import { ChoiceGroup } from '../../../components/ui/ChoiceGroup';
 import { Field } from '../../../components/ui/Field';
-import { FormAlert } from '../../../components/ui/FormAlert';
 import { Input } from '../../../components/ui/Input';
 import { Select } from '../../../components/ui/Select';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useProductForm } from '../hooks/use-product-form';
 import { activationEnergyUsed } from '../utils/activation-energy';
 import { newResinSystemDefaults, resinSystemInputOf } from '../utils/form-defaults';
 import { optionalNumber, requiredNumber } from '../utils/number-fields';
 import { ratioBasisWords, resinUseWords } from '../utils/shelf-words';
 import { FormSection } from './FormSection';
+import { ProductForm } from './ProductForm';
 
 type FormInput = z.input<typeof ResinSystemInput>;
 type FormOutput = z.output<typeof ResinSystemInput>;
@@ -64,7 +62,6 @@ export interface ResinSystemFormProps {
 
 /** The data sheet of a resin system, grouped as a TDS groups it; every label carries its unit. */
 export function ResinSystemForm({ resinSystem, submitLabel, busyLabel, busy, save }: ResinSystemFormProps) {
-  const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<FormInput, unknown, FormOutput>({
     resolver: zodResolver(ResinSystemInput),
     defaultValues: resinSystem ? resinSystemInputOf(resinSystem) : newResinSystemDefaults,
@@ -72,24 +69,18 @@ export function ResinSystemForm({ resinSystem, submitLabel, busyLabel, busy, sav
   const { errors } = form.formState;
   const [referenceTempC, typedEnergy] = useWatch({ control: form.control, name: ['referenceTempC', 'activationEnergyKJPerMol'] });
   const energy = activationEnergyUsed(optionalNumber(typedEnergy), requiredNumber(referenceTempC));
-
-  const number = (name: FieldPath<FormInput>) => form.register(name, { setValueAs: requiredNumber });
-  const optional = (name: FieldPath<FormInput>) => form.register(name, { setValueAs: optionalNumber });
-
-  const onSubmit = form.handleSubmit(async (values) => {
-    setFormError(null);
-    try {
-      await save(values);
-      form.reset(values);
-    } catch (error) {
-      setFormError(applyServerErrors(error, form.setError, fieldNames));
-    }
-  });
+  const { formError, onSubmit, number, optional } = useProductForm(form, fieldNames, save);
 
   return (
-    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-6" aria-label={resinSystem ? `Edit ${resinSystem.name}` : 'New resin system'}>
-      <FormAlert message={formError} title="Could not save the resin system" />
-
+    <ProductForm
+      label={resinSystem ? `Edit ${resinSystem.name}` : 'New resin system'}
+      errorTitle="Could not save the resin system"
+      formError={formError}
+      onSubmit={onSubmit}
+      submitLabel={submitLabel}
+      busyLabel={busyLabel}
+      busy={busy}
+    >
       <FormSection legend="Product">
         <Field label="Name" hint="As printed on the kit." error={errors.name?.message} required>
           {(control) => <Input {...control} maxLength={120} {...form.register('name')} />}
@@ -197,12 +188,6 @@ export function ResinSystemForm({ resinSystem, submitLabel, busyLabel, busy, sav
           {(control) => <Input {...control} inputMode="decimal" {...number('kitSizeG')} />}
         </Field>
       </FormSection>
-
-      <div>
-        <Button type="submit" busy={busy} busyLabel={busyLabel}>
-          {submitLabel}
-        </Button>
-      </div>
-    </form>
+    </ProductForm>
   );
 }

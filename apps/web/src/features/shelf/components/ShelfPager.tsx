@@ -1,4 +1,4 @@
-import { ButtonLink } from '../../../components/ui/ButtonLink';
+import { Pager } from '../../../components/ui/Pager';
 import { shelfPageCount } from '../utils/shelf-queries';
 
 export interface ShelfPagerProps {
@@ -10,27 +10,5 @@ export interface ShelfPagerProps {
 }
 
 export function ShelfPager({ page, total, what, hrefFor }: ShelfPagerProps) {
-  const pages = shelfPageCount(total);
-  if (pages <= 1) return null;
-  return (
-    <nav aria-label={`Pages of ${what}`} className="mt-6 flex flex-wrap items-center justify-between gap-3">
-      {page > 1 ? (
-        <ButtonLink variant="secondary" to={hrefFor(page - 1)}>
-          Previous page
-        </ButtonLink>
-      ) : (
-        <span />
-      )}
-      <p className="text-ink-soft">
-        Page {page} of {pages}
-      </p>
-      {page < pages ? (
-        <ButtonLink variant="secondary" to={hrefFor(page + 1)}>
-          Next page
-        </ButtonLink>
-      ) : (
-        <span />
-      )}
-    </nav>
-  );
+  return <Pager page={page} pageCount={shelfPageCount(total)} label={`Pages of ${what}`} hrefFor={hrefFor} />;
 }

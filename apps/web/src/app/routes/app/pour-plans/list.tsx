@@ -2,11 +2,11 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { useSearchParams } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
-import { ButtonLink } from '../../../../components/ui/ButtonLink';
 import { Card } from '../../../../components/ui/Card';
 import { DocumentTitle } from '../../../../components/ui/DocumentTitle';
 import { EmptyState } from '../../../../components/ui/EmptyState';
 import { PageHeader } from '../../../../components/ui/PageHeader';
+import { Pager } from '../../../../components/ui/Pager';
 import { QueryResult } from '../../../../components/ui/QueryResult';
 import { paths } from '../../../../config/paths';
 import { piecesQueryOptions, usePieces } from '../../../../features/pieces/api/get-pieces';
@@ -76,27 +76,12 @@ export function Component() {
                     {list.total === 1 ? '1 pour plan' : `${list.total} pour plans`}
                   </p>
                   <PourPlansTable plans={list.items} pieceNames={pieceNames} unitSystem={current.unitSystem} />
-                  {pages > 1 ? (
-                    <nav aria-label="Pages of pour plans" className="mt-6 flex flex-wrap items-center justify-between gap-3">
-                      {filters.page > 1 ? (
-                        <ButtonLink variant="secondary" to={paths.pourPlans.getHref({ ...(filters.pieceId ? { pieceId: filters.pieceId } : {}), page: filters.page - 1 })}>
-                          Previous page
-                        </ButtonLink>
-                      ) : (
-                        <span />
-                      )}
-                      <p className="text-ink-soft">
-                        Page {filters.page} of {pages}
-                      </p>
-                      {filters.page < pages ? (
-                        <ButtonLink variant="secondary" to={paths.pourPlans.getHref({ ...(filters.pieceId ? { pieceId: filters.pieceId } : {}), page: filters.page + 1 })}>
-                          Next page
-                        </ButtonLink>
-                      ) : (
-                        <span />
-                      )}
-                    </nav>
-                  ) : null}
+                  <Pager
+                    page={filters.page}
+                    pageCount={pages}
+                    label="Pages of pour plans"
+                    hrefFor={(page) => paths.pourPlans.getHref({ ...(filters.pieceId ? { pieceId: filters.pieceId } : {}), page })}
+                  />
                 </>
               )}
             </QueryResult>

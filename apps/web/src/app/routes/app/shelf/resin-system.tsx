@@ -1,17 +1,11 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
-import { Alert } from '../../../../components/ui/Alert';
-import { Card } from '../../../../components/ui/Card';
-import { DocumentTitle } from '../../../../components/ui/DocumentTitle';
-import { PageHeader } from '../../../../components/ui/PageHeader';
 import { QueryResult } from '../../../../components/ui/QueryResult';
-import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { useArchiveResinSystem } from '../../../../features/shelf/api/archive-resin-system';
 import { resinSystemQueryOptions, useResinSystem } from '../../../../features/shelf/api/get-resin-system';
 import { useUpdateResinSystem } from '../../../../features/shelf/api/update-resin-system';
-import { ArchiveProductButton } from '../../../../features/shelf/components/ArchiveProductButton';
-import { ArchivedMark } from '../../../../features/shelf/components/ArchivedMark';
+import { ProductPage } from '../../../../features/shelf/components/ProductPage';
 import { ResinSystemForm } from '../../../../features/shelf/components/ResinSystemForm';
 import { ResinSystemSheet } from '../../../../features/shelf/components/ResinSystemSheet';
 import { mayKeepShelf } from '../../../../features/shelf/utils/shelf-access';
@@ -43,49 +37,33 @@ export function Component() {
   return (
     <QueryResult query={resinSystem} loadingLabel="Loading the resin system…">
       {(current) => (
-        <>
-          <DocumentTitle title={current.name} />
-          <PageHeader
-            eyebrow="Shelf · resin system"
-            title={current.name}
-            description={
-              <>
-                {resinUseWords[current.use]}
-                {current.maker ? ` by ${current.maker}` : ''}
-                {current.archived ? <ArchivedMark /> : null}
-              </>
-            }
-            actions={
-              mayKeep && !current.archived ? (
-                <ArchiveProductButton name={current.name} busy={archive.isPending} error={archive.error} archive={() => archive.mutate(current.id)} reset={() => archive.reset()} />
-              ) : null
-            }
-          />
-          {mayKeep ? (
-            <Card className="max-w-4xl">
-              {update.isSuccess && !update.isPending ? (
-                <Alert tone="success" className="mb-5">
-                  Saved. Pour plans made from now on use these values; saved plans keep the ones they were made with.
-                </Alert>
-              ) : null}
-              <ResinSystemForm
-                key={current.updatedAt}
-                resinSystem={current}
-                submitLabel="Save data sheet"
-                busyLabel="Saving…"
-                busy={update.isPending}
-                save={(values) => update.mutateAsync({ resinSystemId: current.id, values })}
-              />
-            </Card>
-          ) : (
-            <QueryResult query={shop} loadingLabel="Loading the shop's units…">
-              {(s) => <ResinSystemSheet resinSystem={current} unitSystem={s.unitSystem} />}
-            </QueryResult>
-          )}
-          <p className="mt-6">
-            <TextLink to={paths.shelf.getHref()}>Back to the shelf</TextLink>
-          </p>
-        </>
+        <ProductPage
+          product={current}
+          kind="resin system"
+          description={
+            <>
+              {resinUseWords[current.use]}
+              {current.maker ? ` by ${current.maker}` : ''}
+            </>
+          }
+          mayKeep={mayKeep}
+          archive={archive}
+          saved={update.isSuccess && !update.isPending}
+          cardClassName="max-w-4xl"
+          form={
+            <ResinSystemForm
+              key={current.updatedAt}
+              resinSystem={current}
+              submitLabel="Save data sheet"
+              busyLabel="Saving…"
+              busy={update.isPending}
+              save={(values) => update.mutateAsync({ resinSystemId: current.id, values })}
+            />
+          }
+          shop={shop}
+          sheet={(unitSystem) => <ResinSystemSheet resinSystem={current} unitSystem={unitSystem} />}
+          backHref={paths.shelf.getHref()}
+        />
       )}
     </QueryResult>
   );
