@@ -94,9 +94,20 @@ export function sampleLevels(
 
   // The triangle being added; one object reused so the helpers below are created once.
   const tri = { z0: 0, z1: 0, z2: 0, shadowArea: 0, area: 0, up: false, down: false, wetQ: -1, wetEnd: 0 };
-  const { atLeast, atLeastFrom, above } = knotLocator(points);
+  const { atLeast, above } = knotLocator(points);
+  // Each vertex's place among the points, found once: a vertex is shared by about six triangles.
+  // Both indices only grow with z, so a triangle's lowest, middle and highest corner take the
+  // smallest, middle and largest of its vertices' indices.
+  const positions = table.positions, vertexCount = positions.length / 3;
+  const vertexAtLeast = new Int32Array(vertexCount), vertexAbove = new Int32Array(vertexCount);
+  for (let v = 0; v < vertexCount; v++) {
+    const z = positions[3 * v + 2]!, a = atLeast(z);
+    vertexAtLeast[v] = a;
+    vertexAbove[v] = points[a] === z ? above(z, a) : a;
+  }
 
-  const direct = (k: number, right: boolean, both: boolean, wetToo: boolean): void => {
+  /** Point k, at one of the triangle's corner heights: the limit from below or from above. */
+  const direct = (k: number, right: boolean, wetToo: boolean): void => {
     const h = points[k]!;
     triangleBelow(tri.z0, tri.z1, tri.z2, h, right, below);
     const value = right ? valueRight : valueLeft;
@@ -104,7 +115,6 @@ export function sampleLevels(
     if (tri.up) {
       const v = tri.shadowArea * below.depth, dv = tri.shadowArea * below.share;
       value[LevelQuantity.Fill * n + k]! += v; slope[LevelQuantity.Fill * n + k]! += dv;
-      if (both) { valueRight[LevelQuantity.Fill * n + k]! += v; slopeRight[LevelQuantity.Fill * n + k]! += dv; }
     }
     if (tri.down) {
       const head = h - zMin;
@@ -112,15 +122,10 @@ export function sampleLevels(
       const v2 = tri.shadowArea * (head * below.share - below.depth), d2 = tri.shadowArea * head * below.shareSlope;
       value[LevelQuantity.UnderBox * n + k]! += v1; slope[LevelQuantity.UnderBox * n + k]! += d1;
       value[LevelQuantity.TrappedBox * n + k]! += v2; slope[LevelQuantity.TrappedBox * n + k]! += d2;
-      if (both) {
-        valueRight[LevelQuantity.UnderBox * n + k]! += v1; slopeRight[LevelQuantity.UnderBox * n + k]! += d1;
-        valueRight[LevelQuantity.TrappedBox * n + k]! += v2; slopeRight[LevelQuantity.TrappedBox * n + k]! += d2;
-      }
     }
     if (tri.wetQ >= 0 && wetToo) {
       const v = tri.area * below.share, dv = tri.area * below.shareSlope;
       value[tri.wetQ * n + k]! += v; slope[tri.wetQ * n + k]! += dv;
-      if (both) { valueRight[tri.wetQ * n + k]! += v; slopeRight[tri.wetQ * n + k]! += dv; }
     }
   };
 
@@ -133,13 +138,56 @@ export function sampleLevels(
   };
 
   /**
+   * Most ranges are a point or two (small triangles between knots), so this point-by-point path
+   * carries most of the work. Strictly inside a range the limits from below and above agree and
+   * the branch of triangleBelow is known, so it evaluates that branch's formulas directly, written
+   * exactly as there (same operations in the same order; factors that do not depend on h are
+   * computed once), and adds to both limits the sums `direct` would: bit-identical.
+   */
+  const insidePoints = (from: number, to: number, lowerBranch: boolean): void => {
+    const z0 = tri.z0, z1 = tri.z1, z2 = tri.z2, shadowArea = tri.shadowArea, area = tri.area;
+    const up = tri.up, down = tri.down, wetQ = tri.wetQ, wetEnd = tri.wetEnd;
+    const span = z2 - z0, lower = (z1 - z0) * span, lower3 = 3 * lower;
+    const upperSpan = z2 - z1, upper = upperSpan * span, upper3 = 3 * upper;
+    const lowerDepth = ((z1 - z0) * (z1 - z0)) / (3 * span), upperSpan2 = upperSpan * upperSpan;
+    for (let k = from; k < to; k++) {
+      const h = points[k]!;
+      let share: number, shareSlope: number, depth: number;
+      if (lowerBranch) {
+        const d = h - z0;
+        share = (d * d) / lower; shareSlope = (2 * d) / lower; depth = (d * d * d) / lower3;
+      } else {
+        const e = z2 - h, passed = h - z1;
+        share = 1 - (e * e) / upper; shareSlope = (2 * e) / upper;
+        depth = lowerDepth + passed * (1 - (upperSpan2 + upperSpan * e + e * e) / upper3);
+      }
+      if (up) {
+        const v = shadowArea * depth, dv = shadowArea * share, at = LevelQuantity.Fill * n + k;
+        valueLeft[at]! += v; slopeLeft[at]! += dv; valueRight[at]! += v; slopeRight[at]! += dv;
+      }
+      if (down) {
+        const head = h - zMin;
+        const v1 = shadowArea * (1 - share) * head, d1 = shadowArea * (1 - share - shareSlope * head);
+        const v2 = shadowArea * (head * share - depth), d2 = shadowArea * head * shareSlope;
+        const at1 = LevelQuantity.UnderBox * n + k, at2 = LevelQuantity.TrappedBox * n + k;
+        valueLeft[at1]! += v1; slopeLeft[at1]! += d1; valueLeft[at2]! += v2; slopeLeft[at2]! += d2;
+        valueRight[at1]! += v1; slopeRight[at1]! += d1; valueRight[at2]! += v2; slopeRight[at2]! += d2;
+      }
+      if (wetQ >= 0 && k < wetEnd) {
+        const v = area * share, dv = area * shareSlope, at = wetQ * n + k;
+        valueLeft[at]! += v; slopeLeft[at]! += dv; valueRight[at]! += v; slopeRight[at]! += dv;
+      }
+    }
+  };
+
+  /**
    * One open range of points inside a branch, where the contribution is the polynomial in
    * share/depth that `setBranch` wrote (in w = h − z0): short ones point by point, long ones as runs.
    */
   const branch = (from: number, to: number, setBranch: () => void): void => {
     if (to <= from) return;
     if (to - from <= shortRange) {
-      for (let k = from; k < to; k++) direct(k, false, true, k < tri.wetEnd);
+      insidePoints(from, to, setBranch === setLower);
       return;
     }
     setBranch();
@@ -188,11 +236,12 @@ export function sampleLevels(
     const ceiling = classes.ceiling[t]!;
     const up = facing > 0, down = facing < 0;
     const wetQ = wet & wetWithOutline ? LevelQuantity.Wetted : wet & wetWithBox ? LevelQuantity.WettedBox : -1;
-    // Most corners fall between points, and then the index of the first point above is the same.
-    const i0a = atLeast(z0), i0b = points[i0a] === z0 ? above(z0, i0a) : i0a;
-    // The next corner is usually a point or two further on: look there before the buckets.
-    const i1a = z1 === z0 ? i0a : atLeastFrom(z1, i0b), i1b = z1 === z0 ? i0b : points[i1a] === z1 ? above(z1, i1a) : i1a;
-    const i2a = z2 === z1 ? i1a : atLeastFrom(z2, i1b), i2b = z2 === z1 ? i1b : points[i2a] === z2 ? above(z2, i2a) : i2a;
+    // i·a: first point at or above the corner; i·b: first point above it.
+    const va = table.triangles[3 * t]!, vb = table.triangles[3 * t + 1]!, vc = table.triangles[3 * t + 2]!;
+    const aa = vertexAtLeast[va]!, ab = vertexAtLeast[vb]!, ac = vertexAtLeast[vc]!;
+    const i0a = Math.min(aa, ab, ac), i2a = Math.max(aa, ab, ac), i1a = aa + ab + ac - i0a - i2a;
+    const ba = vertexAbove[va]!, bb = vertexAbove[vb]!, bc = vertexAbove[vc]!;
+    const i0b = Math.min(ba, bb, bc), i2b = Math.max(ba, bb, bc), i1b = ba + bb + bc - i0b - i2b;
     const wetEnd = ceiling === Infinity ? n : atLeast(ceiling);
     tri.z0 = z0; tri.z1 = z1; tri.z2 = z2; tri.shadowArea = shadowArea; tri.area = area;
     tri.up = up; tri.down = down; tri.wetQ = wetQ; tri.wetEnd = wetEnd;
@@ -214,9 +263,9 @@ export function sampleLevels(
     if (wetQ >= 0) addLinear(wetQ, i2b, wetEnd, area, 0);
 
     // Corner heights: both limits, directly.
-    for (let k = i0a; k < i0b; k++) { direct(k, false, false, points[k]! <= ceiling); direct(k, true, false, points[k]! < ceiling); }
-    if (z1 !== z0) for (let k = i1a; k < i1b; k++) { direct(k, false, false, points[k]! <= ceiling); direct(k, true, false, points[k]! < ceiling); }
-    if (z2 !== z1) for (let k = i2a; k < i2b; k++) { direct(k, false, false, points[k]! <= ceiling); direct(k, true, false, points[k]! < ceiling); }
+    for (let k = i0a; k < i0b; k++) { direct(k, false, points[k]! <= ceiling); direct(k, true, points[k]! < ceiling); }
+    if (z1 !== z0) for (let k = i1a; k < i1b; k++) { direct(k, false, points[k]! <= ceiling); direct(k, true, points[k]! < ceiling); }
+    if (z2 !== z1) for (let k = i2a; k < i2b; k++) { direct(k, false, points[k]! <= ceiling); direct(k, true, points[k]! < ceiling); }
     // At the ceiling itself the face is still wet from below, no longer from above.
     if (wetQ >= 0 && ceiling !== Infinity && ceiling !== z0 && ceiling !== z1 && ceiling !== z2) {
       for (let k = wetEnd; k < n && points[k] === ceiling; k++) {

@@ -5,6 +5,9 @@
  */
 export interface TriangleTable {
   count: number;
+  /** The mesh it was built from (not copied): vertex coordinates and three vertex indices per triangle. */
+  positions: Float64Array;
+  triangles: Uint32Array;
   /** n_z / 2: signed area of the triangle's shadow on the xy plane. */
   shadowArea: Float64Array;
   /** |n| / 2. */
@@ -44,5 +47,5 @@ export function buildTriangleTable(positions: Float64Array, triangles: Uint32Arr
     if (z0 > z1) { const s = z0; z0 = z1; z1 = s; }
     sortedZ[3 * t] = z0; sortedZ[3 * t + 1] = z1; sortedZ[3 * t + 2] = z2;
   }
-  return { count, shadowArea, area, sortedZ, facing, steep };
+  return { count, positions, triangles, shadowArea, area, sortedZ, facing, steep };
 }

@@ -91,6 +91,129 @@ class VertexTable {
   }
 }
 
+/** Distinct corners handled per partition: its keys and table (about 200 kB) stay in the core's cache. */
+const partitionTarget = 8192;
+/** Words per listed miss: corner, hash, three keys. */
+const recordSize = 5;
+
+/**
+ * Welds bit-identical corners and numbers the vertices in the order their first corner appears.
+ * Writes the vertex of every corner into `cornerVertex` and returns the vertices' keys (their
+ * float32 bits, −0 read as +0), three per vertex.
+ *
+ * A big hash table over every vertex would take one cache miss per new vertex, so the work is
+ * done in passes that each stay in cache:
+ *  1. files list neighbouring triangles one after another, so most corners were seen a moment
+ *     ago: a small direct-mapped cache of recent corners points them at that earlier corner; the
+ *     rest (misses) are listed with their keys and hash;
+ *  2. the misses are sorted stably into partitions by the top bits of the hash;
+ *  3. each partition finds, with a small table of its own, the first corner with each key and
+ *     points the later ones at it;
+ *  4. one pass in corner order gives each corner that points at itself the next vertex number and
+ *     every other corner the number of the (earlier) corner it points at.
+ * Every corner thus points at an earlier corner with the same key, or at itself when it is the
+ * first, which gives the same numbering as one table consulted in corner order.
+ */
+function weldExactBits(bits: Uint32Array, corners: number, cornerVertex: Uint32Array): Uint32Array {
+  const recentMask = 16383;
+  const recentCorner = new Int32Array(recentMask + 1).fill(-1);
+  const recentKey = new Uint32Array(3 * (recentMask + 1));
+  // One record per miss: corner, hash, then the three keys, so each pass below reads and writes
+  // one stream per partition instead of one per field.
+  let missRecords = new Uint32Array(recordSize * Math.max(1024, Math.ceil(corners / 4)));
+  let misses = 0;
+  for (let c = 0; c < corners; c++) {
+    // -0 and +0 are the same point; their bit patterns are not.
+    let bx = bits[3 * c]!, by = bits[3 * c + 1]!, bz = bits[3 * c + 2]!;
+    if (bx === 0x80000000) bx = 0;
+    if (by === 0x80000000) by = 0;
+    if (bz === 0x80000000) bz = 0;
+    const hash = mix(bx, by, bz);
+    const r = hash & recentMask;
+    const cached = recentCorner[r]!;
+    if (cached >= 0 && recentKey[3 * r] === bx && recentKey[3 * r + 1] === by && recentKey[3 * r + 2] === bz) {
+      cornerVertex[c] = cached;
+      continue;
+    }
+    if (recordSize * misses === missRecords.length) {
+      const grown = new Uint32Array(2 * missRecords.length);
+      grown.set(missRecords);
+      missRecords = grown;
+    }
+    const at = recordSize * misses++;
+    // A second mix, so the partitions and their slots do not follow the recent cache's bits.
+    missRecords[at] = c; missRecords[at + 1] = spread(hash);
+    missRecords[at + 2] = bx; missRecords[at + 3] = by; missRecords[at + 4] = bz;
+    recentCorner[r] = c;
+    recentKey[3 * r] = bx; recentKey[3 * r + 1] = by; recentKey[3 * r + 2] = bz;
+  }
+
+  let partitionBits = 0;
+  while ((misses >>> partitionBits) > partitionTarget && partitionBits < 16) partitionBits++;
+  const partitions = 1 << partitionBits;
+  const partitionOf = (hash: number): number => (partitionBits === 0 ? 0 : hash >>> (32 - partitionBits));
+  const start = new Uint32Array(partitions + 1);
+  for (let m = 0; m < misses; m++) start[partitionOf(missRecords[recordSize * m + 1]!) + 1]!++;
+  for (let q = 0; q < partitions; q++) start[q + 1]! += start[q]!;
+  const sorted = new Uint32Array(recordSize * misses);
+  const next = start.slice(0, partitions);
+  for (let m = 0; m < misses; m++) {
+    const from = recordSize * m, to = recordSize * next[partitionOf(missRecords[from + 1]!)]!++;
+    sorted[to] = missRecords[from]!; sorted[to + 1] = missRecords[from + 1]!;
+    sorted[to + 2] = missRecords[from + 2]!; sorted[to + 3] = missRecords[from + 3]!; sorted[to + 4] = missRecords[from + 4]!;
+  }
+
+  let largest = 0;
+  for (let q = 0; q < partitions; q++) largest = Math.max(largest, start[q + 1]! - start[q]!);
+  let tableSize = 16;
+  while (tableSize < 2 * largest) tableSize *= 2;
+  // Slot → 1 + index in the sorted misses of the first corner with that key; 0 when empty.
+  const slots = new Int32Array(tableSize);
+  for (let q = 0; q < partitions; q++) {
+    const from = start[q]!, to = start[q + 1]!;
+    let size = 16;
+    while (size < 2 * (to - from)) size *= 2;
+    const mask = size - 1;
+    slots.fill(0, 0, size);
+    for (let j = from; j < to; j++) {
+      const at = recordSize * j, corner = sorted[at]!, kx = sorted[at + 2]!, ky = sorted[at + 3]!, kz = sorted[at + 4]!;
+      let h = sorted[at + 1]! & mask;
+      for (;;) {
+        const slot = slots[h]!;
+        if (slot === 0) {
+          slots[h] = j + 1;
+          cornerVertex[corner] = corner;
+          break;
+        }
+        const first = recordSize * (slot - 1);
+        if (sorted[first + 2] === kx && sorted[first + 3] === ky && sorted[first + 4] === kz) {
+          cornerVertex[corner] = sorted[first]!;
+          break;
+        }
+        h = (h + 1) & mask;
+      }
+    }
+  }
+
+  // The list of misses is spent by now; its start holds the keys (at most one vertex per miss).
+  const keys = missRecords;
+  let count = 0;
+  for (let c = 0; c < corners; c++) {
+    const earlier = cornerVertex[c]!;
+    if (earlier !== c) {
+      cornerVertex[c] = cornerVertex[earlier]!;
+      continue;
+    }
+    let bx = bits[3 * c]!, by = bits[3 * c + 1]!, bz = bits[3 * c + 2]!;
+    if (bx === 0x80000000) bx = 0;
+    if (by === 0x80000000) by = 0;
+    if (bz === 0x80000000) bz = 0;
+    keys[3 * count] = bx; keys[3 * count + 1] = by; keys[3 * count + 2] = bz;
+    cornerVertex[c] = count++;
+  }
+  return keys.subarray(0, 3 * count);
+}
+
 /**
  * Turns the triangle soup into an indexed mesh by merging corners that are the same point, and
  * writes the result in the Z-up millimetre frame.
@@ -98,13 +221,14 @@ class VertexTable {
 export function weldSoup(soup: TriangleSoup, frame: WeldFrame): WeldedMesh {
   const corners = soup.triangleCount * 3;
   const cornerVertex = new Uint32Array(corners);
-  const table = new VertexTable(Math.ceil(corners / 5));
   const p = soup.positions;
   let positionsMm: Float64Array;
+  let vertexCount: number;
 
   if (frame.toleranceMm > 0) {
     // Keys are the corner's cell on a grid of the tolerance; prepareMesh keeps cell numbers
     // within 32 bits, so equal keys mean equal cells.
+    const table = new VertexTable(Math.ceil(corners / 5));
     const inv = 1 / frame.toleranceMm;
     const scratch = new Float64Array(3);
     const firstCorner: number[] = [];
@@ -120,35 +244,15 @@ export function weldSoup(soup: TriangleSoup, frame: WeldFrame): WeldedMesh {
       const c = firstCorner[v]!;
       toZUpMm(p[3 * c]!, p[3 * c + 1]!, p[3 * c + 2]!, frame.up, frame.scale, positionsMm, 3 * v);
     }
+    vertexCount = table.count;
   } else {
     const bits = new Uint32Array(p.buffer, p.byteOffset, corners * 3);
-    // Files list neighbouring triangles one after another, so most corners were seen a moment
-    // ago: a small direct-mapped cache of recent corners skips the big table for them.
-    const recentMask = 16383;
-    const recentId = new Int32Array(recentMask + 1).fill(-1);
-    const recentKey = new Uint32Array(3 * (recentMask + 1));
-    for (let c = 0; c < corners; c++) {
-      // -0 and +0 are the same point; their bit patterns are not.
-      let bx = bits[3 * c]!, by = bits[3 * c + 1]!, bz = bits[3 * c + 2]!;
-      if (bx === 0x80000000) bx = 0;
-      if (by === 0x80000000) by = 0;
-      if (bz === 0x80000000) bz = 0;
-      const hash = mix(bx, by, bz);
-      const r = hash & recentMask;
-      const cached = recentId[r]!;
-      if (cached >= 0 && recentKey[3 * r] === bx && recentKey[3 * r + 1] === by && recentKey[3 * r + 2] === bz) {
-        cornerVertex[c] = cached;
-        continue;
-      }
-      const id = table.idOf(bx, by, bz, hash);
-      cornerVertex[c] = id;
-      recentId[r] = id;
-      recentKey[3 * r] = bx; recentKey[3 * r + 1] = by; recentKey[3 * r + 2] = bz;
-    }
+    const keys = weldExactBits(bits, corners, cornerVertex);
+    vertexCount = keys.length / 3;
     // The keys are the corners' float32 bits: read them back as coordinates.
-    const coordinates = new Float32Array(table.keys.buffer, 0, table.count * 3);
-    positionsMm = new Float64Array(table.count * 3);
-    for (let v = 0; v < table.count; v++) {
+    const coordinates = new Float32Array(keys.buffer, keys.byteOffset, vertexCount * 3);
+    positionsMm = new Float64Array(vertexCount * 3);
+    for (let v = 0; v < vertexCount; v++) {
       toZUpMm(coordinates[3 * v]!, coordinates[3 * v + 1]!, coordinates[3 * v + 2]!, frame.up, frame.scale, positionsMm, 3 * v);
     }
   }
@@ -164,7 +268,7 @@ export function weldSoup(soup: TriangleSoup, frame: WeldFrame): WeldedMesh {
   return {
     positionsMm,
     triangles: kept === soup.triangleCount ? cornerVertex : cornerVertex.slice(0, kept * 3),
-    vertexCount: table.count,
+    vertexCount,
     triangleCount: kept,
     degenerateDropped: soup.triangleCount - kept,
   };
