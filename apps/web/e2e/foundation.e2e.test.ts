@@ -1,24 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, watchedPage } from './support/browser';
-import { E2eStack } from './support/stack';
+import { describe, expect, it } from 'vitest';
+import { watchedPage } from './support/browser';
+import { useBrowserStack } from './support/use-browser-stack';
 
 // The demo sign-ins and shop come from the demo seed (packages/db/src/seed/demo.ts).
-const stack = new E2eStack();
-let browser: Browser;
+const e2e = useBrowserStack();
+const stack = e2e.stack;
 
-beforeAll(async () => {
-  await stack.start();
-  browser = await launchBrowser();
-}, 60_000);
-afterAll(async () => {
-  await browser?.close();
-  await stack.stop();
-});
 
 describe('the foundation in a real browser', () => {
   it('signs the lead in, keeps the session across a reload, invites a maker by e-mail and signs out for real', async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await e2e.browser().newContext({ viewport: { width: 1280, height: 900 } });
     const { page, watch } = await watchedPage(context, stack.baseUrl);
     await page.goto(`${stack.baseUrl}/pieces`);
     await page.waitForURL(/\/sign-in/);
@@ -48,7 +39,7 @@ describe('the foundation in a real browser', () => {
     const link = /(http:\/\/\S+\/invitations\/[A-Za-z0-9_-]+)/.exec(mail.text)?.[1];
     expect(link?.startsWith(stack.baseUrl)).toBe(true);
 
-    const invitee = await browser.newContext({ viewport: { width: 375, height: 800 } });
+    const invitee = await e2e.browser().newContext({ viewport: { width: 375, height: 800 } });
     const joined = await watchedPage(invitee, stack.baseUrl);
     await joined.page.goto(link!);
     await joined.page.getByLabel('Your name').fill('Noor Haddad');

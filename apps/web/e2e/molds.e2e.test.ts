@@ -1,7 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, watchedPage } from './support/browser';
-import { E2eStack } from './support/stack';
+import { describe, expect, it } from 'vitest';
+import { watchedPage } from './support/browser';
+import { useBrowserStack } from './support/use-browser-stack';
 
 type Vec3 = [number, number, number];
 
@@ -49,17 +48,9 @@ function pocketBlockStl(): { bytes: Buffer; signedVolumeMm3: number } {
   return { bytes, signedVolumeMm3 };
 }
 
-const stack = new E2eStack();
-let browser: Browser;
+const e2e = useBrowserStack();
+const stack = e2e.stack;
 
-beforeAll(async () => {
-  await stack.start();
-  browser = await launchBrowser();
-}, 60_000);
-afterAll(async () => {
-  await browser?.close();
-  await stack.stop();
-});
 
 describe('the mould screen in a real browser', () => {
   it('uploads a pocket block as the maker, reads 64 mL at the rim and 32 mL at half depth, and shows it in 3D', { timeout: 90_000 }, async () => {
@@ -68,7 +59,7 @@ describe('the mould screen in a real browser', () => {
     // so the file is closed and wound outward as the analysis expects.
     expect(stl.signedVolumeMm3).toBeCloseTo(100 * 60 * 30 - 80 * 40 * 20, 6);
 
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await e2e.browser().newContext({ viewport: { width: 1280, height: 900 } });
     const { page, watch } = await watchedPage(context, stack.baseUrl);
     await page.goto(`${stack.baseUrl}/moulds`);
     await page.waitForURL(/\/sign-in/);

@@ -1,20 +1,12 @@
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, watchedPage } from './support/browser';
-import { E2eStack } from './support/stack';
+import { describe, expect, it } from 'vitest';
+import { watchedPage } from './support/browser';
+import { useBrowserStack } from './support/use-browser-stack';
 
 // The demo sign-ins come from the demo seed (packages/db/src/seed/demo.ts); everything else is made here, with unique names.
-const stack = new E2eStack();
-let browser: Browser;
+const e2e = useBrowserStack();
+const stack = e2e.stack;
 
-beforeAll(async () => {
-  await stack.start();
-  browser = await launchBrowser();
-}, 60_000);
-afterAll(async () => {
-  await browser?.close();
-  await stack.stop();
-});
 
 async function signIn(page: Page, email: string) {
   await page.goto(`${stack.baseUrl}/sign-in`);
@@ -32,7 +24,7 @@ describe('the shelf and the pour planner in a real browser', () => {
     const productName = `Test Deep 20 ${stamp}`;
     const pieceName = `Test tray ${stamp}`;
 
-    const lead = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const lead = await e2e.browser().newContext({ viewport: { width: 1280, height: 900 } });
     const leadPage = await watchedPage(lead, stack.baseUrl);
     leadPage.page.setDefaultTimeout(10_000);
     await signIn(leadPage.page, 'lead@gelpoint.test');
@@ -80,7 +72,7 @@ describe('the shelf and the pour planner in a real browser', () => {
     expect(leadPage.watch.problems).toEqual([]);
     await lead.close();
 
-    const maker = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
+    const maker = await e2e.browser().newContext({ viewport: { width: 1440, height: 1000 } });
     const { page, watch } = await watchedPage(maker, stack.baseUrl);
     page.setDefaultTimeout(10_000);
     await signIn(page, 'maker@gelpoint.test');

@@ -1,13 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, watchedPage } from './support/browser';
-import { E2eStack } from './support/stack';
+import { describe, expect, it } from 'vitest';
+import { watchedPage } from './support/browser';
+import { useBrowserStack } from './support/use-browser-stack';
 
 // The demo sign-ins and shop come from the demo seed (packages/db/src/seed/demo.ts). Everything this test pours is
 // its own: a resin system, a piece and a plan with a unique name, so it needs no other test's data and leaves the
 // demo data as it was, give or take one more pour on the board.
-const stack = new E2eStack();
-let browser: Browser;
+const e2e = useBrowserStack();
+const stack = e2e.stack;
 const password = 'gelpoint-demo';
 const unique = `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 6)}`;
 
@@ -86,19 +85,11 @@ async function pourToLog(): Promise<Setup> {
   return { pourId: pour.id, pieceName, cup: cup! };
 }
 
-beforeAll(async () => {
-  await stack.start();
-  browser = await launchBrowser();
-}, 60_000);
-afterAll(async () => {
-  await browser?.close();
-  await stack.stop();
-});
 
 describe('pours in a real browser', () => {
   it('lets an apprentice on a phone log a cup, a temperature and a cure check with a photo, and shows the pour on the cure board', async () => {
     const { pourId, pieceName, cup } = await pourToLog();
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true });
+    const context = await e2e.browser().newContext({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true });
     const { page, watch } = await watchedPage(context, stack.baseUrl);
 
     await page.goto(`${stack.baseUrl}/pours/${pourId}`);
