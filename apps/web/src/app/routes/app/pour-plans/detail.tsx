@@ -1,5 +1,5 @@
-import { useQuery, type QueryClient } from '@tanstack/react-query';
-import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { useQuery } from '@tanstack/react-query';
+import { useNavigate, useParams } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
 import { ButtonLink } from '../../../../components/ui/ButtonLink';
 import { Card } from '../../../../components/ui/Card';
@@ -11,26 +11,18 @@ import { PageSpinner } from '../../../../components/ui/PageSpinner';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { pieceQueryOptions } from '../../../../features/pieces/api/get-piece';
-import { pourPlanQueryOptions, usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
+import { usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
 import { DeletePourPlanButton } from '../../../../features/pour-plans/components/DeletePourPlanButton';
 import { PlanResult } from '../../../../features/pour-plans/components/PlanResult';
 import { SnapshotDetails } from '../../../../features/pour-plans/components/SnapshotDetails';
 import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
 import { readSavedPlan } from '../../../../features/pour-plans/utils/saved-plan';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
-import { requireSession } from '../../../session-loaders';
+import { useShop } from '../../../../features/shop/api/get-shop';
 import { useSignedInSession } from '../../../signed-in-session';
+import { createPlanPageLoader } from './plan-page-loader';
 import { readId } from './read-id';
 
-export const createLoader =
-  (queryClient: QueryClient) =>
-  async ({ params, request }: LoaderFunctionArgs) => {
-    await requireSession(queryClient, request);
-    const planId = readId(params, 'planId', 'pour plan');
-    const [plan] = await Promise.all([queryClient.ensureQueryData(pourPlanQueryOptions(planId)), queryClient.ensureQueryData(shopQueryOptions())]);
-    await queryClient.ensureQueryData(pieceQueryOptions(plan.pieceId));
-    return null;
-  };
+export const createLoader = createPlanPageLoader;
 
 export function Component() {
   const planId = readId(useParams(), 'planId', 'pour plan');

@@ -1,5 +1,5 @@
-import { useQuery, type QueryClient } from '@tanstack/react-query';
-import { useParams, type LoaderFunctionArgs } from 'react-router';
+import { useQuery } from '@tanstack/react-query';
+import { useParams } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
 import { Button } from '../../../../components/ui/Button';
 import { DocumentTitle } from '../../../../components/ui/DocumentTitle';
@@ -8,22 +8,14 @@ import { PageSpinner } from '../../../../components/ui/PageSpinner';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { pieceQueryOptions } from '../../../../features/pieces/api/get-piece';
-import { pourPlanQueryOptions, usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
+import { usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
 import { RunSheet } from '../../../../features/pour-plans/components/RunSheet';
 import { readSavedPlan } from '../../../../features/pour-plans/utils/saved-plan';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
-import { requireSession } from '../../../session-loaders';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { createPlanPageLoader } from './plan-page-loader';
 import { readId } from './read-id';
 
-export const createLoader =
-  (queryClient: QueryClient) =>
-  async ({ params, request }: LoaderFunctionArgs) => {
-    await requireSession(queryClient, request);
-    const planId = readId(params, 'planId', 'pour plan');
-    const [plan] = await Promise.all([queryClient.ensureQueryData(pourPlanQueryOptions(planId)), queryClient.ensureQueryData(shopQueryOptions())]);
-    await queryClient.ensureQueryData(pieceQueryOptions(plan.pieceId));
-    return null;
-  };
+export const createLoader = createPlanPageLoader;
 
 /** A page of its own, outside the app frame, so what prints is the sheet and nothing else. */
 export function Component() {
