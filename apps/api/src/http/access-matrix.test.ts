@@ -5,10 +5,10 @@ import { PASSWORD, bearer, createShop, uniqueEmail, useHarness, type ShopFixture
 import { resinInput } from '../test-support/fixtures';
 import { binaryStl, pocketMouldTriangles } from '../test-support/pocket-mould';
 
-// Fixtures in the own shop use fresh lead sessions too: the matrix signs the lead out everywhere.
 // Every route × every caller: anonymous → 401, a role without the right → 403, a role with it → neither,
 // and another shop's object → 404. The table is written out here, apart from the code under test, and
 // must name every registered route, so a new route cannot ship without its access rule being checked.
+// Fixtures in the own shop use fresh lead sessions too: the matrix signs the lead out everywhere.
 
 const h = useHarness();
 const ROLES: Role[] = ['lead', 'maker', 'apprentice'];

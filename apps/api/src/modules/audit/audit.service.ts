@@ -24,6 +24,7 @@ export async function recordAudit(m: EntityManager, e: AuditEntry): Promise<void
     action: e.action,
     objectType: e.objectType,
     objectId: e.objectId,
-    detail: (e.detail ?? {}) as AuditEvent['detail'] & object,
+    // TypeORM's insert type cannot see through a jsonb column typed as a plain record.
+    detail: (e.detail ?? {}) as never,
   });
 }

@@ -1,8 +1,7 @@
 import type { CureState } from '@gelpoint/core';
 import type { PourBatch, Reminder } from '@gelpoint/db';
-import type { BatchView, ReminderView } from '@gelpoint/contracts';
-import { z } from 'zod';
-import type { CureView } from '@gelpoint/contracts';
+import type { BatchView, CureView, ReminderView } from '@gelpoint/contracts';
+import type { z } from 'zod';
 
 export function cureView(state: CureState): z.infer<typeof CureView> {
   const s = state.status;

@@ -1,4 +1,4 @@
-import type { DataSource, EntityManager } from 'typeorm';
+import { In, type DataSource, type EntityManager } from 'typeorm';
 import { dewPointC, surfaceDewPointCheck, type CureReading, type PourPlan as CorePourPlan } from '@gelpoint/core';
 import { CureCheck, Lot, Piece, Pour, PourBatch, PourPlan, Reminder, Shop, TemperatureReading, User, type CureCheckStage, type PieceStage } from '@gelpoint/db';
 import type { PourSummary, PourView } from '@gelpoint/contracts';
@@ -131,10 +131,13 @@ export class Pours {
       );
     }
     const [pours, total] = await qb.orderBy('p.createdAt', 'DESC').addOrderBy('p.id').take(q.limit).skip(q.offset).getManyAndCount();
+    // Plans and pieces of the whole page in two queries; each summary then reads only its own log.
+    const plans = new Map((await this.ds.manager.findBy(PourPlan, { id: In(pours.map((p) => p.pourPlanId)) })).map((p) => [p.id, p]));
+    const pieces = new Map((await this.ds.manager.findBy(Piece, { id: In(pours.map((p) => p.pieceId)) })).map((p) => [p.id, p]));
     const items: PourSummary[] = [];
     for (const pour of pours) {
-      const plan = await this.ds.manager.findOneByOrFail(PourPlan, { id: pour.pourPlanId });
-      const piece = await this.ds.manager.findOneByOrFail(Piece, { id: pour.pieceId });
+      const plan = plans.get(pour.pourPlanId)!;
+      const piece = pieces.get(pour.pieceId)!;
       items.push(await this.summary(this.ds.manager, { pour, plan, piece, result: plan.result as unknown as CorePourPlan, snapshot: plan.productSnapshot as unknown as PlanSnapshot }));
     }
     return { items, total };
