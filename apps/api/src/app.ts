@@ -7,11 +7,12 @@ import type { Config } from './config';
 import { AppError, errorHandler } from './http/errors';
 import { openApiDocument } from './http/openapi';
 import { originCheck } from './http/origin-check';
+import { perMemberLimit } from './http/rate-limits';
 import { RouteRegistry } from './http/route-registry';
 import { securityHeaders } from './http/security-headers';
 import { staticWeb } from './http/static-web';
 import { auditRoutes } from './modules/audit/audit.routes';
-import { authRateLimits } from './modules/auth/auth-rate-limit';
+import { resetLimits, signInLimits } from './modules/auth/auth-rate-limit';
 import { authRoutes } from './modules/auth/auth.routes';
 import { healthRoutes } from './modules/health/health.routes';
 import { mailDomainOf } from '@gelpoint/db';
@@ -26,6 +27,7 @@ import { Pours } from './modules/pours/pours.service';
 import { shelfRoutes } from './modules/shelf/shelf.routes';
 import { shopRoutes } from './modules/shop/shop.routes';
 import { teamRoutes } from './modules/team/team.routes';
+import { UploadQuota } from './modules/uploads/upload-quota';
 
 export interface AppDeps {
   ds: DataSource;
@@ -55,8 +57,10 @@ export function createApp({ ds, config, logger = pino({ level: config.logLevel }
     next();
   });
 
-  const limits = authRateLimits(config.authRatePer15Min);
-  api.post(['/auth/login', '/auth/password-reset', '/auth/register', '/invitations/:token/accept'], limits.perAddress, limits.perAccount);
+  const signIn = signInLimits(ds, config.authRatePer15Min);
+  api.post(['/auth/login', '/auth/register', '/auth/password-reset/confirm', '/invitations/:token/accept'], signIn.perAddress, signIn.perAccount);
+  const resets = resetLimits(ds, config.authRatePer15Min);
+  api.post('/auth/password-reset', resets.perAddress, resets.perAccount);
 
   const settings = {
     jwtSecret: config.jwtSecret,
@@ -75,10 +79,12 @@ export function createApp({ ds, config, logger = pino({ level: config.logLevel }
   pieceRoutes(registry, ds);
   auditRoutes(registry, ds);
   shelfRoutes(registry, ds);
-  const molds = new Molds(ds, new StlChecker(config.maxStlTriangles));
-  moldRoutes(registry, molds, config.maxStlBytes);
+  const quota = new UploadQuota(config.uploadQuotaBytes);
+  const uploadLimit = perMemberLimit(ds, config.uploadsPerHour);
+  const molds = new Molds(ds, new StlChecker(config.maxStlTriangles), quota);
+  moldRoutes(registry, molds, config.maxStlBytes, uploadLimit);
   pourPlanRoutes(registry, new PourPlans(ds, molds.cavityForPlan));
-  pourRoutes(registry, ds, new Pours(ds));
+  pourRoutes(registry, ds, new Pours(ds, undefined, quota), uploadLimit);
 
   api.get('/openapi.json', (_req, res) => {
     res.json(openApiDocument(registry.routes, `${config.publicUrl}`));

@@ -18,6 +18,8 @@ const Env = z.object({
   GELPOINT_TRUST_PROXY: z.string().default('loopback'),
   GELPOINT_MAX_STL_MB: z.coerce.number().positive().max(1024).default(100),
   GELPOINT_MAX_STL_TRIANGLES: z.coerce.number().int().positive().max(20_000_000).default(5_000_000),
+  GELPOINT_UPLOADS_PER_HOUR: z.coerce.number().int().positive().default(60),
+  GELPOINT_UPLOAD_QUOTA_MB: z.coerce.number().positive().default(1024),
 });
 
 export interface Config {
@@ -35,6 +37,10 @@ export interface Config {
   trustProxy: string;
   maxStlTriangles: number;
   maxStlBytes: number;
+  /** Moulds, cure-check photos and log imports each member may send per hour. */
+  uploadsPerHour: number;
+  /** What each member's stored files (STL and photos) may add up to. */
+  uploadQuotaBytes: number;
 }
 
 function jwtSecretFrom(env: z.infer<typeof Env>): string {
@@ -73,5 +79,7 @@ export function loadConfig(raw: NodeJS.ProcessEnv = process.env): Config {
     trustProxy: env.GELPOINT_TRUST_PROXY,
     maxStlTriangles: env.GELPOINT_MAX_STL_TRIANGLES,
     maxStlBytes: Math.round(env.GELPOINT_MAX_STL_MB * 1024 * 1024),
+    uploadsPerHour: env.GELPOINT_UPLOADS_PER_HOUR,
+    uploadQuotaBytes: Math.round(env.GELPOINT_UPLOAD_QUOTA_MB * 1024 * 1024),
   };
 }

@@ -66,6 +66,7 @@ export class RouteRegistry {
           throw new AppError('forbidden', 'role_forbidden', `your role (${auth.role}) cannot do this; it needs ${spec.access.join(' or ')}`);
         }
       }
+      if (auth) res.locals.memberId = auth.userId;
       for (const mw of spec.middleware ?? []) await runMiddleware(mw, req, res);
       const params = parse(spec.params, req.params, 'path');
       const query = parse(spec.query, req.query, 'query');

@@ -18,8 +18,9 @@ import { PourBatch } from './pour-batch.entity';
 import { TemperatureReading } from './temperature-reading.entity';
 import { CureCheck } from './cure-check.entity';
 import { Reminder } from './reminder.entity';
+import { RateLimitCounter } from './rate-limit-counter.entity';
 
-export { AuditEvent, CureCheck, Invitation, Lot, Pour, PourBatch, Reminder, TemperatureReading, Membership, Mold, MoldFile, OutboundMail, PasswordReset, Piece, Pigment, PourPlan, ResinSystem, Session, Shop, User };
+export { AuditEvent, CureCheck, Invitation, Lot, Pour, PourBatch, Reminder, TemperatureReading, Membership, Mold, MoldFile, OutboundMail, PasswordReset, Piece, Pigment, PourPlan, RateLimitCounter, ResinSystem, Session, Shop, User };
 export type { MoldStatus, MoldUnits, UpAxis } from './mold.entity';
 export type { ResinUse } from './resin-system.entity';
 export type { LotPart } from './lot.entity';
@@ -30,4 +31,4 @@ export type { Role } from './membership.entity';
 export type { PieceStage } from './piece.entity';
 export type { OutboundMailStatus } from './outbound-mail.entity';
 
-export const entities = [Shop, User, Membership, Invitation, PasswordReset, Session, Piece, AuditEvent, OutboundMail, Mold, MoldFile, ResinSystem, Pigment, Lot, PourPlan, Pour, PourBatch, TemperatureReading, CureCheck, Reminder];
+export const entities = [Shop, User, Membership, Invitation, PasswordReset, Session, Piece, AuditEvent, OutboundMail, Mold, MoldFile, ResinSystem, Pigment, Lot, PourPlan, Pour, PourBatch, TemperatureReading, CureCheck, Reminder, RateLimitCounter];

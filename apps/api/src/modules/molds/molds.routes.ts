@@ -1,3 +1,4 @@
+import type { RequestHandler } from 'express';
 import { z } from 'zod';
 import { CavityFill, FillQuery, Id, LayerVolumes, LayerVolumesQuery, MoldList, MoldListQuery, MoldUploadFields, MoldView } from '@gelpoint/contracts';
 import type { RouteRegistry } from '../../http/route-registry';
@@ -6,7 +7,7 @@ import type { Molds } from './molds.service';
 
 const IdParams = z.object({ id: Id });
 
-export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number): void {
+export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number, uploadLimit: RequestHandler): void {
   api.add(
     {
       method: 'post',
@@ -14,7 +15,7 @@ export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number
       tag: 'molds',
       summary: "Upload a mould's STL (multipart: file, units, up, name, pieceId); the analysis runs in the background",
       access: ['lead', 'maker'],
-      middleware: [stlUpload(maxStlBytes)],
+      middleware: [uploadLimit, stlUpload(maxStlBytes)],
       body: MoldUploadFields,
       response: MoldView,
       status: 202,

@@ -7,6 +7,7 @@ import { curve, fillAt, layerVolumes } from '@gelpoint/mesh';
 import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
+import { UploadQuota } from '../uploads/upload-quota';
 import type { MoldCavityLookup } from '../pour-plans/pour-plans.service';
 import { AnalysisCache } from './mold-analysis-cache';
 import { fillView, moldView } from './mold-views';
@@ -34,6 +35,7 @@ export class Molds {
   constructor(
     private readonly ds: DataSource,
     private readonly checker: StlChecker,
+    private readonly quota = new UploadQuota(),
   ) {}
 
   async upload(auth: AuthContext, file: UploadedStl | undefined, fields: UploadFields): Promise<MoldView> {
@@ -46,6 +48,7 @@ export class Molds {
     const sha256 = createHash('sha256').update(file.buffer).digest('hex');
     const id = await this.ds.transaction(async (m) => {
       if (fields.pieceId && !(await m.findOneBy(Piece, { id: fields.pieceId, shopId: auth.shopId }))) throw notFound('piece');
+      await this.quota.reserve(m, auth.userId, file.size);
       const mold = await m.save(
         m.create(Mold, {
           shopId: auth.shopId,

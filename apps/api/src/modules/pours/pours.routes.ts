@@ -48,7 +48,7 @@ function photoUpload(): express.RequestHandler {
 
 const tokenHash = (t: string) => createHash('sha256').update(t).digest('hex');
 
-export function pourRoutes(api: RouteRegistry, ds: DataSource, pours: Pours): void {
+export function pourRoutes(api: RouteRegistry, ds: DataSource, pours: Pours, uploadLimit: express.RequestHandler): void {
   api.add({ method: 'get', path: '/pours', tag: 'pours', summary: 'The cure board: pours with their stage, progress and next event', access: 'member', query: PourListQuery, response: PourList }, ({ auth, query }) =>
     pours.list(auth.shopId, query),
   );
@@ -67,7 +67,7 @@ export function pourRoutes(api: RouteRegistry, ds: DataSource, pours: Pours): vo
     ({ auth, params, body }) => pours.addReadings(auth.shopId, params.id, body.readings, 'manual', auth),
   );
   api.add(
-    { method: 'post', path: '/pours/:id/readings/csv', tag: 'pours', summary: 'Import a time,tempC log (text/csv): all rows or none', access: 'member', params: IdParams, middleware: [csvBody], response: ReadingsAdded },
+    { method: 'post', path: '/pours/:id/readings/csv', tag: 'pours', summary: 'Import a time,tempC log (text/csv): all rows or none', access: 'member', params: IdParams, middleware: [uploadLimit, csvBody], response: ReadingsAdded },
     async ({ auth, params, req }) => {
       if (typeof req.body !== 'string' || req.body.trim() === '') throw new AppError('bad_request', 'csv_missing', 'send the log as text/csv with lines "time,tempC"');
       const parsed = parseCureReadingsCsv(req.body);
@@ -79,7 +79,7 @@ export function pourRoutes(api: RouteRegistry, ds: DataSource, pours: Pours): vo
     },
   );
   api.add(
-    { method: 'post', path: '/pours/:id/checks', tag: 'pours', summary: 'Record a cure check (multipart: stage, hardnessShoreD, note, optional photo)', access: 'member', params: IdParams, middleware: [photoUpload()], body: CureCheckFields, response: CureCheckView, status: 201 },
+    { method: 'post', path: '/pours/:id/checks', tag: 'pours', summary: 'Record a cure check (multipart: stage, hardnessShoreD, note, optional photo)', access: 'member', params: IdParams, middleware: [uploadLimit, photoUpload()], body: CureCheckFields, response: CureCheckView, status: 201 },
     async ({ auth, params, body, req }) => {
       let photo: { bytes: Buffer; type: string } | null = null;
       if (req.file) {

@@ -5,6 +5,7 @@ import type { PourSummary, PourView } from '@gelpoint/contracts';
 import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
+import { UploadQuota } from '../uploads/upload-quota';
 import { syncReminders } from './pour-reminders';
 import { cureState, plannedBatches, planSteps, stepKeyOf, wantedReminders, type PlanSnapshot } from '@gelpoint/core';
 import { batchView, cureView, reminderView } from './pour-view';
@@ -42,6 +43,7 @@ export class Pours {
   constructor(
     private readonly ds: DataSource,
     private readonly now: () => Date = () => new Date(),
+    private readonly quota = new UploadQuota(),
   ) {}
 
   private async load(m: EntityManager, shopId: string, id: string, lock = false): Promise<Loaded> {
@@ -267,6 +269,7 @@ export class Pours {
   async addCheck(auth: AuthContext, pourId: string, input: { stage: CureCheckStage; checkedAt?: string; hardnessShoreD?: number; note: string }, photo: { bytes: Buffer; type: string } | null) {
     return this.ds.transaction(async (m) => {
       await this.load(m, auth.shopId, pourId);
+      if (photo) await this.quota.reserve(m, auth.userId, photo.bytes.length);
       const check = await m.save(
         m.create(CureCheck, {
           shopId: auth.shopId,
