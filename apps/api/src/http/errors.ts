@@ -66,6 +66,18 @@ function isDatabaseDown(err: unknown): boolean {
   return /Connection terminated|timeout exceeded when trying to connect|connect ECONNREFUSED/.test(e.message ?? '');
 }
 
+/**
+ * PostgreSQL refuses text it cannot store: a NUL character (U+0000) in text, or the escape \u0000 in
+ * jsonb. That is the caller's input, so it is a 400, and the transaction it broke has rolled back.
+ */
+const PG_UNSTORABLE_TEXT = new Set(['22021', '22P05']);
+
+function fromUnstorableText(err: unknown): AppError | undefined {
+  const e = err as { code?: string } | undefined;
+  if (!e?.code || !PG_UNSTORABLE_TEXT.has(e.code)) return undefined;
+  return new AppError('bad_request', 'invalid_text', 'the request contains a NUL character (U+0000), which text cannot hold; remove it and send again');
+}
+
 /** Turns body-parser's own errors (bad JSON, too large) into ours. */
 function fromBodyParser(err: unknown): AppError | undefined {
   const e = err as { type?: string; status?: number } | undefined;
@@ -82,7 +94,7 @@ export function toAppError(err: unknown): AppError | undefined {
   if (err instanceof AppError) return err;
   if (err instanceof ZodError) return fromZod(err, 'body');
   if (isDatabaseDown(err)) return new AppError('unavailable', 'database_unavailable', 'the database is not reachable right now; try again in a moment');
-  return fromBodyParser(err);
+  return fromUnstorableText(err) ?? fromBodyParser(err);
 }
 
 export function errorHandler(logger: Logger): ErrorRequestHandler {

@@ -75,7 +75,19 @@ export function pourRoutes(api: RouteRegistry, ds: DataSource, pours: Pours, upl
         const fields = Object.fromEntries((parsed.error.issues ?? []).slice(0, 200).map((i) => [`row ${(i as { row?: number }).row ?? '?'}`, i.message]));
         throw new AppError('unprocessable', 'csv_invalid', parsed.error.message, fields);
       }
-      return pours.addReadings(auth.shopId, params.id, parsed.value, 'csv', auth);
+      // The same limits as readings sent as JSON: a number is not yet a plausible temperature.
+      const checked = AddReadingsRequest.safeParse({ readings: parsed.value });
+      if (!checked.success) {
+        const fields = Object.fromEntries(
+          checked.error.issues.slice(0, 200).map((i) => {
+            const reading = typeof i.path[1] === 'number' ? parsed.value[i.path[1]] : undefined;
+            return [reading ? `at ${reading.at}` : 'readings', i.message];
+          }),
+        );
+        const [where, what] = Object.entries(fields)[0]!;
+        throw new AppError('unprocessable', 'csv_invalid', `The temperature log was not imported: the reading ${where}: ${what}. Fix these rows and import it again.`, fields);
+      }
+      return pours.addReadings(auth.shopId, params.id, checked.data.readings, 'csv', auth);
     },
   );
   api.add(
