@@ -11,7 +11,9 @@ export const text = (max: number, label: string) =>
   z
     .string({ message: `${label} must be text` })
     .trim()
-    .max(max, { message: `${label} must be at most ${max} characters` });
+    .max(max, { message: `${label} must be at most ${max} characters` })
+    // PostgreSQL text cannot hold U+0000; refused here, the answer names the field.
+    .refine((s) => !s.includes('\u0000'), { message: `${label} contains a NUL character (U+0000); remove it` });
 
 export const requiredText = (max: number, label: string) =>
   text(max, label).min(1, { message: `${label} is required` });
