@@ -115,4 +115,16 @@ describe('equivalent age (maturity method of ASTM C1074: te = Σ exp(−Q(1/Ta �
     });
     expect(age.ok || age.error.code).toBe('readings_out_of_order');
   });
+
+  it('refuses a reading at or below absolute zero instead of counting it as an endless cure', () => {
+    // Zero kelvin is −273.15 °C exactly (SI Brochure, 9th ed., 2019); below it the Arrhenius
+    // factor came out as 2e110, so an hour at −300 °C read as a finished cure.
+    const age = equivalentAge({
+      readings: [{ at: '2025-03-01T18:00:00Z', tempC: -300 }, { at: '2025-03-01T19:00:00Z', tempC: 20 }],
+      refTempC: 20,
+      activationEnergyKJPerMol: q5000,
+    });
+    expect(age.ok || age.error.code).toBe('temperature_invalid');
+    expect(age.ok || age.error.message).toMatch(/^Reading 1: -300 °C is at or below absolute zero/);
+  });
 });

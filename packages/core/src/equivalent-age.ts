@@ -59,6 +59,8 @@ function readTimes(readings: CureReading[]): Result<TimedReading[]> {
     const ms = parseIsoInstant(reading.at);
     if (!ms.ok) return fail(ms.error.code, `Reading ${i + 1}: ${ms.error.message}`);
     if (!Number.isFinite(reading.tempC)) return fail('temperature_invalid', `Reading ${i + 1}: the temperature must be a number in °C, got ${String(reading.tempC)}.`);
+    // At or below 0 K (−273.15 °C, SI Brochure 2019) the Arrhenius factor is undefined or infinite.
+    if (reading.tempC <= -273.15) return fail('temperature_invalid', `Reading ${i + 1}: ${reading.tempC} °C is at or below absolute zero (−273.15 °C); check that the log is in °C.`);
     const before = timed[i - 1];
     if (before && ms.value <= before.ms) {
       return fail('readings_out_of_order', `Reading ${i + 1} (${reading.at}) is not later than the reading before it; give readings in time order, each time once.`);

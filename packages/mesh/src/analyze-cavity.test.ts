@@ -153,3 +153,18 @@ describe('moulds the exact method cannot take', () => {
     expect(l.ok ? '' : l.error.code).toBe('level_invalid');
   });
 });
+
+describe('analyzeStl: slivers', () => {
+  it('keeps the column grid within its budget for a mould 1e20 times longer than it is wide', () => {
+    // The grid's aspect once followed the box unchecked, asking for a 2.6e12-column row and
+    // throwing a RangeError from inside the worker instead of answering.
+    const sliver = cellSolid([0, 1e20], [0, 1], [0, 1], () => true);
+    const result = analyzeStl(encodeStlBinary(sliver), { maxColumns: 4096 });
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(result.value.columns.nx * result.value.columns.ny).toBeLessThanOrEqual(4096);
+    // Cuboid V = abc (CRC Concise Encyclopedia of Mathematics), from float32 corners.
+    expect(relative(result.value.enclosedVolumeMm3!, Math.fround(1e20))).toBeLessThan(1e-12);
+  });
+});
+

@@ -27,7 +27,8 @@ export const analysisDefaults = { targetErrorPct: 0.5, maxColumns: 262_144, maxK
 const maxStoredIntervals = 393_216;
 
 function gridShape(columns: number, width: number, depth: number): [number, number] {
-  const nx = Math.max(1, Math.round(Math.sqrt((columns * width) / depth)));
+  // A sliver (a mould 1e20 times longer than wide) must not ask for more columns than the budget.
+  const nx = Math.min(columns, Math.max(1, Math.round(Math.sqrt((columns * width) / depth))));
   return [nx, Math.max(1, Math.round(columns / nx))];
 }
 

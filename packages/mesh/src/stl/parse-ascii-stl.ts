@@ -119,8 +119,13 @@ export function parseAsciiStl(bytes: Uint8Array, maxTriangles: number): Result<T
     if (!nextToken()) return truncated(`the ${label}`);
     const v = readNumber();
     if (v === undefined) return unexpected(`a number (${label})`);
-    if (!Number.isFinite(v) && !ignoreNonFinite) {
+    if (ignoreNonFinite) return v;
+    if (!Number.isFinite(v)) {
       return fail('stl_non_finite', `Line ${lineAt(tokenStart)} of the ASCII STL has the coordinate "${tokenText()}", which is not a finite number; repair or re-export the mesh.`);
+    }
+    // Corners are kept as float32 like a binary STL's, and 1e39 is finite only in float64.
+    if (!Number.isFinite(Math.fround(v))) {
+      return fail('stl_non_finite', `Line ${lineAt(tokenStart)} of the ASCII STL has the coordinate "${tokenText()}", beyond the ±3.4e38 an STL coordinate can hold; check the units and re-export the mesh.`);
     }
     return v;
   };

@@ -109,6 +109,17 @@ describe('parseStl: refusals', () => {
     expect(codeOf(text(`solid x\n${facet([['0', '0', '-inf'], ['1', '0', '0'], ['0', '1', '0']])}endsolid x\n`))).toBe('stl_non_finite');
   });
 
+  it('refuses ASCII coordinates beyond the float32 range that STL corners are kept in', () => {
+    // IEEE 754 binary32 holds at most (2 − 2^-23)·2^127 ≈ 3.4028235e38; 1e39 used to become
+    // Infinity after the finite check and break the analysis downstream.
+    const corners = (x: string) => text(`solid x\n${facet([[x, '0', '0'], ['1', '0', '0'], ['0', '1', '0']])}endsolid x\n`);
+    expect(codeOf(corners('1e39'))).toBe('stl_non_finite');
+    expect(codeOf(corners('-3.5e38'))).toBe('stl_non_finite');
+    expect(codeOf(corners('3.4028234e38'))).toBeUndefined();
+    const r = parseStl(corners('1e39'));
+    expect(r.ok || r.error.message).toMatch(/^Line 4 of the ASCII STL has the coordinate "1e39", beyond/);
+  });
+
   it('refuses more triangles than the configured cap, binary and ASCII', () => {
     expect(codeOf(encodeStlBinary(cube), 11)).toBe('stl_too_many_triangles');
     expect(codeOf(text(encodeStlAscii(cube)), 11)).toBe('stl_too_many_triangles');
