@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id, Timestamp, UserRef } from './common';
+import { Id, Timestamp, UserRef, instant } from './common';
 
 export const AuditEvent = z.object({
   id: Id,
@@ -17,7 +17,7 @@ export const AuditListQuery = z
     objectType: z.string().max(40).optional(),
     objectId: z.string().max(80).optional(),
     limit: z.coerce.number().int().min(1).max(200).default(50),
-    before: z.iso.datetime({ offset: true }).optional(),
+    before: instant('before').optional(),
   })
   .strict();
 

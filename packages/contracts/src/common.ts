@@ -30,7 +30,26 @@ export const Password = z
   .min(8, { message: 'password must be at least 8 characters' })
   .max(200, { message: 'password must be at most 200 characters' });
 
-export const Timestamp = z.iso.datetime({ offset: true }).describe('ISO 8601 date-time');
+const OFFSET = /(?:Z|([+-])(\d{2}):?(\d{2}))$/;
+
+/**
+ * An ISO 8601 instant a shop's records can hold: years 1900–2999 and offsets within ±14:00, the widest
+ * in use (IANA tz database, Pacific/Kiritimati); PostgreSQL refuses year 0000 and offsets past ±15:59.
+ */
+export const instant = (label = 'time') =>
+  z.iso
+    .datetime({ offset: true, message: `${label} must be an ISO time with Z or an offset, e.g. 2026-11-01T14:30:00Z` })
+    .refine(
+      (s) => {
+        const year = Number(s.slice(0, 4));
+        const offset = OFFSET.exec(s);
+        const offsetMin = offset?.[1] ? Number(offset[2]) * 60 + Number(offset[3]) : 0;
+        return year >= 1900 && year <= 2999 && offsetMin <= 14 * 60;
+      },
+      { message: `${label} must fall between the years 1900 and 2999, with an offset of at most ±14:00` },
+    );
+
+export const Timestamp = instant().describe('ISO 8601 date-time');
 
 export const ErrorBody = z.object({
   error: z.object({

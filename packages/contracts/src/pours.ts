@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id, Timestamp, UserRef, text } from './common';
+import { Id, Timestamp, UserRef, instant, text } from './common';
 import { Warning } from './molds';
 
 const grams = (label: string) => z.number({ message: `${label} must be a number (g)` }).min(0, { message: `${label} cannot be negative` }).max(1_000_000, { message: `${label} is implausibly large` });
@@ -15,7 +15,7 @@ export const StartPourRequest = z.object({ pourPlanId: Id, notifyUserIds: z.arra
 export const LogBatchRequest = z
   .object({
     planBatchIndex: z.number().int().min(0).max(10_000),
-    mixedAt: z.iso.datetime({ offset: true }).optional(),
+    mixedAt: instant('mixedAt').optional(),
     lotAId: Id.nullable().default(null),
     lotBId: Id.nullable().default(null),
     lotPigmentId: Id.nullable().default(null),
@@ -60,7 +60,7 @@ export const BatchView = z.object({
 });
 export type BatchView = z.infer<typeof BatchView>;
 
-export const ReadingInput = z.object({ at: z.iso.datetime({ offset: true, message: 'at must be an ISO time with Z or an offset' }), tempC: temp('temperature') });
+export const ReadingInput = z.object({ at: instant('at'), tempC: temp('temperature') });
 export const AddReadingsRequest = z.object({ readings: z.array(ReadingInput).min(1).max(10_000) }).strict();
 export const IngestReadingsRequest = z.object({ pourId: Id, readings: z.array(ReadingInput).min(1).max(10_000) }).strict();
 export const ReadingsAdded = z.object({ added: z.number().int(), duplicates: z.number().int() });
@@ -96,7 +96,7 @@ export const CureCheckView = z.object({ id: Id, checkedAt: Timestamp, stage: Cur
 export const CureCheckFields = z
   .object({
     stage: CureCheckStage,
-    checkedAt: z.iso.datetime({ offset: true }).optional(),
+    checkedAt: instant('checkedAt').optional(),
     hardnessShoreD: z.coerce.number().min(0).max(100, { message: 'Shore D hardness runs 0–100' }).optional(),
     note: text(2000, 'note').default(''),
   })
@@ -140,7 +140,7 @@ export const PourListQuery = z
   .strict();
 export const PourList = z.object({ items: z.array(PourSummary), total: z.number().int() });
 
-export const MachinedRequest = z.object({ machinedAt: z.iso.datetime({ offset: true }).optional(), finishCoats: z.number().int().min(0).max(20), hoursBetweenCoats: z.number().positive().max(24 * 30) }).strict();
+export const MachinedRequest = z.object({ machinedAt: instant('machinedAt').optional(), finishCoats: z.number().int().min(0).max(20), hoursBetweenCoats: z.number().positive().max(24 * 30) }).strict();
 
 export const TodayView = z.object({
   due: z.array(ReminderView.extend({ pourId: Id, pieceName: z.string() })).describe('reminders due in the next 24 hours or overdue'),

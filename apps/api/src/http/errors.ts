@@ -56,14 +56,30 @@ export function fromZod(err: ZodError, where: 'body' | 'query' | 'path'): AppErr
   return new AppError('bad_request', 'invalid_input', `invalid ${where} — ${label}${first?.message ?? 'not valid'}${unknownKeys}`, fields);
 }
 
-const PG_UNAVAILABLE = new Set(['57P01', '57P02', '57P03', '08000', '08003', '08006', '08001', '08004']);
+// SQLSTATE (PostgreSQL manual, appendix A): class 08 connection exceptions, 57P01–57P05 the server
+// shutting down, restarting or not yet accepting connections, 53300 too many connections.
+const PG_UNAVAILABLE = /^(08...|57P0[1-5]|53300)$/;
+// Socket errors on the way to the database host: refused, reset, unreachable, timed out, unresolvable.
+const NET_UNAVAILABLE = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EHOSTUNREACH', 'ENETUNREACH', 'EPIPE', 'ENOTFOUND', 'EAI_AGAIN']);
+// node-postgres and its pool say these in words only.
+const DRIVER_UNAVAILABLE = /Connection terminated|timeout exceeded when trying to connect|connect ECONNREFUSED|not queryable/;
 
-function isDatabaseDown(err: unknown): boolean {
-  const e = err as { code?: string; message?: string } | undefined;
-  if (!e) return false;
-  if (e.code && PG_UNAVAILABLE.has(e.code)) return true;
-  if (e.code === 'ECONNREFUSED' || e.code === 'ECONNRESET') return true;
-  return /Connection terminated|timeout exceeded when trying to connect|connect ECONNREFUSED/.test(e.message ?? '');
+interface DriverFailure {
+  code?: unknown;
+  message?: unknown;
+  /** TypeORM's QueryFailedError keeps the driver's own error here. */
+  driverError?: unknown;
+  /** A connection tried on several addresses fails with an AggregateError of each attempt. */
+  errors?: unknown;
+}
+
+function isDatabaseDown(err: unknown, depth = 0): boolean {
+  if (!err || typeof err !== 'object' || depth > 3) return false;
+  const e = err as DriverFailure;
+  if (typeof e.code === 'string' && (PG_UNAVAILABLE.test(e.code) || NET_UNAVAILABLE.has(e.code))) return true;
+  if (typeof e.message === 'string' && DRIVER_UNAVAILABLE.test(e.message)) return true;
+  if (isDatabaseDown(e.driverError, depth + 1)) return true;
+  return Array.isArray(e.errors) && e.errors.some((inner) => isDatabaseDown(inner, depth + 1));
 }
 
 /**
@@ -72,10 +88,17 @@ function isDatabaseDown(err: unknown): boolean {
  */
 const PG_UNSTORABLE_TEXT = new Set(['22021', '22P05']);
 
-function fromUnstorableText(err: unknown): AppError | undefined {
+/** Numbers and times past what a column holds (22003 numeric, 22008 date/time, 22009 time zone offset). */
+const PG_OUT_OF_RANGE = new Set(['22003', '22008', '22009']);
+
+function fromUnstorableInput(err: unknown): AppError | undefined {
   const e = err as { code?: string } | undefined;
-  if (!e?.code || !PG_UNSTORABLE_TEXT.has(e.code)) return undefined;
-  return new AppError('bad_request', 'invalid_text', 'the request contains a NUL character (U+0000), which text cannot hold; remove it and send again');
+  if (!e?.code) return undefined;
+  if (PG_UNSTORABLE_TEXT.has(e.code)) return new AppError('bad_request', 'invalid_text', 'the request contains a NUL character (U+0000), which text cannot hold; remove it and send again');
+  if (PG_OUT_OF_RANGE.has(e.code)) return new AppError('bad_request', 'value_out_of_range', 'a number or time in the request is outside what can be stored; check its size, its year and its time-zone offset');
+  // 23505: two requests at once made the same unique thing; the services check first, this is the race.
+  if (e.code === '23505') return new AppError('conflict', 'already_exists', 'that already exists (another request made it a moment ago); reload and try again');
+  return undefined;
 }
 
 /** Turns body-parser's own errors (bad JSON, too large) into ours. */
@@ -94,7 +117,7 @@ export function toAppError(err: unknown): AppError | undefined {
   if (err instanceof AppError) return err;
   if (err instanceof ZodError) return fromZod(err, 'body');
   if (isDatabaseDown(err)) return new AppError('unavailable', 'database_unavailable', 'the database is not reachable right now; try again in a moment');
-  return fromUnstorableText(err) ?? fromBodyParser(err);
+  return fromUnstorableInput(err) ?? fromBodyParser(err);
 }
 
 export function errorHandler(logger: Logger): ErrorRequestHandler {
