@@ -59,13 +59,22 @@ describe('gelpoint cure', () => {
     expect(out).toMatch(/equivalent at 20 °C\s+2\.00 h/);
   });
 
-  it('refuses a bad file with one line naming the row', async () => {
+  it('counts every bad row of a very bad log, past the thousand kept one by one', async () => {
+    const file = csv('worse.csv', `time,tempC\n${'yesterday,10\n'.repeat(1500)}`);
+    await command(['--readings', file, '--ref-temp-c', '20', '--activation-kj-mol', '50']).catch((err: Error) => {
+      expect(err.message).toContain('; and 1495 more.');
+    });
+    await expect(command(['--readings', file, '--ref-temp-c', '20', '--activation-kj-mol', '50'])).rejects.toBeInstanceOf(CliError);
+  });
+
+  it('refuses a bad file with one line naming the rows', async () => {
     const file = csv('bad.csv', 'time,tempC\n2025-01-10T08:00:00Z,10\n2025-01-10T09:00:00Z,10\n2025-01-10T10:00:00Z,10\n2025-01-10T11:00:00Z,10\n2025-01-10T12:00:00Z,10\nyesterday,10\n2025-01-10T11:30:00Z,x\n');
     const run = command(['--readings', file, '--ref-temp-c', '20', '--activation-kj-mol', '50']);
     await expect(run).rejects.toBeInstanceOf(CliError);
     await run.catch((err: Error) => {
       expect(err.message).toContain('row 7: time "yesterday" is not an ISO date');
-      expect(err.message).toContain('and 1 more bad row; nothing was imported');
+      expect(err.message).toContain('row 8:');
+      expect(err.message).toContain('was not imported');
       expect(err.message).not.toContain('\n');
     });
   });
