@@ -52,8 +52,8 @@ export class E2eStack {
     return `http://127.0.0.1:${this.apiPort}`;
   }
 
-  async start(): Promise<void> {
-    const url = process.env.GELPOINT_E2E_DATABASE_URL;
+  /** Against the seeded demo database npm test made, unless a flow brings its own (see freshDemoDatabase). */
+  async start(url = process.env.GELPOINT_E2E_DATABASE_URL): Promise<void> {
     if (!url) throw new Error('GELPOINT_E2E_DATABASE_URL is not set: run the browser tests through npm test');
     this.apiPort = await freePort();
     this.mailHttpPort = await freePort();
@@ -80,7 +80,8 @@ export class E2eStack {
       this.children.push(child);
     }
     try {
-      await Promise.all([waitFor(`${this.baseUrl}/api/health`, 30_000), waitFor(`http://127.0.0.1:${this.mailHttpPort}/api/messages`, 30_000)]);
+      // The API compiles its TypeScript on start: on a busy 2-core machine that alone can take half a minute.
+      await Promise.all([waitFor(`${this.baseUrl}/api/health`, 60_000), waitFor(`http://127.0.0.1:${this.mailHttpPort}/api/messages`, 60_000)]);
     } catch (err) {
       throw new Error(`${(err as Error).message}\n${this.output}`);
     }
