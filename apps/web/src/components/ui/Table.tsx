@@ -15,7 +15,7 @@ export interface TableProps {
  */
 export function Table({ caption, showCaption = false, children }: TableProps) {
   return (
-    <div role="region" aria-label={caption} tabIndex={0} className="overflow-x-auto rounded-xl border border-line bg-white">
+    <div role="region" aria-label={caption} tabIndex={0} className="relative overflow-x-auto rounded-xl border border-line bg-white">
       <table className="w-full min-w-[36rem] border-collapse text-left text-base">
         <caption className={showCaption ? 'px-4 pt-3 text-left font-semibold' : 'sr-only'}>{caption}</caption>
         {children}

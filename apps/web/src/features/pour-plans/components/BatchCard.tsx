@@ -67,7 +67,7 @@ export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG }: Bat
       </p>
       <p className="flex flex-wrap items-end gap-x-3 gap-y-2 text-base">
         <input id={mixedId} type="checkbox" className="size-6 accent-walnut-800" />
-        <label htmlFor={mixedId} className="font-semibold">
+        <label htmlFor={mixedId} className="inline-flex min-h-touch min-w-touch items-center font-semibold">
           Mixed
         </label>
         <Blank label="by" />

@@ -20,10 +20,12 @@ export function Switch({ label, hint, inputProps }: { label: string; hint?: stri
   const id = useId();
   const hintId = hint ? `${id}-hint` : undefined;
   return (
-    <div className="flex min-h-touch items-start gap-3">
-      <input id={id} type="checkbox" aria-describedby={hintId} className="mt-1 size-5 accent-walnut-800" {...inputProps} />
+    // The label stretches over the whole row, so the row is one target of at least 44 px while the name stays the label;
+    // the box itself sits above that stretch, so a press on it lands on it.
+    <div className="relative flex min-h-touch items-start gap-3">
+      <input id={id} type="checkbox" aria-describedby={hintId} className="relative z-10 mt-1 size-5 accent-walnut-800" {...inputProps} />
       <div className="flex flex-col">
-        <label htmlFor={id} className="font-semibold">
+        <label htmlFor={id} className="cursor-pointer font-semibold after:absolute after:inset-0 after:content-['']">
           {label}
         </label>
         {hint ? (

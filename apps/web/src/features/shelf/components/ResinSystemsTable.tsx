@@ -75,7 +75,7 @@ export function ResinSystemsTable({ resinSystems, unitSystem, sort, onSort }: Re
             <Td>{resinUseWords[product.use]}</Td>
             <Td>{mixRatioText(product.mixRatio)}</Td>
             <Td>
-              {product.potLifeMin} min at {product.referenceTempC} °C
+              {product.potLifeMin}&nbsp;min at {product.referenceTempC}&nbsp;°C
             </Td>
             <Td>{formatLength(product.maxLayerMm, unitSystem).text}</Td>
             <Td>{formatMass(product.maxBatchG, unitSystem).text}</Td>

@@ -72,7 +72,7 @@ export function Component() {
       />
       {saved.ok ? (
         <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-          <section aria-labelledby="stored-result" className="flex flex-col gap-3">
+          <section aria-labelledby="stored-result" className="flex min-w-0 flex-col gap-3">
             <h2 id="stored-result" className="text-xl font-bold text-walnut-900">
               The saved plan
             </h2>
