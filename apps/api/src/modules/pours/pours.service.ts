@@ -29,6 +29,21 @@ export interface LogBatchInput {
   acknowledgeExpiredLot: boolean;
 }
 
+interface LoggedBatch {
+  step: string;
+  mixed_at: Date;
+}
+
+function groupByPour<T extends { pour_id: string }>(rows: T[]): Map<string, T[]> {
+  const out = new Map<string, T[]>();
+  for (const r of rows) {
+    const list = out.get(r.pour_id);
+    if (list) list.push(r);
+    else out.set(r.pour_id, [r]);
+  }
+  return out;
+}
+
 interface Loaded {
   pour: Pour;
   piece: Piece;
@@ -59,11 +74,15 @@ export class Pours {
     return rows.map((r) => ({ at: r.taken_at.toISOString(), tempC: r.temp_c }));
   }
 
-  private async state(m: EntityManager, l: Loaded) {
-    const logged: { step: string; mixed_at: Date }[] = await m.query('SELECT step, mixed_at FROM pour_batches WHERE pour_id = $1', [l.pour.id]);
+  private stateOf(l: Loaded, logged: LoggedBatch[], readings: CureReading[]) {
     const steps = planSteps(l.result, l.snapshot);
-    const state = cureState(steps, logged.map((b) => ({ step: b.step, mixedAt: b.mixed_at })), await this.readingsOf(m, l.pour.id), l.pour.assumedTempC, this.now());
+    const state = cureState(steps, logged.map((b) => ({ step: b.step, mixedAt: b.mixed_at })), readings, l.pour.assumedTempC, this.now());
     return { state, batchesLogged: logged.length, batchesPlanned: plannedBatches(l.result).length };
+  }
+
+  private async state(m: EntityManager, l: Loaded) {
+    const logged: LoggedBatch[] = await m.query('SELECT step, mixed_at FROM pour_batches WHERE pour_id = $1', [l.pour.id]);
+    return this.stateOf(l, logged, await this.readingsOf(m, l.pour.id));
   }
 
   /** Recomputes the pour's pending reminders from everything logged so far; called after every change. */
@@ -80,8 +99,12 @@ export class Pours {
   }
 
   private async summary(m: EntityManager, l: Loaded): Promise<PourSummary> {
-    const { state, batchesLogged, batchesPlanned } = await this.state(m, l);
+    const state = await this.state(m, l);
     const next = await m.findOne(Reminder, { where: { pourId: l.pour.id, status: 'pending' }, order: { dueAt: 'ASC' } });
+    return this.summaryOf(l, state, next);
+  }
+
+  private summaryOf(l: Loaded, { state, batchesLogged, batchesPlanned }: ReturnType<Pours['stateOf']>, next: Reminder | null): PourSummary {
     return {
       id: l.pour.id,
       piece: { id: l.piece.id, name: l.piece.name, stage: l.piece.stage },
@@ -133,15 +156,26 @@ export class Pours {
       );
     }
     const [pours, total] = await qb.orderBy('p.createdAt', 'DESC').addOrderBy('p.id').take(q.limit).skip(q.offset).getManyAndCount();
-    // Plans and pieces of the whole page in two queries; each summary then reads only its own log.
-    const plans = new Map((await this.ds.manager.findBy(PourPlan, { id: In(pours.map((p) => p.pourPlanId)) })).map((p) => [p.id, p]));
-    const pieces = new Map((await this.ds.manager.findBy(Piece, { id: In(pours.map((p) => p.pieceId)) })).map((p) => [p.id, p]));
-    const items: PourSummary[] = [];
-    for (const pour of pours) {
+    // Everything the page shows in five queries, whatever its length: plans, pieces, and the logged
+    // batches, readings and next reminder of every pour on it.
+    const m = this.ds.manager;
+    const ids = pours.map((p) => p.id);
+    const plans = new Map((await m.findBy(PourPlan, { id: In(pours.map((p) => p.pourPlanId)) })).map((p) => [p.id, p]));
+    const pieces = new Map((await m.findBy(Piece, { id: In(pours.map((p) => p.pieceId)) })).map((p) => [p.id, p]));
+    const logged = groupByPour<LoggedBatch & { pour_id: string }>(ids.length ? await m.query('SELECT pour_id, step, mixed_at FROM pour_batches WHERE pour_id = ANY($1)', [ids]) : []);
+    const readings = groupByPour<{ pour_id: string; taken_at: Date; temp_c: number }>(
+      ids.length ? await m.query('SELECT pour_id, taken_at, temp_c FROM temperature_readings WHERE pour_id = ANY($1) ORDER BY pour_id, taken_at', [ids]) : [],
+    );
+    const next = ids.length
+      ? await m.getRepository(Reminder).createQueryBuilder('r').distinctOn(['r.pourId']).where('r.pourId IN (:...ids)', { ids }).andWhere(`r.status = 'pending'`).orderBy('r.pourId').addOrderBy('r.dueAt', 'ASC').getMany()
+      : [];
+    const nextOf = new Map(next.map((r) => [r.pourId, r]));
+    const items = pours.map((pour) => {
       const plan = plans.get(pour.pourPlanId)!;
-      const piece = pieces.get(pour.pieceId)!;
-      items.push(await this.summary(this.ds.manager, { pour, plan, piece, result: plan.result as unknown as CorePourPlan, snapshot: plan.productSnapshot as unknown as PlanSnapshot }));
-    }
+      const l: Loaded = { pour, plan, piece: pieces.get(pour.pieceId)!, result: plan.result as unknown as CorePourPlan, snapshot: plan.productSnapshot as unknown as PlanSnapshot };
+      const log = (readings.get(pour.id) ?? []).map((r) => ({ at: r.taken_at.toISOString(), tempC: r.temp_c }));
+      return this.summaryOf(l, this.stateOf(l, logged.get(pour.id) ?? [], log), nextOf.get(pour.id) ?? null);
+    });
     return { items, total };
   }
 
