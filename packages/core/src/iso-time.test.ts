@@ -1,0 +1,40 @@
+import fc from 'fast-check';
+import { DateTime } from 'luxon';
+import { describe, expect, it } from 'vitest';
+import { parseIsoInstant } from './iso-time';
+
+// Reference: luxon's ISO 8601 reader (DateTime.fromISO with setZone), the library the slow path uses.
+const luxonMs = (text: string) => DateTime.fromISO(text, { setZone: true }).toMillis();
+
+describe('parseIsoInstant', () => {
+  it('reads canonical UTC instants exactly as luxon does', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: Date.UTC(1900, 0, 1), max: Date.UTC(2999, 11, 31) }), fc.boolean(), (ms, withMs) => {
+        const iso = new Date(ms).toISOString();
+        const text = withMs ? iso : `${iso.slice(0, 19)}Z`;
+        const r = parseIsoInstant(text);
+        expect(r.ok && r.value).toBe(luxonMs(text));
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it('still refuses dates that do not exist and agrees with luxon on hour 24 and short fractions', () => {
+    expect(parseIsoInstant('2026-02-30T10:00:00Z').ok).toBe(false);
+    expect(parseIsoInstant('2026-13-01T10:00:00Z').ok).toBe(false);
+    for (const text of ['2026-11-01T10:00:00.5Z', '2026-11-01T10:00:00.25Z', '2026-11-01T23:59:59.999Z']) {
+      const r = parseIsoInstant(text);
+      expect(r.ok && r.value, text).toBe(luxonMs(text));
+    }
+    const midnight = parseIsoInstant('2026-11-01T24:00:00Z');
+    const luxonMidnight = DateTime.fromISO('2026-11-01T24:00:00Z', { setZone: true });
+    expect(midnight.ok).toBe(luxonMidnight.isValid);
+    if (midnight.ok) expect(midnight.value).toBe(luxonMidnight.toMillis());
+  });
+
+  it('keeps offsets and refuses times without one', () => {
+    const r = parseIsoInstant('2026-11-01T10:00:00+02:00');
+    expect(r.ok && r.value).toBe(Date.UTC(2026, 10, 1, 8));
+    expect(parseIsoInstant('2026-11-01T10:00:00').ok).toBe(false);
+  });
+});
