@@ -1,5 +1,5 @@
 import type { PigmentView, ResinSystemView } from '@gelpoint/contracts';
-import type { UnitSystem } from '@gelpoint/core';
+import { formatLength, type UnitSystem } from '@gelpoint/core';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
@@ -16,6 +16,7 @@ import { useLivePlan } from '../hooks/use-live-plan';
 import { formDefaultsOf } from '../utils/form-defaults';
 import { optionalNumber, requiredNumber } from '../utils/number-input';
 import { absorptionOptions, moldOptions, pigmentOptions, productOptions, shapeOptions } from '../utils/planner-options';
+import { shownPlannerValues, shownUnitNames, type PlannerUnits } from '../utils/planner-units';
 import { fieldOfIssuePath, plannerResolver } from '../utils/planner-validation';
 import type { PlannerValues, SavedPlanInput } from '../utils/planner-values';
 import { LivePlanPanel } from './LivePlanPanel';
@@ -23,6 +24,7 @@ import { FieldGrid, PlannerSection, Switch } from './PlannerSection';
 
 export interface PourPlannerProps {
   pieceId: string;
+  /** In mm and °C, as the contract holds them; the form shows them in the shop's units. */
   initialValues: PlannerValues;
   resinSystems: readonly ResinSystemView[];
   pigments: readonly PigmentView[];
@@ -41,18 +43,27 @@ const damChoices = [
   { value: 'outline', label: 'Dams along the outline', hint: 'resin only where the mould is' },
   { value: 'box', label: 'A box dam', hint: 'around the whole bounding box' },
 ];
-const cupWasteUnits = [
-  { value: 'g', label: 'g per cup' },
-  { value: 'mL', label: 'mL per cup' },
-];
+function cupWasteUnits(unitSystem: UnitSystem) {
+  const units = shownUnitNames(unitSystem);
+  return [
+    { value: 'g', label: `${units.mass} per cup` },
+    { value: 'mL', label: `${units.volume} per cup` },
+  ];
+}
 
 /** The maker's pour planner: inputs on one side, the plan they make on the other, recomputed as they type. */
 export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, unitSystem, scaleResolutionG, submitLabel, busy, save }: PourPlannerProps) {
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm<PlannerValues, unknown, SavedPlanInput>({ resolver: plannerResolver(pieceId), defaultValues: formDefaultsOf(initialValues) });
+  // The form is filled once, in the units of the shop as it was then; what it started from lets untouched values go back unchanged.
+  const [units] = useState<PlannerUnits>(() => ({ unitSystem, origin: initialValues }));
+  const form = useForm<PlannerValues, unknown, SavedPlanInput>({
+    resolver: plannerResolver(pieceId, units),
+    defaultValues: formDefaultsOf(shownPlannerValues(initialValues, units.unitSystem)),
+  });
   const { errors } = form.formState;
   const values = useWatch({ control: form.control }) as PlannerValues;
-  const live = useLivePlan({ values, pieceId, resinSystems, pigments, scaleResolutionG });
+  const live = useLivePlan({ values, pieceId, units, resinSystems, pigments, scaleResolutionG });
+  const unit = shownUnitNames(units.unitSystem);
   const molds = usePieceMolds(pieceId);
   const chosenMold = useMold(values.cavity?.source === 'mold' && values.cavity.moldId ? values.cavity.moldId : null);
   const moldSpan = chosenMold.data?.report?.bboxMm;
@@ -108,36 +119,36 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
               <FieldGrid>
                 {kind === 'rectangle' || kind === 'channel' ? (
                   <>
-                    <Field label="Length (mm)" error={errors.cavity?.shape?.lengthMm?.message} required>
+                    <Field label={`Length (${unit.length})`} error={errors.cavity?.shape?.lengthMm?.message} required>
                       {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.lengthMm')} />}
                     </Field>
-                    <Field label="Width (mm)" error={errors.cavity?.shape?.widthMm?.message} required>
+                    <Field label={`Width (${unit.length})`} error={errors.cavity?.shape?.widthMm?.message} required>
                       {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.widthMm')} />}
                     </Field>
                   </>
                 ) : null}
                 {kind === 'cylinder' ? (
-                  <Field label="Diameter (mm)" error={errors.cavity?.shape?.diameterMm?.message} required>
+                  <Field label={`Diameter (${unit.length})`} error={errors.cavity?.shape?.diameterMm?.message} required>
                     {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.diameterMm')} />}
                   </Field>
                 ) : null}
                 {kind === 'area_depth' ? (
                   <>
-                    <Field label="Outline area (mm²)" error={errors.cavity?.shape?.areaMm2?.message} required>
+                    <Field label={`Outline area (${unit.area})`} error={errors.cavity?.shape?.areaMm2?.message} required>
                       {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.areaMm2')} />}
                     </Field>
-                    <Field label="Average depth (mm)" error={errors.cavity?.shape?.averageDepthMm?.message} required>
+                    <Field label={`Average depth (${unit.length})`} error={errors.cavity?.shape?.averageDepthMm?.message} required>
                       {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.averageDepthMm')} />}
                     </Field>
-                    <Field label="Deepest point (mm)" hint="Leave empty for a flat floor." error={errors.cavity?.shape?.maxDepthMm?.message}>
+                    <Field label={`Deepest point (${unit.length})`} hint="Leave empty for a flat floor." error={errors.cavity?.shape?.maxDepthMm?.message}>
                       {(control) => <Input {...control} inputMode="decimal" {...optional('cavity.shape.maxDepthMm')} />}
                     </Field>
-                    <Field label="Outline perimeter (mm)" hint="Leave empty to estimate the walls from a circle of the same area." error={errors.cavity?.shape?.perimeterMm?.message}>
+                    <Field label={`Outline perimeter (${unit.length})`} hint="Leave empty to estimate the walls from a circle of the same area." error={errors.cavity?.shape?.perimeterMm?.message}>
                       {(control) => <Input {...control} inputMode="decimal" {...optional('cavity.shape.perimeterMm')} />}
                     </Field>
                   </>
                 ) : (
-                  <Field label="Depth (mm)" error={errors.cavity?.shape?.depthMm?.message} required>
+                  <Field label={`Depth (${unit.length})`} error={errors.cavity?.shape?.depthMm?.message} required>
                     {(control) => <Input {...control} inputMode="decimal" {...number('cavity.shape.depthMm')} />}
                   </Field>
                 )}
@@ -154,12 +165,12 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
             </>
           )}
           <Field
-            label="Fill level (mm)"
+            label={`Fill level (${unit.length})`}
             hint={
               source === 'shape'
                 ? 'Measured up from the floor of the cavity; its full depth fills it to the rim.'
                 : moldSpan
-                  ? `In the mould report's own frame: the mould runs from ${moldSpan.min[2].toFixed(1)} mm to ${moldSpan.max[2].toFixed(1)} mm.`
+                  ? `In the mould report's own frame: the mould runs from ${formatLength(moldSpan.min[2], units.unitSystem).text} to ${formatLength(moldSpan.max[2], units.unitSystem).text}.`
                   : "The level in the mould report's own frame."
             }
             error={errors.fillLevelMm?.message}
@@ -230,13 +241,13 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
               {(control) => <Input {...control} inputMode="decimal" {...number('cupWaste.amount')} />}
             </Field>
             <Field label="Cup waste is weighed in">
-              {(control) => <Select {...control} options={cupWasteUnits} {...form.register('cupWaste.unit')} />}
+              {(control) => <Select {...control} options={cupWasteUnits(units.unitSystem)} {...form.register('cupWaste.unit')} />}
             </Field>
           </FieldGrid>
         </PlannerSection>
 
         <PlannerSection legend="Shop">
-          <Field label="Shop temperature (°C)" hint="The times of the data sheet are stretched or shortened for it." error={errors.shopTempC?.message} required>
+          <Field label={`Shop temperature (${unit.temperature})`} hint="The times of the data sheet are stretched or shortened for it." error={errors.shopTempC?.message} required>
             {(control) => <Input {...control} inputMode="decimal" {...number('shopTempC')} />}
           </Field>
           <Switch label="Check the dew point" hint="With the humidity and the wood's surface temperature, the plan warns about condensation and amine blush." inputProps={form.register('shopAir.enabled')} />
@@ -245,7 +256,7 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
               <Field label="Relative humidity (%)" error={errors.shopAir?.rhPct?.message} required>
                 {(control) => <Input {...control} inputMode="decimal" {...number('shopAir.rhPct')} />}
               </Field>
-              <Field label="Surface temperature (°C)" error={errors.shopAir?.surfaceTempC?.message} required>
+              <Field label={`Surface temperature (${unit.temperature})`} error={errors.shopAir?.surfaceTempC?.message} required>
                 {(control) => <Input {...control} inputMode="decimal" {...number('shopAir.surfaceTempC')} />}
               </Field>
             </FieldGrid>
@@ -256,13 +267,13 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
           <Switch label="Add the wood to the cost" hint="Priced by the board foot (144 cubic inches)." inputProps={form.register('wood.enabled')} />
           {woodOn ? (
             <FieldGrid>
-              <Field label="Blank length (mm)" error={errors.wood?.lengthMm?.message} required>
+              <Field label={`Blank length (${unit.length})`} error={errors.wood?.lengthMm?.message} required>
                 {(control) => <Input {...control} inputMode="decimal" {...number('wood.lengthMm')} />}
               </Field>
-              <Field label="Blank width (mm)" error={errors.wood?.widthMm?.message} required>
+              <Field label={`Blank width (${unit.length})`} error={errors.wood?.widthMm?.message} required>
                 {(control) => <Input {...control} inputMode="decimal" {...number('wood.widthMm')} />}
               </Field>
-              <Field label="Blank thickness (mm)" error={errors.wood?.thicknessMm?.message} required>
+              <Field label={`Blank thickness (${unit.length})`} error={errors.wood?.thicknessMm?.message} required>
                 {(control) => <Input {...control} inputMode="decimal" {...number('wood.thicknessMm')} />}
               </Field>
               <Field label="Price per board foot (shop currency)" error={errors.wood?.pricePerBoardFoot?.message} required>

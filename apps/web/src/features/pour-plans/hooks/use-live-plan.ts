@@ -8,6 +8,7 @@ import { useMoldLayers } from '../api/get-mold-layers';
 import { valuesKey } from '../utils/form-defaults';
 import { livePourPlan, type LivePlan } from '../utils/live-plan';
 import { curveFromLayerVolumes, planCurveLevels } from '../utils/mold-curve';
+import type { PlannerUnits } from '../utils/planner-units';
 import type { PlannerValues } from '../utils/planner-values';
 import { checkPlanner, type PlannerCheck } from '../utils/planner-validation';
 import { useDebouncedValue } from './use-debounced-value';
@@ -25,19 +26,21 @@ export interface LivePlanState {
 }
 
 export interface UseLivePlanInput {
+  /** As typed, in the shop's units. */
   values: PlannerValues;
   pieceId: string;
+  units: PlannerUnits;
   resinSystems: readonly ResinSystemView[];
   pigments: readonly PigmentView[];
   scaleResolutionG: number;
 }
 
 /** The plan for the form as it stands, computed in the browser with core once the typing settles. */
-export function useLivePlan({ values, pieceId, resinSystems, pigments, scaleResolutionG }: UseLivePlanInput): LivePlanState {
+export function useLivePlan({ values, pieceId, units, resinSystems, pigments, scaleResolutionG }: UseLivePlanInput): LivePlanState {
   const key = valuesKey(values);
   const settled = useDebouncedValue(values, key, settleMs);
   const settledKey = valuesKey(settled);
-  const check = useMemo(() => checkPlanner(settled, pieceId), [settled, pieceId]);
+  const check = useMemo(() => checkPlanner(settled, pieceId, units), [settled, pieceId, units]);
 
   const cavity = check.ok ? check.input.cavity : null;
   const moldRequest = check.ok && cavity?.source === 'mold' ? { moldId: cavity.moldId, levelMm: check.input.fillLevelMm, dam: cavity.dam } : null;
