@@ -113,11 +113,27 @@ function fromBodyParser(err: unknown): AppError | undefined {
   return undefined;
 }
 
+/**
+ * Other 4xx errors the HTTP layer raises in the http-errors style (a `status` and `expose: true`): a path
+ * with a broken %-escape, a body whose Content-Encoding does not match its bytes, a file path the static
+ * server refuses. They are the request's fault, so they keep their status and get a sentence.
+ */
+function fromHttpLayer(err: unknown): AppError | undefined {
+  const e = err as { status?: unknown; statusCode?: unknown; expose?: unknown; code?: unknown } | undefined;
+  const status = typeof e?.status === 'number' ? e.status : typeof e?.statusCode === 'number' ? e.statusCode : undefined;
+  // The router marks a path parameter it cannot decode with status 400 but without expose.
+  if (err instanceof URIError && status === 400) return new AppError('bad_request', 'bad_path', 'the address holds a broken %-escape (a % must be followed by two hex digits); fix the link');
+  if (status === undefined || status < 400 || status >= 500 || e?.expose !== true) return undefined;
+  if (status === 403 || status === 404) return new AppError('not_found', 'not_found', 'there is nothing to serve at this address');
+  if (typeof e?.code === 'string' && e.code.startsWith('Z_')) return new AppError('bad_request', 'bad_encoding', 'the body does not match its Content-Encoding; send it uncompressed, or compressed as the header says');
+  return new AppError('bad_request', 'bad_request', 'the request could not be read; check its headers and body');
+}
+
 export function toAppError(err: unknown): AppError | undefined {
   if (err instanceof AppError) return err;
   if (err instanceof ZodError) return fromZod(err, 'body');
   if (isDatabaseDown(err)) return new AppError('unavailable', 'database_unavailable', 'the database is not reachable right now; try again in a moment');
-  return fromUnstorableInput(err) ?? fromBodyParser(err);
+  return fromUnstorableInput(err) ?? fromBodyParser(err) ?? fromHttpLayer(err);
 }
 
 export function errorHandler(logger: Logger): ErrorRequestHandler {
