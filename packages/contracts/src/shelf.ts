@@ -125,14 +125,39 @@ export const LotView = z.object({
 });
 export type LotView = z.infer<typeof LotView>;
 
+export const SortDirection = z.enum(['asc', 'desc'], { message: 'dir must be asc or desc' });
+export type SortDirection = z.infer<typeof SortDirection>;
+
+/** The columns the shelf's tables sort by; the whole shelf is sorted before it is paged. */
+export const ResinSystemSort = z.enum(['name', 'use', 'potLife', 'maxLayer', 'maxBatch', 'pricePerKg'], {
+  message: 'sort must be name, use, potLife, maxLayer, maxBatch or pricePerKg',
+});
+export type ResinSystemSort = z.infer<typeof ResinSystemSort>;
+export const PigmentSort = z.enum(['name', 'kind', 'recommendedLoading', 'maxLoading', 'pricePerKg'], {
+  message: 'sort must be name, kind, recommendedLoading, maxLoading or pricePerKg',
+});
+export type PigmentSort = z.infer<typeof PigmentSort>;
+export const LotSort = z.enum(['lotNumber', 'product', 'part', 'remaining', 'received', 'expires', 'state'], {
+  message: 'sort must be lotNumber, product, part, remaining, received, expires or state',
+});
+export type LotSort = z.infer<typeof LotSort>;
+
+const pageWindow = {
+  limit: z.coerce.number().int().min(1).max(500).default(100),
+  offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
+};
+
+/** What the resin-system and pigment lists share; each list adds the columns it sorts by. */
 export const ShelfListQuery = z
   .object({
     q: text(120, 'search').optional(),
     includeArchived: z.enum(['true', 'false']).optional(),
-    limit: z.coerce.number().int().min(1).max(500).default(100),
-    offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
+    ...pageWindow,
   })
   .strict();
+
+export const ResinSystemListQuery = ShelfListQuery.extend({ sort: ResinSystemSort.optional(), dir: SortDirection.default('asc') });
+export const PigmentListQuery = ShelfListQuery.extend({ sort: PigmentSort.optional(), dir: SortDirection.default('asc') });
 
 export const LotListQuery = z
   .object({
@@ -140,8 +165,9 @@ export const LotListQuery = z
     part: LotPart.optional(),
     productId: Id.optional(),
     status: z.enum(['all', 'in_stock', 'low', 'expired']).default('all'),
-    limit: z.coerce.number().int().min(1).max(500).default(100),
-    offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
+    sort: LotSort.optional(),
+    dir: SortDirection.default('asc'),
+    ...pageWindow,
   })
   .strict();
 

@@ -2,10 +2,13 @@ import type { DataSource, EntityManager, EntityTarget, ObjectLiteral } from 'typ
 import type { AuthContext } from '../../http/auth-context';
 import { notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
+import { orderByColumn, type SortDir } from './shelf-sort';
 
-export interface CatalogueQuery {
+export interface CatalogueQuery<Sort extends string> {
   q?: string;
   includeArchived?: 'true' | 'false';
+  sort?: Sort;
+  dir: SortDir;
   limit: number;
   offset: number;
 }
@@ -20,22 +23,29 @@ interface CatalogueRow extends ObjectLiteral {
 }
 
 /**
- * The shelf's products share one life cycle: listed by name, created, replaced whole from the data
+ * The SQL (on alias `p`) behind each column a product table sorts by; `name` is the default order.
+ * Names are compared in lower case because the database collates bytewise ("C").
+ */
+export type CatalogueSortColumns<Sort extends string> = Record<Sort | 'name', string>;
+
+/**
+ * The shelf's products share one life cycle: listed (by name unless another column is chosen), created, replaced whole from the data
  * sheet, archived (never deleted: old plans keep their snapshot, lots keep their product).
  */
-export class Catalogue<Row extends CatalogueRow, View> {
+export class Catalogue<Row extends CatalogueRow, View, Sort extends string> {
   constructor(
     private readonly ds: DataSource,
     private readonly entity: EntityTarget<Row>,
     private readonly objectType: string,
     private readonly view: (row: Row) => View,
+    private readonly sortColumns: CatalogueSortColumns<Sort>,
   ) {}
 
-  async list(shopId: string, q: CatalogueQuery): Promise<{ items: View[]; total: number }> {
+  async list(shopId: string, q: CatalogueQuery<Sort>): Promise<{ items: View[]; total: number }> {
     const qb = this.ds.getRepository(this.entity).createQueryBuilder('p').where('p.shop_id = :shopId', { shopId });
     if (q.includeArchived !== 'true') qb.andWhere('p.archived_at IS NULL');
     if (q.q) qb.andWhere('p.name ILIKE :like', { like: likePattern(q.q) });
-    const [rows, total] = await qb.orderBy('p.name', 'ASC').addOrderBy('p.id').take(q.limit).skip(q.offset).getManyAndCount();
+    const [rows, total] = await orderByColumn(qb, this.sortColumns[q.sort ?? 'name'], q.dir, 'p.id').offset(q.offset).limit(q.limit).getManyAndCount();
     return { items: rows.map(this.view), total };
   }
 

@@ -1,22 +1,38 @@
 import type { DataSource } from 'typeorm';
 import { Lot, Pigment, ResinSystem } from '@gelpoint/db';
-import type { LotInput, LotView } from '@gelpoint/contracts';
+import type { LotInput, LotSort, LotView } from '@gelpoint/contracts';
 import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { likePattern } from './catalogue.service';
 import { lotView } from './shelf-views';
+import { orderByColumn, type SortDir } from './shelf-sort';
 
 export interface LotQuery {
   q?: string;
   part?: 'A' | 'B' | 'pigment';
   productId?: string;
   status: 'all' | 'in_stock' | 'low' | 'expired';
+  sort?: LotSort;
+  dir: SortDir;
   limit: number;
   offset: number;
 }
 
 type LotRow = Lot & { productName: string };
+
+// The database collates bytewise ("C"), so names are compared in lower case to read as people expect.
+const lotSortColumns: Record<LotSort, string> = {
+  lotNumber: 'lower(l.lot_number)',
+  product: 'lower(COALESCE(r.name, g.name))',
+  part: 'l.part',
+  remaining: 'l.remaining_g',
+  received: 'l.received_on',
+  expires: 'l.expires_on',
+  // Stock state, worst first: expired (unusable however much is left), then used up, then low (under a
+  // tenth of what came in), then in stock — the same rules as the lot's own expired and low flags.
+  state: 'CASE WHEN l.expires_on < CURRENT_DATE THEN 0 WHEN l.remaining_g <= 0 THEN 1 WHEN l.remaining_g < l.quantity_g * 0.1 THEN 2 ELSE 3 END',
+};
 
 function baseQuery(ds: DataSource, shopId: string) {
   return ds
@@ -42,7 +58,7 @@ export async function listLots(ds: DataSource, shopId: string, q: LotQuery): Pro
   if (q.status === 'low') qb.andWhere('l.remaining_g < l.quantity_g * 0.1');
   if (q.status === 'in_stock') qb.andWhere('l.remaining_g > 0 AND (l.expires_on IS NULL OR l.expires_on >= CURRENT_DATE)');
   const total = await qb.getCount();
-  const rows = await withNames(qb.orderBy('l.expires_on', 'ASC', 'NULLS LAST').addOrderBy('l.id').offset(q.offset).limit(q.limit));
+  const rows = await withNames(orderByColumn(qb, lotSortColumns[q.sort ?? 'expires'], q.dir, 'l.id').offset(q.offset).limit(q.limit));
   return { items: rows.map(lotView), total };
 }
 

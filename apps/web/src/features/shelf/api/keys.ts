@@ -1,14 +1,16 @@
-import type { LotListQuery, ShelfListQuery } from '../utils/shelf-queries';
+import type { LotListQuery, PigmentListQuery, ResinSystemListQuery } from '../utils/shelf-queries';
+
+// A list's key holds its whole query, sort column and direction included: each order is its own cache entry.
 
 export const shelfKeys = {
   all: ['shelf'] as const,
   resinSystems: () => [...shelfKeys.all, 'resin-systems'] as const,
   resinSystemLists: () => [...shelfKeys.resinSystems(), 'list'] as const,
-  resinSystemList: (query: ShelfListQuery) => [...shelfKeys.resinSystemLists(), query] as const,
+  resinSystemList: (query: ResinSystemListQuery) => [...shelfKeys.resinSystemLists(), query] as const,
   resinSystem: (resinSystemId: string) => [...shelfKeys.resinSystems(), 'detail', resinSystemId] as const,
   pigments: () => [...shelfKeys.all, 'pigments'] as const,
   pigmentLists: () => [...shelfKeys.pigments(), 'list'] as const,
-  pigmentList: (query: ShelfListQuery) => [...shelfKeys.pigmentLists(), query] as const,
+  pigmentList: (query: PigmentListQuery) => [...shelfKeys.pigmentLists(), query] as const,
   pigment: (pigmentId: string) => [...shelfKeys.pigments(), 'detail', pigmentId] as const,
   lots: () => [...shelfKeys.all, 'lots'] as const,
   lotLists: () => [...shelfKeys.lots(), 'list'] as const,

@@ -1,47 +1,23 @@
-import type { LotView } from '@gelpoint/contracts';
+import type { LotSort, LotView } from '@gelpoint/contracts';
 import { formatMass, type UnitSystem } from '@gelpoint/core';
 import { Link } from 'react-router';
 import { Table, Td, Thead, Tr } from '../../../components/ui/Table';
 import { paths } from '../../../config/paths';
 import { formatCalendarDate } from '../utils/calendar-date';
 import { lotStateOf, lotStateWords } from '../utils/lot-status';
-import { sortRows, type SortState, type SortValue } from '../utils/table-sort';
+import type { SortState } from '../utils/table-sort';
 import { lotPartWords } from '../utils/shelf-words';
 import { LotStateMark } from './LotStateMark';
 import { SortableTh } from './SortableTh';
-
-const stateOrder = { expired: 0, used_up: 1, low: 2, in_stock: 3 } as const;
-
-function sortValue(lot: LotView, key: string): SortValue {
-  switch (key) {
-    case 'lotNumber':
-      return lot.lotNumber;
-    case 'productName':
-      return lot.productName;
-    case 'part':
-      return lotPartWords[lot.part];
-    case 'remainingG':
-      return lot.remainingG;
-    case 'receivedOn':
-      return lot.receivedOn;
-    case 'expiresOn':
-      return lot.expiresOn;
-    case 'state':
-      return stateOrder[lotStateOf(lot)];
-    default:
-      return null;
-  }
-}
 
 export interface LotsTableProps {
   lots: readonly LotView[];
   unitSystem: UnitSystem;
   sort: SortState | undefined;
-  onSort: (key: string) => void;
+  onSort: (key: LotSort) => void;
 }
 
 export function LotsTable({ lots, unitSystem, sort, onSort }: LotsTableProps) {
-  const rows = sortRows(lots, sort, sortValue);
   const header = { sort, onSort };
   return (
     <Table caption="Lots on the shelf">
@@ -50,19 +26,19 @@ export function LotsTable({ lots, unitSystem, sort, onSort }: LotsTableProps) {
           <SortableTh sortKey="lotNumber" {...header}>
             Lot
           </SortableTh>
-          <SortableTh sortKey="productName" {...header}>
+          <SortableTh sortKey="product" {...header}>
             Product
           </SortableTh>
           <SortableTh sortKey="part" {...header}>
             Part
           </SortableTh>
-          <SortableTh sortKey="remainingG" {...header}>
+          <SortableTh sortKey="remaining" {...header}>
             Left
           </SortableTh>
-          <SortableTh sortKey="receivedOn" {...header}>
+          <SortableTh sortKey="received" {...header}>
             Received
           </SortableTh>
-          <SortableTh sortKey="expiresOn" {...header}>
+          <SortableTh sortKey="expires" {...header}>
             Expires
           </SortableTh>
           <SortableTh sortKey="state" {...header}>
@@ -71,7 +47,7 @@ export function LotsTable({ lots, unitSystem, sort, onSort }: LotsTableProps) {
         </tr>
       </Thead>
       <tbody>
-        {rows.map((lot) => {
+        {lots.map((lot) => {
           const state = lotStateOf(lot);
           return (
             <Tr key={lot.id}>

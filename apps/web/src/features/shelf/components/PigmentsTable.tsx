@@ -1,39 +1,21 @@
-import type { PigmentView } from '@gelpoint/contracts';
+import type { PigmentSort, PigmentView } from '@gelpoint/contracts';
 import { formatMass, type UnitSystem } from '@gelpoint/core';
 import { Link } from 'react-router';
 import { Table, Td, Thead, Tr } from '../../../components/ui/Table';
 import { paths } from '../../../config/paths';
-import { sortRows, type SortState, type SortValue } from '../utils/table-sort';
+import type { SortState } from '../utils/table-sort';
 import { pigmentKindWords } from '../utils/shelf-words';
 import { ArchivedMark } from './ArchivedMark';
 import { SortableTh } from './SortableTh';
-
-function sortValue(pigment: PigmentView, key: string): SortValue {
-  switch (key) {
-    case 'name':
-      return pigment.name;
-    case 'kind':
-      return pigmentKindWords[pigment.kind];
-    case 'recommendedPct':
-      return pigment.recommendedPct;
-    case 'maxPct':
-      return pigment.maxPct;
-    case 'pricePerG':
-      return pigment.pricePerPack / pigment.packSizeG;
-    default:
-      return null;
-  }
-}
 
 export interface PigmentsTableProps {
   pigments: readonly PigmentView[];
   unitSystem: UnitSystem;
   sort: SortState | undefined;
-  onSort: (key: string) => void;
+  onSort: (key: PigmentSort) => void;
 }
 
 export function PigmentsTable({ pigments, unitSystem, sort, onSort }: PigmentsTableProps) {
-  const rows = sortRows(pigments, sort, sortValue);
   const header = { sort, onSort };
   return (
     <Table caption="Pigments on the shelf">
@@ -45,19 +27,19 @@ export function PigmentsTable({ pigments, unitSystem, sort, onSort }: PigmentsTa
           <SortableTh sortKey="kind" {...header}>
             Kind
           </SortableTh>
-          <SortableTh sortKey="recommendedPct" {...header}>
+          <SortableTh sortKey="recommendedLoading" {...header}>
             Recommended loading
           </SortableTh>
-          <SortableTh sortKey="maxPct" {...header}>
+          <SortableTh sortKey="maxLoading" {...header}>
             Maximum loading
           </SortableTh>
-          <SortableTh sortKey="pricePerG" {...header}>
+          <SortableTh sortKey="pricePerKg" {...header}>
             Price per pack
           </SortableTh>
         </tr>
       </Thead>
       <tbody>
-        {rows.map((pigment) => (
+        {pigments.map((pigment) => (
           <Tr key={pigment.id}>
             <Td>
               <Link to={paths.pigment.getHref(pigment.id)} className="font-semibold text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4">

@@ -1,41 +1,21 @@
-import type { ResinSystemView } from '@gelpoint/contracts';
+import type { ResinSystemSort, ResinSystemView } from '@gelpoint/contracts';
 import { formatLength, formatMass, type UnitSystem } from '@gelpoint/core';
 import { Link } from 'react-router';
 import { Table, Td, Th, Thead, Tr } from '../../../components/ui/Table';
 import { paths } from '../../../config/paths';
-import { sortRows, type SortState, type SortValue } from '../utils/table-sort';
+import type { SortState } from '../utils/table-sort';
 import { mixRatioText, resinUseWords } from '../utils/shelf-words';
 import { ArchivedMark } from './ArchivedMark';
 import { SortableTh } from './SortableTh';
-
-function sortValue(product: ResinSystemView, key: string): SortValue {
-  switch (key) {
-    case 'name':
-      return product.name;
-    case 'use':
-      return resinUseWords[product.use];
-    case 'potLifeMin':
-      return product.potLifeMin;
-    case 'maxLayerMm':
-      return product.maxLayerMm;
-    case 'maxBatchG':
-      return product.maxBatchG;
-    case 'pricePerKg':
-      return product.pricePerKit / product.kitSizeG;
-    default:
-      return null;
-  }
-}
 
 export interface ResinSystemsTableProps {
   resinSystems: readonly ResinSystemView[];
   unitSystem: UnitSystem;
   sort: SortState | undefined;
-  onSort: (key: string) => void;
+  onSort: (key: ResinSystemSort) => void;
 }
 
 export function ResinSystemsTable({ resinSystems, unitSystem, sort, onSort }: ResinSystemsTableProps) {
-  const rows = sortRows(resinSystems, sort, sortValue);
   const header = { sort, onSort };
   return (
     <Table caption="Resin systems on the shelf">
@@ -48,13 +28,13 @@ export function ResinSystemsTable({ resinSystems, unitSystem, sort, onSort }: Re
             Use
           </SortableTh>
           <Th>Mix ratio</Th>
-          <SortableTh sortKey="potLifeMin" {...header}>
+          <SortableTh sortKey="potLife" {...header}>
             Pot life
           </SortableTh>
-          <SortableTh sortKey="maxLayerMm" {...header}>
+          <SortableTh sortKey="maxLayer" {...header}>
             Maximum layer
           </SortableTh>
-          <SortableTh sortKey="maxBatchG" {...header}>
+          <SortableTh sortKey="maxBatch" {...header}>
             Maximum batch
           </SortableTh>
           <SortableTh sortKey="pricePerKg" {...header}>
@@ -63,7 +43,7 @@ export function ResinSystemsTable({ resinSystems, unitSystem, sort, onSort }: Re
         </tr>
       </Thead>
       <tbody>
-        {rows.map((product) => (
+        {resinSystems.map((product) => (
           <Tr key={product.id}>
             <Td>
               <Link to={paths.resinSystem.getHref(product.id)} className="font-semibold text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4">

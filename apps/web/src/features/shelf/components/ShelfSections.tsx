@@ -8,7 +8,7 @@ import { paths } from '../../../config/paths';
 import { useLots } from '../api/get-lots';
 import { usePigments } from '../api/get-pigments';
 import { useResinSystems } from '../api/get-resin-systems';
-import { catalogueListQuery, lotListQuery, shelfLinkOf, type ShelfFilters } from '../utils/shelf-queries';
+import { lotListQuery, pigmentListQuery, resinSystemListQuery, shelfLinkOf, type ShelfFilters } from '../utils/shelf-queries';
 import { nextSort } from '../utils/table-sort';
 import { LotsTable } from './LotsTable';
 import { PigmentsTable } from './PigmentsTable';
@@ -25,9 +25,10 @@ function useSortAndPages(filters: ShelfFilters) {
   const navigate = useNavigate();
   const link = shelfLinkOf(filters);
   return {
+    // The server sorts the whole shelf, so a new order starts again from its first page.
     onSort: (key: string) => {
       const sort = nextSort(filters.sort, key);
-      void navigate(paths.shelf.getHref({ ...link, sort: sort.key, dir: sort.direction }), { replace: true, preventScrollReset: true });
+      void navigate(paths.shelf.getHref({ ...link, page: 1, sort: sort.key, dir: sort.direction }), { replace: true, preventScrollReset: true });
     },
     hrefFor: (page: number) => paths.shelf.getHref({ ...link, page }),
   };
@@ -38,7 +39,6 @@ function Count({ total, one, many, filtered }: { total: number; one: string; man
     <p role="status" className="mb-3 text-ink-soft">
       {total === 1 ? `1 ${one}` : `${total} ${many}`}
       {filtered ? ' match' : ''}
-      {total > 1 ? '. Sorting a column orders the rows of this page.' : ''}
     </p>
   );
 }
@@ -56,7 +56,7 @@ function Empty({ filtered, title, addHref, addLabel, mayKeep, children }: { filt
 }
 
 export function ResinSystemsSection({ filters, unitSystem, mayKeep }: ShelfSectionProps) {
-  const list = useResinSystems(catalogueListQuery(filters));
+  const list = useResinSystems(resinSystemListQuery(filters));
   const { onSort, hrefFor } = useSortAndPages(filters);
   const filtered = Boolean(filters.q || filters.includeArchived);
   return (
@@ -79,7 +79,7 @@ export function ResinSystemsSection({ filters, unitSystem, mayKeep }: ShelfSecti
 }
 
 export function PigmentsSection({ filters, unitSystem, mayKeep }: ShelfSectionProps) {
-  const list = usePigments(catalogueListQuery(filters));
+  const list = usePigments(pigmentListQuery(filters));
   const { onSort, hrefFor } = useSortAndPages(filters);
   const filtered = Boolean(filters.q || filters.includeArchived);
   return (

@@ -2,10 +2,11 @@ import type { ReactNode } from 'react';
 import { Th } from '../../../components/ui/Table';
 import { ariaSortOf, type SortState } from '../utils/table-sort';
 
-export interface SortableThProps {
-  sortKey: string;
+export interface SortableThProps<Column extends string> {
+  /** The column as the API names it; the table's onSort only takes its own columns. */
+  sortKey: Column;
   sort: SortState | undefined;
-  onSort: (key: string) => void;
+  onSort: (key: Column) => void;
   children: ReactNode;
   className?: string;
 }
@@ -18,7 +19,7 @@ const arrows = {
 };
 
 /** A column header that sorts its table; aria-sort tells a screen reader which column is sorted and which way. */
-export function SortableTh({ sortKey, sort, onSort, children, className }: SortableThProps) {
+export function SortableTh<Column extends string>({ sortKey, sort, onSort, children, className }: SortableThProps<Column>) {
   const state = ariaSortOf(sort, sortKey);
   return (
     <Th aria-sort={state} className={className}>

@@ -1,4 +1,5 @@
-import { LotPart as LotPartSchema } from '@gelpoint/contracts';
+import { LotPart as LotPartSchema, LotSort, PigmentSort, ResinSystemSort, type SortDirection } from '@gelpoint/contracts';
+import type { z } from 'zod';
 import type { ShelfLink } from '../../../config/paths';
 import type { LotPart } from './shelf-words';
 import { readSortParam, type SortState } from './table-sort';
@@ -23,20 +24,32 @@ export interface ShelfFilters {
   part?: LotPart;
 }
 
-export interface ShelfListQuery {
+/** A column to sort by, as the API names it; the whole list is sorted on the server, then paged. */
+interface ServerSort<Sort extends string> {
+  sort?: Sort;
+  dir?: SortDirection;
+}
+
+interface CatalogueListQuery<Sort extends string> extends ServerSort<Sort> {
   q?: string;
   includeArchived?: 'true';
   limit: number;
   offset: number;
 }
 
-export interface LotListQuery {
+export type ResinSystemListQuery = CatalogueListQuery<ResinSystemSort>;
+export type PigmentListQuery = CatalogueListQuery<PigmentSort>;
+
+export interface LotListQuery extends ServerSort<LotSort> {
   q?: string;
   part?: LotPart;
   status?: LotStatusFilter;
   limit: number;
   offset: number;
 }
+
+// The columns each tab's table sorts by, from the contracts, so a header never asks for one the API refuses.
+const sortColumns = { 'resin-systems': ResinSystemSort, pigments: PigmentSort, lots: LotSort } as const;
 
 const isTab = (value: string | null): value is ShelfTab => (shelfTabs as readonly (string | null)[]).includes(value);
 const isStatus = (value: string | null): value is LotStatusFilter => (lotStatuses as readonly (string | null)[]).includes(value);
@@ -50,7 +63,7 @@ export function readShelfFilters(search: URLSearchParams): ShelfFilters {
   const page = Number(search.get('page'));
   if (Number.isSafeInteger(page) && page > 1) filters.page = page;
   const sort = readSortParam(search.get('sort'), search.get('dir'));
-  if (sort) filters.sort = sort;
+  if (sort && sortColumns[filters.tab].safeParse(sort.key).success) filters.sort = sort;
   if (filters.tab !== 'lots' && search.get('archived') === 'true') filters.includeArchived = true;
   if (filters.tab === 'lots') {
     const status = search.get('status');
@@ -65,15 +78,29 @@ function pageWindow(page: number) {
   return { limit: shelfRowsPerPage, offset: (page - 1) * shelfRowsPerPage };
 }
 
-export function catalogueListQuery(filters: ShelfFilters): ShelfListQuery {
-  const query: ShelfListQuery = pageWindow(filters.page);
+function serverSort<Sort extends string>(columns: z.ZodType<Sort>, sort: SortState | undefined): ServerSort<Sort> {
+  if (!sort) return {};
+  const column = columns.safeParse(sort.key);
+  return column.success ? { sort: column.data, dir: sort.direction === 'descending' ? 'desc' : 'asc' } : {};
+}
+
+function catalogueListQuery<Sort extends string>(filters: ShelfFilters, sort: ServerSort<Sort>): CatalogueListQuery<Sort> {
+  const query: CatalogueListQuery<Sort> = { ...pageWindow(filters.page), ...sort };
   if (filters.q) query.q = filters.q;
   if (filters.includeArchived) query.includeArchived = 'true';
   return query;
 }
 
+export function resinSystemListQuery(filters: ShelfFilters): ResinSystemListQuery {
+  return catalogueListQuery(filters, serverSort(ResinSystemSort, filters.sort));
+}
+
+export function pigmentListQuery(filters: ShelfFilters): PigmentListQuery {
+  return catalogueListQuery(filters, serverSort(PigmentSort, filters.sort));
+}
+
 export function lotListQuery(filters: ShelfFilters): LotListQuery {
-  const query: LotListQuery = pageWindow(filters.page);
+  const query: LotListQuery = { ...pageWindow(filters.page), ...serverSort(LotSort, filters.sort) };
   if (filters.q) query.q = filters.q;
   if (filters.part) query.part = filters.part;
   if (filters.status) query.status = filters.status;
@@ -85,7 +112,7 @@ export function shelfPageCount(total: number): number {
 }
 
 /** Everything on the shelf, for pickers (the API's largest page). */
-export const wholeShelfQuery: ShelfListQuery = { includeArchived: 'true', limit: 500, offset: 0 };
+export const wholeShelfQuery: CatalogueListQuery<never> = { includeArchived: 'true', limit: 500, offset: 0 };
 
 /** The link back to these very filters, for the pager and the sort headers. */
 export function shelfLinkOf(filters: ShelfFilters): ShelfLink {

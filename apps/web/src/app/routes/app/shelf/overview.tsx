@@ -15,7 +15,7 @@ import { LotsSection, PigmentsSection, ResinSystemsSection } from '../../../../f
 import { ShelfTabs } from '../../../../features/shelf/components/ShelfTabs';
 import { useShelfFilters } from '../../../../features/shelf/hooks/use-shelf-filters';
 import { mayKeepShelf } from '../../../../features/shelf/utils/shelf-access';
-import { catalogueListQuery, lotListQuery, readShelfFilters, type ShelfTab } from '../../../../features/shelf/utils/shelf-queries';
+import { lotListQuery, pigmentListQuery, readShelfFilters, resinSystemListQuery, type ShelfTab } from '../../../../features/shelf/utils/shelf-queries';
 import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
@@ -29,8 +29,8 @@ export const createLoader =
       filters.tab === 'lots'
         ? queryClient.ensureQueryData(lotsQueryOptions(lotListQuery(filters)))
         : filters.tab === 'pigments'
-          ? queryClient.ensureQueryData(pigmentsQueryOptions(catalogueListQuery(filters)))
-          : queryClient.ensureQueryData(resinSystemsQueryOptions(catalogueListQuery(filters)));
+          ? queryClient.ensureQueryData(pigmentsQueryOptions(pigmentListQuery(filters)))
+          : queryClient.ensureQueryData(resinSystemsQueryOptions(resinSystemListQuery(filters)));
     await Promise.all([list, queryClient.ensureQueryData(shopQueryOptions())]);
     return null;
   };
