@@ -1,15 +1,18 @@
 import type { EntityManager } from 'typeorm';
 import { readAnalysis, type CavityModel } from '@gelpoint/mesh';
 import { AppError, notFound } from '../../http/errors';
+import { RecentlyUsed } from './recently-used';
 
 /**
  * Decoded analyses, most recently used kept. Only a cache: any API instance rebuilds an entry from the
  * database, so nothing here is needed by another instance.
  */
 export class AnalysisCache {
-  private readonly entries = new Map<string, CavityModel>();
+  private readonly entries: RecentlyUsed<CavityModel>;
 
-  constructor(private readonly capacity = 16) {}
+  constructor(capacity = 16) {
+    this.entries = new RecentlyUsed(capacity);
+  }
 
   async model(m: EntityManager, shopId: string, moldId: string): Promise<CavityModel> {
     const rows: { status: string; analysed_at: Date | null }[] = await m.query('SELECT status, analysed_at FROM molds WHERE id = $1 AND shop_id = $2', [moldId, shopId]);
@@ -20,16 +23,11 @@ export class AnalysisCache {
     }
     const key = `${moldId}@${row.analysed_at.toISOString()}`;
     const hit = this.entries.get(key);
-    if (hit) {
-      this.entries.delete(key);
-      this.entries.set(key, hit);
-      return hit;
-    }
+    if (hit) return hit;
     const [{ analysis }] = (await m.query('SELECT analysis FROM molds WHERE id = $1', [moldId])) as [{ analysis: unknown }];
     const decoded = readAnalysis(analysis);
     if (!decoded.ok) throw new AppError('conflict', 'analysis_unreadable', 'the stored analysis of this mould cannot be read; upload the mould again');
     this.entries.set(key, decoded.value);
-    if (this.entries.size > this.capacity) this.entries.delete(this.entries.keys().next().value!);
     return decoded.value;
   }
 }

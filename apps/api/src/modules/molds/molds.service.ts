@@ -11,6 +11,7 @@ import { UploadQuota } from '../uploads/upload-quota';
 import type { MoldCavityLookup } from '../pour-plans/pour-plans.service';
 import { AnalysisCache } from './mold-analysis-cache';
 import { fillView, moldView } from './mold-views';
+import { RecentlyUsed } from './recently-used';
 import type { StlChecker } from './stl-check';
 
 export interface UploadedStl {
@@ -31,6 +32,7 @@ const PLAN_CURVE_POINTS = 241;
 
 export class Molds {
   private readonly cache = new AnalysisCache();
+  private readonly reports = new RecentlyUsed<NonNullable<Mold['report']>>(64);
 
   constructor(
     private readonly ds: DataSource,
@@ -74,9 +76,20 @@ export class Molds {
   }
 
   async get(shopId: string, id: string): Promise<MoldView> {
-    const mold = await this.ds.getRepository(Mold).findOne({ where: { id, shopId }, select: selectWithoutAnalysis });
+    const mold = await this.ds.getRepository(Mold).findOne({ where: { id, shopId }, select: summarySelect });
     if (!mold) throw notFound('mould');
-    return moldView(mold);
+    return moldView({ ...mold, report: await this.reportOf(mold) } as Mold);
+  }
+
+  /** A report never changes once analysed, so the large jsonb is read once per analysis, not per view. */
+  private async reportOf(mold: Mold): Promise<Mold['report']> {
+    const key = mold.status === 'ready' && mold.analysedAt ? `${mold.id}@${mold.analysedAt.toISOString()}` : undefined;
+    const hit = key ? this.reports.get(key) : undefined;
+    if (hit) return hit;
+    const rows = (await this.ds.query('SELECT report FROM molds WHERE id = $1', [mold.id])) as { report: Mold['report'] }[];
+    const report = rows[0]?.report ?? null;
+    if (key && report) this.reports.set(key, report);
+    return report;
   }
 
   async list(shopId: string, q: { pieceId?: string; limit: number; offset: number }) {
@@ -149,4 +162,4 @@ function dedupeLevels(points: { levelMm: number; volumeMm3: number }[]) {
 }
 
 const summaryColumns = ['id', 'shopId', 'pieceId', 'name', 'fileName', 'units', 'upAxis', 'sizeBytes', 'sha256', 'status', 'progress', 'errorCode', 'errorMessage', 'createdAt', 'analysedAt'] as const;
-const selectWithoutAnalysis = Object.fromEntries([...summaryColumns, 'report'].map((c) => [c, true])) as Record<string, true>;
+const summarySelect = Object.fromEntries(summaryColumns.map((c) => [c, true])) as Record<string, true>;

@@ -58,6 +58,20 @@ describe('mould upload and cavity report', () => {
     expect(Buffer.compare(stl.body as Buffer, binaryStl(pocket))).toBe(0);
   });
 
+  it('shows a new analysis at once though the report is kept between views', async () => {
+    const own = await createShop(h, 'Report cache shop');
+    const res = await upload(own.lead, binaryStl(pocket), { units: 'mm', up: 'z' }).expect(202);
+    analyseQueuedMoulds();
+    const view = async () => (await h.http().get(`/api/molds/${res.body.id}`).set(bearer(own.lead)).expect(200)).body;
+    const first = await view();
+    expect(first.status).toBe('ready');
+    expect(await view()).toEqual(first);
+    // What a fresh analysis leaves behind: another report and another analysed_at.
+    await h.ds.query(`UPDATE molds SET report = jsonb_set(report, '{fillToTop,maxDepthMm}', '21.5'), analysed_at = analysed_at + interval '1 second' WHERE id = $1`, [res.body.id]);
+    expect((await view()).report.fillToTop.maxDepthMm).toBe(21.5);
+    await h.http().get(`/api/molds/${res.body.id}`).set(bearer(shop.lead)).expect(404);
+  });
+
   it('gives the same numbers as the gelpoint mold command for the same file', async () => {
     const stl = binaryStl(pocket);
     const dir = mkdtempSync(join(tmpdir(), 'gelpoint-cli-'));
