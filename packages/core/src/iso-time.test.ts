@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
-import { parseIsoInstant } from './iso-time';
+import { formatIsoInstant, parseIsoInstant } from './iso-time';
 
 // Reference: luxon's ISO 8601 reader (DateTime.fromISO with setZone), the library the slow path uses.
 const luxonMs = (text: string) => DateTime.fromISO(text, { setZone: true }).toMillis();
@@ -36,5 +36,23 @@ describe('parseIsoInstant', () => {
     const r = parseIsoInstant('2026-11-01T10:00:00+02:00');
     expect(r.ok && r.value).toBe(Date.UTC(2026, 10, 1, 8));
     expect(parseIsoInstant('2026-11-01T10:00:00').ok).toBe(false);
+  });
+});
+
+describe('formatIsoInstant', () => {
+  it('writes UTC exactly as luxon does, with or without milliseconds', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: Date.UTC(1000, 0, 1), max: Date.UTC(9999, 11, 31) }), fc.boolean(), (ms, whole) => {
+        const at = whole ? ms - (ms % 1000) : ms;
+        expect(formatIsoInstant(at)).toBe(DateTime.fromMillis(at, { zone: 'utc' }).toISO({ suppressMilliseconds: true }));
+        expect(formatIsoInstant(at, 'UTC')).toBe(DateTime.fromMillis(at, { zone: 'utc' }).toISO({ suppressMilliseconds: true }));
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it('leaves other zones and odd instants to luxon', () => {
+    expect(formatIsoInstant(Date.UTC(2026, 10, 1, 12), 'Europe/Berlin')).toBe('2026-11-01T13:00:00+01:00');
+    expect(formatIsoInstant(0.5)).toBe(DateTime.fromMillis(0.5, { zone: 'utc' }).toISO({ suppressMilliseconds: true }));
   });
 });

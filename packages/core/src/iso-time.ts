@@ -39,7 +39,15 @@ export function checkZone(zone: string): Result<string> {
   return ok(zone);
 }
 
+const year1000Ms = Date.UTC(1000, 0, 1);
+const year10000Ms = Date.UTC(10000, 0, 1);
+
 /** An instant as ISO 8601 in an IANA zone already accepted by checkZone (UTC by default). */
 export function formatIsoInstant(epochMs: number, zone = 'utc'): string {
+  // UTC in four-digit years is what Date#toISOString writes; a cure log formats one per reading interval.
+  if (zone.toLowerCase() === 'utc' && Number.isInteger(epochMs) && epochMs >= year1000Ms && epochMs < year10000Ms) {
+    const iso = new Date(epochMs).toISOString();
+    return iso.endsWith('.000Z') ? `${iso.slice(0, 19)}Z` : iso;
+  }
   return DateTime.fromMillis(epochMs, { zone }).toISO({ suppressMilliseconds: true }) ?? new Date(epochMs).toISOString();
 }
