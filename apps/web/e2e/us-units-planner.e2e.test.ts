@@ -3,8 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { watchedPage } from './support/browser';
 import { useBrowserStack } from './support/use-browser-stack';
 
-// A shop of its own, registered here and switched to US units, so the demo shop stays metric and untouched.
-const e2e = useBrowserStack();
+// A shop of its own, registered here and switched to US units, on a demo database of its own: the shared one must
+// hold the demo shop alone (packages/db/src/seed/demo.test.ts counts its shops).
+const e2e = useBrowserStack({ freshDemoFor: 'us_units' });
 const stack = e2e.stack;
 const unique = `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 6)}`;
 const email = `us-units-${unique}@example.test`;
