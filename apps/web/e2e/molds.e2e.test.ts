@@ -1,60 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { watchedPage } from './support/browser';
+import { pocketBlockStl } from './support/test-mould';
 import { useBrowserStack } from './support/use-browser-stack';
-
-type Vec3 = [number, number, number];
-
-function cross(a: Vec3, b: Vec3): Vec3 {
-  return [a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2], a[0] * b[1] - a[1] * b[0]];
-}
-
-function minus(a: Vec3, b: Vec3): Vec3 {
-  return [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
-}
-
-/**
- * A 100 × 60 × 30 mm block with an 80 × 40 × 20 mm pocket cut from the top, as a closed, outward-wound
- * binary STL: every quad is listed counter-clockwise as seen from outside the solid.
- */
-function pocketBlockStl(): { bytes: Buffer; signedVolumeMm3: number } {
-  const quads: [Vec3, Vec3, Vec3, Vec3][] = [
-    [[0, 0, 0], [0, 60, 0], [100, 60, 0], [100, 0, 0]],
-    [[0, 0, 0], [100, 0, 0], [100, 0, 30], [0, 0, 30]],
-    [[100, 0, 0], [100, 60, 0], [100, 60, 30], [100, 0, 30]],
-    [[100, 60, 0], [0, 60, 0], [0, 60, 30], [100, 60, 30]],
-    [[0, 60, 0], [0, 0, 0], [0, 0, 30], [0, 60, 30]],
-    [[0, 0, 30], [100, 0, 30], [90, 10, 30], [10, 10, 30]],
-    [[100, 0, 30], [100, 60, 30], [90, 50, 30], [90, 10, 30]],
-    [[100, 60, 30], [0, 60, 30], [10, 50, 30], [90, 50, 30]],
-    [[0, 60, 30], [0, 0, 30], [10, 10, 30], [10, 50, 30]],
-    [[90, 10, 10], [10, 10, 10], [10, 10, 30], [90, 10, 30]],
-    [[90, 50, 10], [90, 10, 10], [90, 10, 30], [90, 50, 30]],
-    [[10, 50, 10], [90, 50, 10], [90, 50, 30], [10, 50, 30]],
-    [[10, 10, 10], [10, 50, 10], [10, 50, 30], [10, 10, 30]],
-    [[10, 10, 10], [90, 10, 10], [90, 50, 10], [10, 50, 10]],
-  ];
-  const triangles = quads.flatMap(([a, b, c, d]) => [[a, b, c], [a, c, d]] as [Vec3, Vec3, Vec3][]);
-  const bytes = Buffer.alloc(84 + 50 * triangles.length);
-  bytes.write('gelpoint e2e pocket block', 0, 'latin1');
-  bytes.writeUInt32LE(triangles.length, 80);
-  let signedVolumeMm3 = 0;
-  triangles.forEach(([a, b, c], t) => {
-    const n = cross(minus(b, a), minus(c, a));
-    const length = Math.hypot(...n);
-    const at = 84 + 50 * t;
-    [...n.map((v) => v / length), ...a, ...b, ...c].forEach((v, i) => bytes.writeFloatLE(v, at + 4 * i));
-    signedVolumeMm3 += (a[0] * (b[1] * c[2] - b[2] * c[1]) - a[1] * (b[0] * c[2] - b[2] * c[0]) + a[2] * (b[0] * c[1] - b[1] * c[0])) / 6;
-  });
-  return { bytes, signedVolumeMm3 };
-}
 
 const e2e = useBrowserStack();
 const stack = e2e.stack;
 
-
 describe('the mould screen in a real browser', () => {
   it('uploads a pocket block as the maker, reads 64 mL at the rim and 32 mL at half depth, and shows it in 3D', { timeout: 90_000 }, async () => {
-    const stl = pocketBlockStl();
+    const stl = pocketBlockStl({ block: [100, 60, 30], pocket: [80, 40, 20] });
     // Divergence theorem (signed tetrahedra): the solid is the block less the pocket, 100·60·30 − 80·40·20 mm³,
     // so the file is closed and wound outward as the analysis expects.
     expect(stl.signedVolumeMm3).toBeCloseTo(100 * 60 * 30 - 80 * 40 * 20, 6);

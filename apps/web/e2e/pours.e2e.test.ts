@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { watchedPage } from './support/browser';
+import { deepPourProduct } from './support/deep-pour-product';
 import { useBrowserStack } from './support/use-browser-stack';
 
 // The demo sign-ins and shop come from the demo seed (packages/db/src/seed/demo.ts). Everything this test pours is
@@ -42,29 +43,7 @@ async function pourToLog(): Promise<Setup> {
   const lead = await signIn('lead@gelpoint.test');
   const maker = await signIn('maker@gelpoint.test');
   const apprentice = await signIn('apprentice@gelpoint.test');
-  // Invented data-sheet values for the test's own product.
-  const product = await post<{ id: string }>(lead, '/shelf/resin-systems', {
-    name: `E2E Deep ${unique}`,
-    maker: 'Test bench',
-    use: 'deep_pour',
-    mixRatio: { a: 2, b: 1, basis: 'weight' },
-    densityAGPerMl: 1.16,
-    densityBGPerMl: 0.98,
-    potLifeMin: 40,
-    gelTimeH: 8,
-    tackFreeH: 16,
-    recoatWindow: { earliestH: 12, latestH: 30 },
-    demoldH: 48,
-    fullCureH: 168,
-    referenceTempC: 22,
-    minWorkTempC: 16,
-    maxWorkTempC: 30,
-    maxLayerMm: 30,
-    maxBatchG: 2000,
-    pricePerKit: 120,
-    kitSizeG: 4500,
-    shelfLifeMonths: 12,
-  });
+  const product = await post<{ id: string }>(lead, '/shelf/resin-systems', deepPourProduct(`E2E Deep ${unique}`));
   const pieceName = `E2E inlay ${unique}`;
   const piece = await post<{ id: string }>(maker, '/pieces', { name: pieceName });
   const plan = await post<{ id: string; result: { layers: { batches: PlannedCup[] }[] } }>(maker, '/pour-plans', {

@@ -1,6 +1,7 @@
 import { formatVolume } from '@gelpoint/core';
 import { describe, expect, it } from 'vitest';
 import { watchedPage } from './support/browser';
+import { deepPourProduct } from './support/deep-pour-product';
 import { useBrowserStack } from './support/use-browser-stack';
 
 // A shop of its own, registered here and switched to US units, on a demo database of its own: the shared one must
@@ -31,29 +32,7 @@ async function usShop(): Promise<{ token: string; pieceId: string }> {
   const { token } = await call<{ token: string }>('POST', '/auth/register', null, { shopName: `Inch Shop ${unique}`, name: 'Inch Lead', email, password }, 201);
   const shop = await call<{ unitSystem: string }>('PATCH', '/shop', token, { unitSystem: 'us' }, 200);
   expect(shop.unitSystem).toBe('us');
-  // Invented data-sheet values for the test's own product.
-  await call('POST', '/shelf/resin-systems', token, {
-    name: `Inch Deep ${unique}`,
-    maker: 'Test bench',
-    use: 'deep_pour',
-    mixRatio: { a: 2, b: 1, basis: 'weight' },
-    densityAGPerMl: 1.16,
-    densityBGPerMl: 0.98,
-    potLifeMin: 40,
-    gelTimeH: 8,
-    tackFreeH: 16,
-    recoatWindow: { earliestH: 12, latestH: 30 },
-    demoldH: 48,
-    fullCureH: 168,
-    referenceTempC: 22,
-    minWorkTempC: 16,
-    maxWorkTempC: 30,
-    maxLayerMm: 30,
-    maxBatchG: 2000,
-    pricePerKit: 120,
-    kitSizeG: 4500,
-    shelfLifeMonths: 12,
-  }, 201);
+  await call('POST', '/shelf/resin-systems', token, deepPourProduct(`Inch Deep ${unique}`), 201);
   const piece = await call<{ id: string }>('POST', '/pieces', token, { name: `Inch tray ${unique}` }, 201);
   return { token, pieceId: piece.id };
 }

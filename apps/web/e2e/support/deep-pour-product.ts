@@ -1,0 +1,23 @@
+/** A deep-pour resin system for a test's own shelf, with invented data-sheet values (demo data, not a real product). */
+export const deepPourProduct = (name: string) => ({
+  name,
+  maker: 'Test bench',
+  use: 'deep_pour',
+  mixRatio: { a: 2, b: 1, basis: 'weight' },
+  densityAGPerMl: 1.16,
+  densityBGPerMl: 0.98,
+  potLifeMin: 40,
+  gelTimeH: 8,
+  tackFreeH: 16,
+  recoatWindow: { earliestH: 12, latestH: 30 },
+  demoldH: 48,
+  fullCureH: 168,
+  referenceTempC: 22,
+  minWorkTempC: 16,
+  maxWorkTempC: 30,
+  maxLayerMm: 30,
+  maxBatchG: 2000,
+  pricePerKit: 120,
+  kitSizeG: 4500,
+  shelfLifeMonths: 12,
+});
