@@ -14,7 +14,7 @@ import { useMold } from '../api/get-mold';
 import { usePieceMolds } from '../api/get-piece-molds';
 import { useLivePlan } from '../hooks/use-live-plan';
 import { formDefaultsOf } from '../utils/form-defaults';
-import { optionalNumber, requiredNumber } from '../utils/number-input';
+import { optionalNumber, requiredNumber } from '../../../lib/form-input';
 import { absorptionOptions, moldOptions, pigmentOptions, productOptions, shapeOptions } from '../utils/planner-options';
 import { shownPlannerValues, shownUnitNames, type PlannerUnits } from '../utils/planner-units';
 import { fieldOfIssuePath, plannerResolver } from '../utils/planner-validation';

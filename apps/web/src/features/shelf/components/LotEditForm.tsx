@@ -11,7 +11,7 @@ import { Input } from '../../../components/ui/Input';
 import { Textarea } from '../../../components/ui/Textarea';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { lotEditValuesOf } from '../utils/form-defaults';
-import { optionalText, requiredNumber } from '../utils/number-fields';
+import { optionalText, requiredNumber } from '../../../lib/form-input';
 
 type FormInput = z.input<typeof LotUpdate>;
 type FormOutput = z.output<typeof LotUpdate>;

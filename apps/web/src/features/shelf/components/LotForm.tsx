@@ -12,7 +12,7 @@ import { Textarea } from '../../../components/ui/Textarea';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { todayIsoDate } from '../utils/calendar-date';
 import { lotParts } from '../utils/lot-parts';
-import { optionalText, requiredNumber } from '../utils/number-fields';
+import { optionalText, requiredNumber } from '../../../lib/form-input';
 import { lotPartWords } from '../utils/shelf-words';
 import { FormSection } from './FormSection';
 

@@ -9,7 +9,7 @@ import { Select } from '../../../components/ui/Select';
 import { useProductForm } from '../hooks/use-product-form';
 import { activationEnergyUsed } from '../utils/activation-energy';
 import { newResinSystemDefaults, resinSystemInputOf } from '../utils/form-defaults';
-import { optionalNumber, requiredNumber } from '../utils/number-fields';
+import { optionalNumber, requiredNumber } from '../../../lib/form-input';
 import { ratioBasisWords, resinUseWords } from '../utils/shelf-words';
 import { FormSection } from './FormSection';
 import { ProductForm } from './ProductForm';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { FieldPath, FieldValues, UseFormReturn } from 'react-hook-form';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { optionalNumber, requiredNumber } from '../utils/number-fields';
+import { optionalNumber, requiredNumber } from '../../../lib/form-input';
 
 /**
  * Saving a product's data sheet: the server's field messages land under their fields, the rest in the form alert,

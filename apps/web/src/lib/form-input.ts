@@ -1,6 +1,7 @@
 /**
- * Form inputs hand over text. A required number that is left empty becomes NaN, which the contract refuses with its
- * own sentence ("pot life must be a number"); an optional one becomes null, which the contract reads as "not given".
+ * Form inputs hand over text. A required number left empty becomes NaN, which the contract refuses with its own
+ * sentence ("pot life must be a number"); an optional one becomes null, meaning "not given". A decimal comma is read
+ * as a point.
  */
 export function requiredNumber(raw: unknown): number {
   if (typeof raw === 'number') return raw;

@@ -1,6 +1,6 @@
 import { ResinSystemInput } from '@gelpoint/contracts';
 import { describe, expect, it } from 'vitest';
-import { optionalNumber, optionalText, requiredNumber } from './number-fields';
+import { optionalNumber, optionalText, requiredNumber } from './form-input';
 
 describe('number fields', () => {
   it('reads typed numbers, a decimal comma too', () => {
