@@ -67,6 +67,21 @@ describe('createApiClient', () => {
     expect(call?.init.body).toBe('{"name":"x"}');
   });
 
+  it('sends a body that is not JSON as it is, with its type or none (FormData sets its own boundary)', async () => {
+    const { sent, fetchImpl } = fakeFetch(() => json(200, { id: 'a', n: 2 }));
+    const client = createApiClient({ basePath: '/api', fetch: fetchImpl });
+    expect(await client.postBody('/logs', 'time,tempC\n', 'text/csv', Thing)).toEqual({ id: 'a', n: 2 });
+    const form = new FormData();
+    form.append('stage', 'tack_free');
+    await client.postBody('/checks', form, null, Thing);
+    const [csv, multipart] = sent.map((c) => ({ headers: new Headers(c.init.headers), body: c.init.body }));
+    expect(csv?.headers.get('Content-Type')).toBe('text/csv');
+    expect(csv?.body).toBe('time,tempC\n');
+    expect(multipart?.headers.has('Content-Type')).toBe(false);
+    expect(multipart?.body).toBe(form);
+    expect(multipart?.headers.get(csrfHeaderName)).toBe('1');
+  });
+
   it('does not send the CSRF header on a GET', async () => {
     const { sent, fetchImpl } = fakeFetch(() => json(200, { id: 'a', n: 1 }));
     await createApiClient({ basePath: '/api', fetch: fetchImpl }).get('/things/a', Thing);

@@ -36,6 +36,11 @@ export interface ApiClient {
   patch<T>(path: string, body: unknown, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
   /** A full replacement: the API stores the body as the whole new entry. */
   put<T>(path: string, body: unknown, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
+  /**
+   * A POST whose body is not JSON (a CSV log, a multipart form with a photo). With a null content type the browser
+   * sets it itself, as it must for FormData (the multipart boundary).
+   */
+  postBody<T>(path: string, body: BodyInit, contentType: string | null, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
   /** For answers without content (204), such as sign-out or a password change. */
   postWithoutContent(path: string, body?: unknown, options?: RequestOptions): Promise<void>;
   delete(path: string, options?: RequestOptions): Promise<void>;
@@ -46,14 +51,21 @@ export interface ApiClientConfig {
   fetch?: typeof fetch;
 }
 
+interface Payload {
+  body: BodyInit;
+  contentType: string | null;
+}
+
+const asJson = (body: unknown): Payload | undefined => (body === undefined ? undefined : { body: JSON.stringify(body), contentType: 'application/json' });
+
 export function createApiClient(config: ApiClientConfig): ApiClient {
-  const send = async (method: HttpMethod, path: string, body: unknown, options: RequestOptions = {}): Promise<Response> => {
+  const send = async (method: HttpMethod, path: string, payload: Payload | undefined, options: RequestOptions = {}): Promise<Response> => {
     const headers = new Headers({ Accept: 'application/json' });
     if (!isSafeMethod(method)) headers.set(csrfHeaderName, '1');
     const init: RequestInit = { method, headers, credentials: 'same-origin' };
-    if (body !== undefined) {
-      headers.set('Content-Type', 'application/json');
-      init.body = JSON.stringify(body);
+    if (payload) {
+      if (payload.contentType) headers.set('Content-Type', payload.contentType);
+      init.body = payload.body;
     }
     if (options.signal) init.signal = options.signal;
 
@@ -85,11 +97,12 @@ export function createApiClient(config: ApiClientConfig): ApiClient {
 
   return {
     get: async (path, schema, options) => readAs(await send('GET', path, undefined, options), schema),
-    post: async (path, body, schema, options) => readAs(await send('POST', path, body, options), schema),
-    patch: async (path, body, schema, options) => readAs(await send('PATCH', path, body, options), schema),
-    put: async (path, body, schema, options) => readAs(await send('PUT', path, body, options), schema),
+    post: async (path, body, schema, options) => readAs(await send('POST', path, asJson(body), options), schema),
+    patch: async (path, body, schema, options) => readAs(await send('PATCH', path, asJson(body), options), schema),
+    put: async (path, body, schema, options) => readAs(await send('PUT', path, asJson(body), options), schema),
+    postBody: async (path, body, contentType, schema, options) => readAs(await send('POST', path, { body, contentType }, options), schema),
     postWithoutContent: async (path, body, options) => {
-      await send('POST', path, body, options);
+      await send('POST', path, asJson(body), options);
     },
     delete: async (path, options) => {
       await send('DELETE', path, undefined, options);

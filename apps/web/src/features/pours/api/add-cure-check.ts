@@ -1,7 +1,7 @@
 import { CureCheckView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
 import type { CureCheck, CureCheckStageKey } from '../types';
-import { postRaw } from './raw-post';
 import { refreshPour } from './refresh-pour';
 
 export interface CureCheckInput {
@@ -24,7 +24,7 @@ export function cureCheckBody(input: CureCheckInput): FormData {
 }
 
 export function addCureCheck(pourId: string, input: CureCheckInput): Promise<CureCheck> {
-  return postRaw(`/pours/${encodeURIComponent(pourId)}/checks`, cureCheckBody(input), null, CureCheckView);
+  return api.postBody(`/pours/${encodeURIComponent(pourId)}/checks`, cureCheckBody(input), null, CureCheckView);
 }
 
 export function useAddCureCheck(pourId: string) {
