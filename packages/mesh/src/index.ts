@@ -8,6 +8,7 @@ export { analyzeCavity, analysisDefaults, type AnalyzeCavityOptions } from './an
 export { analyzeStl, type AnalyzeStlOptions } from './analyze-stl';
 export { readAnalysis } from './analysis-codec';
 export { fillAt, curve, layerVolumes, type CavitySource } from './fill-queries';
+export { fillRecord, type FillRecord } from './fill-record';
 export type { Dam } from './dam';
 export type {
   CavityAnalysis, CavityFill, CavityMethod, CavityModel, CurvePoint, DepthMap, ExactFacts, MethodFigures,

@@ -1,4 +1,4 @@
-import { curve, fillAt, type CavityAnalysis } from '@gelpoint/mesh';
+import { curve, fillAt, fillRecord, type CavityAnalysis } from '@gelpoint/mesh';
 import type { CavityReport } from '@gelpoint/contracts';
 
 const CURVE_POINTS = 101;
@@ -28,15 +28,6 @@ export function cavityReport(analysis: CavityAnalysis): CavityReport {
     resolutionMm: f.resolutionMm,
     warnings: warnings.map((w) => ({ code: w.code, message: w.message })),
     curve: points.value,
-    fillToTop: {
-      levelMm: f.levelMm,
-      dam: f.dam,
-      volumeMm3: f.volumeMm3,
-      wettedAreaMm2: f.wettedAreaMm2,
-      maxDepthMm: f.maxDepthMm,
-      trappedAirMm3: f.trappedAirMm3,
-      warnings: f.warnings.map((w) => ({ code: w.code, message: w.message })),
-      depthMap: { originMm: f.depthMap.originMm, cellMm: f.depthMap.cellMm, nx: f.depthMap.nx, ny: f.depthMap.ny, depthsMm: Array.from(f.depthMap.depthsMm, (d) => Math.round(d * 1000) / 1000) },
-    },
+    fillToTop: fillRecord(f, true),
   };
 }

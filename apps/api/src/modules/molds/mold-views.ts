@@ -1,6 +1,6 @@
 import type { Mold } from '@gelpoint/db';
 import type { CavityFill as FillView, CavityReport, MoldView } from '@gelpoint/contracts';
-import type { CavityFill } from '@gelpoint/mesh';
+import { fillRecord, type CavityFill } from '@gelpoint/mesh';
 
 export function moldView(m: Mold): MoldView {
   return {
@@ -22,16 +22,5 @@ export function moldView(m: Mold): MoldView {
 }
 
 export function fillView(f: CavityFill, withDepthMap: boolean): FillView {
-  return {
-    levelMm: f.levelMm,
-    dam: f.dam,
-    volumeMm3: f.volumeMm3,
-    wettedAreaMm2: f.wettedAreaMm2,
-    maxDepthMm: f.maxDepthMm,
-    trappedAirMm3: f.trappedAirMm3,
-    warnings: f.warnings.map((w) => ({ code: w.code, message: w.message })),
-    ...(withDepthMap
-      ? { depthMap: { originMm: f.depthMap.originMm, cellMm: f.depthMap.cellMm, nx: f.depthMap.nx, ny: f.depthMap.ny, depthsMm: Array.from(f.depthMap.depthsMm, (d) => Math.round(d * 1000) / 1000) } }
-      : {}),
-  };
+  return fillRecord(f, withDepthMap);
 }
