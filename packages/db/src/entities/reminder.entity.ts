@@ -1,15 +1,10 @@
 import { Check, Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import type { ReminderKind } from '@gelpoint/core';
 import { CreatedAt, UpdatedAt } from './columns';
 import { Pour } from './pour.entity';
 
-export type ReminderKind =
-  | 'seal_coat_window_opens'
-  | 'seal_coat_window_closes'
-  | 'next_layer_window_opens'
-  | 'next_layer_window_closes'
-  | 'demold_check'
-  | 'ready_to_machine'
-  | 'finish_coat_due';
+// The kinds are the cure model's (packages/core/src/pour-cure.ts): a reminder row stores what it computed.
+export type { ReminderKind };
 
 /**
  * A reminder is a row: recomputed while pending when readings or batches arrive, claimed by one
