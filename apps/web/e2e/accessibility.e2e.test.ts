@@ -2,13 +2,11 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { axeFindings, focusProblems, type Finding, type FocusProblem } from './support/a11y-checks';
 import { watchedPage, type PageWatch } from './support/browser';
 import {
-  demoIds,
-  invitationPath,
+  prepareMainPages,
   publicPages,
   settle,
   signIn,
   signedInPages,
-  uploadMeasuredMould,
   type DemoRole,
   type MainPage,
   type PageFixtures,
@@ -23,14 +21,7 @@ let fixtures: PageFixtures;
 let invitation = '';
 
 beforeAll(async () => {
-  const context = await e2e.browser().newContext();
-  const { page } = await watchedPage(context, stack.baseUrl);
-  await signIn(page, stack.baseUrl, 'lead');
-  const ids = await demoIds(page, stack.baseUrl);
-  const moldId = await uploadMeasuredMould(page, stack.baseUrl, 'A11y pocket block');
-  fixtures = { ...ids, moldId };
-  invitation = await invitationPath(page, stack, `a11y-${Date.now()}@example.test`);
-  await context.close();
+  ({ fixtures, invitation } = await prepareMainPages(e2e.browser(), stack, 'a11y'));
 }, 60_000);
 
 /**

@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { watchedPage, type PageWatch } from './support/browser';
-import { demoIds, invitationPath, publicPages, settle, signIn, signedInPages, uploadMeasuredMould, type DemoRole, type MainPage, type PageFixtures } from './support/main-pages';
+import { prepareMainPages, publicPages, settle, signIn, signedInPages, type DemoRole, type MainPage, type PageFixtures } from './support/main-pages';
 import { smallScreenReport } from './support/small-screen-checks';
 import { useBrowserStack } from './support/use-browser-stack';
 
@@ -17,12 +17,7 @@ let fixtures: PageFixtures;
 let invitation = '';
 
 beforeAll(async () => {
-  const context = await e2e.browser().newContext();
-  const { page } = await watchedPage(context, stack.baseUrl);
-  await signIn(page, stack.baseUrl, 'lead');
-  fixtures = { ...(await demoIds(page, stack.baseUrl)), moldId: await uploadMeasuredMould(page, stack.baseUrl, 'Phone pocket block') };
-  invitation = await invitationPath(page, stack, `phone-${Date.now()}@example.test`);
-  await context.close();
+  ({ fixtures, invitation } = await prepareMainPages(e2e.browser(), stack, 'phone'));
 }, 60_000);
 
 async function measure(page: Page, where: string): Promise<string[]> {

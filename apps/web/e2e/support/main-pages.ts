@@ -1,4 +1,5 @@
-import type { APIRequestContext, Page } from 'playwright-core';
+import type { APIRequestContext, Browser, Page } from 'playwright-core';
+import { watchedPage } from './browser';
 import type { E2eStack } from './stack';
 import { pocketBlockStl } from './test-mould';
 
@@ -76,6 +77,22 @@ export async function invitationPath(page: Page, stack: E2eStack, email: string)
   const link = /https?:\/\/\S+(\/invitations\/[A-Za-z0-9_-]+)/.exec(mail.text)?.[1];
   if (!link) throw new Error('the invitation mail holds no link');
   return link;
+}
+
+/**
+ * What the page sweeps visit, made as the lead: the demo's ids, a measured mould and a real invitation link. The
+ * label names the mould and the invitee, so two sweeps on one database do not meet.
+ */
+export async function prepareMainPages(browser: Browser, stack: E2eStack, label: string): Promise<{ fixtures: PageFixtures; invitation: string }> {
+  const context = await browser.newContext();
+  try {
+    const { page } = await watchedPage(context, stack.baseUrl);
+    await signIn(page, stack.baseUrl, 'lead');
+    const fixtures = { ...(await demoIds(page, stack.baseUrl)), moldId: await uploadMeasuredMould(page, stack.baseUrl, `${label} pocket block`) };
+    return { fixtures, invitation: await invitationPath(page, stack, `${label}-${Date.now()}@example.test`) };
+  } finally {
+    await context.close();
+  }
 }
 
 export interface MainPage {
