@@ -103,13 +103,11 @@ function fromUnstorableInput(err: unknown): AppError | undefined {
 
 /** Turns body-parser's own errors (bad JSON, too large) into ours. */
 function fromBodyParser(err: unknown): AppError | undefined {
-  const e = err as { type?: string; status?: number } | undefined;
+  const e = err as { type?: string } | undefined;
   if (e?.type === 'entity.parse.failed') return new AppError('bad_request', 'malformed_json', 'the request body is not valid JSON');
   if (e?.type === 'entity.too.large') return new AppError('payload_too_large', 'body_too_large', 'the request body is too large');
   if (e?.type === 'encoding.unsupported' || e?.type === 'charset.unsupported')
     return new AppError('bad_request', 'unsupported_encoding', 'send the body as UTF-8 JSON');
-  if (e?.status && e.status >= 400 && e.status < 500 && e.type)
-    return new AppError('bad_request', 'bad_request', 'the request could not be read');
   return undefined;
 }
 

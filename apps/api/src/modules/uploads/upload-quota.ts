@@ -31,7 +31,7 @@ export class UploadQuota {
       throw new AppError(
         'payload_too_large',
         'upload_quota_exceeded',
-        `your files already use ${mb(used)} MB of your ${mb(this.bytes)} MB allowance and this one needs ${mb(addBytes)} MB; delete moulds you no longer need, or ask the shop's administrator to raise GELPOINT_UPLOAD_QUOTA_MB`,
+        `your files already use ${mb(used)} MB of your ${mb(this.bytes)} MB allowance and this one needs ${mb(addBytes)} MB; delete moulds you no longer need, or ask whoever runs your Gelpoint server for a larger allowance`,
       );
     }
   }
