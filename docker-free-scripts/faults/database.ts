@@ -52,8 +52,8 @@ export async function makeDueReminders(pool: pg.Pool, count: number, tag: string
     ).rows;
     const reminders = (
       await client.query<{ id: string }>(
-        `INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, assumed, title)
-         SELECT $1, p.id, 'demold_check', 'layer:1', now() - interval '1 minute', false, $3 || ' demold check ' || p.n
+        `INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, event_at, assumed, title)
+         SELECT $1, p.id, 'demold_check', 'layer:1', now() - interval '1 minute', now() - interval '1 minute', false, $3 || ' demold check ' || p.n
            FROM unnest($2::uuid[]) WITH ORDINALITY AS p(id, n)
          RETURNING id`,
         [template.shop_id, pours.map((p) => p.id), subjectPrefix],

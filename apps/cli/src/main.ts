@@ -1,4 +1,5 @@
 import { CliError, type Command } from './command';
+import { commandUsage } from './usage';
 
 const commands: Record<string, () => Promise<{ command: Command }>> = {
   mold: () => import('./commands/mold'),
@@ -8,9 +9,11 @@ const commands: Record<string, () => Promise<{ command: Command }>> = {
 
 const usage = `gelpoint — cavity, mix and cure numbers from the terminal
 
-  gelpoint mold FILE --level L [--units mm|cm|in] [--up x|y|z] [--dam outline|box] [--curve N] [--json]
-  gelpoint mix --volume-ml V --ratio A:B --by weight|volume --density-a DA --density-b DB [--pigment-pct P] [--json]
-  gelpoint cure --readings FILE.csv --ref-temp-c TR --activation-kj-mol E [--min-temp-c TMIN] [--json]
+${Object.values(commandUsage)
+  .map((u) => `  ${u.split('\n')[0]}`)
+  .join('\n')}
+
+  gelpoint COMMAND --help   explains one command
 `;
 
 /** Returns the process exit code; never throws for bad input. */
@@ -24,6 +27,10 @@ export async function main(argv: string[]): Promise<number> {
   if (!load) {
     process.stderr.write(`gelpoint: unknown command "${name}" (try: ${Object.keys(commands).join(', ')})\n`);
     return 2;
+  }
+  if (rest.includes('--help') || rest.includes('-h')) {
+    process.stdout.write(`${commandUsage[name] ?? ''}\n`);
+    return 0;
   }
   try {
     const { command } = await load();

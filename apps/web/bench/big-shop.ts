@@ -159,7 +159,7 @@ export async function seedBigShop(ds: DataSource, size: BigShopSize, now = new D
       const state = cureState(planSteps(t.result, t.snapshot), logged, pourReadings, t.tempC, now);
       for (const w of wantedReminders(state, pieceName, now, null)) {
         const past = w.dueAt.getTime() <= now.getTime();
-        reminders.push({ id: randomUUID(), shopId, pourId, kind: w.kind, step: w.step, dueAt: w.dueAt, assumed: w.assumed, title: w.title, status: past ? 'sent' : 'pending', sentAt: past ? w.dueAt : null });
+        reminders.push({ id: randomUUID(), shopId, pourId, kind: w.kind, step: w.step, dueAt: w.dueAt, eventAt: w.eventAt, leadMin: w.leadMin, assumed: w.assumed, title: w.title, status: past ? 'sent' : 'pending', sentAt: past ? w.dueAt : null });
       }
     }
 

@@ -82,14 +82,35 @@ export const CureView = z.object({
   progress: z.number().describe('0..1 of full cure'),
   stageReached: z.string().nullable(),
   nextLayerWindow: z.enum(['not_open', 'open', 'closed']).nullable(),
-  assumedHours: z.number().describe('hours where no reading existed and the plan’s temperature was assumed'),
-  stalledHours: z.number(),
-  readyToMachine: z.boolean(),
+  assumedHours: z.number().describe('wall-clock hours no reading speaks for (gaps, and stretches with no reading at all)'),
+  belowMinimumHours: z.number().describe('wall-clock hours below the product’s minimum temperature: counted slowly, not promised by the data sheet'),
+  loggedEquivalentHours: z.number().describe('equivalent hours at the reference temperature that the readings themselves show'),
+  assumedEquivalentHours: z.number().describe('equivalent hours counted on gaps and unlogged stretches, each at its conservative temperature'),
+  readingCarryH: z.number(),
+  gaps: z.array(z.object({ from: Timestamp, to: Timestamp, hours: z.number(), tempC: z.number() })).describe('stretches more than the carry limit from any reading'),
+  spans: z
+    .array(z.object({ from: Timestamp, to: Timestamp, source: z.enum(['logged', 'carried', 'gap', 'assumed']), tempC: z.number(), startTempC: z.number(), endTempC: z.number(), belowMinimum: z.boolean() }))
+    .describe('the history the cure sum ran over'),
+  readyToMachine: z.boolean().describe('the logged cure (gaps counted conservatively) has reached the data sheet’s point'),
+  release: z
+    .object({ allowed: z.boolean(), reasons: z.array(z.string()).describe('what still stands in the way, in words') })
+    .describe('whether a lead may release the piece for machining now, and why not'),
   stages: z.array(StageTimingView),
   cautions: z.array(z.object({ code: z.string(), severity: z.string(), message: z.string() })),
 });
 
-export const ReminderView = z.object({ id: Id, kind: ReminderKind, step: z.string(), dueAt: Timestamp, status: z.enum(['pending', 'sent', 'cancelled']), assumed: z.boolean(), title: z.string(), sentAt: Timestamp.nullable() });
+export const ReminderView = z.object({
+  id: Id,
+  kind: ReminderKind,
+  step: z.string(),
+  dueAt: Timestamp.describe('when the reminder goes out'),
+  eventAt: Timestamp.describe('the moment of the step it announces'),
+  leadMin: z.number().int().describe('minutes between the reminder and its step (closing windows)'),
+  status: z.enum(['pending', 'sent', 'cancelled']),
+  assumed: z.boolean(),
+  title: z.string(),
+  sentAt: Timestamp.nullable(),
+});
 export type ReminderView = z.infer<typeof ReminderView>;
 
 export const CureCheckView = z.object({ id: Id, checkedAt: Timestamp, stage: CureCheckStage, hardnessShoreD: z.number().nullable(), note: z.string(), hasPhoto: z.boolean(), checkedBy: UserRef.nullable() });

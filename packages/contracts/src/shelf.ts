@@ -31,6 +31,7 @@ const resinSystemFields = {
   maxLayerMm: positive('maximum layer thickness', 1000),
   maxBatchG: positive('maximum batch mass', 1_000_000),
   activationEnergyKJPerMol: positive('activation energy', 500).nullable().default(null),
+  hardnessShoreD: positive('Shore D hardness', 100).nullable().default(null).describe('the cured hardness the data sheet states; release then needs a cure check that reached it'),
   pricePerKit: nonNegative('price per kit', 1_000_000),
   kitSizeG: positive('kit size', 10_000_000),
   shelfLifeMonths: positive('shelf life', 600),
@@ -55,6 +56,7 @@ export const ResinSystemView = z.object({
   maker: z.string(),
   readyToMachineH: z.number().nullable(),
   activationEnergyKJPerMol: z.number().nullable(),
+  hardnessShoreD: z.number().nullable(),
   /** The activation energy the cure model uses: the data sheet's, or the common-practice default. */
   effectiveActivationEnergyKJPerMol: z.number(),
   archived: z.boolean(),
@@ -67,8 +69,9 @@ export const PigmentKind = z.enum(['powder', 'paste', 'liquid'], { message: 'kin
 const pigmentFields = {
   name: requiredText(120, 'name'),
   kind: PigmentKind,
-  recommendedPct: nonNegative('recommended loading', 100),
-  maxPct: positive('maximum loading', 100),
+  densityGPerMl: positive('pigment density', 25).describe('g/mL: the pigment takes its own volume in the pour'),
+  recommendedPct: nonNegative('recommended loading', 100).describe('% of part A + part B by mass'),
+  maxPct: positive('maximum loading', 100).describe('% of part A + part B by mass'),
   pricePerPack: nonNegative('price per pack', 1_000_000),
   packSizeG: positive('pack size', 1_000_000),
 };

@@ -13,7 +13,9 @@ export const Shop = z.object({
   name: z.string(),
   unitSystem: UnitSystem,
   scaleResolutionG: z.number(),
-  offRatioTolerancePct: z.number().describe('weighed A:B may differ from the target by this much before a batch is flagged'),
+  offRatioTolerancePct: z.number().describe('weighed A:B may differ from the product ratio by this much before a batch is flagged'),
+  readingCarryH: z.number().describe('how long one temperature reading speaks for on either side of it; beyond, the cure log has a gap'),
+  windowCloseLeadMin: z.number().int().describe('closing pour windows are announced this many minutes before they close'),
 });
 export type Shop = z.infer<typeof Shop>;
 
@@ -23,6 +25,12 @@ export const UpdateShopRequest = z
     unitSystem: UnitSystem,
     scaleResolutionG: ScaleResolutionG,
     offRatioTolerancePct: z.number({ message: 'the off-ratio tolerance must be a number (%)' }).min(0.5, { message: 'the off-ratio tolerance must be at least 0.5 %' }).max(20, { message: 'the off-ratio tolerance must be at most 20 %' }),
+    readingCarryH: z.number({ message: 'how long a reading speaks for must be a number of hours' }).min(0, { message: 'how long a reading speaks for cannot be negative' }).max(48, { message: 'how long a reading speaks for must be at most 48 h' }),
+    windowCloseLeadMin: z
+      .number({ message: 'the warning before a window closes must be a number of minutes' })
+      .int({ message: 'the warning before a window closes must be whole minutes' })
+      .min(0, { message: 'the warning before a window closes cannot be negative' })
+      .max(720, { message: 'the warning before a window closes must be at most 720 min (12 h)' }),
   })
   .partial()
   .strict();

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { activationEnergyForDoublingPer10K, activationEnergyFromKelvinQ } from './arrhenius';
+import { activationEnergyForDoublingPer10K, activationEnergyFromKelvinQ, rateFactor } from './arrhenius';
 import { cureProgress, cureStages, cureStatus, nextLayerWindow, predictStages, stageReached, timesAtTemperature } from './cure-model';
 import { demoDeepPour } from './test-fixtures';
 
@@ -59,13 +59,27 @@ describe('predicted stage times', () => {
     expect(byKey.demold?.predictedAt).toBe('2025-02-02T22:00:00Z');
   });
 
-  it('runs twice as long 10 K below the reference, and never below the minimum temperature', () => {
+  it('runs twice as long 10 K below the reference, and slowly (never "never") below the minimum temperature', () => {
     const product = { ...demoDeepPour, minWorkTempC: 5, activationEnergyKJPerMol: activationEnergyForDoublingPer10K(12) };
     // With Ea chosen to double from 12 °C to 22 °C, 2 equivalent hours take 4 h at 12 °C.
     const slow = predictStages({ product, equivalentHoursAtRef: 12, asOf: '2025-02-01T10:00:00Z', assumedTempC: 12 });
     expect(slow.ok && slow.value.find((s) => s.key === 'tack_free')?.predictedAt).toBe('2025-02-01T14:00:00Z');
+    // Below the 18 °C minimum the rate still follows Arrhenius: 2 equivalent hours at 10 °C take 2 / k(10 °C) hours.
     const cold = predictStages({ product: demoDeepPour, equivalentHoursAtRef: 12, asOf: '2025-02-01T10:00:00Z', assumedTempC: 10 });
-    expect(cold.ok && cold.value.find((s) => s.key === 'tack_free')?.predictedAt).toBeNull();
+    const k10 = rateFactor(10, 22, activationEnergyForDoublingPer10K(22));
+    expect(cold.ok && Date.parse(cold.value.find((s) => s.key === 'tack_free')!.predictedAt!)).toBe(Date.parse('2025-02-01T10:00:00Z') + Math.round((2 / k10) * 3_600_000));
+  });
+
+  it('has no cliff at the minimum temperature: demold at 17.99 °C comes just after demold at 18.00 °C', () => {
+    const at = (tempC: number) => {
+      const p = predictStages({ product: demoDeepPour, equivalentHoursAtRef: 0, asOf: '2025-02-01T00:00:00Z', assumedTempC: tempC });
+      return p.ok ? Date.parse(p.value.find((s) => s.key === 'demold')!.predictedAt!) : Number.NaN;
+    };
+    const hours = (ms: number) => (ms - Date.parse('2025-02-01T00:00:00Z')) / 3_600_000;
+    expect(hours(at(18))).toBeCloseTo(48 / rateFactor(18, 22, activationEnergyForDoublingPer10K(22)), 3);
+    // 0.01 K changes the rate by about 0.07 % (d ln k / dT = Ea / RT²): a few minutes on 64 h, not "never".
+    expect(hours(at(17.99)) - hours(at(18))).toBeGreaterThan(0);
+    expect(hours(at(17.99)) - hours(at(18))).toBeLessThan(0.1);
   });
 
   it('writes times in the shop zone when asked', () => {
@@ -103,10 +117,7 @@ describe('cureStatus', () => {
   it('says when the recoat window has closed', () => {
     const status = cureStatus({
       product: demoDeepPour,
-      readings: [
-        { at: '2025-02-01T00:00:00Z', tempC: 22 },
-        { at: '2025-02-02T06:00:00Z', tempC: 22 },
-      ],
+      readings: Array.from({ length: 31 }, (_, h) => ({ at: new Date(Date.UTC(2025, 1, 1, h)).toISOString(), tempC: 22 })),
       pouredAt: '2025-02-01T00:00:00Z',
       asOf: '2025-02-02T06:00:00Z',
       assumedTempC: 22,
@@ -116,7 +127,7 @@ describe('cureStatus', () => {
     expect(status.ok && status.value.cautions.map((c) => c.code)).toEqual(['next_layer_window_closed']);
   });
 
-  it('says when the cold stalls the cure', () => {
+  it('counts a cold pour slowly and says the data sheet does not promise a cure there', () => {
     const status = cureStatus({
       product: demoDeepPour,
       readings: [],
@@ -126,8 +137,27 @@ describe('cureStatus', () => {
     });
     expect(status.ok).toBe(true);
     if (!status.ok) return;
-    // 30 h at 10 °C, below the 18 °C minimum: no cure at all.
-    expect(status.value.age.equivalentHoursAtRef).toBe(0);
-    expect(status.value.cautions.map((c) => c.code)).toEqual(['cure_stalled', 'cure_temp_assumed', 'cure_will_stall']);
+    // 30 h at 10 °C, below the 18 °C minimum: the Arrhenius rate, not nothing.
+    expect(status.value.age.equivalentHoursAtRef).toBeCloseTo(30 * rateFactor(10, 22, activationEnergyForDoublingPer10K(22)), 9);
+    expect(status.value.cautions.map((c) => c.code)).toEqual(['cure_below_minimum', 'cure_temp_assumed', 'cure_slow_ahead']);
+    expect(status.value.stages.find((s) => s.key === 'demold')?.predictedAt).not.toBeNull();
+  });
+
+  it('forecasts from the latest reading, never warmer than the plan once it stops speaking', () => {
+    // Logged 14 °C for 4 h; the plan assumed 22 °C. From the last reading on, the forecast runs at 14 °C.
+    const readings = Array.from({ length: 5 }, (_, h) => ({ at: new Date(Date.UTC(2025, 1, 1, h)).toISOString(), tempC: 14 }));
+    const status = cureStatus({ product: demoDeepPour, readings, pouredAt: '2025-02-01T00:00:00Z', asOf: '2025-02-01T04:00:00Z', assumedTempC: 22 });
+    expect(status.ok).toBe(true);
+    if (!status.ok) return;
+    expect(status.value.ahead.map((p) => p.tempC)).toEqual([14, 14]);
+    const k14 = rateFactor(14, 22, activationEnergyForDoublingPer10K(22));
+    const gel = status.value.stages.find((s) => s.key === 'gel')!;
+    expect(Date.parse(gel.predictedAt!)).toBe(Date.parse('2025-02-01T04:00:00Z') + Math.round(((8 - 4 * k14) / k14) * 3_600_000));
+    // A warm log with a cooler plan: the reading carries 2 h, then the plan's 22 °C caps the forecast.
+    const warm = cureStatus({ product: demoDeepPour, readings: readings.map((r) => ({ ...r, tempC: 30 })), pouredAt: '2025-02-01T00:00:00Z', asOf: '2025-02-01T04:00:00Z', assumedTempC: 22 });
+    expect(warm.ok && warm.value.ahead.map((p) => [p.tempC, (p.toMs - p.fromMs) / 3_600_000])).toEqual([
+      [30, 2],
+      [22, Infinity],
+    ]);
   });
 });

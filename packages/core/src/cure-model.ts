@@ -1,7 +1,9 @@
 import { hoursAtTemperature, rateFactor } from './arrhenius';
 import { caution, type Caution } from './cautions';
 import type { CureReading } from './cure-readings';
-import { equivalentAge, type CureSpan, type EquivalentAge } from './equivalent-age';
+import { forwardPieces } from './cure-history';
+import { equivalentAge, readTimedReadings, type CureSpan, type EquivalentAge } from './equivalent-age';
+import { potLifeMinAt } from './pot-life';
 import { checkZone, formatIsoInstant, msPerHour, parseIsoInstant } from './iso-time';
 import { fail, ok, type Result } from './result';
 import { activationEnergyOf, readyToMachineHOf, type ResinSystem } from './shelf';
@@ -55,7 +57,10 @@ export interface TimesAtTemperature {
   tempC: number;
   /** k(T)/k(Tref): above 1 cures faster than the data sheet. */
   rateFactor: number;
-  /** Below the product's minimum temperature the times below are not reached at all. */
+  /**
+   * Below the product's minimum temperature: the times below still follow the Arrhenius rate (the
+   * cure goes on, slowly), but the data sheet promises nothing there.
+   */
   belowMinimum: boolean;
   potLifeMin: number;
   gelTimeH: number;
@@ -75,7 +80,7 @@ export function timesAtTemperature(product: ResinSystem, tempC: number): TimesAt
     tempC,
     rateFactor: rateFactor(tempC, product.referenceTempC, ea),
     belowMinimum: tempC < product.minWorkTempC,
-    potLifeMin: at(product.potLifeMin),
+    potLifeMin: potLifeMinAt(product, tempC),
     gelTimeH: at(product.gelTimeH),
     nextLayerOpensH: at(product.recoatWindow.earliestH),
     nextLayerClosesH: at(product.recoatWindow.latestH),
@@ -92,8 +97,15 @@ export interface StageTiming {
   reached: boolean;
   /** When the logged history reached it (only when the spans that reached it are known). */
   reachedAt: string | null;
-  /** For stages still ahead: when it will be reached at the assumed temperature; null if never (too cold). */
+  /** For stages still ahead: when the forecast temperatures reach it. */
   predictedAt: string | null;
+}
+
+/** A stretch of forecast temperature: from fromMs on (until toMs, which may be Infinity). */
+export interface ForecastPiece {
+  fromMs: number;
+  toMs: number;
+  tempC: number;
 }
 
 export interface StagePredictionInput {
@@ -101,30 +113,48 @@ export interface StagePredictionInput {
   equivalentHoursAtRef: number;
   /** The moment the equivalent age was taken. */
   asOf: string;
-  /** The temperature expected from asOf on. */
+  /** The temperature expected from asOf on, when `ahead` is not given. */
   assumedTempC: number;
+  /** The temperatures expected from asOf on, in time order; the last should run to Infinity. */
+  ahead?: ForecastPiece[];
   zone?: string;
 }
 
-/** When each stage still ahead will be reached if the temperature holds at assumedTempC from asOf on. */
+/** Epoch ms at which `needed` more equivalent hours are gained over the pieces, or null if they end first. */
+function whenGained(pieces: ForecastPiece[], needed: number, rateAt: (tempC: number) => number): number | null {
+  let gained = 0;
+  for (const piece of pieces) {
+    const rate = rateAt(piece.tempC);
+    const wallH = (piece.toMs - piece.fromMs) / msPerHour;
+    if (rate > 0 && gained + rate * wallH >= needed) return piece.fromMs + ((needed - gained) / rate) * msPerHour;
+    gained += rate * wallH;
+  }
+  return null;
+}
+
+/** When each stage still ahead will be reached at the forecast temperatures from asOf on. */
 export function predictStages(input: StagePredictionInput): Result<StageTiming[]> {
   const asOf = parseIsoInstant(input.asOf);
   if (!asOf.ok) return fail(asOf.error.code, `The time to predict from: ${asOf.error.message}`);
   const zone = checkZone(input.zone ?? 'utc');
   if (!zone.ok) return zone;
-  if (!Number.isFinite(input.assumedTempC)) return fail('temperature_invalid', `The assumed temperature must be a number in °C, got ${String(input.assumedTempC)}.`);
+  const ahead = input.ahead ?? [{ fromMs: asOf.value, toMs: Infinity, tempC: input.assumedTempC }];
+  const bad = ahead.find((p) => !(Number.isFinite(p.tempC) && p.tempC > -273.15));
+  if (bad) return fail('temperature_invalid', `The assumed temperature must be a number in °C above absolute zero, got ${String(bad.tempC)}.`);
   const { product } = input;
-  const rate = input.assumedTempC < product.minWorkTempC ? 0 : rateFactor(input.assumedTempC, product.referenceTempC, activationEnergyOf(product));
+  const ea = activationEnergyOf(product);
+  const rateAt = (tempC: number) => rateFactor(tempC, product.referenceTempC, ea);
   return ok(
     cureStages(product).map((stage) => {
       const remaining = stage.equivalentHoursAtRef - input.equivalentHoursAtRef;
       const reached = remaining <= 0;
+      const at = reached ? null : whenGained(ahead, remaining, rateAt);
       return {
         key: stage.key,
         equivalentHoursAtRef: stage.equivalentHoursAtRef,
         reached,
         reachedAt: null,
-        predictedAt: reached || rate === 0 ? null : formatIsoInstant(asOf.value + (remaining / rate) * msPerHour, zone.value),
+        predictedAt: at === null || !Number.isFinite(at) ? null : formatIsoInstant(Math.round(at), zone.value),
       };
     }),
   );
@@ -148,8 +178,10 @@ export interface CureStatusInput {
   pouredAt: string;
   /** Now, or the moment to look at. */
   asOf: string;
-  /** The plan's shop temperature: used where no reading exists and for predictions. */
+  /** The plan's shop temperature: counted where no reading exists, and never exceeded in a gap or a forecast. */
   assumedTempC: number;
+  /** How long a reading speaks for on either side of it, in hours (default 2). */
+  readingCarryH?: number;
   zone?: string;
 }
 
@@ -159,12 +191,18 @@ export interface CureStatus {
   stageReached: CureStageKey | null;
   nextLayerWindow: NextLayerWindowState;
   stages: StageTiming[];
+  /** The temperatures the forecast of the stages ahead runs on, from asOf on. */
+  ahead: ForecastPiece[];
   cautions: Caution[];
 }
 
-/** Where one pour stands: from the pour to asOf on the logged history, then forward at the assumed temperature. */
+/**
+ * Where one pour stands: from the pour to asOf on the logged history, then forward from the latest
+ * reading (never warmer than the plan's shop temperature once that reading stops speaking).
+ */
 export function cureStatus(input: CureStatusInput): Result<CureStatus> {
   const { product } = input;
+  const zoneArg = input.zone === undefined ? {} : { zone: input.zone };
   const age = equivalentAge({
     readings: input.readings,
     refTempC: product.referenceTempC,
@@ -172,16 +210,23 @@ export function cureStatus(input: CureStatusInput): Result<CureStatus> {
     minTempC: product.minWorkTempC,
     window: { from: input.pouredAt, to: input.asOf },
     assumedTempC: input.assumedTempC,
-    ...(input.zone === undefined ? {} : { zone: input.zone }),
+    ...(input.readingCarryH === undefined ? {} : { readingCarryH: input.readingCarryH }),
+    ...zoneArg,
   });
   if (!age.ok) return age;
+  const timed = readTimedReadings(input.readings);
+  const asOfMs = parseIsoInstant(input.asOf);
+  if (!timed.ok) return timed;
+  if (!asOfMs.ok) return asOfMs;
+  const upToNow = timed.value.filter((r) => r.ms <= asOfMs.value);
+  const ahead = forwardPieces(upToNow, asOfMs.value, age.value.readingCarryH, input.assumedTempC).map(({ fromMs, toMs, tempC }) => ({ fromMs, toMs, tempC }));
   const te = age.value.equivalentHoursAtRef;
-  const ahead = predictStages({ product, equivalentHoursAtRef: te, asOf: input.asOf, assumedTempC: input.assumedTempC, ...(input.zone === undefined ? {} : { zone: input.zone }) });
-  if (!ahead.ok) return ahead;
-  const stages = ahead.value.map((stage) => {
+  const predicted = predictStages({ product, equivalentHoursAtRef: te, asOf: input.asOf, assumedTempC: input.assumedTempC, ahead, ...zoneArg });
+  if (!predicted.ok) return predicted;
+  const stages = predicted.value.map((stage) => {
     if (!stage.reached) return stage;
     const at = whenReached(age.value.spans, stage.equivalentHoursAtRef);
-    return { ...stage, reachedAt: at === null ? null : formatIsoInstant(at, input.zone ?? 'utc') };
+    return { ...stage, reachedAt: at === null ? null : formatIsoInstant(Math.round(at), input.zone ?? 'utc') };
   });
   const cautions = [...age.value.cautions];
   const windowState = nextLayerWindow(te, product);
@@ -195,15 +240,20 @@ export function cureStatus(input: CureStatusInput): Result<CureStatus> {
       ),
     );
   }
-  if (input.assumedTempC < product.minWorkTempC) {
+  const coldAhead = ahead.find((p) => p.tempC < product.minWorkTempC);
+  if (coldAhead) {
     cautions.push(
       caution(
-        'cure_will_stall',
+        'cure_slow_ahead',
         'warning',
-        `At the assumed ${input.assumedTempC} °C, below the product's minimum of ${product.minWorkTempC} °C, the cure will not move on; the stages ahead have no predicted time until the piece is warmed.`,
+        `The forecast runs at ${round1(coldAhead.tempC)} °C, below the product's minimum of ${product.minWorkTempC} °C: the cure goes on only slowly there, and the data sheet does not promise it will finish. Warm the piece; the times ahead assume the cold holds.`,
         'plan',
       ),
     );
   }
-  return ok({ age: age.value, progress: cureProgress(te, product), stageReached: stageReached(te, product), nextLayerWindow: windowState, stages, cautions });
+  return ok({ age: age.value, progress: cureProgress(te, product), stageReached: stageReached(te, product), nextLayerWindow: windowState, stages, ahead, cautions });
+}
+
+function round1(x: number): number {
+  return Math.round(x * 10) / 10;
 }

@@ -1,8 +1,6 @@
 import { DateTime } from 'luxon';
+import { readTimeCell } from './reading-cells';
 import { fail, ok, type Result } from './result';
-
-// A time without its offset is a different instant in every shop; logs must say which one they mean.
-const offsetSuffix = /(?:Z|[+-]\d{2}(?::?\d{2})?)$/i;
 
 // How the database and Date#toISOString write instants; logs are full of them, and a board reads thousands.
 const canonicalUtc = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2}):(\d{2})(?:\.(\d{1,3}))?Z$/;
@@ -21,19 +19,16 @@ function canonicalUtcMs(text: string): number | undefined {
   return year < 100 ? undefined : at;
 }
 
-/** Epoch milliseconds of an ISO 8601 date-time that carries Z or an offset. */
+/**
+ * Epoch milliseconds of an ISO 8601 date-time that carries Z or an offset. The one reader of times
+ * in logs and cure sums: the grammar of reading-cells.ts (which also takes the lower-case t and z
+ * RFC 3339 §5.6 allows), with a fast path for the canonical UTC form.
+ */
 export function parseIsoInstant(text: string): Result<number> {
   const trimmed = text.trim();
   const fast = canonicalUtcMs(trimmed);
   if (fast !== undefined) return ok(fast);
-  const parsed = DateTime.fromISO(trimmed, { setZone: true });
-  if (!parsed.isValid || !trimmed.includes('T')) {
-    return fail('time_not_iso', `time "${text}" is not an ISO date; write it like 2025-03-01T18:30:00Z.`);
-  }
-  if (!offsetSuffix.test(trimmed)) {
-    return fail('time_without_offset', `time "${text}" has no time zone; add Z or an offset such as +01:00.`);
-  }
-  return ok(parsed.toMillis());
+  return readTimeCell(trimmed);
 }
 
 export const msPerHour = 3_600_000;

@@ -116,8 +116,10 @@ describe('mixBatch properties', () => {
         const result = mixBatch({ target: byVolumeTarget ? { volumeMl: size } : { massG: size }, ratio: { a, b }, basis: 'weight', densityAGPerMl: rhoA, densityBGPerMl: rhoB, pigmentPct: pct });
         if (!result.ok) return false;
         const m = result.value;
-        const reached = byVolumeTarget ? m.partA.ml + m.partB.ml : m.partA.grams + m.partB.grams;
+        // A volume target holds the pigment too (here as dense as the resin, no density being given).
+        const reached = byVolumeTarget ? m.partA.ml + m.partB.ml + m.pigmentMl : m.partA.grams + m.partB.grams;
         return (
+          Math.abs(m.pigmentMl - m.pigment.grams / m.mixedDensityGPerMl) <= 1e-9 * (m.pigmentMl + 1) &&
           Math.abs(m.partA.grams / m.partB.grams - a / b) <= 1e-9 * (a / b) &&
           Math.abs(reached - size) <= 1e-9 * size &&
           Math.abs(m.totalGrams - (m.partA.grams + m.partB.grams) * (1 + pct / 100)) <= 1e-9 * m.totalGrams
@@ -140,5 +142,20 @@ describe('mixBatch properties', () => {
         );
       }),
     );
+  });
+
+  it('counts the pigment\'s own volume in a volume target: 6 % of a liquid colourant takes about 6 % of the cup', () => {
+    // Volumes add for these mixtures (the assumption every data sheet's mixed-volume figure makes):
+    // V = mA/1.16 + mB/0.97 + 0.06·(mA + mB)/1.0 for 1000 mL of a 2:1-by-volume resin with a 1.0 g/mL colourant.
+    const mix = mixBatch({ target: { volumeMl: 1000 }, ratio: '2:1', basis: 'volume', densityAGPerMl: 1.16, densityBGPerMl: 0.97, pigmentPct: 6, pigmentDensityGPerMl: 1.0 });
+    expect(mix.ok).toBe(true);
+    if (!mix.ok) return;
+    const m = mix.value;
+    expect(m.partA.ml + m.partB.ml + m.pigment.grams / 1.0).toBeCloseTo(1000, 9);
+    expect(m.pigmentMl).toBeCloseTo(m.pigment.grams, 12);
+    // 6 % by mass of resin at 1.0967 g/mL in a 1.0 g/mL colourant: 6.2 % of the cup's volume.
+    expect(m.pigmentMl / 1000).toBeCloseTo(0.06 * 1.096667 / (1 + 0.06 * 1.096667), 5);
+    const bad = mixBatch({ target: { volumeMl: 1000 }, ratio: '2:1', basis: 'volume', densityAGPerMl: 1.16, densityBGPerMl: 0.97, pigmentPct: 6, pigmentDensityGPerMl: 0 });
+    expect(bad.ok || bad.error.code).toBe('density_not_positive');
   });
 });

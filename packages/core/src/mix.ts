@@ -2,8 +2,9 @@ import { checkRatio, parseRatioParts, type RatioBasis } from './mix-ratio';
 import { fail, ok, type Result } from './result';
 
 /**
- * What to mix toward. A volume or mass target is the mixed resin (part A + part B); pigment goes on
- * top of it, because a pigment's loading is stated as a share of the resin's mass.
+ * What to mix toward. A volume target is the whole cup's volume, pigment included (the pigment takes
+ * room in the mould too). A mass target is the resin alone (part A + part B); pigment goes on top of
+ * it, because a pigment's loading is stated as a percentage of part A + part B by mass.
  */
 export type MixTarget = { volumeMl: number } | { massG: number };
 
@@ -13,8 +14,13 @@ export interface MixInput {
   basis: RatioBasis;
   densityAGPerMl: number;
   densityBGPerMl: number;
-  /** Pigment as a percentage of the A+B mass. */
+  /** Pigment as a percentage of part A + part B by mass. */
   pigmentPct?: number;
+  /**
+   * The pigment's density, to count its volume in a volume target. Absent: the pigment is taken to
+   * be as dense as the mixed resin, so it adds its own share of volume.
+   */
+  pigmentDensityGPerMl?: number;
   /** The pigment's maximum loading; above it the mix is refused. */
   pigmentMaxPct?: number;
 }
@@ -32,6 +38,8 @@ export interface MixResult {
   totalGrams: number;
   /** A+B mass over A+B volume (volumes add; pigment left out). */
   mixedDensityGPerMl: number;
+  /** The pigment's own volume (mass over its density), part of a volume target. */
+  pigmentMl: number;
 }
 
 function checkDensity(value: number, part: 'A' | 'B'): Result<number> {
@@ -46,12 +54,12 @@ function checkDensity(value: number, part: 'A' | 'B'): Result<number> {
 
 export function checkPigmentPct(pigmentPct: number, pigmentMaxPct?: number): Result<number> {
   if (!Number.isFinite(pigmentPct) || pigmentPct < 0 || pigmentPct > 100) {
-    return fail('pigment_pct_out_of_range', `Pigment must be between 0 and 100 % of the resin mass, got ${String(pigmentPct)}; enter a percentage such as 2.`);
+    return fail('pigment_pct_out_of_range', `Pigment must be between 0 and 100 % of part A + part B by mass, got ${String(pigmentPct)}; enter a percentage such as 2.`);
   }
   if (pigmentMaxPct !== undefined && pigmentPct > pigmentMaxPct) {
     return fail(
       'pigment_over_max',
-      `Pigment at ${pigmentPct} % is over this pigment's maximum of ${pigmentMaxPct} % of the resin mass; lower it to ${pigmentMaxPct} % or less so the resin still cures.`,
+      `Pigment at ${pigmentPct} % is over this pigment's maximum of ${pigmentMaxPct} % of part A + part B by mass; lower it to ${pigmentMaxPct} % or less so the resin still cures.`,
     );
   }
   return ok(pigmentPct);
@@ -74,6 +82,12 @@ export function mixBatch(input: MixInput): Result<MixResult> {
   const { a, b } = ratio.value;
   const rhoA = densityA.value;
   const rhoB = densityB.value;
+  const share = pigmentPct.value / 100;
+  if (input.pigmentDensityGPerMl !== undefined && !(Number.isFinite(input.pigmentDensityGPerMl) && input.pigmentDensityGPerMl > 0)) {
+    return fail('density_not_positive', `The pigment's density must be above zero (in g/mL), got ${String(input.pigmentDensityGPerMl)}; liquid colourants are near 1, mica powders near 2.8.`);
+  }
+  const rhoAB = mixedDensity({ a, b, basis: input.basis }, rhoA, rhoB);
+  const rhoPigment = input.pigmentDensityGPerMl ?? rhoAB;
   let gramsA: number;
   let gramsB: number;
   if ('volumeMl' in input.target) {
@@ -81,11 +95,13 @@ export function mixBatch(input: MixInput): Result<MixResult> {
     if (!Number.isFinite(volumeMl) || volumeMl <= 0) {
       return fail('volume_not_positive', `The volume to mix must be above zero (in mL), got ${String(volumeMl)}; enter how much resin you need.`);
     }
+    // volume = mA/ρA + mB/ρB + share·(mA + mB)/ρpigment, solved for one part's worth of the ratio.
     if (input.basis === 'volume') {
-      gramsA = (volumeMl * a * rhoA) / (a + b);
-      gramsB = (volumeMl * b * rhoB) / (a + b);
+      const mlPerPart = volumeMl / (a + b + (share * (a * rhoA + b * rhoB)) / rhoPigment);
+      gramsA = a * mlPerPart * rhoA;
+      gramsB = b * mlPerPart * rhoB;
     } else {
-      const gramsPerPart = volumeMl / (a / rhoA + b / rhoB);
+      const gramsPerPart = volumeMl / (a / rhoA + b / rhoB + (share * (a + b)) / rhoPigment);
       gramsA = a * gramsPerPart;
       gramsB = b * gramsPerPart;
     }
@@ -105,13 +121,14 @@ export function mixBatch(input: MixInput): Result<MixResult> {
   }
   const mlA = gramsA / rhoA;
   const mlB = gramsB / rhoB;
-  const pigmentGrams = (pigmentPct.value / 100) * (gramsA + gramsB);
+  const pigmentGrams = share * (gramsA + gramsB);
   return ok({
     partA: { grams: gramsA, ml: mlA },
     partB: { grams: gramsB, ml: mlB },
     pigment: { grams: pigmentGrams },
     totalGrams: gramsA + gramsB + pigmentGrams,
     mixedDensityGPerMl: (gramsA + gramsB) / (mlA + mlB),
+    pigmentMl: pigmentGrams / rhoPigment,
   });
 }
 
@@ -121,4 +138,18 @@ export function mixedDensity(ratio: { a: number; b: number; basis: RatioBasis },
     return (ratio.a + ratio.b) / (ratio.a / densityAGPerMl + ratio.b / densityBGPerMl);
   }
   return (ratio.a * densityAGPerMl + ratio.b * densityBGPerMl) / (ratio.a + ratio.b);
+}
+
+/** Part A over part B by mass: the ratio a scale checks, whatever basis the data sheet states. */
+export function massRatioAToB(ratio: { a: number; b: number; basis: RatioBasis }, densityAGPerMl: number, densityBGPerMl: number): number {
+  return ratio.basis === 'weight' ? ratio.a / ratio.b : (ratio.a * densityAGPerMl) / (ratio.b * densityBGPerMl);
+}
+
+/**
+ * The resin (A+B) mass that, with its pigment, fills a volume: V = m/ρ(A+B) + share·m/ρ(pigment).
+ * Without a pigment density the pigment is taken to be as dense as the resin.
+ */
+export function resinMassForVolume(volumeMl: number, mixedDensityGPerMl: number, pigmentPct: number, pigmentDensityGPerMl?: number): number {
+  const share = pigmentPct / 100;
+  return volumeMl / (1 / mixedDensityGPerMl + share / (pigmentDensityGPerMl ?? mixedDensityGPerMl));
 }

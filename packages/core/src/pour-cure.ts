@@ -48,7 +48,14 @@ export interface CureState {
  * The cure clock runs from the latest step poured (its first cup): the next layer's window, demold
  * and readiness all follow the newest resin in the mould.
  */
-export function cureState(steps: PlanStep[], logged: { step: string; mixedAt: Date }[], readings: CureReading[], assumedTempC: number, now: Date): CureState {
+export function cureState(
+  steps: PlanStep[],
+  logged: { step: string; mixedAt: Date }[],
+  readings: CureReading[],
+  assumedTempC: number,
+  now: Date,
+  options: { readingCarryH?: number } = {},
+): CureState {
   const firstMixed = new Map<string, Date>();
   for (const b of logged) {
     const seen = firstMixed.get(b.step);
@@ -62,7 +69,7 @@ export function cureState(steps: PlanStep[], logged: { step: string; mixedAt: Da
   const step = steps[latest]!;
   const pouredAt = firstMixed.get(step.key)!;
   const asOf = now > pouredAt ? now : pouredAt;
-  const status = cureStatus({ product: step.product, readings, pouredAt: pouredAt.toISOString(), asOf: asOf.toISOString(), assumedTempC });
+  const status = cureStatus({ product: step.product, readings, pouredAt: pouredAt.toISOString(), asOf: asOf.toISOString(), assumedTempC, ...options });
   return { step, isLastStep: latest === steps.length - 1, pouredAt, status: status.ok ? status.value : null };
 }
 
@@ -78,7 +85,12 @@ export type ReminderKind =
 export interface WantedReminder {
   kind: ReminderKind;
   step: string;
+  /** When the reminder goes out: the moment of the step, or a lead time before a window closes. */
   dueAt: Date;
+  /** The moment of the step itself (a window opening or closing, demold, ready). */
+  eventAt: Date;
+  /** Minutes between dueAt and eventAt (0 except for closing windows). */
+  leadMin: number;
   assumed: boolean;
   title: string;
 }
@@ -88,14 +100,26 @@ const stepWords = (key: string) => {
   return kind === 'seal_coat' ? `seal coat ${n}` : kind === 'layer' ? `layer ${n}` : `finish coat ${n}`;
 };
 
-function at(stage: StageTiming | undefined, now: Date): { dueAt: Date; assumed: boolean } | undefined {
+function at(stage: StageTiming | undefined, now: Date): { eventAt: Date; assumed: boolean } | undefined {
   if (!stage) return undefined;
-  if (stage.reached) return { dueAt: stage.reachedAt ? new Date(stage.reachedAt) : now, assumed: false };
-  return stage.predictedAt ? { dueAt: new Date(stage.predictedAt), assumed: true } : undefined;
+  if (stage.reached) return { eventAt: stage.reachedAt ? new Date(stage.reachedAt) : now, assumed: false };
+  return stage.predictedAt ? { eventAt: new Date(stage.predictedAt), assumed: true } : undefined;
 }
 
+/** Closing windows are announced this long before they close unless the shop says otherwise. */
+export const defaultWindowCloseLeadMin = 30;
+
+const closingKinds: ReadonlySet<ReminderKind> = new Set(['seal_coat_window_closes', 'next_layer_window_closes']);
+
 /** The reminders a pour should have now, from its cure state (and its finish coats once machined). */
-export function wantedReminders(state: CureState, pieceName: string, now: Date, finish: { machinedAt: Date; coats: number; hoursBetween: number } | null): WantedReminder[] {
+export function wantedReminders(
+  state: CureState,
+  pieceName: string,
+  now: Date,
+  finish: { machinedAt: Date; coats: number; hoursBetween: number } | null,
+  options: { windowCloseLeadMin?: number } = {},
+): WantedReminder[] {
+  const leadMin = options.windowCloseLeadMin ?? defaultWindowCloseLeadMin;
   const out: WantedReminder[] = [];
   const { step, status } = state;
   if (step && status) {
@@ -103,7 +127,10 @@ export function wantedReminders(state: CureState, pieceName: string, now: Date, 
     const assumedHistory = status.age.assumedHours > 0;
     const add = (kind: ReminderKind, stageKey: StageTiming['key'], title: string) => {
       const when = at(find(stageKey), now);
-      if (when) out.push({ kind, step: step.key, dueAt: when.dueAt, assumed: when.assumed || assumedHistory, title });
+      if (!when) return;
+      const lead = closingKinds.has(kind) ? leadMin : 0;
+      const dueAt = new Date(when.eventAt.getTime() - lead * 60_000);
+      out.push({ kind, step: step.key, dueAt, eventAt: when.eventAt, leadMin: lead, assumed: when.assumed || assumedHistory, title });
     };
     const what = `${pieceName}, ${stepWords(step.key)}`;
     if (step.kind === 'seal_coat') {
@@ -120,7 +147,10 @@ export function wantedReminders(state: CureState, pieceName: string, now: Date, 
   if (finish && finish.coats > 0) {
     const schedule = finishCoatSchedule({ machinedAt: finish.machinedAt.toISOString(), coats: finish.coats, hoursBetweenCoats: finish.hoursBetween });
     if (schedule.ok) {
-      for (const c of schedule.value) out.push({ kind: 'finish_coat_due', step: `finish:${c.coat}`, dueAt: new Date(c.dueAt), assumed: false, title: `Finish coat ${c.coat} of ${finish.coats} due: ${pieceName}` });
+      for (const c of schedule.value) {
+        const dueAt = new Date(c.dueAt);
+        out.push({ kind: 'finish_coat_due', step: `finish:${c.coat}`, dueAt, eventAt: dueAt, leadMin: 0, assumed: false, title: `Finish coat ${c.coat} of ${finish.coats} due: ${pieceName}` });
+      }
     }
   }
   return out;

@@ -1,7 +1,8 @@
 import { caution, handlingCautions, type Caution } from './cautions';
 import { timesAtTemperature } from './cure-model';
 import { surfaceDewPointCheck } from './dew-point';
-import type { PlannedBatch, PourPlan, PourPlanInput } from './pour-plan';
+import { defaultOffRatioTolerancePct } from './cup-rounding';
+import type { PlannedBatch, PourPlan, PourPlanInput } from './pour-plan-types';
 import { ok, type Result } from './result';
 import type { ResinSystem } from './shelf';
 
@@ -111,6 +112,8 @@ export function pourPlanCautions(input: PourPlanInput, plan: PourPlan, deep: Res
     }
   }
 
+  cautions.push(...ratioAtScaleCautions(input, pourGroups));
+
   if (input.shopAir) {
     const dew = surfaceDewPointCheck(input.shopAir.surfaceTempC, input.shopTempC, input.shopAir.rhPct);
     if (!dew.ok) return dew;
@@ -119,4 +122,27 @@ export function pourPlanCautions(input: PourPlanInput, plan: PourPlan, deep: Res
 
   cautions.push(...handlingCautions());
   return ok(cautions);
+}
+
+/** Cups whose grams, rounded to the shop's scale, still miss the product's ratio by more than the shop allows. */
+function ratioAtScaleCautions(input: PourPlanInput, groups: { product: ResinSystem; batches: PlannedBatch[]; name: string }[]): Caution[] {
+  const tolerance = input.offRatioTolerancePct ?? defaultOffRatioTolerancePct;
+  const out: Caution[] = [];
+  for (const group of groups) {
+    const off = group.batches.filter((b) => Math.abs(b.ratioErrorPct) > tolerance);
+    if (off.length === 0) continue;
+    const worst = off.reduce((w, b) => (Math.abs(b.ratioErrorPct) > Math.abs(w.ratioErrorPct) ? b : w));
+    const { a, b, basis } = group.product.mixRatio;
+    const cups = off.length === 1 ? `Cup ${worst.index + 1}` : `${off.length} cups`;
+    out.push(
+      caution(
+        'cup_off_ratio_at_scale',
+        'warning',
+        `${cups} of ${group.name}: on a ${input.scaleResolutionG} g scale the nearest amounts (${worst.partA.grams} g A to ${worst.partB.grams} g B${off.length > 1 ? ' at worst' : ''}) are ${worst.ratioErrorPct > 0 ? '+' : ''}${worst.ratioErrorPct.toFixed(1)} % off the ${a}:${b} ratio by ${basis} of "${group.product.name}", more than the shop's ${tolerance} %. Weigh on a finer scale or mix fewer, larger cups.`,
+        'batch',
+        worst.index,
+      ),
+    );
+  }
+  return out;
 }

@@ -1,102 +1,20 @@
 import { batchCount } from './batches';
-import type { Caution } from './cautions';
-import { timesAtTemperature, type TimesAtTemperature } from './cure-model';
-import { woodCost, type WoodBlank, type WoodCost } from './cost';
-import { splitIntoLayers, type LayerSlice } from './layers';
-import { checkPigmentPct, mixBatch, mixedDensity, type MixResult } from './mix';
+import { defaultOffRatioTolerancePct, roundCupOnRatio } from './cup-rounding';
+import { timesAtTemperature } from './cure-model';
+import { woodCost } from './cost';
+import { splitIntoLayers } from './layers';
+import { checkPigmentPct, massRatioAToB, mixBatch, mixedDensity, resinMassForVolume, type MixResult } from './mix';
 import { pourPlanCautions } from './pour-plan-cautions';
 import { groupedTree, readGroupedTree, roundGrouped, type GroupedAmounts, type RoundedGroups } from './pour-plan-rounding';
+import type { CostTotals, CupWaste, LayerPlan, PartTotals, PlannedBatch, PourPlan, PourPlanInput, SealCoatPlan } from './pour-plan-types';
 import { fail, ok, type Result } from './result';
 import { roundTree, stepsToAmount } from './rounding';
 import { sealCoatVolume } from './seal-coat';
-import { pigmentPricePerG, resinPricePerG, validatePigment, validateResinSystem, type Pigment, type ResinSystem } from './shelf';
+import { pigmentPricePerG, resinPricePerG, validatePigment, validateResinSystem, type ResinSystem } from './shelf';
 import type { ScaleResolutionG } from './unit-format';
 import { mm3ToMl } from './units';
-import type { VolumeCurve } from './volume-curve';
 
-/** Resin (A+B) left in each cup after pouring, by mass or by volume. */
-export type CupWaste = { massG: number } | { volumeMl: number };
-
-export interface PourPlanInput {
-  cavity: {
-    /** Volume below each level, levels from the cavity floor. */
-    curve: VolumeCurve;
-    /** Wood surface the resin touches: what the seal coat covers. */
-    wettedAreaMm2: number;
-    /** Resin depth at the deepest point when filled to fillLevelMm (depth map); leave out when the curve starts at that point. */
-    maxDepthMm?: number;
-  };
-  fillLevelMm: number;
-  deepPour: { product: ResinSystem; pigment?: { pigment: Pigment; pct: number } };
-  sealCoat?: { product: ResinSystem; filmThicknessMm: number; coats: number; absorptionFactor: number };
-  /** Extra resin on every layer, as a percentage of that layer's fill volume. */
-  overPourPct: number;
-  cupWaste: CupWaste;
-  scaleResolutionG: ScaleResolutionG;
-  shopTempC: number;
-  /** With humidity and the surface temperature the plan also checks the dew point. */
-  shopAir?: { rhPct: number; surfaceTempC: number };
-  wood?: WoodBlank;
-}
-
-export interface PartTotals {
-  partA: { grams: number; ml: number };
-  partB: { grams: number; ml: number };
-  pigment: { grams: number };
-  totalGrams: number;
-}
-
-export interface CostTotals {
-  resin: number;
-  pigment: number;
-  total: number;
-}
-
-export interface PlannedBatch extends MixResult {
-  /** 0-based, run-sheet order across the plan: seal coats first, then layers from the floor up. */
-  index: number;
-  pour: { kind: 'seal_coat'; coat: number } | { kind: 'layer'; layer: number };
-  cost: CostTotals;
-}
-
-export interface LayerPlan extends Omit<LayerSlice, 'fillVolumeMm3'> {
-  fillVolumeMl: number;
-  overPourMl: number;
-  pourVolumeMl: number;
-  batches: PlannedBatch[];
-  totals: PartTotals;
-  cost: CostTotals;
-}
-
-export interface SealCoatPlan {
-  productName: string;
-  wettedAreaMm2: number;
-  filmThicknessMm: number;
-  absorptionFactor: number;
-  volumeMl: number;
-  coats: { index: number; volumeMl: number; batches: PlannedBatch[]; totals: PartTotals; cost: CostTotals }[];
-  totals: PartTotals;
-  cost: CostTotals;
-}
-
-export interface PourPlan {
-  /** Every margin the plan adds, by name, so none is hidden inside a total. */
-  margins: {
-    overPour: { label: string; pct: number; volumeMl: number };
-    cupWaste: { label: string; perBatch: CupWaste; batches: number; resinG: number };
-  };
-  /** The steps everything shown is rounded to. */
-  resolution: { grams: ScaleResolutionG; ml: number; cost: number };
-  fill: { fillLevelMm: number; fillVolumeMl: number; pourVolumeMl: number; layerCount: number; layerThicknessMm: number; deepestResinMm: number };
-  sealCoat: SealCoatPlan | null;
-  layers: LayerPlan[];
-  deepPour: { productName: string; pigmentName: string | null; pigmentPct: number; totals: PartTotals; cost: CostTotals };
-  cost: { sealCoat: number; deepPour: number; wood: (WoodCost & { shownCost: number }) | null; piece: number };
-  /** The data sheet's times at the shop temperature. */
-  shopTimes: { deepPour: TimesAtTemperature; sealCoat: TimesAtTemperature | null };
-  /** appliesTo.kind 'product': index 0 is the deep-pour product, 1 the seal-coat product. */
-  cautions: Caution[];
-}
+export * from './pour-plan-types';
 
 export const mlStep = 0.1;
 export const costStep = 0.01;
@@ -116,26 +34,37 @@ function cupWasteResinG(cupWaste: CupWaste, densityGPerMl: number): number {
   return 'massG' in cupWaste ? cupWaste.massG : cupWaste.volumeMl * densityGPerMl;
 }
 
-/** Splits one pour (a layer or a coat) into its fewest equal batches and mixes each exactly. */
-function exactBatches(product: ResinSystem, pourMl: number, cupWaste: CupWaste, pigmentPct: number, pour: (b: number) => PlannedBatch['pour']): Result<ExactBatch[]> {
+/**
+ * Splits one pour (a layer or a coat) into its fewest equal batches and mixes each exactly. The
+ * pour's volume holds the pigment too, so the resin it needs is less by the pigment's own volume.
+ */
+function exactBatches(
+  product: ResinSystem,
+  pourMl: number,
+  cupWaste: CupWaste,
+  pigment: { pct: number; densityGPerMl?: number | undefined },
+  scaleResolutionG: ScaleResolutionG,
+  pour: (b: number) => PlannedBatch['pour'],
+): Result<ExactBatch[]> {
   const density = mixedDensity(product.mixRatio, product.densityAGPerMl, product.densityBGPerMl);
   const wasteG = cupWasteResinG(cupWaste, density);
-  const count = batchCount({ deliveredResinG: pourMl * density, cupWasteResinG: wasteG, pigmentPct, maxBatchG: product.maxBatchG });
+  const deliveredResinG = resinMassForVolume(pourMl, density, pigment.pct, pigment.densityGPerMl);
+  // Rounding a cup on ratio can add up to about (2 + larger/smaller) scale steps; the cup must stay under the limit as shown.
+  const ratio = massRatioAToB(product.mixRatio, product.densityAGPerMl, product.densityBGPerMl);
+  const roundingG = scaleResolutionG * (2 + Math.max(ratio, 1 / ratio)) * (1 + pigment.pct / 100);
+  const count = batchCount({ deliveredResinG, cupWasteResinG: wasteG, pigmentPct: pigment.pct, maxBatchG: Math.max(product.maxBatchG - roundingG, product.maxBatchG / 2) });
   if (!count.ok) return fail(count.error.code, `${product.name}: ${count.error.message}`);
   const mix = mixBatch({
-    target: { volumeMl: pourMl / count.value + wasteG / density },
+    target: { massG: deliveredResinG / count.value + wasteG },
     ratio: product.mixRatio,
     basis: product.mixRatio.basis,
     densityAGPerMl: product.densityAGPerMl,
     densityBGPerMl: product.densityBGPerMl,
-    pigmentPct,
+    pigmentPct: pigment.pct,
+    ...(pigment.densityGPerMl === undefined ? {} : { pigmentDensityGPerMl: pigment.densityGPerMl }),
   });
   if (!mix.ok) return mix;
   return ok(Array.from({ length: count.value }, (_, b) => ({ mix: mix.value, pour: pour(b) })));
-}
-
-function grams(groups: ExactBatch[][]): GroupedAmounts {
-  return groups.map((batches) => batches.map(({ mix }) => [mix.partA.grams, mix.partB.grams, mix.pigment.grams]));
 }
 
 function millilitres(groups: ExactBatch[][]): GroupedAmounts {
@@ -162,12 +91,18 @@ function addTotals(rows: PartTotals[]): PartTotals {
   };
 }
 
-/** The shown grams and mL of every batch, with group and pour totals that are their sums. */
-function shownAmounts(groups: ExactBatch[][], scaleResolutionG: ScaleResolutionG) {
-  const g = roundGrouped(grams(groups), scaleResolutionG);
+/**
+ * The shown grams and mL of every batch, with group and pour totals that are their sums. Grams are
+ * rounded cup by cup on the product's ratio (see cup-rounding.ts); mL share the pour's rounded total.
+ */
+function shownAmounts(groups: ExactBatch[][], scaleResolutionG: ScaleResolutionG, pigmentPct: (gi: number) => number) {
   const ml = roundGrouped(millilitres(groups), mlStep);
-  const shownGroups = g.groups.map((group, gi) => {
-    const batches = group.batches.map((batch, bi) => partTotals(batch, ml.groups[gi]!.batches[bi]!));
+  const shownGroups = groups.map((group, gi) => {
+    const batches = group.map(({ mix }, bi) => {
+      const cup = roundCupOnRatio(mix.partA.grams, mix.partB.grams, pigmentPct(gi), scaleResolutionG);
+      const total = tidy(cup.aG + cup.bG + cup.pigmentG);
+      return { ...partTotals({ total, parts: [cup.aG, cup.bG, cup.pigmentG] }, ml.groups[gi]!.batches[bi]!), ratioErrorPct: cup.ratioErrorPct };
+    });
     return { batches, totals: addTotals(batches) };
   });
   return { groups: shownGroups, overall: addTotals(shownGroups.map((group) => group.totals)) };
@@ -244,7 +179,7 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
     sealVolumeMl = volume.value.totalMl;
     sealPerCoatMl = volume.value.perCoatMl;
     for (let coat = 0; coat < input.sealCoat.coats; coat++) {
-      const batches = exactBatches(sealProduct.value, sealPerCoatMl, input.cupWaste, 0, () => ({ kind: 'seal_coat', coat }));
+      const batches = exactBatches(sealProduct.value, sealPerCoatMl, input.cupWaste, { pct: 0 }, input.scaleResolutionG, () => ({ kind: 'seal_coat', coat }));
       if (!batches.ok) return batches;
       sealGroups.push(batches.value);
     }
@@ -257,13 +192,13 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
   });
   const layerGroups: ExactBatch[][] = [];
   for (let layer = 0; layer < slices.value.length; layer++) {
-    const batches = exactBatches(deep, layerVolumes[layer]!.pourVolumeMl, input.cupWaste, pigmentPct.value, () => ({ kind: 'layer', layer }));
+    const batches = exactBatches(deep, layerVolumes[layer]!.pourVolumeMl, input.cupWaste, { pct: pigmentPct.value, densityGPerMl: pigmentChoice?.pigment.densityGPerMl }, input.scaleResolutionG, () => ({ kind: 'layer', layer }));
     if (!batches.ok) return batches;
     layerGroups.push(batches.value);
   }
 
-  const sealShown = shownAmounts(sealGroups, input.scaleResolutionG);
-  const deepShown = shownAmounts(layerGroups, input.scaleResolutionG);
+  const sealShown = shownAmounts(sealGroups, input.scaleResolutionG, () => 0);
+  const deepShown = shownAmounts(layerGroups, input.scaleResolutionG, () => pigmentPct.value);
 
   const sealResinPerG = sealProduct?.ok ? resinPricePerG(sealProduct.value) : 0;
   const deepResinPerG = resinPricePerG(deep);
@@ -281,9 +216,10 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
   const woodShown = stepsToAmount(pieceCost.children[2]!.steps, costStep);
 
   let nextIndex = 0;
-  const planBatch = (exact: ExactBatch, shown: PartTotals, cost: CostTotals): PlannedBatch => ({
+  const planBatch = (exact: ExactBatch, shown: PartTotals & { ratioErrorPct: number }, cost: CostTotals): PlannedBatch => ({
     ...shown,
     mixedDensityGPerMl: exact.mix.mixedDensityGPerMl,
+    pigmentMl: exact.mix.pigmentMl,
     index: nextIndex++,
     pour: exact.pour,
     cost,
@@ -334,7 +270,7 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
       overPour: { label: 'Over-pour margin', pct: input.overPourPct, volumeMl: overPourMl },
       cupWaste: { label: 'Cup waste per batch', perBatch: input.cupWaste, batches: batchTotal, resinG: wasteResinG },
     },
-    resolution: { grams: input.scaleResolutionG, ml: mlStep, cost: costStep },
+    resolution: { grams: input.scaleResolutionG, ml: mlStep, cost: costStep, offRatioTolerancePct: input.offRatioTolerancePct ?? defaultOffRatioTolerancePct },
     fill: {
       fillLevelMm: input.fillLevelMm,
       fillVolumeMl,

@@ -51,9 +51,19 @@ export function readTimeCell(text: string): Result<number> {
   return ok(date.getTime() - offsetMinutes * 60_000);
 }
 
+/**
+ * A plain decimal number (optional sign, digits, point, exponent), or NaN: no hex (0x10), no
+ * "Infinity", no blanks. The minus sign may be the typographic one (U+2212) that phones and copied
+ * text produce. The one reader of typed and imported numbers.
+ */
+export function parseDecimal(text: string): number {
+  const plain = text.trim().replace(/^\u2212/, '-');
+  return decimal.test(plain) ? Number(plain) : Number.NaN;
+}
+
 /** A temperature in °C written as a plain decimal (no hex, no "Infinity"), above absolute zero. */
 export function readTempCell(text: string): Result<number> {
-  const tempC = decimal.test(text) ? Number(text) : Number.NaN;
+  const tempC = parseDecimal(text);
   if (!Number.isFinite(tempC)) return fail('temperature_invalid', `tempC ${quotedCell(text)} is not a number`);
   if (tempC <= absoluteZeroC) {
     // Zero kelvin is −273.15 °C exactly (SI Brochure, 9th ed., 2019); the cure rate is undefined there.

@@ -26,6 +26,11 @@ export interface ResinSystem {
   maxBatchG: number;
   /** Absent on most data sheets; see activationEnergyOf. */
   activationEnergyKJPerMol?: number;
+  /**
+   * The Shore D hardness the data sheet gives for the cured product, when it gives one: release for
+   * machining then also needs a cure check that measured at least this.
+   */
+  hardnessShoreD?: number;
   /** Price of one kit of A+B together, in the shop's currency. */
   pricePerKit: number;
   /** Mass of A+B in one kit. */
@@ -40,7 +45,12 @@ export type PigmentPrice = { pricePerG: number } | { pricePerPack: number; packS
 export interface Pigment {
   name: string;
   kind: PigmentKind;
-  /** Percentages of the A+B mass. */
+  /**
+   * Its density, so its volume counts in the pour (liquid colourants are near 1 g/mL, mica powders
+   * near 2.8). Absent on plans saved before it was asked for: taken as the resin's own.
+   */
+  densityGPerMl?: number;
+  /** Percentages of part A + part B by mass. */
   recommendedPct: number;
   maxPct: number;
   price: PigmentPrice;
@@ -115,6 +125,10 @@ export function validateResinSystem(product: ResinSystem): Result<ResinSystem> {
   if (product.activationEnergyKJPerMol !== undefined && !(product.activationEnergyKJPerMol > 0)) {
     issues.push({ field: 'activationEnergyKJPerMol', message: `activationEnergyKJPerMol must be above zero when given, got ${product.activationEnergyKJPerMol}.` });
   }
+  // Shore D runs from 0 to 100 (ASTM D2240).
+  if (product.hardnessShoreD !== undefined && !(product.hardnessShoreD > 0 && product.hardnessShoreD <= 100)) {
+    issues.push({ field: 'hardnessShoreD', message: `hardnessShoreD must be between 0 and 100 when given, got ${product.hardnessShoreD}.` });
+  }
   return finish(product, 'resin_system', issues);
 }
 
@@ -126,6 +140,9 @@ export function validatePigment(pigment: Pigment): Result<Pigment> {
   }
   if (!(pigment.recommendedPct >= 0 && pigment.recommendedPct <= pigment.maxPct)) {
     issues.push({ field: 'recommendedPct', message: `recommendedPct must be between 0 and maxPct (${pigment.maxPct}), got ${pigment.recommendedPct}.` });
+  }
+  if (pigment.densityGPerMl !== undefined && !(pigment.densityGPerMl > 0 && pigment.densityGPerMl <= 25)) {
+    issues.push({ field: 'densityGPerMl', message: `densityGPerMl must be above 0 and at most 25 g/mL, got ${pigment.densityGPerMl}.` });
   }
   if ('pricePerG' in pigment.price) {
     nonNegativeFields(pigment.price, ['pricePerG'], issues);

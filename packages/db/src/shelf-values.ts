@@ -22,6 +22,7 @@ export function toCoreResinSystem(r: ResinSystem): CoreResinSystem {
     maxLayerMm: r.maxLayerMm,
     maxBatchG: r.maxBatchG,
     ...(r.activationEnergyKJPerMol !== null ? { activationEnergyKJPerMol: r.activationEnergyKJPerMol } : {}),
+    ...(r.hardnessShoreD !== null ? { hardnessShoreD: r.hardnessShoreD } : {}),
     pricePerKit: r.pricePerKit,
     kitSizeG: r.kitSizeG,
     shelfLifeMonths: r.shelfLifeMonths,
@@ -29,5 +30,5 @@ export function toCoreResinSystem(r: ResinSystem): CoreResinSystem {
 }
 
 export function toCorePigment(p: Pigment): CorePigment {
-  return { name: p.name, kind: p.kind, recommendedPct: p.recommendedPct, maxPct: p.maxPct, price: { pricePerPack: p.pricePerPack, packSizeG: p.packSizeG } };
+  return { name: p.name, kind: p.kind, densityGPerMl: p.densityGPerMl, recommendedPct: p.recommendedPct, maxPct: p.maxPct, price: { pricePerPack: p.pricePerPack, packSizeG: p.packSizeG } };
 }

@@ -52,7 +52,7 @@ const created = async (w: World, shop: 'own' | 'other', path: string, body: obje
 
 const freshResin = (w: World, shop: 'own' | 'other') => created(w, shop, '/api/shelf/resin-systems', resinInput());
 const freshPigment = (w: World, shop: 'own' | 'other') =>
-  created(w, shop, '/api/shelf/pigments', { name: 'Matrix teal', kind: 'powder', recommendedPct: 1, maxPct: 3, pricePerPack: 9, packSizeG: 25 });
+  created(w, shop, '/api/shelf/pigments', { name: 'Matrix teal', kind: 'powder', densityGPerMl: 2.8, recommendedPct: 1, maxPct: 3, pricePerPack: 9, packSizeG: 25 });
 const freshLot = async (w: World, shop: 'own' | 'other') =>
   created(w, shop, '/api/shelf/lots', { part: 'A', resinSystemId: await freshResin(w, shop), lotNumber: 'MX-1', quantityG: 3000, receivedOn: '2026-11-01' });
 const planBody = (pieceId: string, resinSystemId: string) => ({
@@ -107,9 +107,9 @@ const table: Record<string, Rule> = {
   'PUT /api/shelf/resin-systems/:id': { allowed: ['lead'], body: () => resinInput({ name: 'Renamed' }), params: ownOrOther(freshResin, 'resin') },
   'DELETE /api/shelf/resin-systems/:id': { allowed: ['lead'], params: ownOrOther(freshResin, 'resin') },
   'GET /api/shelf/pigments': { allowed: 'member' },
-  'POST /api/shelf/pigments': { allowed: ['lead'], body: () => ({ name: 'Matrix ochre', kind: 'paste', recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }) },
+  'POST /api/shelf/pigments': { allowed: ['lead'], body: () => ({ name: 'Matrix ochre', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }) },
   'GET /api/shelf/pigments/:id': { allowed: 'member', params: ownOrOther(freshPigment, 'pigment') },
-  'PUT /api/shelf/pigments/:id': { allowed: ['lead'], body: () => ({ name: 'Matrix ochre', kind: 'paste', recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }), params: ownOrOther(freshPigment, 'pigment') },
+  'PUT /api/shelf/pigments/:id': { allowed: ['lead'], body: () => ({ name: 'Matrix ochre', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }), params: ownOrOther(freshPigment, 'pigment') },
   'DELETE /api/shelf/pigments/:id': { allowed: ['lead'], params: ownOrOther(freshPigment, 'pigment') },
   'GET /api/shelf/lots': { allowed: 'member' },
   'POST /api/shelf/lots': { allowed: ['lead'], body: (w) => ({ part: 'pigment', pigmentId: w.ownPigment, lotNumber: 'MX-2', quantityG: 25, receivedOn: '2026-11-02' }) },

@@ -54,7 +54,7 @@ export function planBody(pieceId: string, resinSystemId: string, extra: { pigmen
   };
 }
 
-export const pigmentBody = () => ({ name: 'Hostile teal', kind: 'powder', recommendedPct: 1, maxPct: 3, pricePerPack: 9, packSizeG: 25 });
+export const pigmentBody = () => ({ name: 'Hostile teal', kind: 'powder', densityGPerMl: 2.8, recommendedPct: 1, maxPct: 3, pricePerPack: 9, packSizeG: 25 });
 
 export function stockedMould(): Buffer {
   return binaryStl(pocketMouldTriangles({ outer: [40, 30, 10], pocket: [5, 5, 35, 25], floorZ: 4 }));

@@ -7,6 +7,7 @@ const options = {
   'ref-temp-c': { type: 'string' },
   'activation-kj-mol': { type: 'string' },
   'min-temp-c': { type: 'string' },
+  'carry-h': { type: 'string' },
   json: { type: 'boolean' },
 } as const;
 
@@ -25,16 +26,16 @@ function summary(age: EquivalentAge, refTempC: number): string {
     line('readings', `${age.readings} (${age.firstTime} to ${age.lastTime})`),
     line('elapsed', `${age.elapsedHours.toFixed(2)} h`),
     line(`equivalent at ${refTempC} °C`, `${age.equivalentHoursAtRef.toFixed(2)} h`),
-    line('below minimum', `${age.stalledHours.toFixed(2)} h`),
-    'each reading holds until the next; the last one holds for zero time',
+    line('  of it on gaps', `${age.assumedEquivalentHours.toFixed(2)} h (${age.gaps.length} gap${age.gaps.length === 1 ? '' : 's'})`),
+    line('below minimum', `${age.belowMinimumHours.toFixed(2)} h`),
+    `each interval counts at the average of its two readings (ASTM C1074); a reading speaks for ${age.readingCarryH} h either side, beyond that a gap counts at the lower neighbouring reading`,
   ];
   return [...lines, ...age.cautions.map((c) => `${c.severity}: ${c.message}`)].join('\n');
 }
 
 /**
- * gelpoint cure: equivalent age at the reference temperature from a logged `time,tempC` CSV.
- * The sum runs from the first reading to the last: each reading holds until the next, so the
- * last reading marks the end of the log and holds for zero time.
+ * gelpoint cure: equivalent age at the reference temperature from a logged `time,tempC` CSV, from the
+ * first reading to the last, each interval at the average of its two readings (ASTM C1074).
  */
 export const command: Command = async (argv) => {
   const { values } = parseOptions(argv, options);
@@ -42,6 +43,7 @@ export const command: Command = async (argv) => {
   const refTempC = numberOption(values['ref-temp-c'], 'ref-temp-c', { required: true })!;
   const activationKJPerMol = numberOption(values['activation-kj-mol'], 'activation-kj-mol', { required: true })!;
   const minTempC = numberOption(values['min-temp-c'], 'min-temp-c');
+  const carryH = numberOption(values['carry-h'], 'carry-h');
   const parsed = parseCureReadingsCsv(readLog(values.readings));
   if (!parsed.ok) {
     // The message names the first rows and counts them all (the list of issues stops at a thousand).
@@ -52,6 +54,7 @@ export const command: Command = async (argv) => {
     refTempC,
     activationEnergyKJPerMol: activationKJPerMol,
     ...(minTempC === undefined ? {} : { minTempC }),
+    ...(carryH === undefined ? {} : { readingCarryH: carryH }),
   });
   if (!age.ok) throw new CliError(age.error.message);
   if (!values.json) return summary(age.value, refTempC);
@@ -62,8 +65,7 @@ export const command: Command = async (argv) => {
       refTempC,
       activationEnergyKJPerMol: activationKJPerMol,
       minTempC: minTempC ?? null,
-      lastReadingHoldsHours: 0,
-      spans: spans.map(({ from, to, tempC, stalled, equivalentHoursAtRef }) => ({ from, to, tempC, stalled, equivalentHoursAtRef })),
+      spans: spans.map(({ from, to, source, tempC, startTempC, endTempC, belowMinimum, equivalentHoursAtRef }) => ({ from, to, source, tempC, startTempC, endTempC, belowMinimum, equivalentHoursAtRef })),
       cautions: cautions.map(({ code, severity, message }) => ({ code, severity, message })),
     },
     null,

@@ -15,20 +15,29 @@ async function json(argv: string[]) {
     pigment: { grams: number };
     totalGrams: number;
     mixedDensityGPerMl: number;
+    pigmentMl: number;
   };
 }
 
 describe('gelpoint mix', () => {
   it('prints the mix as JSON: 300 mL at 2:1 by volume', async () => {
-    // 200 mL × 1.16 = 232 g of A, 100 mL × 0.97 = 97 g of B; 3 % pigment of 329 g = 9.87 g.
-    const out = await json(['--volume-ml', '300', '--ratio', '2:1', '--by', 'volume', ...densities, '--pigment-pct', '3']);
-    expect(Object.keys(out)).toEqual(['partA', 'partB', 'pigment', 'totalGrams', 'mixedDensityGPerMl']);
+    // 200 mL × 1.16 = 232 g of A, 100 mL × 0.97 = 97 g of B.
+    const out = await json(['--volume-ml', '300', '--ratio', '2:1', '--by', 'volume', ...densities]);
+    expect(Object.keys(out)).toEqual(['partA', 'partB', 'pigment', 'totalGrams', 'mixedDensityGPerMl', 'pigmentMl']);
     expect(out.partA.grams).toBeCloseTo(232, 9);
     expect(out.partA.ml).toBeCloseTo(200, 9);
     expect(out.partB.grams).toBeCloseTo(97, 9);
-    expect(out.pigment.grams).toBeCloseTo(9.87, 9);
-    expect(out.totalGrams).toBeCloseTo(338.87, 9);
+    expect(out.totalGrams).toBeCloseTo(329, 9);
     expect(out.mixedDensityGPerMl).toBeCloseTo(329 / 300, 12);
+  });
+
+  it('counts the pigment in the cup\'s volume: 300 mL with 3 % of a 1.0 g/mL colourant', async () => {
+    // Volumes add: 300 = u·(2 + 1) + 0.03·(2·1.16 + 0.97)·u / 1.0, so u = 300 / 3.0987 mL per part of the ratio.
+    const out = await json(['--volume-ml', '300', '--ratio', '2:1', '--by', 'volume', ...densities, '--pigment-pct', '3', '--pigment-density-g-ml', '1.0']);
+    const u = 300 / (3 + 0.03 * 3.29);
+    expect(out.partA.ml).toBeCloseTo(2 * u, 9);
+    expect(out.pigment.grams).toBeCloseTo(0.03 * 3.29 * u, 9);
+    expect(out.partA.ml + out.partB.ml + out.pigmentMl).toBeCloseTo(300, 9);
   });
 
   it('by weight the grams keep the ratio', async () => {

@@ -8,6 +8,7 @@ const options = {
   'density-a': { type: 'string' },
   'density-b': { type: 'string' },
   'pigment-pct': { type: 'string' },
+  'pigment-density-g-ml': { type: 'string' },
   json: { type: 'boolean' },
 } as const;
 
@@ -22,9 +23,9 @@ function table(mix: MixResult): string {
   return [
     row('part A', mix.partA.grams, mix.partA.ml),
     row('part B', mix.partB.grams, mix.partB.ml),
-    row('pigment', mix.pigment.grams, null),
-    row('total', mix.totalGrams, mix.partA.ml + mix.partB.ml),
-    `mixed density ${mix.mixedDensityGPerMl.toFixed(4)} g/mL (part A + part B)`,
+    row('pigment', mix.pigment.grams, mix.pigmentMl),
+    row('total', mix.totalGrams, mix.partA.ml + mix.partB.ml + mix.pigmentMl),
+    `mixed density ${mix.mixedDensityGPerMl.toFixed(4)} g/mL (part A + part B); pigment as % of part A + part B by mass`,
   ].join('\n');
 }
 
@@ -38,7 +39,16 @@ export const command: Command = async (argv) => {
   const densityA = numberOption(values['density-a'], 'density-a', { required: true })!;
   const densityB = numberOption(values['density-b'], 'density-b', { required: true })!;
   const pigmentPct = numberOption(values['pigment-pct'], 'pigment-pct') ?? 0;
-  const result = mixBatch({ target: { volumeMl }, ratio, basis: by, densityAGPerMl: densityA, densityBGPerMl: densityB, pigmentPct });
+  const pigmentDensity = numberOption(values['pigment-density-g-ml'], 'pigment-density-g-ml');
+  const result = mixBatch({
+    target: { volumeMl },
+    ratio,
+    basis: by,
+    densityAGPerMl: densityA,
+    densityBGPerMl: densityB,
+    pigmentPct,
+    ...(pigmentDensity === undefined ? {} : { pigmentDensityGPerMl: pigmentDensity }),
+  });
   if (!result.ok) throw new CliError(result.error.message);
   const mix = result.value;
   return values.json ? JSON.stringify(mix, null, 2) : table(mix);

@@ -9,6 +9,14 @@ describe('number fields', () => {
     expect(optionalNumber('55')).toBe(55);
   });
 
+  it('reads a typographic minus (U+2212, as phones type it) and refuses what is not a plain decimal', () => {
+    expect(requiredNumber('\u221240')).toBe(-40);
+    expect(optionalNumber('\u22125,5')).toBe(-5.5);
+    expect(requiredNumber('0x10')).toBeNaN();
+    expect(requiredNumber('12 g')).toBeNaN();
+    expect(requiredNumber('Infinity')).toBeNaN();
+  });
+
   it('turns an empty required field into NaN and an empty optional one into null', () => {
     expect(requiredNumber('')).toBeNaN();
     expect(optionalNumber('  ')).toBeNull();

@@ -14,7 +14,7 @@ export async function dispatchDueReminders(ds: DataSource, publicUrl: string, lo
   for (;;) {
     const n = await ds.transaction(async (m) => {
       const due: (DueReminder & { notify_user_ids: string[] })[] = await m.query(
-        `SELECT r.id, r.title, r.kind, r.due_at, r.assumed, r.pour_id, r.shop_id, p.notify_user_ids, pc.name AS piece_name, pp.name AS plan_name
+        `SELECT r.id, r.title, r.kind, r.due_at, r.event_at, r.lead_min, r.assumed, r.pour_id, r.shop_id, p.notify_user_ids, pc.name AS piece_name, pp.name AS plan_name
            FROM reminders r
            JOIN pours p ON p.id = r.pour_id
            JOIN pieces pc ON pc.id = p.piece_id

@@ -38,7 +38,7 @@ async function pourWithReminders() {
   const plan = await one(`INSERT INTO pour_plans (shop_id, piece_id, name, inputs, product_snapshot, result) VALUES ($1, $2, 'Void fill', '{}', '{}', '{}') RETURNING id`, [shop, piece]);
   const pour = await one(`INSERT INTO pours (shop_id, piece_id, pour_plan_id, assumed_temp_c, notify_user_ids) VALUES ($1, $2, $3, 21, $4) RETURNING id`, [shop, piece, plan, people]);
   const reminder = (kind: string, step: string, dueSql: string) =>
-    one(`INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, title) VALUES ($1, $2, $3, $4, ${dueSql}, $5) RETURNING id`, [shop, pour, kind, step, `Title ${kind}`]);
+    one(`INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, event_at, title) VALUES ($1, $2, $3, $4, ${dueSql}, ${dueSql}, $5) RETURNING id`, [shop, pour, kind, step, `Title ${kind}`]);
   const due = [await reminder('demold_check', 'layer:2', `now() - interval '5 minutes'`), await reminder('next_layer_window_opens', 'layer:1', `now() - interval '2 hours'`), await reminder('ready_to_machine', 'layer:2', `now() - interval '1 minute'`)];
   const later = await reminder('finish_coat_due', 'finish:1', `now() + interval '3 days'`);
   return { shop, people, pour, due, later };

@@ -10,6 +10,8 @@ export class Pigment {
   @Column({ name: 'shop_id', type: 'uuid' }) shopId!: string;
   @Column({ type: 'text' }) name!: string;
   @Column({ type: 'text' }) kind!: 'powder' | 'paste' | 'liquid';
+  /** g/mL: its volume counts in the pour. */
+  @Column({ name: 'density_g_per_ml', type: 'double precision' }) densityGPerMl!: number;
   @Column({ name: 'recommended_pct', type: 'double precision' }) recommendedPct!: number;
   @Column({ name: 'max_pct', type: 'double precision' }) maxPct!: number;
   @Column({ name: 'price_per_pack', type: 'double precision' }) pricePerPack!: number;

@@ -21,7 +21,12 @@ export class Reminder {
   @Column({ type: 'text' }) kind!: ReminderKind;
   /** Which step it belongs to: 'seal_coat:1', 'layer:2', 'finish:3'. */
   @Column({ type: 'text' }) step!: string;
+  /** When the reminder goes out: a closing window's lead time before the step, otherwise the step itself. */
   @Column({ name: 'due_at', type: 'timestamptz' }) dueAt!: Date;
+  /** The moment of the step (a window opening or closing, demold, ready to machine). */
+  @Column({ name: 'event_at', type: 'timestamptz' }) eventAt!: Date;
+  /** Minutes between the mail and the step it announces. */
+  @Column({ name: 'lead_min', type: 'integer', default: 0 }) leadMin!: number;
   @Column({ type: 'text', default: 'pending' }) status!: 'pending' | 'sent' | 'cancelled';
   /** True when the due time rests on the assumed temperature rather than logged readings. */
   @Column({ type: 'boolean', default: false }) assumed!: boolean;

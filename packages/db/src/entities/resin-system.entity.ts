@@ -34,6 +34,8 @@ export class ResinSystem {
   @Column({ name: 'max_layer_mm', type: 'double precision' }) maxLayerMm!: number;
   @Column({ name: 'max_batch_g', type: 'double precision' }) maxBatchG!: number;
   @Column({ name: 'activation_energy_kj_per_mol', type: 'double precision', nullable: true }) activationEnergyKJPerMol!: number | null;
+  /** Shore D of the cured product when the data sheet states it: release then needs a check that reached it. */
+  @Column({ name: 'hardness_shore_d', type: 'double precision', nullable: true }) hardnessShoreD!: number | null;
   @Column({ name: 'price_per_kit', type: 'double precision' }) pricePerKit!: number;
   @Column({ name: 'kit_size_g', type: 'double precision' }) kitSizeG!: number;
   @Column({ name: 'shelf_life_months', type: 'double precision' }) shelfLifeMonths!: number;

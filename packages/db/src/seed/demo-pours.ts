@@ -126,7 +126,7 @@ export async function seedDemoPours(m: EntityManager, shopId: string, people: Ma
     for (const w of wantedReminders(state, piece.name, new Date(now), null)) {
       const past = w.dueAt.getTime() <= now;
       const status = past ? d.pastReminders : 'pending';
-      await m.save(m.create(Reminder, { shopId, pourId: pour.id, kind: w.kind, step: w.step, dueAt: w.dueAt, assumed: w.assumed, title: w.title, status, sentAt: status === 'sent' ? w.dueAt : null }));
+      await m.save(m.create(Reminder, { shopId, pourId: pour.id, kind: w.kind, step: w.step, dueAt: w.dueAt, eventAt: w.eventAt, leadMin: w.leadMin, assumed: w.assumed, title: w.title, status, sentAt: status === 'sent' ? w.dueAt : null }));
     }
   }
 }

@@ -10,7 +10,7 @@ const resinSystems = [
     ratioA: 2, ratioB: 1, ratioBasis: 'volume' as const,
     densityAGPerMl: 1.15, densityBGPerMl: 0.97,
     potLifeMin: 60, gelTimeH: 10, tackFreeH: 24, recoatEarliestH: 18, recoatLatestH: 48, demoldH: 72, fullCureH: 168, readyToMachineH: null,
-    referenceTempC: 22, minWorkTempC: 18, maxWorkTempC: 30, maxLayerMm: 50, maxBatchG: 6000, activationEnergyKJPerMol: null,
+    referenceTempC: 22, minWorkTempC: 18, maxWorkTempC: 30, maxLayerMm: 50, maxBatchG: 6000, activationEnergyKJPerMol: null, hardnessShoreD: null,
     pricePerKit: 165, kitSizeG: 6000, shelfLifeMonths: 12,
   },
   {
@@ -20,7 +20,7 @@ const resinSystems = [
     ratioA: 1, ratioB: 1, ratioBasis: 'volume' as const,
     densityAGPerMl: 1.13, densityBGPerMl: 0.98,
     potLifeMin: 25, gelTimeH: 1.5, tackFreeH: 5, recoatEarliestH: 4, recoatLatestH: 24, demoldH: 24, fullCureH: 72, readyToMachineH: null,
-    referenceTempC: 22, minWorkTempC: 15, maxWorkTempC: 32, maxLayerMm: 3, maxBatchG: 1000, activationEnergyKJPerMol: null,
+    referenceTempC: 22, minWorkTempC: 15, maxWorkTempC: 32, maxLayerMm: 3, maxBatchG: 1000, activationEnergyKJPerMol: null, hardnessShoreD: null,
     pricePerKit: 78, kitSizeG: 2000, shelfLifeMonths: 18,
   },
   {
@@ -30,14 +30,14 @@ const resinSystems = [
     ratioA: 100, ratioB: 45, ratioBasis: 'weight' as const,
     densityAGPerMl: 1.16, densityBGPerMl: 0.96,
     potLifeMin: 35, gelTimeH: 4, tackFreeH: 10, recoatEarliestH: 8, recoatLatestH: 24, demoldH: 24, fullCureH: 96, readyToMachineH: 72,
-    referenceTempC: 23, minWorkTempC: 18, maxWorkTempC: 29, maxLayerMm: 25, maxBatchG: 2500, activationEnergyKJPerMol: 55,
+    referenceTempC: 23, minWorkTempC: 18, maxWorkTempC: 29, maxLayerMm: 25, maxBatchG: 2500, activationEnergyKJPerMol: 55, hardnessShoreD: 82,
     pricePerKit: 110, kitSizeG: 4350, shelfLifeMonths: 12,
   },
 ];
 
 const pigments = [
-  { name: 'Smoky Teal mica', kind: 'powder' as const, recommendedPct: 1, maxPct: 3, pricePerPack: 14, packSizeG: 50 },
-  { name: 'Pearl White paste', kind: 'paste' as const, recommendedPct: 2, maxPct: 6, pricePerPack: 18, packSizeG: 100 },
+  { name: 'Smoky Teal mica', kind: 'powder' as const, densityGPerMl: 2.8, recommendedPct: 1, maxPct: 3, pricePerPack: 14, packSizeG: 50 },
+  { name: 'Pearl White paste', kind: 'paste' as const, densityGPerMl: 1.4, recommendedPct: 2, maxPct: 6, pricePerPack: 18, packSizeG: 100 },
 ];
 
 const isoDay = (offsetDays: number) => new Date(Date.now() + offsetDays * 86_400_000).toISOString().slice(0, 10);

@@ -21,7 +21,7 @@ async function activeProduct<T extends ResinSystem | Pigment>(m: EntityManager, 
   return row;
 }
 
-async function compute(m: EntityManager, shopId: string, input: PlanInput, moldCavity: MoldCavityLookup, scaleResolutionG: number) {
+async function compute(m: EntityManager, shopId: string, input: PlanInput, moldCavity: MoldCavityLookup, { scaleResolutionG, offRatioTolerancePct }: ShopScale) {
   const piece = await m.findOneBy(Piece, { id: input.pieceId, shopId });
   if (!piece) throw notFound('piece');
   const deep = await activeProduct(m, ResinSystem, shopId, input.deepPour.resinSystemId, 'resin system');
@@ -54,6 +54,7 @@ async function compute(m: EntityManager, shopId: string, input: PlanInput, moldC
     overPourPct: input.overPourPct,
     cupWaste: input.cupWaste,
     scaleResolutionG: scaleResolutionG === 1 ? 1 : 0.1,
+    offRatioTolerancePct,
     shopTempC: input.shopTempC,
     ...(input.shopAir ? { shopAir: input.shopAir } : {}),
     ...(input.wood ? { wood: input.wood } : {}),
@@ -82,9 +83,14 @@ function view(p: PourPlan): PourPlanView {
   } as PourPlanView;
 }
 
-async function shopScale(m: EntityManager, shopId: string): Promise<number> {
-  const rows: { scale_resolution_g: number }[] = await m.query('SELECT scale_resolution_g FROM shops WHERE id = $1', [shopId]);
-  return rows[0]?.scale_resolution_g ?? 0.1;
+interface ShopScale {
+  scaleResolutionG: number;
+  offRatioTolerancePct: number;
+}
+
+async function shopScale(m: EntityManager, shopId: string): Promise<ShopScale> {
+  const rows: { scale_resolution_g: number; off_ratio_tolerance_pct: number }[] = await m.query('SELECT scale_resolution_g, off_ratio_tolerance_pct FROM shops WHERE id = $1', [shopId]);
+  return { scaleResolutionG: rows[0]?.scale_resolution_g ?? 0.1, offRatioTolerancePct: rows[0]?.off_ratio_tolerance_pct ?? 3 };
 }
 
 export class PourPlans {

@@ -8,12 +8,13 @@ import type { WantedReminder } from '@gelpoint/core';
 export async function syncReminders(m: EntityManager, shopId: string, pourId: string, wanted: WantedReminder[]): Promise<void> {
   for (const w of wanted) {
     await m.query(
-      `INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, assumed, title)
-       VALUES ($1, $2, $3, $4, $5, $6, $7)
+      `INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, event_at, lead_min, assumed, title)
+       VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9)
        ON CONFLICT (pour_id, kind, step) DO UPDATE
-          SET due_at = EXCLUDED.due_at, assumed = EXCLUDED.assumed, title = EXCLUDED.title, status = 'pending', updated_at = now()
+          SET due_at = EXCLUDED.due_at, event_at = EXCLUDED.event_at, lead_min = EXCLUDED.lead_min, assumed = EXCLUDED.assumed,
+              title = EXCLUDED.title, status = 'pending', updated_at = now()
         WHERE reminders.status <> 'sent'`,
-      [shopId, pourId, w.kind, w.step, w.dueAt, w.assumed, w.title],
+      [shopId, pourId, w.kind, w.step, w.dueAt, w.eventAt, w.leadMin, w.assumed, w.title],
     );
   }
   const keep = wanted.map((w) => `${w.kind}|${w.step}`);

@@ -1,9 +1,9 @@
-import type { CureState } from '@gelpoint/core';
+import type { CureState, ReleaseEvidence } from '@gelpoint/core';
 import type { PourBatch, Reminder } from '@gelpoint/db';
 import type { BatchView, CureView, ReminderView } from '@gelpoint/contracts';
 import type { z } from 'zod';
 
-export function cureView(state: CureState): z.infer<typeof CureView> {
+export function cureView(state: CureState, release: ReleaseEvidence): z.infer<typeof CureView> {
   const s = state.status;
   return {
     step: state.step?.key ?? null,
@@ -14,8 +14,14 @@ export function cureView(state: CureState): z.infer<typeof CureView> {
     stageReached: s?.stageReached ?? null,
     nextLayerWindow: s?.nextLayerWindow ?? null,
     assumedHours: s?.age.assumedHours ?? 0,
-    stalledHours: s?.age.stalledHours ?? 0,
+    belowMinimumHours: s?.age.belowMinimumHours ?? 0,
+    loggedEquivalentHours: s?.age.loggedEquivalentHours ?? 0,
+    assumedEquivalentHours: s?.age.assumedEquivalentHours ?? 0,
+    readingCarryH: s?.age.readingCarryH ?? 0,
+    gaps: s?.age.gaps ?? [],
+    spans: s?.age.spans.map((x) => ({ from: x.from, to: x.to, source: x.source, tempC: x.tempC, startTempC: x.startTempC, endTempC: x.endTempC, belowMinimum: x.belowMinimum })) ?? [],
     readyToMachine: Boolean(state.isLastStep && s?.stages.find((x) => x.key === 'ready_to_machine')?.reached),
+    release,
     stages: s?.stages.map((x) => ({ key: x.key, equivalentHoursAtRef: x.equivalentHoursAtRef, reached: x.reached, reachedAt: x.reachedAt, predictedAt: x.predictedAt })) ?? [],
     cautions: s?.cautions.map((c) => ({ code: c.code, severity: c.severity, message: c.message })) ?? [],
   };
@@ -26,6 +32,8 @@ export const reminderView = (r: Reminder): ReminderView => ({
   kind: r.kind,
   step: r.step,
   dueAt: r.dueAt.toISOString(),
+  eventAt: r.eventAt.toISOString(),
+  leadMin: r.leadMin,
   status: r.status,
   assumed: r.assumed,
   title: r.title,

@@ -3,7 +3,7 @@ import express from 'express';
 import multer from 'multer';
 import type { DataSource } from 'typeorm';
 import { z } from 'zod';
-import { parseCureReadingsCsv } from '@gelpoint/core';
+import { parseCureReadingsCsv, parseIsoInstant } from '@gelpoint/core';
 import {
   AddReadingsRequest,
   BatchView,
@@ -27,6 +27,12 @@ import type { RouteRegistry } from '../../http/route-registry';
 import { recordAudit } from '../audit/audit.service';
 import { sniffImageType } from './photo-type';
 import type { Pours } from './pours.service';
+
+/** A time core's reader accepted, written as the canonical UTC instant the API's contract and the database take. */
+function utcInstant(at: string): string {
+  const ms = parseIsoInstant(at);
+  return ms.ok ? new Date(ms.value).toISOString() : at;
+}
 
 const IdParams = z.object({ id: Id });
 const CheckParams = z.object({ id: Id, checkId: Id });
@@ -75,8 +81,10 @@ export function pourRoutes(api: RouteRegistry, ds: DataSource, pours: Pours, upl
         const fields = Object.fromEntries((parsed.error.issues ?? []).slice(0, 200).map((i) => [`row ${(i as { row?: number }).row ?? '?'}`, i.message]));
         throw new AppError('unprocessable', 'csv_invalid', parsed.error.message, fields);
       }
-      // The same limits as readings sent as JSON: a number is not yet a plausible temperature.
-      const checked = AddReadingsRequest.safeParse({ readings: parsed.value });
+      // The same limits as readings sent as JSON: a number is not yet a plausible temperature. Each time goes in as the
+      // instant core read (in UTC): the log may write it in any form core's one reader takes.
+      const instants = parsed.value.map((r) => ({ at: utcInstant(r.at), tempC: r.tempC }));
+      const checked = AddReadingsRequest.safeParse({ readings: instants });
       if (!checked.success) {
         const fields = Object.fromEntries(
           checked.error.issues.slice(0, 200).map((i) => {

@@ -1,5 +1,5 @@
 import { In, type DataSource, type EntityManager } from 'typeorm';
-import { dewPointC, surfaceDewPointCheck, type CureReading, type PourPlan as CorePourPlan } from '@gelpoint/core';
+import { dewPointC, massRatioAToB, offRatioPct as offRatioPctOf, parseIsoInstant, releaseEvidence, surfaceDewPointCheck, type CureReading, type PourPlan as CorePourPlan, type ReleaseCheck } from '@gelpoint/core';
 import { CureCheck, Lot, Piece, Pour, PourBatch, PourPlan, Reminder, Shop, TemperatureReading, User, type CureCheckStage, type PieceStage } from '@gelpoint/db';
 import type { PourSummary, PourView } from '@gelpoint/contracts';
 import type { AuthContext } from '../../http/auth-context';
@@ -52,6 +52,9 @@ interface Loaded {
   snapshot: PlanSnapshot;
 }
 
+/** The shop settings the cure model and the reminders follow. */
+type CureSettings = Pick<Shop, 'readingCarryH' | 'windowCloseLeadMin'>;
+
 const today = () => new Date().toISOString().slice(0, 10);
 
 export class Pours {
@@ -74,23 +77,33 @@ export class Pours {
     return rows.map((r) => ({ at: r.taken_at.toISOString(), tempC: r.temp_c }));
   }
 
-  private stateOf(l: Loaded, logged: LoggedBatch[], readings: CureReading[]) {
-    const steps = planSteps(l.result, l.snapshot);
-    const state = cureState(steps, logged.map((b) => ({ step: b.step, mixedAt: b.mixed_at })), readings, l.pour.assumedTempC, this.now());
-    return { state, batchesLogged: logged.length, batchesPlanned: plannedBatches(l.result).length };
+  private async settingsOf(m: EntityManager, shopId: string): Promise<CureSettings> {
+    return m.findOneOrFail(Shop, { where: { id: shopId }, select: { id: true, readingCarryH: true, windowCloseLeadMin: true } });
   }
 
-  private async state(m: EntityManager, l: Loaded) {
+  private async checksOf(m: EntityManager, pourId: string): Promise<ReleaseCheck[]> {
+    const rows: { checked_at: Date; hardness_shore_d: number | null }[] = await m.query('SELECT checked_at, hardness_shore_d FROM cure_checks WHERE pour_id = $1', [pourId]);
+    return rows.map((r) => ({ checkedAt: r.checked_at, hardnessShoreD: r.hardness_shore_d }));
+  }
+
+  private stateOf(l: Loaded, settings: CureSettings, logged: LoggedBatch[], readings: CureReading[], checks: ReleaseCheck[]) {
+    const steps = planSteps(l.result, l.snapshot);
+    const state = cureState(steps, logged.map((b) => ({ step: b.step, mixedAt: b.mixed_at })), readings, l.pour.assumedTempC, this.now(), { readingCarryH: settings.readingCarryH });
+    return { state, release: releaseEvidence(state, checks), batchesLogged: logged.length, batchesPlanned: plannedBatches(l.result).length };
+  }
+
+  private async state(m: EntityManager, l: Loaded, settings?: CureSettings) {
     const logged: LoggedBatch[] = await m.query('SELECT step, mixed_at FROM pour_batches WHERE pour_id = $1', [l.pour.id]);
-    return this.stateOf(l, logged, await this.readingsOf(m, l.pour.id));
+    return this.stateOf(l, settings ?? (await this.settingsOf(m, l.pour.shopId)), logged, await this.readingsOf(m, l.pour.id), await this.checksOf(m, l.pour.id));
   }
 
   /** Recomputes the pour's pending reminders from everything logged so far; called after every change. */
   private async refreshReminders(m: EntityManager, l: Loaded): Promise<void> {
-    const { state } = await this.state(m, l);
+    const settings = await this.settingsOf(m, l.pour.shopId);
+    const { state } = await this.state(m, l, settings);
     const finish = l.pour.machinedAt && l.pour.finishCoats ? { machinedAt: l.pour.machinedAt, coats: l.pour.finishCoats, hoursBetween: l.pour.finishCoatIntervalH ?? 24 } : null;
     const active = l.pour.status === 'open';
-    const wanted = wantedReminders(active ? state : { ...state, step: null, status: null }, l.piece.name, this.now(), finish);
+    const wanted = wantedReminders(active ? state : { ...state, step: null, status: null }, l.piece.name, this.now(), finish, { windowCloseLeadMin: settings.windowCloseLeadMin });
     await syncReminders(m, l.pour.shopId, l.pour.id, wanted);
   }
 
@@ -104,7 +117,7 @@ export class Pours {
     return this.summaryOf(l, state, next);
   }
 
-  private summaryOf(l: Loaded, { state, batchesLogged, batchesPlanned }: ReturnType<Pours['stateOf']>, next: Reminder | null): PourSummary {
+  private summaryOf(l: Loaded, { state, release, batchesLogged, batchesPlanned }: ReturnType<Pours['stateOf']>, next: Reminder | null): PourSummary {
     return {
       id: l.pour.id,
       piece: { id: l.piece.id, name: l.piece.name, stage: l.piece.stage },
@@ -113,7 +126,7 @@ export class Pours {
       startedAt: l.pour.createdAt.toISOString(),
       batchesLogged,
       batchesPlanned,
-      cure: cureView(state),
+      cure: cureView(state, release),
       nextReminder: next ? reminderView(next) : null,
     };
   }
@@ -170,11 +183,16 @@ export class Pours {
       ? await m.getRepository(Reminder).createQueryBuilder('r').distinctOn(['r.pourId']).where('r.pourId IN (:...ids)', { ids }).andWhere(`r.status = 'pending'`).orderBy('r.pourId').addOrderBy('r.dueAt', 'ASC').getMany()
       : [];
     const nextOf = new Map(next.map((r) => [r.pourId, r]));
+    const checks = groupByPour<{ pour_id: string; checked_at: Date; hardness_shore_d: number | null }>(
+      ids.length ? await m.query('SELECT pour_id, checked_at, hardness_shore_d FROM cure_checks WHERE pour_id = ANY($1)', [ids]) : [],
+    );
+    const settings = await this.settingsOf(m, shopId);
     const items = pours.map((pour) => {
       const plan = plans.get(pour.pourPlanId)!;
       const l: Loaded = { pour, plan, piece: pieces.get(pour.pieceId)!, result: plan.result as unknown as CorePourPlan, snapshot: plan.productSnapshot as unknown as PlanSnapshot };
       const log = (readings.get(pour.id) ?? []).map((r) => ({ at: r.taken_at.toISOString(), tempC: r.temp_c }));
-      return this.summaryOf(l, this.stateOf(l, logged.get(pour.id) ?? [], log), nextOf.get(pour.id) ?? null);
+      const pourChecks = (checks.get(pour.id) ?? []).map((c) => ({ checkedAt: c.checked_at, hardnessShoreD: c.hardness_shore_d }));
+      return this.summaryOf(l, this.stateOf(l, settings, logged.get(pour.id) ?? [], log, pourChecks), nextOf.get(pour.id) ?? null);
     });
     return { items, total };
   }
@@ -225,12 +243,14 @@ export class Pours {
         await m.query('UPDATE lots SET remaining_g = GREATEST(0, remaining_g - $2), updated_at = now() WHERE id = $1', [lot.id, grams[part]]);
       }
       const shop = await m.findOneByOrFail(Shop, { id: auth.shopId });
-      const targetRatio = planned.partA.grams / planned.partB.grams;
-      const offRatioPct = ((input.weighedAG / input.weighedBG) / targetRatio - 1) * 100;
+      // The product's own ratio by mass, not the cup's rounded targets: a weighed cup is checked against the chemistry.
+      const product = planned.pour.kind === 'seal_coat' && l.snapshot.sealCoat ? l.snapshot.sealCoat : l.snapshot.deepPour;
+      const targetRatio = massRatioAToB(product.mixRatio, product.densityAGPerMl, product.densityBGPerMl);
+      const offRatioPct = offRatioPctOf(input.weighedAG, input.weighedBG, targetRatio);
       if (Math.abs(offRatioPct) > shop.offRatioTolerancePct) {
         warnings.push({
           code: 'off_ratio',
-          message: `Off ratio: A:B weighed ${(input.weighedAG / input.weighedBG).toFixed(3)} against ${targetRatio.toFixed(3)} planned (${offRatioPct > 0 ? '+' : ''}${offRatioPct.toFixed(1)} %, tolerance ${shop.offRatioTolerancePct} %). An off-ratio cup may never cure: follow the TDS, and do not pour it if in doubt.`,
+          message: `Off ratio: A:B weighed ${(input.weighedAG / input.weighedBG).toFixed(3)} against ${targetRatio.toFixed(3)} for ${product.mixRatio.a}:${product.mixRatio.b} by ${product.mixRatio.basis} (${offRatioPct > 0 ? '+' : ''}${offRatioPct.toFixed(1)} %, tolerance ${shop.offRatioTolerancePct} %). An off-ratio cup may never cure: follow the TDS, and do not pour it if in doubt.`,
         });
       }
       let dew: number | null = null;
@@ -288,9 +308,12 @@ export class Pours {
       const l = await this.load(m, shopId, pourId, true);
       let added = 0;
       for (const r of readings) {
+        // One reader of times for every path (core's), and one stored form: UTC.
+        const at = parseIsoInstant(r.at);
+        if (!at.ok) throw new AppError('bad_request', 'invalid_input', at.error.message, { at: 'not an ISO time with an offset' });
         const res = await m.query(
           `INSERT INTO temperature_readings (shop_id, pour_id, taken_at, temp_c, source) VALUES ($1, $2, $3, $4, $5) ON CONFLICT (pour_id, taken_at) DO NOTHING RETURNING id`,
-          [shopId, pourId, r.at, r.tempC, source],
+          [shopId, pourId, new Date(at.value).toISOString(), r.tempC, source],
         );
         added += (res as unknown[]).length;
       }
@@ -332,17 +355,22 @@ export class Pours {
     await this.ds.transaction(async (m) => {
       const l = await this.load(m, auth.shopId, pourId, true);
       if (l.pour.status !== 'open') throw new AppError('conflict', 'already_released', 'this pour was already released');
-      const { state } = await this.state(m, l);
-      if (!cureView(state).readyToMachine) {
-        const ready = state.status?.stages.find((s) => s.key === 'ready_to_machine');
-        const when = ready?.predictedAt ? ` The logged cure says it will be ready around ${ready.predictedAt}.` : '';
-        throw new AppError('conflict', 'not_ready', `the logged cure history does not say this piece is ready to machine yet${state.isLastStep ? '' : ' (not every layer is poured)'}.${when}`);
+      const { state, release } = await this.state(m, l);
+      if (!release.allowed) {
+        throw new AppError('conflict', 'not_ready', `The log does not show this piece ready to machine yet. ${release.reasons.join(' ')}`);
       }
       await m.update(Pour, { id: pourId }, { status: 'released', releasedAt: this.now(), releasedById: auth.userId });
       await this.setPieceStage(m, l.piece.id, 'released');
       l.pour.status = 'released';
       await this.refreshReminders(m, l);
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'pour.release', objectType: 'pour', objectId: pourId, detail: { equivalentHoursAtRef: state.status?.age.equivalentHoursAtRef, assumedHours: state.status?.age.assumedHours } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: 'pour.release',
+        objectType: 'pour',
+        objectId: pourId,
+        detail: { equivalentHoursAtRef: state.status?.age.equivalentHoursAtRef, loggedEquivalentHours: state.status?.age.loggedEquivalentHours, assumedEquivalentHours: state.status?.age.assumedEquivalentHours },
+      });
     });
     return this.get(auth.shopId, pourId);
   }
@@ -363,7 +391,7 @@ export class Pours {
 
   async today(shopId: string) {
     const rows: (Reminder & { piece_name: string })[] = await this.ds.query(
-      `SELECT r.id, r.kind, r.step, r.due_at, r.status, r.assumed, r.title, r.sent_at, r.pour_id, pc.name AS piece_name
+      `SELECT r.id, r.kind, r.step, r.due_at, r.event_at, r.lead_min, r.status, r.assumed, r.title, r.sent_at, r.pour_id, pc.name AS piece_name
          FROM reminders r JOIN pours p ON p.id = r.pour_id JOIN pieces pc ON pc.id = p.piece_id
         WHERE r.shop_id = $1 AND r.status <> 'cancelled' AND r.due_at < now() + interval '24 hours'
           AND (r.status = 'pending' OR r.sent_at > now() - interval '24 hours')
@@ -373,8 +401,21 @@ export class Pours {
     const open: { n: number }[] = await this.ds.query(`SELECT count(*)::int AS n FROM pours WHERE shop_id = $1 AND status = 'open'`, [shopId]);
     return {
       due: rows.map((r) => {
-        const raw = r as unknown as { id: string; kind: Reminder['kind']; step: string; due_at: Date; status: Reminder['status']; assumed: boolean; title: string; sent_at: Date | null; pour_id: string; piece_name: string };
-        return { id: raw.id, kind: raw.kind, step: raw.step, dueAt: raw.due_at.toISOString(), status: raw.status, assumed: raw.assumed, title: raw.title, sentAt: raw.sent_at?.toISOString() ?? null, pourId: raw.pour_id, pieceName: raw.piece_name };
+        const raw = r as unknown as { id: string; kind: Reminder['kind']; step: string; due_at: Date; event_at: Date; lead_min: number; status: Reminder['status']; assumed: boolean; title: string; sent_at: Date | null; pour_id: string; piece_name: string };
+        return {
+          id: raw.id,
+          kind: raw.kind,
+          step: raw.step,
+          dueAt: raw.due_at.toISOString(),
+          eventAt: raw.event_at.toISOString(),
+          leadMin: raw.lead_min,
+          status: raw.status,
+          assumed: raw.assumed,
+          title: raw.title,
+          sentAt: raw.sent_at?.toISOString() ?? null,
+          pourId: raw.pour_id,
+          pieceName: raw.piece_name,
+        };
       }),
       openPours: open[0]?.n ?? 0,
     };

@@ -67,12 +67,14 @@ describe('pours and the cure log', () => {
 
     const poured2 = iso(24 * hour);
     for (const b of layer2) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: poured2, ...onRatio(b) }).expect(201);
-    await h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).send({ readings: [{ at: poured2, tempC: 10 }, { at: new Date().toISOString(), tempC: 10 }] }).expect(200);
+    const hourly = Array.from({ length: 25 }, (_, i) => ({ at: iso((24 - i) * hour), tempC: 10 }));
+    await h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).send({ readings: hourly }).expect(200);
     pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.maker)).expect(200)).body;
     // ASTM C1074 maturity method: 24 h at 10 °C with Q = 5000 K is 13.14 h at 20 °C.
     expect(pour.cure.step).toBe('layer:2');
     expect(pour.cure.equivalentHoursAtRef).toBeCloseTo(13.14, 1);
     expect(pour.cure.assumedHours).toBeLessThan(0.01);
+    expect(pour.cure.loggedEquivalentHours).toBeCloseTo(13.14, 1);
     const kinds = pour.reminders.filter((r: { status: string }) => r.status === 'pending').map((r: { kind: string }) => r.kind).sort();
     expect(kinds).toEqual(['demold_check', 'ready_to_machine']);
     expect(pour.reminders.filter((r: { kind: string; status: string }) => r.kind.startsWith('next_layer') && r.status === 'pending')).toEqual([]);
@@ -86,7 +88,8 @@ describe('pours and the cure log', () => {
   it('releases a piece only when the logged history says it is ready, then schedules finish coats', async () => {
     const w = await world();
     for (const b of w.batches) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(200 * hour), ...onRatio(b) }).expect(201);
-    await h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).send({ readings: [{ at: iso(200 * hour), tempC: 20 }, { at: iso(1000), tempC: 20 }] }).expect(200);
+    const readings = Array.from({ length: 101 }, (_, i) => ({ at: iso((200 - 2 * i) * hour + 1000), tempC: 20 }));
+    await h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).send({ readings }).expect(200);
     const board = (await h.http().get('/api/pours').query({ readyToday: 'true' }).set(bearer(w.shop.lead)).expect(200)).body;
     expect(board.items.map((p: { id: string }) => p.id)).toContain(w.pour.id);
     const released = (await h.http().post(`/api/pours/${w.pour.id}/release`).set(bearer(w.shop.lead)).expect(200)).body;
@@ -128,5 +131,105 @@ describe('pours and the cure log', () => {
     expect(photo.headers['content-type']).toBe('image/png');
     await h.http().post(`/api/pours/${w.pour.id}/checks`).set(bearer(w.apprentice)).field('stage', 'gelled').attach('photo', Buffer.from('<html><script>alert(1)</script></html>'), 'x.png').expect(422);
     await h.http().post(`/api/pours/${w.pour.id}/checks`).set(bearer(w.apprentice)).field('stage', 'rock hard').expect(400);
+  });
+});
+
+describe('release needs evidence (trade correctness)', () => {
+  it('refuses release on an assumed-only cure, however long ago it was poured, and allows it on a logged one', async () => {
+    const w = await world();
+    for (const b of w.batches) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(400 * hour), ...onRatio(b) }).expect(201);
+    let pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.shop.lead)).expect(200)).body;
+    // 400 h at the plan's 20 °C would be far past the 168 h full cure, but none of it is logged.
+    expect(pour.cure.loggedEquivalentHours).toBe(0);
+    expect(pour.cure.release.allowed).toBe(false);
+    expect(pour.cure.release.reasons.join(' ')).toMatch(/No temperature has been logged/);
+    const refused = await h.http().post(`/api/pours/${w.pour.id}/release`).set(bearer(w.shop.lead)).expect(409);
+    expect(refused.body.error.message).toMatch(/No temperature has been logged/);
+
+    // Readings every 2 h at 20 °C (the reference: one equivalent hour per hour) over the last 200 h.
+    const readings = Array.from({ length: 101 }, (_, i) => ({ at: iso((200 - 2 * i) * hour + 1000), tempC: 20 }));
+    await h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).send({ readings }).expect(200);
+    pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.shop.lead)).expect(200)).body;
+    expect(pour.cure.loggedEquivalentHours).toBeGreaterThan(168);
+    expect(pour.cure.release).toEqual({ allowed: true, reasons: [] });
+    await h.http().post(`/api/pours/${w.pour.id}/release`).set(bearer(w.shop.lead)).expect(200);
+  });
+
+  it('counts the time after a logger stops at the lower of its last reading and the plan, and shows the gap', async () => {
+    const w = await world();
+    for (const b of w.batches) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(90 * hour), ...onRatio(b) }).expect(201);
+    // 12 h logged at 12 °C, then nothing for 78 h; the plan assumed 20 °C.
+    const readings = Array.from({ length: 13 }, (_, i) => ({ at: iso((90 - i) * hour), tempC: 12 }));
+    await h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).send({ readings }).expect(200);
+    const pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.shop.lead)).expect(200)).body;
+    // ASTM C1074 with Q = 5000 K and a 20 °C reference: exp(−5000 (1/285.15 − 1/293.15)) = 0.6199 per hour at 12 °C.
+    const rate12 = Math.exp(-5000 * (1 / 285.15 - 1 / 293.15));
+    expect(pour.cure.equivalentHoursAtRef).toBeCloseTo(90 * rate12, 2);
+    expect(pour.cure.gaps).toHaveLength(1);
+    expect(pour.cure.gaps[0].tempC).toBe(12);
+    expect(pour.cure.gaps[0].hours).toBeCloseTo(76, 1);
+    expect(pour.cure.assumedEquivalentHours).toBeCloseTo(76 * rate12, 1);
+    expect(pour.cure.cautions.map((c: { code: string }) => c.code)).toContain('cure_log_gap');
+  });
+
+  it('needs a cure check at the data sheet\'s Shore D hardness when the product states one', async () => {
+    const w = await world();
+    await h.http().put(`/api/shelf/resin-systems/${w.product.id}`).set(bearer(w.shop.lead)).send({ ...resinInput({ mixRatio: { a: 2, b: 1, basis: 'weight' }, referenceTempC: 20, minWorkTempC: 5, maxLayerMm: 25, activationEnergyKJPerMol: EA_FOR_Q5000 }), hardnessShoreD: 80 }).expect(200);
+    // The plan keeps the products it was made with: a new plan takes the stated hardness.
+    const plan = (
+      await h
+        .http()
+        .post('/api/pour-plans')
+        .set(bearer(w.maker))
+        .send({ pieceId: w.piece.id, name: 'Hard one', cavity: { source: 'shape', shape: { kind: 'rectangle', lengthMm: 100, widthMm: 100, depthMm: 20 } }, fillLevelMm: 20, deepPour: { resinSystemId: w.product.id }, overPourPct: 0, cupWaste: { massG: 0 }, shopTempC: 20 })
+        .expect(201)
+    ).body;
+    const pour = (await h.http().post('/api/pours').set(bearer(w.apprentice)).send({ pourPlanId: plan.id }).expect(201)).body;
+    for (const b of plan.result.layers.flatMap((l: { batches: unknown[] }) => l.batches) as { index: number; partA: { grams: number }; partB: { grams: number } }[]) {
+      await h.http().post(`/api/pours/${pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(200 * hour), ...onRatio(b) }).expect(201);
+    }
+    const readings = Array.from({ length: 101 }, (_, i) => ({ at: iso((200 - 2 * i) * hour + 1000), tempC: 20 }));
+    await h.http().post(`/api/pours/${pour.id}/readings`).set(bearer(w.apprentice)).send({ readings }).expect(200);
+    let view = (await h.http().get(`/api/pours/${pour.id}`).set(bearer(w.shop.lead)).expect(200)).body;
+    expect(view.cure.readyToMachine).toBe(true);
+    expect(view.cure.release.allowed).toBe(false);
+    expect(view.cure.release.reasons.join(' ')).toMatch(/Shore D 80/);
+    await h.http().post(`/api/pours/${pour.id}/checks`).set(bearer(w.apprentice)).field('stage', 'machinable').field('hardnessShoreD', '76').expect(201);
+    view = (await h.http().get(`/api/pours/${pour.id}`).set(bearer(w.shop.lead)).expect(200)).body;
+    expect(view.cure.release.reasons.join(' ')).toMatch(/Shore D 76, under the data sheet's 80/);
+    await h.http().post(`/api/pours/${pour.id}/release`).set(bearer(w.shop.lead)).expect(409);
+    await h.http().post(`/api/pours/${pour.id}/checks`).set(bearer(w.apprentice)).field('stage', 'machinable').field('hardnessShoreD', '81').expect(201);
+    await h.http().post(`/api/pours/${pour.id}/release`).set(bearer(w.shop.lead)).expect(200);
+  });
+
+  it('checks a weighed cup against the product\'s ratio, not against its rounded targets', async () => {
+    const w = await world();
+    const b0 = w.batches[0]!;
+    // A 2:1-by-weight product: 200 g A with 100 g B is exactly on ratio, whatever the cup's rounded targets are.
+    const res = await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b0.index, weighedAG: 200, weighedBG: 100 }).expect(201);
+    expect(res.body.batch.offRatioPct).toBe(0);
+    expect(res.body.warnings).toEqual([]);
+  });
+
+  it('sends a closing-window reminder the shop\'s lead time before the window closes, and says so', async () => {
+    const w = await world();
+    await h.http().patch('/api/shop').set(bearer(w.shop.lead)).send({ windowCloseLeadMin: 45 }).expect(200);
+    const layer1 = w.batches.filter((b) => b.pour.layer === 0);
+    for (const b of layer1) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(hour), ...onRatio(b) }).expect(201);
+    const pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.maker)).expect(200)).body;
+    const closes = pour.reminders.find((r: { kind: string }) => r.kind === 'next_layer_window_closes');
+    expect(closes.leadMin).toBe(45);
+    expect(Date.parse(closes.eventAt) - Date.parse(closes.dueAt)).toBe(45 * 60_000);
+    const opens = pour.reminders.find((r: { kind: string }) => r.kind === 'next_layer_window_opens');
+    expect(opens.leadMin).toBe(0);
+    expect(opens.dueAt).toBe(opens.eventAt);
+  });
+
+  it('reads a CSV log time with a lower-case t as the cure sum does, and stores it in one form', async () => {
+    const w = await world();
+    const res = await h.http().post(`/api/pours/${w.pour.id}/readings/csv`).set(bearer(w.apprentice)).set('Content-Type', 'text/csv').send('time,tempC\n2026-11-01t10:00:00+01:00,21\n').expect(200);
+    expect(res.body.added).toBe(1);
+    const pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.maker)).expect(200)).body;
+    expect(pour.readings.map((r: { at: string }) => r.at)).toEqual(['2026-11-01T09:00:00.000Z']);
   });
 });

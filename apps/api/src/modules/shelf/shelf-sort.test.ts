@@ -71,7 +71,7 @@ beforeAll(async () => {
   other = await createShop(h, 'Neighbour shelf');
   const resins = [];
   for (const name of ['Stillwater Deep 50', 'amber cast', 'Tabletop Clear']) resins.push((await post<ResinSystemView>(shop, '/api/shelf/resin-systems', resinInput({ name }))).id);
-  const pigment = (await post<PigmentView>(shop, '/api/shelf/pigments', { name: 'Teal mica', kind: 'powder', recommendedPct: 1, maxPct: 3, pricePerPack: 9, packSizeG: 25 })).id;
+  const pigment = (await post<PigmentView>(shop, '/api/shelf/pigments', { name: 'Teal mica', kind: 'powder', densityGPerMl: 2.8, recommendedPct: 1, maxPct: 3, pricePerPack: 9, packSizeG: 25 })).id;
   for (let i = 0; i < LOT_COUNT; i++) {
     const part = (['A', 'B', 'pigment'] as const)[i % 3]!;
     const expired = i % 11 === 3;
@@ -192,7 +192,7 @@ describe('products sorted on the server', () => {
     const maker = await createShop(h, 'Products shelf');
     for (let i = 0; i < 12; i++) {
       await post(maker, '/api/shelf/resin-systems', resinInput({ name: `${i % 2 ? 'resin' : 'Resin'} ${String.fromCharCode(97 + ((i * 5) % 12))}`, potLifeMin: 20 + (i % 4) * 10, pricePerKit: 50 + i * 3, kitSizeG: 1000 + (i % 3) * 500 }));
-      await post(maker, '/api/shelf/pigments', { name: `Pigment ${i}`, kind: (['powder', 'paste', 'liquid'] as const)[i % 3], recommendedPct: 1, maxPct: 2 + (i % 5), pricePerPack: 5 + i, packSizeG: 10 + (i % 4) * 15 });
+      await post(maker, '/api/shelf/pigments', { name: `Pigment ${i}`, kind: (['powder', 'paste', 'liquid'] as const)[i % 3], densityGPerMl: 1 + (i % 3), recommendedPct: 1, maxPct: 2 + (i % 5), pricePerPack: 5 + i, packSizeG: 10 + (i % 4) * 15 });
     }
     const list = async <T>(path: string, query: Record<string, string | number>) => (await h.http().get(path).query(query).set(bearer(maker.lead)).expect(200)).body as { items: T[]; total: number };
     const walkProducts = async <T>(path: string, query: Record<string, string>) => {

@@ -7,4 +7,6 @@ export const shopView = (s: ShopRow): Shop => ({
   unitSystem: s.unitSystem,
   scaleResolutionG: s.scaleResolutionG,
   offRatioTolerancePct: s.offRatioTolerancePct,
+  readingCarryH: s.readingCarryH,
+  windowCloseLeadMin: s.windowCloseLeadMin,
 });

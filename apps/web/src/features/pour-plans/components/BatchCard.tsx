@@ -60,6 +60,12 @@ export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG }: Bat
       <p className="text-lg font-semibold">
         pot life {formatMinutes(batch.potLifeMin)} at {formatTemperature(batch.shopTempC, unitSystem).text}
       </p>
+      {batch.offRatioPct !== null ? (
+        <p className="font-semibold text-ember-700">
+          On a {scaleResolutionG} g scale these grams are {batch.offRatioPct > 0 ? '+' : ''}
+          {batch.offRatioPct.toFixed(1)} % off the product&apos;s ratio: weigh on a finer scale if you can.
+        </p>
+      ) : null}
       <p className="flex flex-wrap gap-x-6 gap-y-3 text-base">
         <Blank label="Lot A" />
         <Blank label="Lot B" />

@@ -82,7 +82,10 @@ function TimesFacts({ times, unitSystem }: { times: TimesAtTemperature; unitSyst
   return (
     <>
       {times.belowMinimum ? (
-        <p className="font-semibold text-ember-700">Below this product&apos;s minimum working temperature: these times may never be reached.</p>
+        <p className="font-semibold text-ember-700">
+          Below this product&apos;s minimum working temperature: the cure goes on only slowly, and the data sheet does not promise it finishes.
+          The times below follow the chemistry; warm the shop and the resin before pouring.
+        </p>
       ) : null}
       <Facts
         rows={[
@@ -137,7 +140,7 @@ export function PlanResult({ plan, unitSystem, curve }: PlanResultProps) {
         <CautionList cautions={deepCautions} label="Cautions for the deep-pour product" />
         {plan.deepPour.pigmentName ? (
           <p>
-            Pigment: {plan.deepPour.pigmentName} at {plan.deepPour.pigmentPct} % of the resin mass.
+            Pigment: {plan.deepPour.pigmentName} at {plan.deepPour.pigmentPct} % of part A + part B by mass.
           </p>
         ) : (
           <p>No pigment.</p>

@@ -30,6 +30,8 @@ export interface PourPlannerProps {
   pigments: readonly PigmentView[];
   unitSystem: UnitSystem;
   scaleResolutionG: number;
+  /** The shop's off-ratio tolerance: cups the scale cannot keep within it are cautioned. */
+  offRatioTolerancePct: number;
   submitLabel: string;
   busy: boolean;
   save: (input: SavedPlanInput) => Promise<unknown>;
@@ -52,7 +54,7 @@ function cupWasteUnits(unitSystem: UnitSystem) {
 }
 
 /** The maker's pour planner: inputs on one side, the plan they make on the other, recomputed as they type. */
-export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, unitSystem, scaleResolutionG, submitLabel, busy, save }: PourPlannerProps) {
+export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, unitSystem, scaleResolutionG, offRatioTolerancePct, submitLabel, busy, save }: PourPlannerProps) {
   const [formError, setFormError] = useState<string | null>(null);
   // The form is filled once, in the units of the shop as it was then; what it started from lets untouched values go back unchanged.
   const [units] = useState<PlannerUnits>(() => ({ unitSystem, origin: initialValues }));
@@ -62,7 +64,7 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
   });
   const { errors } = form.formState;
   const values = useWatch({ control: form.control }) as PlannerValues;
-  const live = useLivePlan({ values, pieceId, units, resinSystems, pigments, scaleResolutionG });
+  const live = useLivePlan({ values, pieceId, units, resinSystems, pigments, scaleResolutionG, offRatioTolerancePct });
   const unit = shownUnitNames(units.unitSystem);
   const molds = usePieceMolds(pieceId);
   const chosenMold = useMold(values.cavity?.source === 'mold' && values.cavity.moldId ? values.cavity.moldId : null);
@@ -192,7 +194,7 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
             </Field>
             {chosenPigment ? (
               <Field
-                label="Pigment (% of resin mass)"
+                label="Pigment (% of part A + part B by mass)"
                 hint={`Recommended ${chosenPigment.recommendedPct} %, at most ${chosenPigment.maxPct} %.`}
                 error={errors.deepPour?.pigmentPct?.message}
                 required

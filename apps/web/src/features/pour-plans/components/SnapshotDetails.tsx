@@ -42,7 +42,7 @@ export function SnapshotDetails({ snapshot, unitSystem }: { snapshot: PlanSnapsh
         <div className="rounded-lg bg-paper p-3">
           <h3 className="font-bold text-walnut-900">Pigment: {snapshot.pigment.name}</h3>
           <p className="mt-2 text-sm">
-            Recommended {snapshot.pigment.recommendedPct} %, at most {snapshot.pigment.maxPct} % of the resin mass.
+            Recommended {snapshot.pigment.recommendedPct} %, at most {snapshot.pigment.maxPct} % of part A + part B by mass.
           </p>
         </div>
       ) : null}

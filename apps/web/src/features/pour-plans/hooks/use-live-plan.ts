@@ -33,10 +33,11 @@ export interface UseLivePlanInput {
   resinSystems: readonly ResinSystemView[];
   pigments: readonly PigmentView[];
   scaleResolutionG: number;
+  offRatioTolerancePct: number;
 }
 
 /** The plan for the form as it stands, computed in the browser with core once the typing settles. */
-export function useLivePlan({ values, pieceId, units, resinSystems, pigments, scaleResolutionG }: UseLivePlanInput): LivePlanState {
+export function useLivePlan({ values, pieceId, units, resinSystems, pigments, scaleResolutionG, offRatioTolerancePct }: UseLivePlanInput): LivePlanState {
   const key = valuesKey(values);
   const settled = useDebouncedValue(values, key, settleMs);
   const settledKey = valuesKey(settled);
@@ -59,8 +60,8 @@ export function useLivePlan({ values, pieceId, units, resinSystems, pigments, sc
   }, [fill.data, layers.data, levelMm, levelsMm, moldRequest?.dam]);
 
   const result = useMemo(
-    () => (check.ok ? livePourPlan(check.input, { resinSystems, pigments, scaleResolutionG, moldFacts }) : null),
-    [check, resinSystems, pigments, scaleResolutionG, moldFacts],
+    () => (check.ok ? livePourPlan(check.input, { resinSystems, pigments, scaleResolutionG, offRatioTolerancePct, moldFacts }) : null),
+    [check, resinSystems, pigments, scaleResolutionG, offRatioTolerancePct, moldFacts],
   );
 
   return {

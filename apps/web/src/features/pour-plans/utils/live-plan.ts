@@ -38,6 +38,7 @@ export function coreResinSystemOf(view: ResinSystemView): ResinSystem {
     maxLayerMm: view.maxLayerMm,
     maxBatchG: view.maxBatchG,
     ...(view.activationEnergyKJPerMol === null ? {} : { activationEnergyKJPerMol: view.activationEnergyKJPerMol }),
+    ...(view.hardnessShoreD === null ? {} : { hardnessShoreD: view.hardnessShoreD }),
     pricePerKit: view.pricePerKit,
     kitSizeG: view.kitSizeG,
     shelfLifeMonths: view.shelfLifeMonths,
@@ -45,7 +46,7 @@ export function coreResinSystemOf(view: ResinSystemView): ResinSystem {
 }
 
 export function corePigmentOf(view: PigmentView): Pigment {
-  return { name: view.name, kind: view.kind, recommendedPct: view.recommendedPct, maxPct: view.maxPct, price: { pricePerPack: view.pricePerPack, packSizeG: view.packSizeG } };
+  return { name: view.name, kind: view.kind, densityGPerMl: view.densityGPerMl, recommendedPct: view.recommendedPct, maxPct: view.maxPct, price: { pricePerPack: view.pricePerPack, packSizeG: view.packSizeG } };
 }
 
 /**
@@ -75,6 +76,8 @@ export interface LivePlanSources {
   resinSystems: readonly ResinSystemView[];
   pigments: readonly PigmentView[];
   scaleResolutionG: number;
+  /** The shop's off-ratio tolerance (its default when not given). */
+  offRatioTolerancePct?: number;
   /** The mould report's curve with its fill at the chosen level; only for plans cast in a mould. */
   moldFacts?: MoldFillFacts | null;
 }
@@ -120,6 +123,7 @@ export function livePourPlan(input: SavedPlanInput, sources: LivePlanSources): R
     overPourPct: input.overPourPct,
     cupWaste: input.cupWaste,
     scaleResolutionG: sources.scaleResolutionG === 1 ? 1 : 0.1,
+    ...(sources.offRatioTolerancePct === undefined ? {} : { offRatioTolerancePct: sources.offRatioTolerancePct }),
     shopTempC: input.shopTempC,
     ...(input.shopAir ? { shopAir: input.shopAir } : {}),
     ...(input.wood ? { wood: input.wood } : {}),

@@ -21,6 +21,8 @@ export interface RunSheetBatch {
   /** Pot life at the shop temperature the plan was made for. */
   potLifeMin: number;
   shopTempC: number;
+  /** How far the shown grams are from the product's ratio, in percent, when more than the shop allows; else null. */
+  offRatioPct: number | null;
 }
 
 interface Pour {
@@ -69,6 +71,7 @@ export function runSheetBatches(plan: PourPlan, snapshot: PlanSnapshot): RunShee
         totalG: batch.totalGrams,
         potLifeMin: pour.potLifeMin,
         shopTempC: pour.shopTempC,
+        offRatioPct: Math.abs(batch.ratioErrorPct) > plan.resolution.offRatioTolerancePct ? batch.ratioErrorPct : null,
       },
     })),
   );

@@ -18,6 +18,9 @@ const PlannedBatch = z.object({
   index: z.number().int(),
   pour: z.discriminatedUnion('kind', [z.object({ kind: z.literal('seal_coat'), coat: z.number().int() }), z.object({ kind: z.literal('layer'), layer: z.number().int() })]),
   cost: CostTotals,
+  // Plans saved before cups were rounded on ratio carry neither figure.
+  ratioErrorPct: z.number().default(0),
+  pigmentMl: z.number().default(0),
 });
 
 const Times: z.ZodType<TimesAtTemperature> = z.object({
@@ -46,7 +49,7 @@ export const SavedPourPlan: z.ZodType<PourPlan> = z.object({
     overPour: z.object({ label: z.string(), pct: z.number(), volumeMl: z.number() }),
     cupWaste: z.object({ label: z.string(), perBatch: CupWaste, batches: z.number().int(), resinG: z.number() }),
   }),
-  resolution: z.object({ grams: z.union([z.literal(0.1), z.literal(1)]), ml: z.number(), cost: z.number() }),
+  resolution: z.object({ grams: z.union([z.literal(0.1), z.literal(1)]), ml: z.number(), cost: z.number(), offRatioTolerancePct: z.number().default(3) }),
   fill: z.object({ fillLevelMm: z.number(), fillVolumeMl: z.number(), pourVolumeMl: z.number(), layerCount: z.number().int(), layerThicknessMm: z.number(), deepestResinMm: z.number() }),
   sealCoat: z
     .object({

@@ -1,4 +1,5 @@
 import type { BatchView, Shop } from '@gelpoint/contracts';
+import { formatTemperature, potLifeMinAt } from '@gelpoint/core';
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { cx } from '../../../lib/cx';
@@ -15,6 +16,8 @@ export interface BatchCardProps {
   of: number;
   logged: BatchView | undefined;
   shop: Shop;
+  /** The plan's shop temperature: the pot life is the one the plan and the printed run sheet show. */
+  shopTempC: number;
   /** Whether batches can still be logged (the pour is open). */
   open: boolean;
   /** The next cup to mix gets a stronger frame. */
@@ -22,7 +25,7 @@ export interface BatchCardProps {
 }
 
 /** One cup of the run sheet: its targets, its pot-life clock and its log. */
-export function BatchCard({ pourId, cup, of, logged, shop, open, isNext }: BatchCardProps) {
+export function BatchCard({ pourId, cup, of, logged, shop, shopTempC, open, isNext }: BatchCardProps) {
   const headingId = useId();
   const [logging, setLogging] = useState(false);
   const mixing = useMixingStart(pourId, cup.index);
@@ -66,7 +69,8 @@ export function BatchCard({ pourId, cup, of, logged, shop, open, isNext }: Batch
 
       {open && (!logged || mixing.startedAtMs !== null) ? (
         <PotLifeClock
-          potLifeMin={cup.product.potLifeMin}
+          potLifeMin={potLifeMinAt(cup.product, shopTempC)}
+          basis={`at ${formatTemperature(shopTempC, shop.unitSystem).text}, the plan's shop temperature`}
           startedAtMs={mixing.startedAtMs}
           cupName={`cup ${cup.order}`}
           onStart={() => {

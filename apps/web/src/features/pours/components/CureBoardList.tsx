@@ -1,9 +1,10 @@
 import type { PourSummary, Role } from '@gelpoint/contracts';
 import { TextLink } from '../../../components/ui/TextLink';
 import { paths } from '../../../config/paths';
-import { assumedSpan, nextEvent } from '../utils/cure-progress';
+import { nextEvent } from '../utils/cure-progress';
 import { pourStatusWords, stageAheadWords, stageReachedWords, stepWords } from '../utils/cure-words';
 import { mayRelease } from '../utils/pour-permissions';
+import { CureEvidence } from './CureEvidence';
 import { CureProgressBar } from './CureProgressBar';
 import { CureStageIcon } from './CureStageIcon';
 import { RelativeTime } from './RelativeTime';
@@ -41,10 +42,8 @@ export function CureBoardList({ pours, role }: { pours: readonly PourSummary[]; 
                 {next.source === 'reminder' && next.assumed ? <span className="text-ink-soft"> (assumed temperature)</span> : null}
               </p>
             ) : null}
-            {assumedSpan(pour.cure.assumedHours) ? (
-              <p className="text-sm text-ink-soft">{assumedSpan(pour.cure.assumedHours)} without readings count at the plan’s assumed temperature.</p>
-            ) : null}
-            {pour.cure.readyToMachine && pour.status === 'open' ? (
+            <CureEvidence cure={pour.cure} open={pour.status === 'open'} />
+            {pour.cure.release.allowed && pour.status === 'open' ? (
               mayRelease(role) ? (
                 <div>
                   <ReleaseButton pourId={pour.id} pieceName={pour.piece.name} />

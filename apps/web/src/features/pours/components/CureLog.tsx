@@ -9,6 +9,7 @@ import { AddReadingForm } from './AddReadingForm';
 import { CureCautions } from './CureCautions';
 import { CureCheckForm } from './CureCheckForm';
 import { CureChecksList } from './CureChecksList';
+import { CureEvidence } from './CureEvidence';
 import { CureProgressBar } from './CureProgressBar';
 import { CureStageIcon } from './CureStageIcon';
 import { CureStagesList } from './CureStagesList';
@@ -26,6 +27,7 @@ export function CureLog({ pour, sheet, shop }: { pour: PourView; sheet: RunSheet
     pouredAt: cure.pouredAt,
     asOf: new Date(now).toISOString(),
     assumedTempC: pour.assumedTempC,
+    readingCarryH: shop.readingCarryH,
     product,
     unitSystem: shop.unitSystem,
   });
@@ -48,6 +50,7 @@ export function CureLog({ pour, sheet, shop }: { pour: PourView; sheet: RunSheet
             {cure.nextLayerWindow && moreToPour ? ` ${nextLayerWindowWords[cure.nextLayerWindow]}.` : ''}
           </p>
           <CureProgressBar cure={cure} label="Cure progress" showMarkers />
+          <CureEvidence cure={cure} open={pour.status === 'open'} />
           <CureCautions cautions={cure.cautions} />
           <CureStagesList cure={cure} />
         </div>

@@ -1,4 +1,5 @@
 import type { Shop } from '@gelpoint/contracts';
+import { massRatioAToB } from '@gelpoint/core';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
@@ -148,8 +149,7 @@ export function LogBatchForm({ pourId, cup, shop, mixingStartedAtMs, onLogged, o
       <LiveMixWarnings
         weighedAG={live.weighedAG}
         weighedBG={live.weighedBG}
-        targetAG={cup.targetAG}
-        targetBG={cup.targetBG}
+        massRatioAToB={massRatioAToB(cup.product.mixRatio, cup.product.densityAGPerMl, cup.product.densityBGPerMl)}
         ambientTempC={live.ambientTempC}
         surfaceTempC={live.surfaceTempC}
         rhPct={live.rhPct}

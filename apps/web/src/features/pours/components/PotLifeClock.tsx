@@ -5,6 +5,8 @@ import { potLifeState } from '../utils/pot-life';
 
 export interface PotLifeClockProps {
   potLifeMin: number;
+  /** What the pot life was worked out for, in words ("at 21.0 °C, the plan's shop temperature"). */
+  basis: string;
   startedAtMs: number | null;
   onStart: () => void;
   onReset: () => void;
@@ -19,14 +21,16 @@ const phaseClasses = {
 } as const;
 
 /** The pot life of one cup, counted down from the tap on "Start mixing", in digits big enough to read from the bench. */
-export function PotLifeClock({ potLifeMin, startedAtMs, onStart, onReset, cupName }: PotLifeClockProps) {
+export function PotLifeClock({ potLifeMin, basis, startedAtMs, onStart, onReset, cupName }: PotLifeClockProps) {
   if (startedAtMs === null) {
     return (
       <div className="flex flex-wrap items-center gap-3">
         <Button className="min-h-12! px-5 text-lg" onClick={onStart}>
           Start mixing
         </Button>
-        <p className="text-ink-soft">Pot life {potLifeMin} min from the moment A and B meet (data sheet).</p>
+        <p className="text-ink-soft">
+          Pot life {Math.round(potLifeMin)} min from the moment A and B meet ({basis}).
+        </p>
       </div>
     );
   }

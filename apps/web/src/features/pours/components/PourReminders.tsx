@@ -2,8 +2,6 @@ import type { ReminderView } from '@gelpoint/contracts';
 import { cx } from '../../../lib/cx';
 import { RelativeTime } from './RelativeTime';
 
-const statusWords = { pending: 'due', sent: 'sent', cancelled: 'cancelled' } as const;
-
 /** The pour's reminders, soonest first; cancelled ones are left out. */
 export function PourReminders({ reminders }: { reminders: readonly ReminderView[] }) {
   const shown = reminders.filter((r) => r.status !== 'cancelled').sort((p, q) => Date.parse(p.dueAt) - Date.parse(q.dueAt));
@@ -14,7 +12,19 @@ export function PourReminders({ reminders }: { reminders: readonly ReminderView[
         <li key={reminder.id} className={cx('flex flex-wrap items-baseline gap-x-3 rounded-lg px-3 py-2', reminder.status === 'sent' ? 'bg-paper text-ink-soft' : 'bg-resin-50')}>
           <span className="font-semibold text-ink">{reminder.title}</span>
           <span>
-            {statusWords[reminder.status]} <RelativeTime iso={reminder.dueAt} />
+            {reminder.status === 'sent' ? (
+              <>
+                sent <RelativeTime iso={reminder.sentAt ?? reminder.dueAt} />
+              </>
+            ) : reminder.leadMin > 0 ? (
+              <>
+                closes <RelativeTime iso={reminder.eventAt} />; the reminder goes out {reminder.leadMin} min before
+              </>
+            ) : (
+              <>
+                due <RelativeTime iso={reminder.dueAt} />
+              </>
+            )}
           </span>
           {reminder.assumed ? <span className="text-sm text-ink-soft">(time rests on the assumed temperature)</span> : null}
         </li>

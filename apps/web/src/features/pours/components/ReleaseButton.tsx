@@ -27,8 +27,9 @@ export function ReleaseButton({ pourId, pieceName }: { pourId: string; pieceName
         }}
         onConfirm={() => release.mutate(pourId)}
       >
-        The logged temperatures say the resin is hard enough. Once released, the piece shows as ready for the machine, and the shop is told.
-        Check a test spot first if anything about this pour was unusual.
+        The logged cure has reached the data sheet’s point{' '}
+        (gaps in the log counted at the lower temperature). Once released, the piece shows as ready for the machine. Check a test spot first if
+        anything about this pour was unusual.
       </ConfirmDialog>
     </>
   );

@@ -18,7 +18,17 @@ export function RunSheet({ pour, sheet, shop }: { pour: PourView; sheet: RunShee
         {next && open ? ` Next: cup ${next.order}, ${next.pourLabel.toLowerCase()}.` : ''}
       </p>
       {sheet.cups.map((cup) => (
-        <BatchCard key={cup.index} pourId={pour.id} cup={cup} of={sheet.cups.length} logged={loggedByIndex.get(cup.index)} shop={shop} open={open} isNext={open && next?.index === cup.index} />
+        <BatchCard
+          key={cup.index}
+          pourId={pour.id}
+          cup={cup}
+          of={sheet.cups.length}
+          logged={loggedByIndex.get(cup.index)}
+          shop={shop}
+          shopTempC={pour.assumedTempC}
+          open={open}
+          isNext={open && next?.index === cup.index}
+        />
       ))}
       <Alert tone="info" live="none" title="After pouring">
         <ul className="flex list-disc flex-col gap-1 pl-5">

@@ -3,15 +3,16 @@ import { formatDateTime } from '../../../lib/format';
 import type { TemperaturePlot } from '../utils/temperature-plot';
 
 /**
- * Logged temperatures over time, each held until the next reading as the cure sum counts it; stretches without
- * readings are dashed and labelled "assumed", and the product's minimum working temperature is a line of its own.
+ * Logged temperatures over time, as the cure sum counts them: straight between readings, a reading held for a
+ * short while around it, and dashed, shaded stretches where no reading is near (a gap in the log, or nothing logged
+ * yet) at the temperature they were counted at. The product's minimum working temperature is a line of its own.
  */
 export function TemperaturePlotView({ plot, minimumLabel }: { plot: TemperaturePlot; minimumLabel: string }) {
   const titleId = useId();
   const descId = useId();
   const { frame } = plot;
-  const readingSpans = plot.spans.filter((s) => s.source === 'reading');
-  const assumedSpans = plot.spans.filter((s) => s.source === 'assumed');
+  const readingSpans = plot.spans.filter((s) => s.source === 'logged' || s.source === 'carried');
+  const assumedSpans = plot.spans.filter((s) => s.source === 'gap' || s.source === 'assumed');
   const from = new Date(plot.fromMs).toISOString();
   const to = new Date(plot.toMs).toISOString();
   const t = (v: number) => `${v.toFixed(0)} ${plot.unit}`;
@@ -26,7 +27,7 @@ export function TemperaturePlotView({ plot, minimumLabel }: { plot: TemperatureP
       >
         <title id={titleId}>Temperature log</title>
         <desc id={descId}>
-          {`${plot.dots.length} readings from ${formatDateTime(from)} to ${formatDateTime(to)}; ${assumedSpans.length} stretches assumed; minimum working temperature ${t(plot.minimum.temp)}.`}
+          {`${plot.dots.length} readings from ${formatDateTime(from)} to ${formatDateTime(to)}; ${plot.spans.filter((s) => s.source === 'gap').length} gaps in the log; ${plot.spans.filter((s) => s.source === 'assumed').length} stretches with nothing logged; minimum working temperature ${t(plot.minimum.temp)}.`}
         </desc>
         {plot.yTicks.map((tick) => (
           <g key={tick.value}>
@@ -43,23 +44,17 @@ export function TemperaturePlotView({ plot, minimumLabel }: { plot: TemperatureP
         {assumedSpans.map((span) => (
           <g key={`a-${span.from}`}>
             <rect x={span.x1} y={frame.top} width={Math.max(0, span.x2 - span.x1)} height={frame.height - frame.top - frame.bottom} className="fill-paper-deep" opacity={0.7} />
-            <line x1={span.x1} x2={span.x2} y1={span.y} y2={span.y} className="stroke-walnut-500" strokeWidth={3} strokeDasharray="8 6" />
+            <line x1={span.x1} x2={span.x2} y1={span.y1} y2={span.y2} className="stroke-walnut-500" strokeWidth={3} strokeDasharray="8 6" />
             {span.x2 - span.x1 > 48 ? (
-              <text x={(span.x1 + span.x2) / 2} y={span.y - 7} textAnchor="middle" className="fill-walnut-700 text-[11px] font-semibold">
-                assumed
+              <text x={(span.x1 + span.x2) / 2} y={span.y1 - 7} textAnchor="middle" className="fill-walnut-700 text-[11px] font-semibold">
+                {span.source === 'gap' ? 'gap in the log' : 'nothing logged'}
               </text>
             ) : null}
           </g>
         ))}
-        {readingSpans.map((span, i) => {
-          const next = readingSpans[i + 1];
-          return (
-            <g key={`r-${span.from}`}>
-              <line x1={span.x1} x2={span.x2} y1={span.y} y2={span.y} className={span.stalled ? 'stroke-ember-600' : 'stroke-resin-600'} strokeWidth={3} />
-              {next && Math.abs(next.x1 - span.x2) < 0.5 ? <line x1={span.x2} x2={span.x2} y1={span.y} y2={next.y} className="stroke-resin-600" strokeWidth={1.5} /> : null}
-            </g>
-          );
-        })}
+        {readingSpans.map((span) => (
+          <line key={`r-${span.from}`} x1={span.x1} x2={span.x2} y1={span.y1} y2={span.y2} className={span.belowMinimum ? 'stroke-ember-600' : 'stroke-resin-600'} strokeWidth={3} />
+        ))}
         {plot.pouredX !== null ? (
           <g>
             <line x1={plot.pouredX} x2={plot.pouredX} y1={frame.top} y2={frame.height - frame.bottom} className="stroke-walnut-800" strokeWidth={1.5} />
@@ -88,13 +83,13 @@ export function TemperaturePlotView({ plot, minimumLabel }: { plot: TemperatureP
           <svg aria-hidden="true" viewBox="0 0 24 8" className="h-2 w-6">
             <line x1="0" x2="24" y1="4" y2="4" className="stroke-resin-600" strokeWidth="3" />
           </svg>
-          logged, held until the next reading
+          logged: straight between readings
         </span>
         <span className="flex items-center gap-1.5">
           <svg aria-hidden="true" viewBox="0 0 24 8" className="h-2 w-6">
             <line x1="0" x2="24" y1="4" y2="4" className="stroke-walnut-500" strokeWidth="3" strokeDasharray="6 4" />
           </svg>
-          assumed (no reading)
+          no reading near: counted at the lower temperature
         </span>
         <span className="flex items-center gap-1.5">
           <svg aria-hidden="true" viewBox="0 0 24 8" className="h-2 w-6">

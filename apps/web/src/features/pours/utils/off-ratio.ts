@@ -1,30 +1,25 @@
-export interface PartMasses {
-  partAG: number;
-  partBG: number;
-}
+import { offRatioPct } from '@gelpoint/core';
 
 export interface OffRatio {
-  /** How far the weighed A:B is from the target A:B, in percent (0 = on ratio). */
+  /** How far the weighed A:B is from the product's A:B by mass, in percent (0 = on ratio). */
   pct: number;
   /** True when pct is beyond the shop's tolerance. */
   beyondTolerance: boolean;
 }
 
 /**
- * |(weighed A ÷ weighed B) ÷ (target A ÷ target B) − 1| × 100 — common practice for judging a weighed cup against
- * its run sheet. Only a guide while typing: the server's answer when the batch is logged is the one that counts.
- * Null until both weighed parts are above zero.
+ * A weighed cup against the product's own ratio by mass (core's offRatioPct), while typing: the
+ * server's answer when the batch is logged is the one that counts. Null until both parts are above zero.
  */
-export function offRatio(weighed: PartMasses, target: PartMasses, tolerancePct: number): OffRatio | null {
+export function offRatio(weighed: { partAG: number; partBG: number }, massRatioAToB: number, tolerancePct: number): OffRatio | null {
   const { partAG, partBG } = weighed;
-  if (!(partAG > 0) || !(partBG > 0) || !(target.partAG > 0) || !(target.partBG > 0)) return null;
-  if (!Number.isFinite(partAG) || !Number.isFinite(partBG)) return null;
-  const pct = Math.abs(partAG / partBG / (target.partAG / target.partBG) - 1) * 100;
+  if (!(partAG > 0) || !(partBG > 0) || !Number.isFinite(partAG) || !Number.isFinite(partBG) || !(massRatioAToB > 0)) return null;
+  const pct = Math.abs(offRatioPct(partAG, partBG, massRatioAToB));
   return { pct, beyondTolerance: pct > tolerancePct };
 }
 
-/** The weighed part B that would put a cup back on ratio once part A is in, for the warning's advice. */
-export function partBForRatio(weighedAG: number, target: PartMasses): number | null {
-  if (!(weighedAG > 0) || !(target.partAG > 0) || !(target.partBG > 0)) return null;
-  return (weighedAG * target.partBG) / target.partAG;
+/** The part B that would put a cup back on the product's ratio once part A is in, for the warning's advice. */
+export function partBForRatio(weighedAG: number, massRatioAToB: number): number | null {
+  if (!(weighedAG > 0) || !(massRatioAToB > 0)) return null;
+  return weighedAG / massRatioAToB;
 }

@@ -27,6 +27,9 @@ const StoredResult = z.object({
 const StoredProduct = z.looseObject({
   id: z.string(),
   name: z.string(),
+  mixRatio: z.object({ a: z.number(), b: z.number(), basis: z.enum(['weight', 'volume']) }),
+  densityAGPerMl: z.number(),
+  densityBGPerMl: z.number(),
   potLifeMin: z.number(),
   maxBatchG: z.number(),
   minWorkTempC: z.number(),

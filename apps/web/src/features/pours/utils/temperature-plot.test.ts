@@ -7,38 +7,43 @@ const product = { referenceTempC: 22, minWorkTempC: 16 };
 // Coordinates are the affine map of SVG user space, worked by hand:
 // x = left + (t − t0)/(t1 − t0)·(width − left − right), y = top + (high − T)/(high − low)·(height − top − bottom).
 describe('temperaturePlot', () => {
-  it('holds each reading until the next and marks the unlogged stretch after the last as assumed', () => {
+  it('draws straight lines between close readings, then the last reading carried and a gap at the lower temperature', () => {
     const plot = temperaturePlot({
       readings: [
         { at: '2026-03-01T00:00:00Z', tempC: 20 },
-        { at: '2026-03-01T06:00:00Z', tempC: 14 },
+        { at: '2026-03-01T03:00:00Z', tempC: 14 },
       ],
       pouredAt: '2026-03-01T00:00:00Z',
       asOf: '2026-03-01T12:00:00Z',
       assumedTempC: 21,
+      readingCarryH: 2,
       product,
       unitSystem: 'metric',
       frame,
     });
     expect(plot).not.toBeNull();
     const p = plot!;
-    // Temperatures 14, 20, 21 and the 16 °C minimum on 5 °C steps: 10 to 25 °C.
-    expect(p.yTicks.map((t) => t.value)).toEqual([10, 15, 20, 25]);
-    expect(p.spans.map((s) => s.source)).toEqual(['reading', 'assumed']);
-    const [logged, assumed] = p.spans;
+    // Temperatures 14, 20 and the 16 °C minimum on 5 °C steps: 10 to 20 °C.
+    expect(p.yTicks.map((t) => t.value)).toEqual([10, 15, 20]);
+    expect(p.spans.map((s) => s.source)).toEqual(['logged', 'carried', 'gap']);
+    const [logged, carried, gap] = p.spans;
     expect(logged!.x1).toBeCloseTo(40, 9);
-    // 6 h of 12 h across 540 units: 40 + 270.
-    expect(logged!.x2).toBeCloseTo(310, 9);
-    // 20 °C on 10..25 over 200 units: 20 + (25 − 20)/15·200.
-    expect(logged!.y).toBeCloseTo(20 + (5 / 15) * 200, 9);
-    expect(assumed!.temp).toBe(21);
-    expect(assumed!.x2).toBeCloseTo(580, 9);
-    // 16 °C: 20 + 9/15·200.
-    expect(p.minimum.y).toBeCloseTo(20 + (9 / 15) * 200, 9);
+    // 3 h of 12 h across 540 units: 40 + 135.
+    expect(logged!.x2).toBeCloseTo(175, 9);
+    // 20 °C on 10..20 over 200 units: the top, 20; 14 °C: 20 + 6/10·200.
+    expect(logged!.y1).toBeCloseTo(20, 9);
+    expect(logged!.y2).toBeCloseTo(20 + (6 / 10) * 200, 9);
+    expect(logged!.temp).toBe(17);
+    // 14 °C carried 2 h (to 05:00: 40 + 5/12·540), then the gap at min(14, 21) = 14 °C to the right edge.
+    expect(carried!.x2).toBeCloseTo(40 + (5 / 12) * 540, 9);
+    expect(gap!.temp).toBe(14);
+    expect(gap!.x2).toBeCloseTo(580, 9);
+    // 16 °C: 20 + 4/10·200.
+    expect(p.minimum.y).toBeCloseTo(20 + (4 / 10) * 200, 9);
     expect(p.dots).toHaveLength(2);
   });
 
-  it('marks a span below the minimum as stalled', () => {
+  it('marks a span below the minimum', () => {
     const plot = temperaturePlot({
       readings: [
         { at: '2026-03-01T00:00:00Z', tempC: 12 },
@@ -47,12 +52,14 @@ describe('temperaturePlot', () => {
       pouredAt: '2026-03-01T00:00:00Z',
       asOf: '2026-03-01T04:00:00Z',
       assumedTempC: 20,
+      readingCarryH: 2,
       product,
       unitSystem: 'metric',
       frame,
     });
+    // One logged interval at the average (12 + 18)/2 = 15 °C, under the 16 °C minimum.
     expect(plot?.spans).toHaveLength(1);
-    expect(plot?.spans[0]?.stalled).toBe(true);
+    expect(plot?.spans[0]?.belowMinimum).toBe(true);
   });
 
   it('plots a US shop in °F on 10 °F steps', () => {
@@ -62,6 +69,7 @@ describe('temperaturePlot', () => {
       pouredAt: '2026-03-01T00:00:00Z',
       asOf: '2026-03-01T02:00:00Z',
       assumedTempC: 20,
+      readingCarryH: 2,
       product,
       unitSystem: 'us',
       frame,
@@ -73,7 +81,7 @@ describe('temperaturePlot', () => {
   });
 
   it('draws the assumed temperature alone before any reading is logged', () => {
-    const plot = temperaturePlot({ readings: [], pouredAt: '2026-03-01T00:00:00Z', asOf: '2026-03-01T03:00:00Z', assumedTempC: 19, product, unitSystem: 'metric', frame });
+    const plot = temperaturePlot({ readings: [], pouredAt: '2026-03-01T00:00:00Z', asOf: '2026-03-01T03:00:00Z', assumedTempC: 19, readingCarryH: 2, product, unitSystem: 'metric', frame });
     expect(plot?.spans.map((s) => s.source)).toEqual(['assumed']);
     expect(plot?.dots).toEqual([]);
   });
@@ -87,6 +95,7 @@ describe('temperaturePlot', () => {
       pouredAt: '2026-03-01T06:00:00Z',
       asOf: '2026-03-01T05:59:30Z',
       assumedTempC: 19,
+      readingCarryH: 2,
       product,
       unitSystem: 'metric',
       frame,
@@ -99,6 +108,6 @@ describe('temperaturePlot', () => {
   });
 
   it('has nothing to plot with neither readings nor a pour', () => {
-    expect(temperaturePlot({ readings: [], pouredAt: null, asOf: '2026-03-01T03:00:00Z', assumedTempC: 19, product, unitSystem: 'metric', frame })).toBeNull();
+    expect(temperaturePlot({ readings: [], pouredAt: null, asOf: '2026-03-01T03:00:00Z', assumedTempC: 19, readingCarryH: 2, product, unitSystem: 'metric', frame })).toBeNull();
   });
 });

@@ -1,4 +1,4 @@
-import { activationEnergyOf, equivalentAge, parseIsoInstant, type CureReading, type UnitSystem } from '@gelpoint/core';
+import { activationEnergyOf, equivalentAge, parseIsoInstant, type CureReading, type CureSpanSource, type UnitSystem } from '@gelpoint/core';
 import { hourMs } from './relative-time';
 import { temperatureFromC } from './shop-units';
 
@@ -14,15 +14,18 @@ export interface PlotFrame {
 export const defaultPlotFrame: PlotFrame = { width: 640, height: 240, left: 48, right: 16, top: 16, bottom: 36 };
 
 export interface PlotSpan {
-  source: 'reading' | 'assumed';
-  /** Below the product's minimum: counted in time, adds nothing to the cure. */
-  stalled: boolean;
+  /** logged: a straight line between two readings; carried: one reading held; gap / assumed: no reading near. */
+  source: CureSpanSource;
+  /** Below the product's minimum: counted slowly, and not promised by the data sheet. */
+  belowMinimum: boolean;
   from: string;
   to: string;
   x1: number;
   x2: number;
-  y: number;
-  /** The temperature held over the span, in the shop's unit. */
+  /** Heights at the span's two ends (equal unless the span is logged). */
+  y1: number;
+  y2: number;
+  /** The temperature the cure sum counts for the span, in the shop's unit. */
   temp: number;
 }
 
@@ -45,6 +48,8 @@ export interface TemperaturePlotInput {
   pouredAt: string | null;
   asOf: string;
   assumedTempC: number;
+  /** How long a reading speaks for on either side of it (the shop's setting). */
+  readingCarryH: number;
   product: { referenceTempC: number; minWorkTempC: number; activationEnergyKJPerMol?: number | undefined };
   unitSystem: UnitSystem;
   frame?: PlotFrame;
@@ -56,8 +61,9 @@ const toMs = (iso: string) => {
 };
 
 /**
- * The cure log's temperature plot: each reading held until the next, and the stretches where core had to assume the
- * plan's temperature, exactly as core's equivalent-age sum counts them. Coordinates are SVG user units.
+ * The cure log's temperature plot: straight lines between readings, readings carried across short stretches, and the
+ * gaps and unlogged stretches at the temperature core counted them at, exactly as core's equivalent-age sum runs.
+ * Coordinates are SVG user units.
  */
 export function temperaturePlot(input: TemperaturePlotInput): TemperaturePlot | null {
   const frame = input.frame ?? defaultPlotFrame;
@@ -71,9 +77,9 @@ export function temperaturePlot(input: TemperaturePlotInput): TemperaturePlot | 
   const untilIso = asOfMs >= pouredMs ? input.asOf : input.pouredAt!;
   const age =
     Number.isFinite(pouredMs)
-      ? equivalentAge({ readings: [...readings], refTempC: input.product.referenceTempC, activationEnergyKJPerMol: ea, minTempC: input.product.minWorkTempC, window: { from: input.pouredAt!, to: untilIso }, assumedTempC: input.assumedTempC })
+      ? equivalentAge({ readings: [...readings], refTempC: input.product.referenceTempC, activationEnergyKJPerMol: ea, minTempC: input.product.minWorkTempC, window: { from: input.pouredAt!, to: untilIso }, assumedTempC: input.assumedTempC, readingCarryH: input.readingCarryH })
       : readings.length > 1
-        ? equivalentAge({ readings: [...readings], refTempC: input.product.referenceTempC, activationEnergyKJPerMol: ea, minTempC: input.product.minWorkTempC })
+        ? equivalentAge({ readings: [...readings], refTempC: input.product.referenceTempC, activationEnergyKJPerMol: ea, minTempC: input.product.minWorkTempC, readingCarryH: input.readingCarryH })
         : null;
   const coreSpans = age?.ok ? age.value.spans : [];
 
@@ -87,7 +93,7 @@ export function temperaturePlot(input: TemperaturePlotInput): TemperaturePlot | 
   }
 
   const shown = (tempC: number) => temperatureFromC(tempC, input.unitSystem);
-  const temps = [...readings.map((r) => shown(r.tempC)), ...coreSpans.map((s) => shown(s.tempC)), shown(input.product.minWorkTempC)];
+  const temps = [...readings.map((r) => shown(r.tempC)), ...coreSpans.flatMap((s) => [shown(s.startTempC), shown(s.endTempC)]), shown(input.product.minWorkTempC)];
   const step = input.unitSystem === 'us' ? 10 : 5;
   let low = Math.floor(Math.min(...temps) / step) * step;
   let high = Math.ceil(Math.max(...temps) / step) * step;
@@ -109,7 +115,17 @@ export function temperaturePlot(input: TemperaturePlotInput): TemperaturePlot | 
     unit: input.unitSystem === 'us' ? '°F' : '°C',
     fromMs,
     toMs: untilMs,
-    spans: coreSpans.map((s) => ({ source: s.source, stalled: s.stalled, from: s.from, to: s.to, x1: x(s.fromMs), x2: x(s.toMs), y: y(shown(s.tempC)), temp: shown(s.tempC) })),
+    spans: coreSpans.map((s) => ({
+      source: s.source,
+      belowMinimum: s.belowMinimum,
+      from: s.from,
+      to: s.to,
+      x1: x(s.fromMs),
+      x2: x(s.toMs),
+      y1: y(shown(s.startTempC)),
+      y2: y(shown(s.endTempC)),
+      temp: shown(s.tempC),
+    })),
     dots: readings.map((r) => ({ x: x(toMs(r.at)), y: y(shown(r.tempC)), at: r.at, temp: shown(r.tempC) })),
     minimum: { y: y(shown(input.product.minWorkTempC)), temp: shown(input.product.minWorkTempC) },
     pouredX: Number.isFinite(pouredMs) ? x(pouredMs) : null,

@@ -15,7 +15,7 @@ type FormInput = z.input<typeof PigmentInput>;
 type FormOutput = z.output<typeof PigmentInput>;
 
 const kindOptions = PigmentKind.options.map((kind) => ({ value: kind, label: pigmentKindWords[kind] }));
-const fieldNames: readonly FieldPath<FormInput>[] = ['name', 'kind', 'recommendedPct', 'maxPct', 'pricePerPack', 'packSizeG'];
+const fieldNames: readonly FieldPath<FormInput>[] = ['name', 'kind', 'densityGPerMl', 'recommendedPct', 'maxPct', 'pricePerPack', 'packSizeG'];
 
 export interface PigmentFormProps {
   pigment?: PigmentView;
@@ -50,12 +50,20 @@ export function PigmentForm({ pigment, submitLabel, busyLabel, busy, save }: Pig
         <Field label="Kind" error={errors.kind?.message} required>
           {(control) => <Select {...control} options={kindOptions} {...form.register('kind')} />}
         </Field>
+        <Field
+          label="Density (g/mL)"
+          hint="From its data sheet: the pigment takes room in the mould too, so its volume counts in the pour. Liquid colourants are near 1, pastes a little more, mica powders near 2.8."
+          error={errors.densityGPerMl?.message}
+          required
+        >
+          {(control) => <Input {...control} inputMode="decimal" {...number('densityGPerMl')} />}
+        </Field>
       </FormSection>
-      <FormSection legend="Loading" hint="Pigment is weighed as a share of the mass of part A and part B together.">
-        <Field label="Recommended loading (% of resin mass)" error={errors.recommendedPct?.message} required>
+      <FormSection legend="Loading" hint="Pigment is weighed as a percentage of part A + part B by mass.">
+        <Field label="Recommended loading (% of part A + part B by mass)" error={errors.recommendedPct?.message} required>
           {(control) => <Input {...control} inputMode="decimal" {...number('recommendedPct')} />}
         </Field>
-        <Field label="Maximum loading (% of resin mass)" hint="Above this the resin may not cure fully." error={errors.maxPct?.message} required>
+        <Field label="Maximum loading (% of part A + part B by mass)" hint="Above this the resin may not cure fully." error={errors.maxPct?.message} required>
           {(control) => <Input {...control} inputMode="decimal" {...number('maxPct')} />}
         </Field>
       </FormSection>

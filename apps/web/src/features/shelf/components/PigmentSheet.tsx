@@ -11,8 +11,9 @@ export function PigmentSheet({ pigment: p, unitSystem }: { pigment: PigmentView;
           title: 'Loading',
           rows: [
             { term: 'Kind', value: pigmentKindWords[p.kind] },
-            { term: 'Recommended', value: `${p.recommendedPct} % of resin mass` },
-            { term: 'Maximum', value: `${p.maxPct} % of resin mass` },
+            { term: 'Density', value: `${p.densityGPerMl} g/mL` },
+            { term: 'Recommended', value: `${p.recommendedPct} % of part A + part B by mass` },
+            { term: 'Maximum', value: `${p.maxPct} % of part A + part B by mass` },
           ],
         },
         { title: 'Price', rows: [{ term: 'Pack', value: `${p.pricePerPack.toFixed(2)} for ${formatMass(p.packSizeG, unitSystem).text}` }] },

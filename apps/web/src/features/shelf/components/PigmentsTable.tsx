@@ -48,8 +48,8 @@ export function PigmentsTable({ pigments, unitSystem, sort, onSort }: PigmentsTa
               {pigment.archived ? <ArchivedMark /> : null}
             </Td>
             <Td>{pigmentKindWords[pigment.kind]}</Td>
-            <Td>{pigment.recommendedPct} % of resin mass</Td>
-            <Td>{pigment.maxPct} % of resin mass</Td>
+            <Td>{pigment.recommendedPct} % of part A + part B by mass</Td>
+            <Td>{pigment.maxPct} % of part A + part B by mass</Td>
             <Td>
               {pigment.pricePerPack.toFixed(2)} for {formatMass(pigment.packSizeG, unitSystem).text}
             </Td>

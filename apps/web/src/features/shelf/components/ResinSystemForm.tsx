@@ -47,6 +47,7 @@ const fieldNames: readonly FieldPath<FormInput>[] = [
   'maxLayerMm',
   'maxBatchG',
   'activationEnergyKJPerMol',
+  'hardnessShoreD',
   'pricePerKit',
   'kitSizeG',
   'shelfLifeMonths',
@@ -146,6 +147,13 @@ export function ResinSystemForm({ resinSystem, submitLabel, busyLabel, busy, sav
         </Field>
         <Field label="Ready to machine (h)" hint="Leave empty when the data sheet says to wait for full cure." error={errors.readyToMachineH?.message}>
           {(control) => <Input {...control} inputMode="decimal" {...optional('readyToMachineH')} />}
+        </Field>
+        <Field
+          label="Cured hardness (Shore D)"
+          hint="When the data sheet states one, a piece is released for machining only after a cure check measured at least this. Leave empty otherwise."
+          error={errors.hardnessShoreD?.message}
+        >
+          {(control) => <Input {...control} inputMode="decimal" {...optional('hardnessShoreD')} />}
         </Field>
         <Field
           label="Activation energy (kJ/mol)"

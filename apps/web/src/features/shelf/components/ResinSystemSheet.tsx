@@ -34,6 +34,7 @@ export function ResinSystemSheet({ resinSystem: r, unitSystem }: { resinSystem: 
             { term: 'Demold', value: `${r.demoldH} h` },
             { term: 'Full cure', value: `${r.fullCureH} h` },
             { term: 'Ready to machine', value: r.readyToMachineH === null ? 'at full cure' : `${r.readyToMachineH} h` },
+            { term: 'Cured hardness', value: r.hardnessShoreD === null ? 'not stated' : `Shore D ${r.hardnessShoreD}, checked before release` },
             {
               term: 'Activation energy used',
               value: `${r.effectiveActivationEnergyKJPerMol.toFixed(1)} kJ/mol${r.activationEnergyKJPerMol === null ? ' (common-practice default)' : ''}`,

@@ -87,7 +87,7 @@ export function PigmentsSection({ filters, unitSystem, mayKeep }: ShelfSectionPr
       {(page) =>
         page.items.length === 0 ? (
           <Empty filtered={filtered} title="No pigments yet" addHref={paths.newPigment.getHref()} addLabel="Add the first pigment" mayKeep={mayKeep}>
-            Pigments are weighed as a share of the resin mass, never above their own maximum.
+            Pigments are weighed as a percentage of part A + part B by mass, never above their own maximum.
           </Empty>
         ) : (
           <>

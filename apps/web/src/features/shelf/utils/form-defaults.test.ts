@@ -24,6 +24,7 @@ const resinSystem: ResinSystemView = {
   maxLayerMm: 40,
   maxBatchG: 4000,
   activationEnergyKJPerMol: null,
+  hardnessShoreD: null,
   effectiveActivationEnergyKJPerMol: 51.6,
   pricePerKit: 180,
   kitSizeG: 6000,
@@ -38,7 +39,7 @@ describe('form values from saved entries', () => {
     const input = ResinSystemInput.safeParse(resinSystemInputOf(resinSystem));
     expect(input.success).toBe(true);
     expect(input.data).toMatchObject({ name: 'Bench Deep 40', activationEnergyKJPerMol: null, mixRatio: { a: 2, b: 1, basis: 'volume' } });
-    const pigment: PigmentView = { id: resinSystem.id, name: 'Test Teal', kind: 'paste', recommendedPct: 2, maxPct: 6, pricePerPack: 12.5, packSizeG: 50, archived: true, updatedAt: resinSystem.updatedAt };
+    const pigment: PigmentView = { id: resinSystem.id, name: 'Test Teal', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 6, pricePerPack: 12.5, packSizeG: 50, archived: true, updatedAt: resinSystem.updatedAt };
     expect(PigmentInput.safeParse(pigmentInputOf(pigment)).success).toBe(true);
   });
 

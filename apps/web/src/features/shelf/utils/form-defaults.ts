@@ -20,6 +20,7 @@ export const newResinSystemDefaults: DefaultValues<ResinSystemInput> = {
   mixRatio: { basis: 'weight' },
   readyToMachineH: null,
   activationEnergyKJPerMol: null,
+  hardnessShoreD: null,
 };
 
 export const newPigmentDefaults: DefaultValues<PigmentInput> = { name: '', kind: 'paste' };

@@ -10,21 +10,31 @@ import { Field } from '../../../components/ui/Field';
 import { FormAlert } from '../../../components/ui/FormAlert';
 import { Input } from '../../../components/ui/Input';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { requiredNumber } from '../../../lib/form-input';
 import { useUpdateShop } from '../api/update-shop';
+
+/** A typed number read as core reads every number, then checked by the contract's own rule and sentence. */
+const typedNumber = <T extends z.ZodType<number, number>>(rule: T, missing: string) => z.string().trim().min(1, { message: missing }).transform(requiredNumber).pipe(rule);
 
 // Radio inputs hand over strings; the scale resolution travels as a number.
 const SettingsFields = UpdateShopRequest.required().extend({
   scaleResolutionG: z.enum(['0.1', '1'], { message: 'choose a scale resolution' }).transform(Number).pipe(ScaleResolutionG),
-  offRatioTolerancePct: z
-    .string()
-    .trim()
-    .min(1, { message: 'the off-ratio tolerance is required' })
-    .transform(Number)
-    .pipe(UpdateShopRequest.shape.offRatioTolerancePct.unwrap()),
+  offRatioTolerancePct: typedNumber(UpdateShopRequest.shape.offRatioTolerancePct.unwrap(), 'the off-ratio tolerance is required'),
+  readingCarryH: typedNumber(UpdateShopRequest.shape.readingCarryH.unwrap(), 'how long a reading speaks for is required'),
+  windowCloseLeadMin: typedNumber(UpdateShopRequest.shape.windowCloseLeadMin.unwrap(), 'the warning before a window closes is required'),
 });
 type SettingsInput = z.input<typeof SettingsFields>;
 type SettingsValues = z.output<typeof SettingsFields>;
-const fieldNames = ['name', 'unitSystem', 'scaleResolutionG', 'offRatioTolerancePct'] as const;
+const fieldNames = ['name', 'unitSystem', 'scaleResolutionG', 'offRatioTolerancePct', 'readingCarryH', 'windowCloseLeadMin'] as const;
+
+const formValuesOf = (shop: Shop): SettingsInput => ({
+  name: shop.name,
+  unitSystem: shop.unitSystem,
+  scaleResolutionG: shop.scaleResolutionG === 0.1 ? '0.1' : '1',
+  offRatioTolerancePct: String(shop.offRatioTolerancePct),
+  readingCarryH: String(shop.readingCarryH),
+  windowCloseLeadMin: String(shop.windowCloseLeadMin),
+});
 
 const unitChoices = [
   { value: 'metric', label: 'Metric', hint: 'millimetres, millilitres, grams' },
@@ -41,12 +51,7 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
   const [saved, setSaved] = useState(false);
   const form = useForm<SettingsInput, unknown, SettingsValues>({
     resolver: zodResolver(SettingsFields),
-    defaultValues: {
-      name: shop.name,
-      unitSystem: shop.unitSystem,
-      scaleResolutionG: shop.scaleResolutionG === 0.1 ? '0.1' : '1',
-      offRatioTolerancePct: String(shop.offRatioTolerancePct),
-    },
+    defaultValues: formValuesOf(shop),
   });
   const update = useUpdateShop({ onSuccess: onSaved });
   const { errors, isDirty } = form.formState;
@@ -56,12 +61,7 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
     setSaved(false);
     try {
       const updated = await update.mutateAsync(values);
-      form.reset({
-        name: updated.name,
-        unitSystem: updated.unitSystem,
-        scaleResolutionG: updated.scaleResolutionG === 0.1 ? '0.1' : '1',
-        offRatioTolerancePct: String(updated.offRatioTolerancePct),
-      });
+      form.reset(formValuesOf(updated));
       setSaved(true);
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, fieldNames));
@@ -84,11 +84,27 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
       />
       <Field
         label="Off-ratio tolerance (%)"
-        hint="A batch whose weighed A:B differs from the run sheet by more than this is flagged when it is logged."
+        hint="A batch whose weighed A:B differs from the product's ratio by more than this is flagged when it is logged, and a run-sheet cup that rounding to the scale leaves further off says so."
         error={errors.offRatioTolerancePct?.message}
         required
       >
         {(control) => <Input {...control} inputMode="decimal" {...form.register('offRatioTolerancePct')} />}
+      </Field>
+      <Field
+        label="How long one temperature reading speaks for (h)"
+        hint="In the cure sum a reading covers this long on either side of it. A longer stretch without readings is a gap: it is counted at the lower of the readings around it and the plan's shop temperature, and shown on the cure log."
+        error={errors.readingCarryH?.message}
+        required
+      >
+        {(control) => <Input {...control} inputMode="decimal" {...form.register('readingCarryH')} />}
+      </Field>
+      <Field
+        label="Warn before a pour window closes (min)"
+        hint="Reminders that a seal coat's or layer's pour window closes go out this long before it does."
+        error={errors.windowCloseLeadMin?.message}
+        required
+      >
+        {(control) => <Input {...control} inputMode="numeric" {...form.register('windowCloseLeadMin')} />}
       </Field>
       <div>
         <Button type="submit" busy={update.isPending} busyLabel="Saving…">

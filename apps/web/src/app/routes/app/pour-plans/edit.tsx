@@ -74,6 +74,7 @@ export function Component() {
         pigments={pigments.data.items}
         unitSystem={shop.data.unitSystem}
         scaleResolutionG={shop.data.scaleResolutionG}
+        offRatioTolerancePct={shop.data.offRatioTolerancePct}
         submitLabel="Save changes"
         busy={update.isPending}
         save={(input) => update.mutateAsync({ planId, values: input })}

@@ -71,6 +71,7 @@ export function Component() {
         pigments={pigments.data.items}
         unitSystem={shop.data.unitSystem}
         scaleResolutionG={shop.data.scaleResolutionG}
+        offRatioTolerancePct={shop.data.offRatioTolerancePct}
         submitLabel="Save pour plan"
         busy={create.isPending}
         save={(input) => create.mutateAsync(input)}

@@ -59,7 +59,7 @@ export function Component() {
               </>
             }
             actions={
-              current.status === 'open' && current.cure.readyToMachine && mayRelease(session.role) ? <ReleaseButton pourId={current.id} pieceName={current.piece.name} /> : null
+              current.status === 'open' && current.cure.release.allowed && mayRelease(session.role) ? <ReleaseButton pourId={current.id} pieceName={current.piece.name} /> : null
             }
           />
           <nav aria-label="On this page" className="mb-6 flex flex-wrap gap-x-6">
