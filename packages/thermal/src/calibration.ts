@@ -24,9 +24,9 @@ function num(n: number, digits = 1): string {
   return Number(n.toFixed(digits)).toString();
 }
 
-function peakWithScale(base: LayerModel, scale: number, depthMm: number, options: Numerics): number {
+function peakWithScale(base: LayerModel, scale: number, depthMm: number, limitC: number, options: Numerics): number {
   const model: LayerModel = { ...base, reactionHeatJPerM3: (base.reactionHeatJPerM3 / (base.resin.heatScale ?? 1)) * scale };
-  return runLayer(model, depthMm, options).run.peakC;
+  return runLayer(model, depthMm, { ...options, stopAboveC: limitC }).run.peakC;
 }
 
 const lowestScale = 1e-3;
@@ -56,7 +56,7 @@ export function calibrateToDataSheet(resin: ResinThermal, sheet: DataSheetLimit,
     return fail('accepted_peak_not_above_sheet', `The accepted peak (${num(limitC)} °C) must be above the data sheet's pouring temperature (${num(sheet.tempC)} °C).`);
   }
   const model = prepared.value;
-  const peak = (s: number) => peakWithScale(model, s, sheet.maxLayerMm, options);
+  const peak = (s: number) => peakWithScale(model, s, sheet.maxLayerMm, limitC, options);
   let lo = 1;
   let hi = 1;
   let p = peak(1);

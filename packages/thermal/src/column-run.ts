@@ -106,13 +106,14 @@ export function runColumn(input: ColumnRunInput): ColumnRun {
     record.conversions.push(Float32Array.from(alpha));
   };
 
-  // The hottest point of a step: the hottest reacting node, refined by a parabola through it and its neighbours.
+  // The hottest point of a step: the hottest reacting node's temperature (a parabola through a sharp
+  // front would overshoot), placed at the vertex of the parabola through it and its neighbours.
   const hottest = () => {
     let best = 0;
     for (let i = 1; i < nr; i++) if (temp[i]! > temp[best]!) best = i;
     if (best === 0 || best === nodes - 1) return { node: best, c: temp[best]!, depthM: z[best]! };
     const v = parabolaVertex(z[best - 1]!, temp[best - 1]!, z[best]!, temp[best]!, z[best + 1]!, temp[best + 1]!);
-    return { node: best, c: v.y, depthM: v.x };
+    return { node: best, c: temp[best]!, depthM: v.x };
   };
 
   let t = 0;

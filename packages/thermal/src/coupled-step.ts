@@ -66,13 +66,13 @@ function localConversion(law: RateLaw, tempC: number, theta: number, target: num
     if (g > 0) hi = a;
     else lo = a;
     const slope = 1 - theta * k * autocatalyticShapeSlope(a, kin);
-    let next = slope > 0 ? a - g / slope : (lo + hi) / 2;
-    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
-    if (Math.abs(next - a) < 1e-13 || hi - lo < 1e-13) {
-      a = next;
+    const newton = a - g / slope;
+    if (slope > 0 && Math.abs(newton - a) <= 1e-14) {
+      a = Math.min(1, Math.max(target, newton));
       break;
     }
-    a = next;
+    a = slope > 0 && newton > lo && newton < hi ? newton : (lo + hi) / 2;
+    if (hi - lo < 1e-14) break;
   }
   const slope = 1 - theta * k * autocatalyticShapeSlope(a, kin);
   if (!(slope > 1e-9)) return { alpha: NaN, dAlphaDT: NaN };
@@ -130,7 +130,7 @@ function solveStage(sys: CoupledSystem, theta: number, hA: number, airC: number,
       worst = Math.max(worst, Math.abs(s.delta[i]!));
     }
     if (!Number.isFinite(worst)) return false;
-    if (worst < 1e-7) {
+    if (worst < 1e-6) {
       for (let i = 0; i < nr; i++) {
         const local = localConversion(law, temp[i]!, theta, s.rhsA[i]!, alpha[i]!);
         if (Number.isNaN(local.alpha)) return false;
