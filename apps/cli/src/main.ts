@@ -4,13 +4,15 @@ const commands: Record<string, () => Promise<{ command: Command }>> = {
   mold: () => import('./commands/mold'),
   mix: () => import('./commands/mix'),
   cure: () => import('./commands/cure'),
+  exotherm: () => import('./commands/exotherm'),
 };
 
-const usage = `gelpoint — cavity, mix and cure numbers from the terminal
+const usage = `gelpoint — cavity, mix, cure and exotherm numbers from the terminal
 
   gelpoint mold FILE --level L [--units mm|cm|in] [--up x|y|z] [--dam outline|box] [--curve N] [--json]
   gelpoint mix --volume-ml V --ratio A:B --by weight|volume --density-a DA --density-b DB [--pigment-pct P] [--json]
   gelpoint cure --readings FILE.csv --ref-temp-c TR --activation-kj-mol E [--min-temp-c TMIN] [--json]
+  gelpoint exotherm --depth-mm D --ambient-c T --reaction-heat-j-g H --activation-kj-mol E --ref-temp-c Tr --gel-min G [--density-g-ml 1.1] [--heat-capacity-j-gk 1.5] [--conductivity-w-mk 0.2] [--base wood|insulated] [--limit-c L] [--json]
 `;
 
 /** Returns the process exit code; never throws for bad input. */
