@@ -130,7 +130,7 @@ function solveStage(sys: CoupledSystem, theta: number, hA: number, airC: number,
       worst = Math.max(worst, Math.abs(s.delta[i]!));
     }
     if (!Number.isFinite(worst)) return false;
-    if (worst < 1e-6) {
+    if (worst < 1e-4) {
       for (let i = 0; i < nr; i++) {
         const local = localConversion(law, temp[i]!, theta, s.rhsA[i]!, alpha[i]!);
         if (Number.isNaN(local.alpha)) return false;
