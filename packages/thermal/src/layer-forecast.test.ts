@@ -88,6 +88,30 @@ describe('one layer', () => {
     expect(peak(slow, { ambient: 22 }, m.value.maxLayerMm + 1).peakC).toBeGreaterThan(45);
   });
 
+  it('follows the shop temperature over time', () => {
+    // A flat schedule is the same shop as its one temperature.
+    const flat = peak(slow, { ambient: [{ timeMin: 0, tempC: 18 }, { timeMin: 900, tempC: 18 }] }, 30);
+    expect(flat.peakC).toBeCloseTo(peak(slow, { ambient: 18 }, 30).peakC, 9);
+    // Morning heating from 15 to 28 °C over 4 h: hotter than a shop that stays at 15 °C.
+    const warming = peak(slow, { ambient: [{ timeMin: 0, tempC: 15 }, { timeMin: 240, tempC: 28 }] }, 30);
+    expect(warming.peakC).toBeGreaterThan(peak(slow, { ambient: 15 }, 30).peakC);
+    const backwards = forecastLayer(slow, { ambient: [{ timeMin: 60, tempC: 15 }, { timeMin: 30, tempC: 20 }] }, 30);
+    if (backwards.ok) throw new Error('accepted readings out of order');
+    expect(backwards.error.message).toMatch(/in time order/);
+  });
+
+  it('counts the minutes the mix stood in the cup: it keeps curing there and the clock starts at mixing', () => {
+    const r = forecastLayer(slow, { ambient: 22, minutesMixedBeforePour: 45 }, 30);
+    if (!r.ok) throw new Error(r.error.message);
+    expect(r.value.series[0]!.timeMin).toBeCloseTo(45, 9);
+    expect(r.value.series[0]!.meanConversion).toBeGreaterThan(0);
+    const poured = peak(slow, { ambient: 22 }, 30);
+    expect(r.value.timeToPeakMin).toBeGreaterThan(45);
+    // The cup is held at the mix temperature: the heat it released there is gone, and the head start shows.
+    expect(r.value.peakC).toBeLessThan(poured.peakC);
+    expect(r.value.timeToPeakMin).toBeLessThan(poured.timeToPeakMin + 45);
+  });
+
   it('refuses bad input with a sentence', () => {
     const neg = forecastLayer(slow, { ambient: 22 }, -5);
     expect(neg.ok).toBe(false);

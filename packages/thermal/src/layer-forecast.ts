@@ -55,7 +55,8 @@ export function describeModel(model: LayerModel): string {
       ? `a fixed ${f(model.conditions.surfaceHeatTransferWPerM2K, 2)} W/(m²·K) to the air`
       : 'natural convection from the upper surface of a hot plate (Incropera) plus linearised radiation';
   return (
-    `Autocatalytic cure law of Kamal & Sourour (1973), dα/dt = k2(T)·(ε + α^m)·(1 − α)^n with m = ${f(kin.m)}, n = ${f(kin.n)}, ` +
+    `Autocatalytic cure law of Kamal & Sourour (1973) in the one-activation-energy form fitted to DGEBA/amine systems by Barral et al. (1995), ` +
+    `dα/dt = k2(T)·(ε + α^m)·(1 − α)^n with m = ${f(kin.m)}, n = ${f(kin.n)}, ` +
     `ε = ${f(kin.k1OverK2)} and one Arrhenius activation energy of ${f(model.resin.activationEnergyKJPerMol, 2)} kJ/mol, ` +
     `k2 set by the thin-film gel time (α = ${f(kin.gelConversion)}) of ${f(model.resin.gelTimeMin, 1)} min at ${f(model.resin.refTempC, 1)} °C; ` +
     `heat of reaction ${f(model.resin.reactionHeatJPerG * (model.resin.heatScale ?? 1), 1)} J/g` +
