@@ -154,6 +154,11 @@ export function runColumn(input: ColumnRunInput): ColumnRun {
       rejected++;
       continue;
     }
+    if (!settled) {
+      // Even a tenth of a millisecond is too long for the reaction: only a runaway does that.
+      runaway = true;
+      break;
+    }
     t += step;
     steps++;
     dt = Math.min(input.maxStepS, step * Math.min(2, Math.max(0.5, 0.9 / Math.max(load, 1e-12))));
