@@ -1,17 +1,16 @@
 import { CliError, type Command } from './command';
-import { commandUsage } from './usage';
+import { commandUsage, synopses } from './usage';
 
 const commands: Record<string, () => Promise<{ command: Command }>> = {
   mold: () => import('./commands/mold'),
   mix: () => import('./commands/mix'),
   cure: () => import('./commands/cure'),
+  exotherm: () => import('./commands/exotherm'),
 };
 
-const usage = `gelpoint — cavity, mix and cure numbers from the terminal
+const usage = `gelpoint — cavity, mix, cure and exotherm numbers from the terminal
 
-${Object.values(commandUsage)
-  .map((u) => `  ${u.split('\n')[0]}`)
-  .join('\n')}
+${synopses.map((s) => `  ${s}`).join('\n')}
 
   gelpoint COMMAND --help   explains one command
 `;
@@ -29,7 +28,7 @@ export async function main(argv: string[]): Promise<number> {
     return 2;
   }
   if (rest.includes('--help') || rest.includes('-h')) {
-    process.stdout.write(`${commandUsage[name] ?? ''}\n`);
+    process.stdout.write(commandUsage(name) ?? '');
     return 0;
   }
   try {

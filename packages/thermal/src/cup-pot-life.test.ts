@@ -1,0 +1,55 @@
+import { describe, expect, it } from 'vitest';
+import { cupPotLife } from './cup-pot-life';
+import { dgebaAmineDefaults, type ResinThermal } from './resin-thermal';
+
+// An invented coating-speed system: 40 min gel and 25 min pot life at 25 °C.
+const resin: ResinThermal = { ...dgebaAmineDefaults, gelTimeMin: 40, refTempC: 25 };
+
+function potLife(massG: number, ambientC = 25) {
+  const r = cupPotLife(resin, { massG, ambientC, sheetPotLifeMin: 25 });
+  if (!r.ok) throw new Error(r.error.message);
+  return r.value;
+}
+
+describe('cup pot life', () => {
+  it('is never longer than the data sheet at the same temperature', () => {
+    for (const m of [5, 50, 200, 1000]) {
+      const p = potLife(m);
+      expect(p.potLifeMin).toBeLessThanOrEqual(p.sheetPotLifeAtAmbientMin);
+      expect(p.sheetPotLifeAtAmbientMin).toBeCloseTo(25, 9);
+    }
+    // A cup mixed cold in a warm shop warms slower than a thin film: still capped at the data sheet.
+    const cold = cupPotLife(resin, { massG: 100, ambientC: 25, mixTempC: 10, sheetPotLifeMin: 25 });
+    if (!cold.ok) throw new Error(cold.error.message);
+    expect(cold.value.potLifeMin).toBeLessThanOrEqual(25);
+  });
+
+  it('shortens as the cup gets bigger and hotter inside', () => {
+    const small = potLife(20);
+    const big = potLife(1000);
+    expect(big.potLifeMin).toBeLessThan(small.potLifeMin);
+    expect(big.peakC).toBeGreaterThan(small.peakC);
+    expect(big.limitedBy).toBe('cup_heating');
+  });
+
+  it('a few grams of a slow system behave like the thin film of the data sheet', () => {
+    const slow = cupPotLife({ ...resin, gelTimeMin: 600 }, { massG: 2, ambientC: 25, sheetPotLifeMin: 240 });
+    if (!slow.ok) throw new Error(slow.error.message);
+    expect(slow.value.potLifeMin).toBeGreaterThan(0.9 * 240);
+    expect(slow.value.potLifeMin).toBeLessThanOrEqual(240);
+  });
+
+  it('moves the data sheet pot life with temperature by the Arrhenius law', () => {
+    // Common practice: pot life halves per 10 K; Ea = 53 kJ/mol gives exp(−(Ea/R)(1/308.15 − 1/298.15)) ≈ 1.998.
+    const warm = potLife(5, 35);
+    expect(warm.sheetPotLifeAtAmbientMin).toBeCloseTo(25 / Math.exp((53000 / 8.314462618) * (1 / 298.15 - 1 / 308.15)), 6);
+    expect(warm.sheetPotLifeAtAmbientMin).toBeGreaterThan(12);
+    expect(warm.sheetPotLifeAtAmbientMin).toBeLessThan(13);
+  });
+
+  it('refuses a cup without mass', () => {
+    const r = cupPotLife(resin, { massG: 0, ambientC: 25, sheetPotLifeMin: 25 });
+    if (r.ok) throw new Error('accepted an empty cup');
+    expect(r.error.message).toMatch(/mass in the cup must be above 0/);
+  });
+});
