@@ -23,6 +23,7 @@ import { StlChecker } from './modules/molds/stl-check';
 import { pourPlanRoutes } from './modules/pour-plans/pour-plans.routes';
 import { PourPlans } from './modules/pour-plans/pour-plans.service';
 import { pourRoutes } from './modules/pours/pours.routes';
+import { PourLog } from './modules/pours/pour-log.service';
 import { Pours } from './modules/pours/pours.service';
 import { shelfRoutes } from './modules/shelf/shelf.routes';
 import { shopRoutes } from './modules/shop/shop.routes';
@@ -84,7 +85,7 @@ export function createApp({ ds, config, logger = pino({ level: config.logLevel }
   const molds = new Molds(ds, new StlChecker(config.maxStlTriangles), quota);
   moldRoutes(registry, molds, config.maxStlBytes, uploadLimit);
   pourPlanRoutes(registry, new PourPlans(ds, molds.cavityForPlan));
-  pourRoutes(registry, ds, new Pours(ds, undefined, quota), uploadLimit);
+  pourRoutes(registry, new Pours(ds, undefined, quota), new PourLog(ds), uploadLimit);
 
   api.get('/openapi.json', (_req, res) => {
     res.json(openApiDocument(registry.routes, `${config.publicUrl}`));

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id, Timestamp, UserRef, instant, text } from './common';
+import { Id, Timestamp, UserRef, instant, requiredText, text } from './common';
 import { Warning } from './molds';
 
 const grams = (label: string) => z.number({ message: `${label} must be a number (g)` }).min(0, { message: `${label} cannot be negative` }).max(1_000_000, { message: `${label} is implausibly large` });
@@ -8,7 +8,23 @@ const lotNumber = text(80, 'lot number');
 
 export const PourStatus = z.enum(['open', 'released', 'machined', 'cancelled']);
 export const CureCheckStage = z.enum(['liquid', 'gelled', 'tack_free', 'demoldable', 'machinable'], { message: 'stage must be liquid, gelled, tack_free, demoldable or machinable' });
-export const ReminderKind = z.enum(['seal_coat_window_opens', 'seal_coat_window_closes', 'next_layer_window_opens', 'next_layer_window_closes', 'demold_check', 'ready_to_machine', 'finish_coat_due']);
+export const ReminderKind = z.enum([
+  'seal_coat_window_opens',
+  'seal_coat_window_closes',
+  'next_layer_window_opens',
+  'next_layer_window_closes',
+  'demold_check',
+  'ready_to_machine',
+  'finish_coat_due',
+  'piece_released',
+  'piece_machined',
+]);
+
+/** Set on a request to log a value the log questions (far out of range, far from its target, a layer poured early). */
+const confirmUnusual = z
+  .boolean({ message: 'confirmUnusual must be true or false' })
+  .default(false)
+  .describe('the person has seen the question about an unusual value and logs it anyway');
 
 export const StartPourRequest = z.object({ pourPlanId: Id, notifyUserIds: z.array(Id).max(20).optional() }).strict();
 
@@ -24,13 +40,14 @@ export const LogBatchRequest = z
     lotPigmentNumber: lotNumber.default(''),
     weighedAG: grams('weighed part A').refine((g) => g > 0, { message: 'weighed part A must be above zero' }),
     weighedBG: grams('weighed part B').refine((g) => g > 0, { message: 'weighed part B must be above zero' }),
-    weighedPigmentG: grams('weighed pigment').default(0),
+    weighedPigmentG: grams('weighed pigment').optional().describe('required when the cup has pigment'),
     ambientTempC: temp('ambient temperature').nullable().default(null),
     surfaceTempC: temp('surface temperature').nullable().default(null),
     rhPct: z.number().min(0).max(100, { message: 'relative humidity must be 0–100 %' }).nullable().default(null),
     notes: text(2000, 'notes').default(''),
     /** An expired lot is allowed only once the person mixing says they know. */
     acknowledgeExpiredLot: z.boolean().default(false),
+    confirmUnusual,
   })
   .strict();
 export type LogBatchRequest = z.input<typeof LogBatchRequest>;
@@ -57,13 +74,34 @@ export const BatchView = z.object({
   dewPointC: z.number().nullable(),
   warnings: z.array(Warning),
   notes: z.string(),
+  voided: z.object({ at: Timestamp, by: UserRef.nullable(), reason: z.string() }).nullable().describe('a voided cup stays in the history, out of the cure and the stock'),
 });
 export type BatchView = z.infer<typeof BatchView>;
 
 export const ReadingInput = z.object({ at: instant('at'), tempC: temp('temperature') });
-export const AddReadingsRequest = z.object({ readings: z.array(ReadingInput).min(1).max(10_000) }).strict();
-export const IngestReadingsRequest = z.object({ pourId: Id, readings: z.array(ReadingInput).min(1).max(10_000) }).strict();
-export const ReadingsAdded = z.object({ added: z.number().int(), duplicates: z.number().int() });
+export const AddReadingsRequest = z.object({ readings: z.array(ReadingInput).min(1).max(10_000), confirmUnusual }).strict();
+export const IngestReadingsRequest = z.object({ pourId: Id, readings: z.array(ReadingInput).min(1).max(10_000), confirmUnusual }).strict();
+export const ReadingsAdded = z.object({
+  added: z.number().int(),
+  duplicates: z.number().int().describe('readings already logged with the same time and temperature'),
+  unit: z.enum(['C', 'F']).optional().describe('the unit of an imported file’s temperature column; °F is converted'),
+});
+export const CsvImportQuery = z.object({ confirmUnusual: z.enum(['true', 'false']).default('false') }).strict();
+
+export const ReadingView = z.object({
+  id: Id,
+  at: Timestamp,
+  tempC: z.number(),
+  source: z.enum(['manual', 'csv', 'sensor']),
+  loggedBy: UserRef.nullable().describe('null for the shop thermometer'),
+  loggedAt: Timestamp,
+  voided: z.object({ at: Timestamp, by: UserRef.nullable(), reason: z.string() }).nullable(),
+});
+export type ReadingView = z.infer<typeof ReadingView>;
+export const ReadingList = z.object({ items: z.array(ReadingView) });
+export const VoidRequest = z.object({ reason: requiredText(500, 'reason') }).strict();
+export const ReadingParams = z.object({ id: Id, readingId: Id });
+export const BatchParams = z.object({ id: Id, batchId: Id });
 
 export const StageTimingView = z.object({
   key: z.string(),
@@ -102,6 +140,8 @@ export const CureView = z.object({
 export const ReminderView = z.object({
   id: Id,
   kind: ReminderKind,
+  /** Done: its step was logged (a layer poured, a check, a release), or a member marked it. */
+  done: z.object({ at: Timestamp, by: UserRef.nullable(), how: z.enum(['logged', 'marked']) }).nullable(),
   step: z.string(),
   dueAt: Timestamp.describe('when the reminder goes out'),
   eventAt: Timestamp.describe('the moment of the step it announces'),
@@ -133,6 +173,9 @@ export const PourSummary = z.object({
   batchesPlanned: z.number().int(),
   cure: CureView,
   nextReminder: ReminderView.nullable(),
+  flags: z
+    .array(z.object({ code: z.enum(['off_ratio', 'expired_lot', 'dew_point', 'voided']), count: z.number().int(), message: z.string() }))
+    .describe('what about this pour’s log needs a look: off-ratio cups, expired lots, dew-point breaches, voided entries'),
 });
 export type PourSummary = z.infer<typeof PourSummary>;
 
@@ -140,8 +183,10 @@ export const PourView = PourSummary.extend({
   pourPlanId: Id,
   assumedTempC: z.number(),
   notify: z.array(UserRef),
-  batches: z.array(BatchView),
-  readings: z.array(z.object({ at: Timestamp, tempC: z.number(), source: z.string() })),
+  batches: z.array(BatchView).describe('the cups as logged; voided ones are in voidedBatches'),
+  voidedBatches: z.array(BatchView),
+  readings: z.array(ReadingView).describe('the readings the cure counts; voided ones are in voidedReadings'),
+  voidedReadings: z.array(ReadingView),
   checks: z.array(CureCheckView),
   reminders: z.array(ReminderView),
   releasedAt: Timestamp.nullable(),

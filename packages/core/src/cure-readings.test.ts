@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { parseCureReadingsCsv } from './cure-readings';
+import { parseCureReadingsCsv, readCureLog } from './cure-readings';
 
 describe('parseCureReadingsCsv', () => {
   it('reads a log with a header, CRLF line ends, Z and offsets', () => {
@@ -105,5 +105,26 @@ describe('parseCureReadingsCsv: cells the rest of the product would read differe
   it('counts a row with thousands of commas without splitting it', () => {
     const result = parseCureReadingsCsv(`time,tempC\n${','.repeat(50_000)}\n`);
     expect(!result.ok && result.error.issues![0]!.message).toBe('row 2: expected 2 columns (time,tempC), found 50001');
+  });
+});
+
+describe('a log in °F', () => {
+  it('converts a column headed tempF to °C (NIST SP 811: t/°C = (t/°F − 32)/1.8) and says so', () => {
+    const log = readCureLog('time,tempF\n2026-11-01T10:00:00Z,70\n2026-11-01T11:00:00Z,68\n');
+    expect(log.ok).toBe(true);
+    if (!log.ok) return;
+    expect(log.value.unit).toBe('F');
+    expect(log.value.readings[0]!.tempC).toBeCloseTo(21.111111, 5);
+    expect(log.value.readings[1]!.tempC).toBeCloseTo(20, 12);
+  });
+
+  it('reads tempC, temp_c and a bare second column as °C, and refuses a column it cannot name', () => {
+    for (const header of ['time,tempC', 'time,temp_c', 'time,Temperature (°C)', 'time,temperature']) {
+      const log = readCureLog(`${header}\n2026-11-01T10:00:00Z,21\n`);
+      expect(log.ok && log.value.unit, header).toBe('C');
+    }
+    const odd = readCureLog('time,kelvin\n2026-11-01T10:00:00Z,294\n');
+    expect(odd.ok || odd.error.code).toBe('readings_invalid');
+    expect(odd.ok || odd.error.message).toContain('row 1: the temperature column is headed "kelvin"');
   });
 });

@@ -29,3 +29,4 @@ export * from './finish-coats';
 export * from './mold-cavity';
 export * from './pour-cure';
 export * from './release-evidence';
+export * from './log-guards';

@@ -73,17 +73,23 @@ export function cureState(
   return { step, isLastStep: latest === steps.length - 1, pouredAt, status: status.ok ? status.value : null };
 }
 
-export type ReminderKind =
-  | 'seal_coat_window_opens'
-  | 'seal_coat_window_closes'
-  | 'next_layer_window_opens'
-  | 'next_layer_window_closes'
-  | 'demold_check'
-  | 'ready_to_machine'
-  | 'finish_coat_due';
+/** What the cure model schedules; recomputed as the log changes. */
+export const cureReminderKinds = [
+  'seal_coat_window_opens',
+  'seal_coat_window_closes',
+  'next_layer_window_opens',
+  'next_layer_window_closes',
+  'demold_check',
+  'ready_to_machine',
+  'finish_coat_due',
+] as const;
+export type CureReminderKind = (typeof cureReminderKinds)[number];
+/** Notices of something done (a release, machining): sent once to the maker and the leads. */
+export type NoticeKind = 'piece_released' | 'piece_machined';
+export type ReminderKind = CureReminderKind | NoticeKind;
 
 export interface WantedReminder {
-  kind: ReminderKind;
+  kind: CureReminderKind;
   step: string;
   /** When the reminder goes out: the moment of the step, or a lead time before a window closes. */
   dueAt: Date;
@@ -109,7 +115,7 @@ function at(stage: StageTiming | undefined, now: Date): { eventAt: Date; assumed
 /** Closing windows are announced this long before they close unless the shop says otherwise. */
 export const defaultWindowCloseLeadMin = 30;
 
-const closingKinds: ReadonlySet<ReminderKind> = new Set(['seal_coat_window_closes', 'next_layer_window_closes']);
+const closingKinds: ReadonlySet<CureReminderKind> = new Set(['seal_coat_window_closes', 'next_layer_window_closes']);
 
 /** The reminders a pour should have now, from its cure state (and its finish coats once machined). */
 export function wantedReminders(
@@ -125,7 +131,7 @@ export function wantedReminders(
   if (step && status) {
     const find = (key: StageTiming['key']) => status.stages.find((s) => s.key === key);
     const assumedHistory = status.age.assumedHours > 0;
-    const add = (kind: ReminderKind, stageKey: StageTiming['key'], title: string) => {
+    const add = (kind: CureReminderKind, stageKey: StageTiming['key'], title: string) => {
       const when = at(find(stageKey), now);
       if (!when) return;
       const lead = closingKinds.has(kind) ? leadMin : 0;

@@ -160,7 +160,7 @@ describe('tenant isolation', () => {
       ["pour notifying A's lead", post('/api/pours', { pourPlanId: b.ids.plan, notifyUserIds: [a.lead.user.id] }), 400],
       ["lot of A's resin", post('/api/shelf/lots', { part: 'A', resinSystemId: a.ids.resin, lotNumber: 'X', quantityG: 1, receivedOn: '2026-11-01' }), 404],
       ["lot of A's pigment", post('/api/shelf/lots', { part: 'pigment', pigmentId: a.ids.pigment, lotNumber: 'X', quantityG: 1, receivedOn: '2026-11-01' }), 404],
-      ["batch from A's lot", post(`/api/pours/${b.ids.pour}/batches`, { planBatchIndex: 0, lotAId: a.ids.lot, weighedAG: 10, weighedBG: 5 }), 404],
+      ["batch from A's lot", post(`/api/pours/${b.ids.pour}/batches`, { planBatchIndex: 1, lotAId: a.ids.lot, weighedAG: 10, weighedBG: 5, weighedPigmentG: 0.2, confirmUnusual: true }), 404],
       ["mould for A's piece", h.http().post('/api/molds').set(lead).field('pieceId', a.ids.piece).attach('file', stockedMould(), 'm.stl'), 404],
       ["readings into A's pour with B's thermometer", post('/api/ingest/readings', { pourId: a.ids.pour, readings: [{ at: '2026-11-01T10:00:00Z', tempC: 20 }] }, { 'X-Gelpoint-Ingest-Token': b.ingestToken }), 404],
       ['switch into A', post('/api/auth/switch-shop', { shopId: a.shopId }, bearer(b.spareLead)), 403],

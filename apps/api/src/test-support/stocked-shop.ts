@@ -26,6 +26,9 @@ export interface StockedShop {
     pour: string;
     mold: string;
     check: string;
+    batch: string;
+    reading: string;
+    reminder: string;
   };
   invitationToken: string;
   /** A password-reset token of the maker (never of the lead, whose session the tests keep using). */
@@ -79,6 +82,11 @@ export async function stockShop(h: Harness, marker: string): Promise<StockedShop
   const plan = await post('/api/pour-plans', planBody(piece, resin, { pigmentId: pigment, sealResinId: sealResin }));
   const pour = await post('/api/pours', { pourPlanId: plan });
   const mold = (await http().post('/api/molds').set(bearer(lead)).field('name', `Mould ${marker}`).attach('file', stockedMould(), 'hostile.stl').expect(202)).body.id as string;
+  const recent = (hoursAgo: number) => new Date(Date.now() - hoursAgo * 3_600_000).toISOString();
+  const batch = (await http().post(`/api/pours/${pour}/batches`).set(bearer(lead)).send({ planBatchIndex: 0, mixedAt: recent(2), weighedAG: 10, weighedBG: 5, weighedPigmentG: 0.2, confirmUnusual: true }).expect(201)).body.batch.id as string;
+  await http().post(`/api/pours/${pour}/readings`).set(bearer(lead)).send({ readings: [{ at: recent(1), tempC: 21 }] }).expect(200);
+  const reading = (await http().get(`/api/pours/${pour}/readings`).set(bearer(lead)).expect(200)).body.items[0].id as string;
+  const reminder = (await http().get(`/api/pours/${pour}`).set(bearer(lead)).expect(200)).body.reminders[0].id as string;
   const check = (await http().post(`/api/pours/${pour}/checks`).set(bearer(lead)).field('stage', 'gelled').field('note', `Check ${marker}`).attach('photo', PNG_BYTES, 'check.png').expect(201)).body.id as string;
   await http().post('/api/auth/password-reset').send({ email: maker.user.email }).expect(202);
   const spareLead = (await http().post('/api/auth/login').send({ email: lead.user.email, password: PASSWORD, shopId: shop.shopId }).expect(200)).body as SessionResponse;
@@ -91,7 +99,7 @@ export async function stockShop(h: Harness, marker: string): Promise<StockedShop
     spareLead,
     maker,
     apprentice,
-    ids: { membership: members.find((m) => m.userId === apprentice.user.id)!.id, invitation, piece, resin, sealResin, pigment, lot, plan, pour, mold, check },
+    ids: { membership: members.find((m) => m.userId === apprentice.user.id)!.id, invitation, piece, resin, sealResin, pigment, lot, plan, pour, mold, check, batch, reading, reminder },
     invitationToken: await linkTokenFor(h.ds, invitationEmail, 'invitations'),
     resetToken: await linkTokenFor(h.ds, maker.user.email, 'reset-password'),
     ingestToken,
@@ -112,6 +120,9 @@ const ID_BY_SEGMENT: Record<string, keyof StockedShop['ids']> = {
   pours: 'pour',
   molds: 'mold',
   checks: 'check',
+  batches: 'batch',
+  readings: 'reading',
+  reminders: 'reminder',
 };
 
 /** The shop's own value for every parameter of a route's path; throws for a parameter nobody has classified. */
@@ -152,7 +163,7 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
     'POST /api/auth/switch-shop': { body: { shopId: shop.shopId }, headers: bearer(shop.spareLead) },
     'POST /api/auth/password-reset': { body: { email: shop.maker.user.email } },
     'POST /api/auth/password-reset/confirm': { body: { token: shop.resetToken, password: 'a new long password' } },
-    'PATCH /api/shop': { body: { name: `Shop ${m}`, unitSystem: 'metric', scaleResolutionG: 1, offRatioTolerancePct: 5 } },
+    'PATCH /api/shop': { body: { name: `Shop ${m}`, unitSystem: 'metric', scaleResolutionG: 1, offRatioTolerancePct: 5, readingCarryH: 2, windowCloseLeadMin: 30 } },
     'PATCH /api/shop/members/:id': { body: { role: 'apprentice', status: 'active' } },
     'POST /api/shop/invitations': { body: { email: `${m}-again@example.test`, role: 'maker' } },
     'POST /api/invitations/:token/accept': { body: { name: `Joiner ${m}`, password: PASSWORD } },
@@ -180,8 +191,8 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
     'POST /api/pours': { body: { pourPlanId: ids.plan, notifyUserIds: [shop.lead.user.id] } },
     'POST /api/pours/:id/batches': {
       body: {
-        planBatchIndex: 0,
-        mixedAt: '2026-11-01T10:00:00Z',
+        planBatchIndex: 1,
+        mixedAt: new Date(Date.now() - 3_600_000).toISOString(),
         lotAId: null,
         lotBId: null,
         lotPigmentId: null,
@@ -196,11 +207,15 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
         rhPct: 50,
         notes: 'first cup',
         acknowledgeExpiredLot: false,
+        confirmUnusual: true,
       },
     },
-    'POST /api/pours/:id/readings': { body: { readings: [{ at: '2026-11-01T10:00:00Z', tempC: 20 }] } },
+    'POST /api/pours/:id/readings': { body: { readings: [{ at: new Date(Date.now() - 1_800_000).toISOString(), tempC: 20 }], confirmUnusual: false } },
+    'POST /api/pours/:id/readings/csv': { query: { confirmUnusual: 'false' } },
+    'DELETE /api/pours/:id/readings/:readingId': { body: { reason: 'read off the wrong thermometer' } },
+    'POST /api/pours/:id/batches/:batchId/void': { body: { reason: 'logged against the wrong cup' } },
     'POST /api/pours/:id/checks': { form: { stage: 'gelled', checkedAt: '2026-11-01T12:00:00Z', hardnessShoreD: '40', note: 'firm' } },
     'POST /api/pours/:id/machined': { body: { machinedAt: '2026-11-09T10:00:00Z', finishCoats: 1, hoursBetweenCoats: 12 } },
-    'POST /api/ingest/readings': { body: { pourId: ids.pour, readings: [{ at: '2026-11-01T11:00:00Z', tempC: 21 }] }, headers: { 'X-Gelpoint-Ingest-Token': shop.ingestToken } },
+    'POST /api/ingest/readings': { body: { pourId: ids.pour, readings: [{ at: new Date(Date.now() - 900_000).toISOString(), tempC: 21 }], confirmUnusual: false }, headers: { 'X-Gelpoint-Ingest-Token': shop.ingestToken } },
   };
 }

@@ -14,12 +14,12 @@ export async function dispatchDueReminders(ds: DataSource, publicUrl: string, lo
   for (;;) {
     const n = await ds.transaction(async (m) => {
       const due: (DueReminder & { notify_user_ids: string[] })[] = await m.query(
-        `SELECT r.id, r.title, r.kind, r.due_at, r.event_at, r.lead_min, r.assumed, r.pour_id, r.shop_id, p.notify_user_ids, pc.name AS piece_name, pp.name AS plan_name
+        `SELECT r.id, r.title, r.kind, r.due_at, r.event_at, r.lead_min, r.assumed, r.pour_id, r.shop_id, COALESCE(r.recipient_user_ids, p.notify_user_ids) AS notify_user_ids, pc.name AS piece_name, pp.name AS plan_name
            FROM reminders r
            JOIN pours p ON p.id = r.pour_id
            JOIN pieces pc ON pc.id = p.piece_id
            JOIN pour_plans pp ON pp.id = p.pour_plan_id
-          WHERE r.status = 'pending' AND r.due_at <= now()
+          WHERE r.status = 'pending' AND r.done_at IS NULL AND r.due_at <= now()
           ORDER BY r.due_at
           LIMIT $1
           FOR UPDATE OF r SKIP LOCKED`,

@@ -7,7 +7,8 @@ import { User } from './user.entity';
 /** One cup as mixed: what went in (lots, grams), who mixed it, and the air and surface it met. */
 @Entity({ name: 'pour_batches' })
 @Index('pour_batches_pour_idx', ['pourId', 'mixedAt'])
-@Index('pour_batches_pour_index_key', ['pourId', 'planBatchIndex'], { unique: true })
+// One live cup per run-sheet place; a voided cup stays beside its re-logged one as history.
+@Index('pour_batches_pour_index_key', ['pourId', 'planBatchIndex'], { unique: true, where: 'voided_at IS NULL' })
 export class PourBatch {
   @PrimaryGeneratedColumn('uuid', { primaryKeyConstraintName: 'pour_batches_pkey' }) id!: string;
   @Column({ name: 'shop_id', type: 'uuid' }) shopId!: string;
@@ -38,6 +39,10 @@ export class PourBatch {
   @Column({ name: 'dew_point_c', type: 'double precision', nullable: true }) dewPointC!: number | null;
   @Column({ type: 'jsonb', default: () => "'[]'::jsonb" }) warnings!: { code: string; message: string }[];
   @Column({ type: 'text', default: '' }) notes!: string;
+  /** A void keeps the cup in the history but out of the cure, and gives its grams back to the lots. */
+  @Column({ name: 'voided_at', type: 'timestamptz', nullable: true }) voidedAt!: Date | null;
+  @Column({ name: 'voided_by_id', type: 'uuid', nullable: true }) voidedById!: string | null;
+  @Column({ name: 'void_reason', type: 'text', nullable: true }) voidReason!: string | null;
   @ManyToOne(() => Pour, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'pour_id', foreignKeyConstraintName: 'pour_batches_pour_fk' })
   pour?: Pour;

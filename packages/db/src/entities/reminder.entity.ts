@@ -12,6 +12,7 @@ export type { ReminderKind };
  */
 @Entity({ name: 'reminders' })
 @Check('reminders_status_check', `status IN ('pending', 'sent', 'cancelled')`)
+@Check('reminders_done_how_check', `done_how IN ('logged', 'marked')`)
 @Index('reminders_due_idx', ['status', 'dueAt'])
 @Index('reminders_pour_key', ['pourId', 'kind', 'step'], { unique: true })
 export class Reminder {
@@ -32,6 +33,12 @@ export class Reminder {
   @Column({ type: 'boolean', default: false }) assumed!: boolean;
   @Column({ type: 'text' }) title!: string;
   @Column({ name: 'sent_at', type: 'timestamptz', nullable: true }) sentAt!: Date | null;
+  /** Done: its step was logged (a layer poured, a check, a release), or a member marked it done. */
+  @Column({ name: 'done_at', type: 'timestamptz', nullable: true }) doneAt!: Date | null;
+  @Column({ name: 'done_by_id', type: 'uuid', nullable: true }) doneById!: string | null;
+  @Column({ name: 'done_how', type: 'text', nullable: true }) doneHow!: 'logged' | 'marked' | null;
+  /** Who gets it when not the pour's own list (a release goes to the maker and the leads). */
+  @Column({ name: 'recipient_user_ids', type: 'uuid', array: true, nullable: true }) recipientUserIds!: string[] | null;
   @ManyToOne(() => Pour, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'pour_id', foreignKeyConstraintName: 'reminders_pour_fk' })
   pour?: Pour;

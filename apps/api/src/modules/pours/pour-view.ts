@@ -1,7 +1,20 @@
+import type { EntityManager } from 'typeorm';
 import type { CureState, ReleaseEvidence } from '@gelpoint/core';
-import type { PourBatch, Reminder } from '@gelpoint/db';
-import type { BatchView, CureView, ReminderView } from '@gelpoint/contracts';
+import type { PourBatch, Reminder, TemperatureReading } from '@gelpoint/db';
+import type { BatchView, CureView, PourSummary, ReadingView, ReminderView } from '@gelpoint/contracts';
 import type { z } from 'zod';
+
+/** Names of the members a view mentions, looked up once per view. */
+export type Names = ReadonlyMap<string, string>;
+
+export async function namesOf(m: EntityManager, ids: (string | null | undefined)[]): Promise<Names> {
+  const wanted = [...new Set(ids.filter((id): id is string => Boolean(id)))];
+  if (wanted.length === 0) return new Map();
+  const rows: { id: string; name: string }[] = await m.query('SELECT id, name FROM users WHERE id = ANY($1)', [wanted]);
+  return new Map(rows.map((r) => [r.id, r.name]));
+}
+
+const ref = (names: Names, id: string | null) => (id && names.has(id) ? { id, name: names.get(id)! } : null);
 
 export function cureView(state: CureState, release: ReleaseEvidence): z.infer<typeof CureView> {
   const s = state.status;
@@ -27,9 +40,12 @@ export function cureView(state: CureState, release: ReleaseEvidence): z.infer<ty
   };
 }
 
-export const reminderView = (r: Reminder): ReminderView => ({
+type ReminderRow = Pick<Reminder, 'id' | 'kind' | 'step' | 'dueAt' | 'eventAt' | 'leadMin' | 'status' | 'assumed' | 'title' | 'sentAt' | 'doneAt' | 'doneById' | 'doneHow'>;
+
+export const reminderView = (r: ReminderRow, names: Names = new Map()): ReminderView => ({
   id: r.id,
   kind: r.kind,
+  done: r.doneAt && r.doneHow ? { at: r.doneAt.toISOString(), by: ref(names, r.doneById), how: r.doneHow } : null,
   step: r.step,
   dueAt: r.dueAt.toISOString(),
   eventAt: r.eventAt.toISOString(),
@@ -40,11 +56,11 @@ export const reminderView = (r: Reminder): ReminderView => ({
   sentAt: r.sentAt?.toISOString() ?? null,
 });
 
-export const batchView = (b: PourBatch): BatchView => ({
+export const batchView = (b: PourBatch, names: Names = new Map()): BatchView => ({
   id: b.id,
   planBatchIndex: b.planBatchIndex,
   step: b.step,
-  mixedBy: b.mixedBy ? { id: b.mixedBy.id, name: b.mixedBy.name } : null,
+  mixedBy: ref(names, b.mixedById),
   mixedAt: b.mixedAt.toISOString(),
   lotA: b.lotANumber,
   lotB: b.lotBNumber,
@@ -62,4 +78,32 @@ export const batchView = (b: PourBatch): BatchView => ({
   dewPointC: b.dewPointC,
   warnings: b.warnings,
   notes: b.notes,
+  voided: b.voidedAt ? { at: b.voidedAt.toISOString(), by: ref(names, b.voidedById), reason: b.voidReason ?? '' } : null,
 });
+
+export const readingView = (r: TemperatureReading, names: Names = new Map()): ReadingView => ({
+  id: r.id,
+  at: r.takenAt.toISOString(),
+  tempC: r.tempC,
+  source: r.source,
+  loggedBy: ref(names, r.loggedById),
+  loggedAt: r.createdAt.toISOString(),
+  voided: r.voidedAt ? { at: r.voidedAt.toISOString(), by: ref(names, r.voidedById), reason: r.voidReason ?? '' } : null,
+});
+
+type Flag = PourSummary['flags'][number];
+
+/** What about a pour's log needs a look, counted from its live cups' warnings and its voided entries. */
+export function flagsOf(warningCodes: string[][], voidedEntries: number): Flag[] {
+  const count = (code: string) => warningCodes.filter((codes) => codes.includes(code)).length;
+  const cups = (n: number) => `${n} cup${n === 1 ? '' : 's'}`;
+  const flags: Flag[] = [];
+  const offRatio = count('off_ratio');
+  if (offRatio > 0) flags.push({ code: 'off_ratio', count: offRatio, message: `${cups(offRatio)} off ratio` });
+  const expired = count('expired_lot');
+  if (expired > 0) flags.push({ code: 'expired_lot', count: expired, message: `${cups(expired)} from an expired lot` });
+  const dew = count('dew_point');
+  if (dew > 0) flags.push({ code: 'dew_point', count: dew, message: `${cups(dew)} poured near the dew point` });
+  if (voidedEntries > 0) flags.push({ code: 'voided', count: voidedEntries, message: `${voidedEntries} voided entr${voidedEntries === 1 ? 'y' : 'ies'} in the log` });
+  return flags;
+}

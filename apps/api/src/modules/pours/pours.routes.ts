@@ -1,12 +1,12 @@
-import { createHash, randomBytes } from 'node:crypto';
 import express from 'express';
 import multer from 'multer';
-import type { DataSource } from 'typeorm';
 import { z } from 'zod';
-import { parseCureReadingsCsv, parseIsoInstant } from '@gelpoint/core';
+import { parseIsoInstant, readCureLog } from '@gelpoint/core';
 import {
   AddReadingsRequest,
+  BatchParams,
   BatchView,
+  CsvImportQuery,
   CureCheckFields,
   CureCheckView,
   Id,
@@ -17,14 +17,19 @@ import {
   PourList,
   PourListQuery,
   PourView,
+  ReadingList,
+  ReadingParams,
   ReadingsAdded,
+  ReadingView,
+  ReminderView,
   StartPourRequest,
   TodayView,
+  VoidRequest,
   Warning,
 } from '@gelpoint/contracts';
 import { AppError } from '../../http/errors';
 import type { RouteRegistry } from '../../http/route-registry';
-import { recordAudit } from '../audit/audit.service';
+import type { PourLog } from './pour-log.service';
 import { sniffImageType } from './photo-type';
 import type { Pours } from './pours.service';
 
@@ -52,9 +57,7 @@ function photoUpload(): express.RequestHandler {
   };
 }
 
-const tokenHash = (t: string) => createHash('sha256').update(t).digest('hex');
-
-export function pourRoutes(api: RouteRegistry, ds: DataSource, pours: Pours, uploadLimit: express.RequestHandler): void {
+export function pourRoutes(api: RouteRegistry, pours: Pours, log: PourLog, uploadLimit: express.RequestHandler): void {
   api.add({ method: 'get', path: '/pours', tag: 'pours', summary: 'The cure board: pours with their stage, progress and next event', access: 'member', query: PourListQuery, response: PourList }, ({ auth, query }) =>
     pours.list(auth.shopId, query),
   );
@@ -66,36 +69,86 @@ export function pourRoutes(api: RouteRegistry, ds: DataSource, pours: Pours, upl
   );
   api.add(
     { method: 'post', path: '/pours/:id/batches', tag: 'pours', summary: 'Log a mixed batch: lots, weighed grams, temperatures, humidity', access: 'member', params: IdParams, body: LogBatchRequest, response: z.object({ batch: BatchView, warnings: z.array(Warning) }), status: 201 },
-    ({ auth, params, body }) => pours.logBatch(auth, params.id, body),
+    ({ auth, params, body }) => log.logBatch(auth, params.id, body),
   );
   api.add(
-    { method: 'post', path: '/pours/:id/readings', tag: 'pours', summary: 'Add temperature readings (each holds until the next)', access: 'member', params: IdParams, body: AddReadingsRequest, response: ReadingsAdded },
-    ({ auth, params, body }) => pours.addReadings(auth.shopId, params.id, body.readings, 'manual', auth),
+    {
+      method: 'post',
+      path: '/pours/:id/readings',
+      tag: 'pours',
+      summary: 'Add temperature readings (all or none; unusual values need confirmUnusual)',
+      access: 'member',
+      params: IdParams,
+      body: AddReadingsRequest,
+      response: ReadingsAdded,
+    },
+    ({ auth, params, body }) => log.addReadings(auth.shopId, params.id, body.readings, 'manual', auth, body.confirmUnusual),
   );
   api.add(
-    { method: 'post', path: '/pours/:id/readings/csv', tag: 'pours', summary: 'Import a time,tempC log (text/csv): all rows or none', access: 'member', params: IdParams, middleware: [uploadLimit, csvBody], response: ReadingsAdded },
-    async ({ auth, params, req }) => {
+    { method: 'get', path: '/pours/:id/readings', tag: 'pours', summary: 'Every reading of a pour, with who logged it and how, voided ones included', access: 'member', params: IdParams, response: ReadingList },
+    async ({ auth, params }) => ({ items: await log.listReadings(auth.shopId, params.id) }),
+  );
+  api.add(
+    {
+      method: 'delete',
+      path: '/pours/:id/readings/:readingId',
+      tag: 'pours',
+      summary: 'Void a reading with a reason (the logger or a lead); it stays in the history, out of the cure',
+      access: 'member',
+      params: ReadingParams,
+      body: VoidRequest,
+      response: ReadingView,
+    },
+    ({ auth, params, body }) => log.voidReading(auth, params.id, params.readingId, body.reason),
+  );
+  api.add(
+    {
+      method: 'post',
+      path: '/pours/:id/batches/:batchId/void',
+      tag: 'pours',
+      summary: 'Void a logged cup with a reason (the person who mixed it or a lead); its grams go back to the lots',
+      access: 'member',
+      params: BatchParams,
+      body: VoidRequest,
+      response: BatchView,
+    },
+    ({ auth, params, body }) => log.voidBatch(auth, params.id, params.batchId, body.reason),
+  );
+  api.add(
+    {
+      method: 'post',
+      path: '/pours/:id/readings/csv',
+      tag: 'pours',
+      summary: 'Import a time,tempC (or time,tempF) log (text/csv): all rows or none',
+      access: 'member',
+      params: IdParams,
+      query: CsvImportQuery,
+      middleware: [uploadLimit, csvBody],
+      response: ReadingsAdded,
+    },
+    async ({ auth, params, query, req }) => {
       if (typeof req.body !== 'string' || req.body.trim() === '') throw new AppError('bad_request', 'csv_missing', 'send the log as text/csv with lines "time,tempC"');
-      const parsed = parseCureReadingsCsv(req.body);
+      const parsed = readCureLog(req.body);
       if (!parsed.ok) {
         const fields = Object.fromEntries((parsed.error.issues ?? []).slice(0, 200).map((i) => [`row ${(i as { row?: number }).row ?? '?'}`, i.message]));
         throw new AppError('unprocessable', 'csv_invalid', parsed.error.message, fields);
       }
       // The same limits as readings sent as JSON: a number is not yet a plausible temperature. Each time goes in as the
       // instant core read (in UTC): the log may write it in any form core's one reader takes.
-      const instants = parsed.value.map((r) => ({ at: utcInstant(r.at), tempC: r.tempC }));
+      const instants = parsed.value.readings.map((r) => ({ at: utcInstant(r.at), tempC: Math.round(r.tempC * 1000) / 1000 }));
       const checked = AddReadingsRequest.safeParse({ readings: instants });
       if (!checked.success) {
         const fields = Object.fromEntries(
           checked.error.issues.slice(0, 200).map((i) => {
-            const reading = typeof i.path[1] === 'number' ? parsed.value[i.path[1]] : undefined;
+            const reading = typeof i.path[1] === 'number' ? parsed.value.readings[i.path[1]] : undefined;
             return [reading ? `at ${reading.at}` : 'readings', i.message];
           }),
         );
         const [where, what] = Object.entries(fields)[0]!;
         throw new AppError('unprocessable', 'csv_invalid', `The temperature log was not imported: the reading ${where}: ${what}. Fix these rows and import it again.`, fields);
       }
-      return pours.addReadings(auth.shopId, params.id, checked.data.readings, 'csv', auth);
+      const added = await log.addReadings(auth.shopId, params.id, checked.data.readings, 'csv', auth, query.confirmUnusual === 'true');
+      return { ...added, unit: parsed.value.unit };
     },
   );
   api.add(
@@ -125,27 +178,24 @@ export function pourRoutes(api: RouteRegistry, ds: DataSource, pours: Pours, upl
     { method: 'post', path: '/pours/:id/machined', tag: 'pours', summary: 'Mark the piece machined and schedule its finish coats', access: ['lead', 'maker'], params: IdParams, body: MachinedRequest, response: PourView },
     ({ auth, params, body }) => pours.machined(auth, params.id, body),
   );
-  api.add({ method: 'get', path: '/today', tag: 'pours', summary: 'What is due in the next 24 hours, and what is overdue', access: 'member', response: TodayView }, ({ auth }) => pours.today(auth.shopId));
+  api.add({ method: 'get', path: '/today', tag: 'pours', summary: 'What is due in the next 24 hours, and what is overdue and not done', access: 'member', response: TodayView }, ({ auth }) => pours.today(auth.shopId));
+  api.add(
+    { method: 'post', path: '/reminders/:id/done', tag: 'pours', summary: 'Mark a reminder done (any member; who and when are kept)', access: 'member', params: IdParams, response: ReminderView },
+    ({ auth, params }) => pours.markDone(auth, params.id),
+  );
 
   api.add(
     { method: 'post', path: '/shop/ingest-token', tag: 'pours', summary: 'Issue a new token for the shop thermometer (the old one stops working); shown once', access: ['lead'], response: IngestToken, status: 201 },
-    async ({ auth }) => {
-      const token = randomBytes(24).toString('base64url');
-      await ds.transaction(async (m) => {
-        await m.query('UPDATE shops SET ingest_token_hash = $2 WHERE id = $1', [auth.shopId, tokenHash(token)]);
-        await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'ingest_token.issue', objectType: 'shop', objectId: auth.shopId });
-      });
-      return { token };
-    },
+    async ({ auth }) => ({ token: await pours.issueIngestToken(auth) }),
   );
   api.add(
     { method: 'post', path: '/ingest/readings', tag: 'pours', summary: 'A shop thermometer posts readings with the X-Gelpoint-Ingest-Token header', access: 'public', body: IngestReadingsRequest, response: ReadingsAdded, status: 202 },
     async ({ body, req }) => {
       const token = req.get('x-gelpoint-ingest-token');
       if (!token || token.length > 200) throw new AppError('unauthorized', 'ingest_token_missing', 'send the shop thermometer token in the X-Gelpoint-Ingest-Token header');
-      const shops: { id: string }[] = await ds.query('SELECT id FROM shops WHERE ingest_token_hash = $1', [tokenHash(token)]);
-      if (!shops[0]) throw new AppError('unauthorized', 'ingest_token_invalid', 'this thermometer token is not valid; issue a new one in the shop settings');
-      return pours.addReadings(shops[0].id, body.pourId, body.readings, 'sensor', null);
+      const shopId = await pours.shopOfIngestToken(token);
+      if (!shopId) throw new AppError('unauthorized', 'ingest_token_invalid', 'this thermometer token is not valid; issue a new one in the shop settings');
+      return log.addReadings(shopId, body.pourId, body.readings, 'sensor', null, body.confirmUnusual);
     },
   );
 }

@@ -66,7 +66,12 @@ describe('pours and the cure log', () => {
     expect(pour.cure.nextLayerWindow).toBe('open');
 
     const poured2 = iso(24 * hour);
-    for (const b of layer2) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: poured2, ...onRatio(b) }).expect(201);
+    // Layer 2 six hours after layer 1, whose window opens after 12 h: the log asks, naming the window, and logs it once confirmed.
+    const early = await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: layer2[0]!.index, mixedAt: poured2, ...onRatio(layer2[0]!) }).expect(422);
+    expect(early.body.error.code).toBe('confirmation_needed');
+    expect(early.body.error.message).toMatch(/^layer 2 goes on layer 1, whose window for the next pour opens around /);
+    expect(early.body.error.fields).toHaveProperty('planBatchIndex');
+    for (const b of layer2) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: poured2, ...onRatio(b), confirmUnusual: true }).expect(201);
     const hourly = Array.from({ length: 25 }, (_, i) => ({ at: iso((24 - i) * hour), tempC: 10 }));
     await h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).send({ readings: hourly }).expect(200);
     pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.maker)).expect(200)).body;
@@ -80,15 +85,16 @@ describe('pours and the cure log', () => {
     expect(pour.reminders.filter((r: { kind: string; status: string }) => r.kind.startsWith('next_layer') && r.status === 'pending')).toEqual([]);
     expect(pour.piece.stage).toBe('curing');
 
-    const early = await h.http().post(`/api/pours/${w.pour.id}/release`).set(bearer(w.shop.lead)).expect(409);
-    expect(early.body.error.code).toBe('not_ready');
+    const notYet = await h.http().post(`/api/pours/${w.pour.id}/release`).set(bearer(w.shop.lead)).expect(409);
+    expect(notYet.body.error.code).toBe('not_ready');
     await h.http().post(`/api/pours/${w.pour.id}/release`).set(bearer(w.apprentice)).expect(403);
   });
 
   it('releases a piece only when the logged history says it is ready, then schedules finish coats', async () => {
     const w = await world();
-    for (const b of w.batches) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(200 * hour), ...onRatio(b) }).expect(201);
-    const readings = Array.from({ length: 101 }, (_, i) => ({ at: iso((200 - 2 * i) * hour + 1000), tempC: 20 }));
+    // Both layers at once: the guard asks about the second layer poured before the first is ready, and it is confirmed.
+    for (const b of w.batches) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(200 * hour), ...onRatio(b), confirmUnusual: true }).expect(201);
+    const readings = Array.from({ length: 101 }, (_, i) => ({ at: iso((200 - 2 * i) * hour - 1000), tempC: 20 }));
     await h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).send({ readings }).expect(200);
     const board = (await h.http().get('/api/pours').query({ readyToday: 'true' }).set(bearer(w.shop.lead)).expect(200)).body;
     expect(board.items.map((p: { id: string }) => p.id)).toContain(w.pour.id);
@@ -102,21 +108,24 @@ describe('pours and the cure log', () => {
 
   it('imports a CSV log all or nothing, and takes readings from the shop thermometer with its token', async () => {
     const w = await world();
-    const bad = await h.http().post(`/api/pours/${w.pour.id}/readings/csv`).set(bearer(w.apprentice)).set('Content-Type', 'text/csv').send('time,tempC\n2026-11-01T10:00:00Z,21\nyesterday,20\n2026-11-01T12:00:00Z,warm\n').expect(422);
+    const b0 = w.batches[0]!;
+    await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b0.index, mixedAt: iso(6 * hour), ...onRatio(b0) }).expect(201);
+    const [t5, t4, t3] = [iso(5 * hour), iso(4 * hour), iso(3 * hour)];
+    const bad = await h.http().post(`/api/pours/${w.pour.id}/readings/csv`).set(bearer(w.apprentice)).set('Content-Type', 'text/csv').send(`time,tempC\n${t5},21\nyesterday,20\n${t3},warm\n`).expect(422);
     expect(bad.body.error.code).toBe('csv_invalid');
     expect(Object.keys(bad.body.error.fields)).toEqual(['row 3', 'row 4']);
     expect((await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.maker)).expect(200)).body.readings).toEqual([]);
-    const good = await h.http().post(`/api/pours/${w.pour.id}/readings/csv`).set(bearer(w.apprentice)).set('Content-Type', 'text/csv').send('time,tempC\r\n2026-11-01T10:00:00Z,21\r\n2026-11-01T11:00:00Z,20.5\r\n').expect(200);
-    expect(good.body).toEqual({ added: 2, duplicates: 0 });
-    const again = await h.http().post(`/api/pours/${w.pour.id}/readings/csv`).set(bearer(w.apprentice)).set('Content-Type', 'text/csv').send('2026-11-01T11:00:00Z,20.5\n2026-11-01T12:00:00Z,20\n').expect(200);
-    expect(again.body).toEqual({ added: 1, duplicates: 1 });
+    const good = await h.http().post(`/api/pours/${w.pour.id}/readings/csv`).set(bearer(w.apprentice)).set('Content-Type', 'text/csv').send(`time,tempC\r\n${t5},21\r\n${t4},20.5\r\n`).expect(200);
+    expect(good.body).toEqual({ added: 2, duplicates: 0, unit: 'C' });
+    const again = await h.http().post(`/api/pours/${w.pour.id}/readings/csv`).set(bearer(w.apprentice)).set('Content-Type', 'text/csv').send(`${t4},20.5\n${t3},20\n`).expect(200);
+    expect(again.body).toEqual({ added: 1, duplicates: 1, unit: 'C' });
 
-    await h.http().post('/api/ingest/readings').set('X-Gelpoint-Ingest-Token', 'nope').send({ pourId: w.pour.id, readings: [{ at: '2026-11-01T13:00:00Z', tempC: 19 }] }).expect(401);
+    await h.http().post('/api/ingest/readings').set('X-Gelpoint-Ingest-Token', 'nope').send({ pourId: w.pour.id, readings: [{ at: iso(2 * hour), tempC: 19 }] }).expect(401);
     const { token } = (await h.http().post('/api/shop/ingest-token').set(bearer(w.shop.lead)).expect(201)).body;
-    await h.http().post('/api/ingest/readings').set('X-Gelpoint-Ingest-Token', token).send({ pourId: w.pour.id, readings: [{ at: '2026-11-01T13:00:00Z', tempC: 19 }] }).expect(202);
+    await h.http().post('/api/ingest/readings').set('X-Gelpoint-Ingest-Token', token).send({ pourId: w.pour.id, readings: [{ at: iso(2 * hour), tempC: 19 }] }).expect(202);
     const other = await createShop(h);
     const { token: otherToken } = (await h.http().post('/api/shop/ingest-token').set(bearer(other.lead)).expect(201)).body;
-    await h.http().post('/api/ingest/readings').set('X-Gelpoint-Ingest-Token', otherToken).send({ pourId: w.pour.id, readings: [{ at: '2026-11-01T14:00:00Z', tempC: 19 }] }).expect(404);
+    await h.http().post('/api/ingest/readings').set('X-Gelpoint-Ingest-Token', otherToken).send({ pourId: w.pour.id, readings: [{ at: iso(hour), tempC: 19 }] }).expect(404);
     const readings = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.maker)).expect(200)).body.readings;
     expect(readings.map((r: { source: string }) => r.source)).toEqual(['csv', 'csv', 'csv', 'sensor']);
   });
@@ -137,7 +146,7 @@ describe('pours and the cure log', () => {
 describe('release needs evidence (trade correctness)', () => {
   it('refuses release on an assumed-only cure, however long ago it was poured, and allows it on a logged one', async () => {
     const w = await world();
-    for (const b of w.batches) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(400 * hour), ...onRatio(b) }).expect(201);
+    for (const b of w.batches) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(400 * hour), ...onRatio(b), confirmUnusual: true }).expect(201);
     let pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.shop.lead)).expect(200)).body;
     // 400 h at the plan's 20 °C would be far past the 168 h full cure, but none of it is logged.
     expect(pour.cure.loggedEquivalentHours).toBe(0);
@@ -147,7 +156,7 @@ describe('release needs evidence (trade correctness)', () => {
     expect(refused.body.error.message).toMatch(/No temperature has been logged/);
 
     // Readings every 2 h at 20 °C (the reference: one equivalent hour per hour) over the last 200 h.
-    const readings = Array.from({ length: 101 }, (_, i) => ({ at: iso((200 - 2 * i) * hour + 1000), tempC: 20 }));
+    const readings = Array.from({ length: 101 }, (_, i) => ({ at: iso((200 - 2 * i) * hour - 1000), tempC: 20 }));
     await h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).send({ readings }).expect(200);
     pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.shop.lead)).expect(200)).body;
     expect(pour.cure.loggedEquivalentHours).toBeGreaterThan(168);
@@ -157,7 +166,7 @@ describe('release needs evidence (trade correctness)', () => {
 
   it('counts the time after a logger stops at the lower of its last reading and the plan, and shows the gap', async () => {
     const w = await world();
-    for (const b of w.batches) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(90 * hour), ...onRatio(b) }).expect(201);
+    for (const b of w.batches) await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(90 * hour), ...onRatio(b), confirmUnusual: true }).expect(201);
     // 12 h logged at 12 °C, then nothing for 78 h; the plan assumed 20 °C.
     const readings = Array.from({ length: 13 }, (_, i) => ({ at: iso((90 - i) * hour), tempC: 12 }));
     await h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).send({ readings }).expect(200);
@@ -186,9 +195,9 @@ describe('release needs evidence (trade correctness)', () => {
     ).body;
     const pour = (await h.http().post('/api/pours').set(bearer(w.apprentice)).send({ pourPlanId: plan.id }).expect(201)).body;
     for (const b of plan.result.layers.flatMap((l: { batches: unknown[] }) => l.batches) as { index: number; partA: { grams: number }; partB: { grams: number } }[]) {
-      await h.http().post(`/api/pours/${pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(200 * hour), ...onRatio(b) }).expect(201);
+      await h.http().post(`/api/pours/${pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b.index, mixedAt: iso(200 * hour), ...onRatio(b), confirmUnusual: true }).expect(201);
     }
-    const readings = Array.from({ length: 101 }, (_, i) => ({ at: iso((200 - 2 * i) * hour + 1000), tempC: 20 }));
+    const readings = Array.from({ length: 101 }, (_, i) => ({ at: iso((200 - 2 * i) * hour - 1000), tempC: 20 }));
     await h.http().post(`/api/pours/${pour.id}/readings`).set(bearer(w.apprentice)).send({ readings }).expect(200);
     let view = (await h.http().get(`/api/pours/${pour.id}`).set(bearer(w.shop.lead)).expect(200)).body;
     expect(view.cure.readyToMachine).toBe(true);
@@ -227,9 +236,14 @@ describe('release needs evidence (trade correctness)', () => {
 
   it('reads a CSV log time with a lower-case t as the cure sum does, and stores it in one form', async () => {
     const w = await world();
-    const res = await h.http().post(`/api/pours/${w.pour.id}/readings/csv`).set(bearer(w.apprentice)).set('Content-Type', 'text/csv').send('time,tempC\n2026-11-01t10:00:00+01:00,21\n').expect(200);
+    const b0 = w.batches[0]!;
+    await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: b0.index, mixedAt: iso(6 * hour), ...onRatio(b0) }).expect(201);
+    const at = new Date(Math.floor((Date.now() - 3 * hour) / 1000) * 1000);
+    // The same instant written with an offset of +01:00 and a lower-case t (RFC 3339 §5.6).
+    const local = new Date(at.getTime() + hour).toISOString().slice(0, 19).replace('T', 't');
+    const res = await h.http().post(`/api/pours/${w.pour.id}/readings/csv`).set(bearer(w.apprentice)).set('Content-Type', 'text/csv').send(`time,tempC\n${local}+01:00,21\n`).expect(200);
     expect(res.body.added).toBe(1);
     const pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.maker)).expect(200)).body;
-    expect(pour.readings.map((r: { at: string }) => r.at)).toEqual(['2026-11-01T09:00:00.000Z']);
+    expect(pour.readings.map((r: { at: string }) => r.at)).toEqual([at.toISOString()]);
   });
 });
