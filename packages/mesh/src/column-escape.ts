@@ -103,7 +103,11 @@ export function columnEscape(grid: ColumnGrid, zMin: number): Float32Array {
   }
   const escape = new Float32Array(offsets[columns]!);
   for (let c = 0; c < columns; c++) {
-    for (let k = 0; k < counts[c]!; k++) escape[offsets[c]! + k] = best[offsets[c]! + c + k]!;
+    for (let k = 0; k < counts[c]!; k++) {
+      // An empty gap (an interval standing on the table or on the one below) holds nothing.
+      const ceiling = ceilingOf(c, k);
+      escape[offsets[c]! + k] = ceiling > floorOf(c, k) ? best[offsets[c]! + c + k]! : ceiling;
+    }
   }
   return escape;
 }
