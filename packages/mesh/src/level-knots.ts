@@ -80,9 +80,8 @@ export function chooseKnots(
   const escapes = new BoundedNumberSet(quarter);
   for (let t = 0; t < table.count; t++) {
     if (table.sortedZ[3 * t] === table.sortedZ[3 * t + 2]) flats.add(table.sortedZ[3 * t]!);
-    const e = escape ? escape[t]! : Infinity;
-    if (Number.isFinite(e)) escapes.add(e);
   }
+  if (escape) for (let t = 0; t < table.count; t++) if (Number.isFinite(escape[t]!)) escapes.add(escape[t]!);
   const extras = [...inRange, ...flats.values, ...escapes.values];
   const even = Math.max(quarter, maxKnots - extras.length);
   const evenKnots: number[] = [];
