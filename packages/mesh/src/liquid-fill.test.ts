@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { boxDamResin, boxDamResinWithoutPockets, loadManifold, outlineDamResin, type ManifoldKernel } from '../test/manifold-reference';
-import { bellInside, bellOverPlate, boardOnLegs, boardRecess, cellSolid, revolvedPocketBlock, tSlotBlock, withoutTriangles } from '../test/moulds';
+import { bellInside, bellOverPlate, boardOnLegs, boardRecess, cellSolid, mapped, revolvedPocketBlock, tSlotBlock, withoutTriangles } from '../test/moulds';
 import { meshOf, relative, unwrap } from '../test/pipeline';
 import { readAnalysis } from './analysis-codec';
 import { analyzeCavity } from './analyze-cavity';
@@ -173,6 +173,37 @@ describe('undercut: a shaft opening into a wider chamber with a flat ceiling', (
   it('never falls as the level rises past the chamber’s ceiling', () => {
     const points = unwrap(curve(analysis, [8, 9.9, 10, 10.1, 12, 20]));
     for (let k = 1; k < points.length; k++) expect(points[k]!.volumeMm3).toBeGreaterThan(points[k - 1]!.volumeMm3);
+  });
+});
+
+describe('a hollow sealed inside the wood', () => {
+  // A 40 × 40 × 30 block with a 20 × 20 pocket from z 20 up, and a 10 × 10 × 5 hollow inside it
+  // (z 8 → 13) that the pour never meets: neither resin nor held air.
+  const xs = [0, 10, 15, 25, 30, 40];
+  const mould = cellSolid(xs, xs, [0, 8, 13, 20, 30], (i, j, k) => !((k === 3 && i >= 1 && i <= 3 && j >= 1 && j <= 3) || (k === 1 && i === 2 && j === 2)));
+  const hollow = meshOf(cellSolid([15, 25], [15, 25], [8, 13], () => true));
+  const mesh = meshOf(mould);
+  const analysis = analysed(mesh);
+
+  it('holds the pocket alone: 20 × 20 × (h − 20) (cuboid, CRC), no trapped air', () => {
+    for (const level of [10, 25, 30]) {
+      const f = unwrap(fillAt(analysis, level));
+      expect(f.volumeMm3).toBeCloseTo(400 * Math.max(0, level - 20), 6);
+      expect(f.trappedAirMm3).toBe(0);
+      // manifold-3d's prism minus mould keeps the hollow (it is outside the solid): take it out as a solid of its own.
+      const reference = boxDamResinWithoutPockets(kernel, mesh, level, [hollow]);
+      expect(Math.abs(f.volumeMm3 - reference)).toBeLessThanOrEqual(exactness * Math.max(reference, 1));
+    }
+  });
+});
+
+describe('a mould standing on the table far from the origin', () => {
+  it('keeps the short way (nothing hangs over free space) and its exact pocket', () => {
+    const pocket = mapped(cellSolid([0, 6, 26, 32], [0, 4, 20, 24], [0, 5, 12], (i, j, k) => !(i === 1 && j === 1 && k === 1)), (x, y, z) => [x + 700, y - 900, z + 850]);
+    const analysis = analysed(meshOf(pocket), [860]);
+    expect(analysis.exact!.overhangs).toBe(false);
+    // 20 × 16 × 5 (cuboid, CRC), from float32 corners near 900 mm.
+    expect(relative(unwrap(fillAt(analysis, 860)).volumeMm3, 1600)).toBeLessThan(1e-5);
   });
 });
 
