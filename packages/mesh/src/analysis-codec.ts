@@ -1,5 +1,5 @@
 import { decodeFloat32, decodeFloat64, decodeUint16, encodeFloat32, encodeFloat64, encodeUint16 } from './base64';
-import type { CavityAnalysis, CavityModel, StoredColumnGrid, StoredLevelSeries } from './cavity-analysis';
+import { cavityAnalysisVersion, type CavityAnalysis, type CavityModel, type StoredColumnGrid, type StoredLevelSeries } from './cavity-analysis';
 import { offsetsFromCounts, type ColumnGrid } from './column-grid';
 import { levelQuantityCount, type LevelSeries } from './level-series';
 import { fail, ok, type Result } from './result';
@@ -15,6 +15,15 @@ export function storeLevelSeries(series: LevelSeries): StoredLevelSeries {
   };
 }
 
+/** Only the gaps that hold air are stored; most moulds have none. */
+function heldAir(grid: ColumnGrid): Float64Array {
+  const pairs: number[] = [];
+  for (let k = 0; k < grid.escapeMm.length; k++) {
+    if (grid.escapeMm[k]! < grid.intervals[2 * k]!) pairs.push(k, grid.escapeMm[k]!);
+  }
+  return Float64Array.from(pairs);
+}
+
 export function storeColumnGrid(grid: ColumnGrid): StoredColumnGrid {
   return {
     originMm: [grid.originX, grid.originY],
@@ -23,6 +32,7 @@ export function storeColumnGrid(grid: ColumnGrid): StoredColumnGrid {
     ny: grid.ny,
     counts: encodeUint16(grid.counts),
     intervalsMm: encodeFloat32(grid.intervals),
+    heldAirMm: encodeFloat64(heldAir(grid)),
   };
 }
 
@@ -44,7 +54,11 @@ function finiteNumbers(value: unknown, length: number): value is number[] {
  */
 export function readAnalysis(stored: unknown): Result<CavityModel> {
   if (!isRecord(stored) || stored.kind !== 'gelpoint-cavity-analysis') return invalid('not a cavity analysis');
-  if (stored.version !== 1 || stored.encoding !== 'base64-little-endian') return invalid('unknown version');
+  if (typeof stored.version === 'number' && Number.isInteger(stored.version) && stored.version >= 1 && stored.version < cavityAnalysisVersion) {
+    // Earlier versions counted resin only where it could drop straight down from the surface.
+    return fail('analysis_outdated', `This cavity analysis was made by an earlier version of the engine (version ${stored.version}, now ${cavityAnalysisVersion}) whose fill rule has since changed; analyse the mould's STL again.`);
+  }
+  if (stored.version !== cavityAnalysisVersion || stored.encoding !== 'base64-little-endian') return invalid('unknown version');
   const analysis = stored as unknown as CavityAnalysis;
   const box = analysis.bboxMm;
   if (!isRecord(box) || !finiteNumbers(box.min, 3) || !finiteNumbers(box.max, 3)) return invalid('bounding box');
@@ -52,9 +66,8 @@ export function readAnalysis(stored: unknown): Result<CavityModel> {
   if (analysis.method === 'exact') {
     const facts = analysis.exact;
     if (!isRecord(facts)) return invalid('exact facts');
-    const numbers = [facts.footprintAreaMm2, facts.tableAreaMm2, facts.lowestFloorMm, facts.unseenMm3];
-    if (!numbers.every((v) => typeof v === 'number' && Number.isFinite(v))) return invalid('exact facts');
-    if (facts.raisedUndersideTopMm !== null && !(typeof facts.raisedUndersideTopMm === 'number' && Number.isFinite(facts.raisedUndersideTopMm))) return invalid('exact facts');
+    const numbers = [facts.outlineAreaMm2, facts.boxAreaMm2, facts.coveredAreaMm2, facts.lowestFloorMm, facts.heldAirFaces, facts.unseenMm3];
+    if (!numbers.every((v) => typeof v === 'number' && Number.isFinite(v)) || typeof facts.overhangs !== 'boolean') return invalid('exact facts');
   }
   if (!(typeof analysis.targetErrorPct === 'number' && analysis.targetErrorPct > 0) || !Array.isArray(analysis.warnings)) return invalid('header');
 
@@ -87,12 +100,20 @@ export function readAnalysis(stored: unknown): Result<CavityModel> {
   if (!(columns.cellMm[0] > 0) || !(columns.cellMm[1] > 0)) return invalid('column cell size');
   const counts = typeof columns.counts === 'string' ? decodeUint16(columns.counts) : null;
   const intervals = typeof columns.intervalsMm === 'string' ? decodeFloat32(columns.intervalsMm) : null;
-  if (!counts || !intervals || counts.length !== nx * ny) return invalid('column data');
+  const held = typeof columns.heldAirMm === 'string' ? decodeFloat64(columns.heldAirMm) : null;
+  if (!counts || !intervals || !held || counts.length !== nx * ny || held.length % 2 !== 0) return invalid('column data');
   const offsets = offsetsFromCounts(counts);
   if (2 * offsets[counts.length]! !== intervals.length) return invalid('column intervals');
+  const escapeMm = new Float32Array(intervals.length / 2);
+  for (let k = 0; k < escapeMm.length; k++) escapeMm[k] = intervals[2 * k]!;
+  for (let p = 0; p < held.length; p += 2) {
+    const k = held[p]!, e = held[p + 1]!;
+    if (!Number.isInteger(k) || k < 0 || k >= escapeMm.length || !(e === -Infinity || Number.isFinite(e))) return invalid('held air');
+    escapeMm[k] = e;
+  }
   const grid: ColumnGrid = {
     originX: columns.originMm[0], originY: columns.originMm[1], cellX: columns.cellMm[0], cellY: columns.cellMm[1],
-    nx, ny, counts, offsets, intervals,
+    nx, ny, counts, offsets, intervals, escapeMm,
   };
   return ok({ kind: 'gelpoint-cavity-model', analysis, series, grid });
 }

@@ -1,10 +1,13 @@
 import { storeColumnGrid, storeLevelSeries } from './analysis-codec';
-import type { CavityAnalysis, ExactFacts } from './cavity-analysis';
+import { cavityAnalysisVersion, type CavityAnalysis, type ExactFacts } from './cavity-analysis';
+import { columnEscape } from './column-escape';
 import { columnFill } from './column-fill';
 import { buildColumnGrid, type ColumnGrid } from './column-grid';
+import { escapeHeights } from './escape-heights';
 import { checkHeightField } from './height-field';
 import { chooseKnots } from './level-knots';
 import { buildLevelSeries } from './level-series';
+import { outlineArea } from './outline-area';
 import type { CavityMesh } from './prepare-mesh';
 import { fail, ok, type Result } from './result';
 import { buildTriangleTable, type TriangleTable } from './triangle-table';
@@ -32,27 +35,32 @@ function gridShape(columns: number, width: number, depth: number): [number, numb
   return [nx, Math.max(1, Math.round(columns / nx))];
 }
 
-function exactFacts(table: TriangleTable, box: CavityMesh['bboxMm'], unseenMm3: number): ExactFacts {
-  let footprint = 0, lowestFloor = Infinity, raisedTop = -Infinity;
-  const zMin = box.min[2], height = box.max[2] - box.min[2];
+interface Overhangs {
+  /** Some face that is not a wall looks down from above the table. */
+  present: boolean;
+  /** Σ of the shadows of faces that look down. */
+  coveredAreaMm2: number;
+  lowestFloorMm: number;
+  /** Raised wall-like faces that look down could hold at most this much air (shadow × height). */
+  wallSliverMm3: number;
+}
+
+/** One pass over the faces: whether anything hangs over free space, and the sums the exact fill needs. */
+function surveyOverhangs(table: TriangleTable, zMin: number, height: number, tableToleranceMm: number): Overhangs {
+  let present = false, covered = 0, lowestFloor = Infinity, sliver = 0;
   for (let t = 0; t < table.count; t++) {
-    if (table.facing[t]! > 0) {
-      footprint += table.shadowArea[t]!;
+    const facing = table.facing[t]!;
+    if (facing > 0) {
       lowestFloor = Math.min(lowestFloor, table.sortedZ[3 * t]!);
-    } else if (table.facing[t]! < 0 && table.sortedZ[3 * t + 2]! > zMin + 1e-9 * height) {
-      raisedTop = Math.max(raisedTop, table.sortedZ[3 * t + 2]!);
+    } else if (facing < 0) {
+      covered -= table.shadowArea[t]!;
+      if (table.sortedZ[3 * t + 2]! > zMin + tableToleranceMm) {
+        if (table.steep[t]) sliver -= table.shadowArea[t]! * height;
+        else present = true;
+      }
     }
   }
-  const boxArea = (box.max[0] - box.min[0]) * (box.max[1] - box.min[1]);
-  const uncovered = boxArea - footprint;
-  return {
-    footprintAreaMm2: footprint,
-    // A footprint that fills its box leaves only rounding behind.
-    tableAreaMm2: uncovered > 1e-9 * boxArea ? uncovered : 0,
-    lowestFloorMm: lowestFloor,
-    raisedUndersideTopMm: raisedTop === -Infinity ? null : raisedTop,
-    unseenMm3,
-  };
+  return { present, coveredAreaMm2: covered, lowestFloorMm: lowestFloor, wallSliverMm3: sliver };
 }
 
 /**
@@ -77,16 +85,59 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
   const width = box.max[0] - box.min[0], depth = box.max[1] - box.min[1], height = zMax - zMin;
   const rect = { minX: box.min[0], minY: box.min[1], maxX: box.max[0], maxY: box.max[1] };
   const table = buildTriangleTable(positions, triangles);
+  // A face counts as lying on the table within float32 rounding of its height (a file's corners
+  // are float32: 2^-24 of their size) or 1e-7 of the mould's height, whichever is larger.
+  const tableToleranceMm = Math.max(1e-7 * height, 4 * 2 ** -24 * Math.max(Math.abs(zMin), Math.abs(zMax)));
 
-  const closed = mesh.topology.watertight && mesh.topology.windingConflicts === 0;
-  const check = closed ? checkHeightField(positions, triangles, table, rect, height) : { heightField: false, unseenMm3: 0 };
-  const exact = closed && check.heightField;
-  const classes = classifyWetting(positions, triangles, table, box, exact);
-  const knots = chooseKnots(table, classes, zMin, zMax, levelsMm, maxKnots);
-  const series = buildLevelSeries(knots.knots, knots.complete, table, classes, zMin);
+  // The exact method needs a closed, consistently wound surface: the divergence theorem for the
+  // free space below a level, and the escape analysis over its corners.
+  const exact = mesh.topology.watertight && mesh.topology.windingConflicts === 0;
+  let facts: ExactFacts | null = null;
+  let escape: Float64Array | null = null;
+  let heightField = false;
+  if (exact) {
+    const survey = surveyOverhangs(table, zMin, height, tableToleranceMm);
+    const boxArea = width * depth;
+    let outline = survey.coveredAreaMm2, heldAirFaces = 0;
+    if (survey.present) {
+      // Something hangs over free space: find where air is held, and the shadow the outline dams enclose.
+      const escapes = escapeHeights(table, mesh.vertexCount, rect);
+      escape = escapes.triangleEscapeMm;
+      heldAirFaces = escapes.trappedTriangles;
+      outline = outlineArea(table, mesh.vertexCount, rect, zMin, tableToleranceMm);
+      heightField = checkHeightField(positions, triangles, table, rect, height).heightField;
+    } else {
+      // Nothing but the base looks down (walls within 1e-5 of vertical aside): every column is one
+      // solid standing on the table, no air is held and the outline's area is the shadows' sum.
+      heightField = true;
+    }
+    facts = {
+      outlineAreaMm2: outline,
+      boxAreaMm2: boxArea,
+      coveredAreaMm2: survey.coveredAreaMm2,
+      lowestFloorMm: survey.lowestFloorMm,
+      overhangs: survey.present,
+      heldAirFaces,
+      unseenMm3: survey.present ? 0 : survey.wallSliverMm3,
+    };
+  }
+  const classes = classifyWetting(positions, triangles, table, box);
+  const knots = chooseKnots(table, classes, escape, zMin, zMax, levelsMm, maxKnots);
+  const series = buildLevelSeries(knots.knots, knots.complete, table, classes, escape, zMin);
 
-  const repair = closed;
-  const build = (count: number): ColumnGrid => buildColumnGrid(positions, triangles, table, rect, zMin, ...gridShape(count, width, depth), repair).grid;
+  const build = (count: number): ColumnGrid => {
+    const built = buildColumnGrid(positions, triangles, table, rect, zMin, ...gridShape(count, width, depth), exact);
+    const grid = built.grid;
+    if (!exact) {
+      grid.escapeMm = columnEscape(grid, zMin);
+    } else if (escape) {
+      for (let k = 0; k < grid.escapeMm.length; k++) {
+        const t = built.bottomTriangles[k]!;
+        if (t >= 0 && escape[t]! !== Infinity) grid.escapeMm[k] = escape[t]!;
+      }
+    }
+    return grid;
+  };
   // The exact method needs the columns only for the depth map and the cross-check.
   let columns = exact ? Math.min(maxColumns, 65_536) : Math.min(maxColumns, Math.max(65_536, 2 * table.count));
   let grid = build(columns);
@@ -118,7 +169,7 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
 
   return ok({
     kind: 'gelpoint-cavity-analysis',
-    version: 1,
+    version: cavityAnalysisVersion,
     encoding: 'base64-little-endian',
     triangles: mesh.triangleCount,
     vertices: mesh.vertexCount,
@@ -128,10 +179,10 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
     bboxMm: { min: [...box.min], max: [...box.max] },
     enclosedVolumeMm3: mesh.enclosedVolumeMm3,
     surfaceAreaMm2: mesh.surfaceAreaMm2,
-    heightField: exact,
+    heightField,
     method: exact ? 'exact' : 'columns',
     targetErrorPct,
-    exact: exact ? exactFacts(table, box, check.unseenMm3) : null,
+    exact: facts,
     levels: storeLevelSeries(series),
     columns: storeColumnGrid(grid),
     warnings: [...mesh.warnings],

@@ -5,6 +5,9 @@ import type { MeshWarning } from './result';
 
 export type CavityMethod = 'exact' | 'columns';
 
+/** The stored analysis's format; readAnalysis refuses other versions with `analysis_outdated`. */
+export const cavityAnalysisVersion = 2;
+
 /**
  * Everything needed to answer fill questions about a mould later, without its mesh: plain JSON
  * (numbers, strings, arrays), so the API can keep it as jsonb. Typed arrays are stored as base64
@@ -12,7 +15,7 @@ export type CavityMethod = 'exact' | 'columns';
  */
 export interface CavityAnalysis {
   kind: 'gelpoint-cavity-analysis';
-  version: 1;
+  version: typeof cavityAnalysisVersion;
   encoding: 'base64-little-endian';
   triangles: number;
   vertices: number;
@@ -24,7 +27,7 @@ export interface CavityAnalysis {
   surfaceAreaMm2: number;
   /** Every vertical line meets the mould in at most one solid interval. */
   heightField: boolean;
-  /** `exact` for closed height-field moulds, `columns` otherwise. */
+  /** `exact` for closed, consistently wound moulds, `columns` otherwise. */
   method: CavityMethod;
   /** The accuracy the column resolution was chosen for. */
   targetErrorPct: number;
@@ -37,22 +40,29 @@ export interface CavityAnalysis {
 }
 
 export interface ExactFacts {
-  /** Area of the mould's shadow on the table (Σ of up-facing shadows in a height field). */
-  footprintAreaMm2: number;
-  /** Bounding-box footprint not covered by the mould: the box dam's table area. */
-  tableAreaMm2: number;
+  /** Area of the mould's shadow on the table: the floor inside dams along its outline. */
+  outlineAreaMm2: number;
+  /** Area of the bounding box's footprint: the floor inside the box dam. */
+  boxAreaMm2: number;
+  /** Σ of the shadows of the faces that look down: the shadow counted once per solid layer above each point. */
+  coveredAreaMm2: number;
   /** Lowest point of any up-facing face: where the deepest resin stands. */
   lowestFloorMm: number;
-  /** Highest point of a down-facing face above the base (the table reaches under it), or null. */
-  raisedUndersideTopMm: number | null;
-  /** Volume the height-field check could not see (near-vertical down-facing slivers). */
+  /** Some raised face looks down (an overhang, an undercut, a raised underside), so resin can stand under the mould and air can be held. */
+  overhangs: boolean;
+  /** Faces with air held against them (or bounding a sealed hollow). */
+  heldAirFaces: number;
+  /**
+   * Volume the analysis could not see: with no overhangs the escape analysis is skipped, and
+   * faces within 1e-5 of vertical that look down could hold at most their shadow × height.
+   */
   unseenMm3: number;
 }
 
 export interface StoredLevelSeries {
   /** base64 Float64: ascending knots, mm. */
   knotsMm: string;
-  /** base64 Float64: 4 cubic coefficients per piece, quantities in the order fill, wetted, wettedBox, underBox, trappedBox. */
+  /** base64 Float64: 4 cubic coefficients per piece, quantities in the order up, down, trapped, sealed, wetted, wettedBox. */
   coefficients: string;
   endValue: number[];
   endSlope: number[];
@@ -70,6 +80,12 @@ export interface StoredColumnGrid {
   counts: string;
   /** base64 Float32: [bottom, top] pairs, ascending per column. */
   intervalsMm: string;
+  /**
+   * base64 Float64: (interval index, escape height) pairs for the gaps below intervals whose air is
+   * held (escape height below the interval's bottom; -Infinity: sealed off from the pour). Every
+   * other gap lets its air out at its own ceiling.
+   */
+  heldAirMm: string;
 }
 
 /** A decoded analysis, ready for many queries. */
@@ -86,7 +102,7 @@ export interface DepthMap {
   cellMm: [number, number];
   nx: number;
   ny: number;
-  /** Resin depth per column, row-major (index j * nx + i), mm. Transferable. */
+  /** Resin thickness per column (every free gap of the column counted), row-major (index j * nx + i), mm. Transferable. */
   depthsMm: Float32Array;
 }
 
@@ -99,11 +115,11 @@ export interface CavityFill {
   levelMm: number;
   dam: 'outline' | 'box';
   volumeMm3: number;
-  /** Mould surface in contact with resin: floor and walls (for the seal coat). */
+  /** Mould surface in contact with resin: floors, walls and undersides the resin reaches (for the seal coat). */
   wettedAreaMm2: number;
   /** Deepest resin column. */
   maxDepthMm: number;
-  /** Free space below the level that resin cannot reach (under overhangs). */
+  /** Free space below the level where air is held: under ceilings that rise above every way out. */
   trappedAirMm3: number;
   method: CavityMethod;
   /** Column cell size when the method is columns; null for exact. */

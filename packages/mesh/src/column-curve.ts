@@ -1,3 +1,4 @@
+import { forEachGap, gapResinTop } from './column-fill';
 import type { ColumnGrid } from './column-grid';
 import type { Dam } from './dam';
 
@@ -12,31 +13,27 @@ function firstAbove(levels: Float64Array, z: number): number {
 
 /**
  * Fill volume at many ascending levels in one pass over the columns. In each free gap of a
- * column (floor f, ceiling c) the resin depth is h − f for f < h ≤ c and nothing otherwise, a
- * linear piece in h; the pieces go into difference arrays over the level index, so the curve
- * costs O(columns + levels), not O(columns × levels).
+ * column (floor f, resin top a) the resin depth is h − f for f < h ≤ a and a − f above, linear
+ * pieces in h; they go into difference arrays over the level index, so the curve costs
+ * O(columns + levels), not O(columns × levels).
  */
 export function columnCurve(grid: ColumnGrid, levels: Float64Array, dam: Dam, zMin: number): Float64Array {
   const n = levels.length;
   const slope = new Float64Array(n + 1);
   const offset = new Float64Array(n + 1);
-  const { counts, offsets, intervals } = grid;
   const columns = grid.nx * grid.ny;
-  const box = dam === 'box';
-  const gap = (floor: number, ceiling: number): void => {
+  const gap = (floor: number, ceiling: number, escape: number): void => {
+    const top = gapResinTop(floor, ceiling, escape);
+    if (!(top > floor)) return;
     const from = firstAbove(levels, floor);
-    const to = ceiling === Infinity ? n : firstAbove(levels, ceiling);
-    if (to <= from) return;
-    slope[from]! += 1; slope[to]! -= 1;
-    offset[from]! -= floor; offset[to]! += floor;
-  };
-  for (let c = 0; c < columns; c++) {
-    const first = offsets[c]!, count = counts[c]!;
-    if (box) gap(zMin, count > 0 ? intervals[2 * first]! : Infinity);
-    for (let k = 0; k < count; k++) {
-      gap(intervals[2 * (first + k) + 1]!, k + 1 < count ? intervals[2 * (first + k + 1)]! : Infinity);
+    const to = top === Infinity ? n : firstAbove(levels, top);
+    if (to > from) {
+      slope[from]! += 1; slope[to]! -= 1;
+      offset[from]! -= floor; offset[to]! += floor;
     }
-  }
+    if (top !== Infinity) { offset[to]! += top - floor; offset[n]! -= top - floor; }
+  };
+  for (let c = 0; c < columns; c++) forEachGap(grid, c, dam, zMin, gap);
   const cellArea = grid.cellX * grid.cellY;
   const volumes = new Float64Array(n);
   let s = 0, o = 0;

@@ -5,44 +5,63 @@ export interface ColumnFill {
   volumeMm3: number;
   trappedAirMm3: number;
   maxDepthMm: number;
-  /** Resin depth per column (row-major, column c = j * nx + i). */
+  /** Resin thickness per column (row-major, column c = j * nx + i), every gap counted. */
   depthsMm: Float32Array;
   /** Error bound of volumeMm3 from how well each column's centre stands for its cell (mm³). */
   errorMm3: number;
 }
 
 /**
- * Resin and trapped air at level h, column by column. In a column with solid intervals
- * [a0, b0] … ascending, resin stands on the top b_i of the highest interval that starts below h,
- * unless that interval reaches h (the column is solid there). Free gaps below that interval are
- * cut off from above: trapped air. With the box dam the table at zMin is a floor too: a column
- * with no solid below h holds h − zMin, and the gap under its lowest interval is trapped once that
- * interval starts below h.
+ * Calls visit(floor, ceiling, escape) for each free gap of column c that lies inside the dam:
+ * between the table (zMin) or an interval's top and the next interval's bottom, or above the
+ * highest interval (ceiling and escape Infinity). Dams along the outline hold only columns with
+ * mould in them; the box dam holds every column.
+ */
+export function forEachGap(
+  grid: ColumnGrid, c: number, dam: Dam, zMin: number, visit: (floor: number, ceiling: number, escape: number) => void,
+): void {
+  const first = grid.offsets[c]!, count = grid.counts[c]!;
+  if (count === 0) {
+    if (dam === 'box') visit(zMin, Infinity, Infinity);
+    return;
+  }
+  let floor = zMin;
+  for (let k = 0; k < count; k++) {
+    const bottom = grid.intervals[2 * (first + k)]!;
+    if (bottom > floor) visit(floor, bottom, grid.escapeMm[first + k]!);
+    floor = Math.max(floor, grid.intervals[2 * (first + k) + 1]!);
+  }
+  visit(floor, Infinity, Infinity);
+}
+
+/**
+ * Resin in a gap filled to h: up to h, but not above the gap's escape height when that is below
+ * its ceiling (air held under the ceiling), and nothing in a sealed gap.
+ */
+export function gapResinTop(floor: number, ceiling: number, escape: number): number {
+  if (escape === -Infinity) return floor;
+  return escape >= ceiling ? ceiling : Math.max(floor, escape);
+}
+
+/**
+ * Resin and trapped air at level h, column by column: every free gap below h holds resin up to h,
+ * except the air held between its escape height and its ceiling.
  */
 export function columnFill(grid: ColumnGrid, h: number, dam: Dam, zMin: number): ColumnFill {
-  const { nx, ny, counts, offsets, intervals } = grid;
+  const { nx, ny } = grid;
   const cellArea = grid.cellX * grid.cellY;
   const columns = nx * ny;
   const depthsMm = new Float32Array(columns);
   const depths = new Float64Array(columns);
-  let volume = 0, trapped = 0, maxDepth = 0;
-  const box = dam === 'box';
+  let volume = 0, trapped = 0, maxDepth = 0, depth = 0;
+  const visit = (floor: number, ceiling: number, escape: number): void => {
+    if (!(h > floor)) return;
+    depth += Math.min(h, gapResinTop(floor, ceiling, escape)) - floor;
+    if (escape !== -Infinity && escape < ceiling) trapped += Math.max(0, Math.min(h, ceiling) - Math.max(floor, escape));
+  };
   for (let c = 0; c < columns; c++) {
-    const first = offsets[c]!, count = counts[c]!;
-    let highest = -1;
-    for (let k = 0; k < count; k++) {
-      if (intervals[2 * (first + k)]! < h) highest = k; else break;
-    }
-    let depth = 0;
-    if (highest < 0) {
-      if (box && h > zMin) depth = h - zMin;
-    } else {
-      let gaps = box ? intervals[2 * first]! - zMin : 0;
-      for (let k = 1; k <= highest; k++) gaps += intervals[2 * (first + k)]! - intervals[2 * (first + k) - 1]!;
-      trapped += gaps;
-      const top = intervals[2 * (first + highest) + 1]!;
-      if (top < h) depth = h - top;
-    }
+    depth = 0;
+    forEachGap(grid, c, dam, zMin, visit);
     depths[c] = depth;
     depthsMm[c] = depth;
     volume += depth;

@@ -22,10 +22,18 @@ export interface ColumnGrid {
   offsets: Uint32Array;
   /** [bottom, top] pairs in mm, ascending within each column. */
   intervals: Float32Array;
+  /**
+   * Per interval, the escape height of the air in the free gap just below it (mm): air stays in
+   * that gap above this height once the resin rises past it. At or above the interval's bottom:
+   * nothing is trapped there; -Infinity: the gap is sealed off from the pour.
+   */
+  escapeMm: Float32Array;
 }
 
 export interface ColumnGridBuild {
   grid: ColumnGrid;
+  /** The triangle each interval's bottom lies on; -1 for the floor under a surface open underneath. */
+  bottomTriangles: Int32Array;
   /** Columns whose crossings did not pair up even after a nudged re-cast. */
   unbalancedColumns: number;
 }
@@ -46,6 +54,7 @@ export function buildColumnGrid(
   let hitColumn = new Int32Array(capacity);
   let hitZ = new Float64Array(capacity);
   let hitUp = new Uint8Array(capacity);
+  let hitTri = new Int32Array(capacity);
   let hits = 0;
   const span = new Float64Array(2);
 
@@ -87,7 +96,9 @@ export function buildColumnGrid(
           const c2 = new Int32Array(capacity); c2.set(hitColumn); hitColumn = c2;
           const z2b = new Float64Array(capacity); z2b.set(hitZ); hitZ = z2b;
           const u2 = new Uint8Array(capacity); u2.set(hitUp); hitUp = u2;
+          const t2 = new Int32Array(capacity); t2.set(hitTri); hitTri = t2;
         }
+        hitTri[hits] = t;
         const z = z0 + gx * (px - x0) + gy * (py - y0);
         hitColumn[hits] = j * nx + i;
         hitZ[hits] = z < zLo ? zLo : z > zHi ? zHi : z;
@@ -108,32 +119,41 @@ export function buildColumnGrid(
   const fill = start.slice(0, columns);
   const sortedZ = new Float64Array(hits);
   const sortedUp = new Uint8Array(hits);
+  const sortedTri = new Int32Array(hits);
   for (let h = 0; h < hits; h++) {
     const at = fill[hitColumn[h]!]!++;
     sortedZ[at] = hitZ[h]!;
     sortedUp[at] = hitUp[h]!;
+    sortedTri[at] = hitTri[h]!;
   }
 
   const counts = new Uint16Array(columns);
-  let intervals = new Float32Array(Math.max(16, hits + 16));
+  let intervals = new Float32Array(Math.max(16, 2 * Math.ceil(hits / 2) + 16));
+  let bottoms = new Int32Array(intervals.length / 2);
   let written = 0;
   const scratch = new Float64Array(2 * Math.max(1, busiest));
+  const scratchTri = new Int32Array(Math.max(1, busiest));
   const pairing: Pairing = { intervals: 0, balanced: true };
   const unbalanced: number[] = [];
   for (let col = 0; col < columns; col++) {
-    pairCrossings(sortedZ, sortedUp, start[col]!, start[col + 1]!, floorZ, scratch, 0, pairing);
+    pairCrossings(sortedZ, sortedUp, sortedTri, start[col]!, start[col + 1]!, floorZ, scratch, 0, scratchTri, pairing);
     if (!pairing.balanced) unbalanced.push(col);
     const n = Math.min(pairing.intervals, 65535);
     if (written + 2 * n > intervals.length) {
-      const grown = new Float32Array(Math.max(intervals.length * 2, written + 2 * n));
+      const grown = new Float32Array(2 * Math.max(intervals.length, (written + 2 * n) / 2));
       grown.set(intervals);
       intervals = grown;
+      const grownBottoms = new Int32Array(grown.length / 2);
+      grownBottoms.set(bottoms);
+      bottoms = grownBottoms;
     }
     for (let k = 0; k < 2 * n; k++) intervals[written + k] = scratch[k]!;
+    for (let k = 0; k < n; k++) bottoms[written / 2 + k] = scratchTri[k]!;
     written += 2 * n;
     counts[col] = n;
   }
   intervals = intervals.slice(0, written);
+  bottoms = bottoms.slice(0, written / 2);
   let unbalancedColumns = unbalanced.length;
   if (repair && unbalanced.length > 0) {
     // A ray through a seam can meet a neighbour twice or not at all; a nudge far below any
@@ -149,23 +169,34 @@ export function buildColumnGrid(
     unbalanced.forEach((col, r) => { if (nudged.balanced[r]) replaced.set(col, r); });
     if (replaced.size > 0) {
       const oldOffsets = offsetsFromCounts(counts);
-      const merged: number[] = [];
+      const merged: number[] = [], mergedBottoms: number[] = [];
       for (let col = 0; col < columns; col++) {
         const r = replaced.get(col);
         if (r === undefined) {
-          for (let k = 2 * oldOffsets[col]!; k < 2 * oldOffsets[col + 1]!; k++) merged.push(intervals[k]!);
+          for (let k = oldOffsets[col]!; k < oldOffsets[col + 1]!; k++) {
+            merged.push(intervals[2 * k]!, intervals[2 * k + 1]!);
+            mergedBottoms.push(bottoms[k]!);
+          }
         } else {
           const from = nudged.start[r]!, to = nudged.start[r + 1]!;
-          for (let k = 2 * from; k < 2 * to; k++) merged.push(nudged.intervals[k]!);
+          for (let k = from; k < to; k++) {
+            merged.push(nudged.intervals[2 * k]!, nudged.intervals[2 * k + 1]!);
+            mergedBottoms.push(nudged.bottomTriangles[k]!);
+          }
           counts[col] = to - from;
         }
       }
       intervals = Float32Array.from(merged);
+      bottoms = Int32Array.from(mergedBottoms);
       unbalancedColumns -= replaced.size;
     }
   }
+  // Until the escape analysis says otherwise, no gap holds air: each escapes at its own ceiling.
+  const escapeMm = new Float32Array(intervals.length / 2);
+  for (let k = 0; k < escapeMm.length; k++) escapeMm[k] = intervals[2 * k]!;
   return {
-    grid: { originX, originY, cellX, cellY, nx, ny, counts, offsets: offsetsFromCounts(counts), intervals },
+    grid: { originX, originY, cellX, cellY, nx, ny, counts, offsets: offsetsFromCounts(counts), intervals, escapeMm },
+    bottomTriangles: bottoms,
     unbalancedColumns,
   };
 }

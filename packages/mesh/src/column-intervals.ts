@@ -11,22 +11,26 @@ export interface Pairing {
  * down-facing one leaves it. Starting from above is what lets an open surface (a mould exported as
  * its top skin only) still read as "solid below the skin". At equal heights the up-facing crossing
  * goes first, so a seam counted twice gives an empty interval instead of a broken one.
- * Sorts z/up[from..to) in place; writes ascending [bottom, top] pairs to out from outAt.
+ * Sorts z/up/tri[from..to) in place; writes ascending [bottom, top] pairs to out from outAt and,
+ * when given, the triangle each interval's bottom lies on to outTri (index outAt / 2 on), -1 when
+ * the bottom is the floor of a surface open underneath.
  */
 export function pairCrossings(
-  z: Float64Array, up: Uint8Array, from: number, to: number, floorZ: number,
-  out: Float32Array | Float64Array, outAt: number, pairing: Pairing,
+  z: Float64Array, up: Uint8Array, tri: Int32Array | null, from: number, to: number, floorZ: number,
+  out: Float32Array | Float64Array, outAt: number, outTri: Int32Array | null, pairing: Pairing,
 ): void {
   for (let i = from + 1; i < to; i++) {
-    const zi = z[i]!, ui = up[i]!;
+    const zi = z[i]!, ui = up[i]!, ti = tri ? tri[i]! : 0;
     let j = i - 1;
     while (j >= from && (z[j]! < zi || (z[j] === zi && up[j]! < ui))) {
       z[j + 1] = z[j]!;
       up[j + 1] = up[j]!;
+      if (tri) tri[j + 1] = tri[j]!;
       j--;
     }
     z[j + 1] = zi;
     up[j + 1] = ui;
+    if (tri) tri[j + 1] = ti;
   }
   let winding = 0;
   let top = 0;
@@ -34,8 +38,9 @@ export function pairCrossings(
   // Intervals come out top first; they are written from the far end and shifted down at the end.
   const capacity = to - from;
   let written = 0;
+  const triAt = outAt / 2;
   for (let i = from; i <= to; i++) {
-    let bottom: number;
+    let bottom: number, bottomTri = -1;
     if (i < to) {
       if (up[i]) {
         if (winding === 0) top = z[i]!;
@@ -49,6 +54,7 @@ export function pairCrossings(
       winding--;
       if (winding > 0) continue;
       bottom = z[i]!;
+      bottomTri = tri ? tri[i]! : -1;
     } else {
       // Still inside below the lowest crossing: a surface open underneath.
       if (winding === 0) break;
@@ -59,18 +65,23 @@ export function pairCrossings(
     if (written > 0) {
       const prevAt = outAt + 2 * (capacity - written);
       if (top >= out[prevAt]!) {
-        out[prevAt] = Math.min(out[prevAt]!, bottom);
+        if (bottom < out[prevAt]!) {
+          out[prevAt] = bottom;
+          if (outTri) outTri[triAt + capacity - written] = bottomTri;
+        }
         continue;
       }
     }
     written++;
     out[outAt + 2 * (capacity - written)] = bottom;
     out[outAt + 2 * (capacity - written) + 1] = top;
+    if (outTri) outTri[triAt + capacity - written] = bottomTri;
   }
   const first = capacity - written;
   for (let k = 0; k < written; k++) {
     out[outAt + 2 * k] = out[outAt + 2 * (first + k)]!;
     out[outAt + 2 * k + 1] = out[outAt + 2 * (first + k) + 1]!;
+    if (outTri) outTri[triAt + k] = outTri[triAt + first + k]!;
   }
   pairing.intervals = written;
   pairing.balanced = balanced;

@@ -185,42 +185,48 @@ describe('against manifold-3d booleans', () => {
   });
 });
 
-describe('trapped air under an overhang', () => {
+describe('air held under an overhang', () => {
   // A 40 × 40 × 20 block: a 10 × 10 shaft from the top (z 10 → 20) opens into a 30 × 30 chamber
-  // (z 5 → 10). Resin reaches the chamber only straight below the shaft; the rest of the chamber,
-  // (30² − 10²) × 5 = 4000 mm³, is under the overhang.
-  const xs = [0, 5, 15, 25, 35, 40];
-  const mould = cellSolid(xs, xs, [0, 5, 10, 20], (i, j, k) => !((k === 2 && i === 2 && j === 2) || (k === 1 && i >= 1 && i <= 3 && j >= 1 && j <= 3)));
+  // (z 5 → 10) whose flat ceiling has a 5 × 5 recess 2 mm deep (z 10 → 12) in one corner, away
+  // from the shaft. Resin flows into the whole chamber; only the recess holds air once the level
+  // passes the ceiling, 5 × 5 × 2 = 50 mm³ at most (cuboid, CRC).
+  const xs = [0, 5, 10, 15, 25, 35, 40];
+  const mould = cellSolid(xs, xs, [0, 5, 10, 12, 20], (i, j, k) => {
+    const chamber = k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4;
+    const shaft = k >= 2 && i === 3 && j === 3;
+    const recess = k === 2 && i === 1 && j === 1;
+    return !(chamber || shaft || recess);
+  });
   const mesh = meshOf(mould);
   const analysis = unwrap(analyzeCavity(mesh, { levelsMm: [20] }));
 
-  it('reports the pocket under the overhang as trapped air, not as fill', () => {
-    expect(analysis.method).toBe('columns');
+  it('reports the recess as trapped air and everything else below the level as fill', () => {
+    expect(analysis.method).toBe('exact');
     const f = unwrap(fillAt(analysis, 20));
-    const tolerance = (f.estimatedErrorPct / 100) * f.volumeMm3;
-    expect(Math.abs(f.trappedAirMm3 - 4000)).toBeLessThanOrEqual(tolerance);
-    // Resin: the shaft (10 × 10 × 10) and the chamber straight below it (10 × 10 × 5).
-    expect(Math.abs(f.volumeMm3 - 1500)).toBeLessThanOrEqual(tolerance);
+    expect(f.trappedAirMm3).toBeCloseTo(50, 6);
+    // Resin: the chamber (30 × 30 × 5) and the shaft (10 × 10 × 10).
+    expect(f.volumeMm3).toBeCloseTo(4500 + 1000, 6);
     expect(f.warnings.map((w) => w.code)).toContain('trapped_air');
-    expect(f.resolutionMm).toBeGreaterThan(0);
   });
 
   it('holds manifold’s prism-minus-mould volume as fill plus trapped air', () => {
     const f = unwrap(fillAt(analysis, 20, 'box'));
     const reference = boxDamResin(kernel, mesh, 20).volume();
-    expect(Math.abs(f.volumeMm3 + f.trappedAirMm3 - reference)).toBeLessThanOrEqual((f.estimatedErrorPct / 100) * f.volumeMm3);
+    expect(Math.abs(f.volumeMm3 + f.trappedAirMm3 - reference)).toBeLessThanOrEqual(1e-6 * reference);
   });
 
-  it('has no trapped air while the level is still below the overhang', () => {
+  it('has no trapped air while the level is still below the ceiling, and part of the recess between', () => {
     const f = unwrap(fillAt(analysis, 8));
     expect(f.trappedAirMm3).toBe(0);
-    expect(Math.abs(f.volumeMm3 - 30 * 30 * 3)).toBeLessThanOrEqual((f.estimatedErrorPct / 100) * f.volumeMm3);
+    expect(f.volumeMm3).toBeCloseTo(30 * 30 * 3, 6);
     expect(f.warnings.map((w) => w.code)).not.toContain('trapped_air');
+    expect(unwrap(fillAt(analysis, 11)).trappedAirMm3).toBeCloseTo(25, 6);
   });
 
-  it('wets the shaft walls and the chamber floor below the shaft only', () => {
-    // Floor under the shaft 10 × 10, shaft walls 4 × 10 × 10; the rest of the chamber is cut off.
-    expect(unwrap(fillAt(analysis, 20)).wettedAreaMm2).toBeCloseTo(100 + 400, 6);
+  it('wets the floor, walls and ceiling the resin reaches, not the recess held by air', () => {
+    // Floor 30 × 30, chamber walls 4 × 30 × 5, ceiling 30 × 30 − shaft 10 × 10 − recess 5 × 5,
+    // shaft walls 4 × 10 × 10; the recess's walls and its top stay dry.
+    expect(unwrap(fillAt(analysis, 20)).wettedAreaMm2).toBeCloseTo(900 + 600 + 775 + 400, 6);
     // At 8 mm: the chamber floor 30 × 30 and its walls 4 × 30 × 3.
     expect(unwrap(fillAt(analysis, 8)).wettedAreaMm2).toBeCloseTo(900 + 360, 6);
   });

@@ -24,13 +24,24 @@ function percent(errorMm3: number, volumeMm3: number): number {
   return volumeMm3 > 0 ? (100 * errorMm3) / volumeMm3 : 0;
 }
 
-/** Fill volume by the exact series: outline fill, plus the box dam's table and under-face resin. */
-function exactVolume(model: CavityModel, h: number, dam: Dam): number {
+/** The dam's floor area less the shadows' sum, with the rounding of a floor the shadows fill exactly dropped. */
+function uncoveredAreaMm2(model: CavityModel, dam: Dam): number {
   const facts = model.analysis.exact!;
+  const area = dam === 'box' ? facts.boxAreaMm2 : facts.outlineAreaMm2;
+  const uncovered = area - facts.coveredAreaMm2;
+  return Math.abs(uncovered) > 1e-9 * area ? uncovered : 0;
+}
+
+/**
+ * Resin by the exact series: the free space below h inside the dam (divergence theorem, see
+ * level-series) less the air held in pockets and the hollows the pour never reaches.
+ */
+function exactVolume(model: CavityModel, h: number, dam: Dam): number {
   const zMin = model.analysis.bboxMm.min[2];
-  let volume = seriesValue(model.series, LevelQuantity.Fill, h);
-  if (dam === 'box' && h > zMin) volume += facts.tableAreaMm2 * (h - zMin) + seriesValue(model.series, LevelQuantity.UnderBox, h);
-  return Math.max(0, volume);
+  if (!(h > zMin)) return 0;
+  const s = model.series;
+  const free = seriesValue(s, LevelQuantity.Up, h) + seriesValue(s, LevelQuantity.Down, h) + uncoveredAreaMm2(model, dam) * (h - zMin);
+  return Math.max(0, free - seriesValue(s, LevelQuantity.Trapped, h) - seriesValue(s, LevelQuantity.Sealed, h));
 }
 
 function exactErrorMm3(model: CavityModel, h: number): number {
@@ -66,10 +77,14 @@ export function fillAt(source: CavitySource, levelMm: number, dam: Dam = 'outlin
     volumeMm3 = exactVolume(model.value, h, dam);
     estimatedErrorPct = percent(exactErrorMm3(model.value, h), volumeMm3);
     exact = { volumeMm3, estimatedErrorPct };
-    trappedAirMm3 = dam === 'box' ? Math.max(0, seriesValue(series, LevelQuantity.TrappedBox, h)) : 0;
-    maxDepthMm = Math.max(0, h - facts.lowestFloorMm);
-    const tableReached = facts.tableAreaMm2 > 0 || (facts.raisedUndersideTopMm !== null && h <= facts.raisedUndersideTopMm);
-    if (dam === 'box' && tableReached) maxDepthMm = Math.max(maxDepthMm, h - zMin);
+    trappedAirMm3 = h > zMin ? Math.max(0, seriesValue(series, LevelQuantity.Trapped, h)) : 0;
+    if (facts.overhangs) {
+      // Resin under overhangs stacks in several gaps of one column: the depth map says where it is thickest.
+      maxDepthMm = columns.maxDepthMm;
+    } else {
+      maxDepthMm = Math.max(0, h - facts.lowestFloorMm);
+      if (uncoveredAreaMm2(model.value, dam) > 0) maxDepthMm = Math.max(maxDepthMm, h - zMin);
+    }
   } else {
     volumeMm3 = columns.volumeMm3;
     estimatedErrorPct = columnFigures.estimatedErrorPct;
@@ -83,7 +98,7 @@ export function fillAt(source: CavitySource, levelMm: number, dam: Dam = 'outlin
   if (trappedAirMm3 > 1e-6 * boxVolume) {
     warnings.push({
       code: 'trapped_air',
-      message: `About ${(trappedAirMm3 / 1000).toPrecision(3)} mL of space below the level sits under overhangs where the resin cannot reach it, so air will be trapped there: vent those pockets or turn the mould so they open upwards.`,
+      message: `About ${(trappedAirMm3 / 1000).toPrecision(3)} mL of air will be held below the level, under ceilings that rise above every way out for it: drill a vent at the top of each such pocket or turn the mould so they open upwards.`,
     });
   }
   if (analysis.method === 'columns' && estimatedErrorPct > analysis.targetErrorPct) {

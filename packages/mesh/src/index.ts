@@ -7,6 +7,7 @@ export type { BoundingBox } from './mesh-measures';
 export { analyzeCavity, analysisDefaults, type AnalyzeCavityOptions } from './analyze-cavity';
 export { analyzeStl, type AnalyzeStlOptions } from './analyze-stl';
 export { readAnalysis } from './analysis-codec';
+export { cavityAnalysisVersion } from './cavity-analysis';
 export { fillAt, curve, layerVolumes, type CavitySource } from './fill-queries';
 export { fillRecord, type FillRecord } from './fill-record';
 export type { Dam } from './dam';

@@ -41,7 +41,7 @@ class BoundedNumberSet {
 
 export interface KnotChoice {
   knots: Float64Array;
-  /** Every corner height and ceiling is a knot. */
+  /** Every corner height and escape height is a knot. */
   complete: boolean;
 }
 
@@ -56,10 +56,11 @@ function sortedUnique(values: number[]): Float64Array {
  * Knots for the level series. When the mould has at most `maxKnots` distinct corner heights (CNC
  * pockets cut in terraces have a few dozen) every one is a knot and the series is exact. Otherwise
  * the knots are evenly spaced, plus the levels of flat faces (where the fill's slope jumps), the
- * ceilings over faces, and the levels the caller asked for, so those stay exact.
+ * escape heights of trapped air (where the trapped volume starts to grow), and the levels the
+ * caller asked for, so those stay exact.
  */
 export function chooseKnots(
-  table: TriangleTable, classes: WettingClasses, zMin: number, zMax: number, required: number[], maxKnots: number,
+  table: TriangleTable, classes: WettingClasses, escape: Float64Array | null, zMin: number, zMax: number, required: number[], maxKnots: number,
 ): KnotChoice {
   const inRange = required.filter((h) => h > zMin && h < zMax);
   const corners = new BoundedNumberSet(maxKnots);
@@ -68,21 +69,20 @@ export function chooseKnots(
     corners.add(table.sortedZ[3 * t]!);
     corners.add(table.sortedZ[3 * t + 1]!);
     corners.add(table.sortedZ[3 * t + 2]!);
-    const ceiling = classes.ceiling[t]!;
-    if (ceiling !== Infinity) corners.add(ceiling);
+    const e = escape ? escape[t]! : Infinity;
+    if (Number.isFinite(e)) corners.add(e);
   }
   if (!corners.full) {
     return { knots: sortedUnique([zMin, zMax, ...inRange, ...corners.values].filter((z) => z >= zMin && z <= zMax)), complete: true };
   }
   const quarter = Math.max(1, Math.floor(maxKnots / 4));
   const flats = new BoundedNumberSet(quarter);
-  const ceilings = new BoundedNumberSet(quarter);
+  const escapes = new BoundedNumberSet(quarter);
   for (let t = 0; t < table.count; t++) {
     if (table.sortedZ[3 * t] === table.sortedZ[3 * t + 2]) flats.add(table.sortedZ[3 * t]!);
-    const ceiling = classes.ceiling[t]!;
-    if (ceiling !== Infinity) ceilings.add(ceiling);
   }
-  const extras = [...inRange, ...flats.values, ...ceilings.values];
+  if (escape) for (let t = 0; t < table.count; t++) if (Number.isFinite(escape[t]!)) escapes.add(escape[t]!);
+  const extras = [...inRange, ...flats.values, ...escapes.values];
   const even = Math.max(quarter, maxKnots - extras.length);
   const evenKnots: number[] = [];
   for (let k = 0; k <= even; k++) evenKnots.push(k === even ? zMax : zMin + ((zMax - zMin) * k) / even);

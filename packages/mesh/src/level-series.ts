@@ -4,24 +4,34 @@ import type { TriangleTable } from './triangle-table';
 import { wetWithBox, wetWithOutline, type WettingClasses } from './wetting-classes';
 
 /**
- * Quantities that are sums of per-triangle closed forms, as functions of the level h:
- *  fill        resin held with the outline dam: Σ over up-facing faces of shadow × depth(h)
- *  wetted      mould surface touching resin with the outline dam: Σ area × share(h)
- *  wettedBox   what the box dam adds: walls that face the table inside the box
- *  underBox    what the box dam adds below raised undersides: resin on the table under a face
- *              that looks down, while the level is still below that face
- *  trappedBox  free space under such a face once the level has passed it (cut off from the pour)
- * Each is a piecewise polynomial of degree ≤ 3 whose pieces change only at corner heights (and at
- * ceilings), so it is stored as cubic pieces between knots.
+ * Quantities that are sums of per-triangle closed forms, as functions of the level h. With
+ * F = (0, 0, z − h), whose divergence is 1, the free space below h inside a dam is, by the
+ * divergence theorem, the dam's floor area × (h − zMin) plus Σ over the mould's faces of their
+ * signed shadow × mean depth of h over them (the dam walls are vertical and the resin's top has
+ * F = 0, so neither adds anything). Split so that nothing cancels for a mould standing on the table:
+ *  up          Σ over faces that look up of shadow × depth(h): resin standing on them
+ *  down        Σ over raised faces that look down of shadow × (h − zMin − depth(h)): the column
+ *              from the table up to the face (or to h), counted once per face
+ *  trapped     Σ over faces with air held against them of w × ∫ (min(z, h) − e)⁺ over the shadow,
+ *              per unit shadow, with e the air's escape height and w = −(signed shadow): the air
+ *              between the ceiling and the escape height, less what floors inside the pocket take
+ *  sealed      the same with e = zMin, for hollows the pour never reaches
+ *  wetted      mould surface touching resin with dams along the outline: Σ area × share(min(h, e))
+ *  wettedBox   what the box dam adds: walls beside the table outside the mould's shadow
+ * so that, with the dam's floor area A and the shadows' total W (= Σ over faces that look down),
+ * resin(h) = up + down + (A − W)(h − zMin) − trapped − sealed. Each is a piecewise polynomial of
+ * degree ≤ 3 whose pieces change only at corner heights and escape heights, stored as cubic
+ * pieces between knots.
  */
 export const enum LevelQuantity {
-  Fill = 0,
-  Wetted = 1,
-  WettedBox = 2,
-  UnderBox = 3,
-  TrappedBox = 4,
+  Up = 0,
+  Down = 1,
+  Trapped = 2,
+  Sealed = 3,
+  Wetted = 4,
+  WettedBox = 5,
 }
-export const levelQuantityCount = 5;
+export const levelQuantityCount = 6;
 
 export interface LevelSeries {
   /** Ascending; knots[0] is the mould's lowest z, the last its highest z. */
@@ -31,7 +41,7 @@ export interface LevelSeries {
   /** Per quantity: value at the top knot and slope above it. */
   endValue: Float64Array;
   endSlope: Float64Array;
-  /** True when the knots hold every corner height and ceiling: each piece is then the exact polynomial. */
+  /** True when the knots hold every corner height and escape height: each piece is then the exact polynomial. */
   complete: boolean;
   /** When not complete: a bound on the fill's interpolation error on each piece (mm³). */
   fillPieceErrorMm3: Float32Array | null;
@@ -59,7 +69,8 @@ const shortRange = 4;
  * are evaluated directly. The cost is O(triangles + points), however many points a tall wall spans.
  */
 export function sampleLevels(
-  points: Float64Array, table: TriangleTable, classes: WettingClasses, zMin: number, cornerShadow: Float64Array | null = null,
+  points: Float64Array, table: TriangleTable, classes: WettingClasses, escape: Float64Array | null, zMin: number,
+  cornerShadow: Float64Array | null = null,
 ): LevelSamples {
   const n = points.length;
   const size = levelQuantityCount * n;
@@ -93,6 +104,7 @@ export function sampleLevels(
   };
 
   // The triangle being added; one object reused so the helpers below are created once.
+  // `down` only for raised faces: one lying on the table has no column under it.
   const tri = { z0: 0, z1: 0, z2: 0, shadowArea: 0, area: 0, up: false, down: false, wetQ: -1, wetEnd: 0 };
   const { atLeast, above } = knotLocator(points);
   // Each vertex's place among the points, found once: a vertex is shared by about six triangles.
@@ -114,14 +126,11 @@ export function sampleLevels(
     const slope = right ? slopeRight : slopeLeft;
     if (tri.up) {
       const v = tri.shadowArea * below.depth, dv = tri.shadowArea * below.share;
-      value[LevelQuantity.Fill * n + k]! += v; slope[LevelQuantity.Fill * n + k]! += dv;
+      value[LevelQuantity.Up * n + k]! += v; slope[LevelQuantity.Up * n + k]! += dv;
     }
     if (tri.down) {
-      const head = h - zMin;
-      const v1 = tri.shadowArea * (1 - below.share) * head, d1 = tri.shadowArea * (1 - below.share - below.shareSlope * head);
-      const v2 = tri.shadowArea * (head * below.share - below.depth), d2 = tri.shadowArea * head * below.shareSlope;
-      value[LevelQuantity.UnderBox * n + k]! += v1; slope[LevelQuantity.UnderBox * n + k]! += d1;
-      value[LevelQuantity.TrappedBox * n + k]! += v2; slope[LevelQuantity.TrappedBox * n + k]! += d2;
+      const v = tri.shadowArea * (h - zMin - below.depth), dv = tri.shadowArea * (1 - below.share);
+      value[LevelQuantity.Down * n + k]! += v; slope[LevelQuantity.Down * n + k]! += dv;
     }
     if (tri.wetQ >= 0 && wetToo) {
       const v = tri.area * below.share, dv = tri.area * below.shareSlope;
@@ -162,16 +171,12 @@ export function sampleLevels(
         depth = lowerDepth + passed * (1 - (upperSpan2 + upperSpan * e + e * e) / upper3);
       }
       if (up) {
-        const v = shadowArea * depth, dv = shadowArea * share, at = LevelQuantity.Fill * n + k;
+        const v = shadowArea * depth, dv = shadowArea * share, at = LevelQuantity.Up * n + k;
         valueLeft[at]! += v; slopeLeft[at]! += dv; valueRight[at]! += v; slopeRight[at]! += dv;
       }
       if (down) {
-        const head = h - zMin;
-        const v1 = shadowArea * (1 - share) * head, d1 = shadowArea * (1 - share - shareSlope * head);
-        const v2 = shadowArea * (head * share - depth), d2 = shadowArea * head * shareSlope;
-        const at1 = LevelQuantity.UnderBox * n + k, at2 = LevelQuantity.TrappedBox * n + k;
-        valueLeft[at1]! += v1; slopeLeft[at1]! += d1; valueLeft[at2]! += v2; slopeLeft[at2]! += d2;
-        valueRight[at1]! += v1; slopeRight[at1]! += d1; valueRight[at2]! += v2; slopeRight[at2]! += d2;
+        const v = shadowArea * (h - zMin - depth), dv = shadowArea * (1 - share), at = LevelQuantity.Down * n + k;
+        valueLeft[at]! += v; slopeLeft[at]! += dv; valueRight[at]! += v; slopeRight[at]! += dv;
       }
       if (wetQ >= 0 && k < wetEnd) {
         const v = area * share, dv = area * shareSlope, at = wetQ * n + k;
@@ -193,21 +198,16 @@ export function sampleLevels(
     setBranch();
     if (tri.up) {
       for (let i = 0; i < 4; i++) quantity[i] = tri.shadowArea * depth[i]!;
-      addRun(LevelQuantity.Fill, from, to, tri.z0);
+      addRun(LevelQuantity.Up, from, to, tri.z0);
     }
     if (tri.down) {
-      // (1 − share)(w + g) and (w + g)·share − depth, with g = z0 − zMin.
-      const s0 = share[0]!, s1 = share[1]!, s2 = share[2]!, g = tri.z0 - zMin;
-      quantity[0] = tri.shadowArea * (1 - s0) * g;
-      quantity[1] = tri.shadowArea * ((1 - s0) - s1 * g);
-      quantity[2] = tri.shadowArea * (-s1 - s2 * g);
-      quantity[3] = tri.shadowArea * -s2;
-      addRun(LevelQuantity.UnderBox, from, to, tri.z0);
-      quantity[0] = tri.shadowArea * (g * s0 - depth[0]!);
-      quantity[1] = tri.shadowArea * (s0 + g * s1 - depth[1]!);
-      quantity[2] = tri.shadowArea * (s1 + g * s2 - depth[2]!);
-      quantity[3] = tri.shadowArea * (s2 - depth[3]!);
-      addRun(LevelQuantity.TrappedBox, from, to, tri.z0);
+      // (w + g) − depth, with g = z0 − zMin.
+      const g = tri.z0 - zMin;
+      quantity[0] = tri.shadowArea * (g - depth[0]!);
+      quantity[1] = tri.shadowArea * (1 - depth[1]!);
+      quantity[2] = -tri.shadowArea * depth[2]!;
+      quantity[3] = -tri.shadowArea * depth[3]!;
+      addRun(LevelQuantity.Down, from, to, tri.z0);
     }
     if (tri.wetQ >= 0) {
       quantity[0] = tri.area * share[0]!; quantity[1] = tri.area * share[1]!; quantity[2] = tri.area * share[2]!; quantity[3] = 0;
@@ -228,13 +228,12 @@ export function sampleLevels(
 
   for (let t = 0; t < table.count; t++) {
     const facing = table.facing[t]!;
-    const wet = classes.wet[t]!;
-    if (facing === 0 && wet === 0) continue;
+    const e = escape ? escape[t]! : Infinity;
+    const wet = e === -Infinity ? 0 : classes.wet[t]!;
     const z0 = table.sortedZ[3 * t]!, z1 = table.sortedZ[3 * t + 1]!, z2 = table.sortedZ[3 * t + 2]!;
+    const up = facing > 0, down = facing < 0 && z2 > zMin;
+    if (!up && !down && wet === 0) continue;
     const shadowArea = Math.abs(table.shadowArea[t]!), area = table.area[t]!;
-    // A ceiling only cuts the face off from wetting; the fill sums are used where there is none.
-    const ceiling = classes.ceiling[t]!;
-    const up = facing > 0, down = facing < 0;
     const wetQ = wet & wetWithOutline ? LevelQuantity.Wetted : wet & wetWithBox ? LevelQuantity.WettedBox : -1;
     // i·a: first point at or above the corner; i·b: first point above it.
     const va = table.triangles[3 * t]!, vb = table.triangles[3 * t + 1]!, vc = table.triangles[3 * t + 2]!;
@@ -242,39 +241,47 @@ export function sampleLevels(
     const i0a = Math.min(aa, ab, ac), i2a = Math.max(aa, ab, ac), i1a = aa + ab + ac - i0a - i2a;
     const ba = vertexAbove[va]!, bb = vertexAbove[vb]!, bc = vertexAbove[vc]!;
     const i0b = Math.min(ba, bb, bc), i2b = Math.max(ba, bb, bc), i1b = ba + bb + bc - i0b - i2b;
-    const wetEnd = ceiling === Infinity ? n : atLeast(ceiling);
+    // Above its escape height the face is held dry by air: it stays wet only below that.
+    const wetEnd = e === Infinity ? n : atLeast(e);
     tri.z0 = z0; tri.z1 = z1; tri.z2 = z2; tri.shadowArea = shadowArea; tri.area = area;
     tri.up = up; tri.down = down; tri.wetQ = wetQ; tri.wetEnd = wetEnd;
 
-    if (cornerShadow && up) {
+    if (cornerShadow && (up || down)) {
       // For the error bound: the pieces holding a corner strictly inside them.
       if (i0a > 0 && i0a < n && i0a === i0b) cornerShadow[i0a - 1]! += shadowArea;
       if (i1a > 0 && i1a < n && i1a === i1b && i1a !== i0a) cornerShadow[i1a - 1]! += shadowArea;
       if (i2a > 0 && i2a < n && i2a === i2b && i2a !== i1a) cornerShadow[i2a - 1]! += shadowArea;
     }
-    // Below a face that looks down, before the level reaches it, the table holds resin beneath it.
-    if (down) addLinear(LevelQuantity.UnderBox, 0, i0a, -shadowArea * zMin, shadowArea);
+    // Below a raised face that looks down, the column from the table up to h.
+    if (down) addLinear(LevelQuantity.Down, 0, i0a, -shadowArea * zMin, shadowArea);
     if (z1 > z0) branch(i0b, i1a, setLower);
     if (z2 > z1) branch(i1b, i2a, setUpper);
-    // Above the triangle: fill grows with the whole shadow, the share is 1, trapped space is fixed.
+    // Above the triangle: fill grows with the whole shadow, the share is 1, the column under a raised face is fixed.
     const mean = (z0 + z1 + z2) / 3;
-    if (up) addLinear(LevelQuantity.Fill, i2b, n, -shadowArea * mean, shadowArea);
-    if (down) addLinear(LevelQuantity.TrappedBox, i2b, n, shadowArea * (mean - zMin), 0);
+    if (up) addLinear(LevelQuantity.Up, i2b, n, -shadowArea * mean, shadowArea);
+    if (down) addLinear(LevelQuantity.Down, i2b, n, shadowArea * (mean - zMin), 0);
     if (wetQ >= 0) addLinear(wetQ, i2b, wetEnd, area, 0);
 
     // Corner heights: both limits, directly.
-    for (let k = i0a; k < i0b; k++) { direct(k, false, points[k]! <= ceiling); direct(k, true, points[k]! < ceiling); }
-    if (z1 !== z0) for (let k = i1a; k < i1b; k++) { direct(k, false, points[k]! <= ceiling); direct(k, true, points[k]! < ceiling); }
-    if (z2 !== z1) for (let k = i2a; k < i2b; k++) { direct(k, false, points[k]! <= ceiling); direct(k, true, points[k]! < ceiling); }
-    // At the ceiling itself the face is still wet from below, no longer from above.
-    if (wetQ >= 0 && ceiling !== Infinity && ceiling !== z0 && ceiling !== z1 && ceiling !== z2) {
-      for (let k = wetEnd; k < n && points[k] === ceiling; k++) {
-        triangleBelow(z0, z1, z2, ceiling, false, below);
-        valueLeft[wetQ * n + k]! += area * below.share;
-        slopeLeft[wetQ * n + k]! += area * below.shareSlope;
+    for (let k = i0a; k < i0b; k++) { direct(k, false, points[k]! <= e); direct(k, true, points[k]! < e); }
+    if (z1 !== z0) for (let k = i1a; k < i1b; k++) { direct(k, false, points[k]! <= e); direct(k, true, points[k]! < e); }
+    if (z2 !== z1) for (let k = i2a; k < i2b; k++) { direct(k, false, points[k]! <= e); direct(k, true, points[k]! < e); }
+    if (wetQ >= 0 && e !== Infinity) {
+      // At the escape height itself the face is still wet from below; above it, what was wet stays so.
+      triangleBelow(z0, z1, z2, e, false, below);
+      const frozen = area * below.share;
+      let k = wetEnd;
+      for (; k < n && points[k] === e; k++) {
+        if (e !== z0 && e !== z1 && e !== z2) {
+          valueLeft[wetQ * n + k]! += frozen;
+          slopeLeft[wetQ * n + k]! += area * below.shareSlope;
+        }
+        valueRight[wetQ * n + k]! += frozen;
       }
+      addLinear(wetQ, k, n, frozen, 0);
     }
   }
+  if (escape) addHeldAir(points, table, escape, zMin, samples, linear, atLeast, above, cornerShadow);
 
   for (let q = 0; q < levelQuantityCount; q++) {
     const base = q * 4 * (n + 1), linearBase = q * 2 * (n + 1);
@@ -290,6 +297,54 @@ export function sampleLevels(
     }
   }
   return samples;
+}
+
+/**
+ * The trapped and sealed quantities: for each face with air held against it, above its escape
+ * height e (zMin for a sealed hollow), w·[(h − e) + depth(e) − depth(h)] = w·∫(min(z, h) − e)⁺ per
+ * unit shadow, with w = −(signed shadow). Only faces of pockets take part, so they are evaluated
+ * point by point between e and their top corner; above that the term is a constant.
+ */
+function addHeldAir(
+  points: Float64Array, table: TriangleTable, escape: Float64Array, zMin: number, samples: LevelSamples, linear: Float64Array,
+  atLeast: (z: number) => number, above: (z: number, from: number) => number, cornerShadow: Float64Array | null,
+): void {
+  const n = points.length;
+  const { valueLeft, slopeLeft, valueRight, slopeRight } = samples;
+  const at: TriangleBelow = { share: 0, shareSlope: 0, depth: 0 };
+  for (let t = 0; t < table.count; t++) {
+    const e = escape[t]!;
+    if (e === Infinity || table.facing[t] === 0) continue;
+    const q = e === -Infinity ? LevelQuantity.Sealed : LevelQuantity.Trapped;
+    const s = e === -Infinity ? zMin : e;
+    const w = -table.shadowArea[t]!;
+    const z0 = table.sortedZ[3 * t]!, z1 = table.sortedZ[3 * t + 1]!, z2 = table.sortedZ[3 * t + 2]!;
+    triangleBelow(z0, z1, z2, s, false, at);
+    const depthAtS = at.depth;
+    const from = atLeast(s), top = above(z2, atLeast(z2));
+    for (let k = from; k < Math.min(top, n); k++) {
+      const h = points[k]!;
+      for (const right of [false, true]) {
+        if (h === s && !right) continue;
+        triangleBelow(z0, z1, z2, h, right, at);
+        const value = right ? valueRight : valueLeft, slope = right ? slopeRight : slopeLeft;
+        value[q * n + k]! += w * (h - s + depthAtS - at.depth);
+        slope[q * n + k]! += w * (1 - at.share);
+      }
+    }
+    const mean = (z0 + z1 + z2) / 3;
+    if (top < n) {
+      const base = q * 2 * (n + 1), constant = w * (mean - s + depthAtS);
+      linear[base + top]! += constant; linear[base + n]! -= constant;
+    }
+    if (cornerShadow) {
+      // The slope jumps at e and bends between the corners: at most 2|w| of slope change in all.
+      for (const z of [s, z0, z1, z2]) {
+        const k = atLeast(z);
+        if (z >= s && k > 0 && k < n && points[k] !== z) cornerShadow[k - 1]! += 2 * Math.abs(w);
+      }
+    }
+  }
 }
 
 /** Cubic Hermite pieces through exact values and one-sided slopes: exact wherever the function is one cubic. */
@@ -361,11 +416,11 @@ function fillPieceBounds(knots: Float64Array, cornerShadow: Float64Array): Float
 
 /** Builds the series on the given knots, with the fill's error bound per piece when they are not complete. */
 export function buildLevelSeries(
-  knots: Float64Array, complete: boolean, table: TriangleTable, classes: WettingClasses, zMin: number,
+  knots: Float64Array, complete: boolean, table: TriangleTable, classes: WettingClasses, escape: Float64Array | null, zMin: number,
 ): LevelSeries {
   const n = knots.length;
   const cornerShadow = complete ? null : new Float64Array(n - 1);
-  const samples = sampleLevels(knots, table, classes, zMin, cornerShadow);
+  const samples = sampleLevels(knots, table, classes, escape, zMin, cornerShadow);
   const coefficients = hermitePieces(knots, samples);
   const endValue = new Float64Array(levelQuantityCount);
   const endSlope = new Float64Array(levelQuantityCount);

@@ -8,6 +8,8 @@ export interface RayIntervals {
   /** Intervals of ray r are [bottom, top] pairs intervals[2·start[r] ..  2·start[r + 1]). */
   start: Uint32Array;
   intervals: Float64Array;
+  /** The triangle each interval's bottom lies on (-1: the floor under a surface open underneath). */
+  bottomTriangles: Int32Array;
   /** 1 where the crossings of the ray paired up. */
   balanced: Uint8Array;
 }
@@ -40,7 +42,7 @@ export function castRays(
   for (let r = 0; r < rays; r++) cellRays[fill[cellOf(xs[r]!, ys[r]!)]!++] = r;
 
   let capacity = 4 * rays + 64;
-  let hitRay = new Uint32Array(capacity), hitZ = new Float64Array(capacity), hitUp = new Uint8Array(capacity);
+  let hitRay = new Uint32Array(capacity), hitZ = new Float64Array(capacity), hitUp = new Uint8Array(capacity), hitTri = new Int32Array(capacity);
   let hits = 0;
   if (rays > 0) {
     for (let t = 0; t < table.count; t++) {
@@ -63,7 +65,9 @@ export function castRays(
               const r2 = new Uint32Array(capacity); r2.set(hitRay); hitRay = r2;
               const z2 = new Float64Array(capacity); z2.set(hitZ); hitZ = z2;
               const u2 = new Uint8Array(capacity); u2.set(hitUp); hitUp = u2;
+              const t2 = new Int32Array(capacity); t2.set(hitTri); hitTri = t2;
             }
+            hitTri[hits] = t;
             hitRay[hits] = r;
             hitZ[hits] = planeZAt(positions, triangles, t, px, py);
             hitUp[hits] = table.facing[t]! > 0 ? 1 : 0;
@@ -82,29 +86,35 @@ export function castRays(
     rayStart[r + 1]! += rayStart[r]!;
   }
   const at = rayStart.slice(0, rays);
-  const z = new Float64Array(hits), up = new Uint8Array(hits);
+  const z = new Float64Array(hits), up = new Uint8Array(hits), tri = new Int32Array(hits);
   for (let h = 0; h < hits; h++) {
     const w = at[hitRay[h]!]!++;
     z[w] = hitZ[h]!;
     up[w] = hitUp[h]!;
+    tri[w] = hitTri[h]!;
   }
   const start = new Uint32Array(rays + 1);
   const balanced = new Uint8Array(rays);
-  const out = new Float64Array(2 * busiest);
+  const out = new Float64Array(2 * busiest), outTri = new Int32Array(busiest);
   const pairing: Pairing = { intervals: 0, balanced: true };
   let intervals = new Float64Array(Math.max(16, hits + 16));
+  let bottoms = new Int32Array(Math.ceil(intervals.length / 2));
   let written = 0;
   for (let r = 0; r < rays; r++) {
-    pairCrossings(z, up, rayStart[r]!, rayStart[r + 1]!, floorZ, out, 0, pairing);
+    pairCrossings(z, up, tri, rayStart[r]!, rayStart[r + 1]!, floorZ, out, 0, outTri, pairing);
     balanced[r] = pairing.balanced ? 1 : 0;
     if (2 * (written + pairing.intervals) > intervals.length) {
       const grown = new Float64Array(Math.max(2 * intervals.length, 2 * (written + pairing.intervals)));
       grown.set(intervals);
       intervals = grown;
+      const grownBottoms = new Int32Array(Math.ceil(grown.length / 2));
+      grownBottoms.set(bottoms);
+      bottoms = grownBottoms;
     }
     for (let k = 0; k < 2 * pairing.intervals; k++) intervals[2 * written + k] = out[k]!;
+    for (let k = 0; k < pairing.intervals; k++) bottoms[written + k] = outTri[k]!;
     written += pairing.intervals;
     start[r + 1] = written;
   }
-  return { start, intervals: intervals.slice(0, 2 * written), balanced };
+  return { start, intervals: intervals.slice(0, 2 * written), bottomTriangles: bottoms.slice(0, written), balanced };
 }

@@ -14,7 +14,8 @@ export type MeshErrorCode =
   | 'level_invalid'
   | 'levels_not_ascending'
   | 'dam_invalid'
-  | 'analysis_invalid';
+  | 'analysis_invalid'
+  | 'analysis_outdated';
 
 export interface MeshError {
   /** Stable snake_case code for programs. */

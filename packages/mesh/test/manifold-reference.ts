@@ -1,6 +1,7 @@
 /**
  * manifold-3d as an outside reference for the tests: an independent geometry kernel computes the
- * volume of "dam prism minus mould", which for a mould without overhangs is the fill.
+ * volume of "dam prism minus mould" below the level, which is the fill where no air is held, and
+ * takes out the held air as a boolean of each pocket's own solid.
  */
 import Module from 'manifold-3d';
 import type { CavityMesh } from '../src/prepare-mesh';
@@ -31,4 +32,22 @@ export function outlineDamResin(kernel: ManifoldKernel, mesh: CavityMesh, levelM
   const solid = solidOf(kernel, mesh);
   const prism = solid.project().extrude(levelMm - mesh.bboxMm.min[2]).translate([0, 0, mesh.bboxMm.min[2]]);
   return prism.subtract(solid);
+}
+
+/**
+ * Box dam with air held in pockets: (bounding-box prism − mould) below h, minus each pocket's own
+ * solid (the space between its ceiling and its spill height, built from its closed form) below h.
+ */
+export function boxDamResinWithoutPockets(kernel: ManifoldKernel, mesh: CavityMesh, levelMm: number, pockets: CavityMesh[]): number {
+  const free = boxDamResin(kernel, mesh, levelMm);
+  let volume = free.volume();
+  for (const pocket of pockets) {
+    const solid = solidOf(kernel, pocket);
+    const below = solid.trimByPlane([0, 0, -1], -levelMm);
+    volume -= below.volume();
+    below.delete();
+    solid.delete();
+  }
+  free.delete();
+  return volume;
 }

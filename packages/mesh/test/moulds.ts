@@ -234,3 +234,48 @@ export function torus(R: number, r: number, n: number, m: number): GeneratedMesh
   }
   return w.done();
 }
+
+/**
+ * A 200 × 120 × 50 block with a closed T-slot pocket: a 60 mm wide channel from z 10 to 30 under
+ * a 20 mm wide slot from z 30 up to the top, both 80 mm long. The channel's ceilings either side
+ * of the slot are flat at z 30: air under them slides to the slot and out.
+ */
+export function tSlotBlock(): GeneratedMesh {
+  return cellSolid([0, 70, 90, 110, 130, 200], [0, 20, 100, 120], [0, 10, 30, 50],
+    (i, j, k) => !((k === 1 && j === 1 && i >= 1 && i <= 3) || (k === 2 && j === 1 && i === 2)));
+}
+
+/**
+ * A 100 × 80 base plate (z 0 to 3) with a 80 × 60 board (z 10 to 15) standing on four 10 × 10
+ * legs at its corners. With `recess`, the board's underside has a 60 × 40 pocket 2 mm deep
+ * (z 10 to 12) cut up into it: a concave underside.
+ */
+export function boardOnLegs(recess: boolean): GeneratedMesh {
+  return cellSolid([0, 10, 20, 80, 90, 100], [0, 10, 20, 60, 70, 80], [0, 3, 10, 12, 15], (i, j, k) => {
+    const underBoard = i >= 1 && i <= 3 && j >= 1 && j <= 3;
+    if (k === 0) return true;
+    if (k === 1) return (i === 1 || i === 3) && (j === 1 || j === 3);
+    if (k === 2) return underBoard && !(recess && i === 2 && j === 2);
+    return underBoard;
+  });
+}
+
+/** The held-air pocket of boardOnLegs(true): the recess itself. */
+export function boardRecess(): GeneratedMesh {
+  return cellSolid([20, 80], [20, 60], [10, 12], () => true);
+}
+
+/**
+ * A bell: an inverted cup (outer radius 20, rim at z 10, top at z 35) whose inside is a cone
+ * frustum, radius 15 at the rim narrowing to 12 at its ceiling (z 30), floating over a 60 × 60
+ * plate (z 0 to 4) centred under it. Both are closed surfaces of `segments` sides.
+ */
+export function bellOverPlate(segments: number): GeneratedMesh {
+  const cup = revolvedSolid([[0, 30], [12, 30], [15, 10], [20, 10], [20, 35], [0, 35]], segments);
+  return combined(cellSolid([-30, 30], [-30, 30], [0, 4], () => true), cup);
+}
+
+/** The held-air pocket of bellOverPlate: the frustum inside the cup, from the rim (z 10) to its ceiling. */
+export function bellInside(segments: number): GeneratedMesh {
+  return revolvedSolid([[0, 10], [15, 10], [12, 30], [0, 30]], segments);
+}

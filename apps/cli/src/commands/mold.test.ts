@@ -27,8 +27,11 @@ beforeAll(async () => {
   await write('pocket-in-yup.stl', encodeStlBinary(mapped(pocket, (x, y, z) => [x / 25.4, z / 25.4, -y / 25.4])));
   await write('bowl.stl', encodeStlBinary(revolvedPocketBlock({ halfSide: 15, bottomZ: 0, topZ: 20, profile: [[0, 12], [6, 12], [10, 20]], segments: 64 })));
   await write('broken.stl', encodeStlBinary(pocket).subarray(0, 300));
-  await write('undercut.stl', encodeStlBinary(cellSolid([0, 5, 15, 25, 35, 40], [0, 5, 15, 25, 35, 40], [0, 5, 10, 20],
-    (i, j, k) => !((k === 2 && i === 2 && j === 2) || (k === 1 && i >= 1 && i <= 3 && j >= 1 && j <= 3)))));
+  // A shaft into a wider chamber whose ceiling has a 5 × 5 × 2 mm recess away from the shaft:
+  // resin fills the chamber, the recess holds its air (cuboid, CRC: 50 mm³).
+  const xs = [0, 5, 10, 15, 25, 35, 40];
+  await write('undercut.stl', encodeStlBinary(cellSolid(xs, xs, [0, 5, 10, 12, 20], (i, j, k) =>
+    !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)))));
 });
 
 interface Report {
@@ -81,10 +84,12 @@ describe('gelpoint mold --json', () => {
     expect(ascii.curve![0]!.volumeMm3).toBe(0);
   });
 
-  it('warns about trapped air under an overhang', async () => {
+  it('warns about air held in a recess of an overhang’s ceiling, and fills under the overhang', async () => {
     const out = await json([files['undercut.stl']!, '--level', '20']);
-    expect(out.method).toBe('columns');
-    expect(out.fill.trappedAirMm3).toBeGreaterThan(3900);
+    expect(out.method).toBe('exact');
+    expect(out.fill.trappedAirMm3).toBeCloseTo(50, 6);
+    // Chamber 30 × 30 × 5 and shaft 10 × 10 × 10.
+    expect(out.fill.volumeMm3).toBeCloseTo(5500, 6);
     expect(out.warnings.map((w) => w.code)).toContain('trapped_air');
   });
 });
