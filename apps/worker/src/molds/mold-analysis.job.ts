@@ -1,3 +1,4 @@
+import { cavityAnalysisVersion } from '@gelpoint/mesh';
 import { tsWorker } from '../ts-worker';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
@@ -97,7 +98,24 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
 }
 
 /** Every queued mould, one after another. */
+/**
+ * Moulds whose stored analysis an older engine wrote go back in the queue: their reports were computed by rules the
+ * engine no longer follows (the liquid fill replaced the drop-straight-down rule in version 2).
+ */
+export async function requeueOutdatedMolds(ds: DataSource, logger: Logger): Promise<number> {
+  const rows: unknown[] = await ds.query(
+    `UPDATE molds SET status = 'queued', attempts = 0, progress = 0, locked_until = NULL, updated_at = now()
+      WHERE status = 'ready' AND COALESCE((analysis->>'version')::int, 0) < $1
+      RETURNING id`,
+    [cavityAnalysisVersion],
+  );
+  const n = Array.isArray(rows[0]) ? (rows[0] as unknown[]).length : rows.length;
+  if (n > 0) logger.info({ moulds: n }, 'moulds analysed by an older engine queued again');
+  return n;
+}
+
 export async function analyseQueuedMolds(ds: DataSource, s: MoldAnalysisSettings, logger: Logger): Promise<number> {
+  await requeueOutdatedMolds(ds, logger);
   let n = 0;
   while (await analyseNextMold(ds, s, logger)) n++;
   return n;

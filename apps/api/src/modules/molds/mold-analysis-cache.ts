@@ -1,4 +1,5 @@
 import type { EntityManager } from 'typeorm';
+import { MOLD_ANALYSIS_CHANNEL } from '@gelpoint/db';
 import { readAnalysis, type CavityModel } from '@gelpoint/mesh';
 import { AppError, notFound } from '../../http/errors';
 import { RecentlyUsed } from './recently-used';
@@ -26,6 +27,12 @@ export class AnalysisCache {
     if (hit) return hit;
     const [{ analysis }] = (await m.query('SELECT analysis FROM molds WHERE id = $1', [moldId])) as [{ analysis: unknown }];
     const decoded = readAnalysis(analysis);
+    if (!decoded.ok && decoded.error.code === 'analysis_outdated') {
+      // Written by an older engine: the worker analyses it again from the stored file.
+      await m.query(`UPDATE molds SET status = 'queued', attempts = 0, progress = 0, locked_until = NULL, updated_at = now() WHERE id = $1 AND status = 'ready'`, [moldId]);
+      await m.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, moldId]);
+      throw new AppError('conflict', 'mold_not_ready', 'the cavity report is being worked out again with the current engine; try again in a moment');
+    }
     if (!decoded.ok) throw new AppError('conflict', 'analysis_unreadable', 'the stored analysis of this mould cannot be read; upload the mould again');
     this.entries.set(key, decoded.value);
     return decoded.value;
