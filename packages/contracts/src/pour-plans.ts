@@ -2,24 +2,36 @@ import { z } from 'zod';
 import { Id, Timestamp, UserRef, requiredText } from './common';
 import { Dam } from './molds';
 
-const positive = (label: string, max: number) =>
-  z.number({ message: `${label} must be a number` }).gt(0, { message: `${label} must be above zero` }).max(max, { message: `${label} must be at most ${max}` });
-const nonNegative = (label: string, max: number) =>
-  z.number({ message: `${label} must be a number` }).min(0, { message: `${label} must be zero or more` }).max(max, { message: `${label} must be at most ${max}` });
+const positive = (label: string, max: number, unit = '') =>
+  z
+    .number({ message: `${label} must be a number${unit ? ` (${unit})` : ''}` })
+    .gt(0, { message: `${label} must be above zero` })
+    .max(max, { message: `${label} must be at most ${max}${unit ? ` ${unit}` : ''}` });
+const nonNegative = (label: string, max: number, unit = '') =>
+  z
+    .number({ message: `${label} must be a number${unit ? ` (${unit})` : ''}` })
+    .min(0, { message: `${label} must be zero or more` })
+    .max(max, { message: `${label} must be at most ${max}${unit ? ` ${unit}` : ''}` });
+
+// The largest pieces a resin shop pours: a slab of 6 m × 3 m, resin at most half a metre deep (common practice
+// for the biggest river tables); anything larger is a typing slip, not a piece.
+const maxLengthMm = 6_000;
+const maxWidthMm = 3_000;
+const maxDepthMm = 500;
 
 export const QuickShape = z.discriminatedUnion(
   'kind',
   [
-    z.object({ kind: z.literal('rectangle'), lengthMm: positive('length', 10_000), widthMm: positive('width', 10_000), depthMm: positive('depth', 2_000) }).strict(),
-    z.object({ kind: z.literal('channel'), lengthMm: positive('length', 10_000), widthMm: positive('width', 10_000), depthMm: positive('depth', 2_000) }).strict(),
-    z.object({ kind: z.literal('cylinder'), diameterMm: positive('diameter', 10_000), depthMm: positive('depth', 2_000) }).strict(),
+    z.object({ kind: z.literal('rectangle'), lengthMm: positive('length', maxLengthMm, 'mm'), widthMm: positive('width', maxWidthMm, 'mm'), depthMm: positive('depth', maxDepthMm, 'mm') }).strict(),
+    z.object({ kind: z.literal('channel'), lengthMm: positive('length', maxLengthMm, 'mm'), widthMm: positive('width', maxWidthMm, 'mm'), depthMm: positive('depth', maxDepthMm, 'mm') }).strict(),
+    z.object({ kind: z.literal('cylinder'), diameterMm: positive('diameter', maxWidthMm, 'mm'), depthMm: positive('depth', maxDepthMm, 'mm') }).strict(),
     z
       .object({
         kind: z.literal('area_depth'),
-        areaMm2: positive('area', 1e8),
-        averageDepthMm: positive('average depth', 2_000),
-        maxDepthMm: positive('deepest point', 2_000).optional(),
-        perimeterMm: positive('perimeter', 100_000).optional(),
+        areaMm2: positive('area', maxLengthMm * maxWidthMm, 'mm²'),
+        averageDepthMm: positive('average depth', maxDepthMm, 'mm'),
+        maxDepthMm: positive('deepest point', maxDepthMm, 'mm').optional(),
+        perimeterMm: positive('perimeter', 2 * (maxLengthMm + maxWidthMm), 'mm').optional(),
       })
       .strict(),
   ],
@@ -49,12 +61,18 @@ export const PourPlanInput = z
       .strict()
       .nullable()
       .default(null),
-    overPourPct: nonNegative('over-pour', 100).default(5),
-    cupWaste: z.union([z.object({ massG: nonNegative('cup waste', 10_000) }).strict(), z.object({ volumeMl: nonNegative('cup waste', 10_000) }).strict()]).default({ massG: 5 }),
+    overPourPct: nonNegative('over-pour', 50, '%').default(5),
+    // A scraped cup keeps grams, not kilograms: half a kilogram is already far more than any cup holds back.
+    cupWaste: z.union([z.object({ massG: nonNegative('cup waste', 500, 'g') }).strict(), z.object({ volumeMl: nonNegative('cup waste', 500, 'mL') }).strict()]).default({ massG: 5 }),
     shopTempC: z.number({ message: 'shop temperature must be a number (°C)' }).min(-30).max(60),
     shopAir: z.object({ rhPct: z.number().min(0).max(100), surfaceTempC: z.number().min(-30).max(80) }).strict().nullable().default(null),
     wood: z
-      .object({ lengthMm: positive('wood length', 10_000), widthMm: positive('wood width', 5_000), thicknessMm: positive('wood thickness', 1_000), pricePerBoardFoot: nonNegative('price per board foot', 100_000) })
+      .object({
+        lengthMm: positive('wood length', maxLengthMm, 'mm'),
+        widthMm: positive('wood width', maxWidthMm, 'mm'),
+        thicknessMm: positive('wood thickness', maxDepthMm, 'mm'),
+        pricePerBoardFoot: nonNegative('price per board foot', 100_000),
+      })
       .strict()
       .nullable()
       .default(null),

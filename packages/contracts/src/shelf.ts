@@ -37,14 +37,54 @@ const resinSystemFields = {
   shelfLifeMonths: positive('shelf life', 600),
 };
 
-const resinSystemRules = <T extends z.ZodType<{ recoatWindow?: { earliestH: number; latestH: number }; minWorkTempC?: number; maxWorkTempC?: number; demoldH?: number; fullCureH?: number }>>(s: T) =>
+type TimesToCheck = {
+  recoatWindow?: { earliestH: number; latestH: number };
+  minWorkTempC?: number;
+  maxWorkTempC?: number;
+  potLifeMin?: number;
+  gelTimeH?: number;
+  tackFreeH?: number;
+  demoldH?: number;
+  readyToMachineH?: number | null;
+  fullCureH?: number;
+};
+
+/** A cure runs in one order: gel, tack-free, demold, machinable, full cure. A data sheet typed out of order is refused. */
+const cureOrder: { field: keyof TimesToCheck; words: string }[] = [
+  { field: 'gelTimeH', words: 'gel' },
+  { field: 'tackFreeH', words: 'tack-free' },
+  { field: 'demoldH', words: 'demold' },
+  { field: 'readyToMachineH', words: 'ready to machine' },
+  { field: 'fullCureH', words: 'full cure' },
+];
+
+function timesOutOfOrder(v: TimesToCheck): { path: string; message: string } | null {
+  const given = cureOrder.filter(({ field }) => typeof v[field] === 'number') as { field: keyof TimesToCheck; words: string }[];
+  for (let i = 0; i + 1 < given.length; i++) {
+    const a = given[i]!;
+    const b = given[i + 1]!;
+    const ta = v[a.field] as number;
+    const tb = v[b.field] as number;
+    if (ta > tb) return { path: b.field, message: `${b.words} (${tb} h) comes before ${a.words} (${ta} h); a cure reaches gel, tack-free, demold, machining and full cure in that order — check the data sheet` };
+  }
+  return null;
+}
+
+const resinSystemRules = <T extends z.ZodType<TimesToCheck>>(s: T) =>
   s
     .refine((v) => !v.recoatWindow || v.recoatWindow.earliestH <= v.recoatWindow.latestH, { message: 'the recoat window must open before it closes', path: ['recoatWindow'] })
     .refine((v) => v.minWorkTempC === undefined || v.maxWorkTempC === undefined || v.minWorkTempC < v.maxWorkTempC, {
       message: 'the minimum working temperature must be below the maximum',
       path: ['minWorkTempC'],
     })
-    .refine((v) => v.demoldH === undefined || v.fullCureH === undefined || v.demoldH <= v.fullCureH, { message: 'demold cannot come after full cure', path: ['demoldH'] });
+    .refine((v) => v.potLifeMin === undefined || v.gelTimeH === undefined || v.potLifeMin <= v.gelTimeH * 60, {
+      message: 'the pot life cannot be longer than the gel time: a mixed cup gels no later than a thin film does',
+      path: ['potLifeMin'],
+    })
+    .superRefine((v, ctx) => {
+      const wrong = timesOutOfOrder(v);
+      if (wrong) ctx.addIssue({ code: 'custom', message: wrong.message, path: [wrong.path] });
+    });
 
 export const ResinSystemInput = resinSystemRules(z.object(resinSystemFields).strict());
 export type ResinSystemInput = z.input<typeof ResinSystemInput>;

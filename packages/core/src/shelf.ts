@@ -116,8 +116,22 @@ export function validateResinSystem(product: ResinSystem): Result<ResinSystem> {
     issues.push({ field: 'minWorkTempC', message: `minWorkTempC (${product.minWorkTempC} °C) must be below maxWorkTempC (${product.maxWorkTempC} °C).` });
   }
   if (!Number.isFinite(product.referenceTempC)) issues.push({ field: 'referenceTempC', message: 'referenceTempC must be a temperature in °C.' });
-  if (product.demoldH > product.fullCureH) {
-    issues.push({ field: 'demoldH', message: `demoldH (${product.demoldH} h) must not be later than fullCureH (${product.fullCureH} h).` });
+  // A cure reaches these in order (gel, tack-free, demold, machinable, full cure); a sheet typed out of order is refused.
+  const order: [keyof ResinSystem, number | undefined][] = [
+    ['gelTimeH', product.gelTimeH],
+    ['tackFreeH', product.tackFreeH],
+    ['demoldH', product.demoldH],
+    ['readyToMachineH', product.readyToMachineH],
+    ['fullCureH', product.fullCureH],
+  ];
+  const given = order.filter((entry): entry is [keyof ResinSystem, number] => typeof entry[1] === 'number');
+  for (let i = 0; i + 1 < given.length; i++) {
+    const [earlierField, earlier] = given[i]!;
+    const [laterField, later] = given[i + 1]!;
+    if (earlier > later) issues.push({ field: laterField, message: `${laterField} (${later} h) must not come before ${earlierField} (${earlier} h).` });
+  }
+  if (product.potLifeMin > product.gelTimeH * 60) {
+    issues.push({ field: 'potLifeMin', message: `potLifeMin (${product.potLifeMin} min) must not be longer than gelTimeH (${product.gelTimeH} h).` });
   }
   if (product.readyToMachineH !== undefined && !(product.readyToMachineH > 0)) {
     issues.push({ field: 'readyToMachineH', message: `readyToMachineH must be above zero when given, got ${product.readyToMachineH}.` });

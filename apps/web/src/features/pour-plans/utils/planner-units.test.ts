@@ -180,7 +180,8 @@ describe('checkPlanner in a US shop', () => {
       { unitSystem: 'us' },
     );
     expect(!checked.ok && checked.fieldErrors).toMatchObject({
-      'cavity.shape.lengthMm': 'length must be at most 393.7 in',
+      // 6000 mm = 236.2204… in (NIST SP 811: 1 in = 25.4 mm), shown inwards to hundredths.
+      'cavity.shape.lengthMm': 'length must be at most 236.22 in',
       fillLevelMm: 'fill level must be a number (in)',
       shopTempC: `shop temperature must be at most ${fahrenheitOf(60)} °F`,
       'shopAir.surfaceTempC': `the surface temperature must be a number from \u2212${-fahrenheitOf(-30)} to ${fahrenheitOf(80)} °F`,
@@ -189,8 +190,8 @@ describe('checkPlanner in a US shop', () => {
 
   it('states the cup-waste range in ounces', () => {
     const checked = checkPlanner(typedTray((v) => (v.cupWaste = { unit: 'g', amount: Number.NaN })), testPieceId, { unitSystem: 'us' });
-    // 10 000 g / 28.349523125 g/oz = 352.739… oz, shown inwards to hundredths.
-    expect(!checked.ok && checked.fieldErrors['cupWaste.amount']).toBe(`cup waste must be a number from 0 to ${Math.floor((10_000 / gPerOz) * 100) / 100} oz`);
+    // 500 g / 28.349523125 g/oz = 17.637… oz (NIST SP 811), shown inwards to hundredths.
+    expect(!checked.ok && checked.fieldErrors['cupWaste.amount']).toBe(`cup waste must be a number from 0 to ${Math.floor((500 / gPerOz) * 100) / 100} oz`);
   });
 
   it('says the shown units by name', () => {

@@ -34,8 +34,8 @@ describe('checkPlanner', () => {
     if (checked.ok) return;
     expect(checked.fieldErrors).toMatchObject({
       name: 'name is required',
-      'cavity.shape.lengthMm': 'length must be a number',
-      'cavity.shape.depthMm': 'depth must be a number',
+      'cavity.shape.lengthMm': 'length must be a number (mm)',
+      'cavity.shape.depthMm': 'depth must be a number (mm)',
       fillLevelMm: 'fill level must be a number (mm)',
       'deepPour.resinSystemId': 'choose the product for the deep pour',
       shopTempC: 'shop temperature must be a number (°C)',
@@ -56,7 +56,7 @@ describe('checkPlanner', () => {
     values.cupWaste = { unit: 'mL', amount: Number.NaN };
     values.sealCoat.absorption = '';
     const checked = checkPlanner(values, testPieceId);
-    expect(!checked.ok && checked.fieldErrors['cupWaste.amount']).toBe('cup waste must be a number from 0 to 10000');
+    expect(!checked.ok && checked.fieldErrors['cupWaste.amount']).toBe('cup waste must be a number from 0 to 500');
     expect(!checked.ok && checked.fieldErrors['sealCoat.absorptionFactor']).toBe('choose how much the wood soaks up, or enter a factor from 1 to 5');
   });
 
@@ -64,7 +64,7 @@ describe('checkPlanner', () => {
     const values = complete();
     values.overPourPct = 150;
     const checked = checkPlanner(values, testPieceId);
-    expect(!checked.ok && checked.fieldErrors.overPourPct).toBe('over-pour must be at most 100');
+    expect(!checked.ok && checked.fieldErrors.overPourPct).toBe('over-pour must be at most 50 %');
   });
 
   it('maps contract paths onto form fields', () => {
@@ -104,7 +104,7 @@ describe('plannerResolver', () => {
     const resolve = plannerResolver(testPieceId);
     const options = { fields: {}, shouldUseNativeValidation: false } as const;
     const bad = await resolve(newPlannerValues(''), undefined, options);
-    expect((bad.errors as { cavity?: { shape?: { lengthMm?: { message?: string } } } }).cavity?.shape?.lengthMm?.message).toBe('length must be a number');
+    expect((bad.errors as { cavity?: { shape?: { lengthMm?: { message?: string } } } }).cavity?.shape?.lengthMm?.message).toBe('length must be a number (mm)');
     const good = await resolve(complete(), undefined, options);
     expect(good.errors).toEqual({});
     expect((good.values as { pieceId?: string }).pieceId).toBe(testPieceId);

@@ -21,14 +21,14 @@ const plainerWords: Record<string, string> = {
   shopTempC: 'the shop temperature must be a number from −30 to 60 °C',
   'shopAir.rhPct': 'relative humidity must be a number from 0 to 100 %',
   'shopAir.surfaceTempC': 'the surface temperature must be a number from −30 to 80 °C',
-  'cupWaste.amount': 'cup waste must be a number from 0 to 10000',
+  'cupWaste.amount': 'cup waste must be a number from 0 to 500',
 };
 
 // The same, for a form in inches and °F: the contract's limits (°C, g, mL) said in the units it shows.
 const plainerRanges: Record<string, { words: string; min: number; max: number }> = {
   shopTempC: { words: 'the shop temperature must be a number', min: -30, max: 60 },
   'shopAir.surfaceTempC': { words: 'the surface temperature must be a number', min: -30, max: 80 },
-  'cupWaste.amount': { words: 'cup waste must be a number', min: 0, max: 10_000 },
+  'cupWaste.amount': { words: 'cup waste must be a number', min: 0, max: 500 },
 };
 
 // zod's stock sentences, and the id check the maker never sees as an id.

@@ -30,6 +30,7 @@ export const testSealCoat: ResinSystem = {
   mixRatio: { a: 100, b: 45, basis: 'weight' },
   potLifeMin: 20,
   fullCureH: 72,
+  tackFreeH: 10,
   demoldH: 12,
   maxBatchG: 400,
 };
