@@ -65,6 +65,9 @@ export function parseObj(bytes: Uint8Array, options: ParseObjOptions = {}): Resu
       line += ' ';
     }
 
+    // A comment runs from # to the end of the line, after a statement too.
+    const hash = line.indexOf('#');
+    if (hash >= 0) line = line.slice(0, hash);
     let i = 0;
     const n = line.length;
     while (i < n && isBlank(line.charCodeAt(i))) i++;

@@ -80,6 +80,8 @@ export function unpackEntry(bytes: Uint8Array, entry: ZipEntry, budget: ArchiveB
   const packed = data.value;
   const { limits } = budget;
   let unpacked = 0;
+  /** Packed bytes handed to the inflater so far. */
+  let consumed = 0;
   let refusal: Result<void> | null = null;
   const take = (chunk: Uint8Array): void => {
     if (refusal || chunk.length === 0) return;
@@ -87,6 +89,7 @@ export function unpackEntry(bytes: Uint8Array, entry: ZipEntry, budget: ArchiveB
     budget.unpackedBytes += chunk.length;
     if (unpacked > limits.maxPartBytes) refusal = tooLarge(entry.name, megabytes(limits.maxPartBytes));
     else if (budget.unpackedBytes > limits.maxTotalBytes) refusal = tooLarge(entry.name, `${megabytes(limits.maxTotalBytes)} with the other parts`);
+    else if (entry.method === 8 && unpacked > ratioSlackBytes && unpacked > limits.maxRatio * consumed) refusal = tooDense(entry.name, limits.maxRatio);
     else {
       const r = sink(chunk);
       if (!r.ok) refusal = r;
@@ -100,9 +103,8 @@ export function unpackEntry(bytes: Uint8Array, entry: ZipEntry, budget: ArchiveB
   const inflater = new Inflate((chunk) => take(chunk));
   try {
     for (let at = 0; at < packed.length && !refusal; at += stepBytes) {
-      const to = Math.min(packed.length, at + stepBytes);
-      inflater.push(packed.subarray(at, to), to === packed.length);
-      if (!refusal && unpacked > ratioSlackBytes && unpacked > limits.maxRatio * to) refusal = tooDense(entry.name, limits.maxRatio);
+      consumed = Math.min(packed.length, at + stepBytes);
+      inflater.push(packed.subarray(at, consumed), consumed === packed.length);
     }
     if (packed.length === 0) inflater.push(new Uint8Array(0), true);
   } catch {
