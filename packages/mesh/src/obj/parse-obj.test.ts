@@ -168,6 +168,24 @@ describe('parseObj: the grammar shops meet', () => {
     });
   }
 
+  it('reads in time proportional to its length: 200,000 lines in well under two seconds', () => {
+    // A scan from each line to the end of the file would take minutes here.
+    const rows = 250;
+    const lines: string[] = [];
+    for (let j = 0; j <= rows; j++) for (let i = 0; i <= rows; i++) lines.push(`v ${i} ${j} ${(i * j) % 7}`);
+    for (let j = 0; j < rows; j++) {
+      for (let i = 0; i < rows; i++) {
+        const a = j * (rows + 1) + i + 1;
+        lines.push(`f ${a} ${a + 1} ${a + rows + 2} ${a + rows + 1}`);
+      }
+    }
+    const bytes = text(lines.join('\n'));
+    const start = performance.now();
+    const r = unwrap(parseObj(bytes));
+    expect(performance.now() - start).toBeLessThan(2000);
+    expect(r.triangleCount).toBe(2 * rows * rows);
+  });
+
   it('refuses more triangles than the cap, counting what polygons become', () => {
     const quad = 'v 0 0 0\nv 1 0 0\nv 1 1 0\nv 0 1 0\nf 1 2 3 4\n';
     expect(unwrap(parseObj(text(quad), { maxTriangles: 2 })).triangleCount).toBe(2);

@@ -1,4 +1,4 @@
-import { fail, ok, type Result } from '../result';
+import { fail, ok, type MeshError, type Result } from '../result';
 import { defaultMaxTriangles, type TriangleSoup } from '../stl/triangle-soup';
 import { triangulatePolygon } from './triangulate-polygon';
 
@@ -16,6 +16,12 @@ export interface ParseObjOptions {
 
 const freeFormKeywords = new Set(['cstype', 'curv', 'curv2', 'surf', 'deg', 'bmat', 'step', 'parm', 'trim', 'hole', 'scrv', 'sp', 'con']);
 
+const enum Char { Tab = 9, LineFeed = 10, Return = 13, Space = 32, Hash = 35, Plus = 43, Minus = 45, Dot = 46, Slash = 47, Zero = 48, Nine = 57, Backslash = 92 }
+
+function isBlank(c: number): boolean {
+  return c === Char.Space || (c >= Char.Tab && c <= Char.Return && c !== Char.LineFeed);
+}
+
 class GrowingArray<T extends Float64Array | Int32Array> {
   length = 0;
   constructor(public data: T, private readonly make: (n: number) => T) {}
@@ -29,128 +35,195 @@ class GrowingArray<T extends Float64Array | Int32Array> {
   }
 }
 
-const isBlank = (c: number): boolean => c === 32 || c === 9 || c === 13 || c === 11 || c === 12;
+/** A refusal raised while reading a statement; caught in parseObj. */
+class Refusal {
+  constructor(readonly error: MeshError) {}
+}
 
-export function parseObj(bytes: Uint8Array, options: ParseObjOptions = {}): Result<TriangleSoup> {
-  const maxTriangles = options.maxTriangles ?? defaultMaxTriangles;
-  const maxVertices = Math.max(1024, 3 * maxTriangles);
-  const text = new TextDecoder('utf-8').decode(bytes);
-  const vertices = new GrowingArray(new Float64Array(3 * 1024), (n) => new Float64Array(n));
-  // Each face: its corner count, then its corners (0-based, or ≥ vertex count for a forward reference checked at the end).
-  const faces = new GrowingArray(new Int32Array(4 * 1024), (n) => new Int32Array(n));
-  let faceCount = 0;
-  let triangleCount = 0;
-  let freeForm = false;
-  let lineNumber = 0;
-  // Faces may name vertices written after them; the largest number is checked once all are read.
-  let largestIndex = -1;
-  let largestIndexLine = 0;
+class ObjReader {
+  readonly vertices = new GrowingArray(new Float64Array(3 * 1024), (n) => new Float64Array(n));
+  /** Each face: its corner count, then its corners (0-based; forward references are checked at the end). */
+  readonly faces = new GrowingArray(new Int32Array(4 * 1024), (n) => new Int32Array(n));
+  faceCount = 0;
+  triangleCount = 0;
+  freeForm = false;
+  lineNumber = 0;
+  /** Faces may name vertices written after them; the largest number is checked once all are read. */
+  largestIndex = -1;
+  largestIndexLine = 0;
+  private s = '';
+  private i = 0;
+  private end = 0;
 
-  const invalid = (what: string): Result<never> => fail('obj_invalid', `Line ${lineNumber} of the OBJ ${what}; export the mould again as OBJ (or STL) and upload that file.`);
+  constructor(private readonly maxTriangles: number, private readonly maxVertices: number) {}
 
-  let pos = 0;
-  while (pos < text.length) {
-    // One logical line: physical lines joined where one ends in a backslash.
-    let line = '';
-    for (;;) {
-      let end = text.indexOf('\n', pos);
-      if (end < 0) end = text.length;
-      lineNumber++;
-      let stop = end;
-      while (stop > pos && isBlank(text.charCodeAt(stop - 1))) stop--;
-      const continued = stop > pos && text.charCodeAt(stop - 1) === 92;
-      line += text.slice(pos, continued ? stop - 1 : stop);
-      pos = end + 1;
-      if (!continued || pos >= text.length) break;
-      line += ' ';
+  refuse(what: string): never {
+    throw new Refusal({ code: 'obj_invalid', message: `Line ${this.lineNumber} of the OBJ ${what}; export the mould again as OBJ (or STL) and upload that file.` });
+  }
+
+  /** The next word of the statement as [start, end) in the string, or false at its end. */
+  private nextWord(): boolean {
+    const s = this.s;
+    let i = this.i;
+    while (i < this.end && isBlank(s.charCodeAt(i))) i++;
+    this.i = i;
+    return i < this.end;
+  }
+
+  private wordEnd(): number {
+    const s = this.s;
+    let j = this.i;
+    while (j < this.end && !isBlank(s.charCodeAt(j))) j++;
+    return j;
+  }
+
+  /** One statement: s[start, end), comments already cut off. */
+  statement(s: string, start: number, end: number): void {
+    this.s = s;
+    this.i = start;
+    this.end = end;
+    if (!this.nextWord()) return;
+    const keyEnd = this.wordEnd();
+    const k0 = s.charCodeAt(this.i);
+    const length = keyEnd - this.i;
+    this.i = keyEnd;
+    if (length === 1 && k0 === 118 /* v */) this.vertex();
+    else if (k0 === 102 /* f */ && (length === 1 || (length === 2 && s.charCodeAt(keyEnd - 1) === 111 /* fo */))) this.face();
+    else if (freeFormKeywords.has(s.slice(keyEnd - length, keyEnd))) this.freeForm = true;
+  }
+
+  private vertex(): void {
+    if (this.vertices.length / 3 >= this.maxVertices) {
+      throw new Refusal({ code: 'too_many_triangles', message: `The OBJ holds more than ${this.maxVertices} vertices, more than this service reads; decimate the mesh in your CAD program and upload it again.` });
     }
-
-    // A comment runs from # to the end of the line, after a statement too.
-    const hash = line.indexOf('#');
-    if (hash >= 0) line = line.slice(0, hash);
-    let i = 0;
-    const n = line.length;
-    while (i < n && isBlank(line.charCodeAt(i))) i++;
-    if (i >= n || line.charCodeAt(i) === 35) continue;
-    let keyEnd = i;
-    while (keyEnd < n && !isBlank(line.charCodeAt(keyEnd))) keyEnd++;
-    const keyword = line.slice(i, keyEnd);
-    i = keyEnd;
-    const nextToken = (): string | null => {
-      while (i < n && isBlank(line.charCodeAt(i))) i++;
-      if (i >= n) return null;
-      const start = i;
-      while (i < n && !isBlank(line.charCodeAt(i))) i++;
-      return line.slice(start, i);
-    };
-
-    if (keyword === 'v') {
-      if (vertices.length / 3 >= maxVertices) {
-        return fail('too_many_triangles', `The OBJ holds more than ${maxVertices} vertices, more than this service reads; decimate the mesh in your CAD program and upload it again.`);
-      }
-      for (let k = 0; k < 3; k++) {
-        const token = nextToken();
-        if (token === null) return invalid('has a vertex with fewer than three coordinates');
-        const c = token.charCodeAt(0);
-        const value = (c >= 48 && c <= 57) || c === 43 || c === 45 || c === 46 ? Number(token) : Number.NaN;
-        if (Number.isNaN(value)) return invalid(`has the coordinate "${token.slice(0, 40)}", which is not a number`);
-        if (!Number.isFinite(Math.fround(value))) return invalid(`has the coordinate "${token.slice(0, 40)}", beyond the ±3.4e38 a coordinate can hold`);
-        vertices.push(value);
-      }
-    } else if (keyword === 'f' || keyword === 'fo') {
-      const countAt = faces.length;
-      faces.push(0);
-      let corners = 0;
-      const known = vertices.length / 3;
-      for (let token = nextToken(); token !== null; token = nextToken()) {
-        const slash = token.indexOf('/');
-        const number = slash < 0 ? token : token.slice(0, slash);
-        const v = /^[+-]?\d+$/.test(number) ? Number(number) : Number.NaN;
-        if (!Number.isSafeInteger(v) || v === 0) {
-          return invalid(`has the face corner "${token.slice(0, 40)}"; corners are vertex numbers from 1 (or negative, counting back from the latest vertex)`);
-        }
-        let index: number;
-        if (v < 0) {
-          index = known + v;
-          if (index < 0) return invalid(`has the face corner ${v}, but only ${known} vertices come before it`);
-        } else {
-          index = v - 1;
-          if (index > largestIndex) { largestIndex = index; largestIndexLine = lineNumber; }
-        }
-        if (index > 0x7fffffff) return invalid(`has the face corner ${v}, beyond any vertex this service reads`);
-        faces.push(index);
-        corners++;
-      }
-      if (corners < 3) return invalid(`has a face with ${corners} corner${corners === 1 ? '' : 's'}; a face needs at least three`);
-      faces.data[countAt] = corners;
-      faceCount++;
-      triangleCount += corners - 2;
-      if (triangleCount > maxTriangles) {
-        return fail('too_many_triangles', `The OBJ holds more than ${maxTriangles} triangles, the most this service accepts; decimate the mesh in your CAD program and upload it again.`);
-      }
-    } else if (freeFormKeywords.has(keyword)) {
-      freeForm = true;
+    const s = this.s;
+    for (let k = 0; k < 3; k++) {
+      if (!this.nextWord()) this.refuse('has a vertex with fewer than three coordinates');
+      const start = this.i;
+      const stop = this.wordEnd();
+      this.i = stop;
+      const c = s.charCodeAt(start);
+      const word = s.slice(start, stop);
+      const value = (c >= Char.Zero && c <= Char.Nine) || c === Char.Plus || c === Char.Minus || c === Char.Dot ? Number(word) : Number.NaN;
+      if (Number.isNaN(value)) this.refuse(`has the coordinate "${word.slice(0, 40)}", which is not a number`);
+      if (!Number.isFinite(Math.fround(value))) this.refuse(`has the coordinate "${word.slice(0, 40)}", beyond the ±3.4e38 a coordinate can hold`);
+      this.vertices.push(value);
     }
   }
 
-  const vertexCount = vertices.length / 3;
-  if (faceCount === 0) {
-    if (freeForm) return fail('obj_no_faces', 'The OBJ describes its shape with free-form curves and surfaces, which Gelpoint does not read; export the mould as a polygon mesh (OBJ with faces, or STL).');
+  private face(): void {
+    const s = this.s;
+    const countAt = this.faces.length;
+    this.faces.push(0);
+    let corners = 0;
+    const known = this.vertices.length / 3;
+    while (this.nextWord()) {
+      const start = this.i;
+      const stop = this.wordEnd();
+      this.i = stop;
+      // The vertex number is the part before the first slash: digits with an optional sign.
+      let j = start;
+      const negative = s.charCodeAt(j) === Char.Minus;
+      if (negative || s.charCodeAt(j) === Char.Plus) j++;
+      let v = 0;
+      const digitsFrom = j;
+      for (; j < stop; j++) {
+        const c = s.charCodeAt(j);
+        if (c < Char.Zero || c > Char.Nine) break;
+        v = 10 * v + (c - Char.Zero);
+      }
+      if (j === digitsFrom || (j < stop && s.charCodeAt(j) !== Char.Slash) || v === 0 || !Number.isSafeInteger(v)) {
+        this.refuse(`has the face corner "${s.slice(start, stop).slice(0, 40)}"; corners are vertex numbers from 1 (or negative, counting back from the latest vertex)`);
+      }
+      let index: number;
+      if (negative) {
+        index = known - v;
+        if (index < 0) this.refuse(`has the face corner -${v}, but only ${known} vertices come before it`);
+      } else {
+        index = v - 1;
+        if (index > 0x7fffffff) this.refuse(`has the face corner ${v}, beyond any vertex this service reads`);
+        if (index > this.largestIndex) { this.largestIndex = index; this.largestIndexLine = this.lineNumber; }
+      }
+      this.faces.push(index);
+      corners++;
+    }
+    if (corners < 3) this.refuse(`has a face with ${corners} corner${corners === 1 ? '' : 's'}; a face needs at least three`);
+    this.faces.data[countAt] = corners;
+    this.faceCount++;
+    this.triangleCount += corners - 2;
+    if (this.triangleCount > this.maxTriangles) {
+      throw new Refusal({ code: 'too_many_triangles', message: `The OBJ holds more than ${this.maxTriangles} triangles, the most this service accepts; decimate the mesh in your CAD program and upload it again.` });
+    }
+  }
+}
+
+/** End of the statement that starts a line: before a # comment and trailing blanks. */
+function statementEnd(text: string, start: number, end: number): number {
+  let stop = start;
+  while (stop < end && text.charCodeAt(stop) !== Char.Hash) stop++;
+  while (stop > start && isBlank(text.charCodeAt(stop - 1))) stop--;
+  return stop;
+}
+
+export function parseObj(bytes: Uint8Array, options: ParseObjOptions = {}): Result<TriangleSoup> {
+  const maxTriangles = options.maxTriangles ?? defaultMaxTriangles;
+  const reader = new ObjReader(maxTriangles, Math.max(1024, 3 * maxTriangles));
+  const text = new TextDecoder('utf-8').decode(bytes);
+  try {
+    let pos = 0;
+    while (pos < text.length) {
+      let end = text.indexOf('\n', pos);
+      if (end < 0) end = text.length;
+      reader.lineNumber++;
+      let stop = end;
+      while (stop > pos && isBlank(text.charCodeAt(stop - 1))) stop--;
+      if (stop > pos && text.charCodeAt(stop - 1) === Char.Backslash) {
+        // A continued statement: join its lines (rare, so a string of its own is fine).
+        const firstLine = reader.lineNumber;
+        let joined = text.slice(pos, stop - 1);
+        pos = end + 1;
+        while (pos < text.length) {
+          let next = text.indexOf('\n', pos);
+          if (next < 0) next = text.length;
+          reader.lineNumber++;
+          let tail = next;
+          while (tail > pos && isBlank(text.charCodeAt(tail - 1))) tail--;
+          const continued = tail > pos && text.charCodeAt(tail - 1) === Char.Backslash;
+          joined += ` ${text.slice(pos, continued ? tail - 1 : tail)}`;
+          pos = next + 1;
+          if (!continued) break;
+        }
+        const last = reader.lineNumber;
+        reader.lineNumber = firstLine;
+        reader.statement(joined, 0, statementEnd(joined, 0, joined.length));
+        reader.lineNumber = last;
+        continue;
+      }
+      reader.statement(text, pos, statementEnd(text, pos, stop));
+      pos = end + 1;
+    }
+  } catch (err) {
+    if (err instanceof Refusal) return fail(err.error.code, err.error.message);
+    throw err;
+  }
+
+  const vertexCount = reader.vertices.length / 3;
+  if (reader.faceCount === 0) {
+    if (reader.freeForm) return fail('obj_no_faces', 'The OBJ describes its shape with free-form curves and surfaces, which Gelpoint does not read; export the mould as a polygon mesh (OBJ with faces, or STL).');
     return fail('obj_no_faces', vertexCount > 0
       ? `The OBJ has ${vertexCount} vertices but no faces (a point cloud); export the mould as a closed surface with its faces.`
       : 'The OBJ has no vertices and no faces; export the mould again with its surface included.');
   }
-  if (largestIndex >= vertexCount) {
-    lineNumber = largestIndexLine;
-    return invalid(`uses vertex ${largestIndex + 1}, but the file has only ${vertexCount} vertices`);
+  if (reader.largestIndex >= vertexCount) {
+    return fail('obj_invalid', `Line ${reader.largestIndexLine} of the OBJ uses vertex ${reader.largestIndex + 1}, but the file has only ${vertexCount} vertices; export the mould again as OBJ (or STL) and upload that file.`);
   }
 
-  const v = vertices.data;
-  const positions = new Float32Array(9 * triangleCount);
+  const v = reader.vertices.data;
+  const positions = new Float32Array(9 * reader.triangleCount);
   const triangles: number[] = [];
   let written = 0;
-  const f = faces.data;
-  for (let at = 0; at < faces.length;) {
+  const f = reader.faces.data;
+  for (let at = 0; at < reader.faces.length;) {
     const corners = f[at]!;
     triangles.length = 0;
     triangulatePolygon(v, f.subarray(at + 1, at + 1 + corners), triangles);
@@ -161,5 +234,5 @@ export function parseObj(bytes: Uint8Array, options: ParseObjOptions = {}): Resu
     }
     at += 1 + corners;
   }
-  return ok({ positions, triangleCount, format: 'obj', warnings: [] });
+  return ok({ positions, triangleCount: reader.triangleCount, format: 'obj', warnings: [] });
 }

@@ -4,7 +4,8 @@ import earcut from 'earcut';
  * Splits one polygon face into triangles that keep its winding. The corners are laid into the
  * polygon's best-fit plane, whose normal is Newell's (the sum of the edges' cross terms, exact for
  * planar polygons and the least-squares plane's normal in practice for nearly planar ones), and
- * earcut clips ears there, so concave faces come out right. Each triangle is then turned to face
+ * earcut clips ears there (quads are split at the diagonal that lies inside them), so concave
+ * faces come out right. Each triangle is then turned to face
  * the way the polygon faces. A polygon with no area (all corners on a line) is split as a fan: its
  * triangles have no area either and the mesh clean-up drops them.
  *
@@ -29,6 +30,10 @@ export function triangulatePolygon(vertices: Float64Array, corners: ArrayLike<nu
   const length = Math.hypot(nx, ny, nz);
   if (!(length > 0)) {
     fan(corners, out);
+    return;
+  }
+  if (n === 4) {
+    quad(vertices, corners, nx, ny, nz, out);
     return;
   }
   nx /= length; ny /= length; nz /= length;
@@ -60,6 +65,26 @@ export function triangulatePolygon(vertices: Float64Array, corners: ArrayLike<nu
     if (turn >= 0) out.push(corners[i]!, corners[j]!, corners[k]!);
     else out.push(corners[i]!, corners[k]!, corners[j]!);
   }
+}
+
+/** The turn of p about the line from → to, seen along n: negative when p lies clockwise of it. */
+function side(v: Float64Array, from: number, to: number, p: number, nx: number, ny: number, nz: number): number {
+  const ux = v[3 * to]! - v[3 * from]!, uy = v[3 * to + 1]! - v[3 * from + 1]!, uz = v[3 * to + 2]! - v[3 * from + 2]!;
+  const wx = v[3 * p]! - v[3 * from]!, wy = v[3 * p + 1]! - v[3 * from + 1]!, wz = v[3 * p + 2]! - v[3 * from + 2]!;
+  return nx * (uy * wz - uz * wy) + ny * (uz * wx - ux * wz) + nz * (ux * wy - uy * wx);
+}
+
+/**
+ * A quad, the commonest polygon, without earcut: of its two diagonals, AC lies inside exactly when
+ * B and D are on opposite sides of it, seen along the normal (a simple quadrilateral always has
+ * one such diagonal). For a convex quad both do, and AC is taken.
+ */
+function quad(v: Float64Array, corners: ArrayLike<number>, nx: number, ny: number, nz: number, out: number[]): void {
+  const a = corners[0]!, b = corners[1]!, c = corners[2]!, d = corners[3]!;
+  // Wound counter-clockwise about n, B lies clockwise of A→C and D counter-clockwise.
+  if (side(v, a, c, b, nx, ny, nz) < 0 && side(v, a, c, d, nx, ny, nz) > 0) out.push(a, b, c, a, c, d);
+  else if (side(v, b, d, c, nx, ny, nz) < 0 && side(v, b, d, a, nx, ny, nz) > 0) out.push(b, c, d, b, d, a);
+  else out.push(a, b, c, a, c, d);
 }
 
 function fan(corners: ArrayLike<number>, out: number[]): void {

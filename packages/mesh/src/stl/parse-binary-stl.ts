@@ -80,19 +80,26 @@ export function parseBinaryStl(bytes: Uint8Array, maxTriangles: number): Result<
 function readCorners(bytes: Uint8Array, count: number, positions: Float32Array, checkNormals: boolean): number {
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   for (let t = 0; t < count; t++) {
-    const record = binaryHeaderBytes + t * binaryRecordBytes;
+    // Each record: normal (12 bytes), 3 corners, 2 spare.
+    const at = binaryHeaderBytes + t * binaryRecordBytes + 12;
     let finiteCheck = 0;
-    if (checkNormals) {
-      for (let k = 0; k < 3; k++) {
-        const n = view.getFloat32(record + 4 * k, true);
-        finiteCheck += n - n;
-      }
-    }
-    const at = record + 12;
     for (let k = 0; k < 9; k++) {
       const v = view.getFloat32(at + 4 * k, true);
       positions[t * 9 + k] = v;
       finiteCheck += v - v;
+    }
+    if (finiteCheck !== 0) return t;
+  }
+  return checkNormals ? firstNonFiniteNormal(view, count) : -1;
+}
+
+function firstNonFiniteNormal(view: DataView, count: number): number {
+  for (let t = 0; t < count; t++) {
+    const at = binaryHeaderBytes + t * binaryRecordBytes;
+    let finiteCheck = 0;
+    for (let k = 0; k < 3; k++) {
+      const n = view.getFloat32(at + 4 * k, true);
+      finiteCheck += n - n;
     }
     if (finiteCheck !== 0) return t;
   }
