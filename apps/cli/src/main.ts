@@ -9,6 +9,7 @@ const commands: Record<string, () => Promise<{ command: Command }>> = {
 const usage = `gelpoint — cavity, mix and cure numbers from the terminal
 
   gelpoint mold FILE --level L [--units mm|cm|in] [--up x|y|z] [--dam outline|box] [--curve N] [--json]
+      FILE is an STL, 3MF or OBJ; --units defaults to mm, or for a 3MF to the unit the file states
   gelpoint mix --volume-ml V --ratio A:B --by weight|volume --density-a DA --density-b DB [--pigment-pct P] [--json]
   gelpoint cure --readings FILE.csv --ref-temp-c TR --activation-kj-mol E [--min-temp-c TMIN] [--json]
 `;

@@ -1,7 +1,7 @@
 export { parseStl } from './stl/parse-stl';
 export { readMouldFile, detectMouldFormat, type MouldFile, type MouldFormat, type ReadMouldFileOptions } from './mould-file';
 export { read3mf, type Read3mf, type Read3mfOptions } from './threemf/read-3mf';
-export { defaultArchiveLimits, type ArchiveLimits } from './threemf/archive-limits';
+export { archiveLimitsFor, defaultArchiveLimits, type ArchiveLimits } from './threemf/archive-limits';
 export { parseObj, type ParseObjOptions } from './obj/parse-obj';
 export { defaultMaxTriangles, type ParseStlOptions, type TriangleSoup } from './stl/triangle-soup';
 export { encodeStlAscii, encodeStlBinary, type AsciiStlOptions, type StlSource } from './stl/encode-stl';

@@ -63,8 +63,12 @@ export function parseBinaryStl(bytes: Uint8Array, maxTriangles: number): Result<
       : `Triangle ${bad + 1} of the file has a number that is not finite (NaN or infinity), and its header's count (${announced}) does not match its size either, so it is a damaged STL or not an STL at all; export the mould as STL again.`);
   }
   const warnings: MeshWarning[] = [];
-  if (announced !== records) {
-    warnings.push({ code: 'stl_count_mismatch', message: `The STL's header announces ${announced} triangles but the file holds ${records}; all ${records} were read. If the export was cut short, upload the whole file.` });
+  if (announced === 0) {
+    warnings.push({ code: 'stl_count_mismatch', message: `The STL's header gives its triangle count as 0, as some writers leave it; the ${records} triangles the file holds were read.` });
+  } else if (announced < records) {
+    warnings.push({ code: 'stl_count_mismatch', message: `The STL's header announces ${announced} triangles but the file holds ${records}; all ${records} were read.` });
+  } else if (announced > records) {
+    warnings.push({ code: 'stl_count_mismatch', message: `The STL's header announces ${announced} triangles but the file holds only ${records}; those were read. If the export was cut short, upload the whole file.` });
   }
   if (trailing > 0) {
     warnings.push({ code: 'stl_trailing_bytes', message: `The STL has ${trailing} stray byte${trailing === 1 ? '' : 's'} after its last triangle; ${trailing === 1 ? 'it was' : 'they were'} ignored.` });

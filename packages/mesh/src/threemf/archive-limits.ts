@@ -31,6 +31,11 @@ export const defaultArchiveLimits: ArchiveLimits = {
   maxRatio: 100,
 };
 
+/** The limits for a given largest unpacked part: all parts together may take a quarter more. */
+export function archiveLimitsFor(maxPartBytes: number): ArchiveLimits {
+  return { ...defaultArchiveLimits, maxPartBytes, maxTotalBytes: Math.round(1.25 * maxPartBytes) };
+}
+
 /** Below this many unpacked bytes the ratio is not judged: small parts pack unevenly. */
 const ratioSlackBytes = 2 ** 20;
 /** Packed bytes handed to the inflater at a time: at most ~16 MB can come out of one step. */
