@@ -29,11 +29,11 @@ describe('the mould screen in a real browser', () => {
     await measure.getByLabel('Depth (mm)').fill('20');
     await expect.poll(() => measure.getByText('64.0 mL').isVisible()).toBe(true);
 
-    await page.getByRole('link', { name: 'Upload an STL' }).first().click();
+    await page.getByRole('link', { name: 'Upload a mould file' }).first().click();
     await page.waitForURL(/\/moulds\/new$/);
     const name = `E2E pocket block ${Date.now()}`;
     const form = page.getByRole('form', { name: 'Upload a mould' });
-    await form.getByLabel('STL file').setInputFiles({ name: 'pocket-block.stl', mimeType: 'model/stl', buffer: stl.bytes });
+    await form.getByLabel('Mould file').setInputFiles({ name: 'pocket-block.stl', mimeType: 'model/stl', buffer: stl.bytes });
     await expect.poll(() => form.getByText('Read as millimetres, the mould is 100.0 mm × 60.0 mm × 30.0 mm.').isVisible()).toBe(true);
     await form.getByLabel('Name', { exact: true }).fill(name);
     await form.getByRole('button', { name: 'Upload and measure' }).click();
