@@ -41,7 +41,7 @@ const ratioSlackBytes = 2 ** 20;
 /** Packed bytes handed to the inflater at a time: at most ~16 MB can come out of one step. */
 const stepBytes = 16 * 1024;
 
-const megabytes = (n: number): string => `${Math.round(n / 2 ** 20)} MB`;
+const megabytes = (n: number): string => (n < 2 ** 20 ? `${Math.round(n / 1024)} kB` : `${Math.round(n / 2 ** 20)} MB`);
 
 /** Unpacked bytes so far across one archive. */
 export class ArchiveBudget {
@@ -61,7 +61,9 @@ function checkStated(entry: ZipEntry, budget: ArchiveBudget): Result<void> {
   if (entry.method !== 0 && entry.method !== 8) {
     return fail('threemf_unsupported', `The 3MF's part "${entry.name.slice(0, 60)}" is packed with zip method ${entry.method}, but a 3MF may only store or deflate its parts; export the mould again.`);
   }
-  if (entry.compressedSize > limits.maxPackedPartBytes) return tooLarge(entry.name, megabytes(limits.maxPackedPartBytes) + ' packed');
+  if (entry.compressedSize > limits.maxPackedPartBytes) {
+    return fail('threemf_too_large', `The 3MF's part "${entry.name.slice(0, 60)}" is larger than ${megabytes(limits.maxPackedPartBytes)} packed, more than Gelpoint reads from one file; simplify the mesh or export it as binary STL.`);
+  }
   if (entry.uncompressedSize > limits.maxPartBytes) return tooLarge(entry.name, megabytes(limits.maxPartBytes));
   if (budget.unpackedBytes + entry.uncompressedSize > limits.maxTotalBytes) return tooLarge(entry.name, `${megabytes(limits.maxTotalBytes)} with the other parts`);
   if (entry.uncompressedSize > ratioSlackBytes && entry.uncompressedSize > limits.maxRatio * entry.compressedSize) return tooDense(entry.name, limits.maxRatio);

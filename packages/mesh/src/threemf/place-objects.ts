@@ -174,7 +174,8 @@ export function placeObjects(parts: Map<string, ModelPart>, keyOf: (path: string
   }
   const warnings: MeshWarning[] = [];
   if (skippedObjects > 0) {
-    warnings.push({ code: 'threemf_objects_skipped', message: `${skippedObjects} support object${skippedObjects === 1 ? ' was' : 's were'} left out: ${skippedObjects === 1 ? 'it is' : 'they are'} not part of the mould.` });
+    const one = skippedObjects === 1;
+    warnings.push({ code: 'threemf_objects_skipped', message: `${skippedObjects} object${one ? '' : 's'} the 3MF marks as support (or as not part of the body) ${one ? 'was' : 'were'} left out of the mould.` });
   }
   return ok({ positions: written === total ? positions : positions.slice(0, 9 * written), triangleCount: written, warnings });
 }
