@@ -22,10 +22,12 @@ export interface PrepareMeshOptions {
 
 /**
  * The weld tolerance, relative to the bounding box's diagonal. A float32 corner is off by at most
- * 2^-24 ≈ 6e-8 of its coordinate (IEEE 754 binary32), and writers that print 6 or 7 significant
- * digits are off by up to 5e-7 of it, so corners meant to be one point land within about 1e-6 of
- * the model's size of each other. No mould detail is that small: for a 300 mm tray it is 0.3 µm,
- * a hundredth of the finest CNC or print resolution (about 0.01 to 0.05 mm, common practice).
+ * 2^-24 ≈ 6e-8 of its coordinate (IEEE 754 binary32), and a writer that prints seven significant
+ * digits by up to 5e-7 of it, so two copies of one point a model's writer rounded apart land within
+ * about 1e-6 of the model's size of each other (for coordinates no larger than the model). No
+ * mould detail is that small: for a 300 mm tray it is 0.3 µm, a thirtieth or less of the finest CNC
+ * or print resolution (about 0.01 to 0.05 mm, common practice). Only corners on open edges are
+ * welded this way, so a closed surface is never changed by it.
  */
 export const relativeWeldTolerance = 1e-6;
 
