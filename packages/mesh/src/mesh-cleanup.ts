@@ -39,9 +39,10 @@ function unpairedVertices(triangles: Uint32Array, neighbour: Int32Array, vertexC
 }
 
 /**
- * Welds the given vertices to an earlier one within `toleranceMm`, looking in the 27 grid cells
- * around each (cells as wide as the tolerance, so every vertex within reach is in one of them).
- * Returns the vertex each vertex becomes (itself when it stays).
+ * Welds the given vertices to an earlier one within `toleranceMm`. The grid's cells are twice the
+ * tolerance wide, so every vertex within reach of a point lies in its own cell or the neighbour on
+ * the nearer side along each axis: 8 cells to look in. Returns the vertex each vertex becomes
+ * (itself when it stays).
  */
 function weldWithin(positionsMm: Float64Array, candidates: Uint32Array, vertexCount: number, toleranceMm: number): { into: Uint32Array; welded: number } {
   const into = new Uint32Array(vertexCount);
@@ -53,39 +54,40 @@ function weldWithin(positionsMm: Float64Array, candidates: Uint32Array, vertexCo
   const head = new Int32Array(size).fill(-1);
   const next = new Int32Array(n);
   const cell = new Float64Array(3 * n);
-  const inv = 1 / toleranceMm;
-  const hash = (x: number, y: number, z: number): number =>
-    ((Math.imul(x | 0, 0x9e3779b1) ^ Math.imul(y | 0, 0x85ebca77) ^ Math.imul(z | 0, 0xc2b2ae3d)) >>> 0) & mask;
+  const inv = 1 / (2 * toleranceMm);
   const tol2 = toleranceMm * toleranceMm;
   let welded = 0;
   for (let i = 0; i < n; i++) {
     const v = candidates[i]!;
     const px = positionsMm[3 * v]!, py = positionsMm[3 * v + 1]!, pz = positionsMm[3 * v + 2]!;
-    const cx = Math.floor(px * inv), cy = Math.floor(py * inv), cz = Math.floor(pz * inv);
+    const gx = px * inv, gy = py * inv, gz = pz * inv;
+    const cx = Math.floor(gx), cy = Math.floor(gy), cz = Math.floor(gz);
     cell[3 * i] = cx; cell[3 * i + 1] = cy; cell[3 * i + 2] = cz;
+    const ox = gx - cx < 0.5 ? -1 : 1, oy = gy - cy < 0.5 ? -1 : 1, oz = gz - cz < 0.5 ? -1 : 1;
     let found = -1;
-    for (let dx = -1; dx <= 1 && found < 0; dx++) {
-      for (let dy = -1; dy <= 1 && found < 0; dy++) {
-        for (let dz = -1; dz <= 1 && found < 0; dz++) {
-          for (let j = head[hash(cx + dx, cy + dy, cz + dz)]!; j >= 0; j = next[j]!) {
-            if (cell[3 * j] !== cx + dx || cell[3 * j + 1] !== cy + dy || cell[3 * j + 2] !== cz + dz) continue;
-            const w = candidates[j]!;
-            const ex = positionsMm[3 * w]! - px, ey = positionsMm[3 * w + 1]! - py, ez = positionsMm[3 * w + 2]! - pz;
-            if (ex * ex + ey * ey + ez * ez <= tol2) { found = w; break; }
-          }
-        }
+    for (let k = 0; k < 8 && found < 0; k++) {
+      const qx = cx + (k & 1 ? ox : 0), qy = cy + (k & 2 ? oy : 0), qz = cz + (k & 4 ? oz : 0);
+      for (let j = head[cellHash(qx, qy, qz, mask)]!; j >= 0; j = next[j]!) {
+        if (cell[3 * j] !== qx || cell[3 * j + 1] !== qy || cell[3 * j + 2] !== qz) continue;
+        const w = candidates[j]!;
+        const ex = positionsMm[3 * w]! - px, ey = positionsMm[3 * w + 1]! - py, ez = positionsMm[3 * w + 2]! - pz;
+        if (ex * ex + ey * ey + ez * ez <= tol2) { found = w; break; }
       }
     }
     if (found >= 0) {
       into[v] = found;
       welded++;
     } else {
-      const h = hash(cx, cy, cz);
+      const h = cellHash(cx, cy, cz, mask);
       next[i] = head[h]!;
       head[h] = i;
     }
   }
   return { into, welded };
+}
+
+function cellHash(x: number, y: number, z: number, mask: number): number {
+  return ((Math.imul(x | 0, 0x9e3779b1) ^ Math.imul(y | 0, 0x85ebca77) ^ Math.imul(z | 0, 0xc2b2ae3d)) >>> 0) & mask;
 }
 
 /** Triangles whose height over their longest edge is at most the tolerance: no area at the model's resolution. */
