@@ -15,7 +15,7 @@ const errorCodes: readonly MeshErrorCode[] = [
   'level_invalid', 'levels_not_ascending', 'dam_invalid', 'analysis_invalid',
 ];
 // Generous for a loaded 2-core machine; a runaway loop or a quadratic scan blows well past them.
-const readBudgetMs = 300;
+const readBudgetMs = 500;
 const analyzeBudgetMs = 3000;
 
 const text = (s: string): Uint8Array => new TextEncoder().encode(s);

@@ -168,7 +168,7 @@ describe('parseObj: the grammar shops meet', () => {
     });
   }
 
-  it('reads in time proportional to its length: 200,000 lines in well under two seconds', () => {
+  it('reads in time proportional to its length: 200,000 lines in a few seconds at most', () => {
     // A scan from each line to the end of the file would take minutes here.
     const rows = 250;
     const lines: string[] = [];
@@ -182,7 +182,7 @@ describe('parseObj: the grammar shops meet', () => {
     const bytes = text(lines.join('\n'));
     const start = performance.now();
     const r = unwrap(parseObj(bytes));
-    expect(performance.now() - start).toBeLessThan(2000);
+    expect(performance.now() - start).toBeLessThan(5000);
     expect(r.triangleCount).toBe(2 * rows * rows);
   });
 

@@ -44,7 +44,7 @@ describe('3MF zip-bomb limits', () => {
     if (run.value.ok) return;
     expect(run.value.error.code).toBe('threemf_compression_ratio');
     expect(run.value.error.message).toMatch(/more than 100 times its packed size.*zip bomb; export the mould again/);
-    expect(run.ms).toBeLessThan(1000);
+    expect(run.ms).toBeLessThan(1500);
     // The sizes the directory states give it away before anything is unpacked.
     expect(unpackModel(bomb, {}).unpacked).toBe(0);
   });
@@ -59,7 +59,7 @@ describe('3MF zip-bomb limits', () => {
     expect(unpacked).toBeLessThan(17 * 2 ** 20);
     const run = timed(() => read3mf(liar));
     expect(run.value.ok ? '' : run.value.error.code).toBe('threemf_compression_ratio');
-    expect(run.ms).toBeLessThan(1000);
+    expect(run.ms).toBeLessThan(1500);
   });
 
   it('refuses a part whose stated size passes the limit without unpacking anything', () => {
