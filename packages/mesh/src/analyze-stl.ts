@@ -1,9 +1,9 @@
 import { analyzeCavity, type AnalyzeCavityOptions } from './analyze-cavity';
 import type { CavityAnalysis } from './cavity-analysis';
+import type { FileUnits } from './frame';
 import { readMouldFile, type MouldFormat, type ReadMouldFileOptions } from './mould-file';
 import { prepareMesh, type PrepareMeshOptions } from './prepare-mesh';
 import { ok, type Result } from './result';
-import type { FileUnits } from './frame';
 
 export type AnalyzeStlOptions = ReadMouldFileOptions & PrepareMeshOptions & AnalyzeCavityOptions;
 

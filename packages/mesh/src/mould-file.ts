@@ -2,10 +2,10 @@ import { notAMouldMessage, otherFormatOf } from './file-signatures';
 import type { FileUnits } from './frame';
 import { parseObj } from './obj/parse-obj';
 import { fail, ok, type MeshError, type Result } from './result';
-import { isExactBinary, binaryLayout } from './stl/parse-binary-stl';
+import { binaryLayout, isExactBinary } from './stl/parse-binary-stl';
 import { looksLikeAsciiStl, parseStl } from './stl/parse-stl';
 import { defaultMaxTriangles, type TriangleSoup } from './stl/triangle-soup';
-import { onlyWhitespace, looksLikeText } from './text-bytes';
+import { looksLikeText, onlyWhitespace } from './text-bytes';
 import type { ArchiveLimits } from './threemf/archive-limits';
 import { read3mf } from './threemf/read-3mf';
 
