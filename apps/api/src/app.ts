@@ -82,7 +82,7 @@ export function createApp({ ds, config, logger = pino({ level: config.logLevel }
   shelfRoutes(registry, ds);
   const quota = new UploadQuota(config.uploadQuotaBytes);
   const uploadLimit = perMemberLimit(ds, config.uploadsPerHour);
-  const molds = new Molds(ds, new StlChecker(config.maxStlTriangles), quota);
+  const molds = new Molds(ds, new StlChecker(config.maxStlTriangles, config.maxUnpackedBytes), quota);
   moldRoutes(registry, molds, config.maxStlBytes, uploadLimit);
   pourPlanRoutes(registry, new PourPlans(ds, molds.cavityForPlan));
   pourRoutes(registry, new Pours(ds, undefined, quota), new PourLog(ds), uploadLimit);

@@ -18,6 +18,7 @@ const Env = z.object({
   GELPOINT_TRUST_PROXY: z.string().default('loopback'),
   GELPOINT_MAX_STL_MB: z.coerce.number().positive().max(1024).default(100),
   GELPOINT_MAX_STL_TRIANGLES: z.coerce.number().int().positive().max(20_000_000).default(5_000_000),
+  GELPOINT_MAX_UNPACKED_MB: z.coerce.number().positive().max(4096).default(512),
   GELPOINT_UPLOADS_PER_HOUR: z.coerce.number().int().positive().default(60),
   GELPOINT_UPLOAD_QUOTA_MB: z.coerce.number().positive().default(1024),
 });
@@ -37,6 +38,8 @@ export interface Config {
   trustProxy: string;
   maxStlTriangles: number;
   maxStlBytes: number;
+  /** Most bytes a 3MF's model part may unpack to (a zip-bomb guard); all parts together may take a quarter more. */
+  maxUnpackedBytes: number;
   /** Moulds, cure-check photos and log imports each member may send per hour. */
   uploadsPerHour: number;
   /** What each member's stored files (STL and photos) may add up to. */
@@ -79,6 +82,7 @@ export function loadConfig(raw: NodeJS.ProcessEnv = process.env): Config {
     trustProxy: env.GELPOINT_TRUST_PROXY,
     maxStlTriangles: env.GELPOINT_MAX_STL_TRIANGLES,
     maxStlBytes: Math.round(env.GELPOINT_MAX_STL_MB * 1024 * 1024),
+    maxUnpackedBytes: Math.round(env.GELPOINT_MAX_UNPACKED_MB * 1024 * 1024),
     uploadsPerHour: env.GELPOINT_UPLOADS_PER_HOUR,
     uploadQuotaBytes: Math.round(env.GELPOINT_UPLOAD_QUOTA_MB * 1024 * 1024),
   };

@@ -15,6 +15,7 @@ const Env = z.object({
   GELPOINT_MAIL_MAX_ATTEMPTS: z.coerce.number().int().min(1).max(100).default(20),
   GELPOINT_MAIL_LEASE_S: z.coerce.number().int().min(5).default(120),
   GELPOINT_MAX_STL_TRIANGLES: z.coerce.number().int().positive().max(20_000_000).default(5_000_000),
+  GELPOINT_MAX_UNPACKED_MB: z.coerce.number().positive().max(4096).default(512),
   GELPOINT_ANALYSIS_LEASE_S: z.coerce.number().int().min(30).default(600),
   GELPOINT_WORKER_JOBS: z
     .string()
@@ -33,7 +34,8 @@ export interface WorkerConfig {
   publicUrl: string;
   cron: string;
   mail: { batch: number; retryBaseS: number; maxAttempts: number; leaseS: number };
-  molds: { maxTriangles: number; leaseS: number; maxAttempts: number };
+  /** maxUnpackedBytes: the most a 3MF's model part may unpack to (a zip-bomb guard), as the API reads it. */
+  molds: { maxTriangles: number; maxUnpackedBytes: number; leaseS: number; maxAttempts: number };
   logLevel: z.infer<typeof Env>['GELPOINT_LOG_LEVEL'];
 }
 
@@ -49,7 +51,7 @@ export function loadWorkerConfig(raw: NodeJS.ProcessEnv = process.env): WorkerCo
     publicUrl: e.GELPOINT_PUBLIC_URL.replace(/\/$/, ''),
     cron: e.GELPOINT_WORKER_CRON,
     mail: { batch: e.GELPOINT_MAIL_BATCH, retryBaseS: e.GELPOINT_MAIL_RETRY_BASE_S, maxAttempts: e.GELPOINT_MAIL_MAX_ATTEMPTS, leaseS: e.GELPOINT_MAIL_LEASE_S },
-    molds: { maxTriangles: e.GELPOINT_MAX_STL_TRIANGLES, leaseS: e.GELPOINT_ANALYSIS_LEASE_S, maxAttempts: 3 },
+    molds: { maxTriangles: e.GELPOINT_MAX_STL_TRIANGLES, maxUnpackedBytes: Math.round(e.GELPOINT_MAX_UNPACKED_MB * 1024 * 1024), leaseS: e.GELPOINT_ANALYSIS_LEASE_S, maxAttempts: 3 },
     logLevel: e.GELPOINT_LOG_LEVEL,
   };
 }

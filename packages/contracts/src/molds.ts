@@ -1,16 +1,24 @@
 import { z } from 'zod';
 import { Id, Timestamp, text } from './common';
 
+/** The units a maker chooses for a file that carries none (STL, OBJ), or to override a 3MF's own. */
 export const MoldUnits = z.enum(['mm', 'cm', 'in'], { message: 'units must be mm, cm or in' });
+/** The units a stored mould was read in: a 3MF may also state micron (um), metre (m) or foot (ft). */
+export const MoldFileUnits = z.enum(['um', 'mm', 'cm', 'm', 'in', 'ft']);
+/** The mould file's format, told from its content. */
+export const MoldFormat = z.enum(['stl', '3mf', 'obj']);
 export const UpAxis = z.enum(['x', 'y', 'z'], { message: 'up must be x, y or z' });
 export const Dam = z.enum(['outline', 'box'], { message: 'dam must be outline (along the mould) or box (around its bounding box)' });
 export type Dam = z.infer<typeof Dam>;
 export const MoldStatus = z.enum(['queued', 'analysing', 'ready', 'failed']);
 
-/** The text fields of the multipart upload (the file itself is the part named `file`). */
+/**
+ * The text fields of the multipart upload (the file itself, STL, 3MF or OBJ, is the part named
+ * `file`). Without `units`, a 3MF is read in the unit it states and any other file in mm.
+ */
 export const MoldUploadFields = z
   .object({
-    units: MoldUnits.default('mm'),
+    units: MoldUnits.optional(),
     up: UpAxis.default('z'),
     name: text(120, 'name').optional(),
     pieceId: Id.optional(),
@@ -60,7 +68,11 @@ export const MoldView = z.object({
   id: Id,
   name: z.string(),
   fileName: z.string(),
-  units: MoldUnits,
+  format: MoldFormat,
+  /** The units the file's numbers were read in. */
+  units: MoldFileUnits,
+  /** The unit the file itself states (3MF); null for STL and OBJ, which carry none. */
+  fileUnits: MoldFileUnits.nullable(),
   upAxis: UpAxis,
   sizeBytes: z.number().int(),
   sha256: z.string(),

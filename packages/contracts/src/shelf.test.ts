@@ -32,11 +32,12 @@ describe('a resin system’s times in the order a cure reaches them', () => {
   });
 
   it('refuses demold before gel, naming both', () => {
-    expect(messages({ ...sheet, demoldH: 5, tackFreeH: 4 })).toEqual(['tackFreeH: tack-free (4 h) comes before gel (10 h); a cure reaches gel, tack-free, demold, machining and full cure in that order — check the data sheet']);
+    const why = 'tack-free (4 h) comes before gel (10 h); a cure reaches gel, tack-free, demold, machining and full cure in that order — check the data sheet';
+    expect(messages({ ...sheet, demoldH: 5, tackFreeH: 4 })).toEqual([`gelTimeH: ${why}`, `tackFreeH: ${why}`]);
   });
 
   it('refuses ready to machine after full cure, and a pot life longer than the gel time', () => {
-    expect(messages({ ...sheet, readyToMachineH: 200 })[0]).toMatch(/^fullCureH: full cure \(168 h\) comes before ready to machine \(200 h\)/);
+    expect(messages({ ...sheet, readyToMachineH: 200 })[0]).toMatch(/^readyToMachineH: full cure \(168 h\) comes before ready to machine \(200 h\)/);
     expect(messages({ ...sheet, potLifeMin: 700 })[0]).toMatch(/^potLifeMin: the pot life cannot be longer than the gel time/);
   });
 });

@@ -58,14 +58,14 @@ const cureOrder: { field: keyof TimesToCheck; words: string }[] = [
   { field: 'fullCureH', words: 'full cure' },
 ];
 
-function timesOutOfOrder(v: TimesToCheck): { path: string; message: string } | null {
+function timesOutOfOrder(v: TimesToCheck): { paths: string[]; message: string } | null {
   const given = cureOrder.filter(({ field }) => typeof v[field] === 'number') as { field: keyof TimesToCheck; words: string }[];
   for (let i = 0; i + 1 < given.length; i++) {
     const a = given[i]!;
     const b = given[i + 1]!;
     const ta = v[a.field] as number;
     const tb = v[b.field] as number;
-    if (ta > tb) return { path: b.field, message: `${b.words} (${tb} h) comes before ${a.words} (${ta} h); a cure reaches gel, tack-free, demold, machining and full cure in that order — check the data sheet` };
+    if (ta > tb) return { paths: [a.field, b.field], message: `${b.words} (${tb} h) comes before ${a.words} (${ta} h); a cure reaches gel, tack-free, demold, machining and full cure in that order — check the data sheet` };
   }
   return null;
 }
@@ -83,7 +83,8 @@ const resinSystemRules = <T extends z.ZodType<TimesToCheck>>(s: T) =>
     })
     .superRefine((v, ctx) => {
       const wrong = timesOutOfOrder(v);
-      if (wrong) ctx.addIssue({ code: 'custom', message: wrong.message, path: [wrong.path] });
+      // Either time may be the slip: both fields carry the sentence.
+      for (const path of wrong?.paths ?? []) ctx.addIssue({ code: 'custom', message: wrong!.message, path: [path] });
     });
 
 export const ResinSystemInput = resinSystemRules(z.object(resinSystemFields).strict());

@@ -8,6 +8,13 @@ describe('units and up axis', () => {
     expect(mmPerUnit.mm).toBe(1);
   });
 
+  it('knows the other units a 3MF may state: micron, metre and the exact foot (NIST SP 811: 1 ft = 0.3048 m)', () => {
+    expect(mmPerUnit.um).toBe(0.001);
+    expect(mmPerUnit.m).toBe(1000);
+    expect(mmPerUnit.ft).toBe(304.8);
+    expect(mmPerUnit.ft).toBeCloseTo(12 * mmPerUnit.in, 12); // NIST SP 811, appendix B: 1 ft = 12 in
+  });
+
   it('turns each up axis into z with a proper rotation (determinant +1, linear algebra)', () => {
     for (const up of ['x', 'y', 'z'] as const) {
       const columns = [[1, 0, 0], [0, 1, 0], [0, 0, 1]].map(([x, y, z]) => {

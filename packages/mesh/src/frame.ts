@@ -1,14 +1,22 @@
 import { fail, ok, type Result } from './result';
 
-export type FileUnits = 'mm' | 'cm' | 'in';
+/**
+ * The length a file's numbers stand for. A maker picks mm, cm or in for files that carry no unit
+ * (STL, OBJ); a 3MF states its own, which may also be micron (um), metre (m) or foot (ft).
+ */
+export type FileUnits = 'um' | 'mm' | 'cm' | 'm' | 'in' | 'ft';
+/** The units a maker chooses for a file that carries none. */
+export type ChosenUnits = 'mm' | 'cm' | 'in';
 export type UpAxis = 'x' | 'y' | 'z';
 
-/** Millimetres per file unit; 1 in = 25.4 mm exactly (NIST SP 811). */
-export const mmPerUnit: Record<FileUnits, number> = { mm: 1, cm: 10, in: 25.4 };
+/** Millimetres per file unit; 1 in = 25.4 mm and 1 ft = 0.3048 m exactly (NIST SP 811). */
+export const mmPerUnit: Record<FileUnits, number> = { um: 0.001, mm: 1, cm: 10, m: 1000, in: 25.4, ft: 304.8 };
+
+export const fileUnitsList: readonly FileUnits[] = ['um', 'mm', 'cm', 'm', 'in', 'ft'];
 
 export function checkUnits(units: unknown): Result<FileUnits> {
-  if (units === 'mm' || units === 'cm' || units === 'in') return ok(units);
-  return fail('option_invalid', `Units must be mm, cm or in, got "${String(units)}"; say which units the STL was exported in.`);
+  if (typeof units === 'string' && (fileUnitsList as readonly string[]).includes(units)) return ok(units as FileUnits);
+  return fail('option_invalid', `Units must be mm, cm or in (or um, m or ft), got "${String(units)}"; say which units the file was exported in.`);
 }
 
 export function checkUpAxis(up: unknown): Result<UpAxis> {

@@ -1,11 +1,15 @@
 export { parseStl } from './stl/parse-stl';
+export { readMouldFile, detectMouldFormat, type MouldFile, type MouldFormat, type ReadMouldFileOptions } from './mould-file';
+export { read3mf, type Read3mf, type Read3mfOptions } from './threemf/read-3mf';
+export { archiveLimitsFor, defaultArchiveLimits, type ArchiveLimits } from './threemf/archive-limits';
+export { parseObj, type ParseObjOptions } from './obj/parse-obj';
 export { defaultMaxTriangles, type ParseStlOptions, type TriangleSoup } from './stl/triangle-soup';
 export { encodeStlAscii, encodeStlBinary, type AsciiStlOptions, type StlSource } from './stl/encode-stl';
-export { mmPerUnit, type FileUnits, type UpAxis } from './frame';
-export { prepareMesh, type CavityMesh, type MeshTopologyReport, type PrepareMeshOptions } from './prepare-mesh';
+export { fileUnitsList, mmPerUnit, type ChosenUnits, type FileUnits, type UpAxis } from './frame';
+export { prepareMesh, relativeWeldTolerance, type CavityMesh, type MeshTopologyReport, type PrepareMeshOptions } from './prepare-mesh';
 export type { BoundingBox } from './mesh-measures';
 export { analyzeCavity, analysisDefaults, type AnalyzeCavityOptions } from './analyze-cavity';
-export { analyzeStl, type AnalyzeStlOptions } from './analyze-stl';
+export { analyzeMouldFile, analyzeStl, type AnalyzeStlOptions, type MouldFileAnalysis } from './analyze-stl';
 export { readAnalysis } from './analysis-codec';
 export { cavityAnalysisVersion } from './cavity-analysis';
 export { fillAt, curve, layerVolumes, type CavitySource } from './fill-queries';

@@ -71,7 +71,7 @@ describe('prepareMesh: welding and topology', () => {
     const r = prepareMesh(unwrap(parseStl(encodeStlBinary(squashed))));
     expect(r.ok ? '' : r.error.code).toBe('mesh_degenerate');
     const soup = unwrap(parseStl(encodeStlBinary(block)));
-    const badUnits = prepareMesh(soup, { units: 'ft' as never });
+    const badUnits = prepareMesh(soup, { units: 'yd' as never });
     expect(badUnits.ok ? '' : badUnits.error.code).toBe('option_invalid');
     const badUp = prepareMesh(soup, { up: 'w' as never });
     expect(badUp.ok ? '' : badUp.error.message).toMatch(/x, y or z/);

@@ -3,12 +3,22 @@
  * every refusal is a value the API, the CLI and the browser can show as it is.
  */
 export type MeshErrorCode =
+  | 'file_empty'
+  | 'file_not_mould'
   | 'stl_empty'
   | 'stl_truncated'
   | 'stl_not_stl'
   | 'stl_non_finite'
   | 'stl_too_many_triangles'
   | 'stl_no_triangles'
+  | 'threemf_invalid'
+  | 'threemf_no_model'
+  | 'threemf_unsupported'
+  | 'threemf_too_large'
+  | 'threemf_compression_ratio'
+  | 'obj_invalid'
+  | 'obj_no_faces'
+  | 'too_many_triangles'
   | 'mesh_degenerate'
   | 'option_invalid'
   | 'level_invalid'
@@ -35,6 +45,12 @@ export function fail<T = never>(code: MeshErrorCode, message: string): Result<T>
 }
 
 export type MeshWarningCode =
+  | 'stl_count_mismatch'
+  | 'stl_trailing_bytes'
+  | 'threemf_objects_skipped'
+  | 'zero_area_triangles_dropped'
+  | 'duplicate_triangles_dropped'
+  | 'vertices_welded'
   | 'inverted_normals_fixed'
   | 'inconsistent_winding_fixed'
   | 'open_mesh'

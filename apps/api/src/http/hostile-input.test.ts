@@ -1,3 +1,4 @@
+import { zipSync } from 'fflate';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { ZodObject, ZodType } from 'zod';
 import { bearer, useHarness } from '../test-support/harness';
@@ -209,7 +210,9 @@ describe('hostile input on every route', () => {
 describe('hostile files', () => {
   const html = Buffer.from('<!doctype html><html><body><script>alert(document.cookie)</script></body></html>');
   const svg = Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script></svg>');
-  const truncated = stockedMould().subarray(0, 84 + 50 * 3);
+  // Cut inside the fourth triangle: whole records alone would be read (writers leave wrong counts), a cut one cannot be.
+  const truncated = stockedMould().subarray(0, 84 + 50 * 3 + 17);
+  const zipBomb = Buffer.from(zipSync({ '3D/3dmodel.model': new Uint8Array(32 * 2 ** 20).fill(0x20) }));
 
   function upload(path: string, files: { part: string; bytes: Buffer; name: string; type?: string }[], fields: [string, string][] = [], label = ''): Attempt {
     return { label: label || files.map((f) => `${f.part}:${f.name}`).join('+'), method: 'post', url: path, headers: bearer(shop.lead), form: { fields, files }, expect: 'reject' };
@@ -229,6 +232,9 @@ describe('hostile files', () => {
       upload('/api/molds', [{ part: 'file', bytes: stockedMould(), name: 'mould.stl.html', type: 'text/html' }]),
       upload('/api/molds', [{ part: 'file', bytes: truncated, name: 'truncated.stl' }]),
       upload('/api/molds', [{ part: 'file', bytes: Buffer.from('solid x\nfacet normal 0 0 1\nendsolid x\n'), name: 'broken-ascii.stl' }]),
+      upload('/api/molds', [{ part: 'file', bytes: zipBomb, name: 'bomb.3mf' }]),
+      upload('/api/molds', [{ part: 'file', bytes: html, name: 'page.obj' }]),
+      upload('/api/molds', [{ part: 'file', bytes: Buffer.from('v 0 0 0\nf 1 1 1 9\n'), name: 'broken.obj' }]),
       upload('/api/molds', [{ part: 'file', bytes: stockedMould(), name: 'a.stl' }, { part: 'file', bytes: stockedMould(), name: 'b.stl' }]),
       upload('/api/molds', [{ part: 'photo', bytes: stockedMould(), name: 'm.stl' }]),
       upload(checks, [{ part: 'photo', bytes: html, name: 'check.png', type: 'image/png' }], [['stage', 'gelled']]),

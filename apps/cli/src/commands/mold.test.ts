@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { encodeStlAscii, encodeStlBinary } from '@gelpoint/mesh';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { encode3mf, encodeObj, stlWithCount } from '../../../../packages/mesh/test/mould-files';
 import { cellSolid, mapped, revolvedPocketBlock } from '../../../../packages/mesh/test/moulds';
 import { CliError } from '../command';
 import { command } from './mold';
@@ -27,6 +28,12 @@ beforeAll(async () => {
   await write('pocket-in-yup.stl', encodeStlBinary(mapped(pocket, (x, y, z) => [x / 25.4, z / 25.4, -y / 25.4])));
   await write('bowl.stl', encodeStlBinary(revolvedPocketBlock({ halfSide: 15, bottomZ: 0, topZ: 20, profile: [[0, 12], [6, 12], [10, 20]], segments: 64 })));
   await write('broken.stl', encodeStlBinary(pocket).subarray(0, 300));
+  // The same pocket as a 3MF that states inches (NIST SP 811: 1 in = 25.4 mm), as an OBJ of quads,
+  // and as a binary STL whose writer left the triangle count at 0.
+  await write('pocket-in.3mf', encode3mf(pocket, 'inch', 25.4));
+  await write('pocket.obj', encodeObj(pocket, { quads: true, negative: true }));
+  await write('pocket-count0.stl', stlWithCount(pocket, 0));
+  await write('broken.3mf', encode3mf(pocket).subarray(0, 500));
   // A shaft into a wider chamber whose ceiling has a 5 × 5 × 2 mm recess away from the shaft:
   // resin fills the chamber, the recess holds its air (cuboid, CRC: 50 mm³).
   const xs = [0, 5, 10, 15, 25, 35, 40];
@@ -35,6 +42,9 @@ beforeAll(async () => {
 });
 
 interface Report {
+  format: string;
+  units: string;
+  fileUnits: string | null;
   triangles: number;
   watertight: boolean;
   bboxMm: { min: number[]; max: number[] };
@@ -53,7 +63,8 @@ async function json(argv: string[]): Promise<Report> {
 describe('gelpoint mold --json', () => {
   it('prints exactly the report fields', async () => {
     const out = await json([files['pocket.stl']!, '--level', '10']);
-    expect(Object.keys(out)).toEqual(['triangles', 'watertight', 'bboxMm', 'enclosedVolumeMm3', 'fill', 'method', 'estimatedErrorPct', 'warnings']);
+    expect(Object.keys(out)).toEqual(['format', 'units', 'fileUnits', 'triangles', 'watertight', 'bboxMm', 'enclosedVolumeMm3', 'fill', 'method', 'estimatedErrorPct', 'warnings']);
+    expect(out).toMatchObject({ format: 'stl', units: 'mm', fileUnits: null });
     expect(Object.keys(out.fill)).toEqual(['levelMm', 'dam', 'volumeMm3', 'wettedAreaMm2', 'maxDepthMm', 'trappedAirMm3']);
     expect(out.triangles).toBe(pocket.triangleCount);
     expect(out.watertight).toBe(true);
@@ -84,6 +95,30 @@ describe('gelpoint mold --json', () => {
     expect(ascii.curve![0]!.volumeMm3).toBe(0);
   });
 
+  it('reads a 3MF in the unit it states, without --units: the level in inches', async () => {
+    const out = await json([files['pocket-in.3mf']!, '--level', String(10 / 25.4)]);
+    expect(out).toMatchObject({ format: '3mf', units: 'in', fileUnits: 'in' });
+    expect(out.fill.levelMm).toBeCloseTo(10, 9);
+    expect(out.fill.volumeMm3).toBeCloseTo(expectedVolume, 2);
+    expect(out.bboxMm.max[0]! - out.bboxMm.min[0]!).toBeCloseTo(32, 4);
+  });
+
+  it('lets --units override a 3MF’s own unit', async () => {
+    const out = await json([files['pocket-in.3mf']!, '--units', 'mm', '--level', String(10 / 25.4)]);
+    expect(out).toMatchObject({ format: '3mf', units: 'mm', fileUnits: 'in' });
+    expect(out.bboxMm.max[0]! - out.bboxMm.min[0]!).toBeCloseTo(32 / 25.4, 5);
+  });
+
+  it('gives the same fill for the OBJ and for the STL whose count is 0, and says so', async () => {
+    const binary = await json([files['pocket.stl']!, '--level', '10']);
+    const obj = await json([files['pocket.obj']!, '--level', '10']);
+    const count0 = await json([files['pocket-count0.stl']!, '--level', '10']);
+    expect(obj).toMatchObject({ format: 'obj', units: 'mm', fileUnits: null });
+    expect(obj.fill).toEqual(binary.fill);
+    expect(count0.fill).toEqual(binary.fill);
+    expect(count0.warnings.map((w) => w.code)).toEqual(['stl_count_mismatch']);
+  });
+
   it('warns about air held in a recess of an overhang’s ceiling, and fills under the overhang', async () => {
     const out = await json([files['undercut.stl']!, '--level', '20']);
     expect(out.method).toBe('exact');
@@ -95,6 +130,13 @@ describe('gelpoint mold --json', () => {
 });
 
 describe('gelpoint mold, readable', () => {
+  it('names the format and the unit the numbers were read in', async () => {
+    expect(await command([files['pocket.stl']!, '--level', '10'])).toMatch(/file +STL, read in millimetres \(mm\); STL carries no unit/);
+    expect(await command([files['pocket-in.3mf']!, '--level', '0.4'])).toMatch(/file +3MF, read in inches \(in\), as the file states/);
+    expect(await command([files['pocket-in.3mf']!, '--level', '10', '--units', 'mm'])).toMatch(/file +3MF, read in millimetres \(mm\), as asked; the file states inches/);
+    expect(await command([files['pocket.obj']!, '--level', '10', '--units', 'cm'])).toMatch(/file +OBJ, read in centimetres \(cm\); OBJ carries no unit/);
+  });
+
   it('reports millilitres and litres for a metric file', async () => {
     const text = await command([files['pocket.stl']!, '--level', '10']);
     const [, ml, litres] = /resin +([\d.]+) mL \(([\d.]+) L\)/.exec(text) ?? [];
@@ -134,6 +176,7 @@ describe('gelpoint mold, bad input', () => {
     expect(await failure([files['pocket.stl']!, '--level', '3', '--colour', 'red'])).toMatch(/colour/);
     expect(await failure([files['pocket.stl']!, '--level', '3', '--units', 'ft'])).toMatch(/--units must be mm, cm or in/);
     expect(await failure([files['pocket.stl']!, '--level', '3', '--curve', '1'])).toMatch(/--curve/);
-    expect(await failure(['--level', '3'])).toMatch(/STL file/);
+    expect(await failure(['--level', '3'])).toMatch(/mould file, STL, 3MF or OBJ/);
+    expect(await failure([files['broken.3mf']!, '--level', '3'])).toMatch(/^The 3MF's zip structure is damaged/);
   });
 });

@@ -1,7 +1,7 @@
 import { readFile } from 'node:fs/promises';
 import {
-  analyzeStl, curve, fillAt, mmPerUnit, readAnalysis,
-  type CavityFill, type CavityModel, type CurvePoint, type Dam, type FileUnits, type MeshWarning, type UpAxis,
+  analyzeCavity, curve, fillAt, mmPerUnit, prepareMesh, readAnalysis, readMouldFile,
+  type CavityFill, type CavityModel, type CurvePoint, type Dam, type FileUnits, type MeshWarning, type MouldFormat, type UpAxis,
 } from '@gelpoint/mesh';
 import { CliError, numberOption, parseOptions, type Command } from '../command';
 
@@ -20,6 +20,11 @@ const mlPerUsFluidOunce = 29.5735295625;
 const mlPerUsGallon = 3785.411784;
 
 interface MoldReport {
+  format: MouldFormat;
+  /** The units the file's numbers were read in. */
+  units: FileUnits;
+  /** The unit the file states (3MF); null for STL and OBJ. */
+  fileUnits: FileUnits | null;
   triangles: number;
   watertight: boolean;
   bboxMm: { min: [number, number, number]; max: [number, number, number] };
@@ -45,20 +50,34 @@ function figures(value: number): string {
   return value.toFixed(Math.min(decimals, 12));
 }
 
+/** Units as people write them. */
+const unitSymbol: Record<FileUnits, string> = { um: 'µm', mm: 'mm', cm: 'cm', m: 'm', in: 'in', ft: 'ft' };
+const unitName: Record<FileUnits, string> = { um: 'microns', mm: 'millimetres', cm: 'centimetres', m: 'metres', in: 'inches', ft: 'feet' };
+const formatName: Record<MouldFormat, string> = { stl: 'STL', '3mf': '3MF', obj: 'OBJ' };
+
 function volumeText(volumeMm3: number, units: FileUnits): string {
   const ml = volumeMm3 / mm3PerMl;
-  if (units === 'in') return `${figures(ml / mlPerUsFluidOunce)} US fl oz (${figures(ml / mlPerUsGallon)} US gal)`;
+  if (units === 'in' || units === 'ft') return `${figures(ml / mlPerUsFluidOunce)} US fl oz (${figures(ml / mlPerUsGallon)} US gal)`;
   return `${figures(ml)} mL (${figures(ml / 1000)} L)`;
 }
 
-function readable(file: string, report: MoldReport, units: FileUnits, up: UpAxis): string {
+function unitsText(report: MoldReport): string {
+  const read = `${unitName[report.units]} (${unitSymbol[report.units]})`;
+  if (report.fileUnits === null) return `${read}; ${formatName[report.format]} carries no unit`;
+  if (report.fileUnits === report.units) return `${read}, as the file states`;
+  return `${read}, as asked; the file states ${unitName[report.fileUnits]}`;
+}
+
+function readable(file: string, report: MoldReport, up: UpAxis): string {
+  const units = report.units;
   const scale = mmPerUnit[units];
-  const length = (mm: number): string => `${figures(mm / scale)} ${units}`;
-  const area = (mm2: number): string => `${figures(mm2 / (scale * scale))} ${units}²`;
+  const length = (mm: number): string => `${figures(mm / scale)} ${unitSymbol[units]}`;
+  const area = (mm2: number): string => `${figures(mm2 / (scale * scale))} ${unitSymbol[units]}²`;
   const { min, max } = report.bboxMm;
   const f = report.fill;
   const lines = [
     `Cavity report for ${file}`,
+    `  file          ${formatName[report.format]}, read in ${unitsText(report)}`,
     `  mesh          ${report.triangles} triangles, ${report.watertight ? 'watertight' : 'not watertight'}`
       + (report.enclosedVolumeMm3 === null ? '' : `, encloses ${volumeText(report.enclosedVolumeMm3, units)}`),
     `  size          ${[0, 1, 2].map((k) => length(max[k]! - min[k]!)).join(' × ')} (x × y × z, ${up === 'z' ? 'z up' : `file axis ${up} turned to point up`})`,
@@ -78,14 +97,16 @@ function readable(file: string, report: MoldReport, units: FileUnits, up: UpAxis
 }
 
 /**
- * gelpoint mold FILE: the cavity report of a mould's STL at one level. The level is given in the
- * file's units along its up axis, the same numbers the maker reads in the CAD program.
+ * gelpoint mold FILE: the cavity report of a mould file (STL, 3MF or OBJ, told apart by content) at
+ * one level. The level is given in the file's units along its up axis, the same numbers the maker
+ * reads in the CAD program. STL and OBJ carry no unit (mm unless --units says otherwise); a 3MF
+ * states its own, which --units overrides.
  */
 export const command: Command = async (argv) => {
   const { values, positionals } = parseOptions(argv, options, true);
-  if (positionals.length !== 1) throw new CliError(positionals.length === 0 ? 'give the mould\'s STL file (gelpoint mold FILE --level L)' : `give one STL file, got ${positionals.length}`);
+  if (positionals.length !== 1) throw new CliError(positionals.length === 0 ? 'give the mould file, STL, 3MF or OBJ (gelpoint mold FILE --level L)' : `give one mould file, got ${positionals.length}`);
   const file = positionals[0]!;
-  const units = oneOf(values.units, 'units', ['mm', 'cm', 'in'] as const, 'mm');
+  const chosenUnits = values.units === undefined ? undefined : oneOf(values.units, 'units', ['mm', 'cm', 'in'] as const, 'mm');
   const up = oneOf(values.up, 'up', ['x', 'y', 'z'] as const, 'z');
   const dam = oneOf(values.dam, 'dam', ['outline', 'box'] as const, 'outline');
   const level = numberOption(values.level, 'level', { required: true })!;
@@ -101,13 +122,17 @@ export const command: Command = async (argv) => {
     const reason = err instanceof Error && 'code' in err ? String((err as NodeJS.ErrnoException).code) : 'unreadable';
     throw new CliError(`cannot read "${file}" (${reason}); check the path`);
   }
+  const mould = unwrap(readMouldFile(bytes));
+  const units: FileUnits = chosenUnits ?? mould.fileUnits ?? 'mm';
   const levelMm = level * mmPerUnit[units];
-  const analysis = analyzeStl(bytes, { units, up, levelsMm: [levelMm] });
-  if (!analysis.ok) throw new CliError(analysis.error.message);
-  const model: CavityModel = unwrap(readAnalysis(analysis.value));
+  const mesh = unwrap(prepareMesh(mould.soup, { units, up }));
+  const a = unwrap(analyzeCavity(mesh, { levelsMm: [levelMm] }));
+  const model: CavityModel = unwrap(readAnalysis(a));
   const fill = unwrap(fillAt(model, levelMm, dam));
-  const a = analysis.value;
   const report: MoldReport = {
+    format: mould.format,
+    units,
+    fileUnits: mould.fileUnits,
     triangles: a.triangles,
     watertight: a.watertight,
     bboxMm: a.bboxMm,
@@ -121,7 +146,7 @@ export const command: Command = async (argv) => {
     estimatedErrorPct: fill.estimatedErrorPct,
     warnings: [...a.warnings, ...fill.warnings].map((w) => ({ code: w.code, message: w.message })),
   };
-  return values.json ? JSON.stringify(report, null, 2) : readable(file, report, units, up);
+  return values.json ? JSON.stringify(report, null, 2) : readable(file, report, up);
 };
 
 function unwrap<T>(result: { ok: true; value: T } | { ok: false; error: { message: string } }): T {

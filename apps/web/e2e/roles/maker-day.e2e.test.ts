@@ -39,7 +39,7 @@ describe("a maker's day in the browser", () => {
     await page.getByRole('link', { name: 'Upload its mould' }).click();
     await page.waitForURL(/\/moulds\/new\?pieceId=/);
     const upload = page.getByRole('form', { name: 'Upload a mould' });
-    await upload.getByLabel('STL file').setInputFiles({ name: 'serving-board.stl', mimeType: 'model/stl', buffer: stl.bytes });
+    await upload.getByLabel('Mould file').setInputFiles({ name: 'serving-board.stl', mimeType: 'model/stl', buffer: stl.bytes });
     await expect.poll(() => upload.getByText('Read as millimetres, the mould is 200.0 mm × 120.0 mm × 70.0 mm.').isVisible()).toBe(true);
     // The upload came from the piece, so the mould is already tied to it.
     expect(await upload.getByLabel('Piece', { exact: true }).locator('option:checked').textContent()).toBe(pieceName);

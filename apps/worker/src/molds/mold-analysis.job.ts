@@ -6,6 +6,8 @@ import type { AnalysisMessage, AnalysisRequest } from './mold-analysis.thread';
 
 export interface MoldAnalysisSettings {
   maxTriangles: number;
+  /** The most a 3MF's model part may unpack to. */
+  maxUnpackedBytes: number;
   /** How long a claim holds; a worker that dies mid-analysis frees the mould after this. */
   leaseS: number;
   maxAttempts: number;
@@ -64,10 +66,10 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
   const log = logger.child({ moldId: mold.id });
   try {
     const [file] = (await ds.query('SELECT bytes FROM mold_files WHERE mold_id = $1', [mold.id])) as [{ bytes: Buffer } | undefined];
-    if (!file) throw new Error('the STL bytes are missing');
+    if (!file) throw new Error('the mould file bytes are missing');
     await ds.query('UPDATE molds SET progress = 0.15 WHERE id = $1', [mold.id]);
     const bytes = new Uint8Array(file.bytes.buffer.slice(file.bytes.byteOffset, file.bytes.byteOffset + file.bytes.byteLength));
-    const outcome = await runThread({ bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles }, (value) => {
+    const outcome = await runThread({ bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes }, (value) => {
       void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing'`, [mold.id, value]).catch(() => undefined);
     });
     if (outcome.type === 'refused') {

@@ -1,5 +1,5 @@
 import { parentPort } from 'node:worker_threads';
-import { analyzeCavity, parseStl, prepareMesh, type FileUnits, type UpAxis } from '@gelpoint/mesh';
+import { analyzeCavity, archiveLimitsFor, prepareMesh, readMouldFile, type FileUnits, type UpAxis } from '@gelpoint/mesh';
 import { cavityReport } from './cavity-report';
 
 export interface AnalysisRequest {
@@ -7,6 +7,7 @@ export interface AnalysisRequest {
   units: FileUnits;
   up: UpAxis;
   maxTriangles: number;
+  maxUnpackedBytes: number;
 }
 
 export type AnalysisMessage =
@@ -18,10 +19,11 @@ const post = (m: AnalysisMessage) => parentPort!.postMessage(m);
 
 // The engine runs here, off the worker's event loop, so ticks and mail keep going during a big mould.
 parentPort!.once('message', (req: AnalysisRequest) => {
-  const soup = parseStl(req.bytes, { maxTriangles: req.maxTriangles });
-  if (!soup.ok) return post({ type: 'refused', code: soup.error.code, message: soup.error.message });
+  // STL, 3MF or OBJ, told apart by content; the units were settled at upload (a 3MF's own, unless the maker chose).
+  const file = readMouldFile(req.bytes, { maxTriangles: req.maxTriangles, archiveLimits: archiveLimitsFor(req.maxUnpackedBytes) });
+  if (!file.ok) return post({ type: 'refused', code: file.error.code, message: file.error.message });
   post({ type: 'progress', value: 0.3 });
-  const mesh = prepareMesh(soup.value, { units: req.units, up: req.up });
+  const mesh = prepareMesh(file.value.soup, { units: req.units, up: req.up });
   if (!mesh.ok) return post({ type: 'refused', code: mesh.error.code, message: mesh.error.message });
   post({ type: 'progress', value: 0.5 });
   const analysis = analyzeCavity(mesh.value);

@@ -21,7 +21,7 @@ import { Reminder } from './reminder.entity';
 import { RateLimitCounter } from './rate-limit-counter.entity';
 
 export { AuditEvent, CureCheck, Invitation, Lot, Pour, PourBatch, Reminder, TemperatureReading, Membership, Mold, MoldFile, OutboundMail, PasswordReset, Piece, Pigment, PourPlan, RateLimitCounter, ResinSystem, Session, Shop, User };
-export type { MoldStatus, MoldUnits, UpAxis } from './mold.entity';
+export type { MoldFormat, MoldStatus, MoldUnits, UpAxis } from './mold.entity';
 export type { ResinUse } from './resin-system.entity';
 export type { LotPart } from './lot.entity';
 export type { PourStatus } from './pour.entity';

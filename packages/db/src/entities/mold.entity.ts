@@ -5,13 +5,17 @@ import { Shop } from './shop.entity';
 import { User } from './user.entity';
 
 export type MoldStatus = 'queued' | 'analysing' | 'ready' | 'failed';
-export type MoldUnits = 'mm' | 'cm' | 'in';
+/** The units the file's numbers were read in; a 3MF may state um, m or ft besides mm, cm and in. */
+export type MoldUnits = 'um' | 'mm' | 'cm' | 'm' | 'in' | 'ft';
+export type MoldFormat = 'stl' | '3mf' | 'obj';
 export type UpAxis = 'x' | 'y' | 'z';
 
-/** An uploaded mould and its cavity analysis. The STL bytes live apart, in mold_files. */
+/** An uploaded mould and its cavity analysis. The file's bytes (STL, 3MF or OBJ) live apart, in mold_files. */
 @Entity({ name: 'molds' })
 @Check('molds_status_check', `status IN ('queued', 'analysing', 'ready', 'failed')`)
-@Check('molds_units_check', `units IN ('mm', 'cm', 'in')`)
+@Check('molds_units_check', `units IN ('um', 'mm', 'cm', 'm', 'in', 'ft')`)
+@Check('molds_file_units_check', `file_units IS NULL OR file_units IN ('um', 'mm', 'cm', 'm', 'in', 'ft')`)
+@Check('molds_format_check', `format IN ('stl', '3mf', 'obj')`)
 @Check('molds_up_axis_check', `up_axis IN ('x', 'y', 'z')`)
 @Index('molds_shop_created_idx', ['shopId', 'createdAt'])
 @Index('molds_due_idx', ['status', 'lockedUntil'])
@@ -21,7 +25,10 @@ export class Mold {
   @Column({ name: 'piece_id', type: 'uuid', nullable: true }) pieceId!: string | null;
   @Column({ type: 'text' }) name!: string;
   @Column({ name: 'file_name', type: 'text' }) fileName!: string;
+  @Column({ type: 'text', default: 'stl' }) format!: MoldFormat;
   @Column({ type: 'text' }) units!: MoldUnits;
+  /** The unit the file itself states (3MF); null for formats that carry none. */
+  @Column({ name: 'file_units', type: 'text', nullable: true }) fileUnits!: MoldUnits | null;
   @Column({ name: 'up_axis', type: 'text' }) upAxis!: UpAxis;
   @Column({ name: 'size_bytes', type: 'integer' }) sizeBytes!: number;
   @Column({ type: 'text' }) sha256!: string;

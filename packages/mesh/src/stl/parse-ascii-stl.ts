@@ -27,7 +27,8 @@ const words = {
 };
 
 /**
- * Reads an ASCII STL: one or more `solid … endsolid` blocks, any whitespace (CRLF included),
+ * Reads an ASCII STL: one or more `solid … endsolid` blocks (or bare facets to the end of the
+ * file, as some writers leave them), any whitespace (CRLF included),
  * numbers with or without exponents. Keywords are matched case-insensitively because exporters
  * disagree on case; the grammar is otherwise strict so a damaged file is refused, not guessed at.
  */
@@ -130,11 +131,18 @@ export function parseAsciiStl(bytes: Uint8Array, maxTriangles: number): Result<T
     return v;
   };
 
-  if (!nextToken() || !tokenIs(words.solid)) return unexpected('"solid"');
-  for (;;) {
-    skipRestOfLine();
+  if (!nextToken()) return unexpected('"solid"');
+  // Some writers leave out the `solid` line: the facets then run to the end of the file.
+  const implicitSolid = tokenIs(words.facet);
+  if (implicitSolid) pos = tokenStart;
+  else if (!tokenIs(words.solid)) return unexpected('"solid"');
+  solids: for (;;) {
+    if (!implicitSolid) skipRestOfLine();
     for (;;) {
-      if (!nextToken()) return truncated('"endsolid"');
+      if (!nextToken()) {
+        if (implicitSolid) break solids;
+        return truncated('"endsolid"');
+      }
       if (tokenIs(words.endsolid)) break;
       if (!tokenIs(words.facet)) return unexpected('"facet" or "endsolid"');
       const bad = expectWord(words.normal, 'normal');
@@ -175,5 +183,5 @@ export function parseAsciiStl(bytes: Uint8Array, maxTriangles: number): Result<T
   if (triangleCount === 0) {
     return fail('stl_no_triangles', 'The ASCII STL has no facets; export the mould again with its surface included.');
   }
-  return ok({ positions: positions.slice(0, triangleCount * 9), triangleCount, format: 'ascii' });
+  return ok({ positions: positions.slice(0, triangleCount * 9), triangleCount, format: 'ascii', warnings: [] });
 }

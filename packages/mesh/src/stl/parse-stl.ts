@@ -1,44 +1,24 @@
+import { otherFormatOf } from '../file-signatures';
 import { fail, type Result } from '../result';
+import { looksLikeText, onlyWhitespace, opensWith, withoutByteOrderMark } from '../text-bytes';
 import { parseAsciiStl } from './parse-ascii-stl';
-import { announcedTriangleCount, binaryHeaderBytes, binaryRecordBytes, parseBinaryStl } from './parse-binary-stl';
+import { binaryLayout, isExactBinary, parseBinaryStl } from './parse-binary-stl';
 import { defaultMaxTriangles, type ParseStlOptions, type TriangleSoup } from './triangle-soup';
 
-function isTextByte(b: number): boolean {
-  // Tab, line breaks and printable ASCII; bytes from 128 up may be UTF-8 in a solid's name.
-  return (b >= 9 && b <= 13) || (b >= 32 && b <= 126) || b >= 128;
-}
-
-function looksLikeText(bytes: Uint8Array): boolean {
-  for (let i = 0; i < bytes.length; i++) if (!isTextByte(bytes[i]!)) return false;
-  return true;
-}
-
-function onlyWhitespace(bytes: Uint8Array): boolean {
-  for (let i = 0; i < bytes.length; i++) {
-    const b = bytes[i]!;
-    if (!(b === 32 || (b >= 9 && b <= 13))) return false;
-  }
-  return true;
-}
-
-/** True when the bytes open with the word `solid` (after an optional UTF-8 byte-order mark and spaces). */
-function opensWithSolid(bytes: Uint8Array): boolean {
-  let i = bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf ? 3 : 0;
-  while (i < bytes.length && (bytes[i] === 32 || (bytes[i]! >= 9 && bytes[i]! <= 13))) i++;
-  const word = 'solid';
-  for (let k = 0; k < word.length; k++) if ((bytes[i + k]! | 0x20) !== word.charCodeAt(k)) return false;
-  const after = bytes[i + word.length];
-  return after === undefined || after === 32 || (after >= 9 && after <= 13);
-}
-
-function withoutByteOrderMark(bytes: Uint8Array): Uint8Array {
-  return bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf ? bytes.subarray(3) : bytes;
+/**
+ * True when the bytes read as an ASCII STL: text that opens with `solid`, or with `facet` as some
+ * writers do who leave the `solid` line out.
+ */
+export function looksLikeAsciiStl(bytes: Uint8Array): boolean {
+  return (opensWith(bytes, 'solid') || opensWith(bytes, 'facet')) && looksLikeText(bytes);
 }
 
 /**
- * Parses a binary or ASCII STL. The format is decided by the size rule of binary STL
- * (84 + 50 × count bytes) and by the content, never by the first word alone: many binary
- * exporters start their 80-byte header with "solid".
+ * Parses a binary or ASCII STL. The format is decided by the content, never by the first word
+ * alone: many binary exporters start their 80-byte header with "solid". A file whose size follows
+ * the binary rule (84 + 50 × count bytes) exactly is binary unless it reads as ASCII; text that
+ * reads as ASCII STL is ASCII; any other binary file is read record by record from its size,
+ * with a warning, since writers leave the count at 0 or wrong and add stray bytes at the end.
  */
 export function parseStl(bytes: Uint8Array, options: ParseStlOptions = {}): Result<TriangleSoup> {
   const maxTriangles = options.maxTriangles ?? defaultMaxTriangles;
@@ -48,26 +28,20 @@ export function parseStl(bytes: Uint8Array, options: ParseStlOptions = {}): Resu
   if (bytes.length === 0) return fail('stl_empty', 'The STL file is empty (0 bytes); choose the exported mould file and upload it again.');
   if (onlyWhitespace(bytes)) return fail('stl_empty', 'The STL file holds nothing but whitespace; choose the exported mould file and upload it again.');
 
-  const count = announcedTriangleCount(bytes);
-  const binarySized = count !== null && binaryHeaderBytes + binaryRecordBytes * count === bytes.length;
-  const text = opensWithSolid(bytes) && looksLikeText(bytes);
-  if (binarySized) {
-    if (text) {
-      const ascii = parseAsciiStl(withoutByteOrderMark(bytes), maxTriangles);
-      if (ascii.ok) return ascii;
+  const layout = binaryLayout(bytes);
+  const ascii = looksLikeAsciiStl(bytes);
+  if (isExactBinary(layout)) {
+    if (ascii) {
+      const read = parseAsciiStl(withoutByteOrderMark(bytes), maxTriangles);
+      if (read.ok) return read;
     }
     return parseBinaryStl(bytes, maxTriangles);
   }
-  if (text) return parseAsciiStl(withoutByteOrderMark(bytes), maxTriangles);
+  if (ascii) return parseAsciiStl(withoutByteOrderMark(bytes), maxTriangles);
   if (looksLikeText(bytes)) {
-    return fail('stl_not_stl', 'The file is text but does not begin with "solid", so it is not an ASCII STL; export the mould as STL and upload that file.');
+    return fail('stl_not_stl', 'The file is text but does not begin with "solid" or "facet", so it is not an ASCII STL; export the mould as STL and upload that file.');
   }
-  if (count === null) {
-    return fail('stl_truncated', `The file is only ${bytes.length} bytes, shorter than the 84-byte header of a binary STL; the upload or export was cut short.`);
-  }
-  const expected = binaryHeaderBytes + binaryRecordBytes * count;
-  if (expected > bytes.length) {
-    return fail('stl_truncated', `The binary STL announces ${count} triangles (${expected} bytes) but the file has only ${bytes.length} bytes; the upload or export was cut short, so send the whole file.`);
-  }
-  return fail('stl_not_stl', `The file has ${bytes.length - expected} bytes more than the ${count} triangles its header announces, so it is not a binary STL; export the mould as STL and upload that file.`);
+  const other = otherFormatOf(bytes) ?? (bytes[0] === 0x50 && bytes[1] === 0x4b ? 'a zip archive (a 3MF, perhaps)' : null);
+  if (other !== null) return fail('stl_not_stl', `The file is ${other}, not an STL; export the mould as STL and upload that file.`);
+  return parseBinaryStl(bytes, maxTriangles);
 }

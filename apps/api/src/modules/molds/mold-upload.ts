@@ -15,13 +15,13 @@ export function stlUpload(maxBytes = MAX_STL_BYTES): RequestHandler {
   }).single('file');
   return (req, res, next) => {
     if (!req.is('multipart/form-data')) {
-      return next(new AppError('bad_request', 'multipart_required', 'send the mould as multipart/form-data with the STL in a part named "file"'));
+      return next(new AppError('bad_request', 'multipart_required', 'send the mould as multipart/form-data with the file (STL, 3MF or OBJ) in a part named "file"'));
     }
     handler(req, res, (err?: unknown) => {
       if (!err) return next();
       if (err instanceof multer.MulterError) {
         if (err.code === 'LIMIT_FILE_SIZE') {
-          return next(new AppError('payload_too_large', 'file_too_large', `the STL is larger than ${Math.round(maxBytes / 1024 / 1024)} MB; simplify the mesh (fewer triangles) or split the mould`));
+          return next(new AppError('payload_too_large', 'file_too_large', `the mould file is larger than ${Math.round(maxBytes / 1024 / 1024)} MB; simplify the mesh (fewer triangles) or split the mould`));
         }
         if (err.code === 'LIMIT_UNEXPECTED_FILE') return next(new AppError('bad_request', 'unexpected_file', 'send exactly one file, in the part named "file"'));
         return next(new AppError('bad_request', 'bad_upload', `the upload could not be read (${err.message})`));

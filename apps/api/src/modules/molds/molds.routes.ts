@@ -13,7 +13,7 @@ export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number
       method: 'post',
       path: '/molds',
       tag: 'molds',
-      summary: "Upload a mould's STL (multipart: file, units, up, name, pieceId); the analysis runs in the background",
+      summary: "Upload a mould file, STL, 3MF or OBJ told apart by content (multipart: file, units, up, name, pieceId; without units a 3MF is read in its own unit, other files in mm); the analysis runs in the background",
       access: ['lead', 'maker'],
       middleware: [uploadLimit, stlUpload(maxStlBytes)],
       body: MoldUploadFields,
@@ -34,7 +34,7 @@ export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number
     { method: 'get', path: '/molds/:id/layers', tag: 'molds', summary: 'Volume of each layer between the given levels (mm)', access: 'member', params: IdParams, query: LayerVolumesQuery, response: LayerVolumes },
     ({ auth, params, query }) => molds.layers(auth.shopId, params.id, query.levels, query.dam),
   );
-  api.add({ method: 'get', path: '/molds/:id/stl', tag: 'molds', summary: 'The uploaded STL, as a download', access: 'member', params: IdParams }, async ({ auth, params, res }) => {
+  api.add({ method: 'get', path: '/molds/:id/stl', tag: 'molds', summary: 'The uploaded mould file (STL, 3MF or OBJ) as it came, as a download', access: 'member', params: IdParams }, async ({ auth, params, res }) => {
     const { bytes, fileName } = await molds.stl(auth.shopId, params.id);
     // Never rendered by the browser: a download of an opaque type.
     res.setHeader('Content-Type', 'application/octet-stream');

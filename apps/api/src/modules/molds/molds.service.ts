@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { planCavityFromMold } from '@gelpoint/core';
-import { MOLD_ANALYSIS_CHANNEL, Mold, MoldFile, Piece, type MoldUnits, type UpAxis } from '@gelpoint/db';
+import { MOLD_ANALYSIS_CHANNEL, Mold, MoldFile, Piece, type MoldFormat, type UpAxis } from '@gelpoint/db';
 import type { Dam, MoldView } from '@gelpoint/contracts';
 import { curve, fillAt, layerVolumes } from '@gelpoint/mesh';
 import type { AuthContext } from '../../http/auth-context';
@@ -21,11 +21,18 @@ export interface UploadedStl {
 }
 
 export interface UploadFields {
-  units: MoldUnits;
+  /** Absent: a 3MF is read in the unit it states, any other file in mm. */
+  units?: 'mm' | 'cm' | 'in' | undefined;
   up: UpAxis;
   name?: string;
   pieceId?: string;
 }
+
+/** The names a mould file may have; what it is, is decided by its content. */
+const mouldFileName = /\.(stl|3mf|obj)$/i;
+const extensionOf: Record<MoldFormat, string> = { stl: 'stl', '3mf': '3mf', obj: 'obj' };
+/** Reader refusals that are about size: the file unpacks to more than the service reads. */
+const tooLargeCodes = new Set(['threemf_too_large']);
 
 /** Levels sampled for a plan's curve between the cavity's lowest point and the fill level. */
 const PLAN_CURVE_POINTS = 241;
@@ -41,12 +48,16 @@ export class Molds {
   ) {}
 
   async upload(auth: AuthContext, file: UploadedStl | undefined, fields: UploadFields): Promise<MoldView> {
-    if (!file) throw new AppError('bad_request', 'file_missing', 'attach the mould as an STL file in the part named "file"', { file: 'choose an STL file' });
-    if (!/\.stl$/i.test(file.originalname)) {
-      throw new AppError('unprocessable', 'not_an_stl_name', `"${file.originalname.slice(0, 80)}" does not end in .stl; export the mould as STL (binary or ASCII)`, { file: 'the file must be an .stl' });
+    if (!file) throw new AppError('bad_request', 'file_missing', 'attach the mould file (STL, 3MF or OBJ) in the part named "file"', { file: 'choose an STL, 3MF or OBJ file' });
+    if (!mouldFileName.test(file.originalname)) {
+      throw new AppError('unprocessable', 'not_a_mould_file_name', `"${file.originalname.slice(0, 80)}" does not end in .stl, .3mf or .obj; export the mould from your CAD program in one of those formats`, { file: 'the file must be an .stl, .3mf or .obj' });
     }
     const checked = await this.checker.check(file.buffer);
-    if (!checked.ok) throw new AppError('unprocessable', checked.error.code, checked.error.message, { file: checked.error.message });
+    if (!checked.ok) {
+      const kind = tooLargeCodes.has(checked.error.code) ? 'payload_too_large' : 'unprocessable';
+      throw new AppError(kind, checked.error.code, checked.error.message, { file: checked.error.message });
+    }
+    const units = fields.units ?? checked.fileUnits ?? 'mm';
     const sha256 = createHash('sha256').update(file.buffer).digest('hex');
     const id = await this.ds.transaction(async (m) => {
       if (fields.pieceId && !(await m.findOneBy(Piece, { id: fields.pieceId, shopId: auth.shopId }))) throw notFound('piece');
@@ -56,9 +67,11 @@ export class Molds {
           shopId: auth.shopId,
           pieceId: fields.pieceId ?? null,
           // The stored name is ours to choose: the client's file name is kept only as text to show.
-          name: fields.name || file.originalname.replace(/\.stl$/i, '').slice(0, 120) || 'Mould',
+          name: fields.name || file.originalname.replace(mouldFileName, '').slice(0, 120) || 'Mould',
           fileName: file.originalname.slice(0, 200),
-          units: fields.units,
+          format: checked.format,
+          units,
+          fileUnits: checked.fileUnits,
           upAxis: fields.up,
           sizeBytes: file.size,
           sha256,
@@ -68,7 +81,7 @@ export class Molds {
         }),
       );
       await m.insert(MoldFile, { moldId: mold.id, bytes: file.buffer });
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'mold.upload', objectType: 'mold', objectId: mold.id, detail: { name: mold.name, sha256, triangles: checked.triangles } });
+      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'mold.upload', objectType: 'mold', objectId: mold.id, detail: { name: mold.name, sha256, format: checked.format, units, triangles: checked.triangles } });
       await m.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, mold.id]);
       return mold.id;
     });
@@ -107,13 +120,14 @@ export class Molds {
     };
   }
 
+  /** The uploaded file as it came, named with its format's extension. */
   async stl(shopId: string, id: string): Promise<{ bytes: Buffer; fileName: string }> {
-    const rows: { bytes: Buffer; name: string }[] = await this.ds.query(
-      'SELECT f.bytes, m.name FROM mold_files f JOIN molds m ON m.id = f.mold_id WHERE m.id = $1 AND m.shop_id = $2',
+    const rows: { bytes: Buffer; name: string; format: MoldFormat }[] = await this.ds.query(
+      'SELECT f.bytes, m.name, m.format FROM mold_files f JOIN molds m ON m.id = f.mold_id WHERE m.id = $1 AND m.shop_id = $2',
       [id, shopId],
     );
     if (!rows[0]) throw notFound('mould');
-    return { bytes: rows[0].bytes, fileName: `${rows[0].name.replace(/[^A-Za-z0-9_-]+/g, '-').slice(0, 60) || 'mould'}.stl` };
+    return { bytes: rows[0].bytes, fileName: `${rows[0].name.replace(/[^A-Za-z0-9_-]+/g, '-').slice(0, 60) || 'mould'}.${extensionOf[rows[0].format]}` };
   }
 
   async remove(auth: AuthContext, id: string): Promise<void> {
@@ -161,5 +175,5 @@ function dedupeLevels(points: { levelMm: number; volumeMm3: number }[]) {
   return points.filter((p, i) => i === 0 || p.levelMm > points[i - 1]!.levelMm);
 }
 
-const summaryColumns = ['id', 'shopId', 'pieceId', 'name', 'fileName', 'units', 'upAxis', 'sizeBytes', 'sha256', 'status', 'progress', 'errorCode', 'errorMessage', 'createdAt', 'analysedAt'] as const;
+const summaryColumns = ['id', 'shopId', 'pieceId', 'name', 'fileName', 'format', 'units', 'fileUnits', 'upAxis', 'sizeBytes', 'sha256', 'status', 'progress', 'errorCode', 'errorMessage', 'createdAt', 'analysedAt'] as const;
 const summarySelect = Object.fromEntries(summaryColumns.map((c) => [c, true])) as Record<string, true>;

@@ -2,17 +2,21 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { zipSync } from 'fflate';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { encode3mf, encodeObj } from '../../../../../packages/mesh/test/mould-files';
 import { analyseQueuedMoulds } from '../../test-support/fixtures';
 import { bearer, createShop, useHarness, type ShopFixture } from '../../test-support/harness';
 import { binaryStl, pocketMouldTriangles } from '../../test-support/pocket-mould';
 
-const h = useHarness({ GELPOINT_MAX_STL_MB: '1' });
+// A 3MF may unpack to 4 MB here, so the zip-bomb limits can be reached with small uploads.
+const h = useHarness({ GELPOINT_MAX_STL_MB: '1', GELPOINT_MAX_UNPACKED_MB: '4' });
 
 // Block 100 × 60 × 30 mm with an 80 × 40 mm pocket whose floor is at z = 10: a prism, so the fill to
 // level z is 80 · 40 · (z − 10) mm³ (CRC Concise Encyclopedia of Mathematics, prism volume = base × height).
 const pocket = pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 10, 90, 50], floorZ: 10 });
 const prism = (z: number) => 80 * 40 * (z - 10);
+const pocketMesh = { positions: Float64Array.from(pocket.flat(2)), triangleCount: pocket.length };
 
 
 let shop: ShopFixture;
@@ -31,7 +35,7 @@ const upload = (session: { token: string }, bytes: Buffer, fields: Record<string
 describe('mould upload and cavity report', () => {
   it('analyses an uploaded STL in the worker and answers fills from what it stored', async () => {
     const res = await upload(maker, binaryStl(pocket), { units: 'mm', up: 'z' }).expect(202);
-    expect(res.body).toMatchObject({ name: 'tray pocket', status: 'queued', units: 'mm', upAxis: 'z', report: null });
+    expect(res.body).toMatchObject({ name: 'tray pocket', status: 'queued', format: 'stl', units: 'mm', fileUnits: null, upAxis: 'z', report: null });
     expect(res.body.sha256).toMatch(/^[0-9a-f]{64}$/);
     analyseQueuedMoulds();
     const mold = (await h.http().get(`/api/molds/${res.body.id}`).set(bearer(maker)).expect(200)).body;
@@ -102,13 +106,63 @@ describe('mould upload and cavity report', () => {
     expect(mold.report.fillToTop.volumeMm3).toBeCloseTo(prism(30), -1);
   });
 
-  it('refuses bad files with the parser’s sentence, over-size files with 413, and apprentices with 403', async () => {
+  it('reads a 3MF in the unit it states when no units are sent, and keeps the format and that unit', async () => {
+    // The pocket written in inches (NIST SP 811: 1 in = 25.4 mm) comes back in millimetres.
+    const res = await upload(maker, Buffer.from(encode3mf(pocketMesh, 'inch', 25.4)), { up: 'z' }, 'tray.3mf').expect(202);
+    expect(res.body).toMatchObject({ name: 'tray', format: '3mf', units: 'in', fileUnits: 'in' });
+    analyseQueuedMoulds();
+    const mold = (await h.http().get(`/api/molds/${res.body.id}`).set(bearer(maker)).expect(200)).body;
+    expect(mold.status).toBe('ready');
+    expect(mold.report.bboxMm.max[0]).toBeCloseTo(100, 3);
+    expect(mold.report.fillToTop.volumeMm3).toBeCloseTo(prism(30), -1);
+    const listed = (await h.http().get('/api/molds').set(bearer(maker)).expect(200)).body.items.find((m: { id: string }) => m.id === res.body.id);
+    expect(listed).toMatchObject({ format: '3mf', units: 'in', fileUnits: 'in' });
+    const file = await h.http().get(`/api/molds/${res.body.id}/stl`).set(bearer(maker)).buffer(true).expect(200);
+    expect(file.headers['content-disposition']).toMatch(/filename="tray\.3mf"/);
+  });
+
+  it('lets the units sent override a 3MF’s own', async () => {
+    const res = await upload(maker, Buffer.from(encode3mf(pocketMesh, 'inch', 1)), { units: 'mm' }, 'mislabelled.3mf').expect(202);
+    expect(res.body).toMatchObject({ format: '3mf', units: 'mm', fileUnits: 'in' });
+    analyseQueuedMoulds();
+    const mold = (await h.http().get(`/api/molds/${res.body.id}`).set(bearer(maker)).expect(200)).body;
+    expect(mold.report.fillToTop.volumeMm3).toBeCloseTo(prism(30), -1);
+  });
+
+  it('reads an OBJ of quads with corners counted from the end', async () => {
+    const obj = Buffer.from(encodeObj(pocketMesh, { quads: true, negative: true, corner: 'v//vn' }));
+    const res = await upload(maker, obj, { units: 'mm' }, 'tray.obj').expect(202);
+    expect(res.body).toMatchObject({ name: 'tray', format: 'obj', units: 'mm', fileUnits: null });
+    analyseQueuedMoulds();
+    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 20 }).set(bearer(maker)).expect(200)).body;
+    expect(fill.volumeMm3).toBeCloseTo(prism(20), -1);
+  });
+
+  it('refuses zip bombs: 413 for a 3MF that unpacks past the limit, 422 for one packed far past any model', async () => {
+    const spaces = (bytes: number) => {
+      const model = new Uint8Array(bytes).fill(0x20);
+      model.set(new TextEncoder().encode('<model xmlns="http://schemas.microsoft.com/3dmanufacturing/core/2015/02">'));
+      return Buffer.from(zipSync({ '3D/3dmodel.model': model }));
+    };
+    const big = spaces(8 * 2 ** 20);
+    expect(big.length).toBeLessThan(64 * 1024);
+    const tooLarge = await upload(maker, big, {}, 'bomb.3mf').expect(413);
+    expect(tooLarge.body.error.code).toBe('threemf_too_large');
+    expect(tooLarge.body.error.message).toMatch(/unpacks to more than 4 MB.*zip bombs/);
+    const dense = await upload(maker, spaces(3 * 2 ** 20), {}, 'dense.3mf').expect(422);
+    expect(dense.body.error.code).toBe('threemf_compression_ratio');
+    expect(dense.body.error.message).toMatch(/more than 100 times its packed size/);
+  });
+
+  it('refuses bad files with the reader’s sentence, over-size files with 413, and apprentices with 403', async () => {
     const bad = await upload(maker, Buffer.from('this is not a mesh at all, just words'), {}).expect(422);
-    expect(bad.body.error.code).toMatch(/^stl_/);
-    expect(bad.body.error.message.length).toBeGreaterThan(10);
+    expect(bad.body.error.code).toBe('file_not_mould');
+    expect(bad.body.error.message).toMatch(/neither an ASCII STL .* nor an OBJ/);
+    const obj = await upload(maker, Buffer.from('v 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2 7\n'), {}, 'broken.obj').expect(422);
+    expect(obj.body.error.message).toMatch(/^Line 4 of the OBJ uses vertex 7/);
     const truncated = binaryStl(pocket).subarray(0, 84 + 50 * 3 + 7);
     expect((await upload(maker, truncated, {}).expect(422)).body.error.code).toBe('stl_truncated');
-    expect((await upload(maker, binaryStl(pocket), {}, 'mould.exe').expect(422)).body.error.code).toBe('not_an_stl_name');
+    expect((await upload(maker, binaryStl(pocket), {}, 'mould.exe').expect(422)).body.error.code).toBe('not_a_mould_file_name');
     const huge = Buffer.alloc(1024 * 1024 + 10);
     expect((await upload(maker, huge, {}).expect(413)).body.error.code).toBe('file_too_large');
     await upload(maker, binaryStl(pocket), { units: 'furlongs' }).expect(400);
@@ -116,6 +170,6 @@ describe('mould upload and cavity report', () => {
     const apprentice = await shop.member('apprentice');
     await upload(apprentice, binaryStl(pocket), {}).expect(403);
     const n = await h.ds.query('SELECT count(*)::int AS n FROM molds WHERE shop_id = $1', [shop.shopId]);
-    expect(n[0].n).toBe(3);
+    expect(n[0].n).toBe(6);
   });
 });

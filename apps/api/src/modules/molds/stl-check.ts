@@ -1,10 +1,14 @@
 import type { Worker } from 'node:worker_threads';
+import { defaultArchiveLimits, type FileUnits, type MouldFormat } from '@gelpoint/mesh';
 import { tsWorker } from '../../ts-worker';
 
-export type StlCheck = { ok: true; triangles: number } | { ok: false; error: { code: string; message: string } };
+/** What reading an upload found: its format, triangles and (3MF) the unit it states, or the reader's refusal. */
+export type StlCheck =
+  | { ok: true; triangles: number; format: MouldFormat; fileUnits: FileUnits | null }
+  | { ok: false; error: { code: string; message: string } };
 
 /**
- * One long-lived thread that parses uploads to check them, so a bad file is refused at once with the
+ * One long-lived thread that reads uploads (STL, 3MF or OBJ) to check them, so a bad file is refused at once with the
  * parser's sentence while the event loop keeps serving others. Requests queue in order.
  */
 export class StlChecker {
@@ -12,7 +16,7 @@ export class StlChecker {
   private nextId = 1;
   private readonly waiting = new Map<number, (r: StlCheck) => void>();
 
-  constructor(private readonly maxTriangles: number) {}
+  constructor(private readonly maxTriangles: number, private readonly maxUnpackedBytes = defaultArchiveLimits.maxPartBytes) {}
 
   private thread(): Worker {
     if (this.worker) return this.worker;
@@ -32,7 +36,7 @@ export class StlChecker {
   }
 
   private fail(message: string) {
-    for (const resolve of this.waiting.values()) resolve({ ok: false, error: { code: 'stl_check_failed', message } });
+    for (const resolve of this.waiting.values()) resolve({ ok: false, error: { code: 'file_check_failed', message } });
     this.waiting.clear();
   }
 
@@ -41,7 +45,7 @@ export class StlChecker {
     return new Promise((resolve) => {
       this.waiting.set(id, resolve);
       // A copy goes to the thread: the request keeps its buffer to store it.
-      this.thread().postMessage({ id, bytes: new Uint8Array(bytes), maxTriangles: this.maxTriangles });
+      this.thread().postMessage({ id, bytes: new Uint8Array(bytes), maxTriangles: this.maxTriangles, maxUnpackedBytes: this.maxUnpackedBytes });
     });
   }
 

@@ -4,7 +4,7 @@ import { buildUrl } from '../../../lib/api-client';
 import { errorFromResponse, networkError } from '../../../lib/api-error';
 import { moldKeys } from './keys';
 
-/** The STL as uploaded, for the 3D view; bytes, not JSON, so it goes around the JSON client. */
+/** The mould file (STL, 3MF or OBJ) as uploaded, for the 3D view; bytes, not JSON, so it goes around the JSON client. */
 export async function getMoldStl(moldId: string, signal?: AbortSignal): Promise<ArrayBuffer> {
   let response: Response;
   try {

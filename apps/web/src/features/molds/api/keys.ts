@@ -18,7 +18,7 @@ export interface LayersKey {
   dam: Dam;
 }
 
-// Fill, layers and the STL sit under their mould's detail key, so forgetting a mould forgets them too.
+// Fill, layers and the mould file sit under their mould's detail key, so forgetting a mould forgets them too.
 export const moldKeys = {
   all: ['molds'] as const,
   lists: () => [...moldKeys.all, 'list'] as const,

@@ -6,7 +6,9 @@ const queued = {
   id: '0f8c2a4e-7b1d-4c39-9e55-2d6a1b3c4d5e',
   name: 'Serving tray',
   fileName: 'tray.stl',
+  format: 'stl',
   units: 'mm',
+  fileUnits: null,
   upAxis: 'z',
   sizeBytes: 684,
   sha256: 'ab'.repeat(32),
@@ -56,6 +58,13 @@ describe('moldUploadBody', () => {
     expect(part instanceof File && part.name).toBe('tray.stl');
     const fields = Object.fromEntries([...body.entries()].filter(([key]) => key !== 'file'));
     expect(MoldUploadFields.parse(fields)).toEqual({ units: 'in', up: 'y', name: 'Tray', pieceId: queued.id });
+  });
+
+  it('leaves the units out for a 3MF read in its own unit, which the contract accepts', () => {
+    const body = moldUploadBody({ file: new Blob([]), fileName: 'bowl.3mf', up: 'z', name: 'Bowl' });
+    expect(body.has('units')).toBe(false);
+    const fields = Object.fromEntries([...body.entries()].filter(([key]) => key !== 'file'));
+    expect(MoldUploadFields.parse(fields)).toEqual({ up: 'z', name: 'Bowl' });
   });
 
   it('leaves out an empty name and piece', () => {

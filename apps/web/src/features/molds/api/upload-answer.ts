@@ -5,7 +5,8 @@ import type { MoldUnits, UpAxis } from '../types';
 export interface MoldUploadInput {
   file: Blob;
   fileName: string;
-  units: MoldUnits;
+  /** Absent: a 3MF is read in the unit it states, any other file in mm. */
+  units?: MoldUnits;
   up: UpAxis;
   name?: string;
   pieceId?: string;
@@ -17,7 +18,7 @@ export const maxUploadBytes = 100 * 1024 * 1024;
 /** The multipart body the upload route reads: the file as `file`, the rest as text fields. */
 export function moldUploadBody(input: MoldUploadInput): FormData {
   const body = new FormData();
-  body.append('units', input.units);
+  if (input.units) body.append('units', input.units);
   body.append('up', input.up);
   if (input.name) body.append('name', input.name);
   if (input.pieceId) body.append('pieceId', input.pieceId);

@@ -5,7 +5,7 @@ export function DeleteMoldButton({ mold, onDeleted }: { mold: { id: string; name
   const remove = useDeleteMold({ onSuccess: onDeleted });
   return (
     <ConfirmDeleteButton label="Delete mould" title={`Delete “${mold.name}”?`} deletion={remove} onConfirm={() => remove.mutate(mold.id)}>
-      The STL and its cavity report leave the shop for everyone. This cannot be undone.
+      The mould file and its cavity report leave the shop for everyone. This cannot be undone.
     </ConfirmDeleteButton>
   );
 }

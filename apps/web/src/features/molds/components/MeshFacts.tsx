@@ -2,6 +2,8 @@ import { formatLength, formatVolume, mm3ToMl, type UnitSystem } from '@gelpoint/
 import type { CavityReport, MoldView } from '../types';
 import { fileUnitWords } from '../utils/file-units';
 
+const formatNames: Record<MoldView['format'], string> = { stl: 'STL', '3mf': '3MF', obj: 'OBJ' };
+
 const methodWords: Record<CavityReport['method'], string> = {
   exact: 'Exact, from the mesh’s own faces',
   columns: 'Sampled in vertical columns',
@@ -16,7 +18,9 @@ export function MeshFacts({ mold, report, unitSystem }: { mold: MoldView; report
       <dd className="tabular-nums">{size}</dd>
       <dt className="font-semibold text-ink-soft">Read as</dt>
       <dd>
-        {fileUnitWords[mold.units].plural}, {mold.upAxis.toUpperCase()} up
+        {fileUnitWords[mold.units].plural}
+        {mold.fileUnits === null ? '' : mold.fileUnits === mold.units ? ' (as the file states)' : ` (the file states ${fileUnitWords[mold.fileUnits].plural})`},{' '}
+        {mold.upAxis.toUpperCase()} up
       </dd>
       <dt className="font-semibold text-ink-soft">Method</dt>
       <dd>
@@ -37,7 +41,7 @@ export function MeshFacts({ mold, report, unitSystem }: { mold: MoldView; report
       ) : null}
       <dt className="font-semibold text-ink-soft">File</dt>
       <dd>
-        {mold.fileName}, {(mold.sizeBytes / 1024).toFixed(1)} KiB
+        {mold.fileName}, {formatNames[mold.format]}, {(mold.sizeBytes / 1024).toFixed(1)} KiB
       </dd>
     </dl>
   );

@@ -11,7 +11,7 @@ import { layerLines } from '../utils/layer-lines';
 import { readOptionalLength } from '../utils/length-input';
 import { moldCautions } from '../utils/mold-cautions';
 import { warningNotes } from '../utils/mold-warnings';
-import type { Vec3 } from '../utils/stl-extent';
+import type { Vec3 } from '../utils/mould-file-reading';
 import { guessUnits } from '../utils/units-guess';
 import { CautionList } from './CautionList';
 import { DamChoice } from './DamChoice';

@@ -1,15 +1,17 @@
 import { Canvas, useThree } from '@react-three/fiber';
 import { useEffect, useMemo } from 'react';
 import { BufferGeometry, DataTexture, DoubleSide, Float32BufferAttribute, Matrix4, NearestFilter, RGBAFormat, type BufferGeometry as Geometry } from 'three';
-import { OrbitControls, STLLoader } from 'three-stdlib';
-import type { CavityReport, DepthMap, MoldUnits, UpAxis } from '../types';
+import { readMouldFile } from '@gelpoint/mesh';
+import { OrbitControls } from 'three-stdlib';
+import type { CavityReport, DepthMap, MoldFileUnits, UpAxis } from '../types';
 import { mmPerFileUnit } from '../utils/file-units';
 import { upAxisTurn } from '../utils/up-axis-turn';
 
 export interface MoldSceneProps {
-  stl: ArrayBuffer;
+  /** The mould file as uploaded: STL, 3MF or OBJ. */
+  file: ArrayBuffer;
   upAxis: UpAxis;
-  units: MoldUnits;
+  units: MoldFileUnits;
   bboxMm: CavityReport['bboxMm'];
   /** Absolute level in the report frame. */
   levelMm: number;
@@ -24,9 +26,16 @@ const resinColour = '#d69824';
 const lineColour = '#3e2a17';
 const paperColour = '#fbf8f3';
 
-/** The file's triangles in the report's frame: the same turn and scale the cavity engine applied. */
-function moldGeometry(stl: ArrayBuffer, upAxis: UpAxis, units: MoldUnits): Geometry {
-  const geometry = new STLLoader().parse(stl);
+/**
+ * The file's triangles in the report's frame, read by the engine's own reader (so a 3MF's
+ * transforms and an STL's quirks come out as in the analysis), with the same turn and scale.
+ */
+function moldGeometry(file: ArrayBuffer, upAxis: UpAxis, units: MoldFileUnits): Geometry {
+  const read = readMouldFile(new Uint8Array(file));
+  // The file was analysed already, so it reads; the error boundary shows anything else.
+  if (!read.ok) throw new Error(read.error.message);
+  const geometry = new BufferGeometry();
+  geometry.setAttribute('position', new Float32BufferAttribute(read.value.soup.positions, 3));
   const m = upAxisTurn(upAxis);
   const s = mmPerFileUnit(units);
   geometry.applyMatrix4(new Matrix4().set(m[0] * s, m[1] * s, m[2] * s, 0, m[3] * s, m[4] * s, m[5] * s, 0, m[6] * s, m[7] * s, m[8] * s, 0, 0, 0, 0, 1));
@@ -105,8 +114,8 @@ function Controls({ target }: { target: readonly [number, number, number] }) {
 }
 
 /** The mould in 3D, Z up as the report measured it, with the resin surface at the fill level and the layer lines. */
-export default function MoldScene({ stl, upAxis, units, bboxMm, levelMm, layerLevelsMm, footprint, describedBy }: MoldSceneProps) {
-  const geometry = useMemo(() => moldGeometry(stl, upAxis, units), [stl, upAxis, units]);
+export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerLevelsMm, footprint, describedBy }: MoldSceneProps) {
+  const geometry = useMemo(() => moldGeometry(file, upAxis, units), [file, upAxis, units]);
   useEffect(() => () => geometry.dispose(), [geometry]);
   const layerLines = useMemo(() => layerLineGeometry(bboxMm, layerLevelsMm), [bboxMm, layerLevelsMm]);
   useEffect(() => () => layerLines.dispose(), [layerLines]);

@@ -44,7 +44,7 @@ export function MoldView3D({ mold, report, fill, levelMm, layerLevelsMm, footpri
           {stl.data ? (
             <Suspense fallback={fallback}>
               <MoldScene
-                stl={stl.data}
+                file={stl.data}
                 upAxis={mold.upAxis}
                 units={mold.units}
                 bboxMm={report.bboxMm}

@@ -1,8 +1,8 @@
 import { formatLength, type UnitSystem } from '@gelpoint/core';
 import { Button } from '../../../components/ui/Button';
-import type { MoldUnits } from '../types';
+import type { MoldFileUnits, MoldUnits } from '../types';
 import { fileUnitWords } from '../utils/file-units';
-import type { Vec3 } from '../utils/stl-extent';
+import type { Vec3 } from '../utils/mould-file-reading';
 import { guessUnits } from '../utils/units-guess';
 
 function sizeText(sizeMm: Vec3, unitSystem: UnitSystem): string {
@@ -12,7 +12,7 @@ function sizeText(sizeMm: Vec3, unitSystem: UnitSystem): string {
 export interface UnitsHintProps {
   /** The model's extent in the file's own numbers. */
   sizeInFileUnits: Vec3;
-  units: MoldUnits;
+  units: MoldFileUnits;
   unitSystem: UnitSystem;
   /** Offered as buttons; absent after upload, where the hint only tells what to re-upload with. */
   onChoose?: (units: MoldUnits) => void;

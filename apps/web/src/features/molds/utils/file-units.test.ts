@@ -11,5 +11,12 @@ describe('mmPerFileUnit', () => {
     // SI Brochure (BIPM, 9th ed.), prefixes centi = 10⁻² and milli = 10⁻³: 1 cm = 10 mm.
     expect(mmPerFileUnit('cm')).toBe(10);
     expect(mmPerFileUnit('mm')).toBe(1);
+    expect(mmPerFileUnit('m')).toBe(1000);
+    expect(mmPerFileUnit('um')).toBe(0.001);
+  });
+
+  it('reads a foot, which a 3MF may state, as 304.8 mm', () => {
+    // NIST SP 811, appendix B: 1 ft = 0.3048 m exactly.
+    expect(mmPerFileUnit('ft')).toBeCloseTo(304.8, 10);
   });
 });

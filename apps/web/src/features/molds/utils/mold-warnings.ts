@@ -16,6 +16,12 @@ const titles: Record<string, { title: string; kind: WarningNote['kind'] }> = {
   inverted_normals_fixed: { title: 'The faces pointed inwards and were turned', kind: 'fixed' },
   inconsistent_winding_fixed: { title: 'Some faces were turned to match their neighbours', kind: 'fixed' },
   degenerate_triangles_dropped: { title: 'Collapsed triangles were left out', kind: 'fixed' },
+  zero_area_triangles_dropped: { title: 'Triangles without area were left out', kind: 'fixed' },
+  duplicate_triangles_dropped: { title: 'Triangles written twice were left out', kind: 'fixed' },
+  vertices_welded: { title: 'Hairline gaps were closed', kind: 'fixed' },
+  stl_count_mismatch: { title: 'The file’s triangle count was wrong', kind: 'fixed' },
+  stl_trailing_bytes: { title: 'Stray bytes at the end of the file were ignored', kind: 'fixed' },
+  threemf_objects_skipped: { title: 'Support objects were left out', kind: 'fixed' },
 };
 
 /**

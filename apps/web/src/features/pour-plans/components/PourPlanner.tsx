@@ -39,7 +39,7 @@ export interface PourPlannerProps {
 
 const sourceChoices = [
   { value: 'shape', label: 'A quick shape', hint: 'measure the cavity and enter it' },
-  { value: 'mold', label: "The piece's mould", hint: 'from the cavity report of its STL' },
+  { value: 'mold', label: "The piece's mould", hint: 'from the cavity report of its mould file' },
 ];
 const damChoices = [
   { value: 'outline', label: 'Dams along the outline', hint: 'resin only where the mould is' },

@@ -42,7 +42,7 @@ export function Component() {
   const upload = (
     <ButtonLink to={paths.newMould.getHref()}>
       <PlusIcon />
-      Upload an STL
+      Upload a mould file
     </ButtonLink>
   );
 
@@ -60,7 +60,7 @@ export function Component() {
           {(list) =>
             list.items.length === 0 ? (
               <EmptyState title="No moulds yet" actions={mayUpload ? upload : null}>
-                Upload the STL of a mould to get its cavity report: the resin it takes to any level, the wetted area and the depth map.
+                Upload a mould's STL, 3MF or OBJ to get its cavity report: the resin it takes to any level, the wetted area and the depth map.
               </EmptyState>
             ) : (
               <div className="flex flex-col gap-3">

@@ -35,7 +35,7 @@ export function Component() {
   return (
     <>
       <DocumentTitle title="Upload a mould" />
-      <PageHeader eyebrow="Moulds" title="Upload a mould" description="Send the STL of the mould; Gelpoint measures the cavity and writes its report." />
+      <PageHeader eyebrow="Moulds" title="Upload a mould" description="Send the mould file (STL, 3MF or OBJ); Gelpoint measures the cavity and writes its report." />
       {mayChangeMolds(session.role) ? (
         <Card className="max-w-2xl">
           <UploadMoldForm
