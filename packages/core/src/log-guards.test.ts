@@ -31,7 +31,8 @@ describe('questions a log asks before it believes a reading', () => {
     expect(readingTimeRefusal(now + 9 * 60_000, { pourStartedMs: started, nowMs: now })).toBeNull();
     expect(readingTimeRefusal(now + 11 * 60_000, { pourStartedMs: started, nowMs: now })).toMatch(/in the future/);
     expect(readingTimeRefusal(Date.UTC(2030, 0, 1), { pourStartedMs: started, nowMs: now })).toMatch(/in the future/);
-    expect(readingTimeRefusal(started - 1, { pourStartedMs: started, nowMs: now })).toMatch(/before this pour started/);
+    expect(readingTimeRefusal(started - 9 * 60_000, { pourStartedMs: started, nowMs: now })).toBeNull();
+    expect(readingTimeRefusal(started - 11 * 60_000, { pourStartedMs: started, nowMs: now })).toMatch(/before this pour started/);
   });
 
   it('questions a weighed part more than half its target away', () => {

@@ -18,7 +18,10 @@ export interface LogConcern {
 
 /** How far beyond the product's working range a reading still passes without a question. */
 export const plausibleMarginK = 10;
-/** A reading may be timed at most this far ahead of the server's clock (clocks drift). */
+/**
+ * A reading may be timed at most this far ahead of the server's clock, or before the pour started: clocks drift, and a
+ * time typed to the minute falls up to a minute before the moment it names.
+ */
 export const futureToleranceMs = 10 * 60_000;
 /** A weighed part further than this from its target, as a share of the target, is questioned. */
 export const weightQuestionShare = 0.5;
@@ -65,7 +68,7 @@ export function readingTimeRefusal(atMs: number, { pourStartedMs, nowMs }: { pou
   if (atMs > nowMs + futureToleranceMs) {
     return `${new Date(atMs).toISOString()} is in the future; a reading can be timed at most ${futureToleranceMs / 60_000} minutes ahead of now (check the logger's clock and time zone).`;
   }
-  if (atMs < pourStartedMs) {
+  if (atMs < pourStartedMs - futureToleranceMs) {
     return `${new Date(atMs).toISOString()} is before this pour started (${new Date(pourStartedMs).toISOString()}); log only readings taken since.`;
   }
   return null;

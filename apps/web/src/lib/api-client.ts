@@ -44,6 +44,8 @@ export interface ApiClient {
   /** For answers without content (204), such as sign-out or a password change. */
   postWithoutContent(path: string, body?: unknown, options?: RequestOptions): Promise<void>;
   delete(path: string, options?: RequestOptions): Promise<void>;
+  /** A DELETE that says why (a void with its reason) and answers what it changed. */
+  deleteWith<T>(path: string, body: unknown, schema: ZodType<T>, options?: RequestOptions): Promise<T>;
 }
 
 export interface ApiClientConfig {
@@ -107,6 +109,7 @@ export function createApiClient(config: ApiClientConfig): ApiClient {
     delete: async (path, options) => {
       await send('DELETE', path, undefined, options);
     },
+    deleteWith: async (path, body, schema, options) => readAs(await send('DELETE', path, asJson(body), options), schema),
   };
 }
 

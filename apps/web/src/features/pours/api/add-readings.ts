@@ -9,14 +9,14 @@ export interface ReadingInput {
   tempC: number;
 }
 
-export function addReadings(pourId: string, readings: ReadingInput[]): Promise<ReadingsAddedAnswer> {
-  return api.post(`/pours/${encodeURIComponent(pourId)}/readings`, { readings }, ReadingsAdded);
+export function addReadings(pourId: string, readings: ReadingInput[], confirmUnusual = false): Promise<ReadingsAddedAnswer> {
+  return api.post(`/pours/${encodeURIComponent(pourId)}/readings`, { readings, confirmUnusual }, ReadingsAdded);
 }
 
 export function useAddReading(pourId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (reading: ReadingInput) => addReadings(pourId, [reading]),
+    mutationFn: ({ reading, confirmUnusual }: { reading: ReadingInput; confirmUnusual: boolean }) => addReadings(pourId, [reading], confirmUnusual),
     onSuccess: () => refreshPour(queryClient, pourId),
   });
 }

@@ -1,4 +1,4 @@
-import type { BatchView, Shop } from '@gelpoint/contracts';
+import type { BatchView, Role, Shop } from '@gelpoint/contracts';
 import { formatTemperature, potLifeMinAt } from '@gelpoint/core';
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
@@ -9,6 +9,8 @@ import { LogBatchForm } from './LogBatchForm';
 import { LoggedBatch } from './LoggedBatch';
 import { PotLifeClock } from './PotLifeClock';
 import { TargetAmounts } from './TargetAmounts';
+import { VoidEntryButton } from './VoidEntryButton';
+import { mayVoid } from '../utils/pour-permissions';
 
 export interface BatchCardProps {
   pourId: string;
@@ -18,6 +20,7 @@ export interface BatchCardProps {
   shop: Shop;
   /** The plan's shop temperature: the pot life is the one the plan and the printed run sheet show. */
   shopTempC: number;
+  viewer: { userId: string; role: Role };
   /** Whether batches can still be logged (the pour is open). */
   open: boolean;
   /** The next cup to mix gets a stronger frame. */
@@ -25,7 +28,7 @@ export interface BatchCardProps {
 }
 
 /** One cup of the run sheet: its targets, its pot-life clock and its log. */
-export function BatchCard({ pourId, cup, of, logged, shop, shopTempC, open, isNext }: BatchCardProps) {
+export function BatchCard({ pourId, cup, of, logged, shop, shopTempC, viewer, open, isNext }: BatchCardProps) {
   const headingId = useId();
   const [logging, setLogging] = useState(false);
   const mixing = useMixingStart(pourId, cup.index);
@@ -82,7 +85,14 @@ export function BatchCard({ pourId, cup, of, logged, shop, shopTempC, open, isNe
       ) : null}
 
       {logged ? (
-        <LoggedBatch batch={logged} unitSystem={shop.unitSystem} scaleResolutionG={shop.scaleResolutionG} />
+        <>
+          <LoggedBatch batch={logged} unitSystem={shop.unitSystem} scaleResolutionG={shop.scaleResolutionG} />
+          {open && mayVoid(viewer, logged.mixedBy) ? (
+            <div>
+              <VoidEntryButton pourId={pourId} kind="batch" id={logged.id} what={`cup ${cup.order}`} />
+            </div>
+          ) : null}
+        </>
       ) : !open ? null : logging ? (
         <LogBatchForm
           pourId={pourId}

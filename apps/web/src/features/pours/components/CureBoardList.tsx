@@ -36,6 +36,15 @@ export function CureBoardList({ pours, role }: { pours: readonly PourSummary[]; 
               {stageReachedWords(pour.cure.stageReached)}
             </p>
             <CureProgressBar cure={pour.cure} label={`Cure of ${pour.piece.name}`} />
+            {pour.flags.length > 0 ? (
+              <ul aria-label={`What needs a look on ${pour.piece.name}`} className="flex flex-wrap gap-2">
+                {pour.flags.map((flag) => (
+                  <li key={flag.code} className="inline-flex items-center gap-1 rounded-full border border-ember-600 bg-ember-50 px-2.5 py-0.5 text-sm font-semibold text-ember-700">
+                    <span aria-hidden="true">!</span> {flag.message}
+                  </li>
+                ))}
+              </ul>
+            ) : null}
             {next ? (
               <p>
                 Next: <strong>{next.source === 'reminder' ? next.title : stageAheadWords(next.key)}</strong> <RelativeTime iso={next.at} />

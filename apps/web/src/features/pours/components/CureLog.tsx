@@ -1,4 +1,4 @@
-import type { PourView, Shop } from '@gelpoint/contracts';
+import type { PourView, Role, Shop } from '@gelpoint/contracts';
 import { formatTemperature } from '@gelpoint/core';
 import { Card } from '../../../components/ui/Card';
 import { useNow } from '../hooks/use-now';
@@ -15,10 +15,11 @@ import { CureStageIcon } from './CureStageIcon';
 import { CureStagesList } from './CureStagesList';
 import { PourReminders } from './PourReminders';
 import { ReadingsCsvForm } from './ReadingsCsvForm';
+import { ReadingsTable } from './ReadingsTable';
 import { TemperaturePlotView } from './TemperaturePlotView';
 
 /** Where the cure stands and what it rests on: temperatures, milestones, checks and reminders. */
-export function CureLog({ pour, sheet, shop }: { pour: PourView; sheet: RunSheet; shop: Shop }) {
+export function CureLog({ pour, sheet, shop, viewer }: { pour: PourView; sheet: RunSheet; shop: Shop; viewer: { userId: string; role: Role } }) {
   const now = useNow(60_000);
   const { cure } = pour;
   const product = productOfStep(sheet, cure.step);
@@ -63,7 +64,8 @@ export function CureLog({ pour, sheet, shop }: { pour: PourView; sheet: RunSheet
           ) : (
             <p className="text-ink-soft">No readings yet. Log the shop temperature now and then, or import a logger’s CSV.</p>
           )}
-          <AddReadingForm pourId={pour.id} unitSystem={shop.unitSystem} />
+          <ReadingsTable pourId={pour.id} readings={pour.readings} voided={pour.voidedReadings} unitSystem={shop.unitSystem} viewer={viewer} />
+          <AddReadingForm pourId={pour.id} unitSystem={shop.unitSystem} product={product} />
           <ReadingsCsvForm pourId={pour.id} />
         </div>
       </Card>

@@ -1,5 +1,5 @@
 import type { Shop } from '@gelpoint/contracts';
-import { massRatioAToB } from '@gelpoint/core';
+import { massRatioAToB, weightConcerns } from '@gelpoint/core';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
@@ -9,6 +9,7 @@ import { Field } from '../../../components/ui/Field';
 import { FormAlert } from '../../../components/ui/FormAlert';
 import { Input } from '../../../components/ui/Input';
 import { Textarea } from '../../../components/ui/Textarea';
+import { UnusualValueQuestion } from '../../../components/ui/UnusualValueQuestion';
 import { ApiError, isApiError } from '../../../lib/api-error';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useLotChoices } from '../api/get-lot-choices';
@@ -35,11 +36,13 @@ const decimal = { inputMode: 'decimal', autoComplete: 'off', className: 'min-h-1
 /** One cup as it was weighed and mixed: lots, grams, air and surface. */
 export function LogBatchForm({ pourId, cup, shop, mixingStartedAtMs, onLogged, onCancel }: LogBatchFormProps) {
   const units = inputUnitsOf(shop.unitSystem);
-  const schema = useMemo(() => batchFormSchema(shop.unitSystem), [shop.unitSystem]);
+  const pigmentRequired = cup.targetPigmentG > 0;
+  const schema = useMemo(() => batchFormSchema(shop.unitSystem, { pigmentRequired }), [shop.unitSystem, pigmentRequired]);
   const form = useForm<BatchFormInput, unknown, BatchFormValues>({ resolver: zodResolver(schema), defaultValues: emptyBatchForm });
   const { errors } = form.formState;
   const [formError, setFormError] = useState<string | null>(null);
   const [expiredNotice, setExpiredNotice] = useState<string | null>(null);
+  const [question, setQuestion] = useState<{ message: string; values: BatchFormValues } | null>(null);
   const log = useLogBatch(pourId);
 
   const lotsA = useLotChoices({ part: 'A', productId: cup.product.id });
@@ -56,19 +59,38 @@ export function LogBatchForm({ pourId, cup, shop, mixingStartedAtMs, onLogged, o
     shop.unitSystem,
   );
 
-  const onSubmit = form.handleSubmit(async (values) => {
+  const save = async (values: BatchFormValues, confirmUnusual: boolean) => {
     setFormError(null);
     try {
-      const answer = await log.mutateAsync(logBatchRequest(values, cup.index, listed, mixingStartedAtMs === null ? null : new Date(mixingStartedAtMs).toISOString()));
+      const answer = await log.mutateAsync(logBatchRequest(values, cup.index, listed, mixingStartedAtMs === null ? null : new Date(mixingStartedAtMs).toISOString(), confirmUnusual));
+      setQuestion(null);
       onLogged(answer);
     } catch (error) {
       if (isApiError(error) && error.code === 'expired_lot_unacknowledged') {
         setExpiredNotice(error.message);
         return;
       }
+      if (isApiError(error) && error.code === 'confirmation_needed') {
+        setQuestion({ message: error.message, values });
+        return;
+      }
       const renamed = isApiError(error) ? new ApiError(error.status, error.code, error.message, formFieldsOf(error.fields)) : error;
       setFormError(applyServerErrors(renamed, form.setError, batchFormFields));
     }
+  };
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    // The API's question about grams far from the cup's targets, asked before anything is sent.
+    const concerns = weightConcerns([
+      { field: 'weighedAG', label: 'Part A', weighedG: values.weighedA, targetG: cup.targetAG },
+      { field: 'weighedBG', label: 'Part B', weighedG: values.weighedB, targetG: cup.targetBG },
+      { field: 'weighedPigmentG', label: 'Pigment', weighedG: values.weighedPigment, targetG: cup.targetPigmentG },
+    ]);
+    if (concerns.length > 0) {
+      setQuestion({ message: concerns.map((c) => c.message).join(' '), values });
+      return;
+    }
+    await save(values, false);
   });
 
   const massLabel = (what: string) => `${what} weighed (${units.mass})`;
@@ -77,6 +99,9 @@ export function LogBatchForm({ pourId, cup, shop, mixingStartedAtMs, onLogged, o
     <form noValidate onSubmit={onSubmit} aria-label={`Log cup ${cup.order}`} className="flex flex-col gap-5">
       <MixingCautions cup={cup} unitSystem={shop.unitSystem} />
       <FormAlert message={formError} title="The batch was not logged" />
+      {question ? (
+        <UnusualValueQuestion message={question.message} confirmLabel="Log this cup as it is" busy={log.isPending} onConfirm={() => void save(question.values, true)} />
+      ) : null}
 
       <fieldset className="flex flex-col gap-4">
         <legend className="mb-2 text-lg font-bold text-walnut-900">Lots</legend>
@@ -124,7 +149,7 @@ export function LogBatchForm({ pourId, cup, shop, mixingStartedAtMs, onLogged, o
             {(control) => <Input {...control} {...decimal} {...form.register('weighedB')} />}
           </Field>
           {cup.targetPigmentG > 0 ? (
-            <Field label={massLabel('Pigment')} error={errors.weighedPigment?.message}>
+            <Field label={massLabel('Pigment')} error={errors.weighedPigment?.message} required={pigmentRequired}>
               {(control) => <Input {...control} {...decimal} {...form.register('weighedPigment')} />}
             </Field>
           ) : null}

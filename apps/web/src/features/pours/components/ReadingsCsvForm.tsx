@@ -3,6 +3,7 @@ import { Alert } from '../../../components/ui/Alert';
 import { Button } from '../../../components/ui/Button';
 import { FieldError } from '../../../components/ui/Field';
 import { ErrorAlert } from '../../../components/ui/ErrorAlert';
+import { UnusualValueQuestion } from '../../../components/ui/UnusualValueQuestion';
 import { isApiError } from '../../../lib/api-error';
 import { useUploadReadingsCsv } from '../api/upload-readings-csv';
 import { csvRowProblems } from '../utils/csv-problems';
@@ -16,6 +17,7 @@ export function ReadingsCsvForm({ pourId }: { pourId: string }) {
   const hintId = useId();
   const fileRef = useRef<HTMLInputElement>(null);
   const [problem, setProblem] = useState<string | null>(null);
+  const [asked, setAsked] = useState<{ message: string; csvText: string } | null>(null);
   const upload = useUploadReadingsCsv(pourId);
   const rowProblems = isApiError(upload.error) && upload.error.code === 'csv_invalid' ? csvRowProblems(upload.error.fields) : [];
 
@@ -32,11 +34,17 @@ export function ReadingsCsvForm({ pourId }: { pourId: string }) {
       setProblem('That file is larger than 2 MB; export a shorter stretch of the log.');
       return;
     }
+    await send(await file.text(), false);
+  };
+
+  const send = async (csvText: string, confirmUnusual: boolean) => {
+    setAsked(null);
     try {
-      await upload.mutateAsync(await file.text());
+      await upload.mutateAsync({ csvText, confirmUnusual });
       if (fileRef.current) fileRef.current.value = '';
-    } catch {
-      // Shown below from the mutation's own error.
+    } catch (error) {
+      // Questions about unusual values are answered here; other errors are shown below from the mutation's own error.
+      if (isApiError(error) && error.code === 'confirmation_needed') setAsked({ message: error.message, csvText });
     }
   };
 
@@ -47,7 +55,8 @@ export function ReadingsCsvForm({ pourId }: { pourId: string }) {
           Temperature log (CSV)
         </label>
         <p id={hintId} className="text-sm text-ink-soft">
-          One reading per row as <code>time,tempC</code>, e.g. <code>2026-03-01T18:30:00Z,21.5</code>; times with Z or an offset, temperatures in °C.
+          One reading per row as <code>time,tempC</code>, e.g. <code>2026-03-01T18:30:00Z,21.5</code>; times with Z or an offset. A log whose header
+          says <code>tempF</code> is read in °F and converted.
         </p>
         <input
           ref={fileRef}
@@ -59,7 +68,9 @@ export function ReadingsCsvForm({ pourId }: { pourId: string }) {
         />
         {problem ? <FieldError>{problem}</FieldError> : null}
       </div>
-      {rowProblems.length > 0 ? (
+      {asked ? (
+        <UnusualValueQuestion message={asked.message} confirmLabel="Import it as it is" busy={upload.isPending} onConfirm={() => void send(asked.csvText, true)} />
+      ) : rowProblems.length > 0 ? (
         <Alert tone="error" title="Nothing was imported" live="alert">
           <p>Every row must be readable before any is imported. Fix these rows in the file and import it again:</p>
           <ul className="mt-2 flex list-disc flex-col gap-1 pl-5">
@@ -70,12 +81,13 @@ export function ReadingsCsvForm({ pourId }: { pourId: string }) {
             ))}
           </ul>
         </Alert>
-      ) : upload.isError ? (
+      ) : upload.isError && !(isApiError(upload.error) && upload.error.code === 'confirmation_needed') ? (
         <ErrorAlert error={upload.error} />
       ) : null}
       {upload.isSuccess ? (
         <Alert tone="success">
           {upload.data.added === 1 ? '1 reading imported' : `${upload.data.added} readings imported`}
+          {upload.data.unit === 'F' ? ' (read in °F and converted to °C)' : ''}
           {upload.data.duplicates > 0 ? `; ${upload.data.duplicates} were already in the log.` : '.'}
         </Alert>
       ) : null}

@@ -5,6 +5,7 @@ import { cx } from '../../../lib/cx';
 import { useNow } from '../hooks/use-now';
 import type { Today } from '../types';
 import { isOverdue } from '../utils/relative-time';
+import { MarkDoneButton } from './MarkDoneButton';
 import { RelativeTime } from './RelativeTime';
 
 /** Reminders due in the next day or already overdue, oldest first, each leading to its pour. */
@@ -25,7 +26,8 @@ export function TodayList({ today }: { today: Today }) {
       </h2>
       <ul className="flex flex-col gap-3">
         {due.map((reminder) => {
-          const overdue = isOverdue(Date.parse(reminder.dueAt), now);
+          const notice = reminder.kind === 'piece_released' || reminder.kind === 'piece_machined';
+          const overdue = !notice && reminder.status === 'pending' && isOverdue(Date.parse(reminder.dueAt), now);
           return (
             <li key={reminder.id} className={cx('flex flex-col gap-1 rounded-xl border bg-white p-4', overdue ? 'border-l-4 border-ember-600' : 'border-line')}>
               <p className="text-lg font-bold text-walnut-900">
@@ -33,11 +35,32 @@ export function TodayList({ today }: { today: Today }) {
                 {reminder.title}
               </p>
               <p className="text-ink-soft">
-                {reminder.pieceName} · {overdue ? 'was due' : 'due'} <RelativeTime iso={reminder.dueAt} />
+                {reminder.pieceName} ·{' '}
+                {notice ? (
+                  <RelativeTime iso={reminder.eventAt} />
+                ) : reminder.status === 'sent' ? (
+                  <>
+                    sent <RelativeTime iso={reminder.sentAt ?? reminder.dueAt} />
+                    {reminder.leadMin > 0 ? (
+                      <>
+                        ; closes <RelativeTime iso={reminder.eventAt} />
+                      </>
+                    ) : null}
+                  </>
+                ) : reminder.leadMin > 0 ? (
+                  <>
+                    closes <RelativeTime iso={reminder.eventAt} />
+                  </>
+                ) : (
+                  <>
+                    {overdue ? 'was due' : 'due'} <RelativeTime iso={reminder.dueAt} />
+                  </>
+                )}
                 {reminder.assumed ? ' (time rests on the assumed temperature)' : ''}
               </p>
-              <div>
+              <div className="flex flex-wrap items-center gap-x-5 gap-y-2">
                 <TextLink to={paths.pour.getHref(reminder.pourId)}>Open the pour of {reminder.pieceName}</TextLink>
+                <MarkDoneButton reminderId={reminder.id} title={reminder.title} />
               </div>
             </li>
           );

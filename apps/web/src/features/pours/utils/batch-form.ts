@@ -46,12 +46,20 @@ export const emptyBatchForm: BatchFormInput = {
 const maxGrams = 1_000_000;
 const tempRangeC = { min: -30, max: 80 };
 
-function weighedField(label: string, unitSystem: UnitSystem, required: boolean) {
+/** positive: above zero; present: typed, zero allowed (a cup's pigment); optional: blank means none. */
+type WeighedRule = 'positive' | 'present' | 'optional';
+
+function weighedField(label: string, unitSystem: UnitSystem, rule: WeighedRule) {
   const unit = inputUnitsOf(unitSystem).mass;
+  const required = rule === 'positive';
   return z.string().transform((text, ctx) => {
     const value = readDecimal(text);
     if (value === null) {
-      if (text.trim() === '' && !required) return 0;
+      if (text.trim() === '' && rule === 'optional') return 0;
+      if (text.trim() === '' && rule === 'present') {
+        ctx.addIssue({ code: 'custom', message: `This cup takes pigment: enter the ${label} the scale showed, in ${unit} (0 if you left it out).` });
+        return z.NEVER;
+      }
       ctx.addIssue({ code: 'custom', message: `Enter the ${label} the scale showed, in ${unit}, such as ${unit === 'g' ? '212.4' : '7.49'}.` });
       return z.NEVER;
     }
@@ -99,7 +107,7 @@ const humidityField = z.string().transform((text, ctx) => {
 const lotNumber = z.string().trim().max(80, { message: 'A lot number has at most 80 characters; copy it from the label.' });
 
 /** The mixing form's rules for a shop's units; its output is in grams, °C and %. */
-export function batchFormSchema(unitSystem: UnitSystem) {
+export function batchFormSchema(unitSystem: UnitSystem, { pigmentRequired = false }: { pigmentRequired?: boolean } = {}) {
   return z.object({
     lotA: z.string(),
     lotANumber: lotNumber,
@@ -107,9 +115,9 @@ export function batchFormSchema(unitSystem: UnitSystem) {
     lotBNumber: lotNumber,
     lotPigment: z.string(),
     lotPigmentNumber: lotNumber,
-    weighedA: weighedField('weighed part A', unitSystem, true),
-    weighedB: weighedField('weighed part B', unitSystem, true),
-    weighedPigment: weighedField('weighed pigment', unitSystem, false),
+    weighedA: weighedField('weighed part A', unitSystem, 'positive'),
+    weighedB: weighedField('weighed part B', unitSystem, 'positive'),
+    weighedPigment: weighedField('weighed pigment', unitSystem, pigmentRequired ? 'present' : 'optional'),
     ambientTemp: temperatureField('air temperature', unitSystem),
     surfaceTemp: temperatureField('surface temperature', unitSystem),
     rh: humidityField,
@@ -126,7 +134,7 @@ function lotOf(choice: string, typed: string, listedLotIds: ReadonlySet<string>)
 }
 
 /** The batch as the API takes it: a listed lot by its id, a typed one by its number. */
-export function logBatchRequest(values: BatchFormValues, planBatchIndex: number, listedLotIds: ReadonlySet<string>, mixedAt: string | null): LogBatchRequest {
+export function logBatchRequest(values: BatchFormValues, planBatchIndex: number, listedLotIds: ReadonlySet<string>, mixedAt: string | null, confirmUnusual = false): LogBatchRequest {
   const a = lotOf(values.lotA, values.lotANumber, listedLotIds);
   const b = lotOf(values.lotB, values.lotBNumber, listedLotIds);
   const pigment = lotOf(values.lotPigment, values.lotPigmentNumber, listedLotIds);
@@ -147,6 +155,7 @@ export function logBatchRequest(values: BatchFormValues, planBatchIndex: number,
     rhPct: values.rh,
     notes: values.notes,
     acknowledgeExpiredLot: values.acknowledgeExpiredLot,
+    confirmUnusual,
   };
 }
 

@@ -33,6 +33,7 @@ const StoredProduct = z.looseObject({
   potLifeMin: z.number(),
   maxBatchG: z.number(),
   minWorkTempC: z.number(),
+  maxWorkTempC: z.number(),
   referenceTempC: z.number(),
   fullCureH: z.number(),
   activationEnergyKJPerMol: z.number().optional(),

@@ -103,13 +103,13 @@ export function Component() {
                         <h2 id="run-sheet" className="scroll-mt-4 text-2xl font-bold text-walnut-900">
                           Run sheet
                         </h2>
-                        <RunSheet pour={current} sheet={sheet.value} shop={units} />
+                        <RunSheet pour={current} sheet={sheet.value} shop={units} viewer={{ userId: session.user.id, role: session.role }} />
                       </section>
                       <section aria-labelledby="cure-log" className="flex flex-col gap-4">
                         <h2 id="cure-log" className="scroll-mt-4 text-2xl font-bold text-walnut-900">
                           Cure log
                         </h2>
-                        <CureLog pour={current} sheet={sheet.value} shop={units} />
+                        <CureLog pour={current} sheet={sheet.value} shop={units} viewer={{ userId: session.user.id, role: session.role }} />
                       </section>
                     </div>
                   );
