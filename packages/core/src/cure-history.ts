@@ -1,3 +1,5 @@
+import { splitByShopTemperature, type ShopTemperature } from './shop-temperature';
+
 /**
  * The temperature history a cure sum runs over, as stretches of one kind each:
  *
@@ -31,6 +33,8 @@ export interface TimedReading {
 export const defaultReadingCarryH = 2;
 
 const msPerHour = 3_600_000;
+/** Forecasts walk the shop's day and night this far ahead, then hold its temperature there. */
+const forecastHorizonMs = 180 * 24 * msPerHour;
 
 function flat(fromMs: number, toMs: number, tempC: number, source: CureSpanSource): HistoryPiece {
   return { fromMs, toMs, startTempC: tempC, endTempC: tempC, tempC, source };
@@ -41,42 +45,53 @@ function lowest(...temps: (number | undefined)[]): number {
   return Math.min(...temps.filter((t): t is number => t !== undefined && Number.isFinite(t)));
 }
 
+/** A stretch before it is cut to the window: fixed pieces keep their temperature, open ones follow the shop. */
+type Raw = { piece: HistoryPiece; ceilingC?: undefined } | { piece: HistoryPiece; ceilingC: number | undefined; followsShop: true };
+
 /**
- * Splits [fromMs, toMs] into history pieces. Readings are in time order (each time once). The
- * caller makes sure an assumed temperature exists where a stretch has no reading on either side.
+ * Splits [fromMs, toMs] into history pieces. Readings are in time order (each time once). Gaps and stretches without
+ * any reading follow the shop's temperature (split where it changes, day to night); without one, an assumed stretch
+ * has no temperature (NaN) and the caller refuses.
  */
-export function historyPieces(readings: TimedReading[], fromMs: number, toMs: number, carryH: number, assumedTempC: number | undefined): HistoryPiece[] {
+export function historyPieces(readings: TimedReading[], fromMs: number, toMs: number, carryH: number, shop: ShopTemperature | undefined): HistoryPiece[] {
   const carryMs = carryH * msPerHour;
-  const raw: HistoryPiece[] = [];
+  const raw: Raw[] = [];
+  const open = (a: number, b: number, ceilingC: number | undefined, source: CureSpanSource): Raw => ({ piece: flat(a, b, ceilingC ?? Number.NaN, source), ceilingC, followsShop: true });
   if (readings.length === 0) {
-    raw.push(flat(fromMs, toMs, assumedTempC ?? Number.NaN, 'assumed'));
+    raw.push(open(fromMs, toMs, undefined, 'assumed'));
   } else {
     const first = readings[0]!;
     const last = readings[readings.length - 1]!;
     // Before the first reading: it speaks for the carry limit back, the rest is a gap.
     const leadGapEnd = first.ms - carryMs;
-    raw.push(flat(-Infinity, leadGapEnd, lowest(first.tempC, assumedTempC), 'gap'));
-    raw.push(flat(leadGapEnd, first.ms, first.tempC, 'carried'));
+    raw.push(open(-Infinity, leadGapEnd, first.tempC, 'gap'));
+    raw.push({ piece: flat(leadGapEnd, first.ms, first.tempC, 'carried') });
     for (let i = 0; i + 1 < readings.length; i++) {
       const a = readings[i]!;
       const b = readings[i + 1]!;
       if (b.ms - a.ms <= 2 * carryMs) {
-        raw.push({ fromMs: a.ms, toMs: b.ms, startTempC: a.tempC, endTempC: b.tempC, tempC: (a.tempC + b.tempC) / 2, source: 'logged' });
+        raw.push({ piece: { fromMs: a.ms, toMs: b.ms, startTempC: a.tempC, endTempC: b.tempC, tempC: (a.tempC + b.tempC) / 2, source: 'logged' } });
       } else {
-        raw.push(flat(a.ms, a.ms + carryMs, a.tempC, 'carried'));
-        raw.push(flat(a.ms + carryMs, b.ms - carryMs, lowest(a.tempC, b.tempC, assumedTempC), 'gap'));
-        raw.push(flat(b.ms - carryMs, b.ms, b.tempC, 'carried'));
+        raw.push({ piece: flat(a.ms, a.ms + carryMs, a.tempC, 'carried') });
+        raw.push(open(a.ms + carryMs, b.ms - carryMs, lowest(a.tempC, b.tempC), 'gap'));
+        raw.push({ piece: flat(b.ms - carryMs, b.ms, b.tempC, 'carried') });
       }
     }
-    raw.push(flat(last.ms, last.ms + carryMs, last.tempC, 'carried'));
-    raw.push(flat(last.ms + carryMs, Infinity, lowest(last.tempC, assumedTempC), 'gap'));
+    raw.push({ piece: flat(last.ms, last.ms + carryMs, last.tempC, 'carried') });
+    raw.push(open(last.ms + carryMs, Infinity, last.tempC, 'gap'));
   }
   const pieces: HistoryPiece[] = [];
-  for (const piece of raw) {
+  for (const entry of raw) {
+    const { piece } = entry;
     const start = Math.max(piece.fromMs, fromMs);
     const end = Math.min(piece.toMs, toMs);
     if (!(end > start)) continue;
-    pieces.push({ ...piece, ...clippedEnds(piece, start, end), fromMs: start, toMs: end });
+    if ('followsShop' in entry && shop) {
+      const ceiling = entry.ceilingC;
+      pieces.push(...splitByShopTemperature(start, end, shop, (a, b, shopC) => flat(a, b, lowest(ceiling, shopC), piece.source)));
+    } else {
+      pieces.push({ ...piece, ...clippedEnds(piece, start, end), fromMs: start, toMs: end });
+    }
   }
   return pieces;
 }
@@ -91,14 +106,15 @@ function clippedEnds(piece: HistoryPiece, start: number, end: number): Pick<Hist
 }
 
 /**
- * The temperature to expect after asOf: the latest reading for as long as it carries, then the
- * lower of it and the assumed shop temperature (with no reading, the assumed temperature). The same
- * rule as a gap in the history, so a forecast never runs warmer than the sum would count it.
+ * The temperature to expect after asOf: the latest reading for as long as it carries, then the shop's own pattern
+ * (day and night), lowered by as much as the latest reading fell short of it, never raised. Without a reading, the
+ * shop's pattern itself. So a forecast follows the night dip, and never runs warmer than the log says.
  */
-export function forwardPieces(readings: TimedReading[], asOfMs: number, carryH: number, assumedTempC: number): HistoryPiece[] {
+export function forwardPieces(readings: TimedReading[], asOfMs: number, carryH: number, shop: ShopTemperature): HistoryPiece[] {
   const last = readings[readings.length - 1];
-  if (!last) return [flat(asOfMs, Infinity, assumedTempC, 'assumed')];
+  if (!last) return splitByShopTemperature(asOfMs, Infinity, shop, (a, b, t) => flat(a, b, t, 'assumed'), asOfMs + forecastHorizonMs);
   const carriedUntil = last.ms + carryH * msPerHour;
-  const later = flat(Math.max(asOfMs, carriedUntil), Infinity, lowest(last.tempC, assumedTempC), 'gap');
-  return asOfMs < carriedUntil ? [flat(asOfMs, carriedUntil, last.tempC, 'carried'), later] : [later];
+  const shortfall = Math.min(0, last.tempC - shop.at(last.ms));
+  const later = splitByShopTemperature(Math.max(asOfMs, carriedUntil), Infinity, shop, (a, b, t) => flat(a, b, t + shortfall, 'gap'), asOfMs + forecastHorizonMs);
+  return asOfMs < carriedUntil ? [flat(asOfMs, carriedUntil, last.tempC, 'carried'), ...later] : later;
 }

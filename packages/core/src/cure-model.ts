@@ -5,6 +5,7 @@ import { forwardPieces } from './cure-history';
 import { equivalentAge, readTimedReadings, type CureSpan, type EquivalentAge } from './equivalent-age';
 import { potLifeMinAt } from './pot-life';
 import { checkZone, formatIsoInstant, msPerHour, parseIsoInstant } from './iso-time';
+import { shopTemperatureOf, type AssumedTemperature } from './shop-temperature';
 import { fail, ok, type Result } from './result';
 import { activationEnergyOf, readyToMachineHOf, type ResinSystem } from './shelf';
 
@@ -114,7 +115,7 @@ export interface StagePredictionInput {
   /** The moment the equivalent age was taken. */
   asOf: string;
   /** The temperature expected from asOf on, when `ahead` is not given. */
-  assumedTempC: number;
+  assumedTempC?: number;
   /** The temperatures expected from asOf on, in time order; the last should run to Infinity. */
   ahead?: ForecastPiece[];
   zone?: string;
@@ -138,7 +139,7 @@ export function predictStages(input: StagePredictionInput): Result<StageTiming[]
   if (!asOf.ok) return fail(asOf.error.code, `The time to predict from: ${asOf.error.message}`);
   const zone = checkZone(input.zone ?? 'utc');
   if (!zone.ok) return zone;
-  const ahead = input.ahead ?? [{ fromMs: asOf.value, toMs: Infinity, tempC: input.assumedTempC }];
+  const ahead = input.ahead ?? [{ fromMs: asOf.value, toMs: Infinity, tempC: input.assumedTempC ?? Number.NaN }];
   const bad = ahead.find((p) => !(Number.isFinite(p.tempC) && p.tempC > -273.15));
   if (bad) return fail('temperature_invalid', `The assumed temperature must be a number in °C above absolute zero, got ${String(bad.tempC)}.`);
   const { product } = input;
@@ -178,8 +179,8 @@ export interface CureStatusInput {
   pouredAt: string;
   /** Now, or the moment to look at. */
   asOf: string;
-  /** The plan's shop temperature: counted where no reading exists, and never exceeded in a gap or a forecast. */
-  assumedTempC: number;
+  /** The plan's shop temperature (or the shop's day and night): counted where no reading exists, never exceeded in a gap or a forecast. */
+  assumedTempC: AssumedTemperature;
   /** How long a reading speaks for on either side of it, in hours (default 2). */
   readingCarryH?: number;
   zone?: string;
@@ -219,9 +220,9 @@ export function cureStatus(input: CureStatusInput): Result<CureStatus> {
   if (!timed.ok) return timed;
   if (!asOfMs.ok) return asOfMs;
   const upToNow = timed.value.filter((r) => r.ms <= asOfMs.value);
-  const ahead = forwardPieces(upToNow, asOfMs.value, age.value.readingCarryH, input.assumedTempC).map(({ fromMs, toMs, tempC }) => ({ fromMs, toMs, tempC }));
+  const ahead = forwardPieces(upToNow, asOfMs.value, age.value.readingCarryH, shopTemperatureOf(input.assumedTempC)).map(({ fromMs, toMs, tempC }) => ({ fromMs, toMs, tempC }));
   const te = age.value.equivalentHoursAtRef;
-  const predicted = predictStages({ product, equivalentHoursAtRef: te, asOf: input.asOf, assumedTempC: input.assumedTempC, ahead, ...zoneArg });
+  const predicted = predictStages({ product, equivalentHoursAtRef: te, asOf: input.asOf, ahead, ...zoneArg });
   if (!predicted.ok) return predicted;
   const stages = predicted.value.map((stage) => {
     if (!stage.reached) return stage;

@@ -4,6 +4,7 @@ import { defaultReadingCarryH, historyPieces, type CureSpanSource, type TimedRea
 import type { CureReading } from './cure-readings';
 import { checkZone, formatIsoInstant, msPerHour, parseIsoInstant } from './iso-time';
 import { fail, ok, type Result } from './result';
+import { shopTemperatureOf, type AssumedTemperature } from './shop-temperature';
 
 export interface EquivalentAgeInput {
   readings: CureReading[];
@@ -18,8 +19,11 @@ export interface EquivalentAgeInput {
    * The stretch of time to add up (pour to now). Absent: from the first reading to the last.
    */
   window?: { from: string; to: string };
-  /** The planned shop temperature: counted where no reading exists, and the ceiling of every gap. */
-  assumedTempC?: number;
+  /**
+   * The planned shop temperature, one constant or the shop's day and night: counted where no reading exists, and
+   * the ceiling of every gap.
+   */
+  assumedTempC?: AssumedTemperature;
   /** How long a reading speaks for on either side of it, in hours (a shop setting; 2 h by default). */
   readingCarryH?: number;
   /** IANA zone for the times this returns (default UTC). */
@@ -123,9 +127,10 @@ export function equivalentAge(input: EquivalentAgeInput): Result<EquivalentAge> 
   if (!Number.isFinite(input.activationEnergyKJPerMol) || input.activationEnergyKJPerMol <= 0) {
     return fail('activation_energy_not_positive', `The activation energy must be above zero (in kJ/mol), got ${String(input.activationEnergyKJPerMol)}.`);
   }
-  if (input.assumedTempC !== undefined && !(Number.isFinite(input.assumedTempC) && input.assumedTempC > -273.15)) {
+  if (typeof input.assumedTempC === 'number' && !(Number.isFinite(input.assumedTempC) && input.assumedTempC > -273.15)) {
     return fail('temperature_invalid', `The assumed shop temperature must be a number in °C above absolute zero, got ${String(input.assumedTempC)}.`);
   }
+  const shop = input.assumedTempC === undefined ? undefined : shopTemperatureOf(input.assumedTempC);
   const readings = timed.value;
   let fromMs: number;
   let toMs: number;
@@ -143,7 +148,7 @@ export function equivalentAge(input: EquivalentAgeInput): Result<EquivalentAge> 
     toMs = readings[readings.length - 1]!.ms;
   }
 
-  const pieces = historyPieces(readings, fromMs, toMs, carry.value, input.assumedTempC);
+  const pieces = historyPieces(readings, fromMs, toMs, carry.value, shop);
   if (pieces.some((p) => !Number.isFinite(p.tempC))) {
     return fail('assumed_temp_missing', 'Part of the cure window has no temperature readings; give the temperature to assume there (the planned shop temperature).');
   }
@@ -199,7 +204,7 @@ export function equivalentAge(input: EquivalentAgeInput): Result<EquivalentAge> 
       caution(
         'cure_temp_assumed',
         'info',
-        `No temperature has been logged for this cure, so ${input.assumedTempC} °C (the plan's shop temperature) was assumed; log temperatures to make the cure rest on what happened.`,
+        `No temperature has been logged for this cure, so ${shop?.words ?? 'the plan\'s shop temperature'} was assumed; log temperatures to make the cure rest on what happened.`,
         'plan',
       ),
     );

@@ -21,6 +21,7 @@ export * from './dew-point';
 export * from './iso-time';
 export * from './cure-readings';
 export { parseDecimal } from './reading-cells';
+export * from './shop-temperature';
 export * from './cure-history';
 export * from './equivalent-age';
 export * from './pot-life';

@@ -4,6 +4,7 @@ import type { PlannedBatch, PourPlan } from './pour-plan';
 import type { ResinSystem } from './shelf';
 import { finishCoatSchedule } from './finish-coats';
 import type { StageTiming } from './cure-model';
+import type { AssumedTemperature } from './shop-temperature';
 
 /** What a saved plan's snapshot holds (see pour-plans.service): the products the plan was computed with. */
 export interface PlanSnapshot {
@@ -52,7 +53,7 @@ export function cureState(
   steps: PlanStep[],
   logged: { step: string; mixedAt: Date }[],
   readings: CureReading[],
-  assumedTempC: number,
+  assumedTempC: AssumedTemperature,
   now: Date,
   options: { readingCarryH?: number } = {},
 ): CureState {
