@@ -1,10 +1,10 @@
 import { createServer } from 'node:http';
-import { pino } from 'pino';
 import { connectDataSource, createDataSource } from '@gelpoint/db';
 import { createApp } from './app';
 import { loadConfig } from './config';
+import { createLogger } from './logger';
 
-const logger = pino({ level: process.env.GELPOINT_LOG_LEVEL ?? 'info' });
+const logger = createLogger(process.env.GELPOINT_LOG_LEVEL ?? 'info');
 
 function fail(message: string): never {
   process.stderr.write(`api: ${message}\n`);
