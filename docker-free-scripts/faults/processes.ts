@@ -110,6 +110,19 @@ export class AppProcess {
     this.lineListeners.push(listener);
   }
 
+  /** Sends a signal and returns at once (SIGTERM to watch a shutdown, SIGSTOP/SIGCONT to pause a process). */
+  send(sig: NodeJS.Signals): void {
+    if (this.running) this.child!.kill(sig);
+  }
+
+  /** The exit code (null when a signal ended it), once the process has exited. */
+  exited(): Promise<number | null> {
+    const child = this.child;
+    if (!child) return Promise.resolve(null);
+    if (!this.running) return Promise.resolve(child.exitCode);
+    return new Promise((resolve) => child.once('exit', (code) => resolve(code)));
+  }
+
   /** SIGKILL: no shutdown handler runs, as when the machine or the container dies. */
   kill(): Promise<void> {
     return this.signal('SIGKILL');

@@ -20,6 +20,7 @@ const Env = z.object({
   GELPOINT_MAX_STL_TRIANGLES: z.coerce.number().int().positive().max(20_000_000).default(5_000_000),
   GELPOINT_UPLOADS_PER_HOUR: z.coerce.number().int().positive().default(60),
   GELPOINT_UPLOAD_QUOTA_MB: z.coerce.number().positive().default(1024),
+  GELPOINT_SHUTDOWN_GRACE_S: z.coerce.number().positive().max(600).default(25),
 });
 
 export interface Config {
@@ -41,6 +42,8 @@ export interface Config {
   uploadsPerHour: number;
   /** What each member's stored files (STL and photos) may add up to. */
   uploadQuotaBytes: number;
+  /** On SIGTERM, how long requests already under way may take to finish before their connections are cut. */
+  shutdownGraceMs: number;
 }
 
 function jwtSecretFrom(env: z.infer<typeof Env>): string {
@@ -81,5 +84,6 @@ export function loadConfig(raw: NodeJS.ProcessEnv = process.env): Config {
     maxStlBytes: Math.round(env.GELPOINT_MAX_STL_MB * 1024 * 1024),
     uploadsPerHour: env.GELPOINT_UPLOADS_PER_HOUR,
     uploadQuotaBytes: Math.round(env.GELPOINT_UPLOAD_QUOTA_MB * 1024 * 1024),
+    shutdownGraceMs: Math.round(env.GELPOINT_SHUTDOWN_GRACE_S * 1000),
   };
 }

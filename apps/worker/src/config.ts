@@ -22,6 +22,7 @@ const Env = z.object({
     .transform((s) => s.split(',').map((x) => x.trim()).filter(Boolean))
     .pipe(z.array(z.enum(['reminders', 'mail', 'molds'], { message: 'GELPOINT_WORKER_JOBS lists reminders, mail and/or molds' })).min(1)),
   GELPOINT_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  GELPOINT_SHUTDOWN_GRACE_S: z.coerce.number().positive().max(600).default(25),
 });
 
 export interface WorkerConfig {
@@ -35,6 +36,8 @@ export interface WorkerConfig {
   mail: { batch: number; retryBaseS: number; maxAttempts: number; leaseS: number };
   molds: { maxTriangles: number; leaseS: number; maxAttempts: number };
   logLevel: z.infer<typeof Env>['GELPOINT_LOG_LEVEL'];
+  /** On SIGTERM, how long the job under way (a mail send) may take before the process exits anyway. */
+  shutdownGraceMs: number;
 }
 
 export function loadWorkerConfig(raw: NodeJS.ProcessEnv = process.env): WorkerConfig {
@@ -51,5 +54,6 @@ export function loadWorkerConfig(raw: NodeJS.ProcessEnv = process.env): WorkerCo
     mail: { batch: e.GELPOINT_MAIL_BATCH, retryBaseS: e.GELPOINT_MAIL_RETRY_BASE_S, maxAttempts: e.GELPOINT_MAIL_MAX_ATTEMPTS, leaseS: e.GELPOINT_MAIL_LEASE_S },
     molds: { maxTriangles: e.GELPOINT_MAX_STL_TRIANGLES, leaseS: e.GELPOINT_ANALYSIS_LEASE_S, maxAttempts: 3 },
     logLevel: e.GELPOINT_LOG_LEVEL,
+    shutdownGraceMs: Math.round(e.GELPOINT_SHUTDOWN_GRACE_S * 1000),
   };
 }
