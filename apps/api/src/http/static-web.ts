@@ -2,6 +2,7 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import express, { type RequestHandler, type Router } from 'express';
 import expressStaticGzip from 'express-static-gzip';
+import { AppError } from './errors';
 
 // express-static-gzip decodes the path itself and answers a broken %-escape with a bare text 400;
 // refusing it first keeps the API's own sentence (errors.ts maps a 400 URIError to bad_path).
@@ -13,6 +14,9 @@ const refuseBrokenEscapes: RequestHandler = (req, _res, next) => {
   }
   next();
 };
+
+// A missing or refused asset (a climb out of /assets included) is a 404 here, never the app's HTML.
+const noSuchAsset: RequestHandler = (_req, _res, next) => next(new AppError('not_found', 'not_found', 'there is nothing to serve at this address'));
 
 /**
  * Serves the built web app. Hashed assets never change under their name, so they are cached for a
@@ -30,8 +34,9 @@ export function staticWeb(distDir: string): Router {
       enableBrotli: true,
       orderPreference: ['br', 'gzip'],
       index: false,
-      serveStatic: { immutable: true, maxAge: '1y', fallthrough: false, index: false },
+      serveStatic: { immutable: true, maxAge: '1y', index: false },
     }),
+    noSuchAsset,
   );
   router.use(express.static(distDir, { index: false, maxAge: '1h' }));
   const spa: RequestHandler = (req, res, next) => {
