@@ -4,6 +4,9 @@ import { z } from 'zod';
 import { databaseUrl } from '@gelpoint/db';
 
 const Env = z.object({
+  DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL').optional(),
+  // Read by the password hashing in packages/db; checked here so a bad value stops the boot, not a sign-in.
+  GELPOINT_SCRYPT_LOG_N: z.coerce.number().int().min(10, 'GELPOINT_SCRYPT_LOG_N must be 10 to 20').max(20, 'GELPOINT_SCRYPT_LOG_N must be 10 to 20').optional(),
   GELPOINT_HOST: z.string().default('127.0.0.1'),
   GELPOINT_API_PORT: z.coerce.number().int().min(0).max(65535).default(8080),
   GELPOINT_PUBLIC_URL: z.url().optional(),

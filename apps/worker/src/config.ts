@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { databaseUrl } from '@gelpoint/db';
 
 const Env = z.object({
+  DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL').optional(),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
   SMTP_SECURE: z.enum(['true', 'false']).default('false'),
