@@ -46,6 +46,6 @@ export const loggerRedaction: LoggerOptions['redact'] = { paths: [...redactedPat
 
 /** The API's logger: JSON lines with secrets redacted, to stdout unless a destination is given. */
 export function createLogger(level: string, destination?: DestinationStream): Logger {
-  const options: LoggerOptions = { level };
+  const options: LoggerOptions = { level, redact: loggerRedaction };
   return destination ? pino(options, destination) : pino(options);
 }

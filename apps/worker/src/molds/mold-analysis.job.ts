@@ -42,24 +42,32 @@ function runThread(req: AnalysisRequest, onProgress: (v: number) => void, stop?:
   return new Promise((resolve, reject) => {
     const w = tsWorker(new URL('./mold-analysis.thread.ts', import.meta.url), { resourceLimits: { maxOldGenerationSizeMb: 4096 } });
     let settled = false;
-    stop?.addEventListener('abort', () => {
+    const onStop = () => {
       if (settled) return;
       settled = true;
       reject(new AnalysisStopped('the worker is stopping'));
       void w.terminate();
-    }, { once: true });
+    };
+    // One listener per analysis on the worker's long-lived signal, so it goes when the analysis does.
+    const settle = () => {
+      settled = true;
+      stop?.removeEventListener('abort', onStop);
+    };
+    stop?.addEventListener('abort', onStop, { once: true });
     w.on('message', (m: AnalysisMessage) => {
       if (m.type === 'progress') return onProgress(m.value);
-      settled = true;
+      settle();
       resolve(m);
       void w.terminate();
     });
     w.on('error', (err) => {
-      settled = true;
+      settle();
       reject(err);
     });
     w.on('exit', (code) => {
-      if (!settled) reject(new Error(`the analysis thread stopped (exit ${code})`));
+      if (settled) return;
+      settle();
+      reject(new Error(`the analysis thread stopped (exit ${code})`));
     });
     w.postMessage(req, [req.bytes.buffer as ArrayBuffer]);
   });
