@@ -1,4 +1,3 @@
-import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import express, { type Express } from 'express';
 import type { Logger } from 'pino';
@@ -6,6 +5,7 @@ import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config';
 import { createLogger } from './logger';
+import { compressAnswers } from './http/compress-answers';
 import { AppError, errorHandler } from './http/errors';
 import { openApiDocument } from './http/openapi';
 import { originCheck } from './http/origin-check';
@@ -31,18 +31,6 @@ import { shopRoutes } from './modules/shop/shop.routes';
 import { teamRoutes } from './modules/team/team.routes';
 import { UploadQuota } from './modules/uploads/upload-quota';
 
-/**
- * Answers above 1 kB go out compressed when the client accepts it (lists, reports, the OpenAPI
- * document). A Server-Sent Events stream is never buffered for compression, and bodies that are
- * already compressed (photos) are left alone by the middleware's own type check.
- */
-function compressLargeAnswers() {
-  return compression({
-    threshold: 1024,
-    filter: (req, res) => !String(res.getHeader('Content-Type') ?? '').startsWith('text/event-stream') && compression.filter(req, res),
-  });
-}
-
 export interface AppDeps {
   ds: DataSource;
   config: Config;
@@ -63,7 +51,7 @@ export function createApp({ ds, config, logger = createLogger(config.logLevel) }
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
   const api = express.Router();
-  api.use(compressLargeAnswers());
+  api.use(compressAnswers());
   api.use(express.json({ limit: '100kb', strict: true }));
   api.use(cookieParser());
   api.use(originCheck());
