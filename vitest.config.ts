@@ -1,4 +1,9 @@
+import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
+
+// Processes the tests start through tsx (the API, worker and mail sink, the migrations) get the
+// compiler options every workspace shares; see docker-free-scripts/lib.sh.
+process.env.TSX_TSCONFIG_PATH ??= fileURLToPath(new URL('./tsconfig.base.json', import.meta.url));
 
 export default defineConfig({
   test: {
@@ -8,5 +13,7 @@ export default defineConfig({
     testTimeout: 30_000,
     hookTimeout: 60_000,
     pool: 'forks',
+    // The CLI's tests run the built command: rebuild it first when its sources changed.
+    globalSetup: ['./docker-free-scripts/vitest-build-cli.ts'],
   },
 });

@@ -25,6 +25,8 @@ export DATABASE_URL="$(db_url gelpoint_faults)"
 export GELPOINT_FAULTS_PG_PORT="$faults_port"
 export GELPOINT_LOG_LEVEL=silent
 npx tsx docker-free-scripts/faults/prepare-database.ts
+# The checks run the product's processes as npm start does: built.
+node docker-free-scripts/build.mjs api worker mailsink
 
 status=0
 npx tsx docker-free-scripts/faults/run.ts "$@" || status=$?

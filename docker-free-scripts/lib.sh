@@ -3,6 +3,10 @@
 set -euo pipefail
 
 GP_ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+# tsx (npm run dev, the tests) applies only the tsconfig it is pointed at, and only to the files that
+# tsconfig includes; the root tsconfig.json is a solution that includes none, so point tsx at the
+# options every workspace shares (TypeORM's entities need experimentalDecorators).
+export TSX_TSCONFIG_PATH="${TSX_TSCONFIG_PATH:-$GP_ROOT/tsconfig.base.json}"
 export GELPOINT_DATA_DIR="${GELPOINT_DATA_DIR:-$GP_ROOT/.data}"
 export GELPOINT_PG_PORT="${GELPOINT_PG_PORT:-54329}"
 export GELPOINT_DB_USER="${GELPOINT_DB_USER:-gelpoint}"

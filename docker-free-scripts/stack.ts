@@ -1,21 +1,25 @@
 // Runs the API (serving the built web app), the worker and the mail sink as children, prefixes their
 // output, prints where everything is once it answers, and stops them all on Ctrl-C or `npm stop`.
+// Built (docker-free-scripts/dist/stack.js, as npm start runs it) it starts the built apps with plain
+// node; from source (npm run dev, through tsx) it starts their sources through tsx.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { createInterface } from 'node:readline';
 import { demoSignIns } from '@gelpoint/db';
 
-const root = join(import.meta.dirname, '..');
+const built = !import.meta.url.endsWith('.ts');
+const root = fileURLToPath(new URL(built ? '../../' : '../', import.meta.url));
 const dataDir = process.env.GELPOINT_DATA_DIR ?? join(root, '.data');
 const pidFile = join(dataDir, 'stack.pid');
 const apiUrl = process.env.GELPOINT_PUBLIC_URL ?? `http://127.0.0.1:${process.env.GELPOINT_API_PORT ?? 8080}`;
 const mailUrl = `http://${process.env.MAILSINK_HOST ?? '127.0.0.1'}:${process.env.MAILSINK_HTTP_PORT ?? 8025}`;
 
 const services = [
-  { name: 'mail', entry: 'apps/mailsink/src/main.ts', colour: 35 },
-  { name: 'api', entry: 'apps/api/src/main.ts', colour: 36 },
-  { name: 'worker', entry: 'apps/worker/src/main.ts', colour: 33 },
+  { name: 'mail', app: 'mailsink', colour: 35 },
+  { name: 'api', app: 'api', colour: 36 },
+  { name: 'worker', app: 'worker', colour: 33 },
 ];
 
 const children = new Map<string, ChildProcess>();
@@ -28,7 +32,8 @@ function pipe(name: string, colour: number, stream: NodeJS.ReadableStream | null
 }
 
 function start(s: (typeof services)[number]) {
-  const child = spawn(process.execPath, ['--import', 'tsx', s.entry], { cwd: root, env: process.env, stdio: ['ignore', 'pipe', 'pipe'] });
+  const args = built ? [`apps/${s.app}/dist/main.js`] : ['--import', 'tsx', `apps/${s.app}/src/main.ts`];
+  const child = spawn(process.execPath, args, { cwd: root, env: process.env, stdio: ['ignore', 'pipe', 'pipe'] });
   pipe(s.name, s.colour, child.stdout);
   pipe(s.name, s.colour, child.stderr);
   child.on('exit', (code, signal) => {

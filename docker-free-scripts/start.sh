@@ -6,12 +6,14 @@ ensure_node_deps
 require_free_port "$GELPOINT_API_PORT" "the app and API" GELPOINT_API_PORT
 require_free_port "$MAILSINK_SMTP_PORT" "the mail sink's SMTP" MAILSINK_SMTP_PORT
 require_free_port "$MAILSINK_HTTP_PORT" "the mail sink's page" MAILSINK_HTTP_PORT
-say "building the web app…"
-npm run build --silent -w @gelpoint/web >/dev/null
+say "building what changed since the last build…"
+node docker-free-scripts/build.mjs
 pg_start
 ensure_database "$GELPOINT_DB_NAME"
 ensure_jwt_secret
 export DATABASE_URL="${DATABASE_URL:-$(db_url "$GELPOINT_DB_NAME")}"
-npx tsx packages/db/src/cli/migrate.ts
-npx tsx packages/db/src/cli/seed.ts
-exec node --import tsx docker-free-scripts/stack.ts
+# From here on only built JavaScript runs: no TypeScript loader in any process.
+export NODE_ENV=production
+node packages/db/dist/cli/migrate.js
+node packages/db/dist/cli/seed.js
+exec node docker-free-scripts/dist/stack.js

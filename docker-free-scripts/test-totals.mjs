@@ -1,8 +1,9 @@
-// Prints the closing totals line of npm test from vitest's JSON report, counting the type-check and
-// the web build as one check each, so a failure there is never hidden behind green tests.
+// Prints the closing totals line of npm test from vitest's JSON report, counting the type-check, the
+// build and the import-cycle check as one check each, so a failure there is never hidden behind
+// green tests.
 import { existsSync, readFileSync } from 'node:fs';
 
-const [file, typecheck, build] = process.argv.slice(2);
+const [file, typecheck, build, acyclic] = process.argv.slice(2);
 let passed = 0;
 let failed = 0;
 let skipped = 0;
@@ -17,7 +18,7 @@ if (existsSync(file)) {
   failed += 1;
   console.error('no test report was written: vitest did not run to the end');
 }
-for (const [name, ok] of [['type-check', typecheck], ['web build', build]]) {
+for (const [name, ok] of [['type-check', typecheck], ['build', build], ['import-cycle check', acyclic]]) {
   if (ok === '1') passed += 1;
   else {
     failed += 1;

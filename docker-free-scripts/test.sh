@@ -19,14 +19,16 @@ DATABASE_URL="$GELPOINT_E2E_DATABASE_URL" npx tsx packages/db/src/cli/migrate.ts
 DATABASE_URL="$GELPOINT_E2E_DATABASE_URL" npx tsx packages/db/src/cli/seed.ts
 
 status=0
-say "type-checking every workspace…"
-if npx tsc -p tsconfig.json --noEmit; then typecheck=1; else typecheck=0; status=1; fi
-say "building the web app (the browser tests use the build)…"
-if npm run build --silent -w @gelpoint/web >/dev/null; then built=1; else built=0; status=1; fi
+say "type-checking every workspace (tsc -b, incremental)…"
+if npx tsc -b tsconfig.json; then typecheck=1; else typecheck=0; status=1; fi
+say "building what changed (the browser tests use the web build, the CLI tests the built command)…"
+if node docker-free-scripts/build.mjs; then built=1; else built=0; status=1; fi
+say "looking for import cycles…"
+if node docker-free-scripts/check-cycles.mjs; then acyclic=1; else acyclic=0; status=1; fi
 
 mkdir -p "$GELPOINT_DATA_DIR"
 results="$GELPOINT_DATA_DIR/test-results.json"
 rm -f "$results"
 npx vitest run --reporter=default --reporter=json --outputFile.json="$results" "$@" || status=1
-node docker-free-scripts/test-totals.mjs "$results" "$typecheck" "$built" || status=1
+node docker-free-scripts/test-totals.mjs "$results" "$typecheck" "$built" "$acyclic" || status=1
 exit $status

@@ -20,7 +20,7 @@ export async function call(
   baseUrl: string,
   method: string,
   path: string,
-  opts: { token?: string; json?: unknown; body?: BodyInit; contentType?: string; timeoutMs?: number } = {},
+  opts: { token?: string; json?: unknown; body?: RequestInit['body']; contentType?: string; timeoutMs?: number } = {},
 ): Promise<Answer> {
   const headers: Record<string, string> = {};
   if (opts.token) headers.Authorization = `Bearer ${opts.token}`;

@@ -1,4 +1,5 @@
 import { spawn, type ChildProcess } from 'node:child_process';
+import { existsSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { join } from 'node:path';
 import { CheckFailed } from './verdict';
@@ -53,9 +54,15 @@ export async function within<T>(what: string, timeoutMs: number, promise: Promis
   }
 }
 
+/** apps/<app>/src/main.ts → apps/<app>/dist/main.js, the build npm start runs (check-faults.sh builds it). */
+function nodeArgs(entry: string): string[] {
+  const built = entry.replace(/\/src\/main\.ts$/, '/dist/main.js');
+  return built !== entry && existsSync(join(repoRoot, built)) ? [built] : ['--import', 'tsx', entry];
+}
+
 /**
- * One of the product's processes, started the way npm start starts it (node --import tsx <entry>),
- * with its output kept so a failed check can show what the process said.
+ * One of the product's processes, started the way npm start starts it (the built entry, with
+ * NODE_ENV=production), with its output kept so a failed check can show what the process said.
  */
 export class AppProcess {
   private child?: ChildProcess;
@@ -69,7 +76,7 @@ export class AppProcess {
   ) {}
 
   start(): this {
-    const child = spawn(process.execPath, ['--import', 'tsx', this.entry], { cwd: repoRoot, env: this.env, stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(process.execPath, nodeArgs(this.entry), { cwd: repoRoot, env: { NODE_ENV: 'production', ...this.env }, stdio: ['ignore', 'pipe', 'pipe'] });
     let partial = '';
     const keep = (b: Buffer) => {
       const text = b.toString();
@@ -101,6 +108,19 @@ export class AppProcess {
   /** Called with every whole line the process writes, from now on. */
   onLine(listener: (line: string, self: AppProcess) => void): void {
     this.lineListeners.push(listener);
+  }
+
+  /** Sends a signal and returns at once (SIGTERM to watch a shutdown, SIGSTOP/SIGCONT to pause a process). */
+  send(sig: NodeJS.Signals): void {
+    if (this.running) this.child!.kill(sig);
+  }
+
+  /** The exit code (null when a signal ended it), once the process has exited. */
+  exited(): Promise<number | null> {
+    const child = this.child;
+    if (!child) return Promise.resolve(null);
+    if (!this.running) return Promise.resolve(child.exitCode);
+    return new Promise((resolve) => child.once('exit', (code) => resolve(code)));
   }
 
   /** SIGKILL: no shutdown handler runs, as when the machine or the container dies. */

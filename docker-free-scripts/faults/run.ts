@@ -4,6 +4,7 @@
 import type pg from 'pg';
 import { allOrNothing } from './check-all-or-nothing';
 import { databaseRestart } from './check-database-restart';
+import { apiDrainsOnSigterm, workerStopsCleanly } from './check-graceful-stop';
 import { mailSinkDown } from './check-mail-sink-down';
 import { twoWorkers } from './check-two-workers';
 import { workerKilledMidWork } from './check-worker-killed';
@@ -23,6 +24,8 @@ const checks: FaultCheck[] = [
   { name: 'two-workers', title: 'two workers side by side', run: twoWorkers },
   { name: 'mail-sink-down', title: 'mail sink down for a while', run: mailSinkDown },
   { name: 'all-or-nothing', title: 'uploads and forms are all or nothing', run: allOrNothing },
+  { name: 'api-sigterm', title: 'API stopped (SIGTERM) during slow uploads', run: apiDrainsOnSigterm },
+  { name: 'worker-sigterm', title: 'worker stopped (SIGTERM) during a mail send', run: workerStopsCleanly },
 ];
 
 const wanted = process.argv.slice(2);

@@ -92,8 +92,13 @@ export class FaultStack {
     await this.sinkProcess?.stop();
   }
 
-  async startApi(): Promise<AppProcess> {
-    const api = this.spawn('api', 'apps/api/src/main.ts');
+  /** The mail sink's process, to pause (SIGSTOP) and resume (SIGCONT) it mid-delivery. */
+  get sink(): AppProcess | undefined {
+    return this.sinkProcess;
+  }
+
+  async startApi(extra: Record<string, string> = {}): Promise<AppProcess> {
+    const api = this.spawn('api', 'apps/api/src/main.ts', extra);
     this.api = api;
     await waitUntil('the API answering /api/health', 60_000, async () => {
       if (!api.running) throw new GiveUp(`the API exited:\n${api.output}`);

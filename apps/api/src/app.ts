@@ -1,9 +1,11 @@
 import cookieParser from 'cookie-parser';
 import express, { type Express } from 'express';
-import { pino, type Logger } from 'pino';
+import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config';
+import { createLogger } from './logger';
+import { compressAnswers } from './http/compress-answers';
 import { AppError, errorHandler } from './http/errors';
 import { openApiDocument } from './http/openapi';
 import { originCheck } from './http/origin-check';
@@ -42,7 +44,7 @@ export interface GelpointApp {
 }
 
 /** The whole HTTP application, without listening: tests mount it on port 0. */
-export function createApp({ ds, config, logger = pino({ level: config.logLevel }) }: AppDeps): GelpointApp {
+export function createApp({ ds, config, logger = createLogger(config.logLevel) }: AppDeps): GelpointApp {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
@@ -50,6 +52,7 @@ export function createApp({ ds, config, logger = pino({ level: config.logLevel }
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
   const api = express.Router();
+  api.use(compressAnswers());
   api.use(express.json({ limit: '100kb', strict: true }));
   api.use(cookieParser());
   api.use(originCheck());

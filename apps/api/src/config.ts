@@ -4,6 +4,9 @@ import { z } from 'zod';
 import { databaseUrl } from '@gelpoint/db';
 
 const Env = z.object({
+  DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL').optional(),
+  // Read by the password hashing in packages/db; checked here so a bad value stops the boot, not a sign-in.
+  GELPOINT_SCRYPT_LOG_N: z.coerce.number().int().min(10, 'GELPOINT_SCRYPT_LOG_N must be 10 to 20').max(20, 'GELPOINT_SCRYPT_LOG_N must be 10 to 20').optional(),
   GELPOINT_HOST: z.string().default('127.0.0.1'),
   GELPOINT_API_PORT: z.coerce.number().int().min(0).max(65535).default(8080),
   GELPOINT_PUBLIC_URL: z.url().optional(),
@@ -21,6 +24,7 @@ const Env = z.object({
   GELPOINT_MAX_UNPACKED_MB: z.coerce.number().positive().max(4096).default(512),
   GELPOINT_UPLOADS_PER_HOUR: z.coerce.number().int().positive().default(60),
   GELPOINT_UPLOAD_QUOTA_MB: z.coerce.number().positive().default(1024),
+  GELPOINT_SHUTDOWN_GRACE_S: z.coerce.number().positive().max(600).default(25),
 });
 
 export interface Config {
@@ -44,6 +48,8 @@ export interface Config {
   uploadsPerHour: number;
   /** What each member's stored files (STL and photos) may add up to. */
   uploadQuotaBytes: number;
+  /** On SIGTERM, how long requests already under way may take to finish before their connections are cut. */
+  shutdownGraceMs: number;
 }
 
 function jwtSecretFrom(env: z.infer<typeof Env>): string {
@@ -85,5 +91,6 @@ export function loadConfig(raw: NodeJS.ProcessEnv = process.env): Config {
     maxUnpackedBytes: Math.round(env.GELPOINT_MAX_UNPACKED_MB * 1024 * 1024),
     uploadsPerHour: env.GELPOINT_UPLOADS_PER_HOUR,
     uploadQuotaBytes: Math.round(env.GELPOINT_UPLOAD_QUOTA_MB * 1024 * 1024),
+    shutdownGraceMs: Math.round(env.GELPOINT_SHUTDOWN_GRACE_S * 1000),
   };
 }

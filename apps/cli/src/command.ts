@@ -25,8 +25,10 @@ function attachNegativeValues(argv: string[]): string[] {
   return out;
 }
 
+type ParsedOptions<T extends ParseArgsConfig['options']> = ReturnType<typeof parseArgs<{ args: string[]; options: T; allowPositionals: boolean; strict: true }>>;
+
 /** node:util parseArgs, with its errors turned into one readable line. */
-export function parseOptions<T extends ParseArgsConfig['options']>(argv: string[], options: T, allowPositionals = false) {
+export function parseOptions<T extends ParseArgsConfig['options']>(argv: string[], options: T, allowPositionals = false): ParsedOptions<T> {
   try {
     return parseArgs({ args: attachNegativeValues(argv), options, allowPositionals, strict: true });
   } catch (err) {

@@ -104,7 +104,7 @@ describe('main', () => {
     }, 'two received lines');
     expect(received[0]).toMatch(/to maker@example\.com — "Ready to machine"$/);
     expect(received[1]).toMatch(/to lead@shop\.test — "Demold check"$/);
-    expect((await (await fetch(`http://${HOST}:${httpPort}/api/messages`)).json()).length).toBe(2);
+    expect(((await (await fetch(`http://${HOST}:${httpPort}/api/messages`)).json()) as unknown[]).length).toBe(2);
 
     run.signal('SIGTERM');
     expect(await run.exited).toBe(0);

@@ -5,8 +5,8 @@
  * runs GELPOINT_WEBBENCH_RUNS times (default 5) and the median is printed with the range of runs.
  * Exits 1 when a budget is broken.
  */
-import { DEMO_PASSWORD } from '@gelpoint/db';
 import { launchBrowser } from '../e2e/support/browser';
+import { demoPassword } from '../e2e/support/sign-in';
 import { E2eStack } from '../e2e/support/stack';
 import { signedInState } from './app-session';
 import { budgets } from './budgets';
@@ -25,8 +25,8 @@ await stack.start();
 const browser = await launchBrowser();
 let status = 0;
 try {
-  const lead = await signedInState(browser, stack.baseUrl, 'lead@gelpoint.test', DEMO_PASSWORD);
-  const maker = await signedInState(browser, stack.baseUrl, 'maker@gelpoint.test', DEMO_PASSWORD);
+  const lead = await signedInState(browser, stack.baseUrl, 'lead@gelpoint.test', demoPassword);
+  const maker = await signedInState(browser, stack.baseUrl, 'maker@gelpoint.test', demoPassword);
 
   const home: HomeRun[] = [];
   const board: ListRun[] = [];

@@ -20,9 +20,10 @@ export interface ScriptRecorder {
 const isScript = (r: Response) => r.request().resourceType() === 'script' || /javascript/.test(r.headers()['content-type'] ?? '');
 
 /**
- * Records the JavaScript a page fetches from the network. The API serves the build uncompressed
- * (apps/api/src/http/static-web.ts has no compression), so the gzip size is computed here from each
- * body with node:zlib at its default level, the level a compressing proxy would typically use.
+ * Records the JavaScript a page fetches from the network. Playwright hands over each body decoded,
+ * whichever of its precompressed forms the API sent (apps/api/src/http/static-web.ts), so the gzip
+ * size is computed here from each body with node:zlib at its default level: a figure that stays
+ * comparable from run to run whatever the browser negotiated.
  */
 export function recordScripts(page: Page): ScriptRecorder {
   const pending: Promise<ScriptLoad | null>[] = [];

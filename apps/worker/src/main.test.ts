@@ -23,7 +23,8 @@ describe('the worker process', () => {
     child.kill('SIGTERM');
     const code = await Promise.race([exited, new Promise<'hung'>((r) => setTimeout(() => r('hung'), 15_000))]);
     expect(code).toBe(0);
-    expect(out).toContain('worker stopping after the current pass');
+    expect(out).toContain('worker stopping');
+    expect(out).toContain('worker stopped');
   });
 
   it('refuses a bad cron expression with one line, not a stack trace', async () => {

@@ -1,7 +1,7 @@
 import cron from 'node-cron';
 import { pino } from 'pino';
 import { connectDataSource, createDataSource } from '@gelpoint/db';
-import { loadWorkerConfig } from './config';
+import { loadWorkerConfig, type WorkerConfig } from './config';
 import { listenForWork } from './work-wakeup';
 import { smtpTransport } from './mail/smtp-transport';
 import { SerialRunner } from './serial-runner';
@@ -14,7 +14,7 @@ function fail(message: string): never {
   process.exit(1);
 }
 
-let config;
+let config: WorkerConfig;
 try {
   config = loadWorkerConfig();
 } catch (err) {
@@ -39,9 +39,11 @@ if (once) {
   process.exit(0);
 }
 
+const stopping = new AbortController();
 const runner = new SerialRunner(
   async () => {
-    await runDueWork(ds, transport, config, logger);
+    if (stopping.signal.aborted) return;
+    await runDueWork(ds, transport, config, logger, stopping.signal);
   },
   (err) => logger.error({ err }, 'worker pass failed; the next tick tries again'),
 );
@@ -50,17 +52,26 @@ const wakeup = listenForWork(config.databaseUrl, () => runner.wake(), logger);
 logger.info({ cron: config.cron }, 'worker started');
 runner.wake();
 
-let stopping = false;
+/**
+ * Takes nothing new, lets the send under way finish and be recorded, and hands back whatever else it
+ * had claimed (mail, a mould under analysis) so another worker takes it at once. Reminders are
+ * claimed, queued and marked in one transaction, so one cut short rolls back whole. Past
+ * GELPOINT_SHUTDOWN_GRACE_S the process exits anyway; what it still held then comes back when its
+ * lease runs out, under the same Message-ID.
+ */
 async function shutdown(signal: string) {
-  if (stopping) return;
-  stopping = true;
-  logger.info({ signal }, 'worker stopping after the current pass');
+  if (stopping.signal.aborted) return;
+  stopping.abort();
+  logger.info({ signal, graceMs: config.shutdownGraceMs }, 'worker stopping: finishing the send under way, handing back the rest');
   await task.stop();
   await wakeup.close();
-  await runner.idle();
+  const deadline = new Promise<boolean>((resolve) => setTimeout(() => resolve(false), config.shutdownGraceMs).unref());
+  const finished = await Promise.race([runner.idle().then(() => true), deadline]);
+  if (!finished) logger.warn('worker stop deadline passed; what it still holds is retried after its lease');
   transport.close();
   await ds.destroy().catch(() => undefined);
-  process.exit(0);
+  logger.info('worker stopped');
+  process.exit(finished ? 0 : 1);
 }
 process.on('SIGTERM', () => void shutdown('SIGTERM'));
 process.on('SIGINT', () => void shutdown('SIGINT'));

@@ -1,8 +1,7 @@
 import { QueryClient } from '@tanstack/react-query';
 import { describe, expect, it } from 'vitest';
 import { authKeys } from '../features/auth/api/keys';
-import type { AppRouter } from './router';
-import { createSessionControl } from './session-control';
+import { createSessionControl, type SessionRouter } from './session-control';
 
 interface FakeLocation {
   pathname: string;
@@ -23,7 +22,7 @@ function fakeRouter(location: FakeLocation, heading?: FakeLocation) {
       });
     },
   };
-  return { router: router as unknown as AppRouter, moves, attach: (client: QueryClient) => (queryClient = client) };
+  return { router: router as unknown as SessionRouter, moves, attach: (client: QueryClient) => (queryClient = client) };
 }
 
 const someone = { user: { id: 'u', name: 'Ana', email: 'ana@example.com' } };

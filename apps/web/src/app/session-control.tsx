@@ -1,6 +1,6 @@
 import { hashKey, type QueryClient } from '@tanstack/react-query';
 import { createContext, useContext, type ReactNode } from 'react';
-import type { AppRouter } from './router';
+import type { DataRouter } from 'react-router';
 import { paths } from '../config/paths';
 import { authKeys } from '../features/auth/api/keys';
 
@@ -17,7 +17,11 @@ export interface SessionControl {
 
 const publicPaths: readonly string[] = [paths.signIn.path, paths.createShop.path, paths.forgotPassword.path, paths.resetPassword.path];
 
-export function createSessionControl(queryClient: QueryClient, getRouter: () => AppRouter): SessionControl {
+// Only what is used of the router that router.tsx creates; naming it here, instead of importing its type,
+// keeps router.tsx → route modules → this file free of a cycle.
+export type SessionRouter = Pick<DataRouter, 'navigate' | 'state'>;
+
+export function createSessionControl(queryClient: QueryClient, getRouter: () => SessionRouter): SessionControl {
   let leaving = false;
   const sessionHash = hashKey(authKeys.session());
 

@@ -82,15 +82,38 @@ export async function sendClaimedMail(ds: DataSource, transport: Transporter, s:
   return true;
 }
 
-/** Sends everything due now, batch after batch, until nothing is left that this worker can claim. */
-export async function drainOutboundMail(ds: DataSource, transport: Transporter, s: MailSenderSettings, logger: Logger): Promise<DrainResult> {
+/**
+ * Hands claimed rows that were not sent back to the queue at once, as if never claimed, so another
+ * worker sends them now rather than after the lease (a shutting-down worker must not sit on them).
+ */
+export async function releaseClaimedMail(ds: DataSource, ids: string[]): Promise<void> {
+  if (ids.length === 0) return;
+  await ds.query(
+    `UPDATE outbound_mail SET status = 'pending', attempts = attempts - 1, locked_until = NULL
+      WHERE id = ANY($1) AND status = 'sending'`,
+    [ids],
+  );
+}
+
+/**
+ * Sends everything due now, batch after batch, until nothing is left that this worker can claim.
+ * When `stop` is aborted, the send under way finishes and is recorded; the rest is released.
+ */
+export async function drainOutboundMail(ds: DataSource, transport: Transporter, s: MailSenderSettings, logger: Logger, stop?: AbortSignal): Promise<DrainResult> {
   const result: DrainResult = { sent: 0, failed: 0 };
-  for (;;) {
+  while (!stop?.aborted) {
     const claimed = await claimDueMail(ds, s);
     if (claimed.length === 0) return result;
-    for (const mail of claimed) {
+    for (const [i, mail] of claimed.entries()) {
+      if (stop?.aborted) {
+        const rest = claimed.slice(i).map((m) => m.id);
+        await releaseClaimedMail(ds, rest);
+        logger.info({ released: rest.length }, 'stopping: unsent mail handed back to the queue');
+        return result;
+      }
       if (await sendClaimedMail(ds, transport, s, mail, logger)) result.sent++;
       else result.failed++;
     }
   }
+  return result;
 }

@@ -38,29 +38,46 @@ export async function claimQueuedMold(ds: DataSource, s: MoldAnalysisSettings): 
   return rows[0];
 }
 
-function runThread(req: AnalysisRequest, onProgress: (v: number) => void): Promise<Extract<AnalysisMessage, { type: 'done' | 'refused' }>> {
+/** The analysis was cut short because the worker is stopping; the mould goes back to the queue. */
+class AnalysisStopped extends Error {}
+
+function runThread(req: AnalysisRequest, onProgress: (v: number) => void, stop?: AbortSignal): Promise<Extract<AnalysisMessage, { type: 'done' | 'refused' }>> {
   return new Promise((resolve, reject) => {
     const w = tsWorker(new URL('./mold-analysis.thread.ts', import.meta.url), { resourceLimits: { maxOldGenerationSizeMb: 4096 } });
     let settled = false;
+    const onStop = () => {
+      if (settled) return;
+      settled = true;
+      reject(new AnalysisStopped('the worker is stopping'));
+      void w.terminate();
+    };
+    // One listener per analysis on the worker's long-lived signal, so it goes when the analysis does.
+    const settle = () => {
+      settled = true;
+      stop?.removeEventListener('abort', onStop);
+    };
+    stop?.addEventListener('abort', onStop, { once: true });
     w.on('message', (m: AnalysisMessage) => {
       if (m.type === 'progress') return onProgress(m.value);
-      settled = true;
+      settle();
       resolve(m);
       void w.terminate();
     });
     w.on('error', (err) => {
-      settled = true;
+      settle();
       reject(err);
     });
     w.on('exit', (code) => {
-      if (!settled) reject(new Error(`the analysis thread stopped (exit ${code})`));
+      if (settled) return;
+      settle();
+      reject(new Error(`the analysis thread stopped (exit ${code})`));
     });
     w.postMessage(req, [req.bytes.buffer as ArrayBuffer]);
   });
 }
 
 /** Analyses one queued mould, if any; returns whether it found one. */
-export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, logger: Logger): Promise<boolean> {
+export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, logger: Logger, stop?: AbortSignal): Promise<boolean> {
   const mold = await claimQueuedMold(ds, s);
   if (!mold) return false;
   const log = logger.child({ moldId: mold.id });
@@ -71,7 +88,7 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
     const bytes = new Uint8Array(file.bytes.buffer.slice(file.bytes.byteOffset, file.bytes.byteOffset + file.bytes.byteLength));
     const outcome = await runThread({ bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes }, (value) => {
       void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing'`, [mold.id, value]).catch(() => undefined);
-    });
+    }, stop);
     if (outcome.type === 'refused') {
       await ds.query(
         `UPDATE molds SET status = 'failed', error_code = $2, error_message = $3, progress = 1, locked_until = NULL, updated_at = now() WHERE id = $1`,
@@ -88,6 +105,12 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
     );
     log.info('mould analysed');
   } catch (err) {
+    if (err instanceof AnalysisStopped) {
+      // Not the mould's fault: queued again as it was, for whichever worker runs next.
+      await ds.query(`UPDATE molds SET status = 'queued', attempts = attempts - 1, progress = 0, locked_until = NULL, updated_at = now() WHERE id = $1 AND status = 'analysing'`, [mold.id]);
+      log.info('stopping: mould analysis handed back to the queue');
+      return false;
+    }
     const giveUp = mold.attempts >= s.maxAttempts;
     const message = err instanceof Error ? err.message : String(err);
     await ds.query(
@@ -116,9 +139,9 @@ export async function requeueOutdatedMolds(ds: DataSource, logger: Logger): Prom
   return n;
 }
 
-export async function analyseQueuedMolds(ds: DataSource, s: MoldAnalysisSettings, logger: Logger): Promise<number> {
+export async function analyseQueuedMolds(ds: DataSource, s: MoldAnalysisSettings, logger: Logger, stop?: AbortSignal): Promise<number> {
   await requeueOutdatedMolds(ds, logger);
   let n = 0;
-  while (await analyseNextMold(ds, s, logger)) n++;
+  while (!stop?.aborted && (await analyseNextMold(ds, s, logger, stop))) n++;
   return n;
 }

@@ -8,7 +8,7 @@ import { reminderMail, type DueReminder } from './reminder-mail';
  * one transaction, so any number of workers can run and each reminder becomes mail exactly once;
  * the mail queue then delivers it once (its Message-ID was fixed when it was queued).
  */
-export async function dispatchDueReminders(ds: DataSource, publicUrl: string, logger: Logger, batch = 50): Promise<number> {
+export async function dispatchDueReminders(ds: DataSource, publicUrl: string, logger: Logger, batch = 50, stop?: AbortSignal): Promise<number> {
   const domain = mailDomainOf(publicUrl);
   let total = 0;
   for (;;) {
@@ -40,6 +40,6 @@ export async function dispatchDueReminders(ds: DataSource, publicUrl: string, lo
       return due.length;
     });
     total += n;
-    if (n < batch) return total;
+    if (n < batch || stop?.aborted) return total;
   }
 }

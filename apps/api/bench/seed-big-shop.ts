@@ -1,6 +1,6 @@
 /**
  * Adds the big shop's pours and lots to a freshly seeded database (DATABASE_URL):
- * `node --import tsx apps/web/bench/seed-big-shop.ts [pours] [lots]`.
+ * `node --import tsx apps/api/bench/seed-big-shop.ts [pours] [lots]` (npm run bench:web runs it).
  */
 import { createDataSource } from '@gelpoint/db';
 import { seedBigShop } from './big-shop';
