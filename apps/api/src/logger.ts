@@ -14,6 +14,7 @@ const redactedPaths = [
   ...secretHeaders.map((h) => `req.headers["${h}"]`),
   'res.headers["set-cookie"]',
   'req.params.token',
+  'req.params.feed',
   'req.query.token',
   // A failed query keeps its parameters, which can be a token's hash or a password's.
   'err.parameters',
@@ -29,11 +30,13 @@ const redactedPaths = [
 // app's link; routes match without regard to case), except under /shop/, where it is a row's id.
 // A reset link carries its token in the query.
 const invitationSegment = /(?<!\/shop)\/(invitations)\/[^/?#]+/gi;
+// A member's calendar feed is a capability too: its token is the path segment after /calendar/.
+const calendarSegment = /\/(calendar)\/(?!rotate\b)[^/?#]+/gi;
 const tokenQuery = /([?&](?:token|ingest_token|ingestToken)=)[^&#]*/gi;
 
 /** The URL with every link token in it replaced, so the route stays readable in the log. */
 export function withoutTokens(url: string): string {
-  return url.replace(invitationSegment, `/$1/${CENSORED}`).replace(tokenQuery, `$1${CENSORED}`);
+  return url.replace(invitationSegment, `/$1/${CENSORED}`).replace(calendarSegment, `/$1/${CENSORED}`).replace(tokenQuery, `$1${CENSORED}`);
 }
 
 function censor(value: unknown, path: string[]): unknown {

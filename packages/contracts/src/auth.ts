@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { Email, Id, Password, Role, Timestamp, requiredText } from './common';
-import { Shop } from './shop';
+import { Shop, TimeZone } from './shop';
 
 export const User = z.object({ id: Id, email: z.string(), name: z.string() });
 export type User = z.infer<typeof User>;
@@ -13,6 +13,7 @@ export const RegisterRequest = z.object({
   name: requiredText(120, 'your name'),
   email: Email,
   password: Password,
+  timeZone: TimeZone.optional().describe("the shop's IANA zone, taken from the browser at sign-up (UTC when not given)"),
 });
 export type RegisterRequest = z.infer<typeof RegisterRequest>;
 
@@ -37,6 +38,7 @@ export const MeResponse = z.object({
   shop: Shop,
   role: Role,
   shops: z.array(ShopMembershipSummary),
+  calendarUrl: z.string().describe("the member's private calendar feed (text/calendar) of the shop's coming pour steps; POST /api/me/calendar/rotate replaces it"),
 });
 export type MeResponse = z.infer<typeof MeResponse>;
 

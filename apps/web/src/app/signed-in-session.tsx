@@ -1,10 +1,13 @@
 import type { MeResponse } from '@gelpoint/contracts';
 import { createContext, useContext, type ReactNode } from 'react';
+import { setDisplayTimeZone } from '../lib/display-zone';
 
 const SignedInSessionContext = createContext<MeResponse | null>(null);
 
 /** Inside the app frame there is always a session; pages read it from here instead of checking for null. */
 export function SignedInSessionProvider({ session, children }: { session: MeResponse; children: ReactNode }) {
+  // Every time on screen is in the shop's zone; set before the pages below format any.
+  setDisplayTimeZone(session.shop.timeZone);
   return <SignedInSessionContext.Provider value={session}>{children}</SignedInSessionContext.Provider>;
 }
 

@@ -30,5 +30,6 @@ export type { ReminderKind } from './reminder.entity';
 export type { Role } from './membership.entity';
 export type { PieceStage } from './piece.entity';
 export type { OutboundMailStatus } from './outbound-mail.entity';
+export type { ShopTemperatureProfile } from './shop.entity';
 
 export const entities = [Shop, User, Membership, Invitation, PasswordReset, Session, Piece, AuditEvent, OutboundMail, Mold, MoldFile, ResinSystem, Pigment, Lot, PourPlan, Pour, PourBatch, TemperatureReading, CureCheck, Reminder, RateLimitCounter];

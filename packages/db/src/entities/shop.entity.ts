@@ -1,9 +1,16 @@
 import { Check, Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
 import { CreatedAt, UpdatedAt } from './columns';
 
+export type ShopTemperatureProfile =
+  | { mode: 'plan' }
+  | { mode: 'day_night'; dayTempC: number; nightTempC: number; dayStartHour: number; nightStartHour: number }
+  | { mode: 'learned' };
+
 @Entity({ name: 'shops' })
 @Check('shops_unit_system_check', `unit_system IN ('metric', 'us')`)
 @Check('shops_scale_resolution_check', `scale_resolution_g IN (0.1, 1)`)
+@Check('shops_day_start_hour_check', `day_start_hour >= 0 AND day_start_hour <= 23`)
+@Check('shops_quiet_from_hour_check', `quiet_from_hour >= 0 AND quiet_from_hour <= 23`)
 @Check('shops_reading_carry_check', `reading_carry_h >= 0 AND reading_carry_h <= 48`)
 @Check('shops_window_close_lead_check', `window_close_lead_min >= 0 AND window_close_lead_min <= 720`)
 export class Shop {
@@ -17,6 +24,17 @@ export class Shop {
   @Column({ name: 'reading_carry_h', type: 'double precision', default: 2 }) readingCarryH!: number;
   /** Closing pour windows are announced this many minutes before they close. */
   @Column({ name: 'window_close_lead_min', type: 'integer', default: 30 }) windowCloseLeadMin!: number;
+  /** IANA zone the shop lives in: every time shown or mailed is in it. */
+  @Column({ name: 'time_zone', type: 'text', default: 'UTC' }) timeZone!: string;
+  /**
+   * The shop's temperature where nothing is logged: the plan's shop temperature, day and night at local hours, or
+   * learned from the last week of readings.
+   */
+  @Column({ name: 'temperature_profile', type: 'jsonb', default: () => `'{"mode":"plan"}'::jsonb` }) temperatureProfile!: ShopTemperatureProfile;
+  /** Local hour the working day starts: the morning digest goes out then, and quiet hours end. */
+  @Column({ name: 'day_start_hour', type: 'integer', default: 7 }) dayStartHour!: number;
+  /** Local hour quiet hours start: reminders falling after it wait for the morning digest. */
+  @Column({ name: 'quiet_from_hour', type: 'integer', default: 21 }) quietFromHour!: number;
   /** sha256 of the token a shop thermometer sends with its readings. */
   @Column({ name: 'ingest_token_hash', type: 'text', nullable: true, select: false }) ingestTokenHash!: string | null;
   @CreatedAt() createdAt!: Date;

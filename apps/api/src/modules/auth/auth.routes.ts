@@ -11,6 +11,7 @@ import {
   SwitchShopRequest,
 } from '@gelpoint/contracts';
 import { User } from '@gelpoint/db';
+import { calendarUrlOf } from '../calendar/calendar-token';
 import type { RouteRegistry } from '../../http/route-registry';
 import { recordAudit } from '../audit/audit.service';
 import { confirmPasswordReset, login, register, requestPasswordReset, type AuthSettings } from './auth.service';
@@ -55,8 +56,8 @@ export function authRoutes(api: RouteRegistry, ds: DataSource, s: AuthSettings):
     },
   );
 
-  api.add({ method: 'get', path: '/me', tag: 'auth', summary: 'Who is signed in, in which shop, with which role', access: 'member', response: MeResponse }, ({ auth }) =>
-    describeMe(ds.manager, auth.userId, auth.shopId, auth.role),
+  api.add({ method: 'get', path: '/me', tag: 'auth', summary: 'Who is signed in, in which shop, with which role, and their calendar feed', access: 'member', response: MeResponse }, ({ auth }) =>
+    ds.transaction(async (m) => describeMe(m, auth.userId, auth.shopId, auth.role, await calendarUrlOf(m, auth.userId, auth.shopId, s.jwtSecret, s.publicUrl))),
   );
 
   api.add(

@@ -25,7 +25,7 @@ export async function register(ds: DataSource, s: AuthSettings, input: RegisterR
   const passwordHash = await hashPassword(input.password);
   try {
     return await ds.transaction(async (m) => {
-      const shop = await m.save(m.create(Shop, { name: input.shopName }));
+      const shop = await m.save(m.create(Shop, { name: input.shopName, ...(input.timeZone ? { timeZone: input.timeZone } : {}) }));
       const user = await m.save(m.create(User, { email: input.email, name: input.name, passwordHash }));
       await m.save(m.create(Membership, { userId: user.id, shopId: shop.id, role: 'lead', status: 'active' }));
       await recordAudit(m, { shopId: shop.id, actor: { userId: user.id, userName: user.name }, action: 'shop.create', objectType: 'shop', objectId: shop.id, detail: { name: shop.name } });

@@ -55,7 +55,7 @@ export async function revokeSessions(m: EntityManager, where: { userId: string; 
   await qb.execute();
 }
 
-export async function describeMe(m: EntityManager, userId: string, shopId: string, role: Role): Promise<MeResponse> {
+export async function describeMe(m: EntityManager, userId: string, shopId: string, role: Role, calendarUrl: string): Promise<MeResponse> {
   const user = await m.findOneByOrFail(User, { id: userId });
   const shop = await m.findOneByOrFail(Shop, { id: shopId });
   const shops: { shop_id: string; shop_name: string; role: Role }[] = await m.query(
@@ -68,5 +68,6 @@ export async function describeMe(m: EntityManager, userId: string, shopId: strin
     shop: shopView(shop),
     role,
     shops: shops.map((r) => ({ shopId: r.shop_id, shopName: r.shop_name, role: r.role })),
+    calendarUrl,
   };
 }

@@ -1,7 +1,8 @@
 import type { EntityManager } from 'typeorm';
-import { cureState, plannedBatches, planSteps, releaseEvidence, wantedReminders, type CureReading, type CureState, type ReleaseEvidence } from '@gelpoint/core';
+import { cureState, plannedBatches, planSteps, releaseEvidence, wantedReminders, type AssumedTemperature, type CureReading, type CureState, type ReleaseEvidence } from '@gelpoint/core';
 import { checksOf, cureSettingsOf, liveReadingsOf, loggedStepsOf, type CureSettings, type LoadedPour, type LoggedStep } from './pour-queries';
 import { syncReminders } from './pour-reminders';
+import { assumedTemperatureOf } from './shop-temperature-of';
 
 export interface PourState {
   state: CureState;
@@ -13,15 +14,16 @@ export interface PourState {
 type Check = { checkedAt: Date; hardnessShoreD: number | null; stage: string };
 
 /** Where a pour's cure stands, from its logged cups, readings and checks, as of `now`. */
-export function pourStateOf(l: LoadedPour, settings: CureSettings, logged: LoggedStep[], readings: CureReading[], checks: Check[], now: Date): PourState {
+export function pourStateOf(l: LoadedPour, settings: CureSettings, logged: LoggedStep[], readings: CureReading[], checks: Check[], now: Date, assumed: AssumedTemperature = l.pour.assumedTempC): PourState {
   const steps = planSteps(l.result, l.snapshot);
-  const state = cureState(steps, logged.map((b) => ({ step: b.step, mixedAt: b.mixed_at })), readings, l.pour.assumedTempC, now, { readingCarryH: settings.readingCarryH });
+  const state = cureState(steps, logged.map((b) => ({ step: b.step, mixedAt: b.mixed_at })), readings, assumed, now, { readingCarryH: settings.readingCarryH });
   return { state, release: releaseEvidence(state, checks), batchesLogged: logged.length, batchesPlanned: plannedBatches(l.result).length };
 }
 
 export async function loadPourState(m: EntityManager, l: LoadedPour, now: Date, settings?: CureSettings): Promise<PourState> {
   const s = settings ?? (await cureSettingsOf(m, l.pour.shopId));
-  return pourStateOf(l, s, await loggedStepsOf(m, l.pour.id), await liveReadingsOf(m, l.pour.id), await checksOf(m, l.pour.id), now);
+  const assumed = await assumedTemperatureOf(m, l.pour.shopId, l.pour.assumedTempC, now);
+  return pourStateOf(l, s, await loggedStepsOf(m, l.pour.id), await liveReadingsOf(m, l.pour.id), await checksOf(m, l.pour.id), now, assumed);
 }
 
 // A demold check is done once someone found the piece demoldable (or further along) after the last pour.
@@ -31,7 +33,8 @@ const demoldedStages = new Set(['demoldable', 'machinable']);
 export async function refreshReminders(m: EntityManager, l: LoadedPour, now: Date): Promise<void> {
   const settings = await cureSettingsOf(m, l.pour.shopId);
   const checks = await checksOf(m, l.pour.id);
-  const { state } = pourStateOf(l, settings, await loggedStepsOf(m, l.pour.id), await liveReadingsOf(m, l.pour.id), checks, now);
+  const assumed = await assumedTemperatureOf(m, l.pour.shopId, l.pour.assumedTempC, now);
+  const { state } = pourStateOf(l, settings, await loggedStepsOf(m, l.pour.id), await liveReadingsOf(m, l.pour.id), checks, now, assumed);
   const finish = l.pour.machinedAt && l.pour.finishCoats ? { machinedAt: l.pour.machinedAt, coats: l.pour.finishCoats, hoursBetween: l.pour.finishCoatIntervalH ?? 24 } : null;
   const active = l.pour.status === 'open';
   const wanted = wantedReminders(active ? state : { ...state, step: null, status: null }, l.piece.name, now, finish, { windowCloseLeadMin: settings.windowCloseLeadMin });

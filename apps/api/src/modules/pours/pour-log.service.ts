@@ -23,6 +23,7 @@ import { pourStateOf, refreshReminders } from './pour-cure-state';
 import { readingConcerns, refuseImpossibleTimes, requireConfirmation } from './pour-guards';
 import { checksOf, cureSettingsOf, liveReadingsOf, loadPour, loggedStepsOf, type LoadedPour } from './pour-queries';
 import { batchView, namesOf, readingView } from './pour-view';
+import { assumedTemperatureOf } from './shop-temperature-of';
 
 export interface LogBatchInput {
   planBatchIndex: number;
@@ -72,7 +73,8 @@ export class PourLog {
     const steps = planSteps(l.result, l.snapshot);
     const newStep = steps.findIndex((s) => s.key === stepKeyOf(planned));
     const settings = await cureSettingsOf(m, l.pour.shopId);
-    const { state } = pourStateOf(l, settings, await loggedStepsOf(m, l.pour.id), await liveReadingsOf(m, l.pour.id), await checksOf(m, l.pour.id), mixedAt);
+    const assumed = await assumedTemperatureOf(m, l.pour.shopId, l.pour.assumedTempC, mixedAt);
+    const { state } = pourStateOf(l, settings, await loggedStepsOf(m, l.pour.id), await liveReadingsOf(m, l.pour.id), await checksOf(m, l.pour.id), mixedAt, assumed);
     if (!state.step || !state.status || steps.findIndex((s) => s.key === state.step!.key) >= newStep) return [];
     if (state.status.nextLayerWindow !== 'not_open') return [];
     const opens = state.status.stages.find((s) => s.key === 'next_layer_opens');

@@ -10,6 +10,7 @@ import { UploadQuota } from '../uploads/upload-quota';
 import { loadPourState, pourStateOf, refreshReminders, type PourState } from './pour-cure-state';
 import { cureSettingsOf, groupByPour, loadedOf, loadPour, makerAndLeadsOf, type LoadedPour } from './pour-queries';
 import { markReminderDone, queueNotice } from './pour-reminders';
+import { shopTemperatureFor } from './shop-temperature-of';
 import { batchView, cureView, flagsOf, namesOf, readingView, reminderView, type Names } from './pour-view';
 
 const tokenHash = (t: string) => createHash('sha256').update(t).digest('hex');
@@ -124,6 +125,7 @@ export class Pours {
     const nextOf = new Map(next.map((r) => [r.pourId, r]));
     const settings = await cureSettingsOf(m, shopId);
     const now = this.now();
+    const assumedFor = await shopTemperatureFor(m, shopId, now);
     const items = pours.map((pour) => {
       const l = loadedOf(pour, plans.get(pour.pourPlanId)!, pieces.get(pour.pieceId)!);
       const pourBatches = batches.get(pour.id) ?? [];
@@ -131,7 +133,7 @@ export class Pours {
       const pourReadings = readings.get(pour.id) ?? [];
       const log = pourReadings.filter((r) => !r.voided).map((r) => ({ at: r.taken_at.toISOString(), tempC: r.temp_c }));
       const pourChecks = (checks.get(pour.id) ?? []).map((c) => ({ checkedAt: c.checked_at, hardnessShoreD: c.hardness_shore_d, stage: c.stage }));
-      const state = pourStateOf(l, settings, live, log, pourChecks, now);
+      const state = pourStateOf(l, settings, live, log, pourChecks, now, assumedFor(pour.assumedTempC));
       const voided = pourBatches.length - live.length + pourReadings.filter((r) => r.voided).length;
       const flags = flagsOf(
         live.map((b) => b.warnings.map((w) => w.code)),

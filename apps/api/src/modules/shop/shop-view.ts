@@ -9,4 +9,8 @@ export const shopView = (s: ShopRow): Shop => ({
   offRatioTolerancePct: s.offRatioTolerancePct,
   readingCarryH: s.readingCarryH,
   windowCloseLeadMin: s.windowCloseLeadMin,
+  timeZone: s.timeZone,
+  temperatureProfile: s.temperatureProfile,
+  dayStartHour: s.dayStartHour,
+  quietFromHour: s.quietFromHour,
 });

@@ -26,7 +26,8 @@ export function CreateShopForm({ onCreated }: { onCreated: (session: SessionResp
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
     try {
-      await register.mutateAsync(values);
+      // The shop lives where the person setting it up is; the lead can change its zone later in the settings.
+      await register.mutateAsync({ ...values, timeZone: browserTimeZone() });
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, fieldNames));
     }
@@ -52,4 +53,12 @@ export function CreateShopForm({ onCreated }: { onCreated: (session: SessionResp
       </Button>
     </form>
   );
+}
+
+function browserTimeZone(): string | undefined {
+  try {
+    return Intl.DateTimeFormat().resolvedOptions().timeZone || undefined;
+  } catch {
+    return undefined;
+  }
 }

@@ -1,0 +1,43 @@
+import type { DataSource } from 'typeorm';
+import { z } from 'zod';
+import type { RouteRegistry } from '../../http/route-registry';
+import { AppError } from '../../http/errors';
+import { recordAudit } from '../audit/audit.service';
+import { rotateCalendarToken } from './calendar-token';
+import type { CalendarFeeds } from './calendar.service';
+
+const FeedParams = z.object({ feed: z.string().max(200) });
+const CalendarUrl = z.object({ calendarUrl: z.string() });
+
+export function calendarRoutes(api: RouteRegistry, ds: DataSource, feeds: CalendarFeeds, settings: { jwtSecret: string; publicUrl: string }): void {
+  api.add(
+    {
+      method: 'get',
+      path: '/calendar/:feed',
+      tag: 'calendar',
+      summary: "A member's private calendar feed (text/calendar, RFC 5545): the shop's coming pour steps. The URL is the key; no sign-in.",
+      access: 'public',
+      params: FeedParams,
+    },
+    async ({ params, res }) => {
+      const token = params.feed.replace(/\.ics$/i, '');
+      if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) throw new AppError('not_found', 'not_found', 'no such calendar feed; the link may have been replaced');
+      const text = await feeds.feed(token);
+      res.setHeader('Content-Type', 'text/calendar; charset=utf-8');
+      res.setHeader('Content-Disposition', 'inline; filename="gelpoint.ics"');
+      res.setHeader('Cache-Control', 'private, max-age=300');
+      res.status(200).end(text);
+      return undefined;
+    },
+  );
+  api.add(
+    { method: 'post', path: '/me/calendar/rotate', tag: 'calendar', summary: 'Replace your calendar feed URL: the old one answers 404 from now on', access: 'member', response: CalendarUrl },
+    ({ auth }) =>
+      ds.transaction(async (m) => {
+        const rows: { id: string }[] = await m.query('SELECT id FROM memberships WHERE user_id = $1 AND shop_id = $2 FOR UPDATE', [auth.userId, auth.shopId]);
+        const calendarUrl = await rotateCalendarToken(m, rows[0]!.id, settings.jwtSecret, settings.publicUrl);
+        await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'calendar.rotate', objectType: 'member', objectId: rows[0]!.id });
+        return { calendarUrl };
+      }),
+  );
+}
