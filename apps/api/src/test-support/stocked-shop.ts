@@ -152,7 +152,7 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
     'POST /api/auth/switch-shop': { body: { shopId: shop.shopId }, headers: bearer(shop.spareLead) },
     'POST /api/auth/password-reset': { body: { email: shop.maker.user.email } },
     'POST /api/auth/password-reset/confirm': { body: { token: shop.resetToken, password: 'a new long password' } },
-    'PATCH /api/shop': { body: { name: `Shop ${m}`, unitSystem: 'metric', scaleResolutionG: 1, offRatioTolerancePct: 5 } },
+    'PATCH /api/shop': { body: { name: `Shop ${m}`, unitSystem: 'metric', scaleResolutionG: 1, offRatioTolerancePct: 5, currency: 'CAD' } },
     'PATCH /api/shop/members/:id': { body: { role: 'apprentice', status: 'active' } },
     'POST /api/shop/invitations': { body: { email: `${m}-again@example.test`, role: 'maker' } },
     'POST /api/invitations/:token/accept': { body: { name: `Joiner ${m}`, password: PASSWORD } },

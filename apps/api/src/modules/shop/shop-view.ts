@@ -9,4 +9,5 @@ export const shopView = (s: ShopRow): Shop => ({
   offRatioTolerancePct: s.offRatioTolerancePct,
   readingCarryH: s.readingCarryH,
   windowCloseLeadMin: s.windowCloseLeadMin,
+  currency: s.currency,
 });

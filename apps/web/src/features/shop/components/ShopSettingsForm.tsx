@@ -1,6 +1,6 @@
 import { ScaleResolutionG, UpdateShopRequest, type Shop } from '@gelpoint/contracts';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { Alert } from '../../../components/ui/Alert';
@@ -9,9 +9,11 @@ import { ChoiceGroup } from '../../../components/ui/ChoiceGroup';
 import { Field } from '../../../components/ui/Field';
 import { FormAlert } from '../../../components/ui/FormAlert';
 import { Input } from '../../../components/ui/Input';
+import { Select } from '../../../components/ui/Select';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { requiredNumber } from '../../../lib/form-input';
 import { useUpdateShop } from '../api/update-shop';
+import { currencyOptions } from '../utils/currency-options';
 
 /** A typed number read as core reads every number, then checked by the contract's own rule and sentence. */
 const typedNumber = <T extends z.ZodType<number, number>>(rule: T, missing: string) => z.string().trim().min(1, { message: missing }).transform(requiredNumber).pipe(rule);
@@ -25,7 +27,7 @@ const SettingsFields = UpdateShopRequest.required().extend({
 });
 type SettingsInput = z.input<typeof SettingsFields>;
 type SettingsValues = z.output<typeof SettingsFields>;
-const fieldNames = ['name', 'unitSystem', 'scaleResolutionG', 'offRatioTolerancePct', 'readingCarryH', 'windowCloseLeadMin'] as const;
+const fieldNames = ['name', 'unitSystem', 'scaleResolutionG', 'offRatioTolerancePct', 'readingCarryH', 'windowCloseLeadMin', 'currency'] as const;
 
 const formValuesOf = (shop: Shop): SettingsInput => ({
   name: shop.name,
@@ -34,6 +36,7 @@ const formValuesOf = (shop: Shop): SettingsInput => ({
   offRatioTolerancePct: String(shop.offRatioTolerancePct),
   readingCarryH: String(shop.readingCarryH),
   windowCloseLeadMin: String(shop.windowCloseLeadMin),
+  currency: shop.currency,
 });
 
 const unitChoices = [
@@ -54,6 +57,7 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
     defaultValues: formValuesOf(shop),
   });
   const update = useUpdateShop({ onSuccess: onSaved });
+  const currencies = useMemo(() => currencyOptions(shop.currency), [shop.currency]);
   const { errors, isDirty } = form.formState;
 
   const onSubmit = form.handleSubmit(async (values) => {
@@ -105,6 +109,9 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
         required
       >
         {(control) => <Input {...control} inputMode="numeric" {...form.register('windowCloseLeadMin')} />}
+      </Field>
+      <Field label="Currency" hint="Prices on the shelf and the costs of pour plans and run sheets are in this currency." error={errors.currency?.message} required>
+        {(control) => <Select {...control} options={currencies} {...form.register('currency')} />}
       </Field>
       <div>
         <Button type="submit" busy={update.isPending} busyLabel="Saving…">
