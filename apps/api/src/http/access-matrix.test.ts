@@ -137,6 +137,8 @@ const table: Record<string, Rule> = {
   'POST /api/pours/:id/readings': { allowed: 'member', body: () => ({ readings: [{ at: '2026-11-01T10:00:00Z', tempC: 20 }] }), params: ownOrOther(freshPour, 'pour') },
   'POST /api/pours/:id/readings/csv': { allowed: 'member', raw: (r) => r.set('Content-Type', 'text/csv').send('2026-11-01T10:00:00Z,20\n'), params: ownOrOther(freshPour, 'pour') },
   'POST /api/pours/:id/checks': { allowed: 'member', raw: (r) => r.field('stage', 'gelled'), params: ownOrOther(freshPour, 'pour') },
+  'GET /api/pours/:id/batches.csv': { allowed: 'member', params: ownOrOther(freshPour, 'pour') },
+  'GET /api/pours/:id/readings.csv': { allowed: 'member', params: ownOrOther(freshPour, 'pour') },
   'GET /api/pours/:id/checks/:checkId/photo': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownPour : w.otherIds.pour, checkId: '00000000-0000-4000-8000-000000000000' }) },
   'POST /api/pours/:id/release': { allowed: ['lead'], params: ownOrOther(freshPour, 'pour') },
   'POST /api/pours/:id/machined': { allowed: ['lead', 'maker'], body: () => ({ finishCoats: 1, hoursBetweenCoats: 12 }), params: ownOrOther(freshPour, 'pour') },

@@ -92,6 +92,10 @@ export const paths = {
     path: '/pieces/:pieceId',
     getHref: (pieceId: string) => `/pieces/${encodeURIComponent(pieceId)}`,
   },
+  pieceRecord: {
+    path: '/pieces/:pieceId/record',
+    getHref: (pieceId: string) => `/pieces/${encodeURIComponent(pieceId)}/record`,
+  },
   moulds: { path: '/moulds', getHref: () => '/moulds' },
   newMould: {
     path: '/moulds/new',

@@ -25,6 +25,7 @@ import {
 import { AppError } from '../../http/errors';
 import type { RouteRegistry } from '../../http/route-registry';
 import { recordAudit } from '../audit/audit.service';
+import { pourExportRoutes } from './pour-export.routes';
 import { sniffImageType } from './photo-type';
 import type { Pours } from './pours.service';
 
@@ -148,4 +149,5 @@ export function pourRoutes(api: RouteRegistry, ds: DataSource, pours: Pours, upl
       return pours.addReadings(shops[0].id, body.pourId, body.readings, 'sensor', null);
     },
   );
+  pourExportRoutes(api, ds);
 }
