@@ -3,6 +3,7 @@ import { formatTemperature, formatWeighedMass, type ScaleResolutionG } from '@ge
 import type { ReactNode } from 'react';
 import { Alert } from '../../../components/ui/Alert';
 import { formatDateTime } from '../../../lib/format';
+import { useRootClass } from '../../../lib/use-root-class';
 import type { PieceRecordPour } from '../api/get-piece-record';
 import { checkStageWords, pourStatusWords } from '../utils/cure-words';
 import { pourRecord, type PourRecord } from '../utils/cure-record';
@@ -182,6 +183,7 @@ export interface CureRecordProps {
 
 /** One piece's cure record: each pour's plan, products, lots and weights per cup, temperatures, checks and release. */
 export function CureRecord({ piece, pours, shop }: CureRecordProps) {
+  useRootClass('print-cure-record');
   const scale: ScaleResolutionG = shop.scaleResolutionG === 1 ? 1 : 0.1;
   return (
     <div className="cure-record flex flex-col gap-5">

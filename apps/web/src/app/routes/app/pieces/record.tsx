@@ -37,7 +37,7 @@ export function Component() {
   };
 
   return (
-    <div className="min-h-dvh bg-white text-ink">
+    <div className="min-h-dvh bg-white text-ink print:min-h-0">
       <DocumentTitle title={piece.data ? `Cure record · ${piece.data.name}` : 'Cure record'} />
       <div className="mx-auto flex max-w-5xl flex-col gap-4 px-4 py-6 print:max-w-none print:p-0">
         <nav aria-label="Cure record" className="flex flex-wrap items-center justify-between gap-3 print:hidden">
