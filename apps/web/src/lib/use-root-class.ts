@@ -1,8 +1,9 @@
 import { useEffect } from 'react';
 
 /**
- * Puts a class on <html> while the page is shown. Print styles that size the whole sheet (the root font size the
- * rem-based spacing follows) key on it: Chromium does not apply `html:has(…)` when it lays out a page for printing.
+ * Puts a class on <html> while the page is shown. A page's stylesheet stays loaded after the page is left, so
+ * print rules for the whole document (the root font size the rem-based spacing follows, the body's height) key on
+ * this class and apply to that page alone.
  */
 export function useRootClass(className: string): void {
   useEffect(() => {
