@@ -86,7 +86,7 @@ export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG }: Bat
         <Blank label="Lot A" />
         <Blank label="Lot B" />
         {batch.pigmentG > 0 ? <Blank label="Lot pigment" /> : null}
-        <span className="inline-flex items-end gap-x-3">
+        <span className="inline-flex flex-wrap items-end gap-x-3 gap-y-3">
           <input id={mixedId} type="checkbox" className="size-6 accent-walnut-800" />
           <label htmlFor={mixedId} className="run-sheet-tick inline-flex min-h-touch min-w-touch items-center font-semibold">
             Mixed

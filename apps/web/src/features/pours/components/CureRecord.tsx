@@ -18,6 +18,15 @@ const recordPlotFrame: PlotFrame = { width: 720, height: 170, left: 48, right: 1
 const cell = 'border border-walnut-300 px-1.5 py-1 align-top';
 const head = `${cell} bg-paper-deep text-left font-semibold`;
 
+/** A wide table scrolls sideways on a phone instead of squeezing; on paper it takes the page's width. */
+function Scroll({ label, children }: { label: string; children: ReactNode }) {
+  return (
+    <div role="region" aria-label={label} tabIndex={0} className="overflow-x-auto print:overflow-visible">
+      {children}
+    </div>
+  );
+}
+
 function Block({ title, children }: { title: string; children: ReactNode }) {
   return (
     <section className="cure-record-block flex flex-col gap-1.5">
@@ -30,51 +39,53 @@ function Block({ title, children }: { title: string; children: ReactNode }) {
 function CupsTable({ record, grams, temp }: { record: PourRecord; grams: (g: number) => string; temp: (c: number) => string }) {
   const planned = (target: number, weighed: number | undefined) => (weighed === undefined ? `${grams(target)} planned` : `${grams(weighed)} (plan ${grams(target)})`);
   return (
-    <table className="w-full border-collapse text-sm tabular-nums">
-      <caption className="sr-only">Cups mixed, with lots, weights, who mixed them and when</caption>
-      <thead>
-        <tr>
-          <th scope="col" className={head}>Cup</th>
-          <th scope="col" className={head}>Product · lots A / B / pigment</th>
-          <th scope="col" className={head}>Part A</th>
-          <th scope="col" className={head}>Part B</th>
-          <th scope="col" className={head}>Pigment</th>
-          <th scope="col" className={head}>Mixed by, when, air</th>
-        </tr>
-      </thead>
-      <tbody>
-        {record.cups.map((cup) => {
-          const l = cup.logged;
-          return (
-            <tr key={cup.order} className={l?.voided ? 'line-through' : undefined}>
-              <td className={cell}>
-                {cup.order} · {cup.pourLabel}
-              </td>
-              <td className={cell}>
-                {cup.productName}
-                {l ? ` · ${l.lotA || '—'} / ${l.lotB || '—'}${cup.pigmentName ? ` / ${l.lotPigment || '—'}` : ''}` : ''}
-              </td>
-              <td className={cell}>{planned(cup.targetAG, l?.weighedAG)}</td>
-              <td className={cell}>{planned(cup.targetBG, l?.weighedBG)}</td>
-              <td className={cell}>{cup.pigmentName ? planned(cup.targetPigmentG, l?.weighedPigmentG) : 'none'}</td>
-              <td className={cell}>
-                {l ? (
-                  <>
-                    {l.mixedBy ?? 'a former member'}, {formatDateTime(l.mixedAt)}
-                    {l.ambientTempC !== null ? `, ${temp(l.ambientTempC)}` : ''}
-                    {l.rhPct !== null ? ` ${l.rhPct} % RH` : ''}
-                    {l.voided ? ' (voided)' : ''}
-                    {l.warnings.length ? <span className="block font-semibold">{l.warnings.join(' ')}</span> : null}
-                  </>
-                ) : (
-                  'not logged'
-                )}
-              </td>
-            </tr>
-          );
-        })}
-      </tbody>
-    </table>
+    <Scroll label="Cups mixed">
+      <table className="w-full min-w-[40rem] border-collapse text-sm tabular-nums print:min-w-0">
+        <caption className="sr-only">Cups mixed, with lots, weights, who mixed them and when</caption>
+        <thead>
+          <tr>
+            <th scope="col" className={head}>Cup</th>
+            <th scope="col" className={head}>Product · lots A / B / pigment</th>
+            <th scope="col" className={head}>Part A</th>
+            <th scope="col" className={head}>Part B</th>
+            <th scope="col" className={head}>Pigment</th>
+            <th scope="col" className={head}>Mixed by, when, air</th>
+          </tr>
+        </thead>
+        <tbody>
+          {record.cups.map((cup) => {
+            const l = cup.logged;
+            return (
+              <tr key={cup.order} className={l?.voided ? 'line-through' : undefined}>
+                <td className={cell}>
+                  {cup.order} · {cup.pourLabel}
+                </td>
+                <td className={cell}>
+                  {cup.productName}
+                  {l ? ` · ${l.lotA || '—'} / ${l.lotB || '—'}${cup.pigmentName ? ` / ${l.lotPigment || '—'}` : ''}` : ''}
+                </td>
+                <td className={cell}>{planned(cup.targetAG, l?.weighedAG)}</td>
+                <td className={cell}>{planned(cup.targetBG, l?.weighedBG)}</td>
+                <td className={cell}>{cup.pigmentName ? planned(cup.targetPigmentG, l?.weighedPigmentG) : 'none'}</td>
+                <td className={cell}>
+                  {l ? (
+                    <>
+                      {l.mixedBy ?? 'a former member'}, {formatDateTime(l.mixedAt)}
+                      {l.ambientTempC !== null ? `, ${temp(l.ambientTempC)}` : ''}
+                      {l.rhPct !== null ? ` ${l.rhPct} % RH` : ''}
+                      {l.voided ? ' (voided)' : ''}
+                      {l.warnings.length ? <span className="block font-semibold">{l.warnings.join(' ')}</span> : null}
+                    </>
+                  ) : (
+                    'not logged'
+                  )}
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </Scroll>
   );
 }
 
@@ -140,29 +151,31 @@ function PourSection({ entry, number, shop, scale }: { entry: PieceRecordPour; n
         {record.checks.length === 0 ? (
           <p className="text-sm">None recorded.</p>
         ) : (
-          <table className="w-full border-collapse text-sm">
-            <caption className="sr-only">Cure checks</caption>
-            <thead>
-              <tr>
-                <th scope="col" className={head}>When</th>
-                <th scope="col" className={head}>Stage</th>
-                <th scope="col" className={head}>Shore D</th>
-                <th scope="col" className={head}>By</th>
-                <th scope="col" className={head}>Note</th>
-              </tr>
-            </thead>
-            <tbody>
-              {record.checks.map((c) => (
-                <tr key={c.id}>
-                  <td className={cell}>{formatDateTime(c.checkedAt)}</td>
-                  <td className={cell}>{checkStageWords[c.stage]}</td>
-                  <td className={`${cell} tabular-nums`}>{c.hardnessShoreD ?? '—'}</td>
-                  <td className={cell}>{c.checkedBy?.name ?? 'a former member'}</td>
-                  <td className={cell}>{c.note || '—'}</td>
+          <Scroll label="Cure checks recorded">
+            <table className="w-full min-w-[32rem] border-collapse text-sm print:min-w-0">
+              <caption className="sr-only">Cure checks</caption>
+              <thead>
+                <tr>
+                  <th scope="col" className={head}>When</th>
+                  <th scope="col" className={head}>Stage</th>
+                  <th scope="col" className={head}>Shore D</th>
+                  <th scope="col" className={head}>By</th>
+                  <th scope="col" className={head}>Note</th>
                 </tr>
-              ))}
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                {record.checks.map((c) => (
+                  <tr key={c.id}>
+                    <td className={cell}>{formatDateTime(c.checkedAt)}</td>
+                    <td className={cell}>{checkStageWords[c.stage]}</td>
+                    <td className={`${cell} tabular-nums`}>{c.hardnessShoreD ?? '—'}</td>
+                    <td className={cell}>{c.checkedBy?.name ?? 'a former member'}</td>
+                    <td className={cell}>{c.note || '—'}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </Scroll>
         )}
       </Block>
       <Block title="Release">
