@@ -1,7 +1,7 @@
 import { auditSentence, type AuditEvent } from '@gelpoint/contracts';
+import { Link } from 'react-router';
 import { DateTime } from '../../../components/ui/DateTime';
 import { Table, Td, Th, Thead, Tr } from '../../../components/ui/Table';
-import { TextLink } from '../../../components/ui/TextLink';
 
 /** Who did it, in words; events with no person behind them came from the shop thermometer or from Gelpoint itself. */
 function actorWords(event: AuditEvent): string {
@@ -18,7 +18,13 @@ export function AuditSentence({ event }: { event: AuditEvent }) {
       {s.name !== null ? (
         <>
           {' '}
-          {event.link ? <TextLink to={event.link} className="min-h-0">{s.name}</TextLink> : <strong className="font-semibold">{s.name}</strong>}
+          {event.link ? (
+            <Link to={event.link} className="font-semibold text-walnut-700 underline decoration-resin-400 decoration-2 underline-offset-4 hover:text-walnut-900">
+              {s.name}
+            </Link>
+          ) : (
+            <strong className="font-semibold">{s.name}</strong>
+          )}
         </>
       ) : null}
       {s.after ? ` ${s.after}` : ''} by <strong className="font-semibold">{actorWords(event)}</strong>
