@@ -27,6 +27,7 @@ import { PourPlans } from './modules/pour-plans/pour-plans.service';
 import { pourRoutes } from './modules/pours/pours.routes';
 import { calendarRoutes } from './modules/calendar/calendar.routes';
 import { CalendarFeeds } from './modules/calendar/calendar.service';
+import { pourExportRoutes } from './modules/pours/pour-export.routes';
 import { PourLog } from './modules/pours/pour-log.service';
 import { Pours } from './modules/pours/pours.service';
 import { shelfRoutes } from './modules/shelf/shelf.routes';
@@ -91,6 +92,7 @@ export function createApp({ ds, config, logger = createLogger(config.logLevel) }
   moldRoutes(registry, molds, config.maxStlBytes, uploadLimit);
   pourPlanRoutes(registry, new PourPlans(ds, molds.cavityForPlan));
   pourRoutes(registry, new Pours(ds, undefined, quota), new PourLog(ds), uploadLimit);
+  pourExportRoutes(registry, ds);
   calendarRoutes(registry, ds, new CalendarFeeds(ds, config.publicUrl), settings);
 
   api.get('/openapi.json', (_req, res) => {

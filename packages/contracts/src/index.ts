@@ -4,6 +4,7 @@ export * from './shop';
 export * from './team';
 export * from './pieces';
 export * from './audit';
+export * from './audit-words';
 export * from './health';
 export * from './shelf';
 export * from './molds';

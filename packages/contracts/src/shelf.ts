@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id, Timestamp, requiredText, text } from './common';
+import { Id, Timestamp, UserRef, requiredText, text } from './common';
 
 const positive = (label: string, max: number) =>
   z.number({ message: `${label} must be a number` }).gt(0, { message: `${label} must be above zero` }).max(max, { message: `${label} must be at most ${max}` });
@@ -216,3 +216,22 @@ export const LotListQuery = z
   .strict();
 
 export const Page = <T extends z.ZodType>(item: T) => z.object({ items: z.array(item), total: z.number().int() });
+
+/** One cup that drew on a lot: which pour and piece it went into, how much was weighed, who mixed it and when. */
+export const LotUse = z.object({
+  batchId: Id,
+  pourId: Id,
+  piece: z.object({ id: Id, name: z.string() }),
+  planName: z.string(),
+  /** The plan's step the cup belongs to, e.g. layer:2 or seal_coat:1. */
+  step: z.string(),
+  planBatchIndex: z.number().int(),
+  part: LotPart,
+  weighedG: z.number(),
+  mixedAt: Timestamp,
+  mixedBy: UserRef.nullable(),
+  voided: z.boolean().describe('the batch was voided after it was logged: kept for the record, not counted'),
+});
+export type LotUse = z.infer<typeof LotUse>;
+
+export const LotUsesQuery = z.object(pageWindow).strict();

@@ -45,6 +45,16 @@ export const ShopTemperatureProfile = z
   )
   .describe("where nothing is logged: the plan's shop temperature, day and night at local hours, or learned from the last 7 days of readings");
 export type ShopTemperatureProfile = z.infer<typeof ShopTemperatureProfile>;
+/** The ISO 4217 codes this runtime can format (ECMA-402 Intl.supportedValuesOf), read once. */
+const knownCurrencies: ReadonlySet<string> = new Set(Intl.supportedValuesOf('currency'));
+
+export const CurrencyCode = z
+  .string({ message: 'the currency must be a three-letter ISO 4217 code, e.g. USD, CAD or MXN' })
+  .trim()
+  .toUpperCase()
+  .refine((code) => knownCurrencies.has(code), {
+    message: 'the currency must be a three-letter ISO 4217 code in use, e.g. USD, CAD or MXN',
+  });
 
 export const Shop = z.object({
   id: Id,
@@ -58,6 +68,7 @@ export const Shop = z.object({
   temperatureProfile: ShopTemperatureProfile,
   dayStartHour: z.number().int().describe('local hour the working day starts: the morning digest goes out, quiet hours end'),
   quietFromHour: z.number().int().describe('local hour quiet hours start: reminders due after it wait for the morning digest'),
+  currency: z.string().describe('ISO 4217 code every cost and price of the shop is in'),
 });
 export type Shop = z.infer<typeof Shop>;
 
@@ -77,6 +88,7 @@ export const UpdateShopRequest = z
       .int({ message: 'the warning before a window closes must be whole minutes' })
       .min(0, { message: 'the warning before a window closes cannot be negative' })
       .max(720, { message: 'the warning before a window closes must be at most 720 min (12 h)' }),
+    currency: CurrencyCode,
   })
   .partial()
   .strict();

@@ -115,6 +115,7 @@ export function signedInPages(ids: PageFixtures): MainPage[] {
     { name: 'pieces', path: '/pieces', roles: everyone },
     { name: 'new piece', path: '/pieces/new', roles: ['lead', 'maker'] },
     { name: 'piece', path: `/pieces/${ids.pieceId}`, roles: everyone },
+    { name: 'cure record', path: `/pieces/${ids.pieceId}/record`, roles: everyone },
     { name: 'moulds', path: '/moulds', roles: everyone },
     { name: 'new mould', path: '/moulds/new', roles: ['lead', 'maker'] },
     { name: 'mould', path: `/moulds/${ids.moldId}`, roles: everyone },

@@ -82,8 +82,9 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
             },
           ],
         },
-        // The run sheet prints on its own, without the frame's header and menu.
+        // The run sheet and the cure record print on their own, without the frame's header and menu.
         { path: paths.runSheet.path, lazy: lazyRoute(() => import('./routes/app/pour-plans/run-sheet')) },
+        { path: paths.pieceRecord.path, lazy: lazyRoute(() => import('./routes/app/pieces/record')) },
         { path: '*', lazy: lazyRoute(() => import('./routes/not-found')) },
       ],
     },

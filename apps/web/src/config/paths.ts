@@ -12,7 +12,14 @@ export interface PiecesLink {
 }
 
 export interface AuditLink {
+  /** The oldest event already shown: its exact time and its id. */
   before?: string;
+  beforeId?: string;
+  /** Filters: a member's user id, a kind of event, the reader's first and last calendar day. */
+  who?: string;
+  kind?: string;
+  from?: string;
+  to?: string;
 }
 
 export interface NewMouldLink {
@@ -84,6 +91,10 @@ export const paths = {
   piece: {
     path: '/pieces/:pieceId',
     getHref: (pieceId: string) => `/pieces/${encodeURIComponent(pieceId)}`,
+  },
+  pieceRecord: {
+    path: '/pieces/:pieceId/record',
+    getHref: (pieceId: string) => `/pieces/${encodeURIComponent(pieceId)}/record`,
   },
   moulds: { path: '/moulds', getHref: () => '/moulds' },
   newMould: {
@@ -159,13 +170,16 @@ export const paths = {
   newLot: { path: '/shelf/lots/new', getHref: () => '/shelf/lots/new' },
   lot: {
     path: '/shelf/lots/:lotId',
-    getHref: (lotId: string) => `/shelf/lots/${encodeURIComponent(lotId)}`,
+    /** `page` pages the batches mixed from the lot. */
+    getHref: (lotId: string, link: { page?: number } = {}) =>
+      withSearch(`/shelf/lots/${encodeURIComponent(lotId)}`, { page: link.page !== undefined && link.page > 1 ? link.page : undefined }),
   },
   team: { path: '/team', getHref: () => '/team' },
   shopSettings: { path: '/shop-settings', getHref: () => '/shop-settings' },
   audit: {
     path: '/audit',
-    getHref: (link: AuditLink = {}) => withSearch('/audit', { before: link.before }),
+    getHref: (link: AuditLink = {}) =>
+      withSearch('/audit', { who: link.who, kind: link.kind, from: link.from, to: link.to, before: link.before, beforeId: link.before ? link.beforeId : undefined }),
   },
 } as const;
 

@@ -13,6 +13,7 @@ export type ShopTemperatureProfile =
 @Check('shops_quiet_from_hour_check', `quiet_from_hour >= 0 AND quiet_from_hour <= 23`)
 @Check('shops_reading_carry_check', `reading_carry_h >= 0 AND reading_carry_h <= 48`)
 @Check('shops_window_close_lead_check', `window_close_lead_min >= 0 AND window_close_lead_min <= 720`)
+@Check('shops_currency_check', `currency ~ '^[A-Z]{3}$'`)
 export class Shop {
   @PrimaryGeneratedColumn('uuid', { primaryKeyConstraintName: 'shops_pkey' }) id!: string;
   @Column({ type: 'text' }) name!: string;
@@ -35,6 +36,8 @@ export class Shop {
   @Column({ name: 'day_start_hour', type: 'integer', default: 7 }) dayStartHour!: number;
   /** Local hour quiet hours start: reminders falling after it wait for the morning digest. */
   @Column({ name: 'quiet_from_hour', type: 'integer', default: 21 }) quietFromHour!: number;
+  /** ISO 4217 code every cost of the shop is in; the API checks it against the codes the runtime knows. */
+  @Column({ type: 'text', default: 'USD' }) currency!: string;
   /** sha256 of the token a shop thermometer sends with its readings. */
   @Column({ name: 'ingest_token_hash', type: 'text', nullable: true, select: false }) ingestTokenHash!: string | null;
   @CreatedAt() createdAt!: Date;

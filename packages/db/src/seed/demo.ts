@@ -59,7 +59,8 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
     // One seeder at a time: a second start racing the first waits here, then finds the shop.
     await m.query('SELECT pg_advisory_xact_lock(7201)');
     if ((await m.count(Shop)) > 0) return false;
-    const shop = await m.save(m.create(Shop, { name: 'Kettle Creek Woodworks', unitSystem: 'metric', scaleResolutionG: 0.1 }));
+    // A metric shop in Canada: its prices are in Canadian dollars.
+    const shop = await m.save(m.create(Shop, { name: 'Kettle Creek Woodworks', unitSystem: 'metric', scaleResolutionG: 0.1, currency: 'CAD' }));
     const passwordHash = await hashPassword(DEMO_PASSWORD);
     const users = new Map<string, User>();
     for (const p of people) {

@@ -1,34 +1,33 @@
-import { AuditEvent as AuditEventRow } from '@gelpoint/db';
-import { AuditList, AuditListQuery, type AuditEvent } from '@gelpoint/contracts';
-import type { RouteRegistry } from '../../http/route-registry';
 import type { DataSource } from 'typeorm';
-
-function toView(e: AuditEventRow): AuditEvent {
-  return {
-    id: e.id,
-    at: e.createdAt.toISOString(),
-    actor: e.actorUserId ? { id: e.actorUserId, name: e.actorName ?? '' } : null,
-    action: e.action,
-    objectType: e.objectType,
-    objectId: e.objectId,
-    detail: e.detail,
-  };
-}
+import { AuditExportQuery, AuditList, AuditListQuery } from '@gelpoint/contracts';
+import type { RouteRegistry } from '../../http/route-registry';
+import { writeAuditCsv } from './audit-export';
+import { namedEvents } from './audit-names';
+import { auditQuery, olderThan, pageOf } from './audit-query';
 
 export function auditRoutes(api: RouteRegistry, ds: DataSource): void {
   api.add(
-    { method: 'get', path: '/audit', tag: 'audit', summary: 'Recent audit events of the shop, newest first', access: ['lead'], query: AuditListQuery, response: AuditList },
+    {
+      method: 'get',
+      path: '/audit',
+      tag: 'audit',
+      summary: 'Audit events of the shop, newest first, with names and links; filter by person, kind and dates, page with next',
+      access: ['lead'],
+      query: AuditListQuery,
+      response: AuditList,
+    },
     async ({ auth, query }) => {
-      const qb = ds
-        .getRepository(AuditEventRow)
-        .createQueryBuilder('e')
-        .where('e.shop_id = :shopId', { shopId: auth.shopId })
-        .orderBy('e.created_at', 'DESC')
-        .limit(query.limit);
-      if (query.objectType) qb.andWhere('e.object_type = :t', { t: query.objectType });
-      if (query.objectId) qb.andWhere('e.object_id = :o', { o: query.objectId });
-      if (query.before) qb.andWhere('e.created_at < :b', { b: query.before });
-      return { items: (await qb.getMany()).map(toView) };
+      const qb = auditQuery(ds, auth.shopId, query);
+      if (query.before) olderThan(qb, query.before, query.beforeId);
+      const page = await pageOf(qb, query.limit);
+      return { items: await namedEvents(ds.manager, auth.shopId, page.rows), next: page.rows.length === query.limit ? page.last : null };
+    },
+  );
+  api.add(
+    { method: 'get', path: '/audit/export', tag: 'audit', summary: 'The audit as CSV (text/csv), with the same filters as the list', access: ['lead'], query: AuditExportQuery },
+    async ({ auth, query, res }) => {
+      await writeAuditCsv(ds, auth.shopId, query, res);
+      return undefined;
     },
   );
 }

@@ -5,6 +5,7 @@ import { Id, LotInput, LotListQuery, LotUpdate, LotView, Page, PigmentInput, Pig
 import type { RouteRegistry } from '../../http/route-registry';
 import { Catalogue } from './catalogue.service';
 import { pigmentSortColumns, resinSystemSortColumns } from './catalogue-sort';
+import { lotUseRoutes } from './lot-use.routes';
 import { createLot, deleteLot, getLot, listLots, updateLot } from './lots.service';
 import { pigmentView, resinSystemColumns, resinSystemView } from './shelf-views';
 
@@ -54,4 +55,5 @@ export function shelfRoutes(api: RouteRegistry, ds: DataSource): void {
     await deleteLot(ds, auth, params.id);
     return undefined;
   });
+  lotUseRoutes(api, ds);
 }

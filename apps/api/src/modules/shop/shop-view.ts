@@ -13,4 +13,5 @@ export const shopView = (s: ShopRow): Shop => ({
   temperatureProfile: s.temperatureProfile,
   dayStartHour: s.dayStartHour,
   quietFromHour: s.quietFromHour,
+  currency: s.currency,
 });

@@ -14,7 +14,7 @@ export function shopRoutes(api: RouteRegistry, ds: DataSource): void {
   });
 
   api.add(
-    { method: 'patch', path: '/shop', tag: 'shop', summary: 'Change the shop name, unit system or scale resolution', access: ['lead'], body: UpdateShopRequest, response: Shop },
+    { method: 'patch', path: '/shop', tag: 'shop', summary: 'Change the shop name, units, scale resolution, currency or cure-log settings', access: ['lead'], body: UpdateShopRequest, response: Shop },
     async ({ auth, body }) =>
       ds.transaction(async (m) => {
         const shop = await m.findOne(ShopRow, { where: { id: auth.shopId }, lock: { mode: 'pessimistic_write' } });

@@ -1,15 +1,19 @@
 import type { QueryClient } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
+import { useMemo } from 'react';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { buttonClasses } from '../../../components/ui/Button';
 import { ButtonLink } from '../../../components/ui/ButtonLink';
 import { DocumentTitle } from '../../../components/ui/DocumentTitle';
 import { EmptyState } from '../../../components/ui/EmptyState';
 import { PageHeader } from '../../../components/ui/PageHeader';
 import { QueryResult } from '../../../components/ui/QueryResult';
 import { paths } from '../../../config/paths';
-import { auditEventsQueryOptions, auditPageSize, useAuditEvents } from '../../../features/shop/api/get-audit-events';
+import { auditExportHref } from '../../../features/shop/api/audit-export';
+import { auditEventsQueryOptions, useAuditEvents } from '../../../features/shop/api/get-audit-events';
+import { AuditFilterForm } from '../../../features/shop/components/AuditFilterForm';
 import { AuditTable } from '../../../features/shop/components/AuditTable';
 import { useAuditQuery } from '../../../features/shop/hooks/use-audit-query';
-import { readAuditQuery } from '../../../features/shop/utils/audit-cursor';
+import { readAuditFilters, readAuditQuery } from '../../../features/shop/utils/audit-cursor';
 import { can } from '../../../lib/authorization';
 import { useSignedInSession } from '../../signed-in-session';
 import { requireSession } from '../../session-loaders';
@@ -37,39 +41,46 @@ export function Component() {
 }
 
 function AuditArea() {
+  const [search] = useSearchParams();
+  const filters = useMemo(() => readAuditFilters(search), [search]);
   const query = useAuditQuery();
   const events = useAuditEvents(query);
+  const filtered = Boolean(filters.who || filters.kind || filters.from || filters.to);
   return (
-    <QueryResult query={events} loadingLabel="Loading events…">
-      {(page) => {
-        const oldest = page.items.at(-1);
-        const maybeMore = page.items.length === auditPageSize && oldest !== undefined;
-        return (
+    <>
+      <AuditFilterForm key={search.toString()} filters={filters} />
+      <p className="mb-4">
+        <a href={auditExportHref(filters)} download className={buttonClasses('secondary')}>
+          Download {filtered ? 'these events' : 'the whole audit'} as CSV
+        </a>
+      </p>
+      <QueryResult query={events} loadingLabel="Loading events…">
+        {(page) => (
           <>
             {page.items.length === 0 ? (
-              <EmptyState title={query.before ? 'No older events' : 'Nothing has happened yet'}>
-                Sign-ins, changes to pieces, the team and the settings show up here.
+              <EmptyState title={query.before ? 'No older events' : filtered ? 'No event matches' : 'Nothing has happened yet'}>
+                {filtered ? 'Try another person, kind or range of days.' : 'Sign-ins, changes to pieces, the shelf, the team and the settings show up here.'}
               </EmptyState>
             ) : (
               <AuditTable events={page.items} />
             )}
-            {query.before || maybeMore ? (
-            <nav aria-label="Pages of events" className="mt-6 flex flex-wrap gap-2">
-              {query.before ? (
-                <ButtonLink variant="secondary" to={paths.audit.getHref()}>
-                  Newest events
-                </ButtonLink>
-              ) : null}
-              {maybeMore ? (
-                <ButtonLink variant="secondary" to={paths.audit.getHref({ before: oldest.at })}>
-                  Older events
-                </ButtonLink>
-              ) : null}
-            </nav>
+            {query.before || page.next ? (
+              <nav aria-label="Pages of events" className="mt-6 flex flex-wrap gap-2">
+                {query.before ? (
+                  <ButtonLink variant="secondary" to={paths.audit.getHref(filters)}>
+                    Newest events
+                  </ButtonLink>
+                ) : null}
+                {page.next ? (
+                  <ButtonLink variant="secondary" to={paths.audit.getHref({ ...filters, before: page.next.before, beforeId: page.next.beforeId })}>
+                    Older events
+                  </ButtonLink>
+                ) : null}
+              </nav>
             ) : null}
           </>
-        );
-      }}
-    </QueryResult>
+        )}
+      </QueryResult>
+    </>
   );
 }

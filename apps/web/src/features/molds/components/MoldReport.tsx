@@ -101,6 +101,7 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
             levelMm={levelMm}
             layerLevelsMm={lines?.ok ? lines.value.levelsMm : []}
             footprint={depthMap}
+            footprintLevelMm={mapped.data?.levelMm}
             unitSystem={unitSystem}
           />
         </Card>

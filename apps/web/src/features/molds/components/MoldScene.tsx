@@ -5,6 +5,7 @@ import { readMouldFile } from '@gelpoint/mesh';
 import { OrbitControls } from 'three-stdlib';
 import type { CavityReport, DepthMap, MoldFileUnits, UpAxis } from '../types';
 import { mmPerFileUnit } from '../utils/file-units';
+import { resinOutlines } from '../utils/resin-outline';
 import { upAxisTurn } from '../utils/up-axis-turn';
 
 export interface MoldSceneProps {
@@ -15,9 +16,12 @@ export interface MoldSceneProps {
   bboxMm: CavityReport['bboxMm'];
   /** Absolute level in the report frame. */
   levelMm: number;
+  /** Every layer boundary from the cavity floor up to the fill level (absolute); a line is drawn at each layer's top. */
   layerLevelsMm: readonly number[];
-  /** Where resin stands at the level; without it the surface spans the bounding box. */
+  /** Where resin stands at the level; without it the surface spans the bounding box and no layer line is drawn. */
   footprint: DepthMap | undefined;
+  /** The level the footprint's depths were measured at (it may trail the slider by a moment). */
+  footprintLevelMm: number | undefined;
   describedBy: string;
 }
 
@@ -44,17 +48,10 @@ function moldGeometry(file: ArrayBuffer, upAxis: UpAxis, units: MoldFileUnits): 
   return geometry;
 }
 
-/** A rectangle just outside the bounding box at each level, where one layer meets the next. */
-function layerLineGeometry(bboxMm: CavityReport['bboxMm'], levelsMm: readonly number[]): Geometry {
-  const margin = 0.03 * Math.max(bboxMm.max[0] - bboxMm.min[0], bboxMm.max[1] - bboxMm.min[1]);
-  const x0 = bboxMm.min[0] - margin;
-  const x1 = bboxMm.max[0] + margin;
-  const y0 = bboxMm.min[1] - margin;
-  const y1 = bboxMm.max[1] + margin;
-  const points: number[] = [];
-  for (const z of levelsMm) {
-    points.push(x0, y0, z, x1, y0, z, x1, y0, z, x1, y1, z, x1, y1, z, x0, y1, z, x0, y1, z, x0, y0, z);
-  }
+/** On the cavity at each layer's top: the outline of the resin surface there, where it meets the wood. */
+function layerLineGeometry(mold: Geometry, topsMm: readonly number[], footprint: DepthMap | undefined, footprintLevelMm: number | undefined): Geometry {
+  const positions = mold.getAttribute('position').array;
+  const points = footprint && footprintLevelMm !== undefined ? resinOutlines(positions, topsMm, { map: footprint, fillLevelMm: footprintLevelMm }) : [];
   const geometry = new BufferGeometry();
   geometry.setAttribute('position', new Float32BufferAttribute(points, 3));
   return geometry;
@@ -114,10 +111,11 @@ function Controls({ target }: { target: readonly [number, number, number] }) {
 }
 
 /** The mould in 3D, Z up as the report measured it, with the resin surface at the fill level and the layer lines. */
-export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerLevelsMm, footprint, describedBy }: MoldSceneProps) {
+export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerLevelsMm, footprint, footprintLevelMm, describedBy }: MoldSceneProps) {
   const geometry = useMemo(() => moldGeometry(file, upAxis, units), [file, upAxis, units]);
   useEffect(() => () => geometry.dispose(), [geometry]);
-  const layerLines = useMemo(() => layerLineGeometry(bboxMm, layerLevelsMm), [bboxMm, layerLevelsMm]);
+  // The floor is where the first layer starts, not a layer of its own: lines go at the layers' tops.
+  const layerLines = useMemo(() => layerLineGeometry(geometry, layerLevelsMm.slice(1), footprint, footprintLevelMm), [geometry, layerLevelsMm, footprint, footprintLevelMm]);
   useEffect(() => () => layerLines.dispose(), [layerLines]);
   const surface = useMemo(() => resinSurface(bboxMm, footprint), [bboxMm, footprint]);
   useEffect(() => () => surface.texture?.dispose(), [surface]);
@@ -149,7 +147,8 @@ export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerL
       <directionalLight position={[centre[0] + reach, centre[1] - reach, centre[2] + reach * 2]} intensity={1.6} />
       <directionalLight position={[centre[0] - reach, centre[1] + reach, centre[2] + reach]} intensity={0.5} />
       <mesh geometry={geometry}>
-        <meshStandardMaterial color={woodColour} roughness={0.85} metalness={0} />
+        {/* Pushed back a hair in depth so the layer lines drawn on its walls are never hidden inside them. */}
+        <meshStandardMaterial color={woodColour} roughness={0.85} metalness={0} polygonOffset polygonOffsetFactor={1} polygonOffsetUnits={1} />
       </mesh>
       <mesh position={[surface.centre[0], surface.centre[1], levelMm]}>
         <planeGeometry args={surface.size} />
@@ -166,7 +165,7 @@ export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerL
           polygonOffsetFactor={-2}
         />
       </mesh>
-      {layerLevelsMm.length > 0 ? (
+      {layerLevelsMm.length > 1 ? (
         <lineSegments geometry={layerLines}>
           <lineBasicMaterial color={lineColour} />
         </lineSegments>

@@ -16,10 +16,12 @@ export interface MoldView3DProps {
   levelMm: number;
   layerLevelsMm: readonly number[];
   footprint: DepthMap | undefined;
+  /** The level the footprint was measured at. */
+  footprintLevelMm: number | undefined;
   unitSystem: UnitSystem;
 }
 
-export function MoldView3D({ mold, report, fill, levelMm, layerLevelsMm, footprint, unitSystem }: MoldView3DProps) {
+export function MoldView3D({ mold, report, fill, levelMm, layerLevelsMm, footprint, footprintLevelMm, unitSystem }: MoldView3DProps) {
   const descriptionId = useId();
   const stl = useMoldStl(mold.id);
   const lowestMm = report.bboxMm.min[2];
@@ -27,9 +29,9 @@ export function MoldView3D({ mold, report, fill, levelMm, layerLevelsMm, footpri
   const layers =
     layerLevelsMm.length > 2
       ? ` Layer lines at ${layerLevelsMm
-          .slice(1, -1)
+          .slice(1)
           .map((z) => formatLength(z - lowestMm, unitSystem).text)
-          .join(', ')}.`
+          .join(', ')}: the outline on the cavity of each layer's surface.`
       : '';
   const fallback = (
     <div className="flex h-full items-center justify-center">
@@ -51,6 +53,7 @@ export function MoldView3D({ mold, report, fill, levelMm, layerLevelsMm, footpri
                 levelMm={levelMm}
                 layerLevelsMm={layerLevelsMm}
                 footprint={footprint}
+                footprintLevelMm={footprintLevelMm}
                 describedBy={descriptionId}
               />
             </Suspense>

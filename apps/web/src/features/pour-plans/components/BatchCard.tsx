@@ -1,7 +1,7 @@
-import { formatTemperature, formatWeighedMass, type Caution, type ScaleResolutionG, type UnitSystem } from '@gelpoint/core';
+import { formatLength, formatTemperature, formatWeighedMass, type Caution, type ScaleResolutionG, type UnitSystem } from '@gelpoint/core';
 import { useId } from 'react';
 import { mixRatioWords } from '../utils/mix-ratio-words';
-import { formatMinutes } from '../utils/plan-format';
+import { formatHours, formatMinutes } from '../utils/plan-format';
 import type { RunSheetBatch } from '../utils/run-sheet';
 import { CautionList } from './CautionList';
 
@@ -14,7 +14,7 @@ export interface BatchCardProps {
 
 function Amount({ part, grams }: { part: string; grams: string }) {
   return (
-    <div className="flex flex-col rounded-lg border-2 border-walnut-800 px-3 py-2" data-print-border>
+    <div className="run-sheet-amount flex flex-col rounded-lg border-2 border-walnut-800 px-3 py-2" data-print-border>
       <span className="text-sm font-semibold uppercase tracking-wide">{part}</span>
       <span className="text-3xl font-bold tabular-nums">{grams}</span>
     </div>
@@ -49,35 +49,51 @@ export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG }: Bat
         </p>
       </header>
       <p className="text-lg">
-        <strong>{batch.product.name}</strong> · mix ratio {mixRatioWords(batch.product.mixRatio)} · weigh the grams below
+        <strong>{batch.product.name}</strong> · mix ratio {mixRatioWords(batch.product.mixRatio)} ·{' '}
+        <strong>
+          pot life {formatMinutes(batch.potLifeMin)} at {formatTemperature(batch.shopTempC, unitSystem).text}
+        </strong>
       </p>
-      <div className="grid grid-cols-2 gap-2 sm:grid-cols-4">
+      {batch.targetLevelMm !== null || batch.window ? (
+        <p className="text-lg" data-testid="pour-timing">
+          {batch.targetLevelMm !== null ? (
+            <>
+              Fill to <strong>{formatLength(batch.targetLevelMm, unitSystem).text}</strong> above the cavity floor
+            </>
+          ) : null}
+          {batch.targetLevelMm !== null && batch.window ? ' · ' : null}
+          {batch.window ? (
+            <>
+              pour <strong>{formatHours(batch.window.opensH)}</strong> to <strong>{formatHours(batch.window.closesH)}</strong> after {batch.window.afterLabel.toLowerCase()}
+            </>
+          ) : null}
+        </p>
+      ) : null}
+      <div className={batch.pigmentG > 0 ? 'grid grid-cols-2 gap-2 sm:grid-cols-4' : 'grid grid-cols-3 gap-2'}>
         <Amount part="Part A" grams={grams(batch.partAG)} />
         <Amount part="Part B" grams={grams(batch.partBG)} />
-        <Amount part={batch.pigmentName ? `Pigment: ${batch.pigmentName}` : 'Pigment'} grams={batch.pigmentG > 0 ? grams(batch.pigmentG) : 'none'} />
+        {batch.pigmentG > 0 ? <Amount part={batch.pigmentName ? `Pigment: ${batch.pigmentName}` : 'Pigment'} grams={grams(batch.pigmentG)} /> : null}
         <Amount part="Cup total" grams={grams(batch.totalG)} />
       </div>
-      <p className="text-lg font-semibold">
-        pot life {formatMinutes(batch.potLifeMin)} at {formatTemperature(batch.shopTempC, unitSystem).text}
-      </p>
       {batch.offRatioPct !== null ? (
         <p className="font-semibold text-ember-700">
           On a {scaleResolutionG} g scale these grams are {batch.offRatioPct > 0 ? '+' : ''}
           {batch.offRatioPct.toFixed(1)} % off the product&apos;s ratio: weigh on a finer scale if you can.
         </p>
       ) : null}
-      <p className="flex flex-wrap gap-x-6 gap-y-3 text-base">
+      {/* The blanks the apprentice fills in by hand, on one line where the paper is wide enough. */}
+      <p className="flex flex-wrap items-end gap-x-6 gap-y-3 text-base">
         <Blank label="Lot A" />
         <Blank label="Lot B" />
-        <Blank label="Lot pigment" />
-      </p>
-      <p className="flex flex-wrap items-end gap-x-3 gap-y-2 text-base">
-        <input id={mixedId} type="checkbox" className="size-6 accent-walnut-800" />
-        <label htmlFor={mixedId} className="inline-flex min-h-touch min-w-touch items-center font-semibold">
-          Mixed
-        </label>
-        <Blank label="by" />
-        <Blank label="at" />
+        {batch.pigmentG > 0 ? <Blank label="Lot pigment" /> : null}
+        <span className="inline-flex flex-wrap items-end gap-x-3 gap-y-3">
+          <input id={mixedId} type="checkbox" className="size-6 accent-walnut-800" />
+          <label htmlFor={mixedId} className="run-sheet-tick inline-flex min-h-touch min-w-touch items-center font-semibold">
+            Mixed
+          </label>
+          <Blank label="by" />
+          <Blank label="at" />
+        </span>
       </p>
       <CautionList cautions={cautions} label={`Cautions for cup ${batch.order}`} />
     </article>

@@ -7,7 +7,7 @@ import { PlanResult } from './PlanResult';
 const shownMissing = 4;
 
 /** The numbers for the form as it stands, or what is still missing before there can be any. */
-export function LivePlanPanel({ live, unitSystem }: { live: LivePlanState; unitSystem: UnitSystem }) {
+export function LivePlanPanel({ live, unitSystem, currency }: { live: LivePlanState; unitSystem: UnitSystem; currency: string }) {
   const headingId = useId();
   const missing = live.check.ok ? [] : Object.values(live.check.fieldErrors);
   const plan = live.result?.ok ? live.result.value : null;
@@ -42,7 +42,7 @@ export function LivePlanPanel({ live, unitSystem }: { live: LivePlanState; unitS
           {live.result.error.message}
         </Alert>
       ) : null}
-      {plan ? <PlanResult plan={plan.plan} unitSystem={unitSystem} curve={plan.cavity.curve} /> : null}
+      {plan ? <PlanResult plan={plan.plan} unitSystem={unitSystem} currency={currency} curve={plan.cavity.curve} /> : null}
     </section>
   );
 }

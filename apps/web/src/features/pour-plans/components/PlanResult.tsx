@@ -2,13 +2,16 @@ import { formatLength, formatTemperature, formatVolume, formatWeighedMass, type 
 import type { ReactNode } from 'react';
 import { Table, Td, Th, Thead, Tr } from '../../../components/ui/Table';
 import { cautionsFor } from '../utils/caution-words';
-import { formatArea, formatCost, formatHours, formatMinutes } from '../utils/plan-format';
+import { formatMoney } from '../../../lib/money';
+import { formatArea, formatHours, formatMinutes } from '../utils/plan-format';
 import { CautionList } from './CautionList';
 import { LayerChart } from './LayerChart';
 
 export interface PlanResultProps {
   plan: PourPlan;
   unitSystem: UnitSystem;
+  /** The shop's ISO 4217 code: every cost of the plan is in it. */
+  currency: string;
   /** The cavity's own curve, when known, for the drawing; otherwise it runs straight between layer boundaries. */
   curve?: VolumeCurve;
 }
@@ -35,7 +38,7 @@ function Block({ title, children }: { title: string; children: ReactNode }) {
   );
 }
 
-function BatchTable({ caption, batches, plan, unitSystem }: { caption: string; batches: readonly PlannedBatch[]; plan: PourPlan; unitSystem: UnitSystem }) {
+function BatchTable({ caption, batches, plan, unitSystem, currency }: { caption: string; batches: readonly PlannedBatch[]; plan: PourPlan; unitSystem: UnitSystem; currency: string }) {
   const grams = (g: number) => formatWeighedMass(g, unitSystem, plan.resolution.grams).text;
   const millilitres = (ml: number) => formatVolume(ml, unitSystem).text;
   return (
@@ -69,7 +72,7 @@ function BatchTable({ caption, batches, plan, unitSystem }: { caption: string; b
               </Td>
               <Td>{batch.pigment.grams > 0 ? grams(batch.pigment.grams) : 'none'}</Td>
               <Td className="font-semibold">{grams(batch.totalGrams)}</Td>
-              <Td>{formatCost(batch.cost.total)}</Td>
+              <Td>{formatMoney(batch.cost.total, currency)}</Td>
             </Tr>
           );
         })}
@@ -107,7 +110,8 @@ function TimesFacts({ times, unitSystem }: { times: TimesAtTemperature; unitSyst
 }
 
 /** A pour plan's numbers: the same view for the live planner and for a saved plan's stored result. */
-export function PlanResult({ plan, unitSystem, curve }: PlanResultProps) {
+export function PlanResult({ plan, unitSystem, currency, curve }: PlanResultProps) {
+  const money = (amount: number) => formatMoney(amount, currency);
   const volume = (ml: number) => formatVolume(ml, unitSystem).text;
   const length = (mm: number) => formatLength(mm, unitSystem).text;
   const grams = (g: number) => formatWeighedMass(g, unitSystem, plan.resolution.grams).text;
@@ -127,7 +131,7 @@ export function PlanResult({ plan, unitSystem, curve }: PlanResultProps) {
             { term: 'Layers', value: `${plan.fill.layerCount} × ${length(plan.fill.layerThicknessMm)}` },
             { term: 'Cups to mix', value: String(batchCount) },
             { term: 'Resin to weigh out, A + B + pigment', value: grams(totalGrams) },
-            { term: 'Cost of the piece', value: formatCost(plan.cost.piece) },
+            { term: 'Cost of the piece', value: money(plan.cost.piece) },
           ]}
         />
       </Block>
@@ -151,7 +155,7 @@ export function PlanResult({ plan, unitSystem, curve }: PlanResultProps) {
             { term: 'Part A', value: grams(plan.deepPour.totals.partA.grams) },
             { term: 'Part B', value: grams(plan.deepPour.totals.partB.grams) },
             { term: 'Pigment', value: grams(plan.deepPour.totals.pigment.grams) },
-            { term: 'Deep pour cost', value: formatCost(plan.cost.deepPour) },
+            { term: 'Deep pour cost', value: money(plan.cost.deepPour) },
           ]}
         />
       </Block>
@@ -164,11 +168,11 @@ export function PlanResult({ plan, unitSystem, curve }: PlanResultProps) {
               { term: 'Wetted area', value: formatArea(plan.sealCoat.wettedAreaMm2, unitSystem) },
               { term: 'Film', value: `${length(plan.sealCoat.filmThicknessMm)} × absorption ${plan.sealCoat.absorptionFactor}` },
               { term: 'Coats', value: `${plan.sealCoat.coats.length} × ${volume(plan.sealCoat.coats[0]?.volumeMl ?? 0)}` },
-              { term: 'Seal coat cost', value: formatCost(plan.cost.sealCoat) },
+              { term: 'Seal coat cost', value: money(plan.cost.sealCoat) },
             ]}
           />
           {plan.sealCoat.coats.map((coat) => (
-            <BatchTable key={coat.index} caption={`Seal coat ${coat.index + 1}: cups to mix`} batches={coat.batches} plan={plan} unitSystem={unitSystem} />
+            <BatchTable key={coat.index} caption={`Seal coat ${coat.index + 1}: cups to mix`} batches={coat.batches} plan={plan} unitSystem={unitSystem} currency={currency} />
           ))}
         </Block>
       ) : null}
@@ -184,10 +188,10 @@ export function PlanResult({ plan, unitSystem, curve }: PlanResultProps) {
               { term: 'Over-pour', value: volume(layer.overPourMl) },
               { term: 'To pour', value: volume(layer.pourVolumeMl) },
               { term: 'Layer total', value: grams(layer.totals.totalGrams) },
-              { term: 'Layer cost', value: formatCost(layer.cost.total) },
+              { term: 'Layer cost', value: money(layer.cost.total) },
             ]}
           />
-          <BatchTable caption={`Layer ${layer.index + 1}: cups to mix`} batches={layer.batches} plan={plan} unitSystem={unitSystem} />
+          <BatchTable caption={`Layer ${layer.index + 1}: cups to mix`} batches={layer.batches} plan={plan} unitSystem={unitSystem} currency={currency} />
         </Block>
       ))}
 
@@ -205,12 +209,12 @@ export function PlanResult({ plan, unitSystem, curve }: PlanResultProps) {
       <Block title="Cost">
         <Facts
           rows={[
-            { term: 'Seal coat', value: formatCost(plan.cost.sealCoat) },
-            { term: 'Deep pour', value: formatCost(plan.cost.deepPour) },
+            { term: 'Seal coat', value: money(plan.cost.sealCoat) },
+            { term: 'Deep pour', value: money(plan.cost.deepPour) },
             ...(plan.cost.wood
-              ? [{ term: `Wood, ${plan.cost.wood.boardFeet.toFixed(2)} board feet at ${formatCost(plan.cost.wood.pricePerBoardFoot)}`, value: formatCost(plan.cost.wood.shownCost) }]
+              ? [{ term: `Wood, ${plan.cost.wood.boardFeet.toFixed(2)} board feet at ${money(plan.cost.wood.pricePerBoardFoot)}`, value: money(plan.cost.wood.shownCost) }]
               : []),
-            { term: 'Piece', value: formatCost(plan.cost.piece) },
+            { term: 'Piece', value: money(plan.cost.piece) },
           ]}
         />
         <p className="text-sm text-ink-soft">

@@ -29,6 +29,8 @@ export interface PourPlannerProps {
   resinSystems: readonly ResinSystemView[];
   pigments: readonly PigmentView[];
   unitSystem: UnitSystem;
+  /** The shop's ISO 4217 code, for the plan's costs. */
+  currency: string;
   scaleResolutionG: number;
   /** The shop's off-ratio tolerance: cups the scale cannot keep within it are cautioned. */
   offRatioTolerancePct: number;
@@ -54,7 +56,7 @@ function cupWasteUnits(unitSystem: UnitSystem) {
 }
 
 /** The maker's pour planner: inputs on one side, the plan they make on the other, recomputed as they type. */
-export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, unitSystem, scaleResolutionG, offRatioTolerancePct, submitLabel, busy, save }: PourPlannerProps) {
+export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, unitSystem, currency, scaleResolutionG, offRatioTolerancePct, submitLabel, busy, save }: PourPlannerProps) {
   const [formError, setFormError] = useState<string | null>(null);
   // The form is filled once, in the units of the shop as it was then; what it started from lets untouched values go back unchanged.
   const [units] = useState<PlannerUnits>(() => ({ unitSystem, origin: initialValues }));
@@ -278,7 +280,7 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
               <Field label={`Blank thickness (${unit.length})`} error={errors.wood?.thicknessMm?.message} required>
                 {(control) => <Input {...control} inputMode="decimal" {...number('wood.thicknessMm')} />}
               </Field>
-              <Field label="Price per board foot (shop currency)" error={errors.wood?.pricePerBoardFoot?.message} required>
+              <Field label={`Price per board foot (${currency})`} error={errors.wood?.pricePerBoardFoot?.message} required>
                 {(control) => <Input {...control} inputMode="decimal" {...number('wood.pricePerBoardFoot')} />}
               </Field>
             </FieldGrid>
@@ -293,7 +295,7 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
       </form>
       {/* On wide screens the numbers stay in view beside the form and scroll on their own. */}
       <div tabIndex={0} role="region" aria-label="Live numbers of this plan" className="xl:sticky xl:top-4 xl:max-h-[calc(100dvh-2rem)] xl:overflow-y-auto xl:pr-1">
-        <LivePlanPanel live={live} unitSystem={unitSystem} />
+        <LivePlanPanel live={live} unitSystem={unitSystem} currency={currency} />
       </div>
     </div>
   );

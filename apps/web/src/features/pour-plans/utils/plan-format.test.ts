@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatArea, formatCost, formatHours } from './plan-format';
+import { formatArea, formatHours } from './plan-format';
 
 describe('plan formatting', () => {
   it('writes cure times in minutes, hours or days', () => {
@@ -16,9 +16,5 @@ describe('plan formatting', () => {
     expect(formatArea(90_000, 'metric')).toBe('0.090 m²');
     expect(formatArea(92_903.04, 'us')).toBe('1.00 ft²');
     expect(formatArea(929_030.4, 'us')).toBe('10.00 ft²');
-  });
-
-  it('writes money to the cent', () => {
-    expect(formatCost(12.5)).toBe('12.50');
   });
 });

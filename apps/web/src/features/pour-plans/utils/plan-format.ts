@@ -17,11 +17,6 @@ export function formatMinutes(minutes: number): string {
   return `${Math.round(minutes)} min`;
 }
 
-/** Money in the shop's own currency, which Gelpoint does not name. */
-export function formatCost(amount: number): string {
-  return amount.toFixed(2);
-}
-
 /** The wetted area for the seal coat: m² in a metric shop, ft² in a US one. */
 export function formatArea(areaMm2: number, unitSystem: UnitSystem): string {
   if (unitSystem === 'metric') return `${(areaMm2 / 1_000_000).toFixed(3)} m²`;

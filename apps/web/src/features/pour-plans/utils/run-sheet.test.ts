@@ -38,4 +38,38 @@ describe('runSheetBatches', () => {
     // Common practice (Q10 ≈ 2): two degrees below the 22 °C reference the pot life is a little longer, not shorter.
     expect(firstLayer!.potLifeMin).toBeGreaterThan(40);
   });
+
+  // CRC Concise Encyclopedia of Mathematics: a right prism fills evenly, so the tray's 30 mm split into n equal
+  // layers stands at 30·k/n mm from the floor after layer k.
+  it('gives each layer the level its resin stands at, from the cavity floor; seal coats have none', () => {
+    const layers = batches.filter((b) => b.pourLabel.startsWith('Layer'));
+    const count = plan.layers.length;
+    expect(layers.map((b) => b.targetLevelMm)).toEqual(plan.layers.flatMap((layer) => layer.batches.map(() => layer.toLevelMm)));
+    layers.forEach((b) => {
+      const k = Number(b.pourLabel.split(' ')[1]);
+      expect(b.targetLevelMm).toBeCloseTo((30 * k) / count, 9);
+    });
+    expect(batches.filter((b) => b.pourLabel.startsWith('Seal')).every((b) => b.targetLevelMm === null)).toBe(true);
+  });
+
+  it('times each pour from the one before it: coat on coat and the first layer by the seal coat’s window, later layers by the deep pour’s', () => {
+    const [coat1, coat2, layer1, layer2] = batches;
+    const seal = plan.shopTimes.sealCoat!;
+    const deep = plan.shopTimes.deepPour;
+    expect(coat1!.window).toBeNull();
+    expect(coat2!.window).toEqual({ afterLabel: 'Seal coat 1', opensH: seal.nextLayerOpensH, closesH: seal.nextLayerClosesH });
+    expect(layer1!.window).toEqual({ afterLabel: 'Seal coat 2', opensH: seal.nextLayerOpensH, closesH: seal.nextLayerClosesH });
+    expect(layer2!.window).toEqual({ afterLabel: 'Layer 1', opensH: deep.nextLayerOpensH, closesH: deep.nextLayerClosesH });
+    // Arrhenius scaling stretches both ends alike, so the window keeps the data sheet's 10 h : 24 h proportion; and
+    // 2 °C below its 22 °C reference (common practice: Q10 ≈ 2, so about 2^0.2 ≈ 1.15 × longer) it opens after
+    // a little more than the sheet's 10 h.
+    expect(layer2!.window!.closesH / layer2!.window!.opensH).toBeCloseTo(24 / 10, 9);
+    expect(layer2!.window!.opensH).toBeGreaterThan(10.5);
+    expect(layer2!.window!.opensH).toBeLessThan(12.5);
+  });
+
+  it('names no pigment on a cup without one', () => {
+    for (const b of batches) expect(b.pigmentName === null).toBe(b.pigmentG === 0);
+    expect(batches.filter((b) => b.pigmentName === null).length).toBeGreaterThan(0);
+  });
 });

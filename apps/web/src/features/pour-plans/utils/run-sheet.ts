@@ -23,6 +23,13 @@ export interface RunSheetBatch {
   shopTempC: number;
   /** How far the shown grams are from the product's ratio, in percent, when more than the shop allows; else null. */
   offRatioPct: number | null;
+  /** Where the layer's resin stands when it is poured: its top level, measured from the cavity floor (mm); null for a seal coat. */
+  targetLevelMm: number | null;
+  /**
+   * When this pour may go on, counted from the pour before it (the data sheet's recoat window at the shop
+   * temperature); null for the first pour of the plan.
+   */
+  window: { afterLabel: string; opensH: number; closesH: number } | null;
 }
 
 interface Pour {
@@ -32,6 +39,9 @@ interface Pour {
   potLifeMin: number;
   shopTempC: number;
   pigmentName: string | null;
+  targetLevelMm: number | null;
+  /** The window this pour opens for the next one: a seal coat's recoat window before the first layer, the deep pour's between layers. */
+  recoat: { opensH: number; closesH: number };
 }
 
 /**
@@ -43,20 +53,37 @@ export function runSheetBatches(plan: PourPlan, snapshot: PlanSnapshot): RunShee
   const sealTimes = plan.shopTimes.sealCoat;
   if (plan.sealCoat && snapshot.sealCoat && sealTimes) {
     for (const coat of plan.sealCoat.coats) {
-      pours.push({ label: `Seal coat ${coat.index + 1}`, batches: coat.batches, product: snapshot.sealCoat, potLifeMin: sealTimes.potLifeMin, shopTempC: sealTimes.tempC, pigmentName: null });
+      pours.push({
+        label: `Seal coat ${coat.index + 1}`,
+        batches: coat.batches,
+        product: snapshot.sealCoat,
+        potLifeMin: sealTimes.potLifeMin,
+        shopTempC: sealTimes.tempC,
+        pigmentName: null,
+        targetLevelMm: null,
+        recoat: { opensH: sealTimes.nextLayerOpensH, closesH: sealTimes.nextLayerClosesH },
+      });
     }
   }
+  const deep = plan.shopTimes.deepPour;
   for (const layer of plan.layers) {
     pours.push({
       label: `Layer ${layer.index + 1}`,
       batches: layer.batches,
       product: snapshot.deepPour,
-      potLifeMin: plan.shopTimes.deepPour.potLifeMin,
-      shopTempC: plan.shopTimes.deepPour.tempC,
+      potLifeMin: deep.potLifeMin,
+      shopTempC: deep.tempC,
       pigmentName: plan.deepPour.pigmentName,
+      targetLevelMm: layer.toLevelMm,
+      recoat: { opensH: deep.nextLayerOpensH, closesH: deep.nextLayerClosesH },
     });
   }
-  const rows = pours.flatMap((pour) =>
+  // Each pour waits on the one before it, within that one's recoat window.
+  const windowOf = (i: number): RunSheetBatch['window'] => {
+    const before = pours[i - 1];
+    return before ? { afterLabel: before.label, opensH: before.recoat.opensH, closesH: before.recoat.closesH } : null;
+  };
+  const rows = pours.flatMap((pour, p) =>
     pour.batches.map((batch, b) => ({
       index: batch.index,
       row: {
@@ -72,6 +99,8 @@ export function runSheetBatches(plan: PourPlan, snapshot: PlanSnapshot): RunShee
         potLifeMin: pour.potLifeMin,
         shopTempC: pour.shopTempC,
         offRatioPct: Math.abs(batch.ratioErrorPct) > plan.resolution.offRatioTolerancePct ? batch.ratioErrorPct : null,
+        targetLevelMm: pour.targetLevelMm,
+        window: windowOf(p),
       },
     })),
   );

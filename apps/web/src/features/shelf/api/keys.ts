@@ -16,4 +16,5 @@ export const shelfKeys = {
   lotLists: () => [...shelfKeys.lots(), 'list'] as const,
   lotList: (query: LotListQuery) => [...shelfKeys.lotLists(), query] as const,
   lot: (lotId: string) => [...shelfKeys.lots(), 'detail', lotId] as const,
+  lotUses: (lotId: string, page: number) => [...shelfKeys.lot(lotId), 'uses', page] as const,
 };

@@ -1,9 +1,10 @@
 import type { PigmentView } from '@gelpoint/contracts';
 import { formatMass, type UnitSystem } from '@gelpoint/core';
 import { pigmentKindWords } from '../utils/shelf-words';
+import { formatMoney } from '../../../lib/money';
 import { DataSheet } from './DataSheet';
 
-export function PigmentSheet({ pigment: p, unitSystem }: { pigment: PigmentView; unitSystem: UnitSystem }) {
+export function PigmentSheet({ pigment: p, unitSystem, currency }: { pigment: PigmentView; unitSystem: UnitSystem; currency: string }) {
   return (
     <DataSheet
       groups={[
@@ -16,7 +17,7 @@ export function PigmentSheet({ pigment: p, unitSystem }: { pigment: PigmentView;
             { term: 'Maximum', value: `${p.maxPct} % of part A + part B by mass` },
           ],
         },
-        { title: 'Price', rows: [{ term: 'Pack', value: `${p.pricePerPack.toFixed(2)} for ${formatMass(p.packSizeG, unitSystem).text}` }] },
+        { title: 'Price', rows: [{ term: 'Pack', value: `${formatMoney(p.pricePerPack, currency)} for ${formatMass(p.packSizeG, unitSystem).text}` }] },
       ]}
     />
   );

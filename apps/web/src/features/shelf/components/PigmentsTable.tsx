@@ -7,15 +7,18 @@ import type { SortState } from '../utils/table-sort';
 import { pigmentKindWords } from '../utils/shelf-words';
 import { ArchivedMark } from './ArchivedMark';
 import { SortableTh } from './SortableTh';
+import { formatMoney } from '../../../lib/money';
 
 export interface PigmentsTableProps {
   pigments: readonly PigmentView[];
   unitSystem: UnitSystem;
+  /** The shop's ISO 4217 code: prices are in it. */
+  currency: string;
   sort: SortState | undefined;
   onSort: (key: PigmentSort) => void;
 }
 
-export function PigmentsTable({ pigments, unitSystem, sort, onSort }: PigmentsTableProps) {
+export function PigmentsTable({ pigments, unitSystem, currency, sort, onSort }: PigmentsTableProps) {
   const header = { sort, onSort };
   return (
     <Table caption="Pigments on the shelf">
@@ -51,7 +54,7 @@ export function PigmentsTable({ pigments, unitSystem, sort, onSort }: PigmentsTa
             <Td>{pigment.recommendedPct} % of part A + part B by mass</Td>
             <Td>{pigment.maxPct} % of part A + part B by mass</Td>
             <Td>
-              {pigment.pricePerPack.toFixed(2)} for {formatMass(pigment.packSizeG, unitSystem).text}
+              {formatMoney(pigment.pricePerPack, currency)} for {formatMass(pigment.packSizeG, unitSystem).text}
             </Td>
           </Tr>
         ))}

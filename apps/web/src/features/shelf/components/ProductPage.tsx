@@ -22,8 +22,8 @@ export interface ProductPageProps {
   saved: boolean;
   cardClassName: string;
   form: ReactNode;
-  shop: UseQueryResult<{ unitSystem: UnitSystem }>;
-  sheet: (unitSystem: UnitSystem) => ReactNode;
+  shop: UseQueryResult<{ unitSystem: UnitSystem; currency: string }>;
+  sheet: (unitSystem: UnitSystem, currency: string) => ReactNode;
   backHref: string;
 }
 
@@ -58,7 +58,7 @@ export function ProductPage({ product, kind, description, mayKeep, archive, save
         </Card>
       ) : (
         <QueryResult query={shop} loadingLabel="Loading the shop's units…">
-          {(s) => sheet(s.unitSystem)}
+          {(s) => sheet(s.unitSystem, s.currency)}
         </QueryResult>
       )}
       <p className="mt-6">

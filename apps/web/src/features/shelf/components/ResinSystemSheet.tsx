@@ -1,9 +1,10 @@
 import type { ResinSystemView } from '@gelpoint/contracts';
 import { formatLength, formatMass, formatTemperature, type UnitSystem } from '@gelpoint/core';
 import { mixRatioText, resinUseWords } from '../utils/shelf-words';
+import { formatMoney } from '../../../lib/money';
 import { DataSheet } from './DataSheet';
 
-export function ResinSystemSheet({ resinSystem: r, unitSystem }: { resinSystem: ResinSystemView; unitSystem: UnitSystem }) {
+export function ResinSystemSheet({ resinSystem: r, unitSystem, currency }: { resinSystem: ResinSystemView; unitSystem: UnitSystem; currency: string }) {
   const temp = (tempC: number) => formatTemperature(tempC, unitSystem).text;
   return (
     <DataSheet
@@ -51,7 +52,7 @@ export function ResinSystemSheet({ resinSystem: r, unitSystem }: { resinSystem: 
         },
         {
           title: 'Price',
-          rows: [{ term: 'Kit', value: `${r.pricePerKit.toFixed(2)} for ${formatMass(r.kitSizeG, unitSystem).text}` }],
+          rows: [{ term: 'Kit', value: `${formatMoney(r.pricePerKit, currency)} for ${formatMass(r.kitSizeG, unitSystem).text}` }],
         },
       ]}
     />

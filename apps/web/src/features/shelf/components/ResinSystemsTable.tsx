@@ -7,15 +7,18 @@ import type { SortState } from '../utils/table-sort';
 import { mixRatioText, resinUseWords } from '../utils/shelf-words';
 import { ArchivedMark } from './ArchivedMark';
 import { SortableTh } from './SortableTh';
+import { formatMoney } from '../../../lib/money';
 
 export interface ResinSystemsTableProps {
   resinSystems: readonly ResinSystemView[];
   unitSystem: UnitSystem;
+  /** The shop's ISO 4217 code: prices are in it. */
+  currency: string;
   sort: SortState | undefined;
   onSort: (key: ResinSystemSort) => void;
 }
 
-export function ResinSystemsTable({ resinSystems, unitSystem, sort, onSort }: ResinSystemsTableProps) {
+export function ResinSystemsTable({ resinSystems, unitSystem, currency, sort, onSort }: ResinSystemsTableProps) {
   const header = { sort, onSort };
   return (
     <Table caption="Resin systems on the shelf">
@@ -60,7 +63,7 @@ export function ResinSystemsTable({ resinSystems, unitSystem, sort, onSort }: Re
             <Td>{formatLength(product.maxLayerMm, unitSystem).text}</Td>
             <Td>{formatMass(product.maxBatchG, unitSystem).text}</Td>
             <Td>
-              {product.pricePerKit.toFixed(2)} for {formatMass(product.kitSizeG, unitSystem).text}
+              {formatMoney(product.pricePerKit, currency)} for {formatMass(product.kitSizeG, unitSystem).text}
             </Td>
           </Tr>
         ))}

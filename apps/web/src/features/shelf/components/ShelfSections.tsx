@@ -18,6 +18,8 @@ import { ShelfPager } from './ShelfPager';
 export interface ShelfSectionProps {
   filters: ShelfFilters;
   unitSystem: UnitSystem;
+  /** The shop's ISO 4217 code, for prices. */
+  currency: string;
   mayKeep: boolean;
 }
 
@@ -55,7 +57,7 @@ function Empty({ filtered, title, addHref, addLabel, mayKeep, children }: { filt
   );
 }
 
-export function ResinSystemsSection({ filters, unitSystem, mayKeep }: ShelfSectionProps) {
+export function ResinSystemsSection({ filters, unitSystem, currency, mayKeep }: ShelfSectionProps) {
   const list = useResinSystems(resinSystemListQuery(filters));
   const { onSort, hrefFor } = useSortAndPages(filters);
   const filtered = Boolean(filters.q || filters.includeArchived);
@@ -69,7 +71,7 @@ export function ResinSystemsSection({ filters, unitSystem, mayKeep }: ShelfSecti
         ) : (
           <>
             <Count total={page.total} one="resin system" many="resin systems" filtered={filtered} />
-            <ResinSystemsTable resinSystems={page.items} unitSystem={unitSystem} sort={filters.sort} onSort={onSort} />
+            <ResinSystemsTable resinSystems={page.items} unitSystem={unitSystem} currency={currency} sort={filters.sort} onSort={onSort} />
             <ShelfPager page={filters.page} total={page.total} what="resin systems" hrefFor={hrefFor} />
           </>
         )
@@ -78,7 +80,7 @@ export function ResinSystemsSection({ filters, unitSystem, mayKeep }: ShelfSecti
   );
 }
 
-export function PigmentsSection({ filters, unitSystem, mayKeep }: ShelfSectionProps) {
+export function PigmentsSection({ filters, unitSystem, currency, mayKeep }: ShelfSectionProps) {
   const list = usePigments(pigmentListQuery(filters));
   const { onSort, hrefFor } = useSortAndPages(filters);
   const filtered = Boolean(filters.q || filters.includeArchived);
@@ -92,7 +94,7 @@ export function PigmentsSection({ filters, unitSystem, mayKeep }: ShelfSectionPr
         ) : (
           <>
             <Count total={page.total} one="pigment" many="pigments" filtered={filtered} />
-            <PigmentsTable pigments={page.items} unitSystem={unitSystem} sort={filters.sort} onSort={onSort} />
+            <PigmentsTable pigments={page.items} unitSystem={unitSystem} currency={currency} sort={filters.sort} onSort={onSort} />
             <ShelfPager page={filters.page} total={page.total} what="pigments" hrefFor={hrefFor} />
           </>
         )

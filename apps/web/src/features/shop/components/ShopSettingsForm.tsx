@@ -1,7 +1,7 @@
 import { ScaleResolutionG, ShopTemperatureProfile, UpdateShopRequest, type Shop } from '@gelpoint/contracts';
 import { convertTemperature } from '@gelpoint/core';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { Alert } from '../../../components/ui/Alert';
@@ -14,6 +14,7 @@ import { Select } from '../../../components/ui/Select';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { requiredNumber } from '../../../lib/form-input';
 import { useUpdateShop } from '../api/update-shop';
+import { currencyOptions } from '../utils/currency-options';
 
 /** A typed number read as core reads every number, then checked by the contract's own rule and sentence. */
 const typedNumber = <T extends z.ZodType<number, number>>(rule: T, missing: string) => z.string().trim().min(1, { message: missing }).transform(requiredNumber).pipe(rule);
@@ -60,6 +61,7 @@ const fieldNames = [
   'offRatioTolerancePct',
   'readingCarryH',
   'windowCloseLeadMin',
+  'currency',
   'timeZone',
   'dayStartHour',
   'quietFromHour',
@@ -82,6 +84,7 @@ const formValuesOf = (shop: Shop): SettingsInput => {
     offRatioTolerancePct: String(shop.offRatioTolerancePct),
     readingCarryH: String(shop.readingCarryH),
     windowCloseLeadMin: String(shop.windowCloseLeadMin),
+    currency: shop.currency,
     timeZone: shop.timeZone,
     dayStartHour: String(shop.dayStartHour),
     quietFromHour: String(shop.quietFromHour),
@@ -124,6 +127,7 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
     defaultValues: formValuesOf(shop),
   });
   const update = useUpdateShop({ onSuccess: onSaved });
+  const currencies = useMemo(() => currencyOptions(shop.currency), [shop.currency]);
   const { errors, isDirty } = form.formState;
   const [profileMode, unitSystem] = useWatch({ control: form.control, name: ['profileMode', 'unitSystem'] });
   const tempUnit = unitSystem === 'us' ? '°F' : '°C';
@@ -205,6 +209,9 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
         required
       >
         {(control) => <Input {...control} inputMode="numeric" {...form.register('windowCloseLeadMin')} />}
+      </Field>
+      <Field label="Currency" hint="Prices on the shelf and the costs of pour plans and run sheets are in this currency." error={errors.currency?.message} required>
+        {(control) => <Select {...control} options={currencies} {...form.register('currency')} />}
       </Field>
       <div>
         <Button type="submit" busy={update.isPending} busyLabel="Saving…">

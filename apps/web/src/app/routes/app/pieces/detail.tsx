@@ -59,6 +59,9 @@ export function Component() {
                 <ButtonLink variant="secondary" to={paths.pourPlans.getHref({ pieceId: current.id })}>
                   Pour plans
                 </ButtonLink>
+                <ButtonLink variant="secondary" to={paths.pieceRecord.getHref(current.id)}>
+                  Cure record
+                </ButtonLink>
                 {mayEdit ? (
                   <>
                     <ButtonLink variant="secondary" to={paths.newMould.getHref({ pieceId: current.id })}>

@@ -77,7 +77,7 @@ export function Component() {
               The saved plan
             </h2>
             <p className="text-ink-soft">These are the numbers the server worked out and stored when the plan was saved.</p>
-            <PlanResult plan={saved.value.plan} unitSystem={shop.data.unitSystem} />
+            <PlanResult plan={saved.value.plan} unitSystem={shop.data.unitSystem} currency={shop.data.currency} />
           </section>
           <Card title="Shelf values it was made with">
             <SnapshotDetails snapshot={saved.value.snapshot} unitSystem={shop.data.unitSystem} />

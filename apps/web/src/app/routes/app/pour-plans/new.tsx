@@ -70,6 +70,7 @@ export function Component() {
         resinSystems={resinSystems.data.items}
         pigments={pigments.data.items}
         unitSystem={shop.data.unitSystem}
+        currency={shop.data.currency}
         scaleResolutionG={shop.data.scaleResolutionG}
         offRatioTolerancePct={shop.data.offRatioTolerancePct}
         submitLabel="Save pour plan"

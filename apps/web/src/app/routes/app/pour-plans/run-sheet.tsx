@@ -36,11 +36,11 @@ export function Component() {
         </Alert>
       );
     }
-    return <RunSheet planName={plan.data.name} pieceName={piece.data?.name ?? 'Piece'} plan={saved.value.plan} snapshot={saved.value.snapshot} unitSystem={shop.data.unitSystem} />;
+    return <RunSheet planName={plan.data.name} pieceName={piece.data?.name ?? 'Piece'} plan={saved.value.plan} snapshot={saved.value.snapshot} unitSystem={shop.data.unitSystem} currency={shop.data.currency} />;
   };
 
   return (
-    <div className="min-h-dvh bg-white text-ink">
+    <div className="min-h-dvh bg-white text-ink print:min-h-0">
       <DocumentTitle title={plan.data ? `Run sheet · ${plan.data.name}` : 'Run sheet'} />
       <div className="mx-auto flex max-w-4xl flex-col gap-4 px-4 py-6 print:max-w-none print:p-0">
         <nav aria-label="Run sheet" className="flex flex-wrap items-center justify-between gap-3 print:hidden">

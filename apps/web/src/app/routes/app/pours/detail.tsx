@@ -14,6 +14,7 @@ import { pourQueryOptions, usePour } from '../../../../features/pours/api/get-po
 import { shopUnitsQueryOptions, useShopUnits } from '../../../../features/pours/api/get-shop-units';
 import { CureLog } from '../../../../features/pours/components/CureLog';
 import { MachinedForm } from '../../../../features/pours/components/MachinedForm';
+import { PourDownloads } from '../../../../features/pours/components/PourDownloads';
 import { ReleaseButton } from '../../../../features/pours/components/ReleaseButton';
 import { RunSheet } from '../../../../features/pours/components/RunSheet';
 import { pourStatusWords } from '../../../../features/pours/utils/cure-words';
@@ -67,6 +68,8 @@ export function Component() {
             <TextLink to="#cure-log">Cure log</TextLink>
             <TextLink to={paths.pourPlan.getHref(current.pourPlanId)}>The pour plan</TextLink>
             <TextLink to={paths.piece.getHref(current.piece.id)}>The piece</TextLink>
+            <TextLink to={paths.pieceRecord.getHref(current.piece.id)}>Cure record to print</TextLink>
+            <PourDownloads pourId={current.id} />
           </nav>
           {current.status === 'released' ? (
             <Alert tone="success" live="none" className="mb-6" title="Released for machining">

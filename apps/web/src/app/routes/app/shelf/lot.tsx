@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { Card } from '../../../../components/ui/Card';
 import { DocumentTitle } from '../../../../components/ui/DocumentTitle';
 import { PageHeader } from '../../../../components/ui/PageHeader';
@@ -7,10 +7,12 @@ import { QueryResult } from '../../../../components/ui/QueryResult';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { lotQueryOptions, useLot } from '../../../../features/shelf/api/get-lot';
+import { lotUsesQueryOptions } from '../../../../features/shelf/api/get-lot-uses';
 import { useUpdateLot } from '../../../../features/shelf/api/update-lot';
 import { DeleteLotButton } from '../../../../features/shelf/components/DeleteLotButton';
 import { LotEditForm } from '../../../../features/shelf/components/LotEditForm';
 import { LotSheet } from '../../../../features/shelf/components/LotSheet';
+import { LotUses } from '../../../../features/shelf/components/LotUses';
 import { LotStateMark } from '../../../../features/shelf/components/LotStateMark';
 import { lotStateOf } from '../../../../features/shelf/utils/lot-status';
 import { mayKeepShelf } from '../../../../features/shelf/utils/shelf-access';
@@ -20,12 +22,19 @@ import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 import { readId } from './read-id';
 
+/** The page of batches shown: a whole number from 1, whatever the address says. */
+function usesPageOf(search: URLSearchParams): number {
+  const page = Number(search.get('page'));
+  return Number.isInteger(page) && page >= 1 && page <= 100_000 ? page : 1;
+}
+
 export const createLoader =
   (queryClient: QueryClient) =>
   async ({ params, request }: LoaderFunctionArgs) => {
     await requireSession(queryClient, request);
     const id = readId(params, 'lotId', 'lot');
-    await Promise.all([queryClient.ensureQueryData(lotQueryOptions(id)), queryClient.ensureQueryData(shopQueryOptions())]);
+    const page = usesPageOf(new URL(request.url).searchParams);
+    await Promise.all([queryClient.ensureQueryData(lotQueryOptions(id)), queryClient.ensureQueryData(shopQueryOptions()), queryClient.ensureQueryData(lotUsesQueryOptions(id, page))]);
     return null;
   };
 
@@ -34,6 +43,8 @@ export function Component() {
   const session = useSignedInSession();
   const navigate = useNavigate();
   const lot = useLot(id);
+  const [search] = useSearchParams();
+  const usesPage = usesPageOf(search);
   const shop = useShop();
   const update = useUpdateLot();
   const mayKeep = mayKeepShelf(session.role);
@@ -55,7 +66,12 @@ export function Component() {
             actions={mayKeep ? <DeleteLotButton lot={current} onDeleted={() => navigate(backToLots, { replace: true })} /> : null}
           />
           <QueryResult query={shop} loadingLabel="Loading the shop's units…">
-            {(s) => <LotSheet lot={current} unitSystem={s.unitSystem} />}
+            {(s) => (
+              <>
+                <LotSheet lot={current} unitSystem={s.unitSystem} />
+                <LotUses lotId={current.id} lotNumber={current.lotNumber} unitSystem={s.unitSystem} page={usesPage} hrefFor={(page) => paths.lot.getHref(current.id, { page })} />
+              </>
+            )}
           </QueryResult>
           {mayKeep ? (
             <Card title="Correct this lot" className="mt-6 max-w-3xl">

@@ -74,7 +74,7 @@ export function Component() {
       <ShelfSearchForm key={`${filters.tab}|${filters.q ?? ''}|${filters.status ?? ''}|${filters.part ?? ''}|${String(filters.includeArchived)}`} filters={filters} />
       <QueryResult query={shop} loadingLabel="Loading the shop's units…">
         {(current) => {
-          const props = { filters, unitSystem: current.unitSystem, mayKeep };
+          const props = { filters, unitSystem: current.unitSystem, currency: current.currency, mayKeep };
           if (filters.tab === 'lots') return <LotsSection {...props} />;
           if (filters.tab === 'pigments') return <PigmentsSection {...props} />;
           return <ResinSystemsSection {...props} />;

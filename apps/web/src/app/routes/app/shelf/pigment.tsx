@@ -56,7 +56,7 @@ export function Component() {
             />
           }
           shop={shop}
-          sheet={(unitSystem) => <PigmentSheet pigment={current} unitSystem={unitSystem} />}
+          sheet={(unitSystem, currency) => <PigmentSheet pigment={current} unitSystem={unitSystem} currency={currency} />}
           backHref={paths.shelf.getHref({ tab: 'pigments' })}
         />
       )}

@@ -61,7 +61,7 @@ export function Component() {
             />
           }
           shop={shop}
-          sheet={(unitSystem) => <ResinSystemSheet resinSystem={current} unitSystem={unitSystem} />}
+          sheet={(unitSystem, currency) => <ResinSystemSheet resinSystem={current} unitSystem={unitSystem} currency={currency} />}
           backHref={paths.shelf.getHref()}
         />
       )}

@@ -1,0 +1,23 @@
+import { LotUse, Page } from '@gelpoint/contracts';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { shelfKeys } from './keys';
+
+const LotUses = Page(LotUse);
+export type LotUses = ReturnType<typeof LotUses.parse>;
+
+export const lotUsesPageSize = 50;
+
+export function getLotUses(lotId: string, page: number, signal?: AbortSignal): Promise<LotUses> {
+  return api.get(`/shelf/lots/${encodeURIComponent(lotId)}/uses`, LotUses, { query: { limit: lotUsesPageSize, offset: (page - 1) * lotUsesPageSize }, ...(signal ? { signal } : {}) });
+}
+
+export const lotUsesQueryOptions = (lotId: string, page: number) =>
+  queryOptions({
+    queryKey: shelfKeys.lotUses(lotId, page),
+    queryFn: ({ signal }) => getLotUses(lotId, page, signal),
+  });
+
+export function useLotUses(lotId: string, page: number) {
+  return useQuery(lotUsesQueryOptions(lotId, page));
+}
