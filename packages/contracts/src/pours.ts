@@ -146,6 +146,7 @@ export const ReminderView = z.object({
   dueAt: Timestamp.describe('when the reminder goes out'),
   eventAt: Timestamp.describe('the moment of the step it announces'),
   leadMin: z.number().int().describe('minutes between the reminder and its step (closing windows)'),
+  viaDigest: z.boolean().describe("due in the shop's quiet hours: it goes out with the morning digest, not on its own"),
   status: z.enum(['pending', 'sent', 'cancelled']),
   assumed: z.boolean(),
   title: z.string(),

@@ -29,5 +29,7 @@ export * from './cure-model';
 export * from './finish-coats';
 export * from './mold-cavity';
 export * from './pour-cure';
+export * from './quiet-hours';
+export * from './shop-time';
 export * from './release-evidence';
 export * from './log-guards';

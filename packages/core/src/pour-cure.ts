@@ -116,7 +116,7 @@ function at(stage: StageTiming | undefined, now: Date): { eventAt: Date; assumed
 /** Closing windows are announced this long before they close unless the shop says otherwise. */
 export const defaultWindowCloseLeadMin = 30;
 
-const closingKinds: ReadonlySet<CureReminderKind> = new Set(['seal_coat_window_closes', 'next_layer_window_closes']);
+export const closingReminderKinds: ReadonlySet<string> = new Set(['seal_coat_window_closes', 'next_layer_window_closes']);
 
 /** The reminders a pour should have now, from its cure state (and its finish coats once machined). */
 export function wantedReminders(
@@ -135,7 +135,7 @@ export function wantedReminders(
     const add = (kind: CureReminderKind, stageKey: StageTiming['key'], title: string) => {
       const when = at(find(stageKey), now);
       if (!when) return;
-      const lead = closingKinds.has(kind) ? leadMin : 0;
+      const lead = closingReminderKinds.has(kind) ? leadMin : 0;
       const dueAt = new Date(when.eventAt.getTime() - lead * 60_000);
       out.push({ kind, step: step.key, dueAt, eventAt: when.eventAt, leadMin: lead, assumed: when.assumed || assumedHistory, title });
     };

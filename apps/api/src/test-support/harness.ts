@@ -70,6 +70,9 @@ export async function linkTokenFor(ds: DataSource, to: string, path: 'invitation
 export async function createShop(h: Harness, name = 'Test shop'): Promise<ShopFixture> {
   const res = await h.http().post('/api/auth/register').send({ shopName: name, name: 'Lead Person', email: uniqueEmail('lead'), password: PASSWORD }).expect(201);
   const lead = res.body as SessionResponse;
+  // Tests run at any hour of the day: a shop made here has no quiet hours, so each reminder keeps its own time.
+  // The quiet-hours tests set them.
+  await h.ds.query('UPDATE shops SET quiet_from_hour = day_start_hour WHERE id = $1', [lead.shop.id]);
   return {
     shopId: lead.shop.id,
     lead,

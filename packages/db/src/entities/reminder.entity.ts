@@ -37,6 +37,8 @@ export class Reminder {
   @Column({ name: 'done_at', type: 'timestamptz', nullable: true }) doneAt!: Date | null;
   @Column({ name: 'done_by_id', type: 'uuid', nullable: true }) doneById!: string | null;
   @Column({ name: 'done_how', type: 'text', nullable: true }) doneHow!: 'logged' | 'marked' | null;
+  /** Falls in the shop's quiet hours: it goes out with the morning digest, not on its own. */
+  @Column({ name: 'via_digest', type: 'boolean', default: false }) viaDigest!: boolean;
   /** Who gets it when not the pour's own list (a release goes to the maker and the leads). */
   @Column({ name: 'recipient_user_ids', type: 'uuid', array: true, nullable: true }) recipientUserIds!: string[] | null;
   @ManyToOne(() => Pour, { onDelete: 'CASCADE' })

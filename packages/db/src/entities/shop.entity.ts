@@ -36,6 +36,8 @@ export class Shop {
   @Column({ name: 'day_start_hour', type: 'integer', default: 7 }) dayStartHour!: number;
   /** Local hour quiet hours start: reminders falling after it wait for the morning digest. */
   @Column({ name: 'quiet_from_hour', type: 'integer', default: 21 }) quietFromHour!: number;
+  /** The shop's local date of the last morning digest sent, so each day has one (null before the first). */
+  @Column({ name: 'digest_on', type: 'date', nullable: true }) digestOn!: string | null;
   /** ISO 4217 code every cost of the shop is in; the API checks it against the codes the runtime knows. */
   @Column({ type: 'text', default: 'USD' }) currency!: string;
   /** sha256 of the token a shop thermometer sends with its readings. */

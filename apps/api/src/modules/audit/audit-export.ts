@@ -2,6 +2,7 @@ import type { Response } from 'express';
 import type { DataSource } from 'typeorm';
 import { stringify } from 'csv-stringify/sync';
 import { auditText } from '@gelpoint/contracts';
+import { formatIsoInstant, shopLocalDate } from '@gelpoint/core';
 import { auditQuery, olderThan, pageOf, type AuditFilters } from './audit-query';
 import { namedEvents } from './audit-names';
 
@@ -17,6 +18,8 @@ export const csvRows = (rows: readonly (readonly unknown[])[]) => stringify(rows
  * long history holds no more than one chunk in memory.
  */
 export async function writeAuditCsv(ds: DataSource, shopId: string, filters: AuditFilters, res: Response): Promise<void> {
+  // Times are ISO 8601 with the shop's own offset, the file named for the shop's date.
+  const zone = ((await ds.query('SELECT time_zone FROM shops WHERE id = $1', [shopId])) as { time_zone: string }[])[0]?.time_zone ?? 'UTC';
   const chunk = async (cursor: { before: string; beforeId: string } | null) => {
     const qb = auditQuery(ds, shopId, filters);
     if (cursor) olderThan(qb, cursor.before, cursor.beforeId);
@@ -27,7 +30,7 @@ export async function writeAuditCsv(ds: DataSource, shopId: string, filters: Aud
   let next = await chunk(null);
   res.status(200);
   res.setHeader('Content-Type', 'text/csv; charset=utf-8');
-  res.setHeader('Content-Disposition', `attachment; filename="gelpoint-audit-${new Date().toISOString().slice(0, 10)}.csv"`);
+  res.setHeader('Content-Disposition', `attachment; filename="gelpoint-audit-${shopLocalDate(Date.now(), zone)}.csv"`);
   res.write(csvRows([auditCsvColumns]));
   for (;;) {
     const { page, events } = next;
@@ -35,7 +38,7 @@ export async function writeAuditCsv(ds: DataSource, shopId: string, filters: Aud
       res.write(
         csvRows(
           events.map((e) => [
-            e.at,
+            formatIsoInstant(Date.parse(e.at), zone),
             e.actor?.name ?? '',
             auditText({ action: e.action, objectType: e.objectType, objectName: e.objectName, detail: e.detail, actorName: e.actor?.name ?? null }),
             e.action,

@@ -1,5 +1,5 @@
 import { In, type DataSource } from 'typeorm';
-import ical, { ICalCalendarMethod } from 'ical-generator';
+import ical, { ICalAlarmType, ICalCalendarMethod } from 'ical-generator';
 import { Piece, Pour, PourPlan, Reminder } from '@gelpoint/db';
 import { notFound } from '../../http/errors';
 import { pourStateOf } from '../pours/pour-cure-state';
@@ -63,7 +63,7 @@ export class CalendarFeeds {
       const piece = pieces.get(pour.pieceId)!;
       const link = `${this.publicUrl}/pours/${pour.id}`;
       for (const r of reminders.filter((x) => x.pourId === pour.id && x.status !== 'cancelled' && x.doneAt === null && x.eventAt >= now)) {
-        calendar.createEvent({
+        const event = calendar.createEvent({
           id: `reminder-${r.id}@gelpoint`,
           start: r.eventAt,
           end: new Date(r.eventAt.getTime() + 15 * 60_000),
@@ -71,6 +71,9 @@ export class CalendarFeeds {
           description: `${piece.name}: ${r.title}.${r.assumed ? ' The time rests partly on the assumed shop temperature.' : ''} Open the pour: ${link}`,
           url: link,
         });
+        // A closing window rings on the phone as far ahead as the shop's reminder goes out (the evening before for
+        // one that closes in the night).
+        if (r.leadMin > 0) event.createAlarm({ type: ICalAlarmType.display, trigger: r.leadMin * 60, description: r.title });
       }
       const l = loadedOf(pour, plans.get(pour.pourPlanId)!, piece);
       const log = (readings.get(pour.id) ?? []).map((x) => ({ at: x.taken_at.toISOString(), tempC: x.temp_c }));

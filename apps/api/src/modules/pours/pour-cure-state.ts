@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import { cureState, plannedBatches, planSteps, releaseEvidence, wantedReminders, type AssumedTemperature, type CureReading, type CureState, type ReleaseEvidence } from '@gelpoint/core';
-import { checksOf, cureSettingsOf, liveReadingsOf, loggedStepsOf, type CureSettings, type LoadedPour, type LoggedStep } from './pour-queries';
+import { checksOf, cureSettingsOf, liveReadingsOf, loggedStepsOf, shopHoursOf, type CureSettings, type LoadedPour, type LoggedStep } from './pour-queries';
 import { syncReminders } from './pour-reminders';
 import { assumedTemperatureOf } from './shop-temperature-of';
 
@@ -44,6 +44,8 @@ export async function refreshReminders(m: EntityManager, l: LoadedPour, now: Dat
     m,
     l.pour.shopId,
     l.pour.id,
+    shopHoursOf(settings),
+    now,
     wanted.map((w) => ({ ...w, done: w.kind === 'demold_check' && demolded })),
   );
 }

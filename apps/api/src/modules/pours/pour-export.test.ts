@@ -11,6 +11,7 @@ const readCsv = (text: string) => parse(text, { columns: true, cast: true, cast_
 describe('a pour as CSV', () => {
   it('writes every batch with its units in the column names, and the numbers read back equal the pour’s JSON', async () => {
     const w = await loggedPour(h, 'csvbatches');
+    await h.ds.query(`UPDATE shops SET time_zone = 'America/Vancouver' WHERE id = $1`, [w.shop.shopId]);
     const res = await h.http().get(`/api/pours/${w.pourId}/batches.csv`).set(bearer(w.apprentice)).buffer(true).expect(200);
     expect(res.headers['content-type']).toMatch(/^text\/csv/);
     expect(res.headers['content-disposition']).toBe('attachment; filename="tray-csvbatches-batches.csv"');
@@ -29,9 +30,11 @@ describe('a pour as CSV', () => {
       for (const key of ['targetAG', 'targetBG', 'targetPigmentG', 'weighedAG', 'weighedBG', 'weighedPigmentG', 'offRatioPct', 'ambientTempC', 'surfaceTempC', 'rhPct', 'dewPointC'] as const) {
         expect(row[key], `${key} of cup ${i + 1}`).toBe(batch[key]);
       }
-      expect(row.mixedAt).toBe(batch.mixedAt);
-      // ISO 8601 in UTC, to the millisecond.
-      expect(row.mixedAt).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/);
+      // ISO 8601 with the shop's offset (Vancouver: −08:00 in winter, −07:00 in summer, IANA tz), the same instant as the JSON's.
+      expect(row.mixedAt).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{3})?-0[78]:00$/);
+      expect(Date.parse(String(row.mixedAt))).toBe(Date.parse(batch.mixedAt as string));
+      const localHour = new Intl.DateTimeFormat('en-GB', { timeZone: 'America/Vancouver', hour: '2-digit', hourCycle: 'h23' }).format(new Date(batch.mixedAt as string));
+      expect(String(row.mixedAt).slice(11, 13)).toBe(localHour);
       expect(row).toMatchObject({ step: batch.step, mixedBy: (batch.mixedBy as { name: string }).name, lotA: 'csvbatches-A-1', lotB: 'csvbatches-B-1', lotPigment: 'csvbatches-P-1', voided: 'false' });
     }
     // The weighed grams are the ones logged, decimals and all.
@@ -48,7 +51,8 @@ describe('a pour as CSV', () => {
     expect(res.text.split('\r\n')[0]).toBe('takenAt,tempC,source,voided');
     const rows = readCsv(res.text);
     const pour = (await h.http().get(`/api/pours/${w.pourId}`).set(bearer(w.shop.lead)).expect(200)).body;
-    expect(rows.map((r) => ({ at: r.takenAt, tempC: r.tempC, source: r.source }))).toEqual(pour.readings);
+    const logged = (pour.readings as { at: string; tempC: number; source: string }[]).map((r) => ({ at: Date.parse(r.at), tempC: r.tempC, source: r.source }));
+    expect(rows.map((r) => ({ at: Date.parse(String(r.takenAt)), tempC: r.tempC, source: r.source }))).toEqual(logged);
     expect(rows.map((r) => r.tempC)).toEqual(w.readings.map((r) => r.tempC));
     expect(rows.map((r) => Date.parse(String(r.takenAt)))).toEqual(w.readings.map((r) => Date.parse(r.at)));
   });

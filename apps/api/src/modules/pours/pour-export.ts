@@ -1,8 +1,9 @@
 import type { DataSource } from 'typeorm';
+import { formatIsoInstant } from '@gelpoint/core';
 import { stringify } from 'csv-stringify/sync';
 import { notFound } from '../../http/errors';
 
-/** Columns of the batch log, units in their names; times are ISO 8601 instants in UTC. */
+/** Columns of the batch log, units in their names; times are ISO 8601 with the shop's UTC offset (2026-12-03T09:15:00-08:00). */
 export const batchCsvColumns = [
   'cup',
   'step',
@@ -76,15 +77,19 @@ export function exportFileName(pieceName: string, what: 'batches' | 'readings'):
   return `${slug || 'pour'}-${what}.csv`;
 }
 
-async function pieceNameOf(ds: DataSource, shopId: string, pourId: string): Promise<string> {
-  const rows: { name: string }[] = await ds.query('SELECT pc.name FROM pours p JOIN pieces pc ON pc.id = p.piece_id WHERE p.id = $1 AND p.shop_id = $2', [pourId, shopId]);
+/** The piece's name, and the shop's zone: times in the files are ISO 8601 with the shop's own offset. */
+async function pieceOf(ds: DataSource, shopId: string, pourId: string): Promise<{ name: string; zone: string }> {
+  const rows: { name: string; time_zone: string }[] = await ds.query(
+    'SELECT pc.name, s.time_zone FROM pours p JOIN pieces pc ON pc.id = p.piece_id JOIN shops s ON s.id = p.shop_id WHERE p.id = $1 AND p.shop_id = $2',
+    [pourId, shopId],
+  );
   if (!rows[0]) throw notFound('pour');
-  return rows[0].name;
+  return { name: rows[0].name, zone: rows[0].time_zone };
 }
 
 /** Every batch of a pour as CSV, in run-sheet order; a voided batch stays in the file, marked. */
 export async function batchesCsv(ds: DataSource, shopId: string, pourId: string): Promise<{ fileName: string; text: string }> {
-  const pieceName = await pieceNameOf(ds, shopId, pourId);
+  const piece = await pieceOf(ds, shopId, pourId);
   const rows: BatchRow[] = await ds.query(
     `SELECT b.id, b.plan_batch_index, b.step, b.mixed_at, u.name AS mixed_by, b.lot_a_number, b.lot_b_number, b.lot_pigment_number,
             b.target_a_g, b.target_b_g, b.target_pigment_g, b.weighed_a_g, b.weighed_b_g, b.weighed_pigment_g, b.off_ratio_pct,
@@ -100,7 +105,7 @@ export async function batchesCsv(ds: DataSource, shopId: string, pourId: string)
     rows.map((b) => [
       b.plan_batch_index + 1,
       b.step,
-      b.mixed_at.toISOString(),
+      formatIsoInstant(b.mixed_at.getTime(), piece.zone),
       b.mixed_by ?? '',
       b.lot_a_number,
       b.lot_b_number,
@@ -122,12 +127,12 @@ export async function batchesCsv(ds: DataSource, shopId: string, pourId: string)
       b.id,
     ]),
   );
-  return { fileName: exportFileName(pieceName, 'batches'), text };
+  return { fileName: exportFileName(piece.name, 'batches'), text };
 }
 
 /** Every temperature reading of a pour as CSV, oldest first. */
 export async function readingsCsv(ds: DataSource, shopId: string, pourId: string): Promise<{ fileName: string; text: string }> {
-  const pieceName = await pieceNameOf(ds, shopId, pourId);
+  const piece = await pieceOf(ds, shopId, pourId);
   const rows: ReadingRow[] = await ds.query(
     `SELECT r.taken_at, r.temp_c, r.source,
             r.voided_at IS NOT NULL AS voided
@@ -138,7 +143,7 @@ export async function readingsCsv(ds: DataSource, shopId: string, pourId: string
   );
   const text = csv(
     readingCsvColumns,
-    rows.map((r) => [r.taken_at.toISOString(), r.temp_c, r.source, r.voided ? 'true' : 'false']),
+    rows.map((r) => [formatIsoInstant(r.taken_at.getTime(), piece.zone), r.temp_c, r.source, r.voided ? 'true' : 'false']),
   );
-  return { fileName: exportFileName(pieceName, 'readings'), text };
+  return { fileName: exportFileName(piece.name, 'readings'), text };
 }

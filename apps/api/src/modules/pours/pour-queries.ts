@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import type { CureReading, PlanSnapshot, PourPlan as CorePourPlan, ReleaseCheck } from '@gelpoint/core';
+import type { CureReading, PlanSnapshot, PourPlan as CorePourPlan, ReleaseCheck, ShopHours } from '@gelpoint/core';
 import { Piece, Pour, PourPlan, Shop } from '@gelpoint/db';
 import { notFound } from '../../http/errors';
 
@@ -13,7 +13,12 @@ export interface LoadedPour {
 }
 
 /** The shop settings the cure model, the reminders and the guards follow. */
-export type CureSettings = Pick<Shop, 'readingCarryH' | 'windowCloseLeadMin' | 'offRatioTolerancePct'>;
+export type CureSettings = Pick<Shop, 'readingCarryH' | 'windowCloseLeadMin' | 'offRatioTolerancePct' | 'timeZone' | 'dayStartHour' | 'quietFromHour'>;
+
+/** The shop's clock as quiet hours read it. */
+export function shopHoursOf(s: Pick<Shop, 'timeZone' | 'dayStartHour' | 'quietFromHour'>): ShopHours {
+  return { zone: s.timeZone, dayStartHour: s.dayStartHour, quietFromHour: s.quietFromHour };
+}
 
 export interface LoggedStep {
   step: string;
@@ -33,7 +38,7 @@ export async function loadPour(m: EntityManager, shopId: string, id: string, loc
 }
 
 export async function cureSettingsOf(m: EntityManager, shopId: string): Promise<CureSettings> {
-  return m.findOneOrFail(Shop, { where: { id: shopId }, select: { id: true, readingCarryH: true, windowCloseLeadMin: true, offRatioTolerancePct: true } });
+  return m.findOneOrFail(Shop, { where: { id: shopId }, select: { id: true, readingCarryH: true, windowCloseLeadMin: true, offRatioTolerancePct: true, timeZone: true, dayStartHour: true, quietFromHour: true } });
 }
 
 /** The readings the cure counts (voided ones left out), in time order. */

@@ -40,7 +40,7 @@ export function cureView(state: CureState, release: ReleaseEvidence): z.infer<ty
   };
 }
 
-type ReminderRow = Pick<Reminder, 'id' | 'kind' | 'step' | 'dueAt' | 'eventAt' | 'leadMin' | 'status' | 'assumed' | 'title' | 'sentAt' | 'doneAt' | 'doneById' | 'doneHow'>;
+type ReminderRow = Pick<Reminder, 'id' | 'kind' | 'step' | 'dueAt' | 'eventAt' | 'leadMin' | 'viaDigest' | 'status' | 'assumed' | 'title' | 'sentAt' | 'doneAt' | 'doneById' | 'doneHow'>;
 
 export const reminderView = (r: ReminderRow, names: Names = new Map()): ReminderView => ({
   id: r.id,
@@ -50,6 +50,7 @@ export const reminderView = (r: ReminderRow, names: Names = new Map()): Reminder
   dueAt: r.dueAt.toISOString(),
   eventAt: r.eventAt.toISOString(),
   leadMin: r.leadMin,
+  viaDigest: r.viaDigest,
   status: r.status,
   assumed: r.assumed,
   title: r.title,

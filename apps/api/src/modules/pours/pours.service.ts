@@ -8,7 +8,7 @@ import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { UploadQuota } from '../uploads/upload-quota';
 import { loadPourState, pourStateOf, refreshReminders, type PourState } from './pour-cure-state';
-import { cureSettingsOf, groupByPour, loadedOf, loadPour, makerAndLeadsOf, type LoadedPour } from './pour-queries';
+import { cureSettingsOf, groupByPour, loadedOf, loadPour, makerAndLeadsOf, shopHoursOf, type LoadedPour } from './pour-queries';
 import { markReminderDone, queueNotice } from './pour-reminders';
 import { shopTemperatureFor } from './shop-temperature-of';
 import { batchView, cureView, flagsOf, namesOf, readingView, reminderView, type Names } from './pour-view';
@@ -204,7 +204,7 @@ export class Pours {
       l.pour.status = 'released';
       await refreshReminders(m, l, now);
       const recipients = await makerAndLeadsOf(m, auth.shopId, l.plan.createdById);
-      await queueNotice(m, auth.shopId, pourId, 'piece_released', `Released for machining: ${l.piece.name} (by ${auth.userName})`, recipients, now);
+      await queueNotice(m, auth.shopId, pourId, shopHoursOf(await cureSettingsOf(m, auth.shopId)), 'piece_released', `Released for machining: ${l.piece.name} (by ${auth.userName})`, recipients, now);
       await recordAudit(m, {
         shopId: auth.shopId,
         actor: auth,
@@ -229,7 +229,7 @@ export class Pours {
       await refreshReminders(m, l, now);
       const recipients = await makerAndLeadsOf(m, auth.shopId, l.plan.createdById);
       const coats = input.finishCoats > 0 ? `; ${input.finishCoats} finish coat${input.finishCoats === 1 ? '' : 's'} to go` : '';
-      await queueNotice(m, auth.shopId, pourId, 'piece_machined', `Machined: ${l.piece.name} (by ${auth.userName})${coats}`, recipients, now);
+      await queueNotice(m, auth.shopId, pourId, shopHoursOf(await cureSettingsOf(m, auth.shopId)), 'piece_machined', `Machined: ${l.piece.name} (by ${auth.userName})${coats}`, recipients, now);
       await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'pour.machined', objectType: 'pour', objectId: pourId, detail: { ...input } });
     });
     return this.get(auth.shopId, pourId);

@@ -60,7 +60,7 @@ export async function createInvitation(ds: DataSource, s: InvitationSettings, au
     const inv = await m.save(
       m.create(Invitation, { shopId: auth.shopId, email: input.email, role: input.role, tokenHash: tokenHash(token), invitedById: auth.userId, expiresAt, acceptedAt: null, revokedAt: null }),
     );
-    const mail = invitationMail({ shopName: shop.name, inviterName: auth.userName, role: input.role, link: `${s.publicUrl}/invitations/${token}`, expiresAt });
+    const mail = invitationMail({ shopName: shop.name, inviterName: auth.userName, role: input.role, link: `${s.publicUrl}/invitations/${token}`, expiresAt, timeZone: shop.timeZone });
     await queueMail(m, { shopId: auth.shopId, dedupeKey: `invitation:${inv.id}`, to: input.email, ...mail }, s.mailDomain);
     await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'invitation.create', objectType: 'invitation', objectId: inv.id, detail: { email: input.email, role: input.role } });
     inv.invitedBy = await m.findOneBy(User, { id: auth.userId });

@@ -76,7 +76,7 @@ describe('cure progress on the board', () => {
 
   it('takes the next reminder first, and the next predicted stage without one', () => {
     const cure = cureAt10CFor24h();
-    const reminder = { id: '00000000-0000-4000-8000-000000000001', kind: 'demold_check' as const, done: null, step: 'layer:1', dueAt: '2026-03-05T00:00:00Z', eventAt: '2026-03-05T00:00:00Z', leadMin: 0, status: 'pending' as const, assumed: true, title: 'Demold check', sentAt: null };
+    const reminder = { id: '00000000-0000-4000-8000-000000000001', kind: 'demold_check' as const, done: null, step: 'layer:1', dueAt: '2026-03-05T00:00:00Z', eventAt: '2026-03-05T00:00:00Z', leadMin: 0, viaDigest: false, status: 'pending' as const, assumed: true, title: 'Demold check', sentAt: null };
     expect(nextEvent(cure, reminder, 'open')).toEqual({ source: 'reminder', title: 'Demold check', at: reminder.dueAt, assumed: true });
     const next = nextEvent(cure, null, 'open');
     expect(next?.source).toBe('stage');
