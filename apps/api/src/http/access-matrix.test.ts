@@ -79,6 +79,8 @@ const table: Record<string, Rule> = {
   'POST /api/auth/logout': { allowed: 'member' },
   'POST /api/auth/logout-everywhere': { allowed: 'member' },
   'GET /api/me': { allowed: 'member' },
+  'POST /api/me/calendar/rotate': { allowed: 'member' },
+  'GET /api/calendar/:token': { allowed: 'public' },
   'POST /api/auth/switch-shop': { allowed: 'member', body: (w) => ({ shopId: w.own.shopId }) },
   'POST /api/auth/password-reset': { allowed: 'public' },
   'POST /api/auth/password-reset/confirm': { allowed: 'public' },

@@ -91,7 +91,7 @@ describe('tenant isolation', () => {
     for (const route of h.app.registry.routes) {
       if (!route.fullPath.includes('/:')) continue;
       const key = routeKey(route);
-      // Invitation links are bearer capabilities, not shop objects: whoever holds the token may use it.
+      // Invitation links and calendar feeds are bearer capabilities, not shop objects: whoever holds the token may use it.
       if (route.access === 'public') {
         expect(route.fullPath, key).toMatch(/\/:token(\/|$)/);
         continue;

@@ -34,6 +34,8 @@ export interface StockedShop {
   /** A password-reset token of the maker (never of the lead, whose session the tests keep using). */
   resetToken: string;
   ingestToken: string;
+  /** The last segment of the lead's calendar feed URL (token.ics). */
+  calendarFeed: string;
 }
 
 /** The smallest valid PNG header: enough for the photo check, which reads the magic number. */
@@ -91,6 +93,7 @@ export async function stockShop(h: Harness, marker: string): Promise<StockedShop
   await http().post('/api/auth/password-reset').send({ email: maker.user.email }).expect(202);
   const spareLead = (await http().post('/api/auth/login').send({ email: lead.user.email, password: PASSWORD, shopId: shop.shopId }).expect(200)).body as SessionResponse;
   const ingestToken = (await http().post('/api/shop/ingest-token').set(bearer(lead)).expect(201)).body.token as string;
+  const calendarFeed = ((await http().get('/api/me').set(bearer(lead)).expect(200)).body.calendarUrl as string).split('/').pop()!;
 
   return {
     marker,
@@ -103,6 +106,7 @@ export async function stockShop(h: Harness, marker: string): Promise<StockedShop
     invitationToken: await linkTokenFor(h.ds, invitationEmail, 'invitations'),
     resetToken: await linkTokenFor(h.ds, maker.user.email, 'reset-password'),
     ingestToken,
+    calendarFeed,
   };
 }
 
@@ -133,7 +137,7 @@ export function pathParams(path: string, shop: StockedShop): Record<string, stri
     if (!seg.startsWith(':')) return;
     const name = seg.slice(1);
     if (name === 'token') {
-      params[name] = shop.invitationToken;
+      params[name] = path.startsWith('/api/calendar/') ? shop.calendarFeed : shop.invitationToken;
       return;
     }
     const kind = ID_BY_SEGMENT[segments[i - 1] ?? ''];

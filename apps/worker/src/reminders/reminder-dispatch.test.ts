@@ -59,3 +59,25 @@ describe('reminder dispatch', () => {
     for (const r of status) expect(r.status).toBe(r.id === f.later ? 'pending' : 'sent');
   });
 });
+
+describe('reminder mail', () => {
+  it('writes the step’s time in the shop’s zone with its abbreviation, and says why a night window comes the evening before', async () => {
+    const one = async (sql: string, params: unknown[]) => ((await ds.query(sql, params)) as { id: string }[])[0]!.id;
+    const shop = await one(`INSERT INTO shops (name, time_zone, day_start_hour, quiet_from_hour) VALUES ('Pacific shop', 'America/Vancouver', 7, 21) RETURNING id`, []);
+    const user = await one(`INSERT INTO users (email, name, password_hash) VALUES ($1, 'Ana', 'x') RETURNING id`, [`ana-${randomUUID().slice(0, 8)}@example.test`]);
+    await ds.query(`INSERT INTO memberships (user_id, shop_id, role, status) VALUES ($1, $2, 'maker', 'active')`, [user, shop]);
+    const piece = await one(`INSERT INTO pieces (shop_id, name) VALUES ($1, 'Cedar slab') RETURNING id`, [shop]);
+    const plan = await one(`INSERT INTO pour_plans (shop_id, piece_id, name, inputs, product_snapshot, result) VALUES ($1, $2, 'Fill', '{}', '{}', '{}') RETURNING id`, [shop, piece]);
+    const pour = await one(`INSERT INTO pours (shop_id, piece_id, pour_plan_id, assumed_temp_c, notify_user_ids) VALUES ($1, $2, $3, 21, $4) RETURNING id`, [shop, piece, plan, [user]]);
+    // Closes 02:00 PST on 4 December 2026 (10:00Z); announced as quiet hours began, 21:00 PST (05:00Z), 5 h ahead.
+    const id = await one(
+      `INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, event_at, lead_min, title) VALUES ($1, $2, 'next_layer_window_closes', 'layer:1', '2026-12-04T05:00:00Z', '2026-12-04T10:00:00Z', 300, 'Next layer window closes: Cedar slab, layer 1') RETURNING id`,
+      [shop, pour],
+    );
+    await dispatchDueReminders(ds, 'http://127.0.0.1:8080', logger);
+    const mail: { body_text: string }[] = await ds.query(`SELECT body_text FROM outbound_mail WHERE dedupe_key = $1`, [`reminder:${id}:${user}`]);
+    expect(mail[0]!.body_text).toContain('Closes: Fri 4 Dec 2026, 02:00 PST, 5 h after this reminder was due: pour before then.');
+    expect(mail[0]!.body_text).toContain('quiet hours, so this reminder comes the evening before');
+    expect(mail[0]!.body_text).not.toMatch(/GMT|UTC/);
+  });
+});

@@ -6,21 +6,22 @@ import { recordAudit } from '../audit/audit.service';
 import { rotateCalendarToken } from './calendar-token';
 import type { CalendarFeeds } from './calendar.service';
 
-const FeedParams = z.object({ feed: z.string().max(200) });
+// The feed's token is its key, like an invitation's: a bearer capability in the path.
+const FeedParams = z.object({ token: z.string().max(200) });
 const CalendarUrl = z.object({ calendarUrl: z.string() });
 
 export function calendarRoutes(api: RouteRegistry, ds: DataSource, feeds: CalendarFeeds, settings: { jwtSecret: string; publicUrl: string }): void {
   api.add(
     {
       method: 'get',
-      path: '/calendar/:feed',
+      path: '/calendar/:token',
       tag: 'calendar',
       summary: "A member's private calendar feed (text/calendar, RFC 5545): the shop's coming pour steps. The URL is the key; no sign-in.",
       access: 'public',
       params: FeedParams,
     },
     async ({ params, res }) => {
-      const token = params.feed.replace(/\.ics$/i, '');
+      const token = params.token.replace(/\.ics$/i, '');
       if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) throw new AppError('not_found', 'not_found', 'no such calendar feed; the link may have been replaced');
       const text = await feeds.feed(token);
       res.setHeader('Content-Type', 'text/calendar; charset=utf-8');
