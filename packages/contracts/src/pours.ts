@@ -129,6 +129,9 @@ export const CureView = z.object({
   spans: z
     .array(z.object({ from: Timestamp, to: Timestamp, source: z.enum(['logged', 'carried', 'gap', 'assumed']), tempC: z.number(), startTempC: z.number(), endTempC: z.number(), belowMinimum: z.boolean() }))
     .describe('the history the cure sum ran over'),
+  ahead: z
+    .array(z.object({ from: Timestamp, to: Timestamp, tempC: z.number() }))
+    .describe("the temperatures the forecast runs on from now until the last stage ahead (the shop's day and night, or what it learned)"),
   readyToMachine: z.boolean().describe('the logged cure (gaps counted conservatively) has reached the data sheet’s point'),
   release: z
     .object({ allowed: z.boolean(), reasons: z.array(z.string()).describe('what still stands in the way, in words') })

@@ -30,6 +30,7 @@ export * from './finish-coats';
 export * from './mold-cavity';
 export * from './pour-cure';
 export * from './quiet-hours';
+export * from './forecast-track';
 export * from './shop-time';
 export * from './release-evidence';
 export * from './log-guards';

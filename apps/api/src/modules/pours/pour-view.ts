@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import type { CureState, ReleaseEvidence } from '@gelpoint/core';
+import { forecastTrack, type CureState, type ReleaseEvidence } from '@gelpoint/core';
 import type { PourBatch, Reminder, TemperatureReading } from '@gelpoint/db';
 import type { BatchView, CureView, PourSummary, ReadingView, ReminderView } from '@gelpoint/contracts';
 import type { z } from 'zod';
@@ -16,7 +16,7 @@ export async function namesOf(m: EntityManager, ids: (string | null | undefined)
 
 const ref = (names: Names, id: string | null) => (id && names.has(id) ? { id, name: names.get(id)! } : null);
 
-export function cureView(state: CureState, release: ReleaseEvidence): z.infer<typeof CureView> {
+export function cureView(state: CureState, release: ReleaseEvidence, asOf: Date): z.infer<typeof CureView> {
   const s = state.status;
   return {
     step: state.step?.key ?? null,
@@ -33,6 +33,7 @@ export function cureView(state: CureState, release: ReleaseEvidence): z.infer<ty
     readingCarryH: s?.age.readingCarryH ?? 0,
     gaps: s?.age.gaps ?? [],
     spans: s?.age.spans.map((x) => ({ from: x.from, to: x.to, source: x.source, tempC: x.tempC, startTempC: x.startTempC, endTempC: x.endTempC, belowMinimum: x.belowMinimum })) ?? [],
+    ahead: s ? forecastTrack(s.ahead, s.stages, asOf.getTime()).map((p) => ({ from: new Date(p.fromMs).toISOString(), to: new Date(p.toMs).toISOString(), tempC: p.tempC })) : [],
     readyToMachine: Boolean(state.isLastStep && s?.stages.find((x) => x.key === 'ready_to_machine')?.reached),
     release,
     stages: s?.stages.map((x) => ({ key: x.key, equivalentHoursAtRef: x.equivalentHoursAtRef, reached: x.reached, reachedAt: x.reachedAt, predictedAt: x.predictedAt })) ?? [],

@@ -36,7 +36,7 @@ export class Pours {
       startedAt: l.pour.createdAt.toISOString(),
       batchesLogged,
       batchesPlanned,
-      cure: cureView(state, release),
+      cure: cureView(state, release, this.now()),
       nextReminder: next ? reminderView(next, names) : null,
       flags,
     };

@@ -18,6 +18,15 @@ import { ReadingsCsvForm } from './ReadingsCsvForm';
 import { ReadingsTable } from './ReadingsTable';
 import { TemperaturePlotView } from './TemperaturePlotView';
 
+/** What the forecast ahead runs on, from the shop's temperature profile. */
+function forecastWords(shop: Shop, temp: (c: number) => string): string {
+  const p = shop.temperatureProfile;
+  const hour = (h: number) => `${String(h).padStart(2, '0')}:00`;
+  if (p.mode === 'day_night') return `forecast: ${temp(p.dayTempC)} from ${hour(p.dayStartHour)}, ${temp(p.nightTempC)} from ${hour(p.nightStartHour)} (the shop's day and night)`;
+  if (p.mode === 'learned') return "forecast: each hour as the shop's readings of the last 7 days showed it";
+  return "forecast: the plan's shop temperature";
+}
+
 /** Where the cure stands and what it rests on: temperatures, milestones, checks and reminders. */
 export function CureLog({ pour, sheet, shop, viewer }: { pour: PourView; sheet: RunSheet; shop: Shop; viewer: { userId: string; role: Role } }) {
   const now = useNow(60_000);
@@ -31,6 +40,8 @@ export function CureLog({ pour, sheet, shop, viewer }: { pour: PourView; sheet: 
     readingCarryH: shop.readingCarryH,
     product,
     unitSystem: shop.unitSystem,
+    history: cure.spans,
+    ahead: pour.status === 'open' ? cure.ahead : [],
   });
   const step = stepWords(cure.step);
   // The next-layer window matters only while a later seal coat or layer is still to come.
@@ -60,7 +71,7 @@ export function CureLog({ pour, sheet, shop, viewer }: { pour: PourView; sheet: 
       <Card title="Temperatures">
         <div className="flex flex-col gap-5">
           {plot ? (
-            <TemperaturePlotView plot={plot} minimumLabel={`minimum ${temp(product.minWorkTempC)}`} />
+            <TemperaturePlotView plot={plot} minimumLabel={`minimum ${temp(product.minWorkTempC)}`} forecastLabel={forecastWords(shop, temp)} />
           ) : (
             <p className="text-ink-soft">No readings yet. Log the shop temperature now and then, or import a logger’s CSV.</p>
           )}

@@ -112,6 +112,7 @@ function PourSection({ entry, number, shop, scale }: { entry: PieceRecordPour; n
     product,
     unitSystem: shop.unitSystem,
     frame: recordPlotFrame,
+    history: pour.cure.spans,
   });
   const t = record.temperatures;
   return (

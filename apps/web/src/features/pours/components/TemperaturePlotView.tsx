@@ -7,7 +7,7 @@ import type { TemperaturePlot } from '../utils/temperature-plot';
  * short while around it, and dashed, shaded stretches where no reading is near (a gap in the log, or nothing logged
  * yet) at the temperature they were counted at. The product's minimum working temperature is a line of its own.
  */
-export function TemperaturePlotView({ plot, minimumLabel }: { plot: TemperaturePlot; minimumLabel: string }) {
+export function TemperaturePlotView({ plot, minimumLabel, forecastLabel }: { plot: TemperaturePlot; minimumLabel: string; forecastLabel?: string }) {
   const titleId = useId();
   const descId = useId();
   const { frame } = plot;
@@ -16,6 +16,8 @@ export function TemperaturePlotView({ plot, minimumLabel }: { plot: TemperatureP
   const from = new Date(plot.fromMs).toISOString();
   const to = new Date(plot.toMs).toISOString();
   const t = (v: number) => `${v.toFixed(0)} ${plot.unit}`;
+  const coolest = plot.forecast.length > 0 ? Math.min(...plot.forecast.map((f) => f.temp)) : null;
+  const warmest = plot.forecast.length > 0 ? Math.max(...plot.forecast.map((f) => f.temp)) : null;
   return (
     <figure className="flex flex-col gap-2">
       <svg
@@ -28,6 +30,7 @@ export function TemperaturePlotView({ plot, minimumLabel }: { plot: TemperatureP
         <title id={titleId}>Temperature log</title>
         <desc id={descId}>
           {`${plot.dots.length} readings from ${formatDateTime(from)} to ${formatDateTime(to)}; ${plot.spans.filter((s) => s.source === 'gap').length} gaps in the log; ${plot.spans.filter((s) => s.source === 'assumed').length} stretches with nothing logged; minimum working temperature ${t(plot.minimum.temp)}.`}
+          {coolest !== null && warmest !== null ? ` Forecast ahead between ${t(coolest)} and ${t(warmest)}.` : ''}
         </desc>
         {plot.yTicks.map((tick) => (
           <g key={tick.value}>
@@ -55,6 +58,23 @@ export function TemperaturePlotView({ plot, minimumLabel }: { plot: TemperatureP
         {readingSpans.map((span) => (
           <line key={`r-${span.from}`} x1={span.x1} x2={span.x2} y1={span.y1} y2={span.y2} className={span.belowMinimum ? 'stroke-ember-600' : 'stroke-resin-600'} strokeWidth={3} />
         ))}
+        {plot.forecast.map((f, i) => {
+          const next = plot.forecast[i + 1];
+          return (
+            <g key={`f-${f.from}`}>
+              <line x1={f.x1} x2={f.x2} y1={f.y} y2={f.y} className="stroke-resin-500" strokeWidth={3} strokeDasharray="1 5" strokeLinecap="round" />
+              {next ? <line x1={f.x2} x2={f.x2} y1={f.y} y2={next.y} className="stroke-resin-500" strokeWidth={1.5} strokeDasharray="1 4" /> : null}
+            </g>
+          );
+        })}
+        {plot.nowX !== null ? (
+          <g>
+            <line x1={plot.nowX} x2={plot.nowX} y1={frame.top} y2={frame.height - frame.bottom} className="stroke-ink-soft" strokeWidth={1} strokeDasharray="4 3" />
+            <text x={plot.nowX + 4} y={frame.height - frame.bottom - 6} className="fill-ink-soft text-[11px]">
+              now
+            </text>
+          </g>
+        ) : null}
         {plot.pouredX !== null ? (
           <g>
             <line x1={plot.pouredX} x2={plot.pouredX} y1={frame.top} y2={frame.height - frame.bottom} className="stroke-walnut-800" strokeWidth={1.5} />
@@ -97,6 +117,14 @@ export function TemperaturePlotView({ plot, minimumLabel }: { plot: TemperatureP
           </svg>
           {minimumLabel}
         </span>
+        {plot.forecast.length > 0 ? (
+          <span className="flex items-center gap-1.5">
+            <svg aria-hidden="true" viewBox="0 0 24 8" className="h-2 w-6">
+              <line x1="1" x2="23" y1="4" y2="4" className="stroke-resin-500" strokeWidth="3" strokeDasharray="1 5" strokeLinecap="round" />
+            </svg>
+            {forecastLabel ?? 'forecast ahead'}
+          </span>
+        ) : null}
       </figcaption>
     </figure>
   );

@@ -1,4 +1,4 @@
-import { cureStatus } from '@gelpoint/core';
+import { cureStatus, forecastTrack } from '@gelpoint/core';
 import { describe, expect, it } from 'vitest';
 import type { Cure } from '../types';
 import { assumedSpan, nextEvent, progressPercent, stageMarkers } from './cure-progress';
@@ -31,6 +31,7 @@ function cureAt10CFor24h(): Cure {
     readingCarryH: s.age.readingCarryH,
     gaps: s.age.gaps,
     spans: s.age.spans.map((x) => ({ from: x.from, to: x.to, source: x.source, tempC: x.tempC, startTempC: x.startTempC, endTempC: x.endTempC, belowMinimum: x.belowMinimum })),
+    ahead: forecastTrack(s.ahead, s.stages, Date.parse('2026-03-02T00:00:00Z')).map((p) => ({ from: new Date(p.fromMs).toISOString(), to: new Date(p.toMs).toISOString(), tempC: p.tempC })),
     readyToMachine: false,
     release: { allowed: false, reasons: ['Not ready yet.'] },
     stages: s.stages,

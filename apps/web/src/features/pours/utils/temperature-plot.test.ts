@@ -110,4 +110,52 @@ describe('temperaturePlot', () => {
   it('has nothing to plot with neither readings nor a pour', () => {
     expect(temperaturePlot({ readings: [], pouredAt: null, asOf: '2026-03-01T03:00:00Z', assumedTempC: 19, readingCarryH: 2, product, unitSystem: 'metric', frame })).toBeNull();
   });
+
+  it('draws the forecast ahead as steps, the night dip lower on the plot, with now marked where it starts', () => {
+    const plot = temperaturePlot({
+      readings: [{ at: '2026-03-01T00:00:00Z', tempC: 20 }],
+      pouredAt: '2026-03-01T00:00:00Z',
+      asOf: '2026-03-01T06:00:00Z',
+      assumedTempC: 20,
+      readingCarryH: 2,
+      product,
+      unitSystem: 'metric',
+      frame,
+      ahead: [
+        { from: '2026-03-01T06:00:00Z', to: '2026-03-01T12:00:00Z', tempC: 20 },
+        { from: '2026-03-01T12:00:00Z', to: '2026-03-01T18:00:00Z', tempC: 12 },
+      ],
+    })!;
+    // From 00:00 to 18:00 over 540 units: 06:00 is at 40 + 540/3 = 220, 12:00 at 400, 18:00 at 580.
+    expect(plot.nowX).toBeCloseTo(220, 9);
+    expect(plot.forecast.map((f) => [f.x1, f.x2])).toEqual([
+      [expect.closeTo(220, 9), expect.closeTo(400, 9)],
+      [expect.closeTo(400, 9), expect.closeTo(580, 9)],
+    ]);
+    // 12, 16 and 20 °C on 5 °C steps: 10 to 20 °C over 200 units; 12 °C sits at 20 + (20 − 12)/10·200 = 180.
+    expect(plot.forecast[1]!.y).toBeCloseTo(180, 9);
+    expect(plot.forecast[1]!.y).toBeGreaterThan(plot.forecast[0]!.y);
+  });
+
+  it('draws the history as the server counted it when given, cut at the moment it is drawn for', () => {
+    const plot = temperaturePlot({
+      readings: [],
+      pouredAt: '2026-03-01T00:00:00Z',
+      asOf: '2026-03-01T10:00:00Z',
+      assumedTempC: 20,
+      readingCarryH: 2,
+      product,
+      unitSystem: 'metric',
+      frame,
+      history: [
+        { from: '2026-03-01T00:00:00Z', to: '2026-03-01T08:00:00Z', source: 'assumed', tempC: 20, startTempC: 20, endTempC: 20, belowMinimum: false },
+        { from: '2026-03-01T08:00:00Z', to: '2026-03-01T14:00:00Z', source: 'assumed', tempC: 14, startTempC: 14, endTempC: 14, belowMinimum: true },
+      ],
+    })!;
+    expect(plot.spans.map((s) => [s.from, s.temp])).toEqual([
+      ['2026-03-01T00:00:00Z', 20],
+      ['2026-03-01T08:00:00Z', 14],
+    ]);
+    expect(plot.toMs).toBe(Date.parse('2026-03-01T10:00:00Z'));
+  });
 });

@@ -39,7 +39,22 @@ export interface TemperaturePlot {
   minimum: { y: number; temp: number };
   /** Where the cure clock starts, when a cup has been logged. */
   pouredX: number | null;
+  /** The forecast ahead, a step per stretch of the shop's assumed temperature (its night dip shows here). */
+  forecast: { from: string; to: string; x1: number; x2: number; y: number; temp: number }[];
+  /** Where now is, when a forecast follows it. */
+  nowX: number | null;
   yTicks: { y: number; value: number }[];
+}
+
+/** A stretch of the history as the server's cure sum ran it (the shop's own profile in the unlogged parts). */
+export interface HistorySpan {
+  from: string;
+  to: string;
+  source: CureSpanSource;
+  tempC: number;
+  startTempC: number;
+  endTempC: number;
+  belowMinimum: boolean;
 }
 
 export interface TemperaturePlotInput {
@@ -53,6 +68,10 @@ export interface TemperaturePlotInput {
   product: { referenceTempC: number; minWorkTempC: number; activationEnergyKJPerMol?: number | undefined };
   unitSystem: UnitSystem;
   frame?: PlotFrame;
+  /** The history as the server counted it; without it the plot works it out at the constant assumedTempC. */
+  history?: readonly HistorySpan[];
+  /** The temperatures the forecast runs on from now on. */
+  ahead?: readonly { from: string; to: string; tempC: number }[];
 }
 
 const toMs = (iso: string) => {
@@ -81,9 +100,16 @@ export function temperaturePlot(input: TemperaturePlotInput): TemperaturePlot | 
       : readings.length > 1
         ? equivalentAge({ readings: [...readings], refTempC: input.product.referenceTempC, activationEnergyKJPerMol: ea, minTempC: input.product.minWorkTempC, readingCarryH: input.readingCarryH })
         : null;
-  const coreSpans = age?.ok ? age.value.spans : [];
+  const coreSpans = input.history
+    ? input.history
+        .map((h) => ({ ...h, fromMs: toMs(h.from), toMs: Math.min(toMs(h.to), asOfMs) }))
+        .filter((h) => Number.isFinite(h.fromMs) && h.toMs > h.fromMs)
+    : age?.ok
+      ? age.value.spans
+      : [];
+  const ahead = (input.ahead ?? []).map((p) => ({ ...p, fromMs: toMs(p.from), toMs: toMs(p.to) })).filter((p) => p.toMs > p.fromMs);
 
-  const times = [...readings.map((r) => toMs(r.at)), ...coreSpans.flatMap((s) => [s.fromMs, s.toMs])];
+  const times = [...readings.map((r) => toMs(r.at)), ...coreSpans.flatMap((s) => [s.fromMs, s.toMs]), ...ahead.flatMap((p) => [p.fromMs, p.toMs])];
   if (Number.isFinite(pouredMs)) times.push(pouredMs);
   let fromMs = Math.min(...times);
   let untilMs = Math.max(...times);
@@ -93,7 +119,12 @@ export function temperaturePlot(input: TemperaturePlotInput): TemperaturePlot | 
   }
 
   const shown = (tempC: number) => temperatureFromC(tempC, input.unitSystem);
-  const temps = [...readings.map((r) => shown(r.tempC)), ...coreSpans.flatMap((s) => [shown(s.startTempC), shown(s.endTempC)]), shown(input.product.minWorkTempC)];
+  const temps = [
+    ...readings.map((r) => shown(r.tempC)),
+    ...coreSpans.flatMap((s) => [shown(s.startTempC), shown(s.endTempC)]),
+    ...ahead.map((p) => shown(p.tempC)),
+    shown(input.product.minWorkTempC),
+  ];
   const step = input.unitSystem === 'us' ? 10 : 5;
   let low = Math.floor(Math.min(...temps) / step) * step;
   let high = Math.ceil(Math.max(...temps) / step) * step;
@@ -129,6 +160,8 @@ export function temperaturePlot(input: TemperaturePlotInput): TemperaturePlot | 
     dots: readings.map((r) => ({ x: x(toMs(r.at)), y: y(shown(r.tempC)), at: r.at, temp: shown(r.tempC) })),
     minimum: { y: y(shown(input.product.minWorkTempC)), temp: shown(input.product.minWorkTempC) },
     pouredX: Number.isFinite(pouredMs) ? x(pouredMs) : null,
+    forecast: ahead.map((p) => ({ from: p.from, to: p.to, x1: x(p.fromMs), x2: x(p.toMs), y: y(shown(p.tempC)), temp: shown(p.tempC) })),
+    nowX: ahead.length > 0 ? x(ahead[0]!.fromMs) : null,
     yTicks,
   };
 }
