@@ -11,9 +11,12 @@ async function count(pool: pg.Pool, sql: string, params: unknown[] = []): Promis
   return (await pool.query<{ n: number }>(`SELECT count(*)::int AS n FROM ${sql}`, params)).rows[0]!.n;
 }
 
-/** `READINGS` sorted readings a minute apart, at 17 s past the minute so they meet no seeded one. */
-function readingsCsv(startIso: string, badRow?: number): string {
-  const start = Date.parse(startIso);
+/**
+ * `READINGS` sorted readings a minute apart from `hoursAgo` hours back, at 17 s past the minute so they meet no
+ * seeded one; recent, so they fall inside the seeded pour's cure and pass the log's date guard.
+ */
+function readingsCsv(hoursAgo: number, badRow?: number): string {
+  const start = Math.floor((Date.now() - hoursAgo * 3_600_000) / 60_000) * 60_000;
   const lines = ['time,tempC'];
   for (let i = 0; i < READINGS; i++) {
     const at = new Date(start + i * 60_000 + 17_000).toISOString();
@@ -75,12 +78,12 @@ export async function allOrNothing(stack: FaultStack, pool: pg.Pool): Promise<st
   // A log with one bad row among good ones.
   const readings0 = await readingsOf();
   const audit0 = await auditOf();
-  const bad = await csv(readingsCsv('2026-01-05T08:00:00Z', 250))();
+  const bad = await csv(readingsCsv(20, 250))();
   must(bad.status === 422 && isApiError(bad.body) && bad.body.error.code === 'csv_invalid', `a log with a bad row should be refused with 422 csv_invalid; got ${describe(bad)}`);
   must((await readingsOf()) === readings0, `a refused log should add no readings; ${(await readingsOf()) - readings0} were added`);
 
   // A good log whose connection is cut after its readings were written.
-  const log = readingsCsv('2026-01-06T08:00:00Z');
+  const log = readingsCsv(12);
   mustBeCut('a log import', await cutMidWrite(pool, 'temperature_readings', csv(log)));
   must((await readingsOf()) === readings0, `a log cut off mid-write should leave no readings; ${(await readingsOf()) - readings0} were left`);
   must((await auditOf()) === audit0, 'a log cut off mid-write should leave no audit event');
@@ -111,7 +114,7 @@ export async function allOrNothing(stack: FaultStack, pool: pg.Pool): Promise<st
   const [lotA] = (await pool.query<{ id: string; remaining_g: number }>(`SELECT id, remaining_g FROM lots WHERE shop_id = $1 AND part = 'A' AND remaining_g > 100 ORDER BY created_at LIMIT 1`, [pour.shop_id])).rows;
   must(lotA, 'the seeded shelf should have a part A lot with stock');
   const audit2 = await auditOf();
-  const batch = await call(stack.baseUrl, 'POST', `/api/pours/${newPour}/batches`, { token, json: { planBatchIndex: 0, lotAId: lotA.id, lotBId: lotA.id, weighedAG: 100, weighedBG: 50 } });
+  const batch = await call(stack.baseUrl, 'POST', `/api/pours/${newPour}/batches`, { token, json: { planBatchIndex: 0, lotAId: lotA.id, lotBId: lotA.id, weighedAG: 100, weighedBG: 50, confirmUnusual: true } });
   must(batch.status === 400, `a batch with a part A lot in the part B slot should be refused with 400; got ${describe(batch)}`);
   const [lotAfter] = (await pool.query<{ remaining_g: number }>('SELECT remaining_g FROM lots WHERE id = $1', [lotA.id])).rows;
   must(lotAfter?.remaining_g === lotA.remaining_g, `the refused batch should not draw down the part A lot (${lotA.remaining_g} g before, ${lotAfter?.remaining_g} g after)`);

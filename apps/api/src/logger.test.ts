@@ -58,7 +58,7 @@ beforeAll(async () => {
   await http()
     .post('/api/ingest/readings')
     .set('X-Gelpoint-Ingest-Token', shop.ingestToken)
-    .send({ pourId: shop.ids.pour, readings: [{ at: '2026-11-02T10:00:00Z', tempC: 21.5 }] })
+    .send({ pourId: shop.ids.pour, readings: [{ at: new Date(Date.now() - 1_800_000).toISOString(), tempC: 21.5 }] })
     .expect(202);
 
   // Every invitation and reset link mailed during the flows, including the ones member() accepted.

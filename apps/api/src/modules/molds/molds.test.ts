@@ -32,7 +32,8 @@ const upload = (session: { token: string }, bytes: Buffer, fields: Record<string
   return req;
 };
 
-describe('mould upload and cavity report', () => {
+// Each analysis runs in a cold worker process of its own: on a busy machine that alone can take most of 30 s.
+describe('mould upload and cavity report', { timeout: 90_000 }, () => {
   it('analyses an uploaded STL in the worker and answers fills from what it stored', async () => {
     const res = await upload(maker, binaryStl(pocket), { units: 'mm', up: 'z' }).expect(202);
     expect(res.body).toMatchObject({ name: 'tray pocket', status: 'queued', format: 'stl', units: 'mm', fileUnits: null, upAxis: 'z', report: null });

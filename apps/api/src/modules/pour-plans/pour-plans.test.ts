@@ -62,7 +62,9 @@ describe('pour plans', () => {
     // Below the pocket floor the level is inside the wood: nothing to pour.
     const tooLow = await h.http().post('/api/pour-plans').set(bearer(maker)).send({ ...body, fillLevelMm: 5 }).expect(422);
     expect(tooLow.body.error.code).toBe('fill_below_floor');
-  });
+    // The analysis runs in a worker process of its own, started cold: on a busy machine that alone can take most of
+    // the default 30 s.
+  }, 90_000);
 
   it('refuses archived products and another shop’s piece', async () => {
     const { shop, maker, product, piece } = await setUp();
