@@ -9,6 +9,7 @@ export { analyzeStl, type AnalyzeStlOptions } from './analyze-stl';
 export { readAnalysis } from './analysis-codec';
 export { cavityAnalysisVersion } from './cavity-analysis';
 export { fillAt, curve, layerVolumes, type CavitySource } from './fill-queries';
+export { cavityFloorMm } from './cavity-floor';
 export { fillRecord, type FillRecord } from './fill-record';
 export type { Dam } from './dam';
 export type {
