@@ -1,8 +1,9 @@
 // Every migration, oldest first. `npm run db:generate -- Name` appends here; landed migrations are never edited.
+import { PlansKeepTheirMould1796368426009 } from './1796368426009-plansKeepTheirMould';
 import { LogCorrections1796364339383 } from './1796364339383-logCorrections';
 import { CureEvidence1796362314835 } from './1796362314835-cureEvidence';
 import { RateLimitCounters1796175582050 } from './1796175582050-rateLimitCounters';
 import { PoursCureLogReminders1796169088290 } from './1796169088290-poursCureLogReminders';
 import { MoldsShelfPourPlans1796168546354 } from './1796168546354-moldsShelfPourPlans';
 import { Foundation1796166861733 } from './1796166861733-foundation';
-export const migrations: Function[] = [Foundation1796166861733, MoldsShelfPourPlans1796168546354, PoursCureLogReminders1796169088290, RateLimitCounters1796175582050, CureEvidence1796362314835, LogCorrections1796364339383];
+export const migrations: Function[] = [Foundation1796166861733, MoldsShelfPourPlans1796168546354, PoursCureLogReminders1796169088290, RateLimitCounters1796175582050, CureEvidence1796362314835, LogCorrections1796364339383, PlansKeepTheirMould1796368426009];
