@@ -19,8 +19,8 @@ export function useUpdateMold({ onSuccess }: { onSuccess?: (mold: MoldView) => u
     onSuccess: async (mold) => {
       queryClient.setQueryData(moldKeys.detail(mold.id), mold);
       // A new name, piece or frame shows on other pages too (lists, a piece's moulds, a planner's choice): all of
-      // them ask again when next seen. A rare change, so the simple rule is the safe one.
-      await queryClient.invalidateQueries();
+      // them ask again when next seen. A rare change, so the simple rule is the safe one; the save need not wait for it.
+      void queryClient.invalidateQueries();
       await onSuccess?.(mold);
     },
   });
