@@ -123,8 +123,11 @@ describe("a maker's day in the browser", () => {
     // A layer: 384 mL with 5 % over-pour.
     const layerMl = 384 * 1.05;
     const layerCupG = ((layerMl * 2) / 3) * 1.15 + (layerMl / 3) * 0.97 + 5;
-    expect(await page.getByRole('article', { name: 'Cup 1 of 3' }).getByText(`${sealCupG.toFixed(1)} g`, { exact: true }).isVisible()).toBe(true);
-    expect(await page.getByRole('article', { name: 'Cup 2 of 3' }).getByText(`${layerCupG.toFixed(1)} g`, { exact: true }).isVisible()).toBe(true);
+    // The run sheet rounds each cup at the scale's 0.1 g and keeps it on ratio: a part may move by one step, so the
+    // cup's total stays within 0.2 g of the closed form.
+    const cupTotalG = async (name: string) => Number(/cup total\s+([\d.]+)\s*g/i.exec(await page.getByRole('article', { name }).innerText())?.[1]);
+    expect(Math.abs((await cupTotalG('Cup 1 of 3')) - sealCupG)).toBeLessThanOrEqual(0.2 + 1e-9);
+    expect(Math.abs((await cupTotalG('Cup 2 of 3')) - layerCupG)).toBeLessThanOrEqual(0.2 + 1e-9);
     expect(await page.getByRole('article', { name: 'Cup 3 of 3' }).getByText('Layer 2 · batch 1 of 1').isVisible()).toBe(true);
     expect(await page.getByRole('navigation', { name: 'Main' }).count()).toBe(0);
     expect(await page.getByRole('button', { name: 'Print' }).isVisible()).toBe(true);

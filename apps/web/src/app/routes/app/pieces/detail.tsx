@@ -117,7 +117,7 @@ export function Component() {
               <PieceDetails piece={current} />
             </Card>
           )}
-          <PieceWork pieceId={current.id} mayEdit={mayEdit} />
+          <PieceWork pieceId={current.id} />
           <p className="mt-6">
             <TextLink to={paths.pieces.getHref()}>Back to all pieces</TextLink>
           </p>

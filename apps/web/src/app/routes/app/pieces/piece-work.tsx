@@ -1,10 +1,8 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
-import { ButtonLink } from '../../../../components/ui/ButtonLink';
 import { Card } from '../../../../components/ui/Card';
 import { ErrorAlert } from '../../../../components/ui/ErrorAlert';
 import { Spinner } from '../../../../components/ui/Spinner';
-import { paths } from '../../../../config/paths';
 import { moldsQueryOptions, useMolds } from '../../../../features/molds/api/get-molds';
 import { PieceMoldsList } from '../../../../features/molds/components/PieceMoldsList';
 import { pourPlansQueryOptions, usePourPlans } from '../../../../features/pour-plans/api/get-pour-plans';
@@ -36,7 +34,7 @@ function ListState<T>({ query, empty, children }: { query: ListQuery<T>; empty: 
 }
 
 /** What the piece is made with: its moulds, its pour plans and its pours, each linked, with its state. */
-export function PieceWork({ pieceId, mayEdit }: { pieceId: string; mayEdit: boolean }) {
+export function PieceWork({ pieceId }: { pieceId: string }) {
   const molds = useMolds(pieceQuery(pieceId));
   const plans = usePourPlans(pieceQuery(pieceId));
   const pours = usePiecePours(pieceId);
@@ -46,16 +44,13 @@ export function PieceWork({ pieceId, mayEdit }: { pieceId: string; mayEdit: bool
 
   return (
     <div className="mt-6 grid gap-6 xl:grid-cols-3">
-      <Card
-        title="Moulds"
-        actions={mayEdit ? <ButtonLink variant="secondary" to={paths.newMould.getHref({ pieceId })}>Upload a mould</ButtonLink> : null}
-      >
+      <Card title="Moulds">
         <ListState query={molds} empty={(d) => d.items.length === 0}>
           {(d) => <PieceMoldsList molds={d.items} unitSystem={unitSystem} />}
         </ListState>
-        {molds.data?.items.length === 0 ? <p className="text-ink-soft">No mould yet: upload its STL, or plan with a quick shape.</p> : null}
+        {molds.data?.items.length === 0 ? <p className="text-ink-soft">No mould yet: upload its STL (“Upload its mould” above), or plan with a quick shape.</p> : null}
       </Card>
-      <Card title="Pour plans" actions={mayEdit ? <ButtonLink variant="secondary" to={paths.newPourPlan.getHref(pieceId)}>Plan a pour</ButtonLink> : null}>
+      <Card title="Pour plans">
         <ListState query={plans} empty={(d) => d.items.length === 0}>
           {(d) => <PiecePlansList plans={d.items} moldNames={moldNames} unitSystem={unitSystem} />}
         </ListState>
