@@ -34,8 +34,9 @@ export const createLoader =
       queryClient.ensureQueryData(resinSystemsQueryOptions(wholeShelfQuery)),
       queryClient.ensureQueryData(pigmentsQueryOptions(wholeShelfQuery)),
     ]);
-    // The mould picker opens on the plan's own mould: its options are there before the form is.
-    await queryClient.ensureQueryData(pieceMoldsQueryOptions(plan.pieceId));
+    // The mould picker opens on the plan's own mould: its options are there before the form is (a failure shows in
+    // the planner, where the picker says the moulds cannot be listed).
+    await queryClient.prefetchQuery(pieceMoldsQueryOptions(plan.pieceId));
     return null;
   };
 

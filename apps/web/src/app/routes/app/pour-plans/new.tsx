@@ -32,7 +32,7 @@ export const createLoader =
       queryClient.ensureQueryData(shopQueryOptions()),
       queryClient.ensureQueryData(resinSystemsQueryOptions(wholeShelfQuery)),
       queryClient.ensureQueryData(pigmentsQueryOptions(wholeShelfQuery)),
-      queryClient.ensureQueryData(pieceMoldsQueryOptions(pieceId)),
+      queryClient.prefetchQuery(pieceMoldsQueryOptions(pieceId)),
     ]);
     return null;
   };
