@@ -13,6 +13,7 @@ export { analyzeMouldFile, analyzeStl, type AnalyzeStlOptions, type MouldFileAna
 export { readAnalysis } from './analysis-codec';
 export { cavityAnalysisVersion } from './cavity-analysis';
 export { fillAt, curve, layerVolumes, type CavitySource } from './fill-queries';
+export { cavityFloorMm } from './cavity-floor';
 export { fillRecord, type FillRecord } from './fill-record';
 export type { Dam } from './dam';
 export type {
