@@ -1,10 +1,11 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { Membership, Piece, Shop, User, type PieceStage, type Role } from '../entities';
 import { hashPassword } from '../passwords';
+import { seedDemoMould } from './demo-mould-plan';
 import { seedDemoPours } from './demo-pours';
 import { seedDemoShelf } from './demo-shelf';
 
-// The demo scenario is invented: a small shop, its three people and a few pieces at different stages.
+// The demo scenario is invented: a small shop, its three people, a few pieces at different stages and a mould.
 export const DEMO_PASSWORD = 'gelpoint-demo';
 
 const people: { email: string; name: string; role: Role }[] = [
@@ -75,6 +76,7 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
     }
     await seedDemoShelf(m, shop.id);
     await seedDemoPours(m, shop.id, users);
+    await seedDemoMould(m, shop.id, users);
     return true;
   });
 }

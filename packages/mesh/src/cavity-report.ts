@@ -1,10 +1,28 @@
-import { curve, fillAt, fillRecord, type CavityAnalysis } from '@gelpoint/mesh';
-import type { CavityReport } from '@gelpoint/contracts';
+import type { BoundingBox } from './mesh-measures';
+import type { CavityAnalysis, CavityMethod, CurvePoint } from './cavity-analysis';
+import { curve, fillAt } from './fill-queries';
+import { fillRecord, type DepthMapRecord, type FillRecord } from './fill-record';
 
 const CURVE_POINTS = 101;
 
+/** What people read about a mould, as plain JSON: the worker stores it, and so does the demo seed. */
+export interface CavityReportRecord {
+  triangles: number;
+  watertight: boolean;
+  bboxMm: BoundingBox;
+  enclosedVolumeMm3: number | null;
+  method: CavityMethod;
+  estimatedErrorPct: number;
+  resolutionMm: number | null;
+  warnings: { code: string; message: string }[];
+  /** Volume below each level (outline dam), from the lowest to the highest point of the mould. */
+  curve: CurvePoint[];
+  /** The fill to the top of the mould, with its depth map. */
+  fillToTop: FillRecord & { depthMap: DepthMapRecord };
+}
+
 /** What people read about a mould, kept beside the analysis so the screen needs no engine call. */
-export function cavityReport(analysis: CavityAnalysis): CavityReport {
+export function cavityReport(analysis: CavityAnalysis): CavityReportRecord {
   const bottom = analysis.bboxMm.min[2];
   const top = analysis.bboxMm.max[2];
   const levels = Array.from({ length: CURVE_POINTS }, (_, i) => bottom + ((top - bottom) * i) / (CURVE_POINTS - 1));
