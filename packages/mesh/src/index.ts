@@ -14,7 +14,8 @@ export { readAnalysis } from './analysis-codec';
 export { cavityAnalysisVersion } from './cavity-analysis';
 export { fillAt, curve, layerVolumes, type CavitySource } from './fill-queries';
 export { cavityFloorMm } from './cavity-floor';
-export { fillRecord, type FillRecord } from './fill-record';
+export { fillRecord, type DepthMapRecord, type FillRecord } from './fill-record';
+export { cavityReport, type CavityReportRecord } from './cavity-report';
 export type { Dam } from './dam';
 export type {
   CavityAnalysis, CavityFill, CavityMethod, CavityModel, CurvePoint, DepthMap, ExactFacts, MethodFigures,

@@ -1,5 +1,10 @@
-import { cavityFloorMm, curve, fillAt, fillRecord, readAnalysis, type CavityAnalysis, type Result } from '@gelpoint/mesh';
-import type { CavityReport } from '@gelpoint/contracts';
+import type { BoundingBox } from './mesh-measures';
+import type { CavityAnalysis, CavityMethod, CurvePoint } from './cavity-analysis';
+import { readAnalysis } from './analysis-codec';
+import { cavityFloorMm } from './cavity-floor';
+import { curve, fillAt } from './fill-queries';
+import { fillRecord, type DepthMapRecord, type FillRecord } from './fill-record';
+import type { Result } from './result';
 
 const CURVE_POINTS = 101;
 
@@ -8,8 +13,26 @@ function valueOf<T>(r: Result<T>): T {
   return r.value;
 }
 
+/** What people read about a mould, as plain JSON: the worker stores it, and so does the demo seed. */
+export interface CavityReportRecord {
+  triangles: number;
+  watertight: boolean;
+  bboxMm: BoundingBox;
+  enclosedVolumeMm3: number | null;
+  method: CavityMethod;
+  estimatedErrorPct: number;
+  resolutionMm: number | null;
+  warnings: { code: string; message: string }[];
+  /** Volume below each level (outline dam), from the lowest to the highest point of the mould. */
+  curve: CurvePoint[];
+  /** The fill to the top of the mould, with its depth map. */
+  fillToTop: FillRecord & { depthMap: DepthMapRecord };
+  /** The cavity floor with each dam: the lowest point where resin stands, in the mould's frame (mm). */
+  floorMm: { outline: number; box: number };
+}
+
 /** What people read about a mould, kept beside the analysis so the screen needs no engine call. */
-export function cavityReport(analysis: CavityAnalysis): CavityReport {
+export function cavityReport(analysis: CavityAnalysis): CavityReportRecord {
   const model = valueOf(readAnalysis(analysis));
   const bottom = analysis.bboxMm.min[2];
   const top = analysis.bboxMm.max[2];
