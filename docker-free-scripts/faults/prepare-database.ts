@@ -1,5 +1,6 @@
 // Migrates the fault-check database and seeds the demo shop in one process (one start instead of two).
-import { createDataSource, seedDemo } from '@gelpoint/db';
+import { createDataSource } from '@gelpoint/db';
+import { seedDemo } from '@gelpoint/db/seed';
 
 const ds = createDataSource({ applicationName: 'gelpoint-fault-check' });
 await ds.initialize();

@@ -19,7 +19,7 @@ export interface RunSheetBatch {
 
 export interface BoardScenario {
   moldId: string;
-  /** The cavity's floor and top (mm, report frame): /fill is asked for levels between them. */
+  /** The cavity's floor and top (mm, the mould's own frame): /fill is asked for levels between them with from=mould. */
   floorMm: number;
   topMm: number;
   planIds: string[];
@@ -116,7 +116,7 @@ export async function prepareBoard(apis: string[], t: Tokens, boardPours: number
   const planFor = (pieceId: string, i: number) =>
     must<PlanBody>(201, i % 2 ? a : b, 'POST', '/pour-plans', {
       token: t.maker,
-      json: { pieceId, name: `Tray pocket, level 55 mm (${i + 1})`, cavity: { source: 'mold', moldId: mold.id }, fillLevelMm: 55, deepPour: { resinSystemId: resin.id }, overPourPct: 5, shopTempC: 21 },
+      json: { pieceId, name: `Tray pocket, level 55 mm (${i + 1})`, cavity: { source: 'mold', moldId: mold.id }, fillLevelMm: 55, levelFrom: 'mould', deepPour: { resinSystemId: resin.id }, overPourPct: 5, shopTempC: 21 },
     });
   const plans = await inGroups(pieceIds, 4, planFor);
 

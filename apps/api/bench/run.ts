@@ -41,14 +41,14 @@ async function main(): Promise<number> {
 
     const findings: Finding[] = [...(await sessionsAcrossInstances(apis)), ...(await rateLimitAcrossInstances(apis, AUTH_RATE))];
     const midLevel = (board.floorMm + board.topMm) / 2;
-    findings.push(await sameAnswerOnBoth(apis, tokens.maker, `/molds/${board.moldId}/fill?level=${midLevel}`));
+    findings.push(await sameAnswerOnBoth(apis, tokens.maker, `/molds/${board.moldId}/fill?level=${midLevel}&from=mould`));
 
     const depth = board.topMm - board.floorMm;
     const reads = [
       { endpoint: 'GET /api/pours (cure board)', token: tokens.lead, path: '/api/pours' },
       { endpoint: 'GET /api/pour-plans/:id', token: tokens.maker, path: '', next: (i: number) => ({ path: `/api/pour-plans/${board.planIds[i % board.planIds.length]}` }) },
       { endpoint: 'GET /api/molds/:id (cavity report)', token: tokens.maker, path: `/api/molds/${board.moldId}` },
-      { endpoint: 'GET /api/molds/:id/fill', token: tokens.maker, path: '', next: (i: number) => ({ path: `/api/molds/${board.moldId}/fill?level=${(board.floorMm + ((i * 7) % 100) * (depth / 100)).toFixed(2)}` }) },
+      { endpoint: 'GET /api/molds/:id/fill', token: tokens.maker, path: '', next: (i: number) => ({ path: `/api/molds/${board.moldId}/fill?level=${(board.floorMm + ((i * 7) % 100) * (depth / 100)).toFixed(2)}&from=mould` }) },
     ];
     say('warming up (2 s, not counted)…');
     const target: LoadTarget = { apiUrls: apis, apiPids: stack.apiPids, databaseUrl };

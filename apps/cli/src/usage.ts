@@ -7,8 +7,10 @@ interface CommandHelp {
 const help: Record<string, CommandHelp> = {
   mold: {
     synopsis: 'gelpoint mold FILE --level L [--units mm|cm|in] [--up x|y|z] [--dam outline|box] [--curve N] [--json]',
-    about: `The cavity report of a mould file: fill volume to level L (in the file's units), wetted area,
-deepest resin, trapped air; --curve N adds N points of the volume-versus-level curve.`,
+    about: `The cavity report of a mould file: fill volume to level L (in the file's units, a height in
+the file's own frame as a CAD program shows it), wetted area, deepest resin, trapped air; it also
+prints where the cavity floor stands and how high L is above it (the height the web app's fill
+level means); --curve N adds N points of the volume-versus-level curve.`,
   },
   mix: {
     synopsis:

@@ -47,17 +47,19 @@ describe('the mould screen in a real browser', () => {
     await expect.poll(() => page.locator('[data-testid="mold-3d"] canvas').count(), { timeout: 15_000 }).toBe(1);
 
     const level = page.getByLabel('Fill level', { exact: true });
-    // Half the pocket's depth: its floor stands 10 mm above the block's underside, so 20 mm above the lowest point; 80 × 40 × 10 mm³ = 32 mL.
-    await level.fill('20');
+    // Half the pocket's depth: the level is the resin's height above the pocket floor, 80 × 40 × 10 mm³ = 32 mL.
+    await level.fill('10');
     await expect.poll(() => volume.textContent()).toBe('32.0 mL');
-    await level.fill('30');
+    // The floor stands 10 mm above the block's underside, so the surface is at 20 mm in the file's own frame.
+    expect(await page.getByTestId('level-in-mould-frame').textContent()).toBe('In the mould file’s own frame: resin surface at 20.0 mm, cavity floor at 10.0 mm.');
+    await level.fill('20');
     await expect.poll(() => volume.textContent()).toBe('64.0 mL');
 
     await page.getByLabel('Layer thickness').fill('6');
     const layers = page.getByRole('table', { name: /Layers from the cavity floor/ });
     // A 20 mm deep pour with at most 6 mm a layer takes ⌈20 / 6⌉ = 4 equal layers, the last ending at the rim.
     await expect.poll(() => layers.getByRole('row').count()).toBe(5);
-    await expect.poll(() => layers.getByRole('row').last().getByRole('cell').nth(2).textContent()).toBe('30.0 mm');
+    await expect.poll(() => layers.getByRole('row').last().getByRole('cell').nth(2).textContent()).toBe('20.0 mm');
     await expect.poll(() => page.getByText(/Layer lines at/).count()).toBe(1);
 
     await expect.poll(() => page.getByRole('img', { name: 'Resin depth map' }).count()).toBe(1);

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { Id, Timestamp, text } from './common';
+import { Id, Timestamp, requiredText, text } from './common';
 
 /** The units a maker chooses for a file that carries none (STL, OBJ), or to override a 3MF's own. */
 export const MoldUnits = z.enum(['mm', 'cm', 'in'], { message: 'units must be mm, cm or in' });
@@ -11,6 +11,16 @@ export const UpAxis = z.enum(['x', 'y', 'z'], { message: 'up must be x, y or z' 
 export const Dam = z.enum(['outline', 'box'], { message: 'dam must be outline (along the mould) or box (around its bounding box)' });
 export type Dam = z.infer<typeof Dam>;
 export const MoldStatus = z.enum(['queued', 'analysing', 'ready', 'failed']);
+
+/**
+ * Which datum a level is measured from. `floor`: the height of the resin surface above the cavity floor, the
+ * lowest point where resin stands with the chosen dam (the same meaning as a quick shape's depth). `mould`: a
+ * height in the mould file's own frame, after its units and up axis, as a CAD program shows it.
+ */
+export const LevelFrom = z
+  .enum(['floor', 'mould'], { message: "from must be floor (height above the cavity floor) or mould (the mould file's own frame)" })
+  .describe("floor: height of the resin surface above the cavity floor (where the deepest resin stands); mould: height in the mould file's own frame");
+export type LevelFrom = z.infer<typeof LevelFrom>;
 
 /**
  * The text fields of the multipart upload (the file itself, STL, 3MF or OBJ, is the part named
@@ -36,8 +46,9 @@ export const DepthMap = z.object({
   depthsMm: z.array(z.number()),
 });
 
+/** A fill as the cavity report stores it: levels in the mould's own frame. */
 export const CavityFill = z.object({
-  levelMm: z.number(),
+  levelMm: z.number().describe("the level in the mould's own frame (mm)"),
   dam: Dam,
   volumeMm3: z.number(),
   wettedAreaMm2: z.number(),
@@ -57,10 +68,13 @@ export const CavityReport = z.object({
   estimatedErrorPct: z.number(),
   resolutionMm: z.number().nullable(),
   warnings: z.array(Warning),
-  /** Volume below each level (outline dam), from the lowest to the highest point of the mould. */
+  /** Volume below each level (outline dam), from the lowest to the highest point of the mould, levels in its own frame. */
   curve: z.array(z.object({ levelMm: z.number(), volumeMm3: z.number() })),
   /** The fill to the top of the mould, with its depth map. */
   fillToTop: CavityFill,
+  floorMm: z
+    .object({ outline: z.number(), box: z.number() })
+    .describe("the cavity floor with each dam, as a height in the mould's own frame (mm): a level from the floor plus this is the same level in the mould's frame"),
 });
 export type CavityReport = z.infer<typeof CavityReport>;
 
@@ -86,6 +100,18 @@ export const MoldView = z.object({
 });
 export type MoldView = z.infer<typeof MoldView>;
 
+export const UpdateMoldRequest = z
+  .object({
+    name: requiredText(120, 'name'),
+    pieceId: Id.nullable().describe('the piece the mould belongs to; null detaches it'),
+    units: MoldFileUnits.describe('the unit the file was drawn in; a change reads the stored file again'),
+    upAxis: UpAxis.describe('the file axis that points up; a change reads the stored file again'),
+  })
+  .partial()
+  .strict()
+  .refine((v) => Object.keys(v).length > 0, { message: 'send at least one of name, pieceId, units, upAxis' });
+export type UpdateMoldRequest = z.infer<typeof UpdateMoldRequest>;
+
 export const MoldSummary = MoldView.omit({ report: true }).extend({ fillVolumeToTopMm3: z.number().nullable() });
 export const MoldList = z.object({ items: z.array(MoldSummary), total: z.number().int() });
 
@@ -99,7 +125,11 @@ export const MoldListQuery = z
 
 export const FillQuery = z
   .object({
-    level: z.coerce.number({ message: 'level must be a number (mm, in the report frame)' }).refine(Number.isFinite, { message: 'level must be a finite number' }),
+    level: z.coerce
+      .number({ message: 'level must be a number (mm above the cavity floor, or in the mould frame with from=mould)' })
+      .refine(Number.isFinite, { message: 'level must be a finite number' })
+      .describe('mm: height of the resin surface above the cavity floor, or in the mould frame with from=mould'),
+    from: LevelFrom.default('floor'),
     dam: Dam.default('outline'),
     depthMap: z.enum(['true', 'false']).default('false'),
   })
@@ -117,9 +147,30 @@ export const LayerVolumesQuery = z
           return z.NEVER;
         }
         return nums;
-      }),
+      })
+      .describe('mm, ascending, measured as `from` says'),
+    from: LevelFrom.default('floor'),
     dam: Dam.default('outline'),
   })
   .strict();
 
-export const LayerVolumes = z.object({ dam: Dam, layers: z.array(z.object({ fromMm: z.number(), toMm: z.number(), volumeMm3: z.number() })) });
+/** Where a level answer stands in both frames, so a screen can show either. */
+const LevelFrames = {
+  levelFrom: LevelFrom,
+  floorMm: z.number().describe("the cavity floor with this dam, as a height in the mould's own frame (mm)"),
+};
+
+/** The fill route's answer: the stored fill's fields, with the level in the frame asked for and both readings of it. */
+export const MoldFill = CavityFill.extend({
+  levelMm: z.number().describe('the level as asked, in the frame levelFrom names (mm)'),
+  ...LevelFrames,
+  levelAboveFloorMm: z.number().describe('height of the resin surface above the cavity floor (mm)'),
+  levelInMouldMm: z.number().describe("the same surface as a height in the mould's own frame (mm)"),
+});
+export type MoldFill = z.infer<typeof MoldFill>;
+
+export const LayerVolumes = z.object({
+  dam: Dam,
+  ...LevelFrames,
+  layers: z.array(z.object({ fromMm: z.number(), toMm: z.number(), volumeMm3: z.number() }).describe('levels in the frame levelFrom names')),
+});

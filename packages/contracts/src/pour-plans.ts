@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { Id, Timestamp, UserRef, requiredText } from './common';
-import { Dam } from './molds';
+import { Dam, LevelFrom } from './molds';
 
 const positive = (label: string, max: number, unit = '') =>
   z
@@ -53,8 +53,13 @@ export const PourPlanInput = z
     pieceId: Id,
     name: requiredText(120, 'name'),
     cavity: PlanCavity,
-    /** For a mould: the level in its report frame (mm). For a quick shape: the depth from its floor (mm). */
-    fillLevelMm: z.number({ message: 'fill level must be a number (mm)' }).refine(Number.isFinite, { message: 'fill level must be finite' }),
+    fillLevelMm: z
+      .number({ message: 'fill level must be a number (mm)' })
+      .refine(Number.isFinite, { message: 'fill level must be finite' })
+      .describe("height of the resin surface above the cavity floor (mm), for a mould as for a quick shape; with levelFrom 'mould', a height in the mould's own frame"),
+    levelFrom: LevelFrom.default('floor').describe(
+      "floor (default): fillLevelMm is measured from the cavity floor. mould: from the mould file's own frame, for a mould's cavity only; the plan is stored measured from the floor either way",
+    ),
     deepPour: z.object({ resinSystemId: Id, pigmentId: Id.nullable().default(null), pigmentPct: nonNegative('pigment loading', 100).default(0) }).strict(),
     sealCoat: z
       .object({ resinSystemId: Id, filmThicknessMm: positive('film thickness', 5), coats: z.number().int().min(1).max(10), absorptionFactor: z.number().min(1).max(5) })
@@ -85,6 +90,11 @@ export const PourPlanView = z.object({
   pieceId: Id,
   moldId: Id.nullable(),
   name: z.string(),
+  /**
+   * The inputs as saved. A mould plan's fillLevelMm is measured from the cavity floor (levelFrom: 'floor'); one saved
+   * before the marker existed is answered converted from its mould's frame, or with levelFrom: 'mould' while the
+   * mould's analysis cannot say where its floor is.
+   */
   inputs: z.record(z.string(), z.unknown()),
   /** The shelf values the plan used, as they were when it was saved. */
   productSnapshot: z.record(z.string(), z.unknown()),

@@ -2,7 +2,7 @@ export * from './entities';
 export { createDataSource, connectDataSource, type DataSourceOptions } from './data-source';
 export { databaseUrl } from './config';
 export { hashPassword, verifyPassword, verifyAgainstNothing } from './passwords';
-export { seedDemo, demoSignIns, DEMO_PASSWORD } from './seed/demo';
+export { demoSignIns, DEMO_PASSWORD } from './seed/demo-people';
 export { MOLD_ANALYSIS_CHANNEL, OUTBOUND_MAIL_CHANNEL } from './channels';
 export { queueMail, mailDomainOf, type MailToSend } from './outbound-mail';
 export { toCorePigment, toCoreResinSystem } from './shelf-values';

@@ -9,7 +9,7 @@ import { fail, ok, type MeshWarning, type Result } from './result';
 /** Either the stored analysis (decoded on each call) or a model from readAnalysis (decoded once). */
 export type CavitySource = CavityAnalysis | CavityModel;
 
-function modelOf(source: CavitySource): Result<CavityModel> {
+export function modelOf(source: CavitySource): Result<CavityModel> {
   return source.kind === 'gelpoint-cavity-model' ? ok(source) : readAnalysis(source);
 }
 
@@ -25,7 +25,7 @@ function percent(errorMm3: number, volumeMm3: number): number {
 }
 
 /** The dam's floor area less the shadows' sum, with the rounding of a floor the shadows fill exactly dropped. */
-function uncoveredAreaMm2(model: CavityModel, dam: Dam): number {
+export function uncoveredAreaMm2(model: CavityModel, dam: Dam): number {
   const facts = model.analysis.exact!;
   const area = dam === 'box' ? facts.boxAreaMm2 : facts.outlineAreaMm2;
   const uncovered = area - facts.coveredAreaMm2;

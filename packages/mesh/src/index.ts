@@ -13,7 +13,9 @@ export { analyzeMouldFile, analyzeStl, type AnalyzeStlOptions, type MouldFileAna
 export { readAnalysis } from './analysis-codec';
 export { cavityAnalysisVersion } from './cavity-analysis';
 export { fillAt, curve, layerVolumes, type CavitySource } from './fill-queries';
-export { fillRecord, type FillRecord } from './fill-record';
+export { cavityFloorMm } from './cavity-floor';
+export { fillRecord, type DepthMapRecord, type FillRecord } from './fill-record';
+export { cavityReport, type CavityReportRecord } from './cavity-report';
 export type { Dam } from './dam';
 export type {
   CavityAnalysis, CavityFill, CavityMethod, CavityModel, CurvePoint, DepthMap, ExactFacts, MethodFigures,

@@ -123,6 +123,7 @@ const table: Record<string, Rule> = {
   'POST /api/molds': { allowed: ['lead', 'maker'] },
   'GET /api/molds': { allowed: 'member' },
   'GET /api/molds/:id': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
+  'PATCH /api/molds/:id': { allowed: ['lead', 'maker'], body: () => ({ name: 'matrix mould' }), params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'GET /api/molds/:id/fill': { allowed: 'member', query: 'level=5', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'GET /api/molds/:id/layers': { allowed: 'member', query: 'levels=4,6', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'GET /api/molds/:id/stl': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },

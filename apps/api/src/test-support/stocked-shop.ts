@@ -190,8 +190,10 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
     'PATCH /api/shelf/lots/:id': { body: { lotNumber: `LOT-${m}`, remainingG: 2500, expiresOn: '2027-12-01', notes: 'counted' } },
     'POST /api/molds': { form: { units: 'mm', up: 'z', name: `Mould ${m}`, pieceId: ids.piece } },
     'GET /api/molds': { query: { pieceId: ids.piece, limit: '10', offset: '0' } },
-    'GET /api/molds/:id/fill': { query: { level: '5', dam: 'outline', depthMap: 'false' } },
-    'GET /api/molds/:id/layers': { query: { levels: '4,6', dam: 'box' } },
+    // The name only changes: the stocked mould keeps the units and axis it was uploaded with, so it is not read again.
+    'PATCH /api/molds/:id': { body: { name: `Mould ${m}`, pieceId: ids.piece, units: 'mm', upAxis: 'z' } },
+    'GET /api/molds/:id/fill': { query: { level: '5', from: 'mould', dam: 'outline', depthMap: 'false' } },
+    'GET /api/molds/:id/layers': { query: { levels: '4,6', from: 'mould', dam: 'box' } },
     'GET /api/pour-plans': { query: { pieceId: ids.piece, limit: '10', offset: '0' } },
     'POST /api/pour-plans': { body: planBody(ids.piece, ids.resin, { pigmentId: ids.pigment, sealResinId: ids.sealResin }) },
     'PUT /api/pour-plans/:id': { body: planBody(ids.piece, ids.resin, { pigmentId: ids.pigment, sealResinId: ids.sealResin }) },

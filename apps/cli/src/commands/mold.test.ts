@@ -49,7 +49,7 @@ interface Report {
   watertight: boolean;
   bboxMm: { min: number[]; max: number[] };
   enclosedVolumeMm3: number | null;
-  fill: { levelMm: number; dam: string; volumeMm3: number; wettedAreaMm2: number; maxDepthMm: number; trappedAirMm3: number };
+  fill: { levelMm: number; dam: string; volumeMm3: number; wettedAreaMm2: number; maxDepthMm: number; trappedAirMm3: number; floorMm: number; levelAboveFloorMm: number };
   curve?: { levelMm: number; volumeMm3: number }[];
   method: string;
   estimatedErrorPct: number;
@@ -65,12 +65,13 @@ describe('gelpoint mold --json', () => {
     const out = await json([files['pocket.stl']!, '--level', '10']);
     expect(Object.keys(out)).toEqual(['format', 'units', 'fileUnits', 'triangles', 'watertight', 'bboxMm', 'enclosedVolumeMm3', 'fill', 'method', 'estimatedErrorPct', 'warnings']);
     expect(out).toMatchObject({ format: 'stl', units: 'mm', fileUnits: null });
-    expect(Object.keys(out.fill)).toEqual(['levelMm', 'dam', 'volumeMm3', 'wettedAreaMm2', 'maxDepthMm', 'trappedAirMm3']);
+    expect(Object.keys(out.fill)).toEqual(['levelMm', 'dam', 'volumeMm3', 'wettedAreaMm2', 'maxDepthMm', 'trappedAirMm3', 'floorMm', 'levelAboveFloorMm']);
     expect(out.triangles).toBe(pocket.triangleCount);
     expect(out.watertight).toBe(true);
     expect(out.bboxMm).toEqual({ min: [0, 0, 0], max: [32, 24, 12] });
     expect(out.enclosedVolumeMm3).toBeCloseTo(32 * 24 * 12 - 20 * 16 * 7, 6);
-    expect(out.fill).toMatchObject({ levelMm: 10, dam: 'outline' });
+    // The pocket's floor stands at z = 5 in the file: a level of 10 is 5 mm of resin above it.
+    expect(out.fill).toMatchObject({ levelMm: 10, dam: 'outline', floorMm: 5, levelAboveFloorMm: 5 });
     expect(out.fill.volumeMm3).toBeCloseTo(expectedVolume, 6);
     expect(out.fill.wettedAreaMm2).toBeCloseTo(expectedWetted, 6);
     expect(out.fill.maxDepthMm).toBeCloseTo(5, 9);
@@ -143,6 +144,15 @@ describe('gelpoint mold, readable', () => {
     expect(Number(ml)).toBeCloseTo(expectedVolume / 1000, 3);
     expect(Number(litres)).toBeCloseTo(expectedVolume / 1e6, 6);
     expect(text).toMatch(/fill level +10\.00 mm/);
+    expect(text).toMatch(/cavity floor +5\.000 mm: the level stands 5\.000 mm above it/);
+  });
+
+  it('measures the level of a bowl blank in the file’s frame, and says how far above the bowl’s bottom it is', async () => {
+    // A 30 × 30 × 20 block whose pocket floor is at z = 12: a level of 16 is 4 mm of resin.
+    const out = await json([files['bowl.stl']!, '--level', '16']);
+    expect(out.fill.floorMm).toBe(12);
+    expect(out.fill.levelAboveFloorMm).toBe(4);
+    expect(out.fill.maxDepthMm).toBeCloseTo(4, 9);
   });
 
   it('reports US fluid ounces and gallons for a file in inches (NIST SP 811)', async () => {

@@ -1,6 +1,6 @@
 import { readFile } from 'node:fs/promises';
 import {
-  analyzeCavity, curve, fillAt, mmPerUnit, prepareMesh, readAnalysis, readMouldFile,
+  analyzeCavity, cavityFloorMm, curve, fillAt, mmPerUnit, prepareMesh, readAnalysis, readMouldFile,
   type CavityFill, type CavityModel, type CurvePoint, type Dam, type FileUnits, type MeshWarning, type MouldFormat, type UpAxis,
 } from '@gelpoint/mesh';
 import { CliError, numberOption, parseOptions, type Command } from '../command';
@@ -29,7 +29,11 @@ interface MoldReport {
   watertight: boolean;
   bboxMm: { min: [number, number, number]; max: [number, number, number] };
   enclosedVolumeMm3: number | null;
-  fill: { levelMm: number; dam: Dam; volumeMm3: number; wettedAreaMm2: number; maxDepthMm: number; trappedAirMm3: number };
+  fill: {
+    levelMm: number; dam: Dam; volumeMm3: number; wettedAreaMm2: number; maxDepthMm: number; trappedAirMm3: number;
+    /** The cavity floor with this dam, in the file's frame, and the level as a height above it (what the web app's fill level means). */
+    floorMm: number; levelAboveFloorMm: number;
+  };
   curve?: CurvePoint[];
   method: CavityFill['method'];
   estimatedErrorPct: number;
@@ -82,6 +86,7 @@ function readable(file: string, report: MoldReport, up: UpAxis): string {
       + (report.enclosedVolumeMm3 === null ? '' : `, encloses ${volumeText(report.enclosedVolumeMm3, units)}`),
     `  size          ${[0, 1, 2].map((k) => length(max[k]! - min[k]!)).join(' × ')} (x × y × z, ${up === 'z' ? 'z up' : `file axis ${up} turned to point up`})`,
     `  fill level    ${length(f.levelMm)} (${f.dam === 'box' ? 'box dam around the bounding box' : 'dams along the outline'})`,
+    `  cavity floor  ${length(f.floorMm)}: the level stands ${length(f.levelAboveFloorMm)} above it`,
     `  resin         ${volumeText(f.volumeMm3, units)}`,
     `  wetted area   ${area(f.wettedAreaMm2)} (floor and walls, for the seal coat)`,
     `  deepest       ${length(f.maxDepthMm)}`,
@@ -100,7 +105,8 @@ function readable(file: string, report: MoldReport, up: UpAxis): string {
  * gelpoint mold FILE: the cavity report of a mould file (STL, 3MF or OBJ, told apart by content) at
  * one level. The level is given in the file's units along its up axis, the same numbers the maker
  * reads in the CAD program. STL and OBJ carry no unit (mm unless --units says otherwise); a 3MF
- * states its own, which --units overrides.
+ * states its own, which --units overrides. The report adds the cavity floor and the level's height
+ * above it, the datum the web app and the API use.
  */
 export const command: Command = async (argv) => {
   const { values, positionals } = parseOptions(argv, options, true);
@@ -129,6 +135,7 @@ export const command: Command = async (argv) => {
   const a = unwrap(analyzeCavity(mesh, { levelsMm: [levelMm] }));
   const model: CavityModel = unwrap(readAnalysis(a));
   const fill = unwrap(fillAt(model, levelMm, dam));
+  const floorMm = unwrap(cavityFloorMm(model, dam));
   const report: MoldReport = {
     format: mould.format,
     units,
@@ -140,6 +147,7 @@ export const command: Command = async (argv) => {
     fill: {
       levelMm: fill.levelMm, dam: fill.dam, volumeMm3: fill.volumeMm3,
       wettedAreaMm2: fill.wettedAreaMm2, maxDepthMm: fill.maxDepthMm, trappedAirMm3: fill.trappedAirMm3,
+      floorMm, levelAboveFloorMm: fill.levelMm - floorMm,
     },
     ...(curveCount === undefined ? {} : { curve: unwrap(curve(model, curveCount, dam)) }),
     method: fill.method,

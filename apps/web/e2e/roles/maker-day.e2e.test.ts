@@ -57,16 +57,16 @@ describe("a maker's day in the browser", () => {
     const wetted = page.getByText('Wetted area (for the seal coat)').locator('xpath=following-sibling::dd[1]');
     expect(await wetted.textContent()).toBe('416.0 cm²');
 
-    // Half the pocket's depth: 40 mm above the underside is 30 mm of resin, 160 × 80 × 30 mm³ = 384 mL,
+    // Half the pocket's depth: 30 mm of resin above the pocket floor, 160 × 80 × 30 mm³ = 384 mL,
     // and the wetted area 12 800 + 2(160 + 80)·30 = 27 200 mm² = 272 cm².
     const level = page.getByLabel('Fill level', { exact: true });
-    await level.fill('40');
+    await level.fill('30');
     await expect.poll(() => volume.textContent()).toBe('384.0 mL');
     await expect.poll(() => wetted.textContent()).toBe('272.0 cm²');
     // The slider's End key takes the level back to the top of the mould.
     await page.getByRole('slider', { name: 'Fill level, slider' }).press('End');
     await expect.poll(() => volume.textContent()).toBe('768.0 mL');
-    expect(await level.inputValue()).toBe('70.0');
+    expect(await level.inputValue()).toBe('60.0');
     await saveScreenshot(page, 'cavity-report');
 
     await page.getByRole('link', { name: `For ${pieceName}` }).click();
@@ -80,7 +80,8 @@ describe("a maker's day in the browser", () => {
     await planner.getByText("The piece's mould", { exact: true }).click();
     expect(await planner.getByLabel("The piece's mould").isChecked()).toBe(true);
     await planner.getByLabel('Mould', { exact: true }).selectOption({ label: 'Serving board, routed well' });
-    await planner.getByLabel('Fill level (mm)', { exact: true }).fill('70');
+    // The rim: 60 mm of resin above the pocket floor, the same datum as the cavity report's fill level.
+    await planner.getByLabel('Fill level (mm)', { exact: true }).fill('60');
     const deep = planner.getByLabel('Deep-pour product', { exact: true });
     await deep.selectOption((await deep.locator('option', { hasText: 'Kettle Deep Pour 2:1' }).getAttribute('value'))!);
     await planner.getByText('Seal the wood first', { exact: true }).click();

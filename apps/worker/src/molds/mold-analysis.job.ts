@@ -89,19 +89,21 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
     const outcome = await runThread({ bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes }, (value) => {
       void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing'`, [mold.id, value]).catch(() => undefined);
     }, stop);
+    // Units or up axis corrected while this ran: the mould is queued again and this outcome is of the old reading.
+    const sameReading = 'AND units = $2 AND up_axis = $3';
     if (outcome.type === 'refused') {
       await ds.query(
-        `UPDATE molds SET status = 'failed', error_code = $2, error_message = $3, progress = 1, locked_until = NULL, updated_at = now() WHERE id = $1`,
-        [mold.id, outcome.code, outcome.message],
+        `UPDATE molds SET status = 'failed', error_code = $4, error_message = $5, progress = 1, locked_until = NULL, updated_at = now() WHERE id = $1 ${sameReading}`,
+        [mold.id, mold.units, mold.up_axis, outcome.code, outcome.message],
       );
       log.info({ code: outcome.code }, 'mould refused by the engine');
       return true;
     }
     await ds.query(
-      `UPDATE molds SET status = 'ready', progress = 1, analysis = $2, report = $3, triangle_count = $4, analysed_at = now(),
+      `UPDATE molds SET status = 'ready', progress = 1, analysis = $4, report = $5, triangle_count = $6, analysed_at = now(),
               error_code = NULL, error_message = NULL, locked_until = NULL, updated_at = now()
-        WHERE id = $1`,
-      [mold.id, JSON.stringify(outcome.analysis), JSON.stringify(outcome.report), outcome.triangles],
+        WHERE id = $1 ${sameReading}`,
+      [mold.id, mold.units, mold.up_axis, JSON.stringify(outcome.analysis), JSON.stringify(outcome.report), outcome.triangles],
     );
     log.info('mould analysed');
   } catch (err) {

@@ -1,6 +1,6 @@
 import { parentPort } from 'node:worker_threads';
-import { analyzeCavity, archiveLimitsFor, prepareMesh, readMouldFile, type FileUnits, type UpAxis } from '@gelpoint/mesh';
-import { cavityReport } from './cavity-report';
+import type { CavityReport } from '@gelpoint/contracts';
+import { analyzeCavity, archiveLimitsFor, cavityReport, prepareMesh, readMouldFile, type FileUnits, type UpAxis } from '@gelpoint/mesh';
 
 export interface AnalysisRequest {
   bytes: Uint8Array;
@@ -29,5 +29,7 @@ parentPort!.once('message', (req: AnalysisRequest) => {
   const analysis = analyzeCavity(mesh.value);
   if (!analysis.ok) return post({ type: 'refused', code: analysis.error.code, message: analysis.error.message });
   post({ type: 'progress', value: 0.9 });
-  post({ type: 'done', analysis: analysis.value, report: cavityReport(analysis.value), triangles: analysis.value.triangles });
+  // Typed as the contract's report, so the shape the engine writes and the one the API answers cannot drift apart.
+  const report: CavityReport = cavityReport(analysis.value);
+  post({ type: 'done', analysis: analysis.value, report, triangles: analysis.value.triangles });
 });

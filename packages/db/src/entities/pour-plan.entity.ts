@@ -27,7 +27,9 @@ export class PourPlan {
   @ManyToOne(() => Piece, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'piece_id', foreignKeyConstraintName: 'pour_plans_piece_fk' })
   piece?: Piece;
-  @ManyToOne(() => Mold, { onDelete: 'SET NULL' })
+  // A mould a plan uses is not deleted from under it (the API refuses and names the plans); checked at the end of
+  // the statement, so deleting a whole shop, moulds and plans together, still cascades.
+  @ManyToOne(() => Mold, { onDelete: 'NO ACTION' })
   @JoinColumn({ name: 'mold_id', foreignKeyConstraintName: 'pour_plans_mold_fk' })
   mold?: Mold | null;
   @ManyToOne(() => User, { onDelete: 'SET NULL' })

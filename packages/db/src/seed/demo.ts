@@ -1,17 +1,13 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { Membership, Piece, Shop, User, type PieceStage, type Role } from '../entities';
 import { hashPassword } from '../passwords';
+import { DEMO_PASSWORD, demoPeople as people } from './demo-people';
+import { seedDemoMould } from './demo-mould-plan';
 import { seedDemoPours } from './demo-pours';
 import { seedDemoShelf } from './demo-shelf';
 
-// The demo scenario is invented: a small shop, its three people and a few pieces at different stages.
-export const DEMO_PASSWORD = 'gelpoint-demo';
-
-const people: { email: string; name: string; role: Role }[] = [
-  { email: 'lead@gelpoint.test', name: 'Rosa Lindqvist', role: 'lead' },
-  { email: 'maker@gelpoint.test', name: 'Tomás Okafor', role: 'maker' },
-  { email: 'apprentice@gelpoint.test', name: 'Mika Hale', role: 'apprentice' },
-];
+// The demo scenario is invented: a small shop, its three people, a few pieces at different stages and a mould.
+export { DEMO_PASSWORD, demoSignIns } from './demo-people';
 
 const pieces: { name: string; wood: string; notes: string; stage: PieceStage; by: string }[] = [
   {
@@ -51,8 +47,6 @@ const pieces: { name: string; wood: string; notes: string; stage: PieceStage; by
   },
 ];
 
-export const demoSignIns = people.map(({ email, role }) => ({ email, role, password: DEMO_PASSWORD }));
-
 /** Seeds the demo shop when the database holds no shop yet; returns whether it seeded. */
 export async function seedDemo(ds: DataSource): Promise<boolean> {
   return ds.transaction(async (m: EntityManager) => {
@@ -60,7 +54,13 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
     await m.query('SELECT pg_advisory_xact_lock(7201)');
     if ((await m.count(Shop)) > 0) return false;
     // A metric shop in Canada: its prices are in Canadian dollars.
-    const shop = await m.save(m.create(Shop, { name: 'Kettle Creek Woodworks', unitSystem: 'metric', scaleResolutionG: 0.1, currency: 'CAD' }));
+    // On the Pacific coast: its clock is Vancouver's, and its unheated nights cool the shop by three degrees.
+    const shop = await m.save(
+      m.create(Shop, {
+        name: 'Kettle Creek Woodworks', unitSystem: 'metric', scaleResolutionG: 0.1, currency: 'CAD', timeZone: 'America/Vancouver',
+        temperatureProfile: { mode: 'day_night', dayTempC: 21.5, nightTempC: 18.5, dayStartHour: 7, nightStartHour: 19 },
+      }),
+    );
     const passwordHash = await hashPassword(DEMO_PASSWORD);
     const users = new Map<string, User>();
     for (const p of people) {
@@ -75,6 +75,7 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
     }
     await seedDemoShelf(m, shop.id);
     await seedDemoPours(m, shop.id, users);
+    await seedDemoMould(m, shop.id, users);
     return true;
   });
 }

@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
 import { z } from 'zod';
-import { CavityFill, FillQuery, Id, LayerVolumes, LayerVolumesQuery, MoldList, MoldListQuery, MoldUploadFields, MoldView } from '@gelpoint/contracts';
+import { FillQuery, Id, LayerVolumes, LayerVolumesQuery, MoldFill, MoldList, MoldListQuery, MoldUploadFields, MoldView, UpdateMoldRequest } from '@gelpoint/contracts';
 import type { RouteRegistry } from '../../http/route-registry';
 import { stlUpload } from './mold-upload';
 import type { Molds } from './molds.service';
@@ -27,12 +27,43 @@ export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number
     molds.get(auth.shopId, params.id),
   );
   api.add(
-    { method: 'get', path: '/molds/:id/fill', tag: 'molds', summary: 'Fill at a level (mm, report frame) with a dam, from the stored analysis', access: 'member', params: IdParams, query: FillQuery, response: CavityFill },
-    ({ auth, params, query }) => molds.fill(auth.shopId, params.id, query.level, query.dam, query.depthMap === 'true'),
+    {
+      method: 'patch',
+      path: '/molds/:id',
+      tag: 'molds',
+      summary: "Rename a mould, attach it to a piece (pieceId) or detach it (null), or correct its units or up axis: a new frame reads the stored file again in the background, as an upload does",
+      access: ['lead', 'maker'],
+      params: IdParams,
+      body: UpdateMoldRequest,
+      response: MoldView,
+    },
+    ({ auth, params, body }) => molds.update(auth, params.id, body),
   );
   api.add(
-    { method: 'get', path: '/molds/:id/layers', tag: 'molds', summary: 'Volume of each layer between the given levels (mm)', access: 'member', params: IdParams, query: LayerVolumesQuery, response: LayerVolumes },
-    ({ auth, params, query }) => molds.layers(auth.shopId, params.id, query.levels, query.dam),
+    {
+      method: 'get',
+      path: '/molds/:id/fill',
+      tag: 'molds',
+      summary: "Fill at a level with a dam, from the stored analysis. The level is the height of the resin surface above the cavity floor (from=floor, the default) or in the mould's own frame (from=mould); the answer gives it both ways",
+      access: 'member',
+      params: IdParams,
+      query: FillQuery,
+      response: MoldFill,
+    },
+    ({ auth, params, query }) => molds.fill(auth.shopId, params.id, { levelMm: query.level, from: query.from, dam: query.dam, withDepthMap: query.depthMap === 'true' }),
+  );
+  api.add(
+    {
+      method: 'get',
+      path: '/molds/:id/layers',
+      tag: 'molds',
+      summary: "Volume of each layer between the given levels (mm above the cavity floor, or in the mould's frame with from=mould)",
+      access: 'member',
+      params: IdParams,
+      query: LayerVolumesQuery,
+      response: LayerVolumes,
+    },
+    ({ auth, params, query }) => molds.layers(auth.shopId, params.id, { levelsMm: query.levels, from: query.from, dam: query.dam }),
   );
   api.add({ method: 'get', path: '/molds/:id/stl', tag: 'molds', summary: 'The uploaded mould file (STL, 3MF or OBJ) as it came, as a download', access: 'member', params: IdParams }, async ({ auth, params, res }) => {
     const { bytes, fileName } = await molds.stl(auth.shopId, params.id);
@@ -43,8 +74,19 @@ export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number
     res.status(200).end(bytes);
     return undefined;
   });
-  api.add({ method: 'delete', path: '/molds/:id', tag: 'molds', summary: 'Delete a mould and its file', access: ['lead', 'maker'], params: IdParams }, async ({ auth, params }) => {
-    await molds.remove(auth, params.id);
-    return undefined;
-  });
+  api.add(
+    {
+      method: 'delete',
+      path: '/molds/:id',
+      tag: 'molds',
+      summary:
+        "Delete a mould and its file. Refused with 409, naming the plans, while pour plans take their cavity from it (rather than archived: a plan is worked out again from its mould's analysis whenever it is saved, so the mould must stay whole until the maker has moved or deleted those plans)",
+      access: ['lead', 'maker'],
+      params: IdParams,
+    },
+    async ({ auth, params }) => {
+      await molds.remove(auth, params.id);
+      return undefined;
+    },
+  );
 }

@@ -2,14 +2,16 @@ import { createHash } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { planCavityFromMold } from '@gelpoint/core';
 import { MOLD_ANALYSIS_CHANNEL, Mold, MoldFile, Piece, type MoldFormat, type UpAxis } from '@gelpoint/db';
-import type { Dam, MoldView } from '@gelpoint/contracts';
-import { curve, fillAt, layerVolumes } from '@gelpoint/mesh';
+import type { CavityReport, Dam, LevelFrom, MoldFill, MoldView, UpdateMoldRequest } from '@gelpoint/contracts';
+import { curve, fillAt, layerVolumes, type CavityModel } from '@gelpoint/mesh';
 import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { UploadQuota } from '../uploads/upload-quota';
 import type { MoldCavityLookup } from '../pour-plans/pour-plans.service';
 import { AnalysisCache } from './mold-analysis-cache';
+import { aboveFloor, floorOf, inMouldFrame } from './mold-levels';
+import { namedList, plansUsingMold } from './mold-users';
 import { fillView, moldView } from './mold-views';
 import { RecentlyUsed } from './recently-used';
 import type { StlChecker } from './stl-check';
@@ -34,7 +36,7 @@ const extensionOf: Record<MoldFormat, string> = { stl: 'stl', '3mf': '3mf', obj:
 /** Reader refusals that are about size: the file unpacks to more than the service reads. */
 const tooLargeCodes = new Set(['threemf_too_large']);
 
-/** Levels sampled for a plan's curve between the cavity's lowest point and the fill level. */
+/** Levels sampled for a plan's curve between the cavity floor and the fill level. */
 const PLAN_CURVE_POINTS = 241;
 
 export class Molds {
@@ -89,18 +91,38 @@ export class Molds {
   }
 
   async get(shopId: string, id: string): Promise<MoldView> {
-    const mold = await this.ds.getRepository(Mold).findOne({ where: { id, shopId }, select: summarySelect });
+    const find = () => this.ds.getRepository(Mold).findOne({ where: { id, shopId }, select: summarySelect });
+    let mold = await find();
     if (!mold) throw notFound('mould');
-    return moldView({ ...mold, report: await this.reportOf(mold) } as Mold);
+    // A report is shown only with its analysis finished: while the mould is read again it would describe the old reading.
+    const report = mold.status === 'ready' ? await this.reportOf(mold) : null;
+    // Reading an outdated analysis queued the mould again: the view says so.
+    if (mold.status === 'ready' && report === null) mold = (await find()) ?? mold;
+    return moldView({ ...mold, report } as Mold);
   }
 
-  /** A report never changes once analysed, so the large jsonb is read once per analysis, not per view. */
+  /**
+   * A report never changes once analysed, so the large jsonb is read once per analysis, not per view. One written
+   * before reports named the cavity floor gets it from the analysis; null when that analysis cannot answer (an
+   * outdated one goes back in the queue).
+   */
   private async reportOf(mold: Mold): Promise<Mold['report']> {
-    const key = mold.status === 'ready' && mold.analysedAt ? `${mold.id}@${mold.analysedAt.toISOString()}` : undefined;
+    const key = mold.analysedAt ? `${mold.id}@${mold.analysedAt.toISOString()}` : undefined;
     const hit = key ? this.reports.get(key) : undefined;
     if (hit) return hit;
     const rows = (await this.ds.query('SELECT report FROM molds WHERE id = $1', [mold.id])) as { report: Mold['report'] }[];
-    const report = rows[0]?.report ?? null;
+    let report = rows[0]?.report ?? null;
+    if (report && !('floorMm' in report)) {
+      let model: CavityModel;
+      try {
+        model = await this.cache.model(this.ds.manager, mold.shopId, mold.id);
+      } catch (err) {
+        if (err instanceof AppError && err.kind === 'conflict') return null;
+        throw err;
+      }
+      const floorMm: CavityReport['floorMm'] = { outline: floorOf(model, 'outline'), box: floorOf(model, 'box') };
+      report = { ...report, floorMm };
+    }
     if (key && report) this.reports.set(key, report);
     return report;
   }
@@ -130,44 +152,97 @@ export class Molds {
     return { bytes: rows[0].bytes, fileName: `${rows[0].name.replace(/[^A-Za-z0-9_-]+/g, '-').slice(0, 60) || 'mould'}.${extensionOf[rows[0].format]}` };
   }
 
+  async update(auth: AuthContext, id: string, change: UpdateMoldRequest): Promise<MoldView> {
+    await this.ds.transaction(async (m) => {
+      const mold = await m.findOne(Mold, { where: { id, shopId: auth.shopId }, select: { id: true, name: true, pieceId: true, units: true, upAxis: true }, lock: { mode: 'pessimistic_write' } });
+      if (!mold) throw notFound('mould');
+      if (change.pieceId && !(await m.findOneBy(Piece, { id: change.pieceId, shopId: auth.shopId }))) throw notFound('piece');
+      const before = { name: mold.name, pieceId: mold.pieceId, units: mold.units, upAxis: mold.upAxis };
+      const next = { ...before, ...change };
+      const reread = next.units !== before.units || next.upAxis !== before.upAxis;
+      await m.update(Mold, { id }, { name: next.name, pieceId: next.pieceId, units: next.units, upAxis: next.upAxis });
+      if (reread) {
+        // The stored file is read again in the corrected frame, exactly as after an upload; the old report goes with it.
+        await m.query(
+          `UPDATE molds SET status = 'queued', progress = 0, attempts = 0, locked_until = NULL, error_code = NULL, error_message = NULL,
+                  report = NULL, analysis = NULL, analysed_at = NULL, updated_at = now()
+            WHERE id = $1`,
+          [id],
+        );
+        await m.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, id]);
+      }
+      const changed = Object.fromEntries(Object.entries(change).filter(([k, v]) => before[k as keyof typeof before] !== v));
+      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'mold.update', objectType: 'mold', objectId: id, detail: { before, change: changed, reanalysed: reread } });
+    });
+    return this.get(auth.shopId, id);
+  }
+
   async remove(auth: AuthContext, id: string): Promise<void> {
     await this.ds.transaction(async (m) => {
-      const mold = await m.findOne(Mold, { where: { id, shopId: auth.shopId }, select: { id: true, name: true } });
+      const mold = await m.findOne(Mold, { where: { id, shopId: auth.shopId }, select: { id: true, name: true }, lock: { mode: 'pessimistic_write' } });
       if (!mold) throw notFound('mould');
+      const plans = await plansUsingMold(m, auth.shopId, id);
+      if (plans.length > 0) {
+        const one = plans.length === 1;
+        throw new AppError(
+          'conflict',
+          'mold_in_use',
+          `“${mold.name}” is the cavity of the pour ${one ? 'plan' : 'plans'} ${namedList(plans)}, so it stays: delete ${one ? 'that plan' : 'those plans'}, or plan ${one ? 'it' : 'them'} with another mould or a quick shape, first.`,
+        );
+      }
       await m.delete(Mold, { id });
       await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'mold.delete', objectType: 'mold', objectId: id, detail: { name: mold.name } });
     });
   }
 
-  async fill(shopId: string, id: string, levelMm: number, dam: Dam, withDepthMap: boolean) {
+  async fill(shopId: string, id: string, q: { levelMm: number; from: LevelFrom; dam: Dam; withDepthMap: boolean }): Promise<MoldFill> {
     const model = await this.cache.model(this.ds.manager, shopId, id);
-    const f = fillAt(model, levelMm, dam);
+    const floorMm = floorOf(model, q.dam);
+    const levelInMouldMm = inMouldFrame(q.levelMm, q.from, floorMm);
+    const f = fillAt(model, levelInMouldMm, q.dam);
     if (!f.ok) throw new AppError('bad_request', f.error.code, f.error.message, { level: f.error.message });
-    return fillView(f.value, withDepthMap);
+    return {
+      ...fillView(f.value, q.withDepthMap),
+      levelMm: q.levelMm,
+      levelFrom: q.from,
+      floorMm,
+      levelAboveFloorMm: q.from === 'floor' ? q.levelMm : aboveFloor(levelInMouldMm, floorMm),
+      levelInMouldMm,
+    };
   }
 
-  async layers(shopId: string, id: string, levelsMm: number[], dam: Dam) {
+  async layers(shopId: string, id: string, q: { levelsMm: number[]; from: LevelFrom; dam: Dam }) {
     const model = await this.cache.model(this.ds.manager, shopId, id);
-    const v = layerVolumes(model, levelsMm, dam);
+    const floorMm = floorOf(model, q.dam);
+    const v = layerVolumes(model, q.levelsMm.map((l) => inMouldFrame(l, q.from, floorMm)), q.dam);
     if (!v.ok) throw new AppError('bad_request', v.error.code, v.error.message, { levels: v.error.message });
-    return { dam, layers: v.value.map((volumeMm3, i) => ({ fromMm: levelsMm[i]!, toMm: levelsMm[i + 1]!, volumeMm3 })) };
+    return { dam: q.dam, levelFrom: q.from, floorMm, layers: v.value.map((volumeMm3, i) => ({ fromMm: q.levelsMm[i]!, toMm: q.levelsMm[i + 1]!, volumeMm3 })) };
   }
 
-  /** The pour plan's cavity at a fill level, from the stored analysis (same path the browser takes). */
-  readonly cavityForPlan: MoldCavityLookup = async (m: EntityManager, shopId, moldId, dam, fillLevelMm) => {
-    const model = await this.cache.model(m, shopId, moldId);
-    const f = fillAt(model, fillLevelMm, dam);
-    if (!f.ok) throw new AppError('unprocessable', f.error.code, f.error.message);
-    const bottom = model.analysis.bboxMm.min[2];
-    const levels = Array.from({ length: PLAN_CURVE_POINTS }, (_, i) => bottom + ((fillLevelMm - bottom) * i) / (PLAN_CURVE_POINTS - 1));
-    // The floor is where the curve bends; sampling it exactly keeps the first layer from starting too high.
-    const floor = model.analysis.exact?.lowestFloorMm;
-    if (floor !== undefined && floor > bottom && floor < fillLevelMm) levels.push(floor);
-    const c = curve(model, levels.sort((a, b) => a - b), dam);
-    if (!c.ok) throw new AppError('unprocessable', c.error.code, c.error.message);
-    const planned = planCavityFromMold({ curve: dedupeLevels(c.value), wettedAreaMm2: f.value.wettedAreaMm2, maxDepthMm: f.value.maxDepthMm }, fillLevelMm);
-    if (!planned.ok) throw new AppError('unprocessable', planned.error.code, planned.error.message);
-    return planned.value;
+  /** The pour plan's view of a mould's stored analysis (the same path the browser takes). */
+  readonly cavityForPlan: MoldCavityLookup = {
+    cavity: async (m: EntityManager, shopId, moldId, dam, levelAboveFloorMm) => {
+      const model = await this.cache.model(m, shopId, moldId);
+      const floor = floorOf(model, dam);
+      const rim = model.analysis.bboxMm.max[2];
+      if (!(levelAboveFloorMm > 0)) {
+        throw new AppError('unprocessable', 'fill_below_floor', `The fill level ${levelAboveFloorMm} mm is not above the cavity floor: no resin would be poured; give the height of the resin surface above the floor.`);
+      }
+      if (floor + levelAboveFloorMm > rim + 1e-9) {
+        throw new AppError('unprocessable', 'fill_above_report', `The fill level ${levelAboveFloorMm} mm is above the top of the mould, ${aboveFloor(rim, floor)} mm above its cavity floor; choose a level inside the mould, or dam it higher and report again.`);
+      }
+      const top = Math.min(rim, floor + levelAboveFloorMm);
+      const f = fillAt(model, top, dam);
+      if (!f.ok) throw new AppError('unprocessable', f.error.code, f.error.message);
+      // Sampled from the floor, where the curve bends, so the first layer starts where the resin does.
+      const levels = Array.from({ length: PLAN_CURVE_POINTS }, (_, i) => floor + ((top - floor) * i) / (PLAN_CURVE_POINTS - 1));
+      const c = curve(model, levels, dam);
+      if (!c.ok) throw new AppError('unprocessable', c.error.code, c.error.message);
+      const planned = planCavityFromMold({ curve: dedupeLevels(c.value), wettedAreaMm2: f.value.wettedAreaMm2, maxDepthMm: f.value.maxDepthMm }, top);
+      if (!planned.ok) throw new AppError('unprocessable', planned.error.code, planned.error.message);
+      return planned.value;
+    },
+    floorMm: async (m: EntityManager, shopId, moldId, dam) => floorOf(await this.cache.model(m, shopId, moldId), dam),
   };
 }
 

@@ -43,17 +43,25 @@ describe('mould upload and cavity report', { timeout: 90_000 }, () => {
     expect(mold.status).toBe('ready');
     expect(mold.report.watertight).toBe(true);
     expect(mold.report.bboxMm).toEqual({ min: [0, 0, 0], max: [100, 60, 30] });
+    // The pocket's floor, with dams along the outline or a box dam round the (rectangular) blank alike.
+    expect(mold.report.floorMm).toEqual({ outline: 10, box: 10 });
     expect(mold.report.fillToTop.volumeMm3).toBeCloseTo(prism(30), -1);
     expect(mold.report.fillToTop.maxDepthMm).toBeCloseTo(20, 3);
     expect(mold.report.fillToTop.trappedAirMm3).toBeCloseTo(0, 3);
     // Wetted area: floor 80 × 40 plus walls 2 · (80 + 40) · 20 (rectangle areas).
     expect(mold.report.fillToTop.wettedAreaMm2).toBeCloseTo(80 * 40 + 2 * (80 + 40) * 20, -1);
-    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 20, dam: 'outline' }).set(bearer(shop.lead)).expect(200)).body;
+    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 20, from: 'mould', dam: 'outline' }).set(bearer(shop.lead)).expect(200)).body;
     expect(fill.volumeMm3).toBeCloseTo(prism(20), -1);
+    expect(fill).toMatchObject({ levelMm: 20, levelFrom: 'mould', floorMm: 10, levelAboveFloorMm: 10, levelInMouldMm: 20 });
     expect(fill.depthMap).toBeUndefined();
-    const withMap = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 20, depthMap: 'true' }).set(bearer(maker)).expect(200)).body;
+    // By default the level is the resin's height above the pocket floor: 10 mm of resin is the same fill.
+    const withMap = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 10, depthMap: 'true' }).set(bearer(maker)).expect(200)).body;
+    expect(withMap).toMatchObject({ levelMm: 10, levelFrom: 'floor', floorMm: 10, levelAboveFloorMm: 10, levelInMouldMm: 20 });
+    expect(withMap.volumeMm3).toBeCloseTo(prism(20), -1);
     expect(Math.max(...withMap.depthMap.depthsMm)).toBeCloseTo(10, 3);
-    const layers = (await h.http().get(`/api/molds/${res.body.id}/layers`).query({ levels: '10,20,30' }).set(bearer(maker)).expect(200)).body;
+    const layers = (await h.http().get(`/api/molds/${res.body.id}/layers`).query({ levels: '0,10,20' }).set(bearer(maker)).expect(200)).body;
+    expect(layers).toMatchObject({ levelFrom: 'floor', floorMm: 10 });
+    expect(layers.layers.map((l: { fromMm: number; toMm: number }) => [l.fromMm, l.toMm])).toEqual([[0, 10], [10, 20]]);
     expect(layers.layers.map((l: { volumeMm3: number }) => Math.round(l.volumeMm3))).toEqual([prism(20), prism(20)]);
     const list = (await h.http().get('/api/molds').set(bearer(maker)).expect(200)).body;
     expect(list.items.find((m: { id: string }) => m.id === res.body.id).fillVolumeToTopMm3).toBeCloseTo(prism(30), -1);
@@ -92,7 +100,9 @@ describe('mould upload and cavity report', { timeout: 90_000 }, () => {
     const report = JSON.parse(cli.stdout);
     const res = await upload(maker, stl, { units: 'mm' }).expect(202);
     analyseQueuedMoulds();
-    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 25, dam: 'box' }).set(bearer(maker)).expect(200)).body;
+    // The command reads levels in the file's own frame, as a CAD program shows them.
+    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 25, from: 'mould', dam: 'box' }).set(bearer(maker)).expect(200)).body;
+    expect(report.fill.levelAboveFloorMm).toBeCloseTo(fill.levelAboveFloorMm, 9);
     expect(fill.volumeMm3).toBeCloseTo(report.fill.volumeMm3, 6);
     expect(fill.wettedAreaMm2).toBeCloseTo(report.fill.wettedAreaMm2, 6);
     expect(fill.maxDepthMm).toBeCloseTo(report.fill.maxDepthMm, 6);

@@ -8,11 +8,11 @@ import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { quickShapeCavity } from './plan-cavity';
+import { measuredFromFloor, storedInputs, type MoldCavityLookup } from './plan-level';
+
+export type { MoldCavityLookup };
 
 type PlanInput = z.output<typeof PourPlanInputSchema>;
-
-/** Finds the cavity a mould's stored analysis gives at a level; provided by the molds module. */
-export type MoldCavityLookup = (m: EntityManager, shopId: string, moldId: string, dam: 'outline' | 'box', fillLevelMm: number) => Promise<{ cavity: PlanCavity; fillLevelMm: number }>;
 
 async function activeProduct<T extends ResinSystem | Pigment>(m: EntityManager, entity: new () => T, shopId: string, id: string, what: string): Promise<T> {
   const row = (await m.findOne(entity, { where: { id, shopId } as never })) as T | null;
@@ -35,7 +35,7 @@ async function compute(m: EntityManager, shopId: string, input: PlanInput, moldC
     if (!shaped.ok) throw new AppError('unprocessable', shaped.error.code, shaped.error.message);
     cavity = { curve: shaped.value.curve, wettedAreaMm2: shaped.value.wettedAreaMm2 };
   } else {
-    ({ cavity, fillLevelMm } = await moldCavity(m, shopId, input.cavity.moldId, input.cavity.dam, input.fillLevelMm));
+    ({ cavity, fillLevelMm } = await moldCavity.cavity(m, shopId, input.cavity.moldId, input.cavity.dam, input.fillLevelMm));
   }
 
   const snapshot = {
@@ -68,13 +68,13 @@ function totalGramsOf(plan: CorePourPlan): number {
   return (plan.sealCoat?.totals.totalGrams ?? 0) + (plan.deepPour?.totals.totalGrams ?? 0);
 }
 
-function view(p: PourPlan): PourPlanView {
+function view(p: PourPlan, inputs: Record<string, unknown> = p.inputs): PourPlanView {
   return {
     id: p.id,
     pieceId: p.pieceId,
     moldId: p.moldId,
     name: p.name,
-    inputs: p.inputs,
+    inputs,
     productSnapshot: p.productSnapshot,
     result: p.result,
     createdBy: p.createdBy ? { id: p.createdBy.id, name: p.createdBy.name } : null,
@@ -102,7 +102,7 @@ export class PourPlans {
   async get(shopId: string, id: string): Promise<PourPlanView> {
     const p = await this.ds.getRepository(PourPlan).findOne({ where: { id, shopId }, relations: { createdBy: true } as never });
     if (!p) throw notFound('pour plan');
-    return view(p);
+    return view(p, await storedInputs(this.ds.manager, shopId, p.inputs, this.moldCavity));
   }
 
   async list(shopId: string, q: { pieceId?: string; limit: number; offset: number }) {
@@ -118,8 +118,9 @@ export class PourPlans {
     };
   }
 
-  async create(auth: AuthContext, input: PlanInput): Promise<PourPlanView> {
+  async create(auth: AuthContext, asked: PlanInput): Promise<PourPlanView> {
     const id = await this.ds.transaction(async (m) => {
+      const input = await measuredFromFloor(m, auth.shopId, asked, this.moldCavity);
       const { result, snapshot } = await compute(m, auth.shopId, input, this.moldCavity, await shopScale(m, auth.shopId));
       const plan = await m.save(
         m.create(PourPlan, {
@@ -139,10 +140,11 @@ export class PourPlans {
     return this.get(auth.shopId, id);
   }
 
-  async replace(auth: AuthContext, id: string, input: PlanInput): Promise<PourPlanView> {
+  async replace(auth: AuthContext, id: string, asked: PlanInput): Promise<PourPlanView> {
     await this.ds.transaction(async (m) => {
       const plan = await m.findOne(PourPlan, { where: { id, shopId: auth.shopId }, lock: { mode: 'pessimistic_write' } });
       if (!plan) throw notFound('pour plan');
+      const input = await measuredFromFloor(m, auth.shopId, asked, this.moldCavity);
       const { result, snapshot } = await compute(m, auth.shopId, input, this.moldCavity, await shopScale(m, auth.shopId));
       Object.assign(plan, {
         pieceId: input.pieceId,

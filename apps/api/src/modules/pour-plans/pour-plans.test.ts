@@ -53,14 +53,15 @@ describe('pour plans', () => {
     const stl = binaryStl(pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 10, 90, 50], floorZ: 10 }));
     const mold = (await h.http().post('/api/molds').set(bearer(maker)).attach('file', stl, 'pocket.stl').field('pieceId', piece.id).expect(202)).body;
     analyseQueuedMoulds();
-    const body = { pieceId: piece.id, name: 'From the mould', cavity: { source: 'mold', moldId: mold.id }, fillLevelMm: 30, deepPour: { resinSystemId: product.id }, overPourPct: 0, shopTempC: 22 };
+    // The fill level is the resin's height above the pocket floor, as for a quick shape: 20 mm fills it to the rim.
+    const body = { pieceId: piece.id, name: 'From the mould', cavity: { source: 'mold', moldId: mold.id }, fillLevelMm: 20, deepPour: { resinSystemId: product.id }, overPourPct: 0, shopTempC: 22 };
     const plan = (await h.http().post('/api/pour-plans').set(bearer(maker)).send(body).expect(201)).body;
     // The pocket is a prism 80 × 40 × 20 mm = 64 mL (CRC, prism volume); 20 mm is one layer.
     expect(plan.result.fill.fillVolumeMl).toBeCloseTo(64, 1);
     expect(plan.result.layers).toHaveLength(1);
     expect(plan.moldId).toBe(mold.id);
-    // Below the pocket floor the level is inside the wood: nothing to pour.
-    const tooLow = await h.http().post('/api/pour-plans').set(bearer(maker)).send({ ...body, fillLevelMm: 5 }).expect(422);
+    // At or below the floor there is nothing to pour.
+    const tooLow = await h.http().post('/api/pour-plans').set(bearer(maker)).send({ ...body, fillLevelMm: -5 }).expect(422);
     expect(tooLow.body.error.code).toBe('fill_below_floor');
     // The analysis runs in a worker process of its own, started cold: on a busy machine that alone can take most of
     // the default 30 s.

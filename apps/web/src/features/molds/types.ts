@@ -1,7 +1,7 @@
-import type { CavityFill, CavityReport, LayerVolumes, MoldFileUnits, MoldFormat, MoldList, MoldStatus, MoldSummary, MoldUnits, MoldView, UpAxis } from '@gelpoint/contracts';
+import type { CavityFill, CavityReport, LayerVolumes, MoldFileUnits, MoldFill, MoldFormat, MoldList, MoldStatus, MoldSummary, MoldUnits, MoldView, UpAxis, UpdateMoldRequest } from '@gelpoint/contracts';
 import type { z } from 'zod';
 
-export type { CavityFill, CavityReport, MoldView };
+export type { CavityFill, CavityReport, MoldFill, MoldView, UpdateMoldRequest };
 export type MoldSummary = z.infer<typeof MoldSummary>;
 export type MoldList = z.infer<typeof MoldList>;
 export type MoldStatus = z.infer<typeof MoldStatus>;

@@ -19,6 +19,13 @@ describe('moldKeys', () => {
     expect(partialMatchKey(moldKeys.layers(moldId, { levelsMm: [10, 20], dam: 'box' }), moldKeys.detail(moldId))).toBe(true);
   });
 
+  it('keeps the answers of two analyses of one mould apart', () => {
+    const before = moldKeys.fill(moldId, { levelMm: 30, dam: 'outline', depthMap: false }, '2026-11-01T10:00:00.000Z');
+    const after = moldKeys.fill(moldId, { levelMm: 30, dam: 'outline', depthMap: false }, '2026-11-01T10:05:00.000Z');
+    expect(partialMatchKey(after, before)).toBe(false);
+    expect(partialMatchKey(after, moldKeys.detail(moldId))).toBe(true);
+  });
+
   it('keeps two levels and two dams apart', () => {
     expect(partialMatchKey(moldKeys.fill(moldId, { levelMm: 20, dam: 'outline', depthMap: false }), fill)).toBe(false);
     expect(partialMatchKey(moldKeys.fill(moldId, { levelMm: 30, dam: 'box', depthMap: false }), fill)).toBe(false);

@@ -5,6 +5,7 @@ import { damWords } from './DamChoice';
 
 export interface FillFiguresProps {
   fill: CavityFill;
+  /** The level: height of the resin surface above the cavity floor. */
   heightMm: number;
   unitSystem: UnitSystem;
   /** The numbers are of the level before while the new ones are on their way. */
@@ -18,7 +19,7 @@ export function FillFigures({ fill, heightMm, unitSystem, updating }: FillFigure
   return (
     <div className="flex flex-col gap-4" aria-busy={updating || undefined}>
       <p role="status" className="rounded-lg bg-resin-50 px-4 py-3 text-lg">
-        <span className="block text-sm font-semibold text-resin-700">Fill volume at {level}</span>
+        <span className="block text-sm font-semibold text-resin-700">Fill volume, resin {level} above the cavity floor</span>
         <strong className="text-3xl font-bold text-walnut-900 tabular-nums" data-testid="fill-volume">
           {volume}
         </strong>

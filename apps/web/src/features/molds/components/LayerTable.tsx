@@ -8,13 +8,12 @@ export interface LayerTableProps {
   lines: LayerLines;
   volumes: LayerVolumes | undefined;
   dam: Dam;
-  lowestMm: number;
   unitSystem: UnitSystem;
 }
 
-/** Each layer between its two lines, with the resin the stored analysis says it takes. */
-export function LayerTable({ lines, volumes, dam, lowestMm, unitSystem }: LayerTableProps) {
-  const height = (z: number) => formatLength(z - lowestMm, unitSystem).text;
+/** Each layer between its two lines (heights above the cavity floor), with the resin the stored analysis says it takes. */
+export function LayerTable({ lines, volumes, dam, unitSystem }: LayerTableProps) {
+  const height = (z: number) => formatLength(z, unitSystem).text;
   return (
     <Table caption={`Layers from the cavity floor, with ${damWords[dam]}`} showCaption>
       <Thead>

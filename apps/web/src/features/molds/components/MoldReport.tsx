@@ -5,9 +5,10 @@ import { ErrorAlert } from '../../../components/ui/ErrorAlert';
 import { useMoldFill } from '../api/get-mold-fill';
 import { useMoldLayers } from '../api/get-mold-layers';
 import { useDebouncedValue } from '../hooks/use-debounced-value';
-import type { CavityFill, CavityReport, Dam, MoldView } from '../types';
+import type { CavityReport, Dam, MoldFill, MoldView } from '../types';
 import { mmPerFileUnit } from '../utils/file-units';
 import { layerLines } from '../utils/layer-lines';
+import { curveAboveFloor, curveFromLayers, floorOf, levelsToRim, rimAboveFloorMm, storedFillToTop } from '../utils/level-datum';
 import { readOptionalLength } from '../utils/length-input';
 import { moldCautions } from '../utils/mold-cautions';
 import { warningNotes } from '../utils/mold-warnings';
@@ -29,13 +30,15 @@ import { VolumePlot } from './VolumePlot';
 // Numbers follow the slider within a blink; the heavier depth map waits until it rests.
 const fillDebounceMs = 120;
 const depthMapDebounceMs = 400;
+// The box dam's curve is not stored with the report: asked for at this many heights from the floor to the rim.
+const boxCurvePoints = 101;
 
 // Levels travel in query keys and URLs; a micrometre is finer than any mould is cut.
 function roundLevel(levelMm: number): number {
   return Math.round(levelMm * 1000) / 1000;
 }
 
-function withoutDepthMap(fill: CavityFill): CavityFill {
+function withoutDepthMap(fill: MoldFill): MoldFill {
   const { depthMap: _dropped, ...numbers } = fill;
   return numbers;
 }
@@ -46,31 +49,39 @@ export interface MoldReportProps {
   unitSystem: UnitSystem;
 }
 
-/** A measured mould: pick a level and a dam, read the numbers, see it in 3D, on the curve and on the depth map. */
+/**
+ * A measured mould: pick a level and a dam, read the numbers, see it in 3D, on the curve and on the depth map. The
+ * level is the height of the resin surface above the cavity floor, as everywhere in Gelpoint; the mould file's own
+ * frame is shown beside it.
+ */
 export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
-  const lowestMm = report.bboxMm.min[2];
-  const topMm = roundLevel(report.bboxMm.max[2]);
-  const spanMm = report.bboxMm.max[2] - lowestMm;
-  const [heightMm, setHeightMm] = useState(spanMm);
   const [dam, setDam] = useState<Dam>(report.fillToTop.dam);
+  const floorMm = floorOf(report, dam);
+  const spanMm = rimAboveFloorMm(report, dam);
+  const [heightMm, setHeightMm] = useState(() => rimAboveFloorMm(report, report.fillToTop.dam));
   const [layerText, setLayerText] = useState('');
 
-  const levelMm = roundLevel(lowestMm + heightMm);
+  // A dam whose floor is lower leaves more room to the rim; one whose floor is higher caps the level there.
+  const levelMm = roundLevel(Math.min(heightMm, spanMm));
   const numbersLevel = useDebouncedValue(levelMm, fillDebounceMs);
   const mapLevel = useDebouncedValue(levelMm, depthMapDebounceMs);
-  const storedAt = (level: number) => level === topMm && dam === report.fillToTop.dam;
-  const numbers = useMoldFill(mold.id, { levelMm: numbersLevel, dam, depthMap: false }, storedAt(numbersLevel) ? withoutDepthMap(report.fillToTop) : undefined);
-  const mapped = useMoldFill(mold.id, { levelMm: mapLevel, dam, depthMap: true }, storedAt(mapLevel) ? report.fillToTop : undefined);
-  const fill = numbers.data ?? report.fillToTop;
+  const stored = storedFillToTop(report);
+  const storedAt = (level: number) => level === stored.levelMm && dam === stored.dam;
+  const numbers = useMoldFill(mold.id, { levelMm: numbersLevel, dam, depthMap: false }, mold.analysedAt, storedAt(numbersLevel) ? withoutDepthMap(stored) : undefined);
+  const mapped = useMoldFill(mold.id, { levelMm: mapLevel, dam, depthMap: true }, mold.analysedAt, storedAt(mapLevel) ? stored : undefined);
+  const fill = numbers.data ?? stored;
   const depthMap = mapped.data?.depthMap;
+
+  const boxCurve = useMoldLayers(mold.id, dam === 'box' ? { levelsMm: levelsToRim(spanMm, boxCurvePoints), dam } : null, mold.analysedAt);
+  const curve = dam === 'outline' ? curveAboveFloor(report.curve, floorMm) : boxCurve.data?.dam === 'box' ? curveFromLayers(boxCurve.data) : null;
 
   const maxLayer = readOptionalLength(layerText, unitSystem, 'Layer thickness');
   const maxLayerMm = maxLayer.ok ? maxLayer.value : null;
   const lines =
-    maxLayerMm === null
+    maxLayerMm === null || !curve
       ? null
-      : layerLines({ curve: report.curve, wettedAreaMm2: fill.wettedAreaMm2, maxDepthMm: fill.maxDepthMm, fillLevelMm: numbersLevel, maxLayerMm });
-  const layerVolumes = useMoldLayers(mold.id, lines?.ok ? { levelsMm: lines.value.levelsMm.map(roundLevel), dam } : null);
+      : layerLines({ curve, wettedAreaMm2: fill.wettedAreaMm2, maxDepthMm: fill.maxDepthMm, fillLevelMm: numbersLevel, maxLayerMm });
+  const layerVolumes = useMoldLayers(mold.id, lines?.ok ? { levelsMm: lines.value.levelsMm.map(roundLevel), dam } : null, mold.analysedAt);
 
   const cautions = moldCautions({
     maxDepthMm: fill.maxDepthMm,
@@ -89,7 +100,7 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
       {unitsDoubt ? (
         <Card title="Check the units">
           <UnitsHint sizeInFileUnits={sizeInFileUnits} units={mold.units} unitSystem={unitSystem} />
-          <p className="mt-2 text-sm text-ink-soft">If the unit was wrong, delete this mould and upload the file again with the right one.</p>
+          <p className="mt-2 text-sm text-ink-soft">If the unit was wrong, correct it under “Name, piece and frame”: the stored file is read again.</p>
         </Card>
       ) : null}
       <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
@@ -98,8 +109,9 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
             mold={mold}
             report={report}
             fill={fill}
-            levelMm={levelMm}
-            layerLevelsMm={lines?.ok ? lines.value.levelsMm : []}
+            floorMm={floorMm}
+            levelMm={floorMm + levelMm}
+            layerLevelsMm={lines?.ok ? lines.value.levelsMm.map((l) => floorMm + l) : []}
             footprint={depthMap}
             footprintLevelMm={mapped.data?.levelMm}
             unitSystem={unitSystem}
@@ -107,10 +119,10 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
         </Card>
         <Card title="Fill">
           <div className="flex flex-col gap-5">
-            <FillLevelControl heightMm={heightMm} spanMm={spanMm} unitSystem={unitSystem} onChange={setHeightMm} />
+            <FillLevelControl key={dam} heightMm={levelMm} spanMm={spanMm} floorInMouldMm={floorMm} unitSystem={unitSystem} onChange={setHeightMm} />
             <DamChoice dam={dam} onChange={setDam} />
             {numbers.isError ? <ErrorAlert error={numbers.error} live="none" /> : null}
-            <FillFigures fill={fill} heightMm={heightMm} unitSystem={unitSystem} updating={updating} />
+            <FillFigures fill={fill} heightMm={levelMm} unitSystem={unitSystem} updating={updating} />
             <CautionList cautions={cautions.filter((c) => c.code === 'trapped_air')} label="Cautions about air" />
           </div>
         </Card>
@@ -120,7 +132,13 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
       </Card>
       <div className="grid gap-6 xl:grid-cols-2">
         <Card title="Volume and level">
-          <VolumePlot curve={report.curve} lowestMm={lowestMm} levelMm={levelMm} unitSystem={unitSystem} />
+          {curve ? (
+            <VolumePlot curve={curve} dam={dam} levelMm={levelMm} unitSystem={unitSystem} />
+          ) : boxCurve.isError ? (
+            <ErrorAlert error={boxCurve.error} live="none" />
+          ) : (
+            <p className="text-ink-soft">Working out the curve with the box dam…</p>
+          )}
         </Card>
         <Card title="Resin depth">
           <div className="flex flex-col gap-4">
@@ -139,7 +157,7 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
         <div className="flex flex-col gap-4">
           <LayerThicknessControl text={layerText} error={maxLayer.ok ? null : maxLayer.error.message} unitSystem={unitSystem} onChange={setLayerText} />
           {lines && !lines.ok ? <p className="font-semibold text-ember-700">{lines.error.message}</p> : null}
-          {lines?.ok ? <LayerTable lines={lines.value} volumes={layerVolumes.data} dam={dam} lowestMm={lowestMm} unitSystem={unitSystem} /> : null}
+          {lines?.ok ? <LayerTable lines={lines.value} volumes={layerVolumes.data} dam={dam} unitSystem={unitSystem} /> : null}
           {layerVolumes.isError ? <ErrorAlert error={layerVolumes.error} live="none" /> : null}
         </div>
       </Card>

@@ -13,6 +13,8 @@ export interface MoldView3DProps {
   mold: MoldView;
   report: CavityReport;
   fill: CavityFill;
+  /** The cavity floor, and the level, in the mould's own frame (mm). */
+  floorMm: number;
   levelMm: number;
   layerLevelsMm: readonly number[];
   footprint: DepthMap | undefined;
@@ -21,17 +23,16 @@ export interface MoldView3DProps {
   unitSystem: UnitSystem;
 }
 
-export function MoldView3D({ mold, report, fill, levelMm, layerLevelsMm, footprint, footprintLevelMm, unitSystem }: MoldView3DProps) {
+export function MoldView3D({ mold, report, fill, floorMm, levelMm, layerLevelsMm, footprint, footprintLevelMm, unitSystem }: MoldView3DProps) {
   const descriptionId = useId();
   const stl = useMoldStl(mold.id);
-  const lowestMm = report.bboxMm.min[2];
   const size = [0, 1, 2].map((k) => formatLength(report.bboxMm.max[k]! - report.bboxMm.min[k]!, unitSystem).text).join(' × ');
   const layers =
     layerLevelsMm.length > 2
       ? ` Layer lines at ${layerLevelsMm
           .slice(1)
-          .map((z) => formatLength(z - lowestMm, unitSystem).text)
-          .join(', ')}: the outline on the cavity of each layer's surface.`
+          .map((z) => formatLength(z - floorMm, unitSystem).text)
+          .join(', ')} above the cavity floor: the outline on the cavity of each layer's surface.`
       : '';
   const fallback = (
     <div className="flex h-full items-center justify-center">
@@ -67,7 +68,7 @@ export function MoldView3D({ mold, report, fill, levelMm, layerLevelsMm, footpri
         </SceneErrorBoundary>
       </div>
       <figcaption id={descriptionId} className="text-sm text-ink-soft">
-        The mould, {size}, Z up as measured. The resin surface stands {formatLength(levelMm - lowestMm, unitSystem).text} above its lowest point:{' '}
+        The mould, {size}, Z up as measured. The resin surface stands {formatLength(levelMm - floorMm, unitSystem).text} above the cavity floor:{' '}
         {formatVolume(mm3ToMl(fill.volumeMm3), unitSystem).text}, {formatLength(fill.maxDepthMm, unitSystem).text} deep at the deepest spot.{layers}
       </figcaption>
     </figure>

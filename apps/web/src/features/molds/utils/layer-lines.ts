@@ -1,7 +1,7 @@
 import { ok, planCavityFromMold, splitIntoLayers, type LayerSlice, type Result, type VolumeCurve } from '@gelpoint/core';
 
 export interface LayerLinesInput {
-  /** The report's curve: absolute levels in its frame, outline dam. */
+  /** The cavity's curve with the chosen dam; levels in any one frame (the page gives them from the cavity floor). */
   curve: VolumeCurve;
   wettedAreaMm2: number;
   maxDepthMm: number;
@@ -10,18 +10,18 @@ export interface LayerLinesInput {
 }
 
 export interface LayerLines {
-  /** The cavity floor, where the first layer starts (absolute, mm). */
+  /** The cavity floor, where the first layer starts (in the curve's frame, mm). */
   floorMm: number;
-  /** Layers with absolute levels, from the floor up. */
+  /** Layers with levels in the curve's frame, from the floor up. */
   layers: LayerSlice[];
   /** Every boundary from the floor to the fill level: what the layer-volume query asks for. */
   levelsMm: number[];
 }
 
 /**
- * Where the layers of a deep pour would meet, in the report's frame: core splits the cavity from
- * its floor to the fill level into the fewest equal layers the thickness allows, exactly as the pour
- * plan will, and the levels are shifted back to absolute heights.
+ * Where the layers of a deep pour would meet, in the curve's frame: core splits the cavity from its
+ * floor to the fill level into the fewest equal layers the thickness allows, exactly as the pour plan
+ * will, and the levels are shifted back into the curve's frame.
  */
 export function layerLines(input: LayerLinesInput): Result<LayerLines> {
   const planned = planCavityFromMold({ curve: input.curve, wettedAreaMm2: input.wettedAreaMm2, maxDepthMm: input.maxDepthMm }, input.fillLevelMm);

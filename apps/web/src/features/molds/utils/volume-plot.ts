@@ -36,8 +36,8 @@ export function plotVolumeUnit(maxVolumeMl: number, unitSystem: UnitSystem): { l
 }
 
 /**
- * The volume-versus-level curve laid out in an SVG box: heights above the mould's lowest point on x
- * (shop length unit), volume on y (shop volume unit), nice ticks on both, and a marker at the
+ * The volume-versus-level curve laid out in an SVG box: heights above `lowestMm` (the datum the fill level is
+ * measured from) on x (shop length unit), volume on y (shop volume unit), nice ticks on both, and a marker at the
  * chosen level with the volume the curve holds there.
  */
 export function volumePlot(curve: VolumeCurve, lowestMm: number, unitSystem: UnitSystem, markerLevelMm: number | null, box: PlotBox): VolumePlot {

@@ -1,17 +1,18 @@
-import { CavityFill } from '@gelpoint/contracts';
+import { MoldFill } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { pourPlanKeys } from './keys';
 
 export interface MoldFillRequest {
   moldId: string;
+  /** Height of the resin surface above the cavity floor, as the plan's fill level is. */
   levelMm: number;
   dam: 'outline' | 'box';
 }
 
 /** What the mould holds and wets at one level, with its dam: the wetted area and deepest resin for the plan. */
-export function getMoldFill({ moldId, levelMm, dam }: MoldFillRequest, signal?: AbortSignal): Promise<CavityFill> {
-  return api.get(`/molds/${encodeURIComponent(moldId)}/fill`, CavityFill, { query: { level: levelMm, dam }, ...(signal ? { signal } : {}) });
+export function getMoldFill({ moldId, levelMm, dam }: MoldFillRequest, signal?: AbortSignal): Promise<MoldFill> {
+  return api.get(`/molds/${encodeURIComponent(moldId)}/fill`, MoldFill, { query: { level: levelMm, from: 'floor', dam }, ...(signal ? { signal } : {}) });
 }
 
 export const moldFillQueryOptions = (request: MoldFillRequest) =>

@@ -8,13 +8,14 @@ export type MoldLayerVolumes = z.infer<typeof LayerVolumes>;
 
 export interface MoldLayersRequest {
   moldId: string;
+  /** Heights above the cavity floor, ascending. */
   levelsMm: readonly number[];
   dam: 'outline' | 'box';
 }
 
 /** The volume between consecutive levels with the chosen dam: the mould's curve as the plan needs it. */
 export function getMoldLayers({ moldId, levelsMm, dam }: MoldLayersRequest, signal?: AbortSignal): Promise<MoldLayerVolumes> {
-  return api.get(`/molds/${encodeURIComponent(moldId)}/layers`, LayerVolumes, { query: { levels: levelsMm.join(','), dam }, ...(signal ? { signal } : {}) });
+  return api.get(`/molds/${encodeURIComponent(moldId)}/layers`, LayerVolumes, { query: { levels: levelsMm.join(','), from: 'floor', dam }, ...(signal ? { signal } : {}) });
 }
 
 export function useMoldLayers(request: MoldLayersRequest | null) {

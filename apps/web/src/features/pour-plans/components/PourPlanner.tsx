@@ -1,22 +1,28 @@
 import type { PigmentView, ResinSystemView } from '@gelpoint/contracts';
 import { formatLength, type UnitSystem } from '@gelpoint/core';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
+import { Alert } from '../../../components/ui/Alert';
 import { Button } from '../../../components/ui/Button';
 import { ChoiceGroup } from '../../../components/ui/ChoiceGroup';
+import { ConfirmDialog } from '../../../components/ui/ConfirmDialog';
+import { DateTime } from '../../../components/ui/DateTime';
 import { Field } from '../../../components/ui/Field';
 import { FormAlert } from '../../../components/ui/FormAlert';
 import { Input } from '../../../components/ui/Input';
 import { Select } from '../../../components/ui/Select';
-import { isApiError } from '../../../lib/api-error';
+import { hasStatus, isApiError } from '../../../lib/api-error';
 import { errorNotice } from '../../../lib/error-notice';
 import { useMold } from '../api/get-mold';
 import { usePieceMolds } from '../api/get-piece-molds';
+import { useLeaveGuard } from '../hooks/use-leave-guard';
 import { useLivePlan } from '../hooks/use-live-plan';
-import { formDefaultsOf } from '../utils/form-defaults';
+import { usePlannerDraft } from '../hooks/use-planner-draft';
+import { formDefaultsOf, valuesKey } from '../utils/form-defaults';
+import type { DraftPlace } from '../utils/planner-draft';
 import { optionalNumber, requiredNumber } from '../../../lib/form-input';
-import { absorptionOptions, moldOptions, pigmentOptions, productOptions, shapeOptions } from '../utils/planner-options';
-import { shownPlannerValues, shownUnitNames, type PlannerUnits } from '../utils/planner-units';
+import { absorptionOptions, goneMoldWords, moldChoices, moldOptions, pigmentOptions, productOptions, shapeOptions, type ChosenMold } from '../utils/planner-options';
+import { baseQuantity, shownPlannerValues, shownUnitNames, type PlannerUnits } from '../utils/planner-units';
 import { fieldOfIssuePath, plannerResolver } from '../utils/planner-validation';
 import type { PlannerValues, SavedPlanInput } from '../utils/planner-values';
 import { LivePlanPanel } from './LivePlanPanel';
@@ -37,6 +43,10 @@ export interface PourPlannerProps {
   submitLabel: string;
   busy: boolean;
   save: (input: SavedPlanInput) => Promise<unknown>;
+  /** Where the unsaved form is kept in this browser: the piece, and the plan (null for a new one). */
+  draftPlace: DraftPlace;
+  /** The saved plan's updatedAt the form opened from; null for a new plan. */
+  basedOn: string | null;
 }
 
 const sourceChoices = [
@@ -56,22 +66,40 @@ function cupWasteUnits(unitSystem: UnitSystem) {
 }
 
 /** The maker's pour planner: inputs on one side, the plan they make on the other, recomputed as they type. */
-export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, unitSystem, currency, scaleResolutionG, offRatioTolerancePct, submitLabel, busy, save }: PourPlannerProps) {
+export function PourPlanner({
+  pieceId, initialValues, resinSystems, pigments, unitSystem, currency, scaleResolutionG, offRatioTolerancePct, submitLabel, busy, save, draftPlace, basedOn,
+}: PourPlannerProps) {
   const [formError, setFormError] = useState<string | null>(null);
   // The form is filled once, in the units of the shop as it was then; what it started from lets untouched values go back unchanged.
   const [units] = useState<PlannerUnits>(() => ({ unitSystem, origin: initialValues }));
+  const [original] = useState(() => formDefaultsOf(shownPlannerValues(initialValues, units.unitSystem)) as PlannerValues);
+  const draft = usePlannerDraft({ place: draftPlace, unitSystem: units.unitSystem, basedOn, original });
   const form = useForm<PlannerValues, unknown, SavedPlanInput>({
     resolver: plannerResolver(pieceId, units),
-    defaultValues: formDefaultsOf(shownPlannerValues(initialValues, units.unitSystem)),
+    defaultValues: draft.restored ? formDefaultsOf(draft.restored.values) : original,
   });
   const { errors } = form.formState;
   const values = useWatch({ control: form.control }) as PlannerValues;
   const live = useLivePlan({ values, pieceId, units, resinSystems, pigments, scaleResolutionG, offRatioTolerancePct });
   const unit = shownUnitNames(units.unitSystem);
   const molds = usePieceMolds(pieceId);
-  const chosenMold = useMold(values.cavity?.source === 'mold' && values.cavity.moldId ? values.cavity.moldId : null);
-  const moldSpan = chosenMold.data?.report?.bboxMm;
+  const chosenMoldId = values.cavity?.source === 'mold' && values.cavity.moldId ? values.cavity.moldId : null;
+  const chosenMold = useMold(chosenMoldId);
+  const chosen: ChosenMold = chosenMold.data ? { state: 'found', mold: chosenMold.data } : hasStatus(chosenMold.error, 404) ? { state: 'gone' } : { state: 'loading' };
+  const moldChoicesShown = molds.data ? moldChoices(molds.data.items, values.cavity?.moldId ?? '', chosen, pieceId) : [];
   const readyMolds = molds.data ? moldOptions(molds.data.items) : [];
+  const report = chosenMold.data?.report ?? null;
+  const dam = values.cavity?.dam ?? 'outline';
+  const floorInMouldMm = report ? report.floorMm[dam] : null;
+  const rimAboveFloorMm = report && floorInMouldMm !== null ? report.bboxMm.max[2] - floorInMouldMm : null;
+  const typedLevelMm = typeof values.fillLevelMm === 'number' ? baseQuantity(values.fillLevelMm, 'length', units.unitSystem) : Number.NaN;
+
+  const unsaved = draft.differs(values);
+  const guard = useLeaveGuard(unsaved);
+  const key = valuesKey(values);
+  // Every change goes to the draft (written a moment after typing stops); the original values again forget it. The
+  // key stands for the values, which are a new object on every render.
+  useEffect(() => draft.keep(values), [key]);
 
   const source = values.cavity?.source ?? 'shape';
   const kind = values.cavity?.shape?.kind ?? 'rectangle';
@@ -91,9 +119,13 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
 
   const onSubmit = form.handleSubmit(async (input) => {
     setFormError(null);
+    // The page a save goes to is not "leaving with unsaved changes".
+    guard.allow(true);
     try {
       await save(input);
+      draft.forget(true);
     } catch (error) {
+      guard.allow(false);
       let placed = false;
       if (isApiError(error)) {
         for (const [path, message] of Object.entries(error.fields)) {
@@ -109,6 +141,26 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
     <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
       <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5" aria-label="Pour plan">
         <FormAlert message={formError} title="Could not save the pour plan" />
+        {draft.restored ? (
+          <Alert
+            tone="info"
+            title="Your unsaved changes are back"
+            live="none"
+            actions={
+              <Button
+                variant="secondary"
+                onClick={() => {
+                  draft.forget(false);
+                  form.reset(original);
+                }}
+              >
+                Discard them
+              </Button>
+            }
+          >
+            This browser kept what you typed <DateTime iso={draft.restored.savedAt} />. Save the plan to keep it for good.
+          </Alert>
+        ) : null}
         <Field label="Plan name" hint="How the run sheet and the cure board will call it." error={errors.name?.message} required>
           {(control) => <Input {...control} maxLength={120} {...form.register('name')} />}
         </Field>
@@ -162,9 +214,14 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
             <>
               {molds.isError ? <p className="text-ember-700">The piece&apos;s moulds cannot be listed right now: {errorNotice(molds.error).message}</p> : null}
               {molds.data && readyMolds.length === 0 ? <p className="text-ink-soft">This piece has no mould with a finished cavity report yet. Plan with a quick shape meanwhile.</p> : null}
-              <Field label="Mould" error={errors.cavity?.moldId?.message} required>
-                {(control) => <Select {...control} options={readyMolds} emptyOption="Choose the mould" {...form.register('cavity.moldId')} />}
-              </Field>
+              {/* The picker waits for the piece's moulds, so a plan's own mould is selected once there is an option for it. */}
+              {molds.data ? (
+                <Field label="Mould" error={errors.cavity?.moldId?.message ?? (chosen.state === 'gone' ? goneMoldWords : undefined)} required>
+                  {(control) => <Select {...control} options={moldChoicesShown} emptyOption="Choose the mould" {...form.register('cavity.moldId')} />}
+                </Field>
+              ) : molds.isPending ? (
+                <p className="text-ink-soft">Loading the piece&apos;s moulds…</p>
+              ) : null}
               <ChoiceGroup legend="How the pour is contained" choices={damChoices} error={errors.cavity?.dam?.message} inputProps={form.register('cavity.dam')} />
             </>
           )}
@@ -172,16 +229,22 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
             label={`Fill level (${unit.length})`}
             hint={
               source === 'shape'
-                ? 'Measured up from the floor of the cavity; its full depth fills it to the rim.'
-                : moldSpan
-                  ? `In the mould report's own frame: the mould runs from ${formatLength(moldSpan.min[2], units.unitSystem).text} to ${formatLength(moldSpan.max[2], units.unitSystem).text}.`
-                  : "The level in the mould report's own frame."
+                ? 'Height of the resin surface above the floor of the cavity; its full depth fills it to the rim.'
+                : rimAboveFloorMm !== null
+                  ? `Height of the resin surface above the cavity floor, where the deepest resin stands: up to ${formatLength(rimAboveFloorMm, units.unitSystem).text} at the top of the mould.`
+                  : 'Height of the resin surface above the cavity floor, where the deepest resin stands.'
             }
             error={errors.fillLevelMm?.message}
             required
           >
             {(control) => <Input {...control} inputMode="decimal" {...number('fillLevelMm')} />}
           </Field>
+          {source === 'mold' && floorInMouldMm !== null ? (
+            <p className="text-sm text-ink-soft" data-testid="planner-level-in-mould-frame">
+              In the mould file’s own frame: cavity floor at {formatLength(floorInMouldMm, units.unitSystem).text}
+              {Number.isFinite(typedLevelMm) ? `, resin surface at ${formatLength(floorInMouldMm + typedLevelMm, units.unitSystem).text}` : ''}.
+            </p>
+          ) : null}
         </PlannerSection>
 
         <PlannerSection legend="Deep pour" hint="The product decides how thick each layer and how heavy each cup may be.">
@@ -297,6 +360,18 @@ export function PourPlanner({ pieceId, initialValues, resinSystems, pigments, un
       <div tabIndex={0} role="region" aria-label="Live numbers of this plan" className="xl:sticky xl:top-4 xl:max-h-[calc(100dvh-2rem)] xl:overflow-y-auto xl:pr-1">
         <LivePlanPanel live={live} unitSystem={unitSystem} currency={currency} />
       </div>
+      <ConfirmDialog
+        open={guard.blocker.state === 'blocked'}
+        title="Leave without saving?"
+        confirmLabel="Leave the planner"
+        cancelLabel="Stay and save"
+        tone="primary"
+        onConfirm={() => guard.blocker.proceed?.()}
+        onCancel={() => guard.blocker.reset?.()}
+      >
+        This plan has changes that are not saved. This browser keeps them as a draft and shows them again when you come back to the
+        planner; nobody else sees them until you save.
+      </ConfirmDialog>
     </div>
   );
 }

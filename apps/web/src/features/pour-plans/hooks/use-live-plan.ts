@@ -1,6 +1,7 @@
 import type { PigmentView, ResinSystemView } from '@gelpoint/contracts';
 import type { MoldFillFacts, Result } from '@gelpoint/core';
 import { useMemo } from 'react';
+import { hasStatus } from '../../../lib/api-error';
 import { errorNotice } from '../../../lib/error-notice';
 import { useMold } from '../api/get-mold';
 import { useMoldFill } from '../api/get-mold-fill';
@@ -8,6 +9,7 @@ import { useMoldLayers } from '../api/get-mold-layers';
 import { valuesKey } from '../utils/form-defaults';
 import { livePourPlan, type LivePlan } from '../utils/live-plan';
 import { curveFromLayerVolumes, planCurveLevels } from '../utils/mold-curve';
+import { goneMoldWords } from '../utils/planner-options';
 import type { PlannerUnits } from '../utils/planner-units';
 import type { PlannerValues } from '../utils/planner-values';
 import { checkPlanner, type PlannerCheck } from '../utils/planner-validation';
@@ -46,11 +48,14 @@ export function useLivePlan({ values, pieceId, units, resinSystems, pigments, sc
   const cavity = check.ok ? check.input.cavity : null;
   const moldRequest = check.ok && cavity?.source === 'mold' ? { moldId: cavity.moldId, levelMm: check.input.fillLevelMm, dam: cavity.dam } : null;
   const mold = useMold(moldRequest?.moldId ?? null);
-  const fill = useMoldFill(moldRequest);
   const report = mold.data?.report ?? null;
+  const rimMm = report && moldRequest ? report.bboxMm.max[2] - report.floorMm[moldRequest.dam] : undefined;
+  // Nothing to ask the mould for a level outside it; the plan says why.
+  const inside = moldRequest !== null && rimMm !== undefined && moldRequest.levelMm > 0 && moldRequest.levelMm <= rimMm + 1e-9;
+  const fill = useMoldFill(inside ? moldRequest : null);
   const levelMm = moldRequest?.levelMm;
-  // The curve is sampled with the chosen dam from the mould's lowest point, as the server samples it when saving.
-  const levelsMm = useMemo(() => (report && levelMm !== undefined ? planCurveLevels(report.bboxMm.min[2], levelMm) : []), [report, levelMm]);
+  // The curve is sampled with the chosen dam from the cavity floor, as the server samples it when saving.
+  const levelsMm = useMemo(() => (inside && levelMm !== undefined ? planCurveLevels(0, levelMm) : []), [inside, levelMm]);
   const layers = useMoldLayers(moldRequest && levelsMm.length >= 2 ? { moldId: moldRequest.moldId, levelsMm, dam: moldRequest.dam } : null);
   const moldFacts = useMemo<MoldFillFacts | null>(() => {
     // Answers fetched for another level or dam must not be mixed with this one.
@@ -60,8 +65,11 @@ export function useLivePlan({ values, pieceId, units, resinSystems, pigments, sc
   }, [fill.data, layers.data, levelMm, levelsMm, moldRequest?.dam]);
 
   const result = useMemo(
-    () => (check.ok ? livePourPlan(check.input, { resinSystems, pigments, scaleResolutionG, offRatioTolerancePct, moldFacts }) : null),
-    [check, resinSystems, pigments, scaleResolutionG, offRatioTolerancePct, moldFacts],
+    () =>
+      check.ok
+        ? livePourPlan(check.input, { resinSystems, pigments, scaleResolutionG, offRatioTolerancePct, moldFacts, ...(rimMm === undefined ? {} : { moldRimMm: rimMm }) })
+        : null,
+    [check, resinSystems, pigments, scaleResolutionG, offRatioTolerancePct, moldFacts, rimMm],
   );
 
   return {
@@ -73,6 +81,7 @@ export function useLivePlan({ values, pieceId, units, resinSystems, pigments, sc
 }
 
 function moldProblemOf(error: unknown, withoutReport: boolean): string | null {
+  if (hasStatus(error, 404)) return goneMoldWords;
   if (error) return errorNotice(error).message;
   if (withoutReport) return 'This mould has no finished cavity report yet. Wait for its analysis, or plan with a quick shape.';
   return null;

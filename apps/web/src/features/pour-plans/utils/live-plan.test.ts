@@ -119,24 +119,42 @@ describe('livePourPlan refuses what it cannot plan', () => {
     expect(livePourPlan(checked.input, shelf).ok).toBe(false);
   });
 
-  it('plans a mould from its report, levels measured from the cavity floor', () => {
+  it('plans a mould from its curve, the fill level a height above the cavity floor', () => {
     const checked = checkPlanner(
       trayValues((v) => {
         v.cavity.source = 'mold';
         v.cavity.moldId = testPieceId;
-        v.fillLevelMm = 40;
+        v.fillLevelMm = 30;
       }),
       testPieceId,
     );
     if (!checked.ok) throw new Error(JSON.stringify(checked.fieldErrors));
-    // A straight-walled 300 × 200 pocket whose floor sits at 10 mm in the report's frame.
-    const moldFacts = { curve: [{ levelMm: 5, volumeMm3: 0 }, { levelMm: 10, volumeMm3: 0 }, { levelMm: 40, volumeMm3: 1_800_000 }], wettedAreaMm2: 90_000, maxDepthMm: 30 };
-    const result = livePourPlan(checked.input, { ...shelf, moldFacts });
+    // A straight-walled 300 × 200 pocket, its curve sampled from the floor up as the API answers it (prism, CRC).
+    const moldFacts = { curve: [{ levelMm: 0, volumeMm3: 0 }, { levelMm: 15, volumeMm3: 900_000 }, { levelMm: 30, volumeMm3: 1_800_000 }], wettedAreaMm2: 90_000, maxDepthMm: 30 };
+    const result = livePourPlan(checked.input, { ...shelf, moldFacts, moldRimMm: 30 });
     expect(result.ok).toBe(true);
     if (!result.ok) return;
     expect(result.value.plan.fill.fillVolumeMl).toBeCloseTo(1800, 9);
     expect(result.value.plan.fill.fillLevelMm).toBe(30);
     expect(result.value.plan.layers).toHaveLength(2);
+  });
+
+  it('refuses a mould level above the top of the mould, or not above its floor, as the server does', () => {
+    const at = (level: number) => {
+      const checked = checkPlanner(
+        trayValues((v) => {
+          v.cavity.source = 'mold';
+          v.cavity.moldId = testPieceId;
+          v.fillLevelMm = level;
+        }),
+        testPieceId,
+      );
+      if (!checked.ok) throw new Error(JSON.stringify(checked.fieldErrors));
+      return livePourPlan(checked.input, { ...shelf, moldFacts: null, moldRimMm: 30 });
+    };
+    expect(at(31)).toMatchObject({ ok: false, error: { code: 'fill_above_report' } });
+    expect(at(0)).toMatchObject({ ok: false, error: { code: 'fill_below_floor' } });
+    expect(at(30)).toMatchObject({ ok: false, error: { code: 'mold_fill_pending' } });
   });
 });
 

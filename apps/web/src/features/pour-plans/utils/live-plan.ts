@@ -78,8 +78,10 @@ export interface LivePlanSources {
   scaleResolutionG: number;
   /** The shop's off-ratio tolerance (its default when not given). */
   offRatioTolerancePct?: number;
-  /** The mould report's curve with its fill at the chosen level; only for plans cast in a mould. */
+  /** The mould report's curve (levels from the cavity floor) with its fill at the chosen level; only for plans cast in a mould. */
   moldFacts?: MoldFillFacts | null;
+  /** The top of the mould above its cavity floor with the chosen dam, when its report is known. */
+  moldRimMm?: number;
 }
 
 export interface LivePlan {
@@ -107,6 +109,10 @@ export function livePourPlan(input: SavedPlanInput, sources: LivePlanSources): R
     if (!shaped.ok) return shaped;
     cavity = shaped.value;
   } else {
+    if (sources.moldRimMm !== undefined && input.fillLevelMm > sources.moldRimMm + 1e-9) {
+      return fail('fill_above_report', `The fill level is above the top of the mould, ${Math.round(sources.moldRimMm * 1000) / 1000} mm above its cavity floor; choose a level inside the mould.`);
+    }
+    if (!(input.fillLevelMm > 0)) return fail('fill_below_floor', 'The fill level is the height of the resin surface above the cavity floor; give one above zero.');
     if (!sources.moldFacts) return fail('mold_fill_pending', 'Waiting for the mould’s cavity report at this level.');
     const fromMold = planCavityFromMold(sources.moldFacts, input.fillLevelMm);
     if (!fromMold.ok) return fromMold;

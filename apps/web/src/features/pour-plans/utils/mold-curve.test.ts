@@ -3,14 +3,14 @@ import { describe, expect, it } from 'vitest';
 import { curveFromLayerVolumes, planCurveLevels } from './mold-curve';
 
 describe('planCurveLevels', () => {
-  it('samples evenly from the lowest point to the fill level', () => {
+  it('samples evenly from the cavity floor to the fill level', () => {
     const levels = planCurveLevels(-2, 38, 5);
     expect(levels).toEqual([-2, 8, 18, 28, 38]);
     expect(planCurveLevels(0, 30)).toHaveLength(241);
     expect(planCurveLevels(0, 30).at(-1)).toBe(30);
   });
 
-  it('asks for nothing when the level is not above the lowest point', () => {
+  it('asks for nothing when the level is not above the floor', () => {
     expect(planCurveLevels(10, 10)).toEqual([]);
     expect(planCurveLevels(10, 4)).toEqual([]);
   });

@@ -6,7 +6,7 @@ export const planCurvePoints = 241;
 // A thousandth of a millimetre is far below any mesh's accuracy and keeps the request short.
 const roundLevel = (levelMm: number) => Math.round(levelMm * 1000) / 1000;
 
-/** Levels from the mould's lowest point up to the fill level, evenly spaced, strictly rising. */
+/** Levels from `bottomMm` (the cavity floor, 0) up to the fill level, evenly spaced, strictly rising. */
 export function planCurveLevels(bottomMm: number, fillLevelMm: number, points: number = planCurvePoints): number[] {
   if (!(fillLevelMm > bottomMm) || points < 2) return [];
   const levels: number[] = [];
@@ -17,7 +17,7 @@ export function planCurveLevels(bottomMm: number, fillLevelMm: number, points: n
   return levels;
 }
 
-/** The volume-vs-level curve from the volumes between consecutive levels: nothing below the lowest point, then running sums. */
+/** The volume-vs-level curve from the volumes between consecutive levels: nothing below the first, then running sums. */
 export function curveFromLayerVolumes(layers: readonly { fromMm: number; toMm: number; volumeMm3: number }[]): VolumeCurve {
   const first = layers[0];
   if (!first) return [];

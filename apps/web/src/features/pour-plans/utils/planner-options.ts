@@ -1,4 +1,4 @@
-import type { MoldSummary, PigmentView, ResinSystemView } from '@gelpoint/contracts';
+import type { MoldSummary, MoldView, PigmentView, ResinSystemView } from '@gelpoint/contracts';
 import { absorptionPresets, formatLength, type AbsorptionPreset, type UnitSystem } from '@gelpoint/core';
 import type { z } from 'zod';
 import type { ShapeKind } from './planner-values';
@@ -54,4 +54,26 @@ type Mold = z.infer<typeof MoldSummary>;
 /** Only a mould whose cavity report is finished can be poured against. */
 export function moldOptions(molds: readonly Mold[]): PickerOption[] {
   return molds.filter((m) => m.status === 'ready').map((m) => ({ value: m.id, label: m.name || m.fileName }));
+}
+
+/** What the planner knows of the mould a plan names: still loading, found, or gone from the shop. */
+export type ChosenMold = { state: 'loading' } | { state: 'found'; mold: Pick<MoldView, 'id' | 'name' | 'fileName' | 'status' | 'pieceId'> } | { state: 'gone' };
+
+export const goneMoldWords = 'The mould this plan was made with is no longer in the shop; choose another mould or plan with a quick shape.';
+
+/**
+ * The piece's measured moulds, and the one the plan names even when it is not among them (moved to another piece,
+ * being measured again, or gone), so the picker always shows what the plan holds rather than an empty choice.
+ */
+export function moldChoices(molds: readonly Mold[], chosenId: string, chosen: ChosenMold, pieceId: string): PickerOption[] {
+  const options = moldOptions(molds);
+  if (!chosenId || options.some((o) => o.value === chosenId)) return options;
+  const label = (() => {
+    if (chosen.state === 'gone') return 'No longer in the shop – choose another';
+    if (chosen.state === 'loading') return 'The plan’s mould';
+    const m = chosen.mold;
+    const notes = [m.status === 'ready' ? null : 'being measured', m.pieceId === pieceId ? null : 'of another piece'].filter(Boolean);
+    return `${m.name || m.fileName}${notes.length > 0 ? ` (${notes.join(', ')})` : ''}`;
+  })();
+  return [...options, { value: chosenId, label }];
 }

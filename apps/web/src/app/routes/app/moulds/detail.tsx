@@ -1,6 +1,7 @@
 import { Id } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { data, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Card } from '../../../../components/ui/Card';
 import { DateTime } from '../../../../components/ui/DateTime';
 import { DocumentTitle } from '../../../../components/ui/DocumentTitle';
 import { PageHeader } from '../../../../components/ui/PageHeader';
@@ -11,6 +12,7 @@ import { moldQueryOptions, useMold } from '../../../../features/molds/api/get-mo
 import { AnalysisState } from '../../../../features/molds/components/AnalysisState';
 import { DeleteMoldButton } from '../../../../features/molds/components/DeleteMoldButton';
 import { MoldReport } from '../../../../features/molds/components/MoldReport';
+import { MoldSettingsForm } from '../../../../features/molds/components/MoldSettingsForm';
 import { MoldStatusBadge } from '../../../../features/molds/components/MoldStatusBadge';
 import { mayChangeMolds } from '../../../../features/molds/utils/mold-permissions';
 import { piecesQueryOptions, usePieces } from '../../../../features/pieces/api/get-pieces';
@@ -76,6 +78,13 @@ export function Component() {
             ) : (
               <AnalysisState mold={current} mayUpload={mayChange} />
             )}
+            {mayChange ? (
+              <div className="mt-6">
+                <Card title="Name, piece and frame">
+                  <MoldSettingsForm key={current.id} mold={current} pieces={pieces.data?.items ?? []} />
+                </Card>
+              </div>
+            ) : null}
             <p className="mt-6">
               <TextLink to={paths.moulds.getHref()}>Back to all moulds</TextLink>
             </p>

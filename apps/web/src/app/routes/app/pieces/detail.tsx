@@ -19,6 +19,7 @@ import { PieceStageBadge } from '../../../../features/pieces/components/PieceSta
 import { can } from '../../../../lib/authorization';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { PieceWork, prefetchPieceWork } from './piece-work';
 
 function readPieceId(params: Record<string, string | undefined>): string {
   const parsed = Id.safeParse(params.pieceId);
@@ -31,7 +32,9 @@ export const createLoader =
   (queryClient: QueryClient) =>
   async ({ params, request }: LoaderFunctionArgs) => {
     await requireSession(queryClient, request);
-    await queryClient.ensureQueryData(pieceQueryOptions(readPieceId(params)));
+    const pieceId = readPieceId(params);
+    prefetchPieceWork(queryClient, pieceId);
+    await queryClient.ensureQueryData(pieceQueryOptions(pieceId));
     return null;
   };
 
@@ -117,6 +120,7 @@ export function Component() {
               <PieceDetails piece={current} />
             </Card>
           )}
+          <PieceWork pieceId={current.id} />
           <p className="mt-6">
             <TextLink to={paths.pieces.getHref()}>Back to all pieces</TextLink>
           </p>

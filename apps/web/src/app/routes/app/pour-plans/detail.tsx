@@ -11,6 +11,7 @@ import { PageSpinner } from '../../../../components/ui/PageSpinner';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { pieceQueryOptions } from '../../../../features/pieces/api/get-piece';
+import { useMold } from '../../../../features/pour-plans/api/get-mold';
 import { usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
 import { DeletePourPlanButton } from '../../../../features/pour-plans/components/DeletePourPlanButton';
 import { PlanResult } from '../../../../features/pour-plans/components/PlanResult';
@@ -31,6 +32,7 @@ export function Component() {
   const plan = usePourPlan(planId);
   const shop = useShop();
   const piece = useQuery({ ...pieceQueryOptions(plan.data?.pieceId ?? ''), enabled: Boolean(plan.data) });
+  const mold = useMold(plan.data?.moldId ?? null);
   const mayPlan = mayPlanPours(session.role);
 
   if (plan.error) return <ErrorAlert error={plan.error} />;
@@ -49,6 +51,12 @@ export function Component() {
           <>
             For <TextLink to={paths.piece.getHref(current.pieceId)}>{piece.data?.name ?? 'its piece'}</TextLink>, saved <DateTime iso={current.updatedAt} />
             {current.createdBy ? ` by ${current.createdBy.name}` : ''}.
+            {current.moldId ? (
+              <>
+                {' '}
+                Cast in <TextLink to={paths.mould.getHref(current.moldId)}>{mold.data?.name ?? 'its mould'}</TextLink>.
+              </>
+            ) : null}
           </>
         }
         actions={

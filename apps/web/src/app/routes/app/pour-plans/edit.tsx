@@ -7,12 +7,13 @@ import { PageHeader } from '../../../../components/ui/PageHeader';
 import { PageSpinner } from '../../../../components/ui/PageSpinner';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
+import { pieceMoldsQueryOptions } from '../../../../features/pour-plans/api/get-piece-molds';
 import { pourPlanQueryOptions, usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
 import { useUpdatePourPlan } from '../../../../features/pour-plans/api/update-pour-plan';
 import { PourPlanner } from '../../../../features/pour-plans/components/PourPlanner';
 import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
 import { plannerValuesOf } from '../../../../features/pour-plans/utils/planner-values';
-import { readSavedPlan, unreadableInputsMessage } from '../../../../features/pour-plans/utils/saved-plan';
+import { mouldFrameInputsMessage, readSavedPlan, unreadableInputsMessage } from '../../../../features/pour-plans/utils/saved-plan';
 import { pigmentsQueryOptions, usePigments } from '../../../../features/shelf/api/get-pigments';
 import { resinSystemsQueryOptions, useResinSystems } from '../../../../features/shelf/api/get-resin-systems';
 import { wholeShelfQuery } from '../../../../features/shelf/utils/shelf-queries';
@@ -27,12 +28,15 @@ export const createLoader =
   async ({ params, request }: LoaderFunctionArgs) => {
     await requireSession(queryClient, request);
     const planId = readId(params, 'planId', 'pour plan');
-    await Promise.all([
+    const [plan] = await Promise.all([
       queryClient.ensureQueryData(pourPlanQueryOptions(planId)),
       queryClient.ensureQueryData(shopQueryOptions()),
       queryClient.ensureQueryData(resinSystemsQueryOptions(wholeShelfQuery)),
       queryClient.ensureQueryData(pigmentsQueryOptions(wholeShelfQuery)),
     ]);
+    // The mould picker opens on the plan's own mould: its options are there before the form is (a failure shows in
+    // the planner, where the picker says the moulds cannot be listed).
+    await queryClient.prefetchQuery(pieceMoldsQueryOptions(plan.pieceId));
     return null;
   };
 
@@ -61,7 +65,7 @@ export function Component() {
     if (!saved.ok || !saved.value.input) {
       return (
         <Alert tone="error" title="This plan cannot be opened in the planner" live="none">
-          {saved.ok ? unreadableInputsMessage : saved.error.message}
+          {saved.ok ? (saved.value.levelInMouldFrame ? mouldFrameInputsMessage : unreadableInputsMessage) : saved.error.message}
         </Alert>
       );
     }
@@ -79,6 +83,8 @@ export function Component() {
         submitLabel="Save changes"
         busy={update.isPending}
         save={(input) => update.mutateAsync({ planId, values: input })}
+        draftPlace={{ pieceId: plan.data.pieceId, planId }}
+        basedOn={plan.data.updatedAt}
       />
     );
   };

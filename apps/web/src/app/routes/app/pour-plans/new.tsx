@@ -9,6 +9,7 @@ import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { pieceQueryOptions, usePiece } from '../../../../features/pieces/api/get-piece';
 import { useCreatePourPlan } from '../../../../features/pour-plans/api/create-pour-plan';
+import { pieceMoldsQueryOptions } from '../../../../features/pour-plans/api/get-piece-molds';
 import { PourPlanner } from '../../../../features/pour-plans/components/PourPlanner';
 import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
 import { newPlannerValues } from '../../../../features/pour-plans/utils/planner-values';
@@ -31,6 +32,7 @@ export const createLoader =
       queryClient.ensureQueryData(shopQueryOptions()),
       queryClient.ensureQueryData(resinSystemsQueryOptions(wholeShelfQuery)),
       queryClient.ensureQueryData(pigmentsQueryOptions(wholeShelfQuery)),
+      queryClient.prefetchQuery(pieceMoldsQueryOptions(pieceId)),
     ]);
     return null;
   };
@@ -76,6 +78,8 @@ export function Component() {
         submitLabel="Save pour plan"
         busy={create.isPending}
         save={(input) => create.mutateAsync(input)}
+        draftPlace={{ pieceId, planId: null }}
+        basedOn={null}
       />
     );
   };
