@@ -12,6 +12,8 @@ export default defineConfig({
     environment: 'node',
     testTimeout: 30_000,
     hookTimeout: 60_000,
+    // A poll waits for a page or a worker to catch up; on a shared 2-core machine 1 s (the default) is too short.
+    expect: { poll: { timeout: 10_000, interval: 100 } },
     pool: 'forks',
     // The CLI's tests run the built command: rebuild it first when its sources changed.
     globalSetup: ['./docker-free-scripts/vitest-build-cli.ts'],

@@ -200,7 +200,7 @@ describe('a short run sheet and a cure record', () => {
       const a = Math.round((cup.partA.grams + 0.4) * 10) / 10;
       const b = Math.round((cup.partB.grams - 0.3) * 10) / 10;
       weighed.push({ a, b });
-      await apprentice.post(`/pours/${pour.id}/batches`, { planBatchIndex: cup.index, mixedAt: new Date(start + i * 14 * hour).toISOString(), lotAId: lotA.id, lotBId: lotB.id, weighedAG: a, weighedBG: b, ambientTempC: 21, rhPct: 45 });
+      await apprentice.post(`/pours/${pour.id}/batches`, { planBatchIndex: cup.index, mixedAt: new Date(start + i * 14 * hour).toISOString(), lotAId: lotA.id, lotBId: lotB.id, weighedAG: a, weighedBG: b, ambientTempC: 21, rhPct: 45, confirmUnusual: true });
     }
     const readings = Array.from({ length: 48 }, (_, k) => ({ at: new Date(start + k * 6 * hour).toISOString(), tempC: k === 7 ? 18.4 : k === 30 ? 23.6 : 21 }));
     await apprentice.post(`/pours/${pour.id}/readings`, { readings });

@@ -145,7 +145,7 @@ describe('mould upload and cavity report', { timeout: 90_000 }, () => {
     const res = await upload(maker, obj, { units: 'mm' }, 'tray.obj').expect(202);
     expect(res.body).toMatchObject({ name: 'tray', format: 'obj', units: 'mm', fileUnits: null });
     analyseQueuedMoulds();
-    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 20 }).set(bearer(maker)).expect(200)).body;
+    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 20, from: 'mould' }).set(bearer(maker)).expect(200)).body;
     expect(fill.volumeMm3).toBeCloseTo(prism(20), -1);
   });
 

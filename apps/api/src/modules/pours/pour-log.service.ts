@@ -6,6 +6,7 @@ import {
   parseIsoInstant,
   plannedBatches,
   planSteps,
+  shopTimeWords,
   stepKeyOf,
   surfaceDewPointCheck,
   weightConcerns,
@@ -78,7 +79,8 @@ export class PourLog {
     if (!state.step || !state.status || steps.findIndex((s) => s.key === state.step!.key) >= newStep) return [];
     if (state.status.nextLayerWindow !== 'not_open') return [];
     const opens = state.status.stages.find((s) => s.key === 'next_layer_opens');
-    const when = opens?.predictedAt ? ` around ${opens.predictedAt}` : '';
+    // In the shop's own clock, as every time the shop reads.
+    const when = opens?.predictedAt ? ` around ${shopTimeWords(new Date(opens.predictedAt).getTime(), settings.timeZone)}` : '';
     return [
       {
         code: 'layer_window_not_open',
