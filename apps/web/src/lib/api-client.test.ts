@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import { ApiError } from './api-error';
-import { buildUrl, createApiClient, csrfHeaderName, isSafeMethod } from './api-client';
+import { buildUrl, createApiClient, csrfHeaderName, idempotencyHeaderName, isSafeMethod } from './api-client';
 
 interface Sent {
   url: string;
@@ -80,6 +80,20 @@ describe('createApiClient', () => {
     expect(multipart?.headers.has('Content-Type')).toBe(false);
     expect(multipart?.body).toBe(form);
     expect(multipart?.headers.get(csrfHeaderName)).toBe('1');
+  });
+
+  it('sends an Idempotency-Key on every POST: the one given, or a new one per call', async () => {
+    const { sent, fetchImpl } = fakeFetch(() => json(201, { id: 'a', n: 1 }));
+    const client = createApiClient({ basePath: '/api', fetch: fetchImpl });
+    await client.post('/things', {}, Thing, { idempotencyKey: 'entry-1' });
+    await client.post('/things', {}, Thing);
+    await client.post('/things', {}, Thing);
+    await client.get('/things/a', Thing);
+    const keys = sent.map((c) => new Headers(c.init.headers).get(idempotencyHeaderName));
+    expect(keys[0]).toBe('entry-1');
+    expect(keys[1]).toMatch(/^[0-9a-f-]{36}$/);
+    expect(keys[2]).not.toBe(keys[1]);
+    expect(keys[3]).toBeNull();
   });
 
   it('does not send the CSRF header on a GET', async () => {

@@ -15,6 +15,9 @@ import {
 } from '../../../components/ui/icons';
 import { PageSpinner } from '../../../components/ui/PageSpinner';
 import { useSession } from '../../../features/auth/api/get-session';
+import { authKeys } from '../../../features/auth/api/keys';
+import { OfflineNotice } from '../../../features/offline/components/OfflineNotice';
+import { OutboxPanel } from '../../../features/offline/components/OutboxPanel';
 import { ShopSwitcher } from '../../../features/auth/components/ShopSwitcher';
 import { SignOutButton } from '../../../features/auth/components/SignOutButton';
 import { roleLabel } from '../../../lib/roles';
@@ -70,6 +73,8 @@ export function Component() {
         }
         busy={navigation.state === 'loading'}
       >
+        <OfflineNotice pageLoading={navigation.state === 'loading'} notPageData={authKeys.session()} />
+        <OutboxPanel />
         <Outlet />
       </AppFrame>
     </SignedInSessionProvider>

@@ -1,0 +1,26 @@
+import { persistQueryClientRestore, persistQueryClientSubscribe } from '@tanstack/query-persist-client-core';
+import type { QueryClient } from '@tanstack/react-query';
+import { keptForOfflineMs } from '../query-client';
+import { createIdbPersister, shouldPersistQuery } from './query-persister';
+
+const persister = createIdbPersister();
+const buster = typeof __GELPOINT_BUILD_ID__ === 'string' ? __GELPOINT_BUILD_ID__ : 'source';
+
+/**
+ * Puts back what the signed-in pages last showed, then keeps the copy up to date. Awaited before the router starts,
+ * so its loaders find the data with the network cut. A storage that fails (private mode, a full disk) only means
+ * nothing is kept: the app works as it does online.
+ */
+export async function startQueryPersistence(queryClient: QueryClient): Promise<void> {
+  try {
+    await persistQueryClientRestore({ queryClient, persister, buster, maxAge: keptForOfflineMs });
+  } catch {
+    // Already discarded by the restore; start empty.
+  }
+  persistQueryClientSubscribe({ queryClient, persister, buster, dehydrateOptions: { shouldDehydrateQuery: shouldPersistQuery } });
+}
+
+/** Forgets the stored copy (sign-out): nothing of the shop stays readable on the device. */
+export async function forgetPersistedQueries(): Promise<void> {
+  await persister.removeClient();
+}
