@@ -37,7 +37,7 @@ export async function createApp(): Promise<ReactElement> {
     },
     { forget: (options) => forgetDeviceData(outbox, options) },
   );
-  await startQueryPersistence(queryClient);
+  await startQueryPersistence(queryClient, { askAgain: [authKeys.session()] });
   outbox.start();
   router = createAppRouter(queryClient);
 

@@ -134,14 +134,26 @@ describe('createApiClient', () => {
     expect(failure).toMatchObject({ status: 200, code: 'unexpected_response' });
   });
 
-  it('reports an unreachable server as status 0', async () => {
+  it('reports an unreachable server as status 0, and says so to whoever watches the connection', async () => {
     const fetchImpl: typeof fetch = async () => {
       throw new TypeError('fetch failed');
     };
-    const failure = await createApiClient({ basePath: '/api', fetch: fetchImpl })
+    let told = 0;
+    const failure = await createApiClient({ basePath: '/api', fetch: fetchImpl, onUnreachable: () => (told += 1) })
       .get('/things', Thing)
       .catch((error: unknown) => error);
     expect(failure).toMatchObject({ status: 0, code: 'network_unreachable' });
+    expect(told).toBe(1);
+  });
+
+  it('does not count an answer with an error status as a lost connection', async () => {
+    const { fetchImpl } = fakeFetch(() => json(503, { error: { code: 'unavailable', message: 'down for a moment' } }));
+    let told = 0;
+    const failure = await createApiClient({ basePath: '/api', fetch: fetchImpl, onUnreachable: () => (told += 1) })
+      .get('/things', Thing)
+      .catch((error: unknown) => error);
+    expect(failure).toMatchObject({ status: 503 });
+    expect(told).toBe(0);
   });
 
   it('lets a cancellation through untouched', async () => {
@@ -151,9 +163,11 @@ describe('createApiClient', () => {
       throw abortError;
     };
     controller.abort();
-    const failure = await createApiClient({ basePath: '/api', fetch: fetchImpl })
+    let told = 0;
+    const failure = await createApiClient({ basePath: '/api', fetch: fetchImpl, onUnreachable: () => (told += 1) })
       .get('/things', Thing, { signal: controller.signal })
       .catch((error: unknown) => error);
     expect(failure).toBe(abortError);
+    expect(told).toBe(0);
   });
 });

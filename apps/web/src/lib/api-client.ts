@@ -2,6 +2,7 @@ import type { ZodType } from 'zod';
 import { env } from '../config/env';
 import { errorFromResponse, networkError, unexpectedResponse } from './api-error';
 import { newIdempotencyKey } from './idempotency-key';
+import { connection } from './offline/connection';
 
 export const csrfHeaderName = 'X-Gelpoint-Csrf';
 export const idempotencyHeaderName = 'Idempotency-Key';
@@ -58,6 +59,8 @@ export interface ApiClient {
 export interface ApiClientConfig {
   basePath: string;
   fetch?: typeof fetch;
+  /** Told when a request did not reach the server at all (no answer, not an error status). */
+  onUnreachable?: () => void;
 }
 
 interface Payload {
@@ -86,6 +89,7 @@ export function createApiClient(config: ApiClientConfig): ApiClient {
     } catch (error) {
       // A cancelled query must stay a cancellation, so the query library can tell it apart from a failure.
       if (options.signal?.aborted) throw error;
+      config.onUnreachable?.();
       throw networkError();
     }
     if (!response.ok) throw errorFromResponse(response.status, await response.text());
@@ -121,4 +125,4 @@ export function createApiClient(config: ApiClientConfig): ApiClient {
   };
 }
 
-export const api: ApiClient = createApiClient({ basePath: env.apiBasePath });
+export const api: ApiClient = createApiClient({ basePath: env.apiBasePath, onUnreachable: connection.unreachable });

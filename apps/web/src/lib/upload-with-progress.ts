@@ -1,6 +1,7 @@
 import { env } from '../config/env';
 import { buildUrl, csrfHeaderName, idempotencyHeaderName } from './api-client';
 import { errorFromResponse, networkError, unexpectedResponse } from './api-error';
+import { connection } from './offline/connection';
 
 export interface UploadProgress {
   sentBytes: number;
@@ -40,8 +41,12 @@ export function postFormWithProgress(path: string, body: FormData, options: Uplo
         reject(unexpectedResponse(xhr.status));
       }
     });
-    xhr.addEventListener('error', () => reject(networkError()));
-    xhr.addEventListener('timeout', () => reject(networkError()));
+    const unreachable = () => {
+      connection.unreachable();
+      reject(networkError());
+    };
+    xhr.addEventListener('error', unreachable);
+    xhr.addEventListener('timeout', unreachable);
     xhr.addEventListener('abort', () => reject(networkError()));
     xhr.send(body);
   });

@@ -20,6 +20,8 @@ export function createIdbPersister(): Persister {
     pending = undefined;
     if (client) await set(clientKey, client, store());
   };
+  // A page being left (a reload, a tab closed) writes what is pending instead of dropping it.
+  if (typeof window !== 'undefined') window.addEventListener('pagehide', () => void flush());
   return {
     persistClient: (client) => {
       pending = client;

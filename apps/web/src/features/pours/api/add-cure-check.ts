@@ -38,6 +38,8 @@ export function useAddCureCheck(pourId: string, onProgress?: (progress: UploadPr
   const queryClient = useQueryClient();
   const outbox = useOutbox();
   return useMutation({
+    // Runs with the network cut too: the outbox keeps the entry then, where a paused mutation would keep nothing.
+    networkMode: 'always',
     mutationFn: async (input: CureCheckInput): Promise<CureCheckAnswer> => {
       const pieceName = queryClient.getQueryData<PourView>(pourKeys.detail(pourId))?.piece.name;
       const label = `Cure check (${checkStageWords[input.stage].toLowerCase()})${input.photo ? ' with a photo' : ''}${pieceName ? `, ${pieceName}` : ''}`;

@@ -19,6 +19,8 @@ export function useAddReading(pourId: string) {
   const queryClient = useQueryClient();
   const outbox = useOutbox();
   return useMutation({
+    // Runs with the network cut too: the outbox keeps the entry then, where a paused mutation would keep nothing.
+    networkMode: 'always',
     mutationFn: async ({ reading, confirmUnusual }: { reading: ReadingInput; confirmUnusual: boolean }): Promise<ReadingAnswer> => {
       const pieceName = queryClient.getQueryData<PourView>(pourKeys.detail(pourId))?.piece.name;
       const label = `Reading of ${reading.tempC} °C${pieceName ? `, ${pieceName}` : ''}`;

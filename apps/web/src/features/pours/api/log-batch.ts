@@ -23,6 +23,8 @@ export function useLogBatch(pourId: string, cup: { order: number; pourLabel: str
   const queryClient = useQueryClient();
   const outbox = useOutbox();
   return useMutation({
+    // Runs with the network cut too: the outbox keeps the entry then, where a paused mutation would keep nothing.
+    networkMode: 'always',
     mutationFn: async (batch: LogBatchRequest): Promise<BatchLogAnswer> => {
       const pieceName = queryClient.getQueryData<PourView>(pourKeys.detail(pourId))?.piece.name;
       const done = await outbox.submit({ kind: 'batch', pourId, label: cupLabel(cup, pieceName), request: { type: 'json', path: batchPath(pourId), body: batch } });
