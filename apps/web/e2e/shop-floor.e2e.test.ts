@@ -274,4 +274,44 @@ describe('the shop floor', () => {
     expect(watch.problems).toEqual([]);
     await context.close();
   });
+
+  it('puts the calendar link on the phone: shown, copied, as a QR code, and replaced so the old one stops', { timeout: 90_000 }, async () => {
+    const apprentice = await apiSession(stack.baseUrl, 'apprentice@gelpoint.test');
+    const context = await e2e.browser().newContext({ ...phone, permissions: ['clipboard-read', 'clipboard-write'] });
+    const { page, watch } = await watchedPage(context, stack.baseUrl);
+    await signInThroughPage(page, stack.baseUrl, 'apprentice@gelpoint.test');
+    await page.goto(`${stack.baseUrl}/account`);
+    const panel = page.getByRole('region', { name: 'Calendar on your phone' });
+    const field = panel.getByLabel('Your calendar link');
+    const { calendarUrl } = await apprentice.get<{ calendarUrl: string }>('/me');
+    await expect.poll(() => field.inputValue()).toBe(calendarUrl);
+    expect(await field.getAttribute('readonly')).not.toBeNull();
+
+    const qr = panel.getByRole('img', { name: 'QR code of your calendar link' });
+    await expect.poll(() => qr.isVisible()).toBe(true);
+    expect(await decodeQr(qr)).toBe(calendarUrl);
+    expect(await panel.getByRole('link', { name: 'Subscribe on this device' }).getAttribute('href')).toBe(calendarUrl.replace(/^https?:/, 'webcal:'));
+
+    await panel.getByRole('button', { name: 'Copy the link' }).click();
+    await expect.poll(() => panel.getByRole('status').filter({ hasText: 'Copied' }).isVisible()).toBe(true);
+    expect(await page.evaluate(() => navigator.clipboard.readText())).toBe(calendarUrl);
+
+    const feed = await page.request.get(calendarUrl);
+    expect(feed.status()).toBe(200);
+    expect(feed.headers()['content-type']).toMatch(/^text\/calendar/);
+    await panel.getByRole('button', { name: 'New link…' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Make a new calendar link?' });
+    await expect.poll(() => dialog.getByText(/stops working at once/).isVisible()).toBe(true);
+    await dialog.getByRole('button', { name: 'Make a new link' }).click();
+    await expect.poll(() => panel.getByText('The old link no longer works.', { exact: false }).isVisible()).toBe(true);
+    const renewed = (await apprentice.get<{ calendarUrl: string }>('/me')).calendarUrl;
+    expect(renewed).not.toBe(calendarUrl);
+    await expect.poll(() => field.inputValue()).toBe(renewed);
+    await expect.poll(() => decodeQr(qr)).toBe(renewed);
+    expect((await page.request.get(calendarUrl)).status()).toBe(404);
+    expect((await page.request.get(renewed)).status()).toBe(200);
+    // The old link's 404 is the point; the page itself asked for nothing that failed.
+    expect(watch.problems).toEqual([]);
+    await context.close();
+  });
 });
