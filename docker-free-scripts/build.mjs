@@ -40,7 +40,7 @@ const nodeTargets = [
 // Everything the web build reads; its own dist, tests and benchmarks are left out.
 const webInputs = {
   dirs: ['apps/web/src', 'apps/web/public', 'packages/core/src', 'packages/contracts/src'],
-  files: ['apps/web/index.html', 'apps/web/vite.config.ts', 'apps/web/package.json', 'apps/web/tsconfig.json', 'packages/core/package.json', 'packages/contracts/package.json'],
+  files: ['apps/web/index.html', 'apps/web/vite.config.ts', 'apps/web/installable.ts', 'apps/web/package.json', 'apps/web/tsconfig.json', 'packages/core/package.json', 'packages/contracts/package.json'],
   skip: /\.test\.tsx?$/,
 };
 

@@ -204,6 +204,7 @@ export const PourListQuery = z
     status: z.enum(['active', 'released', 'machined', 'all']).default('active'),
     readyToday: z.enum(['true', 'false']).default('false'),
     pieceId: Id.optional(),
+    pourPlanId: Id.optional().describe('only the pours of this plan (a printed run sheet links to its pour)'),
     limit: z.coerce.number().int().min(1).max(200).default(50),
     offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
   })

@@ -22,6 +22,15 @@ export function openApiDocument(routes: RegisteredRoute[], serverUrl: string) {
         parameters.push({ name, in: where, required: where === 'path' || !field.safeParse(undefined).success, schema: schema(field, 'input') });
       }
     }
+    if (r.idempotent) {
+      parameters.push({
+        name: 'Idempotency-Key',
+        in: 'header',
+        required: false,
+        description: 'A key of your own (a UUID) for this one entry: sent again within 24 hours, it answers the first answer again (header Idempotent-Replayed: true) instead of creating a second record; the same key with a different request is a 422.',
+        schema: { type: 'string', minLength: 1, maxLength: 255 },
+      });
+    }
     const success = String(r.status ?? (r.response && !(r.response instanceof z.ZodUndefined) ? 200 : 204));
     const responses: Record<string, unknown> = {
       [success]: r.response && success !== '204' ? { description: 'OK', content: { 'application/json': { schema: schema(r.response, 'output') } } } : { description: 'Done, no content' },

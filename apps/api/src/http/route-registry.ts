@@ -4,6 +4,7 @@ import type { ZodType } from 'zod';
 import type { Role } from '@gelpoint/contracts';
 import { authenticate, type AuthContext } from './auth-context';
 import { AppError, fromZod } from './errors';
+import { IdempotencyStore, REPLAYED_HEADER, idempotencyKeyOf, requestFingerprint } from './idempotency';
 
 export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
@@ -27,6 +28,11 @@ export interface RouteSpec {
   middleware?: RequestHandler[];
   /** Extra text for the OpenAPI document, e.g. the multipart fields. */
   requestNote?: string;
+  /**
+   * A create a phone may send twice (its answer lost on a weak connection): with an Idempotency-Key header, the same
+   * member's same key gets the first answer again for 24 hours instead of a second record.
+   */
+  idempotent?: boolean;
 }
 
 export interface HandlerInput<A> {
@@ -47,17 +53,22 @@ export interface RegisteredRoute extends RouteSpec {
 /** Every route goes through here: validation, authentication and role checks are not optional extras. */
 export class RouteRegistry {
   readonly routes: RegisteredRoute[] = [];
+  private readonly idempotency: IdempotencyStore;
 
   constructor(
     private readonly router: Router,
     private readonly ds: DataSource,
     private readonly jwtSecret: string,
-  ) {}
+  ) {
+    this.idempotency = new IdempotencyStore(ds);
+  }
 
   add(spec: RouteSpec & { access: 'public' }, handler: Handler<AuthContext | undefined>): void;
   add(spec: RouteSpec, handler: Handler<AuthContext>): void;
   add(spec: RouteSpec, handler: Handler<any>): void {
-    this.routes.push({ ...spec, fullPath: `/api${spec.path}` });
+    const fullPath = `/api${spec.path}`;
+    if (spec.idempotent && (spec.method !== 'post' || spec.access === 'public')) throw new Error(`${fullPath}: only a members' POST can be idempotent (the key belongs to a member)`);
+    this.routes.push({ ...spec, fullPath });
     this.router[spec.method](spec.path, async (req: Request, res: Response) => {
       const auth = await authenticate(req, this.ds, this.jwtSecret);
       if (spec.access !== 'public') {
@@ -71,6 +82,19 @@ export class RouteRegistry {
       const params = parse(spec.params, req.params, 'path');
       const query = parse(spec.query, req.query, 'query');
       const body = spec.body ? parse(spec.body, req.body ?? {}, 'body') : undefined;
+      const key = spec.idempotent && auth ? idempotencyKeyOf(req) : undefined;
+      if (key && auth) {
+        const route = `POST ${fullPath}`;
+        const scope = { shopId: auth.shopId, userId: auth.userId, key, route, fingerprint: requestFingerprint(route, { params, query, body, file: req.file }) };
+        const answer = await this.idempotency.run(
+          scope,
+          async () => ({ status: spec.status ?? 200, body: await handler({ body, query, params, auth, req, res }) }),
+          (error) => req.log?.warn({ err: error, route }, 'could not keep the answer of an idempotent request'),
+        );
+        if (answer.replayed) res.setHeader(REPLAYED_HEADER, 'true');
+        res.status(answer.status).json(answer.body);
+        return;
+      }
       const result = await handler({ body, query, params, auth, req, res });
       if (res.headersSent) return;
       if (result === undefined) res.status(204).end();

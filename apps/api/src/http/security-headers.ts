@@ -12,7 +12,9 @@ export function securityHeaders() {
         'img-src': ["'self'", 'data:', 'blob:'],
         'font-src': ["'self'"],
         'connect-src': ["'self'"],
+        // The service worker and the mould-analysis workers are our own scripts; blob: for workers three.js makes.
         'worker-src': ["'self'", 'blob:'],
+        'manifest-src': ["'self'"],
         'object-src': ["'none'"],
         'base-uri': ["'self'"],
         'form-action': ["'self'"],

@@ -136,6 +136,7 @@ export function signedInPages(ids: PageFixtures): MainPage[] {
     { name: 'new pigment', path: '/shelf/pigments/new', roles: ['lead'] },
     { name: 'new lot', path: '/shelf/lots/new', roles: ['lead'] },
     { name: 'team', path: '/team', roles: ['lead'] },
+    { name: 'your account', path: '/account', roles: everyone },
     { name: 'shop settings', path: '/shop-settings', roles: ['lead'] },
     { name: 'audit', path: '/audit', roles: ['lead'] },
   ];

@@ -76,6 +76,7 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
                 { path: paths.newLot.path, lazy: lazyRoute(() => import('./routes/app/shelf/new-lot')) },
                 { path: paths.lot.path, lazy: lazyRoute(() => import('./routes/app/shelf/lot')) },
                 { path: paths.team.path, lazy: lazyRoute(() => import('./routes/app/team')) },
+                { path: paths.account.path, lazy: lazyRoute(() => import('./routes/app/account')) },
                 { path: paths.shopSettings.path, lazy: lazyRoute(() => import('./routes/app/shop-settings')) },
                 { path: paths.audit.path, lazy: lazyRoute(() => import('./routes/app/audit')) },
               ],

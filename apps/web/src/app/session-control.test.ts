@@ -42,6 +42,19 @@ describe('createSessionControl', () => {
     expect(queryClient.getQueryData(authKeys.session())).toBeNull();
   });
 
+  it('forgets the device’s offline copy on sign-out and on expiry, and what was not sent only on sign-out', async () => {
+    const forgotten: boolean[] = [];
+    const device = { forget: async ({ unsent }: { unsent: boolean }) => void forgotten.push(unsent) };
+    const queryClient = new QueryClient();
+    const { router } = fakeRouter({ pathname: '/pours/p', search: '' });
+    queryClient.setQueryData(authKeys.session(), someone);
+    await createSessionControl(queryClient, () => router, device).signedOut();
+    queryClient.setQueryData(authKeys.session(), someone);
+    createSessionControl(queryClient, () => router, device).expired();
+    await new Promise((resolve) => setTimeout(resolve, 0));
+    expect(forgotten).toEqual([true, false]);
+  });
+
   it('on expiry comes back to the page being opened, not the one being left', async () => {
     const queryClient = new QueryClient();
     const { router, moves } = fakeRouter({ pathname: '/pieces', search: '' }, { pathname: '/pieces', search: '?page=2' });

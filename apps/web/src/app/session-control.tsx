@@ -21,18 +21,28 @@ const publicPaths: readonly string[] = [paths.signIn.path, paths.createShop.path
 // keeps router.tsx → route modules → this file free of a cycle.
 export type SessionRouter = Pick<DataRouter, 'navigate' | 'state'>;
 
-export function createSessionControl(queryClient: QueryClient, getRouter: () => SessionRouter): SessionControl {
+export interface DeviceData {
+  /** Deletes what the device keeps of the shop for offline use; `unsent` also what was logged and not sent. */
+  forget(options: { unsent: boolean }): Promise<void>;
+}
+
+const keepNothing: DeviceData = { forget: async () => undefined };
+
+export function createSessionControl(queryClient: QueryClient, getRouter: () => SessionRouter, device: DeviceData = keepNothing): SessionControl {
   let leaving = false;
   const sessionHash = hashKey(authKeys.session());
 
-  // Forget the person first, so the sign-in page does not bounce back; drop their shop's data once the frame is gone.
-  const leave = async (href: string) => {
+  // Forget the person first, so the sign-in page does not bounce back; drop their shop's data once the frame is gone,
+  // and the copy kept on the device with it. What was logged offline stays through an expired session (the same
+  // person signs in again to send it) and goes with a deliberate sign-out.
+  const leave = async (href: string, unsent: boolean) => {
     if (leaving) return;
     leaving = true;
     try {
       queryClient.setQueryData(authKeys.session(), null);
       await getRouter().navigate(href, { replace: true });
       queryClient.removeQueries({ predicate: (query) => query.queryHash !== sessionHash });
+      await device.forget({ unsent });
     } finally {
       leaving = false;
     }
@@ -45,7 +55,7 @@ export function createSessionControl(queryClient: QueryClient, getRouter: () => 
     shopSwitched: async () => {
       await getRouter().navigate(paths.today.getHref(), { replace: true });
     },
-    signedOut: () => leave(paths.signIn.getHref({ notice: 'signed-out' })),
+    signedOut: () => leave(paths.signIn.getHref({ notice: 'signed-out' }), true),
     expired: () => {
       // Nobody was signed in to begin with: the loaders already send the visitor to sign in.
       if (!queryClient.getQueryData(authKeys.session())) return;
@@ -53,7 +63,7 @@ export function createSessionControl(queryClient: QueryClient, getRouter: () => 
       const { navigation, location } = getRouter().state;
       const { pathname, search } = navigation.location ?? location;
       if (publicPaths.includes(pathname) || pathname.startsWith('/invitations/')) return;
-      void leave(paths.signIn.getHref({ returnTo: `${pathname}${search}`, notice: 'session-ended' }));
+      void leave(paths.signIn.getHref({ returnTo: `${pathname}${search}`, notice: 'session-ended' }), false);
     },
   };
 }

@@ -175,6 +175,7 @@ export const paths = {
       withSearch(`/shelf/lots/${encodeURIComponent(lotId)}`, { page: link.page !== undefined && link.page > 1 ? link.page : undefined }),
   },
   team: { path: '/team', getHref: () => '/team' },
+  account: { path: '/account', getHref: () => '/account' },
   shopSettings: { path: '/shop-settings', getHref: () => '/shop-settings' },
   audit: {
     path: '/audit',

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import { ApiError } from './api-error';
-import { buildUrl, createApiClient, csrfHeaderName, isSafeMethod } from './api-client';
+import { buildUrl, createApiClient, csrfHeaderName, idempotencyHeaderName, isSafeMethod } from './api-client';
 
 interface Sent {
   url: string;
@@ -82,6 +82,20 @@ describe('createApiClient', () => {
     expect(multipart?.headers.get(csrfHeaderName)).toBe('1');
   });
 
+  it('sends an Idempotency-Key on every POST: the one given, or a new one per call', async () => {
+    const { sent, fetchImpl } = fakeFetch(() => json(201, { id: 'a', n: 1 }));
+    const client = createApiClient({ basePath: '/api', fetch: fetchImpl });
+    await client.post('/things', {}, Thing, { idempotencyKey: 'entry-1' });
+    await client.post('/things', {}, Thing);
+    await client.post('/things', {}, Thing);
+    await client.get('/things/a', Thing);
+    const keys = sent.map((c) => new Headers(c.init.headers).get(idempotencyHeaderName));
+    expect(keys[0]).toBe('entry-1');
+    expect(keys[1]).toMatch(/^[0-9a-f-]{36}$/);
+    expect(keys[2]).not.toBe(keys[1]);
+    expect(keys[3]).toBeNull();
+  });
+
   it('does not send the CSRF header on a GET', async () => {
     const { sent, fetchImpl } = fakeFetch(() => json(200, { id: 'a', n: 1 }));
     await createApiClient({ basePath: '/api', fetch: fetchImpl }).get('/things/a', Thing);
@@ -120,14 +134,26 @@ describe('createApiClient', () => {
     expect(failure).toMatchObject({ status: 200, code: 'unexpected_response' });
   });
 
-  it('reports an unreachable server as status 0', async () => {
+  it('reports an unreachable server as status 0, and says so to whoever watches the connection', async () => {
     const fetchImpl: typeof fetch = async () => {
       throw new TypeError('fetch failed');
     };
-    const failure = await createApiClient({ basePath: '/api', fetch: fetchImpl })
+    let told = 0;
+    const failure = await createApiClient({ basePath: '/api', fetch: fetchImpl, onUnreachable: () => (told += 1) })
       .get('/things', Thing)
       .catch((error: unknown) => error);
     expect(failure).toMatchObject({ status: 0, code: 'network_unreachable' });
+    expect(told).toBe(1);
+  });
+
+  it('does not count an answer with an error status as a lost connection', async () => {
+    const { fetchImpl } = fakeFetch(() => json(503, { error: { code: 'unavailable', message: 'down for a moment' } }));
+    let told = 0;
+    const failure = await createApiClient({ basePath: '/api', fetch: fetchImpl, onUnreachable: () => (told += 1) })
+      .get('/things', Thing)
+      .catch((error: unknown) => error);
+    expect(failure).toMatchObject({ status: 503 });
+    expect(told).toBe(0);
   });
 
   it('lets a cancellation through untouched', async () => {
@@ -137,9 +163,11 @@ describe('createApiClient', () => {
       throw abortError;
     };
     controller.abort();
-    const failure = await createApiClient({ basePath: '/api', fetch: fetchImpl })
+    let told = 0;
+    const failure = await createApiClient({ basePath: '/api', fetch: fetchImpl, onUnreachable: () => (told += 1) })
       .get('/things', Thing, { signal: controller.signal })
       .catch((error: unknown) => error);
     expect(failure).toBe(abortError);
+    expect(told).toBe(0);
   });
 });

@@ -1,8 +1,11 @@
 import type { ZodType } from 'zod';
 import { env } from '../config/env';
 import { errorFromResponse, networkError, unexpectedResponse } from './api-error';
+import { newIdempotencyKey } from './idempotency-key';
+import { connection } from './offline/connection';
 
 export const csrfHeaderName = 'X-Gelpoint-Csrf';
+export const idempotencyHeaderName = 'Idempotency-Key';
 
 export type HttpMethod = 'GET' | 'HEAD' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
@@ -28,6 +31,11 @@ export function buildUrl(basePath: string, path: string, query?: Readonly<Record
 export interface RequestOptions {
   query?: Readonly<Record<string, QueryValue>>;
   signal?: AbortSignal;
+  /**
+   * Sent with every POST (a new one per call when not given): a create the server did receive, sent again with the
+   * same key, answers its first answer instead of making a second record. The phone's outbox keeps an entry's key.
+   */
+  idempotencyKey?: string;
 }
 
 export interface ApiClient {
@@ -51,6 +59,8 @@ export interface ApiClient {
 export interface ApiClientConfig {
   basePath: string;
   fetch?: typeof fetch;
+  /** Told when a request did not reach the server at all (no answer, not an error status). */
+  onUnreachable?: () => void;
 }
 
 interface Payload {
@@ -64,6 +74,7 @@ export function createApiClient(config: ApiClientConfig): ApiClient {
   const send = async (method: HttpMethod, path: string, payload: Payload | undefined, options: RequestOptions = {}): Promise<Response> => {
     const headers = new Headers({ Accept: 'application/json' });
     if (!isSafeMethod(method)) headers.set(csrfHeaderName, '1');
+    if (method === 'POST') headers.set(idempotencyHeaderName, options.idempotencyKey ?? newIdempotencyKey());
     const init: RequestInit = { method, headers, credentials: 'same-origin' };
     if (payload) {
       if (payload.contentType) headers.set('Content-Type', payload.contentType);
@@ -78,6 +89,7 @@ export function createApiClient(config: ApiClientConfig): ApiClient {
     } catch (error) {
       // A cancelled query must stay a cancellation, so the query library can tell it apart from a failure.
       if (options.signal?.aborted) throw error;
+      config.onUnreachable?.();
       throw networkError();
     }
     if (!response.ok) throw errorFromResponse(response.status, await response.text());
@@ -113,4 +125,4 @@ export function createApiClient(config: ApiClientConfig): ApiClient {
   };
 }
 
-export const api: ApiClient = createApiClient({ basePath: env.apiBasePath });
+export const api: ApiClient = createApiClient({ basePath: env.apiBasePath, onUnreachable: connection.unreachable });

@@ -4,6 +4,8 @@ import { isApiError } from './api-error';
 export interface RequestMeta extends Record<string, unknown> {
   /** A 401 here is an answer (wrong password, signed out), not a session that ran out. */
   publicRequest?: boolean;
+  /** False keeps an answer out of the copy the phone stores for offline reading. */
+  persist?: boolean;
 }
 
 declare module '@tanstack/react-query' {
@@ -14,6 +16,11 @@ declare module '@tanstack/react-query' {
 }
 
 const maxRetries = 2;
+/**
+ * Answers stay in memory as long as the offline copy keeps them (TanStack Query's persistence guide: gcTime at least
+ * the persisted maxAge), or a page visited in the morning would be forgotten before the Wi-Fi drops in the afternoon.
+ */
+export const keptForOfflineMs = 24 * 60 * 60_000;
 
 /**
  * Retry only what may succeed unchanged: an unreachable server or a 5xx (common practice). A 4xx says the request
@@ -46,7 +53,7 @@ export function createQueryClient(hooks: QueryClientHooks): QueryClient {
       },
     }),
     defaultOptions: {
-      queries: { staleTime: 30_000, retry: shouldRetry },
+      queries: { staleTime: 30_000, gcTime: keptForOfflineMs, retry: shouldRetry },
       mutations: { retry: false },
     },
   });

@@ -19,6 +19,7 @@ export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number
       body: MoldUploadFields,
       response: MoldView,
       status: 202,
+      idempotent: true,
     },
     ({ auth, body, req }) => molds.upload(auth, req.file, body),
   );

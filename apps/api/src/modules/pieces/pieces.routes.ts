@@ -10,7 +10,7 @@ export function pieceRoutes(api: RouteRegistry, ds: DataSource): void {
   api.add({ method: 'get', path: '/pieces', tag: 'pieces', summary: 'Pieces of the shop, most recently changed first', access: 'member', query: PieceListQuery, response: PieceList }, ({ auth, query }) =>
     listPieces(ds, auth.shopId, query),
   );
-  api.add({ method: 'post', path: '/pieces', tag: 'pieces', summary: 'Start a piece of work', access: ['lead', 'maker'], body: CreatePieceRequest, response: Piece, status: 201 }, ({ auth, body }) =>
+  api.add({ method: 'post', path: '/pieces', tag: 'pieces', summary: 'Start a piece of work', access: ['lead', 'maker'], body: CreatePieceRequest, response: Piece, status: 201, idempotent: true }, ({ auth, body }) =>
     createPiece(ds, auth, body),
   );
   api.add({ method: 'get', path: '/pieces/:id', tag: 'pieces', summary: 'One piece', access: 'member', params: IdParams, response: Piece }, ({ auth, params }) =>

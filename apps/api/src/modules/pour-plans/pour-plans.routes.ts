@@ -10,7 +10,7 @@ export function pourPlanRoutes(api: RouteRegistry, plans: PourPlans): void {
     plans.list(auth.shopId, query),
   );
   api.add(
-    { method: 'post', path: '/pour-plans', tag: 'pour plans', summary: 'Plan a pour: seal coat, layers, batches, cost and cautions, computed on the server', access: ['lead', 'maker'], body: PourPlanInput, response: PourPlanView, status: 201 },
+    { method: 'post', path: '/pour-plans', tag: 'pour plans', summary: 'Plan a pour: seal coat, layers, batches, cost and cautions, computed on the server', access: ['lead', 'maker'], body: PourPlanInput, response: PourPlanView, status: 201, idempotent: true },
     ({ auth, body }) => plans.create(auth, body),
   );
   api.add({ method: 'get', path: '/pour-plans/:id', tag: 'pour plans', summary: 'One pour plan with its inputs, product snapshot and result', access: 'member', params: IdParams, response: PourPlanView }, ({ auth, params }) =>

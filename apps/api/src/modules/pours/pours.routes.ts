@@ -61,14 +61,14 @@ export function pourRoutes(api: RouteRegistry, pours: Pours, log: PourLog, uploa
   api.add({ method: 'get', path: '/pours', tag: 'pours', summary: 'The cure board: pours with their stage, progress and next event', access: 'member', query: PourListQuery, response: PourList }, ({ auth, query }) =>
     pours.list(auth.shopId, query),
   );
-  api.add({ method: 'post', path: '/pours', tag: 'pours', summary: 'Start pouring a plan', access: 'member', body: StartPourRequest, response: PourView, status: 201 }, ({ auth, body }) =>
+  api.add({ method: 'post', path: '/pours', tag: 'pours', summary: 'Start pouring a plan', access: 'member', body: StartPourRequest, response: PourView, status: 201, idempotent: true }, ({ auth, body }) =>
     pours.start(auth, body.pourPlanId, body.notifyUserIds),
   );
   api.add({ method: 'get', path: '/pours/:id', tag: 'pours', summary: 'A pour: batches, readings, checks, cure status and reminders', access: 'member', params: IdParams, response: PourView }, ({ auth, params }) =>
     pours.get(auth.shopId, params.id),
   );
   api.add(
-    { method: 'post', path: '/pours/:id/batches', tag: 'pours', summary: 'Log a mixed batch: lots, weighed grams, temperatures, humidity', access: 'member', params: IdParams, body: LogBatchRequest, response: z.object({ batch: BatchView, warnings: z.array(Warning) }), status: 201 },
+    { method: 'post', path: '/pours/:id/batches', tag: 'pours', summary: 'Log a mixed batch: lots, weighed grams, temperatures, humidity', access: 'member', params: IdParams, body: LogBatchRequest, response: z.object({ batch: BatchView, warnings: z.array(Warning) }), status: 201, idempotent: true },
     ({ auth, params, body }) => log.logBatch(auth, params.id, body),
   );
   api.add(
@@ -81,6 +81,7 @@ export function pourRoutes(api: RouteRegistry, pours: Pours, log: PourLog, uploa
       params: IdParams,
       body: AddReadingsRequest,
       response: ReadingsAdded,
+      idempotent: true,
     },
     ({ auth, params, body }) => log.addReadings(auth.shopId, params.id, body.readings, 'manual', auth, body.confirmUnusual),
   );
@@ -125,6 +126,7 @@ export function pourRoutes(api: RouteRegistry, pours: Pours, log: PourLog, uploa
       query: CsvImportQuery,
       middleware: [uploadLimit, csvBody],
       response: ReadingsAdded,
+      idempotent: true,
     },
     async ({ auth, params, query, req }) => {
       if (typeof req.body !== 'string' || req.body.trim() === '') throw new AppError('bad_request', 'csv_missing', 'send the log as text/csv with lines "time,tempC"');
@@ -152,7 +154,7 @@ export function pourRoutes(api: RouteRegistry, pours: Pours, log: PourLog, uploa
     },
   );
   api.add(
-    { method: 'post', path: '/pours/:id/checks', tag: 'pours', summary: 'Record a cure check (multipart: stage, hardnessShoreD, note, optional photo)', access: 'member', params: IdParams, middleware: [uploadLimit, photoUpload()], body: CureCheckFields, response: CureCheckView, status: 201 },
+    { method: 'post', path: '/pours/:id/checks', tag: 'pours', summary: 'Record a cure check (multipart: stage, hardnessShoreD, note, optional photo)', access: 'member', params: IdParams, middleware: [uploadLimit, photoUpload()], body: CureCheckFields, response: CureCheckView, status: 201, idempotent: true },
     async ({ auth, params, body, req }) => {
       let photo: { bytes: Buffer; type: string } | null = null;
       if (req.file) {
@@ -180,7 +182,7 @@ export function pourRoutes(api: RouteRegistry, pours: Pours, log: PourLog, uploa
   );
   api.add({ method: 'get', path: '/today', tag: 'pours', summary: 'What is due in the next 24 hours, and what is overdue and not done', access: 'member', response: TodayView }, ({ auth }) => pours.today(auth.shopId));
   api.add(
-    { method: 'post', path: '/reminders/:id/done', tag: 'pours', summary: 'Mark a reminder done (any member; who and when are kept)', access: 'member', params: IdParams, response: ReminderView },
+    { method: 'post', path: '/reminders/:id/done', tag: 'pours', summary: 'Mark a reminder done (any member; who and when are kept)', access: 'member', params: IdParams, response: ReminderView, idempotent: true },
     ({ auth, params }) => pours.markDone(auth, params.id),
   );
 

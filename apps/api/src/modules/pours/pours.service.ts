@@ -83,11 +83,12 @@ export class Pours {
     };
   }
 
-  async list(shopId: string, q: { status: 'active' | 'released' | 'machined' | 'all'; readyToday: 'true' | 'false'; pieceId?: string; limit: number; offset: number }) {
+  async list(shopId: string, q: { status: 'active' | 'released' | 'machined' | 'all'; readyToday: 'true' | 'false'; pieceId?: string; pourPlanId?: string; limit: number; offset: number }) {
     const qb = this.ds.getRepository(Pour).createQueryBuilder('p').where('p.shop_id = :shopId', { shopId });
     if (q.status === 'active') qb.andWhere(`p.status = 'open'`);
     else if (q.status !== 'all') qb.andWhere('p.status = :s', { s: q.status });
     if (q.pieceId) qb.andWhere('p.piece_id = :pieceId', { pieceId: q.pieceId });
+    if (q.pourPlanId) qb.andWhere('p.pour_plan_id = :pourPlanId', { pourPlanId: q.pourPlanId });
     if (q.readyToday === 'true') {
       // Ready today: open pours whose ready-to-machine reminder falls before the end of the day.
       qb.andWhere(`p.status = 'open'`).andWhere(

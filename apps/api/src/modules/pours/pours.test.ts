@@ -32,6 +32,17 @@ async function world() {
 const onRatio = (b: { partA: { grams: number }; partB: { grams: number } }) => ({ weighedAG: b.partA.grams, weighedBG: b.partB.grams });
 
 describe('pours and the cure log', () => {
+  it('lists the pours of one plan, newest first, for the printed run sheet to link to', async () => {
+    const w = await world();
+    const other = await world();
+    const again = (await h.http().post('/api/pours').set(bearer(w.apprentice)).send({ pourPlanId: w.plan.id }).expect(201)).body;
+    const list = (await h.http().get(`/api/pours?status=all&pourPlanId=${w.plan.id}`).set(bearer(w.apprentice)).expect(200)).body as { items: { id: string }[]; total: number };
+    expect(list.items.map((p) => p.id)).toEqual([again.id, w.pour.id]);
+    // Another shop's plan is nobody's here: an empty list, not its pours.
+    const foreign = (await h.http().get(`/api/pours?status=all&pourPlanId=${other.plan.id}`).set(bearer(w.apprentice)).expect(200)).body as { total: number };
+    expect(foreign.total).toBe(0);
+  });
+
   it('logs batches with their lots and warns about off-ratio cups, the dew point and expired lots', async () => {
     const w = await world();
     expect(w.batches.length).toBeGreaterThanOrEqual(2);

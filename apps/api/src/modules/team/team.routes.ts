@@ -33,7 +33,7 @@ export function teamRoutes(api: RouteRegistry, ds: DataSource, s: InvitationSett
   );
 
   api.add(
-    { method: 'post', path: '/shop/invitations', tag: 'team', summary: 'Invite someone by e-mail with a role; the link works once and expires', access: ['lead'], body: CreateInvitationRequest, response: Invitation, status: 201 },
+    { method: 'post', path: '/shop/invitations', tag: 'team', summary: 'Invite someone by e-mail with a role; the link works once and expires', access: ['lead'], body: CreateInvitationRequest, response: Invitation, status: 201, idempotent: true },
     ({ auth, body }) => createInvitation(ds, s, auth, body),
   );
 

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useEffect, type ReactNode } from 'react';
-import { Outlet, useNavigation, type LoaderFunctionArgs } from 'react-router';
+import { Link, Outlet, useNavigation, type LoaderFunctionArgs } from 'react-router';
 import { AppFrame } from '../../../components/layouts/AppFrame';
 import {
   AuditIcon,
@@ -15,8 +15,12 @@ import {
 } from '../../../components/ui/icons';
 import { PageSpinner } from '../../../components/ui/PageSpinner';
 import { useSession } from '../../../features/auth/api/get-session';
+import { authKeys } from '../../../features/auth/api/keys';
+import { OfflineNotice } from '../../../features/offline/components/OfflineNotice';
+import { OutboxPanel } from '../../../features/offline/components/OutboxPanel';
 import { ShopSwitcher } from '../../../features/auth/components/ShopSwitcher';
 import { SignOutButton } from '../../../features/auth/components/SignOutButton';
+import { paths } from '../../../config/paths';
 import { roleLabel } from '../../../lib/roles';
 import { navigationFor, type NavKey } from '../../navigation';
 import { useSessionControl } from '../../session-control';
@@ -61,15 +65,18 @@ export function Component() {
         shopArea={<ShopSwitcher key={session.shop.id} session={session} onSwitched={() => control.shopSwitched()} />}
         account={
           <div className="flex flex-wrap items-center justify-between gap-3 md:justify-end">
-            <p className="flex flex-col leading-tight">
-              <span className="font-semibold">{session.user.name}</span>
+            <Link to={paths.account.getHref()} className="flex min-h-touch flex-col justify-center leading-tight hover:text-resin-200">
+              <span className="sr-only">Your account: </span>
+              <span className="font-semibold underline decoration-resin-400 decoration-2 underline-offset-4">{session.user.name}</span>
               <span className="text-sm text-walnut-200">{roleLabel(session.role)}</span>
-            </p>
+            </Link>
             <SignOutButton onSignedOut={() => control.signedOut()} />
           </div>
         }
         busy={navigation.state === 'loading'}
       >
+        <OfflineNotice pageLoading={navigation.state === 'loading'} notPageData={authKeys.session()} />
+        <OutboxPanel />
         <Outlet />
       </AppFrame>
     </SignedInSessionProvider>

@@ -1,12 +1,20 @@
 import { formatLength, formatTemperature, formatWeighedMass, type Caution, type ScaleResolutionG, type UnitSystem } from '@gelpoint/core';
 import { useId } from 'react';
+import { QrCode } from '../../../components/ui/QrCode';
 import { mixRatioWords } from '../utils/mix-ratio-words';
 import { formatHours, formatMinutes } from '../utils/plan-format';
 import type { RunSheetBatch } from '../utils/run-sheet';
 import { CautionList } from './CautionList';
 
+/** Where a printed cup's QR code leads, and those words for people. */
+export interface CupLink {
+  href: string;
+  opens: string;
+}
+
 export interface BatchCardProps {
   batch: RunSheetBatch;
+  link: CupLink;
   cautions: readonly Caution[];
   unitSystem: UnitSystem;
   scaleResolutionG: ScaleResolutionG;
@@ -31,16 +39,18 @@ function Blank({ label }: { label: string }) {
 }
 
 /** One cup as the apprentice weighs it: what goes in, how much of each part, and the blanks to fill in. */
-export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG }: BatchCardProps) {
+export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG, link }: BatchCardProps) {
   const mixedId = useId();
   const grams = (g: number) => formatWeighedMass(g, unitSystem, scaleResolutionG).text;
   return (
     <article
       aria-label={`Cup ${batch.order} of ${batch.of}`}
-      className="run-sheet-card flex flex-col gap-3 rounded-xl border-2 border-walnut-800 bg-white p-4"
+      className="run-sheet-card relative flex flex-col gap-3 rounded-xl border-2 border-walnut-800 bg-white p-4"
       data-print-border
     >
-      <header className="flex flex-wrap items-baseline justify-between gap-2">
+      {/* In the corner, beside the heading and the product lines, so the code adds no height to the card. */}
+      <QrCode value={link.href} label={`QR code: opens ${link.opens} to log cup ${batch.order}`} sizePx={96} className="run-sheet-qr absolute top-4 right-4" />
+      <header className="run-sheet-beside-qr flex flex-wrap items-baseline justify-between gap-2">
         <h3 className="text-2xl font-bold">
           Cup {batch.order} of {batch.of}
         </h3>
@@ -48,14 +58,14 @@ export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG }: Bat
           {batch.pourLabel} · batch {batch.batchInPour} of {batch.batchesInPour}
         </p>
       </header>
-      <p className="text-lg">
+      <p className="run-sheet-beside-qr text-lg">
         <strong>{batch.product.name}</strong> · mix ratio {mixRatioWords(batch.product.mixRatio)} ·{' '}
         <strong>
           pot life {formatMinutes(batch.potLifeMin)} at {formatTemperature(batch.shopTempC, unitSystem).text}
         </strong>
       </p>
       {batch.targetLevelMm !== null || batch.window ? (
-        <p className="text-lg" data-testid="pour-timing">
+        <p className="run-sheet-beside-qr text-lg" data-testid="pour-timing">
           {batch.targetLevelMm !== null ? (
             <>
               Fill to <strong>{formatLength(batch.targetLevelMm, unitSystem).text}</strong> above the cavity floor

@@ -5,7 +5,7 @@ import { useRootClass } from '../../../lib/use-root-class';
 import { cautionsFor } from '../utils/caution-words';
 import { runSheetBatches } from '../utils/run-sheet';
 import type { PlanSnapshot } from '../utils/saved-plan';
-import { BatchCard } from './BatchCard';
+import { BatchCard, type CupLink } from './BatchCard';
 import { BatchLabel } from './BatchLabel';
 import { CautionList } from './CautionList';
 import './run-sheet.css';
@@ -18,15 +18,17 @@ export interface RunSheetProps {
   unitSystem: UnitSystem;
   /** The shop's ISO 4217 code, for the cost of the materials. */
   currency: string;
+  /** What each cup's QR code opens: the pour once it is started, the plan before. */
+  cupLink: CupLink;
 }
 
 /** What the apprentice mixes from: the safety note once, then one card per cup in mixing order, then cup labels. */
-export function RunSheet({ planName, pieceName, plan, snapshot, unitSystem, currency }: RunSheetProps) {
+export function RunSheet({ planName, pieceName, plan, snapshot, unitSystem, currency, cupLink }: RunSheetProps) {
   useRootClass('print-run-sheet');
   const batches = runSheetBatches(plan, snapshot);
   const scale = plan.resolution.grams;
   const [first, ...rest] = batches;
-  const card = (batch: (typeof batches)[number]) => <BatchCard key={batch.order} batch={batch} cautions={cautionsFor(plan.cautions, 'batch', batch.index)} unitSystem={unitSystem} scaleResolutionG={scale} />;
+  const card = (batch: (typeof batches)[number]) => <BatchCard key={batch.order} batch={batch} cautions={cautionsFor(plan.cautions, 'batch', batch.index)} unitSystem={unitSystem} scaleResolutionG={scale} link={cupLink} />;
   return (
     <div className="run-sheet flex flex-col gap-6">
       <header className="flex flex-col gap-1">
@@ -55,11 +57,11 @@ export function RunSheet({ planName, pieceName, plan, snapshot, unitSystem, curr
           <h2 id="run-sheet-labels" className="text-2xl font-bold">
             Cup labels
           </h2>
-          <p className="text-ink-soft">Cut along the dashed lines and stick one on each cup before it is filled.</p>
+          <p className="text-ink-soft">Cut along the dashed lines and stick one on each cup before it is filled; its code opens {cupLink.opens} on a phone.</p>
         </header>
         <ul className="grid grid-cols-2 gap-2 sm:grid-cols-3">
           {batches.map((batch) => (
-            <BatchLabel key={batch.order} pieceName={pieceName} batch={batch} unitSystem={unitSystem} scaleResolutionG={scale} />
+            <BatchLabel key={batch.order} pieceName={pieceName} batch={batch} unitSystem={unitSystem} scaleResolutionG={scale} link={cupLink} />
           ))}
         </ul>
       </section>

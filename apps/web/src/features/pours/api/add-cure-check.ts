@@ -1,7 +1,13 @@
-import { CureCheckView } from '@gelpoint/contracts';
+import { CureCheckView, type PourView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { unexpectedResponse } from '../../../lib/api-error';
+import { useOutbox } from '../../../lib/offline/outbox-context';
+import type { FormRequest } from '../../../lib/offline/outbox-entry';
+import { formDataOf } from '../../../lib/offline/send-entry';
+import type { UploadProgress } from '../../../lib/upload-with-progress';
 import type { CureCheck, CureCheckStageKey } from '../types';
+import { checkStageWords } from '../utils/cure-words';
+import { pourKeys } from './keys';
 import { refreshPour } from './refresh-pour';
 
 export interface CureCheckInput {
@@ -9,29 +15,41 @@ export interface CureCheckInput {
   checkedAt: string | null;
   hardnessShoreD: number | null;
   note: string;
-  photo: File | null;
+  /** A File from the picker, or the Blob the browser downscaled it to. */
+  photo: (Blob & { name?: string }) | null;
 }
 
-/** The multipart body the checks route reads: text fields, and the photo as the part named `photo`. */
+/** The multipart request the checks route reads: text fields, and the photo as the part named `photo`. */
+export function cureCheckRequest(pourId: string, input: CureCheckInput): FormRequest {
+  const fields: Record<string, string> = { stage: input.stage };
+  if (input.checkedAt) fields.checkedAt = input.checkedAt;
+  if (input.hardnessShoreD !== null) fields.hardnessShoreD = String(input.hardnessShoreD);
+  if (input.note) fields.note = input.note;
+  return { type: 'form', path: `/pours/${encodeURIComponent(pourId)}/checks`, fields, photo: input.photo ? { blob: input.photo, name: input.photo.name ?? 'check.jpg' } : null };
+}
+
 export function cureCheckBody(input: CureCheckInput): FormData {
-  const body = new FormData();
-  body.append('stage', input.stage);
-  if (input.checkedAt) body.append('checkedAt', input.checkedAt);
-  if (input.hardnessShoreD !== null) body.append('hardnessShoreD', String(input.hardnessShoreD));
-  if (input.note) body.append('note', input.note);
-  if (input.photo) body.append('photo', input.photo, input.photo.name);
-  return body;
+  return formDataOf(cureCheckRequest('', input));
 }
 
-export function addCureCheck(pourId: string, input: CureCheckInput): Promise<CureCheck> {
-  return api.postBody(`/pours/${encodeURIComponent(pourId)}/checks`, cureCheckBody(input), null, CureCheckView);
-}
+export type CureCheckAnswer = { queued: false; check: CureCheck } | { queued: true };
 
-export function useAddCureCheck(pourId: string) {
+export function useAddCureCheck(pourId: string, onProgress?: (progress: UploadProgress) => void) {
   const queryClient = useQueryClient();
+  const outbox = useOutbox();
   return useMutation({
-    mutationFn: (input: CureCheckInput) => addCureCheck(pourId, input),
-    onSuccess: () => refreshPour(queryClient, pourId),
+    // Runs with the network cut too: the outbox keeps the entry then, where a paused mutation would keep nothing.
+    networkMode: 'always',
+    mutationFn: async (input: CureCheckInput): Promise<CureCheckAnswer> => {
+      const pieceName = queryClient.getQueryData<PourView>(pourKeys.detail(pourId))?.piece.name;
+      const label = `Cure check (${checkStageWords[input.stage].toLowerCase()})${input.photo ? ' with a photo' : ''}${pieceName ? `, ${pieceName}` : ''}`;
+      const done = await outbox.submit({ kind: 'check', pourId, label, request: cureCheckRequest(pourId, input) }, onProgress);
+      if (done.queued) return { queued: true };
+      const parsed = CureCheckView.safeParse(done.answer);
+      if (!parsed.success) throw unexpectedResponse(201);
+      return { queued: false, check: parsed.data };
+    },
+    onSuccess: (answer) => (answer.queued ? undefined : refreshPour(queryClient, pourId)),
   });
 }
 

@@ -1,7 +1,9 @@
-import { ReadingsAdded } from '@gelpoint/contracts';
+import { ReadingsAdded, type PourView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { unexpectedResponse } from '../../../lib/api-error';
+import { useOutbox } from '../../../lib/offline/outbox-context';
 import type { ReadingsAddedAnswer } from '../types';
+import { pourKeys } from './keys';
 import { refreshPour } from './refresh-pour';
 
 export interface ReadingInput {
@@ -9,14 +11,25 @@ export interface ReadingInput {
   tempC: number;
 }
 
-export function addReadings(pourId: string, readings: ReadingInput[], confirmUnusual = false): Promise<ReadingsAddedAnswer> {
-  return api.post(`/pours/${encodeURIComponent(pourId)}/readings`, { readings, confirmUnusual }, ReadingsAdded);
-}
+export type ReadingAnswer = { queued: false; added: ReadingsAddedAnswer } | { queued: true };
+
+export const readingsPath = (pourId: string) => `/pours/${encodeURIComponent(pourId)}/readings`;
 
 export function useAddReading(pourId: string) {
   const queryClient = useQueryClient();
+  const outbox = useOutbox();
   return useMutation({
-    mutationFn: ({ reading, confirmUnusual }: { reading: ReadingInput; confirmUnusual: boolean }) => addReadings(pourId, [reading], confirmUnusual),
-    onSuccess: () => refreshPour(queryClient, pourId),
+    // Runs with the network cut too: the outbox keeps the entry then, where a paused mutation would keep nothing.
+    networkMode: 'always',
+    mutationFn: async ({ reading, confirmUnusual }: { reading: ReadingInput; confirmUnusual: boolean }): Promise<ReadingAnswer> => {
+      const pieceName = queryClient.getQueryData<PourView>(pourKeys.detail(pourId))?.piece.name;
+      const label = `Reading of ${reading.tempC} °C${pieceName ? `, ${pieceName}` : ''}`;
+      const done = await outbox.submit({ kind: 'reading', pourId, label, request: { type: 'json', path: readingsPath(pourId), body: { readings: [reading], confirmUnusual } } });
+      if (done.queued) return { queued: true };
+      const parsed = ReadingsAdded.safeParse(done.answer);
+      if (!parsed.success) throw unexpectedResponse(200);
+      return { queued: false, added: parsed.data };
+    },
+    onSuccess: (answer) => (answer.queued ? undefined : refreshPour(queryClient, pourId)),
   });
 }

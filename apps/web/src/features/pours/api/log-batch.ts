@@ -1,27 +1,40 @@
-import { BatchView, Warning, type LogBatchRequest } from '@gelpoint/contracts';
+import { BatchView, Warning, type LogBatchRequest, type PourView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { api } from '../../../lib/api-client';
+import { unexpectedResponse } from '../../../lib/api-error';
+import { useOutbox } from '../../../lib/offline/outbox-context';
 import { refreshPour } from './refresh-pour';
 import { pourKeys } from './keys';
 
 const BatchLogged = z.object({ batch: BatchView, warnings: z.array(Warning) });
 export type BatchLogged = z.infer<typeof BatchLogged>;
 
-export interface LogBatchInput {
-  pourId: string;
-  batch: LogBatchRequest;
+/** Logged now (with the server's answer), or kept on the phone until the connection returns. */
+export type BatchLogAnswer = { queued: false; logged: BatchLogged } | { queued: true };
+
+export const batchPath = (pourId: string) => `/pours/${encodeURIComponent(pourId)}/batches`;
+
+/** "Cup 2 (layer 1), Walnut tray": what the list of unsent entries calls a cup. */
+export function cupLabel(cup: { order: number; pourLabel: string }, pieceName: string | undefined): string {
+  return `Cup ${cup.order} (${cup.pourLabel.toLowerCase()})${pieceName ? `, ${pieceName}` : ''}`;
 }
 
-export function logBatch({ pourId, batch }: LogBatchInput): Promise<BatchLogged> {
-  return api.post(`/pours/${encodeURIComponent(pourId)}/batches`, batch, BatchLogged);
-}
-
-export function useLogBatch(pourId: string) {
+export function useLogBatch(pourId: string, cup: { order: number; pourLabel: string }) {
   const queryClient = useQueryClient();
+  const outbox = useOutbox();
   return useMutation({
-    mutationFn: (batch: LogBatchRequest) => logBatch({ pourId, batch }),
-    onSuccess: async () => {
+    // Runs with the network cut too: the outbox keeps the entry then, where a paused mutation would keep nothing.
+    networkMode: 'always',
+    mutationFn: async (batch: LogBatchRequest): Promise<BatchLogAnswer> => {
+      const pieceName = queryClient.getQueryData<PourView>(pourKeys.detail(pourId))?.piece.name;
+      const done = await outbox.submit({ kind: 'batch', pourId, label: cupLabel(cup, pieceName), request: { type: 'json', path: batchPath(pourId), body: batch } });
+      if (done.queued) return { queued: true };
+      const parsed = BatchLogged.safeParse(done.answer);
+      if (!parsed.success) throw unexpectedResponse(201);
+      return { queued: false, logged: parsed.data };
+    },
+    onSuccess: async (answer) => {
+      if (answer.queued) return;
       await refreshPour(queryClient, pourId);
       // Logged cups draw stock down; the lot pickers should show what is left.
       await queryClient.invalidateQueries({ queryKey: [...pourKeys.all, 'lot-choices'] });

@@ -86,7 +86,11 @@ export function AddReadingForm({ pourId, unitSystem, product }: AddReadingFormPr
         />
       ) : null}
       {add.isSuccess && !form.formState.isDirty && !question ? (
-        <Alert tone="success">{add.data.duplicates > 0 ? 'A reading at that time was already logged; nothing changed.' : 'Reading saved.'}</Alert>
+        add.data.queued ? (
+          <Alert tone="info">Reading kept on this phone; it is sent when the connection returns.</Alert>
+        ) : (
+          <Alert tone="success">{add.data.added.duplicates > 0 ? 'A reading at that time was already logged; nothing changed.' : 'Reading saved.'}</Alert>
+        )
       ) : null}
       <div className="grid gap-4 sm:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_auto] sm:items-end">
         <Field label="Time of reading" error={errors.at?.message} required>

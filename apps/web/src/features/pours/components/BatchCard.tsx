@@ -3,6 +3,7 @@ import { formatTemperature, potLifeMinAt } from '@gelpoint/core';
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { cx } from '../../../lib/cx';
+import { useOutboxEntries } from '../../../lib/offline/outbox-context';
 import { useMixingStart } from '../hooks/use-mixing-start';
 import type { RunSheetCup } from '../utils/plan-run-sheet';
 import { LogBatchForm } from './LogBatchForm';
@@ -32,6 +33,8 @@ export function BatchCard({ pourId, cup, of, logged, shop, shopTempC, viewer, op
   const headingId = useId();
   const [logging, setLogging] = useState(false);
   const mixing = useMixingStart(pourId, cup.index);
+  // A cup logged while the connection was down: kept on the phone until the server takes it.
+  const kept = useOutboxEntries().find((e) => e.kind === 'batch' && e.pourId === pourId && e.request.type === 'json' && e.request.body.planBatchIndex === cup.index);
 
   return (
     <section
@@ -50,6 +53,10 @@ export function BatchCard({ pourId, cup, of, logged, shop, shopTempC, viewer, op
         {logged ? (
           <span className="inline-flex items-center gap-1.5 rounded-full border border-moss-600 bg-moss-50 px-3 py-1 font-semibold text-moss-700">
             <span aria-hidden="true">✓</span> Logged
+          </span>
+        ) : kept ? (
+          <span className="inline-flex items-center gap-1.5 rounded-full border border-resin-500 bg-resin-50 px-3 py-1 font-semibold text-walnut-900">
+            <span aria-hidden="true">↻</span> {kept.state === 'refused' ? 'Not taken' : 'Kept on this phone'}
           </span>
         ) : (
           <span className="inline-flex items-center gap-1.5 rounded-full border border-walnut-300 bg-paper px-3 py-1 font-semibold text-walnut-800">
@@ -93,7 +100,13 @@ export function BatchCard({ pourId, cup, of, logged, shop, shopTempC, viewer, op
             </div>
           ) : null}
         </>
-      ) : !open ? null : logging ? (
+      ) : !open ? null : kept ? (
+        <p className="font-semibold">
+          {kept.state === 'refused'
+            ? 'The server did not take this cup: see “Not sent yet” at the top of the page to send it again, change it or discard it.'
+            : 'Logged on this phone; it is sent to the server as soon as the connection returns.'}
+        </p>
+      ) : logging ? (
         <LogBatchForm
           pourId={pourId}
           cup={cup}

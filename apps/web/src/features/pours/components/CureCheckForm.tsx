@@ -8,11 +8,14 @@ import { FormAlert } from '../../../components/ui/FormAlert';
 import { Input } from '../../../components/ui/Input';
 import { Select } from '../../../components/ui/Select';
 import { Textarea } from '../../../components/ui/Textarea';
+import { ProgressBar } from '../../../components/ui/ProgressBar';
 import { applyServerErrors } from '../../../lib/form-errors';
+import type { UploadProgress } from '../../../lib/upload-with-progress';
 import { useAddCureCheck } from '../api/add-cure-check';
 import { checkStageWords } from '../utils/cure-words';
 import { toLocalInput } from '../utils/local-time';
-import { photoProblem, photoTypes } from '../utils/photo-check';
+import { downscalePhoto } from '../utils/downscale-photo';
+import { photoProblem } from '../utils/photo-check';
 import { cureCheckFormSchema, cureCheckStages, type CureCheckFormInput, type CureCheckFormValues } from '../utils/reading-form';
 
 const fieldNames = ['stage', 'checkedAt', 'hardness', 'note'] as const;
@@ -26,33 +29,43 @@ export function CureCheckForm({ pourId }: { pourId: string }) {
   const { errors } = form.formState;
   const [formError, setFormError] = useState<string | null>(null);
   const [photoError, setPhotoError] = useState<string | null>(null);
-  const [saved, setSaved] = useState(false);
+  const [saved, setSaved] = useState<'sent' | 'kept' | null>(null);
+  const [progress, setProgress] = useState<UploadProgress | null>(null);
+  const [preparing, setPreparing] = useState(false);
   const photoRef = useRef<HTMLInputElement>(null);
   const photoId = useId();
   const photoHintId = useId();
-  const add = useAddCureCheck(pourId);
+  const add = useAddCureCheck(pourId, setProgress);
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
-    setSaved(false);
-    const photo = photoRef.current?.files?.[0] ?? null;
+    setSaved(null);
+    setProgress(null);
+    const picked = photoRef.current?.files?.[0] ?? null;
+    // Straight from the camera: drawn smaller in the browser first, then checked against the API's limits.
+    setPreparing(picked !== null);
+    const photo = picked ? await downscalePhoto(picked) : null;
+    setPreparing(false);
     const problem = photo ? photoProblem(photo) : null;
     setPhotoError(problem?.message ?? null);
     if (problem) return;
     try {
-      await add.mutateAsync({ stage: values.stage, checkedAt: values.checkedAt, hardnessShoreD: values.hardness, note: values.note, photo });
+      const answer = await add.mutateAsync({ stage: values.stage, checkedAt: values.checkedAt, hardnessShoreD: values.hardness, note: values.note, photo });
       form.reset(blank());
       if (photoRef.current) photoRef.current.value = '';
-      setSaved(true);
+      setSaved(answer.queued ? 'kept' : 'sent');
     } catch (error) {
       setFormError(applyServerErrors(error, form.setError, fieldNames));
+    } finally {
+      setProgress(null);
     }
   });
 
   return (
     <form noValidate onSubmit={onSubmit} aria-label="Add a cure check" className="flex flex-col gap-4">
       <FormAlert message={formError} title="The check was not saved" />
-      {saved ? <Alert tone="success">Cure check saved.</Alert> : null}
+      {saved === 'sent' ? <Alert tone="success">Cure check saved.</Alert> : null}
+      {saved === 'kept' ? <Alert tone="info">Cure check kept on this phone; it is sent when the connection returns.</Alert> : null}
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="What the resin was like" error={errors.stage?.message} required>
           {(control) => <Select {...control} className="min-h-12!" emptyOption="Choose…" options={stageOptions} {...form.register('stage')} />}
@@ -68,13 +81,13 @@ export function CureCheckForm({ pourId }: { pourId: string }) {
             Photo
           </label>
           <p id={photoHintId} className="text-sm text-ink-soft">
-            JPEG, PNG or WebP, up to 8 MB.
+            Take it with the camera; it is sent at most 1600 px wide (JPEG, PNG or WebP, up to 8 MB).
           </p>
           <input
             ref={photoRef}
             id={photoId}
             type="file"
-            accept={photoTypes.join(',')}
+            accept="image/*"
             capture="environment"
             aria-describedby={photoHintId}
             aria-invalid={photoError ? true : undefined}
@@ -86,8 +99,16 @@ export function CureCheckForm({ pourId }: { pourId: string }) {
       <Field label="Note" error={errors.note?.message}>
         {(control) => <Textarea {...control} rows={3} maxLength={2000} {...form.register('note')} />}
       </Field>
+      {progress && add.isPending ? (
+        <ProgressBar
+          label="Sending the photo"
+          percent={Math.round((100 * progress.sentBytes) / Math.max(1, progress.totalBytes))}
+          reading={`${Math.round((100 * progress.sentBytes) / Math.max(1, progress.totalBytes))} %`}
+          valueText={`${Math.round((100 * progress.sentBytes) / Math.max(1, progress.totalBytes))} % sent`}
+        />
+      ) : null}
       <div>
-        <Button type="submit" className="min-h-12!" busy={add.isPending} busyLabel="Saving…">
+        <Button type="submit" className="min-h-12!" busy={add.isPending || preparing} busyLabel={preparing ? 'Preparing the photo…' : 'Saving…'}>
           Save the check
         </Button>
       </div>

@@ -2,6 +2,9 @@ import type { Piece, Shop } from '@gelpoint/contracts';
 import { formatTemperature, formatWeighedMass, type ScaleResolutionG } from '@gelpoint/core';
 import type { ReactNode } from 'react';
 import { Alert } from '../../../components/ui/Alert';
+import { QrCode } from '../../../components/ui/QrCode';
+import { paths } from '../../../config/paths';
+import { appLink } from '../../../lib/app-link';
 import { formatDateTime } from '../../../lib/format';
 import { useRootClass } from '../../../lib/use-root-class';
 import type { PieceRecordPour } from '../api/get-piece-record';
@@ -200,8 +203,10 @@ export function CureRecord({ piece, pours, shop }: CureRecordProps) {
   useRootClass('print-cure-record');
   const scale: ScaleResolutionG = shop.scaleResolutionG === 1 ? 1 : 0.1;
   return (
-    <div className="cure-record flex flex-col gap-5">
-      <header className="flex flex-col gap-0.5">
+    <div className="cure-record relative flex flex-col gap-5">
+      {/* The piece's code in the corner: scanned from the printed record (or the piece's label), it opens the piece. */}
+      <QrCode value={appLink(paths.piece.getHref(piece.id))} label={`QR code: opens the piece ${piece.name}`} sizePx={80} className="absolute top-0 right-0" />
+      <header className="flex flex-col gap-0.5 pr-24">
         <p className="text-sm font-semibold tracking-wide uppercase">Cure record · {shop.name}</p>
         <h1 className="text-2xl font-bold">{piece.name}</h1>
         <p className="text-sm">

@@ -13,7 +13,7 @@ import { UnusualValueQuestion } from '../../../components/ui/UnusualValueQuestio
 import { ApiError, isApiError } from '../../../lib/api-error';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useLotChoices } from '../api/get-lot-choices';
-import { useLogBatch, type BatchLogged } from '../api/log-batch';
+import { useLogBatch, type BatchLogAnswer } from '../api/log-batch';
 import { batchFormFields, batchFormSchema, emptyBatchForm, formFieldsOf, liveReadings, logBatchRequest, type BatchFormInput, type BatchFormValues } from '../utils/batch-form';
 import type { RunSheetCup } from '../utils/plan-run-sheet';
 import { inputUnitsOf } from '../utils/shop-units';
@@ -27,7 +27,8 @@ export interface LogBatchFormProps {
   shop: Shop;
   /** When "Start mixing" was tapped for this cup: that is when it was mixed. */
   mixingStartedAtMs: number | null;
-  onLogged: (answer: BatchLogged) => void;
+  /** Logged, or kept on the phone to be sent when the connection returns (the card then says so). */
+  onLogged: (answer: BatchLogAnswer) => void;
   onCancel: () => void;
 }
 
@@ -43,7 +44,7 @@ export function LogBatchForm({ pourId, cup, shop, mixingStartedAtMs, onLogged, o
   const [formError, setFormError] = useState<string | null>(null);
   const [expiredNotice, setExpiredNotice] = useState<string | null>(null);
   const [question, setQuestion] = useState<{ message: string; values: BatchFormValues } | null>(null);
-  const log = useLogBatch(pourId);
+  const log = useLogBatch(pourId, cup);
 
   const lotsA = useLotChoices({ part: 'A', productId: cup.product.id });
   const lotsB = useLotChoices({ part: 'B', productId: cup.product.id });

@@ -60,7 +60,7 @@ export function TodayList({ today }: { today: Today }) {
               </p>
               <div className="flex flex-wrap items-center gap-x-5 gap-y-2">
                 <TextLink to={paths.pour.getHref(reminder.pourId)}>Open the pour of {reminder.pieceName}</TextLink>
-                <MarkDoneButton reminderId={reminder.id} title={reminder.title} />
+                <MarkDoneButton reminderId={reminder.id} title={reminder.title} pourId={reminder.pourId} />
               </div>
             </li>
           );

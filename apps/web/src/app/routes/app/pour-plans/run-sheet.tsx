@@ -8,10 +8,12 @@ import { PageSpinner } from '../../../../components/ui/PageSpinner';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { pieceQueryOptions } from '../../../../features/pieces/api/get-piece';
+import { usePlanPour } from '../../../../features/pour-plans/api/get-plan-pour';
 import { usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
 import { RunSheet } from '../../../../features/pour-plans/components/RunSheet';
 import { readSavedPlan } from '../../../../features/pour-plans/utils/saved-plan';
 import { useShop } from '../../../../features/shop/api/get-shop';
+import { appLink } from '../../../../lib/app-link';
 import { createPlanPageLoader } from './plan-page-loader';
 import { readId } from './read-id';
 
@@ -23,11 +25,16 @@ export function Component() {
   const plan = usePourPlan(planId);
   const shop = useShop();
   const piece = useQuery({ ...pieceQueryOptions(plan.data?.pieceId ?? ''), enabled: Boolean(plan.data) });
+  const startedPour = usePlanPour(planId);
 
   const body = () => {
     const failed = plan.error ?? shop.error;
     if (failed) return <ErrorAlert error={failed} />;
-    if (!plan.data || !shop.data) return <PageSpinner label="Loading the run sheet…" />;
+    // The codes must be right before anyone prints: wait to know whether a pour of this plan has started.
+    if (!plan.data || !shop.data || startedPour.isPending) return <PageSpinner label="Loading the run sheet…" />;
+    const pourId = startedPour.data ?? null;
+    // Once a pour is started, every cup's code opens it (to log the cup); before, the plan.
+    const cupLink = pourId ? { href: appLink(paths.pour.getHref(pourId)), opens: 'the pour' } : { href: appLink(paths.pourPlan.getHref(planId)), opens: 'the plan' };
     const saved = readSavedPlan(plan.data);
     if (!saved.ok) {
       return (
@@ -36,7 +43,7 @@ export function Component() {
         </Alert>
       );
     }
-    return <RunSheet planName={plan.data.name} pieceName={piece.data?.name ?? 'Piece'} plan={saved.value.plan} snapshot={saved.value.snapshot} unitSystem={shop.data.unitSystem} currency={shop.data.currency} />;
+    return <RunSheet planName={plan.data.name} pieceName={piece.data?.name ?? 'Piece'} plan={saved.value.plan} snapshot={saved.value.snapshot} unitSystem={shop.data.unitSystem} currency={shop.data.currency} cupLink={cupLink} />;
   };
 
   return (
