@@ -51,6 +51,33 @@ describe('analyzeCavity: the stored analysis', () => {
     expect(viaFill.ok ? '' : viaFill.error.code).toBe('analysis_invalid');
   });
 
+  it('answers the same from the arrays it was made from as from its stored form, held air included', () => {
+    // A shaft into a chamber whose ceiling has a recess (held air), closed (exact) and with a hole (columns).
+    const xs = [0, 5, 10, 15, 25, 35, 40];
+    const undercut = cellSolid(xs, xs, [0, 5, 10, 12, 20], (i, j, k) =>
+      !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)));
+    for (const mesh of [undercut, withoutTriangles(undercut, [0])]) {
+      const made = unwrap(analyzeCavity(meshOf(mesh), { levelsMm: [11] }));
+      const stored = JSON.parse(JSON.stringify(made));
+      for (const level of [7, 11, 19]) {
+        for (const dam of ['outline', 'box'] as const) {
+          const fromArrays = unwrap(fillAt(made, level, dam));
+          const fromStored = unwrap(fillAt(stored, level, dam));
+          expect({ ...fromArrays, depthMap: null }).toEqual({ ...fromStored, depthMap: null });
+          expect(Array.from(fromArrays.depthMap.depthsMm)).toEqual(Array.from(fromStored.depthMap.depthsMm));
+        }
+      }
+      expect(unwrap(fillAt(made, 11)).trappedAirMm3).toBeGreaterThan(0);
+    }
+  });
+
+  it('reads a blob that was replaced as stored, not from the arrays it was made from', () => {
+    const made = unwrap(analyzeCavity(meshOf(bowl), { levelsMm: [20] }));
+    made.columns = { ...made.columns, counts: made.columns.counts.slice(0, 40) };
+    const r = readAnalysis(made);
+    expect(r.ok ? '' : r.error.code).toBe('analysis_invalid');
+  });
+
   it('answers many queries from one decoded model', () => {
     const model = unwrap(readAnalysis(analysis));
     expect(unwrap(fillAt(model, 20)).volumeMm3).toBe(unwrap(fillAt(analysis, 20)).volumeMm3);

@@ -1,4 +1,4 @@
-import { storeColumnGrid, storeLevelSeries } from './analysis-codec';
+import { lazyAnalysis } from './analysis-codec';
 import { cavityAnalysisVersion, type CavityAnalysis, type ExactFacts } from './cavity-analysis';
 import { columnEscape } from './column-escape';
 import { columnFill } from './column-fill';
@@ -167,7 +167,7 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
     }
   }
 
-  return ok({
+  return ok(lazyAnalysis({
     kind: 'gelpoint-cavity-analysis',
     version: cavityAnalysisVersion,
     encoding: 'base64-little-endian',
@@ -183,8 +183,6 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
     method: exact ? 'exact' : 'columns',
     targetErrorPct,
     exact: facts,
-    levels: storeLevelSeries(series),
-    columns: storeColumnGrid(grid),
     warnings: [...mesh.warnings],
-  });
+  }, series, grid));
 }
