@@ -124,7 +124,7 @@ export const command: Command = async (argv) => {
     const reason = err instanceof Error && 'code' in err ? String((err as NodeJS.ErrnoException).code) : 'unreadable';
     throw new CliError(`cannot read "${file}" (${reason}); check the path`);
   }
-  const mould = unwrap(readMouldFile(bytes));
+  const mould = unwrap(readMouldFile(bytes, { consumeBytes: true }));
   const units: FileUnits = chosenUnits ?? mould.fileUnits ?? 'mm';
   const levelMm = level * mmPerUnit[units];
   const mesh = unwrap(prepareMesh(mould.soup, { units, up }));

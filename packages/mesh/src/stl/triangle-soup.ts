@@ -14,6 +14,13 @@ export interface TriangleSoup {
 export interface ParseStlOptions {
   /** Refuse files with more triangles than this (memory guard for uploads). Default 5,000,000. */
   maxTriangles?: number;
+  /**
+   * The reader may overwrite the bytes it is given: a binary STL's corners are then gathered in
+   * place (each 50-byte record's 36 bytes of corners moved to the front), so the soup is a view of
+   * the file instead of a second array nearly its size. For callers that read the file only to
+   * analyse it; the bytes are garbage afterwards, and the soup lives as long as they do.
+   */
+  consumeBytes?: boolean;
 }
 
 export const defaultMaxTriangles = 5_000_000;
