@@ -59,7 +59,15 @@ function asStored(grid: ColumnGrid): ColumnGrid {
  */
 export function lazyAnalysis(header: Omit<CavityAnalysis, 'levels' | 'columns'>, series: LevelSeries, buildGrid: () => ColumnGrid): CavityAnalysis {
   let built: ColumnGrid | null = null;
-  const grid = (): ColumnGrid => (built ??= asStored(buildGrid()));
+  // Dropped once used: it holds the mesh and its triangle table, which the grid no longer needs.
+  let pending: (() => ColumnGrid) | null = buildGrid;
+  const grid = (): ColumnGrid => {
+    if (!built) {
+      built = asStored(pending!());
+      pending = null;
+    }
+    return built;
+  };
   let levels: StoredLevelSeries | null = null;
   let columns: StoredColumnGrid | null = null;
   const { warnings, ...rest } = header;
