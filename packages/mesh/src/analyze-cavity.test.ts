@@ -6,7 +6,9 @@ import { analyzeCavity } from './analyze-cavity';
 import { analyzeStl } from './analyze-stl';
 import { curve, fillAt, layerVolumes } from './fill-queries';
 import { mmPerUnit } from './frame';
+import { prepareMesh } from './prepare-mesh';
 import { encodeStlAscii, encodeStlBinary } from './stl/encode-stl';
+import { parseStl } from './stl/parse-stl';
 
 const bowl = revolvedPocketBlock({
   halfSide: 25, bottomZ: 0, topZ: 30,
@@ -76,6 +78,22 @@ describe('analyzeCavity: the stored analysis', () => {
     made.columns = { ...made.columns, counts: made.columns.counts.slice(0, 40) };
     const r = readAnalysis(made);
     expect(r.ok ? '' : r.error.code).toBe('analysis_invalid');
+  });
+
+  it('gives the same analysis from a file read in place, whose bytes then hold its working arrays', () => {
+    const bytes = encodeStlBinary(bowl);
+    const usual = unwrap(analyzeCavity(unwrap(prepareMesh(unwrap(parseStl(bytes)))), { levelsMm: [20] }));
+    const consumed = new Uint8Array(bytes);
+    const mesh = unwrap(prepareMesh(unwrap(parseStl(consumed, { consumeBytes: true }))));
+    expect(mesh.spareMemory?.buffer).toBe(consumed.buffer);
+    const first = unwrap(analyzeCavity(mesh, { levelsMm: [20] }));
+    expect(mesh.spareMemory).toBeNull();
+    // A second analysis of the same mesh makes fresh arrays, so the first one's columns, built
+    // only now, still come from its own table.
+    const second = unwrap(analyzeCavity(mesh, { levelsMm: [20] }));
+    expect(JSON.parse(JSON.stringify(first))).toEqual(JSON.parse(JSON.stringify(usual)));
+    expect(JSON.parse(JSON.stringify(second))).toEqual(JSON.parse(JSON.stringify(usual)));
+    expect(Array.from(consumed.subarray(0, 80))).not.toEqual(Array.from(bytes.subarray(0, 80)));
   });
 
   it('answers many queries from one decoded model', () => {

@@ -84,7 +84,10 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
   const zMin = box.min[2], zMax = box.max[2];
   const width = box.max[0] - box.min[0], depth = box.max[1] - box.min[1], height = zMax - zMin;
   const rect = { minX: box.min[0], minY: box.min[1], maxX: box.max[0], maxY: box.max[1] };
-  const table = buildTriangleTable(positions, triangles);
+  // Taken once: a second analysis of the mesh must not write over the table of the first.
+  const spare = mesh.spareMemory ?? null;
+  mesh.spareMemory = null;
+  const table = buildTriangleTable(positions, triangles, spare);
   // A face counts as lying on the table within float32 rounding of its height (a file's corners
   // are float32: 2^-24 of their size) or 1e-7 of the mould's height, whichever is larger.
   const tableToleranceMm = Math.max(1e-7 * height, 4 * 2 ** -24 * Math.max(Math.abs(zMin), Math.abs(zMax)));

@@ -77,7 +77,7 @@ export function parseBinaryStl(bytes: Uint8Array, maxTriangles: number, consumeB
   if (trailing > 0) {
     warnings.push({ code: 'stl_trailing_bytes', message: `The STL has ${trailing} stray byte${trailing === 1 ? '' : 's'} after its last triangle; ${trailing === 1 ? 'it was' : 'they were'} ignored.` });
   }
-  return ok({ positions, triangleCount: records, format: 'binary', warnings });
+  return ok({ positions, triangleCount: records, format: 'binary', warnings, ...(inPlace ? { spareBytes: bytes } : {}) });
 }
 
 /**
