@@ -36,6 +36,63 @@ export function storeColumnGrid(grid: ColumnGrid): StoredColumnGrid {
   };
 }
 
+/** Models of analyses made in this process, so reading one back skips the base64 round trip. */
+const madeHere = new WeakMap<object, { series: LevelSeries; grid: () => ColumnGrid }>();
+
+/**
+ * The stored form keeps only escape heights below their gap's ceiling (the rest read back as the
+ * ceiling, which the queries treat alike): a grid made here is set the same way, so the model
+ * handed back holds exactly what reading the stored form would give.
+ */
+function asStored(grid: ColumnGrid): ColumnGrid {
+  const { escapeMm, intervals } = grid;
+  for (let k = 0; k < escapeMm.length; k++) if (escapeMm[k]! > intervals[2 * k]!) escapeMm[k] = intervals[2 * k]!;
+  return grid;
+}
+
+/**
+ * The analysis as stored, with its two blobs encoded to base64 only when first read (JSON.stringify,
+ * structured clone and spreading all read them), and the column grid built only when something
+ * asks for it (a function is given for it): a caller that only queries the fill in memory, as the
+ * command line does, pays for neither, and readAnalysis hands back the arrays it was made from.
+ * Assigning a blob replaces it and makes the object an ordinary stored analysis again.
+ */
+export function lazyAnalysis(header: Omit<CavityAnalysis, 'levels' | 'columns'>, series: LevelSeries, buildGrid: () => ColumnGrid): CavityAnalysis {
+  let built: ColumnGrid | null = null;
+  // Dropped once used: it holds the mesh and its triangle table, which the grid no longer needs.
+  let pending: (() => ColumnGrid) | null = buildGrid;
+  const grid = (): ColumnGrid => {
+    if (!built) {
+      built = asStored(pending!());
+      pending = null;
+    }
+    return built;
+  };
+  let levels: StoredLevelSeries | null = null;
+  let columns: StoredColumnGrid | null = null;
+  const { warnings, ...rest } = header;
+  const analysis = {
+    ...rest,
+    get levels(): StoredLevelSeries {
+      return (levels ??= storeLevelSeries(series));
+    },
+    set levels(value: StoredLevelSeries) {
+      levels = value;
+      madeHere.delete(analysis);
+    },
+    get columns(): StoredColumnGrid {
+      return (columns ??= storeColumnGrid(grid()));
+    },
+    set columns(value: StoredColumnGrid) {
+      columns = value;
+      madeHere.delete(analysis);
+    },
+    warnings,
+  } satisfies CavityAnalysis;
+  madeHere.set(analysis, { series, grid });
+  return analysis;
+}
+
 const invalid = (what: string): Result<never> =>
   fail('analysis_invalid', `The stored cavity analysis is damaged or from another version (${what}); analyse the mould's STL again.`);
 
@@ -54,6 +111,17 @@ function finiteNumbers(value: unknown, length: number): value is number[] {
  */
 export function readAnalysis(stored: unknown): Result<CavityModel> {
   if (!isRecord(stored) || stored.kind !== 'gelpoint-cavity-analysis') return invalid('not a cavity analysis');
+  const made = madeHere.get(stored);
+  if (made) {
+    return ok({
+      kind: 'gelpoint-cavity-model',
+      analysis: stored as unknown as CavityAnalysis,
+      series: made.series,
+      get grid(): ColumnGrid {
+        return made.grid();
+      },
+    });
+  }
   if (typeof stored.version === 'number' && Number.isInteger(stored.version) && stored.version >= 1 && stored.version < cavityAnalysisVersion) {
     // Earlier versions counted resin only where it could drop straight down from the surface.
     return fail('analysis_outdated', `This cavity analysis was made by an earlier version of the engine (version ${stored.version}, now ${cavityAnalysisVersion}) whose fill rule has since changed; analyse the mould's STL again.`);

@@ -6,7 +6,9 @@ import { analyzeCavity } from './analyze-cavity';
 import { analyzeStl } from './analyze-stl';
 import { curve, fillAt, layerVolumes } from './fill-queries';
 import { mmPerUnit } from './frame';
+import { prepareMesh } from './prepare-mesh';
 import { encodeStlAscii, encodeStlBinary } from './stl/encode-stl';
+import { parseStl } from './stl/parse-stl';
 
 const bowl = revolvedPocketBlock({
   halfSide: 25, bottomZ: 0, topZ: 30,
@@ -49,6 +51,49 @@ describe('analyzeCavity: the stored analysis', () => {
     expect(notOne.ok ? '' : notOne.error.message).toMatch(/analyse the mould's STL again/);
     const viaFill = fillAt({ ...analysis, version: 3 as never }, 10);
     expect(viaFill.ok ? '' : viaFill.error.code).toBe('analysis_invalid');
+  });
+
+  it('answers the same from the arrays it was made from as from its stored form, held air included', () => {
+    // A shaft into a chamber whose ceiling has a recess (held air), closed (exact) and with a hole (columns).
+    const xs = [0, 5, 10, 15, 25, 35, 40];
+    const undercut = cellSolid(xs, xs, [0, 5, 10, 12, 20], (i, j, k) =>
+      !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)));
+    for (const mesh of [undercut, withoutTriangles(undercut, [0])]) {
+      const made = unwrap(analyzeCavity(meshOf(mesh), { levelsMm: [11] }));
+      const stored = JSON.parse(JSON.stringify(made));
+      for (const level of [7, 11, 19]) {
+        for (const dam of ['outline', 'box'] as const) {
+          const fromArrays = unwrap(fillAt(made, level, dam));
+          const fromStored = unwrap(fillAt(stored, level, dam));
+          expect({ ...fromArrays, depthMap: null }).toEqual({ ...fromStored, depthMap: null });
+          expect(Array.from(fromArrays.depthMap.depthsMm)).toEqual(Array.from(fromStored.depthMap.depthsMm));
+        }
+      }
+      expect(unwrap(fillAt(made, 11)).trappedAirMm3).toBeGreaterThan(0);
+    }
+  });
+
+  it('reads a blob that was replaced as stored, not from the arrays it was made from', () => {
+    const made = unwrap(analyzeCavity(meshOf(bowl), { levelsMm: [20] }));
+    made.columns = { ...made.columns, counts: made.columns.counts.slice(0, 40) };
+    const r = readAnalysis(made);
+    expect(r.ok ? '' : r.error.code).toBe('analysis_invalid');
+  });
+
+  it('gives the same analysis from a file read in place, whose bytes then hold its working arrays', () => {
+    const bytes = encodeStlBinary(bowl);
+    const usual = unwrap(analyzeCavity(unwrap(prepareMesh(unwrap(parseStl(bytes)))), { levelsMm: [20] }));
+    const consumed = new Uint8Array(bytes);
+    const mesh = unwrap(prepareMesh(unwrap(parseStl(consumed, { consumeBytes: true }))));
+    expect(mesh.spareMemory?.buffer).toBe(consumed.buffer);
+    const first = unwrap(analyzeCavity(mesh, { levelsMm: [20] }));
+    expect(mesh.spareMemory).toBeNull();
+    // A second analysis of the same mesh makes fresh arrays, so the first one's columns, built
+    // only now, still come from its own table.
+    const second = unwrap(analyzeCavity(mesh, { levelsMm: [20] }));
+    expect(JSON.parse(JSON.stringify(first))).toEqual(JSON.parse(JSON.stringify(usual)));
+    expect(JSON.parse(JSON.stringify(second))).toEqual(JSON.parse(JSON.stringify(usual)));
+    expect(Array.from(consumed.subarray(0, 80))).not.toEqual(Array.from(bytes.subarray(0, 80)));
   });
 
   it('answers many queries from one decoded model', () => {

@@ -1,4 +1,4 @@
-import { storeColumnGrid, storeLevelSeries } from './analysis-codec';
+import { lazyAnalysis } from './analysis-codec';
 import { cavityAnalysisVersion, type CavityAnalysis, type ExactFacts } from './cavity-analysis';
 import { columnEscape } from './column-escape';
 import { columnFill } from './column-fill';
@@ -84,7 +84,10 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
   const zMin = box.min[2], zMax = box.max[2];
   const width = box.max[0] - box.min[0], depth = box.max[1] - box.min[1], height = zMax - zMin;
   const rect = { minX: box.min[0], minY: box.min[1], maxX: box.max[0], maxY: box.max[1] };
-  const table = buildTriangleTable(positions, triangles);
+  // Taken once: a second analysis of the mesh must not write over the table of the first.
+  const spare = mesh.spareMemory ?? null;
+  mesh.spareMemory = null;
+  const table = buildTriangleTable(positions, triangles, spare);
   // A face counts as lying on the table within float32 rounding of its height (a file's corners
   // are float32: 2^-24 of their size) or 1e-7 of the mould's height, whichever is larger.
   const tableToleranceMm = Math.max(1e-7 * height, 4 * 2 ** -24 * Math.max(Math.abs(zMin), Math.abs(zMax)));
@@ -138,36 +141,42 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
     }
     return grid;
   };
-  // The exact method needs the columns only for the depth map and the cross-check.
-  let columns = exact ? Math.min(maxColumns, 65_536) : Math.min(maxColumns, Math.max(65_536, 2 * table.count));
-  let grid = build(columns);
   // Keep the stored intervals (8 bytes each) within a few MB, whatever the shape.
-  const fitIntervals = (): boolean => {
+  const fitted = (columns: number): { grid: ColumnGrid; columns: number } => {
+    const grid = build(columns);
     const intervals = grid.intervals.length / 2;
-    if (intervals <= maxStoredIntervals) return true;
-    columns = Math.max(16, Math.floor((columns * maxStoredIntervals * 0.95) / intervals));
-    grid = build(columns);
-    return false;
+    if (intervals <= maxStoredIntervals) return { grid, columns };
+    const fewer = Math.max(16, Math.floor((columns * maxStoredIntervals * 0.95) / intervals));
+    return { grid: build(fewer), columns: -fewer };
   };
-  if (fitIntervals() && !exact) {
-    // Refine until the column estimate meets the target at the levels that matter, within the caps.
-    const checkLevels = levelsMm.length > 0 ? levelsMm : [zMax];
-    for (let round = 0; round < 3 && columns < maxColumns; round++) {
-      let worst = 0;
-      for (const level of checkLevels) {
-        const fill = columnFill(grid, level, 'outline', zMin);
-        if (fill.volumeMm3 > 0) worst = Math.max(worst, (100 * fill.errorMm3) / fill.volumeMm3);
+  let gridOf: () => ColumnGrid;
+  if (exact) {
+    // The exact method needs the columns only for the depth map, the cross-check and the deepest
+    // resin under overhangs: they are built when first asked for, which a caller that only wants
+    // the fill's volume never does.
+    gridOf = () => fitted(Math.min(maxColumns, 65_536)).grid;
+  } else {
+    let { grid, columns } = fitted(Math.min(maxColumns, Math.max(65_536, 2 * table.count)));
+    if (columns > 0) {
+      // Refine until the column estimate meets the target at the levels that matter, within the caps.
+      const checkLevels = levelsMm.length > 0 ? levelsMm : [zMax];
+      for (let round = 0; round < 3 && columns < maxColumns; round++) {
+        let worst = 0;
+        for (const level of checkLevels) {
+          const fill = columnFill(grid, level, 'outline', zMin);
+          if (fill.volumeMm3 > 0) worst = Math.max(worst, (100 * fill.errorMm3) / fill.volumeMm3);
+        }
+        if (worst <= targetErrorPct) break;
+        // The estimate shrinks about in step with the cell size, so columns grow with its square.
+        const factor = (worst / targetErrorPct) * 1.25;
+        ({ grid, columns } = fitted(Math.min(maxColumns, Math.ceil(columns * factor * factor))));
+        if (columns < 0) break;
       }
-      if (worst <= targetErrorPct) break;
-      // The estimate shrinks about in step with the cell size, so columns grow with its square.
-      const factor = (worst / targetErrorPct) * 1.25;
-      columns = Math.min(maxColumns, Math.ceil(columns * factor * factor));
-      grid = build(columns);
-      if (!fitIntervals()) break;
     }
+    gridOf = () => grid;
   }
 
-  return ok({
+  return ok(lazyAnalysis({
     kind: 'gelpoint-cavity-analysis',
     version: cavityAnalysisVersion,
     encoding: 'base64-little-endian',
@@ -183,8 +192,6 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
     method: exact ? 'exact' : 'columns',
     targetErrorPct,
     exact: facts,
-    levels: storeLevelSeries(series),
-    columns: storeColumnGrid(grid),
     warnings: [...mesh.warnings],
-  });
+  }, series, gridOf));
 }

@@ -1,3 +1,5 @@
+import { SpareMemory } from './spare-memory';
+
 /**
  * How the triangles meet along their edges. A mould surface that holds resin must be closed:
  * every edge shared by exactly two triangles that run along it in opposite directions.
@@ -20,9 +22,11 @@ export interface EdgeTopology {
  * Groups half-edges by their lower vertex index (a counting sort, no hash map), then pairs them
  * inside each small group by their upper vertex.
  */
-export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNeighbours = false): EdgeTopology {
+export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNeighbours = false, spare: Uint8Array | null = null): EdgeTopology {
   const halfEdges = triangles.length;
-  const start = new Uint32Array(vertexCount + 1);
+  // The working arrays may live in spare memory; what is returned never does.
+  const memory = new SpareMemory(spare);
+  const start = memory.uint32(vertexCount + 1).fill(0);
   // Triangle by triangle, its three half-edges a→b, b→c, c→a (no modulo per half-edge).
   for (let e = 0; e < halfEdges; e += 3) {
     const a = triangles[e]!, b = triangles[e + 1]!, c = triangles[e + 2]!;
@@ -31,11 +35,12 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
     start[(c < a ? c : a) + 1]!++;
   }
   for (let v = 0; v < vertexCount; v++) start[v + 1]! += start[v]!;
-  const fill = start.slice(0, vertexCount);
+  const fill = memory.uint32(vertexCount);
+  fill.set(start.subarray(0, vertexCount));
   // Each entry: the half-edge, and its upper vertex with the direction in the top bit, so the
   // pairing pass below reads memory in order.
-  const grouped = new Uint32Array(withNeighbours ? halfEdges : 0);
-  const upperWay = new Uint32Array(halfEdges);
+  const grouped = memory.uint32(withNeighbours ? halfEdges : 0);
+  const upperWay = memory.uint32(halfEdges);
   for (let e = 0; e < halfEdges; e += 3) {
     const a = triangles[e]!, b = triangles[e + 1]!, c = triangles[e + 2]!;
     const at0 = fill[a < b ? a : b]!++;

@@ -1,5 +1,6 @@
 import { readAnalysis } from './analysis-codec';
-import type { CavityAnalysis, CavityFill, CavityModel, CurvePoint, MethodFigures } from './cavity-analysis';
+import type { CavityAnalysis, CavityFill, CavityModel, CurvePoint, DepthMap, MethodFigures } from './cavity-analysis';
+import type { ColumnGrid } from './column-grid';
 import { columnCurve } from './column-curve';
 import { columnFill } from './column-fill';
 import { checkDam, type Dam } from './dam';
@@ -59,15 +60,13 @@ export function fillAt(source: CavitySource, levelMm: number, dam: Dam = 'outlin
   if (!level.ok) return level;
   const damChecked = checkDam(dam);
   if (!damChecked.ok) return damChecked;
-  const { analysis, series, grid } = model.value;
+  const { analysis, series } = model.value;
   const h = level.value;
   const zMin = analysis.bboxMm.min[2];
-  const columns = columnFill(grid, h, dam, zMin);
-  const columnFigures = {
-    volumeMm3: columns.volumeMm3,
-    estimatedErrorPct: percent(columns.errorMm3, columns.volumeMm3),
-    resolutionMm: Math.max(grid.cellX, grid.cellY),
-  };
+  // The columns are walked when something needs them: at once for the column method and for the
+  // deepest resin under overhangs, otherwise only when the depth map or the cross-check is read.
+  let walked: ReturnType<typeof columnFill> | null = null;
+  const columns = (): ReturnType<typeof columnFill> => (walked ??= columnFill(model.value.grid, h, dam, zMin));
   const wettedAreaMm2 = Math.max(0, seriesValue(series, LevelQuantity.Wetted, h) + (dam === 'box' ? seriesValue(series, LevelQuantity.WettedBox, h) : 0));
 
   let volumeMm3: number, trappedAirMm3: number, maxDepthMm: number, estimatedErrorPct: number;
@@ -80,16 +79,16 @@ export function fillAt(source: CavitySource, levelMm: number, dam: Dam = 'outlin
     trappedAirMm3 = h > zMin ? Math.max(0, seriesValue(series, LevelQuantity.Trapped, h)) : 0;
     if (facts.overhangs) {
       // Resin under overhangs stacks in several gaps of one column: the depth map says where it is thickest.
-      maxDepthMm = columns.maxDepthMm;
+      maxDepthMm = columns().maxDepthMm;
     } else {
       maxDepthMm = Math.max(0, h - facts.lowestFloorMm);
       if (uncoveredAreaMm2(model.value, dam) > 0) maxDepthMm = Math.max(maxDepthMm, h - zMin);
     }
   } else {
-    volumeMm3 = columns.volumeMm3;
-    estimatedErrorPct = columnFigures.estimatedErrorPct;
-    trappedAirMm3 = columns.trappedAirMm3;
-    maxDepthMm = columns.maxDepthMm;
+    volumeMm3 = columns().volumeMm3;
+    estimatedErrorPct = percent(columns().errorMm3, columns().volumeMm3);
+    trappedAirMm3 = columns().trappedAirMm3;
+    maxDepthMm = columns().maxDepthMm;
   }
 
   const warnings: MeshWarning[] = [];
@@ -108,6 +107,9 @@ export function fillAt(source: CavitySource, levelMm: number, dam: Dam = 'outlin
     });
   }
 
+  const method = analysis.method;
+  let columnFigures: CavityFill['columns'] | null = null;
+  let depthMap: DepthMap | null = null;
   return ok({
     levelMm: h,
     dam,
@@ -115,14 +117,27 @@ export function fillAt(source: CavitySource, levelMm: number, dam: Dam = 'outlin
     wettedAreaMm2,
     maxDepthMm,
     trappedAirMm3,
-    method: analysis.method,
-    resolutionMm: analysis.method === 'columns' ? columnFigures.resolutionMm : null,
+    method,
+    resolutionMm: method === 'columns' ? resolutionOf(model.value.grid) : null,
     estimatedErrorPct,
     exact,
-    columns: columnFigures,
-    depthMap: { originMm: [grid.originX, grid.originY], cellMm: [grid.cellX, grid.cellY], nx: grid.nx, ny: grid.ny, depthsMm: columns.depthsMm },
+    get columns(): CavityFill['columns'] {
+      return (columnFigures ??= {
+        volumeMm3: columns().volumeMm3,
+        estimatedErrorPct: percent(columns().errorMm3, columns().volumeMm3),
+        resolutionMm: resolutionOf(model.value.grid),
+      });
+    },
+    get depthMap(): DepthMap {
+      const grid = model.value.grid;
+      return (depthMap ??= { originMm: [grid.originX, grid.originY], cellMm: [grid.cellX, grid.cellY], nx: grid.nx, ny: grid.ny, depthsMm: columns().depthsMm });
+    },
     warnings,
   });
+}
+
+function resolutionOf(grid: ColumnGrid): number {
+  return Math.max(grid.cellX, grid.cellY);
 }
 
 /** Evenly spaced levels from the mould's lowest z to its highest z. */

@@ -164,15 +164,16 @@ function compacted(positionsMm: Float64Array, triangles: Uint32Array, vertexCoun
   return { positionsMm: out, vertexCount: used };
 }
 
-export function cleanMesh(positionsMm: Float64Array, triangles: Uint32Array, vertexCount: number, toleranceMm: number): CleanedMesh {
-  let edges = analyseEdges(triangles, vertexCount);
+/** `spare`: memory nothing else uses, for the edge pairing's working arrays (see SpareMemory). */
+export function cleanMesh(positionsMm: Float64Array, triangles: Uint32Array, vertexCount: number, toleranceMm: number, spare: Uint8Array | null = null): CleanedMesh {
+  let edges = analyseEdges(triangles, vertexCount, false, spare);
   let changed = false;
   let verticesWelded = 0;
   let zeroAreaDropped = 0;
   let duplicatesDropped = 0;
 
   if (edges.openEdges > 0 && toleranceMm > 0) {
-    const withNeighbours = analyseEdges(triangles, vertexCount, true);
+    const withNeighbours = analyseEdges(triangles, vertexCount, true, spare);
     const weld = weldWithin(positionsMm, unpairedVertices(triangles, withNeighbours.neighbour, vertexCount), vertexCount, toleranceMm);
     if (weld.welded > 0) {
       verticesWelded = weld.welded;
@@ -183,14 +184,14 @@ export function cleanMesh(positionsMm: Float64Array, triangles: Uint32Array, ver
         if (a === b || b === c || a === c) { collapsed[t] = 1; zeroAreaDropped++; }
       }
       triangles = withoutMarked(triangles, collapsed);
-      edges = analyseEdges(triangles, vertexCount);
+      edges = analyseEdges(triangles, vertexCount, false, spare);
       changed = true;
     }
   }
 
   const flat = flatTriangles(positionsMm, triangles, toleranceMm);
   if (flat.length > 0) {
-    const { neighbour } = analyseEdges(triangles, vertexCount, true);
+    const { neighbour } = analyseEdges(triangles, vertexCount, true, spare);
     const drop = new Uint8Array(triangles.length / 3);
     let dropped = 0;
     for (const t of flat) {
@@ -201,7 +202,7 @@ export function cleanMesh(positionsMm: Float64Array, triangles: Uint32Array, ver
     if (dropped > 0) {
       zeroAreaDropped += dropped;
       triangles = withoutMarked(triangles, drop);
-      edges = analyseEdges(triangles, vertexCount);
+      edges = analyseEdges(triangles, vertexCount, false, spare);
       changed = true;
     }
   }
@@ -213,7 +214,7 @@ export function cleanMesh(positionsMm: Float64Array, triangles: Uint32Array, ver
     for (let t = 0; t < duplicate.length; t++) duplicatesDropped += duplicate[t]!;
     if (duplicatesDropped > 0) {
       triangles = withoutMarked(triangles, duplicate);
-      edges = analyseEdges(triangles, vertexCount);
+      edges = analyseEdges(triangles, vertexCount, false, spare);
       changed = true;
     }
   }
@@ -222,6 +223,6 @@ export function cleanMesh(positionsMm: Float64Array, triangles: Uint32Array, ver
   const compact = compacted(positionsMm, triangles, vertexCount);
   return {
     positionsMm: compact.positionsMm, triangles, vertexCount: compact.vertexCount,
-    edges: analyseEdges(triangles, compact.vertexCount), verticesWelded, zeroAreaDropped, duplicatesDropped,
+    edges: analyseEdges(triangles, compact.vertexCount, false, spare), verticesWelded, zeroAreaDropped, duplicatesDropped,
   };
 }

@@ -16,6 +16,8 @@ export interface ReadMouldFileOptions {
   maxTriangles?: number;
   /** Zip-bomb limits for 3MF; defaults in `defaultArchiveLimits`. */
   archiveLimits?: Partial<ArchiveLimits>;
+  /** The reader may overwrite the bytes (see ParseStlOptions.consumeBytes); only a binary STL uses it. */
+  consumeBytes?: boolean;
 }
 
 export interface MouldFile {
@@ -105,7 +107,7 @@ export function readMouldFile(bytes: Uint8Array, options: ReadMouldFileOptions =
     return read.ok ? ok({ soup: read.value, format, fileUnits: null }) : read;
   }
   if (format === 'stl') {
-    const read = parseStl(bytes, { maxTriangles });
+    const read = parseStl(bytes, { maxTriangles, consumeBytes: options.consumeBytes === true });
     return read.ok ? ok({ soup: read.value, format, fileUnits: null }) : read;
   }
   const refusal = unknownFormat(bytes);

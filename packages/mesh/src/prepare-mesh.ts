@@ -67,6 +67,12 @@ export interface CavityMesh {
   enclosedVolumeMm3: number | null;
   surfaceAreaMm2: number;
   warnings: MeshWarning[];
+  /**
+   * Memory nothing else uses any more (the bytes of a file read in place), which the first
+   * analyzeCavity of this mesh takes for its working arrays instead of fresh ones; null when there
+   * is none or it has been taken.
+   */
+  spareMemory?: Uint8Array | null;
 }
 
 export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}): Result<CavityMesh> {
@@ -95,7 +101,9 @@ export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}
   const weldedBox = boundingBox(welded.positionsMm, welded.vertexCount);
   const diagonalMm = Math.hypot(...[0, 1, 2].map((k) => weldedBox.max[k]! - weldedBox.min[k]!));
   const cleanToleranceMm = toleranceMm > 0 ? toleranceMm : relativeWeldTolerance * diagonalMm;
-  const cleaned = cleanMesh(welded.positionsMm, welded.triangles, welded.vertexCount, cleanToleranceMm);
+  // The soup's corners were read for the last time by the weld: a file read in place is spare now.
+  const spare = soup.spareBytes ?? null;
+  const cleaned = cleanMesh(welded.positionsMm, welded.triangles, welded.vertexCount, cleanToleranceMm, spare);
   const triangles = cleaned.triangles;
   const triangleCount = triangles.length / 3;
   if (triangleCount === 0) {
@@ -113,7 +121,7 @@ export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}
   let turnedTriangles = 0;
   let windingConflicts = 0;
   if (edges.misorientedEdges > 0) {
-    const repair = repairWinding(triangles, analyseEdges(triangles, vertexCount, true));
+    const repair = repairWinding(triangles, analyseEdges(triangles, vertexCount, true, spare));
     turnedTriangles = repair.turned;
     windingConflicts = repair.conflicts;
     if (turnedTriangles > 0) {
@@ -171,6 +179,7 @@ export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}
     enclosedVolumeMm3: watertight && orientable ? measures.signedVolumeMm3 : null,
     surfaceAreaMm2: measures.surfaceAreaMm2,
     warnings,
+    spareMemory: spare,
   });
 }
 

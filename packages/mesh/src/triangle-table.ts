@@ -1,3 +1,5 @@
+import { SpareMemory } from './spare-memory';
+
 /**
  * Per-triangle quantities every stage needs, computed once into flat typed arrays.
  * With n = (b − a) × (c − a) for corners a, b, c (outward winding): the triangle's area is |n|/2
@@ -23,13 +25,18 @@ export interface TriangleTable {
 /** Slope below which a face counts as a wall: float32 exports leave this much noise on vertical faces. */
 export const steepNormalZ = 1e-5;
 
-export function buildTriangleTable(positions: Float64Array, triangles: Uint32Array): TriangleTable {
+/**
+ * Builds the table, in `spare` memory when it is given (every entry is written below, so memory
+ * that held something else will do), otherwise in fresh arrays.
+ */
+export function buildTriangleTable(positions: Float64Array, triangles: Uint32Array, spare: Uint8Array | null = null): TriangleTable {
   const count = triangles.length / 3;
-  const shadowArea = new Float64Array(count);
-  const area = new Float64Array(count);
-  const sortedZ = new Float64Array(count * 3);
-  const facing = new Int8Array(count);
-  const steep = new Uint8Array(count);
+  const memory = new SpareMemory(spare);
+  const shadowArea = memory.float64(count);
+  const area = memory.float64(count);
+  const sortedZ = memory.float64(count * 3);
+  const facing = memory.int8(count);
+  const steep = memory.uint8(count);
   for (let t = 0; t < count; t++) {
     const a = 3 * triangles[3 * t]!, b = 3 * triangles[3 * t + 1]!, c = 3 * triangles[3 * t + 2]!;
     const ax = positions[a]!, ay = positions[a + 1]!, az = positions[a + 2]!;

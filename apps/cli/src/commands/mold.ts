@@ -123,12 +123,14 @@ export const command: Command = async (argv) => {
 
   let bytes: Uint8Array;
   try {
-    bytes = new Uint8Array(await readFile(file));
+    // A view, not a copy: the file can be tens of MB, and every fresh page costs.
+    const buffer = await readFile(file);
+    bytes = new Uint8Array(buffer.buffer, buffer.byteOffset, buffer.byteLength);
   } catch (err) {
     const reason = err instanceof Error && 'code' in err ? String((err as NodeJS.ErrnoException).code) : 'unreadable';
     throw new CliError(`cannot read "${file}" (${reason}); check the path`);
   }
-  const mould = unwrap(readMouldFile(bytes));
+  const mould = unwrap(readMouldFile(bytes, { consumeBytes: true }));
   const units: FileUnits = chosenUnits ?? mould.fileUnits ?? 'mm';
   const levelMm = level * mmPerUnit[units];
   const mesh = unwrap(prepareMesh(mould.soup, { units, up }));

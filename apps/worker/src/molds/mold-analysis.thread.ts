@@ -20,7 +20,8 @@ const post = (m: AnalysisMessage) => parentPort!.postMessage(m);
 // The engine runs here, off the worker's event loop, so ticks and mail keep going during a big mould.
 parentPort!.once('message', (req: AnalysisRequest) => {
   // STL, 3MF or OBJ, told apart by content; the units were settled at upload (a 3MF's own, unless the maker chose).
-  const file = readMouldFile(req.bytes, { maxTriangles: req.maxTriangles, archiveLimits: archiveLimitsFor(req.maxUnpackedBytes) });
+  // The bytes were handed over to this thread, so a binary STL may be read in place.
+  const file = readMouldFile(req.bytes, { maxTriangles: req.maxTriangles, archiveLimits: archiveLimitsFor(req.maxUnpackedBytes), consumeBytes: true });
   if (!file.ok) return post({ type: 'refused', code: file.error.code, message: file.error.message });
   post({ type: 'progress', value: 0.3 });
   const mesh = prepareMesh(file.value.soup, { units: req.units, up: req.up });

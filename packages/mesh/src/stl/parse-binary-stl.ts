@@ -38,7 +38,7 @@ export function isExactBinary(layout: BinaryLayout | null): boolean {
  * the last record, so the records are counted from the file's size: the header's count is only
  * believed when it agrees. A file cut short inside a record is refused, since its end is lost.
  */
-export function parseBinaryStl(bytes: Uint8Array, maxTriangles: number): Result<TriangleSoup> {
+export function parseBinaryStl(bytes: Uint8Array, maxTriangles: number, consumeBytes = false): Result<TriangleSoup> {
   const layout = binaryLayout(bytes);
   if (layout === null) {
     return fail('stl_truncated', `The file is only ${bytes.length} bytes, shorter than the 84-byte header of a binary STL; the upload or export was cut short.`);
@@ -54,8 +54,12 @@ export function parseBinaryStl(bytes: Uint8Array, maxTriangles: number): Result<
   if (records > maxTriangles) {
     return fail('stl_too_many_triangles', `The STL holds ${records} triangles, more than the ${maxTriangles} this service accepts; decimate the mesh in your CAD program and upload it again.`);
   }
-  const positions = new Float32Array(records * 9);
   const exact = announced === records && trailing === 0;
+  // In place only when the normals need no check afterwards (the file's count and size agree) and
+  // the corners can be read as aligned float32s. Each record is read before anything is written
+  // over it: record t is written at byte 36t, behind the 84 + 50t it is read from.
+  const inPlace = consumeBytes && exact && bytes.byteOffset % 4 === 0;
+  const positions = inPlace ? new Float32Array(bytes.buffer, bytes.byteOffset, records * 9) : new Float32Array(records * 9);
   const bad = readCorners(bytes, records, positions, !exact);
   if (bad >= 0) {
     return fail('stl_non_finite', exact
@@ -73,7 +77,7 @@ export function parseBinaryStl(bytes: Uint8Array, maxTriangles: number): Result<
   if (trailing > 0) {
     warnings.push({ code: 'stl_trailing_bytes', message: `The STL has ${trailing} stray byte${trailing === 1 ? '' : 's'} after its last triangle; ${trailing === 1 ? 'it was' : 'they were'} ignored.` });
   }
-  return ok({ positions, triangleCount: records, format: 'binary', warnings });
+  return ok({ positions, triangleCount: records, format: 'binary', warnings, ...(inPlace ? { spareBytes: bytes } : {}) });
 }
 
 /**

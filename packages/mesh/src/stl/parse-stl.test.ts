@@ -24,6 +24,27 @@ describe('parseStl: reading', () => {
     expect(Array.from(soup.value.positions)).toEqual(Array.from(cube.positions, Math.fround));
   });
 
+  it('reads the same corners in place when it may overwrite the bytes, and copies when the file is quirky', () => {
+    const rounded = Array.from(cube.positions, Math.fround);
+    const bytes = encodeStlBinary(cube);
+    const soup = parseStl(bytes, { consumeBytes: true });
+    expect(soup.ok && soup.value.positions.buffer).toBe(bytes.buffer);
+    expect(soup.ok && Array.from(soup.value.positions)).toEqual(rounded);
+    // A stray byte after the last record: the normals are checked after the corners, so no overwriting.
+    const trailing = new Uint8Array(bytes.length + 1);
+    trailing.set(encodeStlBinary(cube));
+    const copy = Uint8Array.from(trailing);
+    const quirky = parseStl(trailing, { consumeBytes: true });
+    expect(quirky.ok && quirky.value.positions.buffer).not.toBe(trailing.buffer);
+    expect(quirky.ok && Array.from(quirky.value.positions)).toEqual(rounded);
+    expect(trailing).toEqual(copy);
+    // Not at a 4-byte boundary of its buffer: read into an array of its own.
+    const shifted = new Uint8Array(bytes.length + 2);
+    shifted.set(encodeStlBinary(cube), 2);
+    const unaligned = parseStl(shifted.subarray(2), { consumeBytes: true });
+    expect(unaligned.ok && Array.from(unaligned.value.positions)).toEqual(rounded);
+  });
+
   it('decides binary by the size rule even when the 80-byte header begins with "solid"', () => {
     const soup = parseStl(encodeStlBinary(cube, 'solid cube exported by a CAD program'));
     expect(soup.ok && soup.value.format).toBe('binary');

@@ -35,7 +35,7 @@ export function parseStl(bytes: Uint8Array, options: ParseStlOptions = {}): Resu
       const read = parseAsciiStl(withoutByteOrderMark(bytes), maxTriangles);
       if (read.ok) return read;
     }
-    return parseBinaryStl(bytes, maxTriangles);
+    return parseBinaryStl(bytes, maxTriangles, options.consumeBytes === true);
   }
   if (ascii) return parseAsciiStl(withoutByteOrderMark(bytes), maxTriangles);
   if (looksLikeText(bytes)) {
@@ -43,5 +43,5 @@ export function parseStl(bytes: Uint8Array, options: ParseStlOptions = {}): Resu
   }
   const other = otherFormatOf(bytes) ?? (bytes[0] === 0x50 && bytes[1] === 0x4b ? 'a zip archive (a 3MF, perhaps)' : null);
   if (other !== null) return fail('stl_not_stl', `The file is ${other}, not an STL; export the mould as STL and upload that file.`);
-  return parseBinaryStl(bytes, maxTriangles);
+  return parseBinaryStl(bytes, maxTriangles, options.consumeBytes === true);
 }

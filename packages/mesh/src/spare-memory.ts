@@ -1,0 +1,44 @@
+/**
+ * Typed arrays carved one after another out of memory nothing else uses any more (the bytes of a
+ * file read in place), or fresh ones when there is none or it runs out. Fresh memory costs a page
+ * fault per 4 kB at its first touch, which for a big mesh outweighs the arithmetic done in it.
+ * A carved array holds whatever was there: callers write every entry before reading it, or ask
+ * for a cleared one.
+ */
+export class SpareMemory {
+  private at: number;
+  private readonly end: number;
+
+  constructor(private readonly bytes: Uint8Array | null) {
+    this.at = bytes ? bytes.byteOffset : 0;
+    this.end = bytes ? bytes.byteOffset + bytes.byteLength : 0;
+  }
+
+  private take(length: number, size: number): number | null {
+    if (!this.bytes) return null;
+    const at = Math.ceil(this.at / size) * size;
+    if (at + length * size > this.end) return null;
+    this.at = at + length * size;
+    return at;
+  }
+
+  float64(length: number): Float64Array {
+    const at = this.take(length, 8);
+    return at === null ? new Float64Array(length) : new Float64Array(this.bytes!.buffer, at, length);
+  }
+
+  uint32(length: number): Uint32Array {
+    const at = this.take(length, 4);
+    return at === null ? new Uint32Array(length) : new Uint32Array(this.bytes!.buffer, at, length);
+  }
+
+  int8(length: number): Int8Array {
+    const at = this.take(length, 1);
+    return at === null ? new Int8Array(length) : new Int8Array(this.bytes!.buffer, at, length);
+  }
+
+  uint8(length: number): Uint8Array {
+    const at = this.take(length, 1);
+    return at === null ? new Uint8Array(length) : new Uint8Array(this.bytes!.buffer, at, length);
+  }
+}
