@@ -17,7 +17,7 @@ function columnFloorMm(grid: ColumnGrid, dam: Dam, zMin: number): number {
 }
 
 function floorOf(model: CavityModel, dam: Dam): number {
-  const { analysis, grid } = model;
+  const { analysis } = model;
   const zMin = analysis.bboxMm.min[2];
   if (analysis.method === 'exact') {
     // Table showing inside the dam (a box dam round a round blank, a frame open underneath): resin stands on it.
@@ -26,7 +26,8 @@ function floorOf(model: CavityModel, dam: Dam): number {
     if (!analysis.exact!.overhangs) return analysis.exact!.lowestFloorMm;
   }
   // Floors under overhangs may hold air or be sealed off: the columns know which gaps the resin reaches.
-  return columnFloorMm(grid, dam, zMin);
+  // The grid is built on first read (see cavity-analysis), so only this path asks for it.
+  return columnFloorMm(model.grid, dam, zMin);
 }
 
 /**
