@@ -27,6 +27,10 @@ export interface RouteSpec {
   middleware?: RequestHandler[];
   /** Extra text for the OpenAPI document, e.g. the multipart fields. */
   requestNote?: string;
+  /** The success answer's media type when it is not JSON (an event stream); `response` then describes each event's data. */
+  contentType?: string;
+  /** The route answers 304 to an If-None-Match that matches its ETag. */
+  conditional?: boolean;
 }
 
 export interface HandlerInput<A> {

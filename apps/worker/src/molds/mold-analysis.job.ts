@@ -3,6 +3,7 @@ import { tsWorker } from '../ts-worker';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import type { AnalysisMessage, AnalysisRequest } from './mold-analysis.thread';
+import { readMoldFileBytes } from './mold-file-bytes';
 
 export interface MoldAnalysisSettings {
   maxTriangles: number;
@@ -82,10 +83,9 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
   if (!mold) return false;
   const log = logger.child({ moldId: mold.id });
   try {
-    const [file] = (await ds.query('SELECT bytes FROM mold_files WHERE mold_id = $1', [mold.id])) as [{ bytes: Buffer } | undefined];
-    if (!file) throw new Error('the mould file bytes are missing');
+    const bytes = await readMoldFileBytes(ds, mold.id);
+    if (!bytes) throw new Error('the mould file bytes are missing');
     await ds.query('UPDATE molds SET progress = 0.15 WHERE id = $1', [mold.id]);
-    const bytes = new Uint8Array(file.bytes.buffer.slice(file.bytes.byteOffset, file.bytes.byteOffset + file.bytes.byteLength));
     const outcome = await runThread({ bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes }, (value) => {
       void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing'`, [mold.id, value]).catch(() => undefined);
     }, stop);
@@ -100,10 +100,10 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
       return true;
     }
     await ds.query(
-      `UPDATE molds SET status = 'ready', progress = 1, analysis = $4, report = $5, triangle_count = $6, analysed_at = now(),
+      `UPDATE molds SET status = 'ready', progress = 1, analysis = $4, report = $5, depth_map = $6, triangle_count = $7, analysed_at = now(),
               error_code = NULL, error_message = NULL, locked_until = NULL, updated_at = now()
         WHERE id = $1 ${sameReading}`,
-      [mold.id, mold.units, mold.up_axis, JSON.stringify(outcome.analysis), JSON.stringify(outcome.report), outcome.triangles],
+      [mold.id, mold.units, mold.up_axis, outcome.analysisJson, outcome.reportJson, outcome.depthMapJson, outcome.triangles],
     );
     log.info('mould analysed');
   } catch (err) {
@@ -124,7 +124,6 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
   return true;
 }
 
-/** Every queued mould, one after another. */
 /**
  * Moulds whose stored analysis an older engine wrote go back in the queue: their reports were computed by rules the
  * engine no longer follows (the liquid fill replaced the drop-straight-down rule in version 2).
@@ -141,8 +140,12 @@ export async function requeueOutdatedMolds(ds: DataSource, logger: Logger): Prom
   return n;
 }
 
-export async function analyseQueuedMolds(ds: DataSource, s: MoldAnalysisSettings, logger: Logger, stop?: AbortSignal): Promise<number> {
-  await requeueOutdatedMolds(ds, logger);
+/**
+ * Every queued mould, one after another. Looking for outdated analyses reads every stored one, so a long-running
+ * worker does it once at start (only a new build brings a new engine) rather than before each upload.
+ */
+export async function analyseQueuedMolds(ds: DataSource, s: MoldAnalysisSettings, logger: Logger, stop?: AbortSignal, requeueOutdated = true): Promise<number> {
+  if (requeueOutdated) await requeueOutdatedMolds(ds, logger);
   let n = 0;
   while (!stop?.aborted && (await analyseNextMold(ds, s, logger, stop))) n++;
   return n;

@@ -21,7 +21,9 @@ export class MouldDepthMapApart1796375915921 implements MigrationInterface {
     // browsers following that mould's analysis.
     await queryRunner.query(`CREATE FUNCTION "molds_progress_notify"() RETURNS trigger LANGUAGE plpgsql AS $$
       BEGIN
-        PERFORM pg_notify('gelpoint_mold_progress', json_build_object('id', NEW.id, 'status', NEW.status, 'progress', NEW.progress)::text);
+        PERFORM pg_notify('gelpoint_mold_progress', json_build_object(
+          'id', NEW.id, 'status', NEW.status, 'progress', NEW.progress,
+          'errorCode', NEW.error_code, 'errorMessage', left(NEW.error_message, 2000))::text);
         RETURN NULL;
       END $$`);
     await queryRunner.query(`CREATE TRIGGER "molds_progress_notify" AFTER UPDATE OF "status", "progress" ON "molds" FOR EACH ROW
