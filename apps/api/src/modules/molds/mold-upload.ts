@@ -86,7 +86,9 @@ export function stlUpload(maxBytes = MAX_STL_BYTES): RequestHandler {
     });
     parser.on('field', (name, value, info) => {
       if (info.valueTruncated) return fail(new AppError('bad_request', 'field_too_long', `the field "${name.slice(0, 40)}" is longer than 4096 characters`));
-      body[decodeFormDataName(name)] = value;
+      const key = decodeFormDataName(name);
+      if (key in body) return fail(new AppError('bad_request', 'field_twice', `the field "${key.slice(0, 40)}" is sent twice; send each field once`));
+      body[key] = value;
     });
     parser.on('filesLimit', () => fail(new AppError('bad_request', 'unexpected_file', 'send exactly one file, in the part named "file"')));
     parser.on('fieldsLimit', () => fail(new AppError('bad_request', 'bad_upload', 'the upload has too many fields; send the file with units, up, name and pieceId only')));

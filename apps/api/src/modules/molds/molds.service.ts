@@ -155,13 +155,13 @@ export class Molds {
     const hit = this.depthMaps.get(key);
     if (hit) return hit;
     const [stored] = (await this.ds.query(
-      `SELECT COALESCE(depth_map, report -> 'fillToTop' -> 'depthMap') AS depth_map,
+      `SELECT analysed_at, COALESCE(depth_map, report -> 'fillToTop' -> 'depthMap') AS depth_map,
               (report -> 'fillToTop' ->> 'levelMm')::float8 AS level, report -> 'fillToTop' ->> 'dam' AS dam
-         FROM molds WHERE id = $1 AND analysed_at = $2`,
-      [id, row.analysed_at],
-    )) as { depth_map: DepthMapRecord | null; level: number | null; dam: Dam | null }[];
+         FROM molds WHERE id = $1 AND status = 'ready'`,
+      [id],
+    )) as { analysed_at: Date; depth_map: DepthMapRecord | null; level: number | null; dam: Dam | null }[];
     // Analysed again between the two reads: the next request finds the new analysis.
-    if (!stored?.depth_map || stored.level === null || !stored.dam) throw notReady();
+    if (!stored?.depth_map || stored.level === null || !stored.dam || stored.analysed_at.getTime() !== row.analysed_at.getTime()) throw notReady();
     const json = JSON.stringify({ ...stored.depth_map, levelMm: stored.level, dam: stored.dam } satisfies MoldDepthMap);
     const served = { json, etag: `"${createHash('sha256').update(json).digest('base64url')}"` };
     this.depthMaps.set(key, served);
