@@ -1,3 +1,4 @@
+import type { Worker } from 'node:worker_threads';
 import { cavityAnalysisVersion } from '@gelpoint/mesh';
 import { tsWorker } from '../ts-worker';
 import type { Logger } from 'pino';
@@ -42,9 +43,28 @@ export async function claimQueuedMold(ds: DataSource, s: MoldAnalysisSettings): 
 /** The analysis was cut short because the worker is stopping; the mould goes back to the queue. */
 class AnalysisStopped extends Error {}
 
-function runThread(req: AnalysisRequest, onProgress: (v: number) => void, stop?: AbortSignal): Promise<Extract<AnalysisMessage, { type: 'done' | 'refused' }>> {
+/** A started analysis thread, and what ended it if it ended before it was given its work. */
+interface AnalysisThread {
+  worker: Worker;
+  failed?: Error;
+}
+
+function spawnAnalysisThread(): AnalysisThread {
+  const worker = tsWorker(new URL('./mold-analysis.thread.ts', import.meta.url), { resourceLimits: { maxOldGenerationSizeMb: 4096 } });
+  const thread: AnalysisThread = { worker };
+  worker.on('error', (err) => (thread.failed ??= err));
+  worker.once('exit', (code) => (thread.failed ??= new Error(`the analysis thread stopped (exit ${code})`)));
+  return thread;
+}
+
+function runThread(thread: AnalysisThread, req: AnalysisRequest, onProgress: (v: number) => void, stop?: AbortSignal): Promise<Extract<AnalysisMessage, { type: 'done' | 'refused' }>> {
+  const w = thread.worker;
   return new Promise((resolve, reject) => {
-    const w = tsWorker(new URL('./mold-analysis.thread.ts', import.meta.url), { resourceLimits: { maxOldGenerationSizeMb: 4096 } });
+    if (thread.failed) return reject(thread.failed);
+    if (stop?.aborted) {
+      void w.terminate();
+      return reject(new AnalysisStopped('the worker is stopping'));
+    }
     let settled = false;
     const onStop = () => {
       if (settled) return;
@@ -83,10 +103,18 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
   if (!mold) return false;
   const log = logger.child({ moldId: mold.id });
   try {
-    const bytes = await readMoldFileBytes(ds, mold.id);
-    if (!bytes) throw new Error('the mould file bytes are missing');
-    await ds.query('UPDATE molds SET progress = 0.15 WHERE id = $1', [mold.id]);
-    const outcome = await runThread({ bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes }, (value) => {
+    // The thread starts (and loads the engine) while the file is read.
+    const thread = spawnAnalysisThread();
+    let bytes: Uint8Array | null;
+    try {
+      bytes = await readMoldFileBytes(ds, mold.id);
+      if (!bytes) throw new Error('the mould file bytes are missing');
+      await ds.query('UPDATE molds SET progress = 0.15 WHERE id = $1', [mold.id]);
+    } catch (err) {
+      void thread.worker.terminate();
+      throw err;
+    }
+    const outcome = await runThread(thread, { bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes }, (value) => {
       void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing'`, [mold.id, value]).catch(() => undefined);
     }, stop);
     // Units or up axis corrected while this ran: the mould is queued again and this outcome is of the old reading.

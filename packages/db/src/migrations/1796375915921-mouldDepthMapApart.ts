@@ -9,11 +9,14 @@ export class MouldDepthMapApart1796375915921 implements MigrationInterface {
       `UPDATE "molds" SET "depth_map" = "report" -> 'fillToTop' -> 'depthMap', "report" = "report" #- '{fillToTop,depthMap}'
         WHERE "report" -> 'fillToTop' ? 'depthMap'`,
     );
-    // pglz spent seconds compressing a 50 MB upload on its way in; lz4 keeps most of the saving at a fraction of
-    // the time. A server built without lz4 (or older than PostgreSQL 14) keeps pglz.
+    // pglz spent seconds compressing a 50 MB upload on its way in, and a good part of the write of a finished
+    // analysis; lz4 keeps most of the saving at a fraction of the time. A server built without lz4 (or older than
+    // PostgreSQL 14) keeps pglz.
     await queryRunner.query(`DO $$
       BEGIN
         ALTER TABLE "mold_files" ALTER COLUMN "bytes" SET COMPRESSION lz4;
+        ALTER TABLE "molds" ALTER COLUMN "analysis" SET COMPRESSION lz4, ALTER COLUMN "report" SET COMPRESSION lz4,
+          ALTER COLUMN "depth_map" SET COMPRESSION lz4;
       EXCEPTION WHEN feature_not_supported OR syntax_error THEN
         NULL;
       END $$`);
@@ -37,6 +40,7 @@ export class MouldDepthMapApart1796375915921 implements MigrationInterface {
     await queryRunner.query(`DO $$
       BEGIN
         ALTER TABLE "mold_files" ALTER COLUMN "bytes" SET COMPRESSION pglz;
+        ALTER TABLE "molds" ALTER COLUMN "analysis" SET COMPRESSION pglz, ALTER COLUMN "report" SET COMPRESSION pglz;
       EXCEPTION WHEN feature_not_supported OR syntax_error THEN
         NULL;
       END $$`);

@@ -33,7 +33,7 @@ export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number
       tag: 'molds',
       summary: "Upload a mould file, STL, 3MF or OBJ told apart by content (multipart: file, units, up, name, pieceId; without units a 3MF is read in its own unit, other files in mm); the analysis runs in the background",
       access: ['lead', 'maker'],
-      middleware: [uploadLimit, stlUpload(maxStlBytes)],
+      middleware: [uploadLimit, molds.warmUp, stlUpload(maxStlBytes)],
       body: MoldUploadFields,
       response: MoldView,
       status: 202,

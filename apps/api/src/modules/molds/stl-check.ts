@@ -40,6 +40,11 @@ export class StlChecker {
     this.waiting.clear();
   }
 
+  /** Starts the thread if it is not running, so it is ready by the time an upload that is still arriving is in. */
+  warm(): void {
+    this.thread();
+  }
+
   check(bytes: Uint8Array): Promise<StlCheck> {
     const id = this.nextId++;
     return new Promise((resolve) => {
