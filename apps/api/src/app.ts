@@ -20,6 +20,7 @@ import { healthRoutes } from './modules/health/health.routes';
 import { mailDomainOf } from '@gelpoint/db';
 import { pieceRoutes } from './modules/pieces/pieces.routes';
 import { moldRoutes } from './modules/molds/molds.routes';
+import { MoldProgressHub } from './modules/molds/mold-progress-hub';
 import { Molds } from './modules/molds/molds.service';
 import { StlChecker } from './modules/molds/stl-check';
 import { pourPlanRoutes } from './modules/pour-plans/pour-plans.routes';
@@ -44,6 +45,8 @@ export interface AppDeps {
 export interface GelpointApp {
   app: Express;
   registry: RouteRegistry;
+  /** Ends the event streams (browsers reconnect elsewhere) and their database connection: call it on shutdown. */
+  close(): void;
 }
 
 /** The whole HTTP application, without listening: tests mount it on port 0. */
@@ -89,7 +92,8 @@ export function createApp({ ds, config, logger = createLogger(config.logLevel) }
   const quota = new UploadQuota(config.uploadQuotaBytes);
   const uploadLimit = perMemberLimit(ds, config.uploadsPerHour);
   const molds = new Molds(ds, new StlChecker(config.maxStlTriangles, config.maxUnpackedBytes), quota);
-  moldRoutes(registry, molds, config.maxStlBytes, uploadLimit);
+  const progress = new MoldProgressHub(config.databaseUrl, logger);
+  moldRoutes(registry, molds, config.maxStlBytes, uploadLimit, { ds, hub: progress, heartbeatMs: config.eventsHeartbeatMs });
   pourPlanRoutes(registry, new PourPlans(ds, molds.cavityForPlan));
   pourRoutes(registry, new Pours(ds, undefined, quota), new PourLog(ds), uploadLimit);
   pourExportRoutes(registry, ds);
@@ -104,5 +108,5 @@ export function createApp({ ds, config, logger = createLogger(config.logLevel) }
   app.use('/api', api);
   app.use(staticWeb(config.webDist));
   app.use(errorHandler(logger));
-  return { app, registry };
+  return { app, registry, close: () => progress.close() };
 }

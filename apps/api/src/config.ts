@@ -25,6 +25,7 @@ const Env = z.object({
   GELPOINT_UPLOADS_PER_HOUR: z.coerce.number().int().positive().default(60),
   GELPOINT_UPLOAD_QUOTA_MB: z.coerce.number().positive().default(1024),
   GELPOINT_SHUTDOWN_GRACE_S: z.coerce.number().positive().max(600).default(25),
+  GELPOINT_EVENTS_HEARTBEAT_S: z.coerce.number().positive().max(300).default(15),
 });
 
 export interface Config {
@@ -50,6 +51,8 @@ export interface Config {
   uploadQuotaBytes: number;
   /** On SIGTERM, how long requests already under way may take to finish before their connections are cut. */
   shutdownGraceMs: number;
+  /** How often an event stream with nothing to say sends a comment, so proxies and browsers keep it open. */
+  eventsHeartbeatMs: number;
 }
 
 function jwtSecretFrom(env: z.infer<typeof Env>): string {
@@ -92,5 +95,6 @@ export function loadConfig(raw: NodeJS.ProcessEnv = process.env): Config {
     uploadsPerHour: env.GELPOINT_UPLOADS_PER_HOUR,
     uploadQuotaBytes: Math.round(env.GELPOINT_UPLOAD_QUOTA_MB * 1024 * 1024),
     shutdownGraceMs: Math.round(env.GELPOINT_SHUTDOWN_GRACE_S * 1000),
+    eventsHeartbeatMs: Math.round(env.GELPOINT_EVENTS_HEARTBEAT_S * 1000),
   };
 }

@@ -24,7 +24,8 @@ try {
   fail(`cannot reach the database (${err instanceof Error ? err.message : String(err)}); is PostgreSQL running? npm start starts it`);
 }
 
-const { app } = createApp({ ds, config, logger });
+const gelpoint = createApp({ ds, config, logger });
+const { app } = gelpoint;
 const server = createServer(app);
 server.keepAliveTimeout = 65_000;
 server.on('error', (err: NodeJS.ErrnoException) => {
@@ -52,6 +53,8 @@ async function shutdown(signal: string) {
   closing = true;
   logger.info({ signal, graceMs: config.shutdownGraceMs }, 'api draining: no new connections');
   const drained = new Promise<void>((resolve) => server.close(() => resolve()));
+  // Event streams never finish on their own: they end now, and their browsers reconnect to another instance.
+  gelpoint.close();
   // Connections turn idle one by one as their last response goes out.
   const sweep = setInterval(() => server.closeIdleConnections(), 100);
   const deadline = setTimeout(() => {

@@ -1,9 +1,10 @@
 import cron from 'node-cron';
 import { pino } from 'pino';
-import { connectDataSource, createDataSource } from '@gelpoint/db';
+import { connectDataSource, createDataSource, MOLD_ANALYSIS_CHANNEL } from '@gelpoint/db';
 import { loadWorkerConfig, type WorkerConfig } from './config';
 import { listenForWork } from './work-wakeup';
 import { smtpTransport } from './mail/smtp-transport';
+import { analyseQueuedMolds } from './molds/mold-analysis.job';
 import { SerialRunner } from './serial-runner';
 import { runDueWork } from './worker';
 
@@ -40,17 +41,27 @@ if (once) {
 }
 
 const stopping = new AbortController();
-const runner = new SerialRunner(
-  async () => {
-    if (stopping.signal.aborted) return;
-    await runDueWork(ds, transport, config, logger, stopping.signal);
-  },
-  (err) => logger.error({ err }, 'worker pass failed; the next tick tries again'),
-);
-const task = cron.schedule(config.cron, () => runner.wake(), { name: 'gelpoint-tick', noOverlap: true });
-const wakeup = listenForWork(config.databaseUrl, () => runner.wake(), logger);
+const onError = (err: unknown) => logger.error({ err }, 'worker pass failed; the next tick tries again');
+// Moulds have a runner of their own, so an upload is analysed at once even while a pass is sending mail.
+const otherJobs = config.jobs.filter((j) => j !== 'molds');
+const chores = new SerialRunner(async () => {
+  if (stopping.signal.aborted || otherJobs.length === 0) return;
+  await runDueWork(ds, transport, { ...config, jobs: otherJobs }, logger, stopping.signal);
+}, onError);
+let firstMouldPass = true;
+const moulds = new SerialRunner(async () => {
+  if (stopping.signal.aborted || !config.jobs.includes('molds')) return;
+  await analyseQueuedMolds(ds, config.molds, logger, stopping.signal, firstMouldPass);
+  firstMouldPass = false;
+}, onError);
+const wakeAll = () => {
+  chores.wake();
+  moulds.wake();
+};
+const task = cron.schedule(config.cron, wakeAll, { name: 'gelpoint-tick', noOverlap: true });
+const wakeup = listenForWork(config.databaseUrl, (channel) => (channel === MOLD_ANALYSIS_CHANNEL ? moulds : chores).wake(), logger);
 logger.info({ cron: config.cron }, 'worker started');
-runner.wake();
+wakeAll();
 
 /**
  * Takes nothing new, lets the send under way finish and be recorded, and hands back whatever else it
@@ -66,7 +77,7 @@ async function shutdown(signal: string) {
   await task.stop();
   await wakeup.close();
   const deadline = new Promise<boolean>((resolve) => setTimeout(() => resolve(false), config.shutdownGraceMs).unref());
-  const finished = await Promise.race([runner.idle().then(() => true), deadline]);
+  const finished = await Promise.race([Promise.all([chores.idle(), moulds.idle()]).then(() => true), deadline]);
   if (!finished) logger.warn('worker stop deadline passed; what it still holds is retried after its lease');
   transport.close();
   await ds.destroy().catch(() => undefined);

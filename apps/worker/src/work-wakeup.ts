@@ -6,7 +6,7 @@ import { MOLD_ANALYSIS_CHANNEL, OUTBOUND_MAIL_CHANNEL } from '@gelpoint/db';
  * LISTENs for new work (mail, uploaded moulds) so an invitation leaves within a second instead of at
  * the next tick; the tick remains the safety net, so a lost connection only delays it. Reconnects.
  */
-export function listenForWork(url: string, onWake: () => void, logger: Logger): { close(): Promise<void> } {
+export function listenForWork(url: string, onWake: (channel: string) => void, logger: Logger): { close(): Promise<void> } {
   let client: pg.Client | undefined;
   let closed = false;
   let retry: NodeJS.Timeout | undefined;
@@ -19,13 +19,15 @@ export function listenForWork(url: string, onWake: () => void, logger: Logger): 
       c.end().catch(() => undefined);
       schedule();
     });
-    c.on('notification', () => onWake());
+    c.on('notification', (n) => onWake(n.channel));
     try {
       await c.connect();
       await c.query(`LISTEN ${OUTBOUND_MAIL_CHANNEL}`);
       await c.query(`LISTEN ${MOLD_ANALYSIS_CHANNEL}`);
       client = c;
-      onWake();
+      // Whatever came while the connection was down is looked for now.
+      onWake(OUTBOUND_MAIL_CHANNEL);
+      onWake(MOLD_ANALYSIS_CHANNEL);
     } catch (err) {
       logger.warn({ err: (err as Error).message }, 'cannot listen for work yet; retrying');
       c.end().catch(() => undefined);

@@ -70,8 +70,8 @@ export const CavityReport = z.object({
   warnings: z.array(Warning),
   /** Volume below each level (outline dam), from the lowest to the highest point of the mould, levels in its own frame. */
   curve: z.array(z.object({ levelMm: z.number(), volumeMm3: z.number() })),
-  /** The fill to the top of the mould, with its depth map. */
-  fillToTop: CavityFill,
+  /** The fill to the top of the mould; its depth map is a resource of its own (GET /api/molds/:id/depth-map). */
+  fillToTop: CavityFill.omit({ depthMap: true }),
   floorMm: z
     .object({ outline: z.number(), box: z.number() })
     .describe("the cavity floor with each dam, as a height in the mould's own frame (mm): a level from the floor plus this is the same level in the mould's frame"),
@@ -99,6 +99,21 @@ export const MoldView = z.object({
   analysedAt: Timestamp.nullable(),
 });
 export type MoldView = z.infer<typeof MoldView>;
+
+/** The depth map of the report's fill to the top: resin thickness per column with the report's dam, level in the mould's frame. */
+export const MoldDepthMap = DepthMap.extend({
+  levelMm: z.number().describe("the level the map was measured at, in the mould's own frame (mm)"),
+  dam: Dam,
+});
+export type MoldDepthMap = z.infer<typeof MoldDepthMap>;
+
+/** What the analysis events stream (GET /api/molds/:id/events) carries in each `progress`, `ready` or `failed` event. */
+export const MoldProgressEvent = z.object({
+  status: MoldStatus,
+  progress: z.number().describe('0..1'),
+  error: z.object({ code: z.string(), message: z.string() }).nullable(),
+});
+export type MoldProgressEvent = z.infer<typeof MoldProgressEvent>;
 
 export const UpdateMoldRequest = z
   .object({

@@ -127,6 +127,9 @@ const table: Record<string, Rule> = {
   'GET /api/molds/:id/fill': { allowed: 'member', query: 'level=5', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'GET /api/molds/:id/layers': { allowed: 'member', query: 'levels=4,6', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'GET /api/molds/:id/stl': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
+  // A finished mould's stream says so and closes, so each call here gets a whole answer.
+  'GET /api/molds/:id/events': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? await settledMold(w) : w.otherIds.mold }) },
+  'GET /api/molds/:id/depth-map': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'DELETE /api/molds/:id': { allowed: ['lead', 'maker'], params: async (w, shop) => ({ id: shop === 'own' ? await uploadMold(w, 'own') : w.otherIds.mold }) },
   'GET /api/pour-plans': { allowed: 'member' },
   'POST /api/pour-plans': { allowed: ['lead', 'maker'], body: (w) => planBody(w.ownPiece, w.ownResin) },
@@ -158,6 +161,13 @@ const table: Record<string, Rule> = {
 async function uploadMold(w: World, shop: 'own' | 'other'): Promise<string> {
   const res = await h.http().post('/api/molds').set(bearer(await leadOf(w, shop))).attach('file', binaryStl(pocketMouldTriangles({ outer: [40, 30, 10], pocket: [5, 5, 35, 25], floorZ: 4 })), 'm.stl').expect(202);
   return res.body.id;
+}
+
+/** A mould of the own shop whose analysis is over (here: refused), as a worker leaves it. */
+async function settledMold(w: World): Promise<string> {
+  const id = await uploadMold(w, 'own');
+  await h.ds.query(`UPDATE molds SET status = 'failed', progress = 1, error_code = 'matrix', error_message = 'settled for the matrix' WHERE id = $1`, [id]);
+  return id;
 }
 
 const world = {} as World;

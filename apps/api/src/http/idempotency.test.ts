@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { createApp } from '../app';
 import { resinInput } from '../test-support/fixtures';
 import { bearer, createShop, useHarness } from '../test-support/harness';
+import { binaryStl, pocketMouldTriangles } from '../test-support/pocket-mould';
 import { canonicalJson, requestFingerprint } from './idempotency';
 
 const h = useHarness();
@@ -134,6 +135,22 @@ describe('Idempotency-Key on creates', () => {
     expect(await count(`SELECT count(*) AS n FROM pieces WHERE shop_id = $1 AND name LIKE 'Maple bowl%'`, [w.shop.shopId])).toBe(2);
   });
 
+  it('replays a streamed mould upload once, and tells a different file under the same key apart', async () => {
+    const w = await pourUnderWay();
+    const key = randomUUID();
+    const pocket = binaryStl(pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 10, 90, 50], floorZ: 10 }));
+    const deeper = binaryStl(pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 10, 90, 50], floorZ: 5 }));
+    const send = (bytes: Buffer) => h.http().post('/api/molds').set(bearer(w.maker)).set('Idempotency-Key', key).attach('file', bytes, 'pocket.stl').field('name', 'Tray pocket');
+    const first = await send(pocket).expect(202);
+    const again = await send(pocket).expect(202);
+    expect(again.headers['idempotent-replayed']).toBe('true');
+    expect(again.body.id).toBe(first.body.id);
+    // Same fields, another file: the file's hash taken as it streamed is part of the request, so it is not a replay.
+    const changed = await send(deeper).expect(422);
+    expect(changed.body.error.code).toBe('idempotency_key_reused');
+    expect(await count(`SELECT count(*) AS n FROM molds WHERE shop_id = $1 AND name = 'Tray pocket'`, [w.shop.shopId])).toBe(1);
+  });
+
   it('lets a key whose create was refused be sent again once the cause is gone', async () => {
     const w = await pourUnderWay();
     const cup = w.cups[0]!;
@@ -175,5 +192,8 @@ describe('request fingerprints', () => {
     expect(requestFingerprint('POST /x', base)).not.toBe(requestFingerprint('POST /x', { ...base, body: { a: 2, b: 'x' } }));
     expect(requestFingerprint('POST /x', base)).not.toBe(requestFingerprint('POST /y', base));
     expect(requestFingerprint('POST /x', { ...base, file: { buffer: Buffer.from('a') } })).not.toBe(requestFingerprint('POST /x', { ...base, file: { buffer: Buffer.from('b') } }));
+    // A file hashed as it streamed counts the same as the same bytes held whole (SHA-256 of "a", FIPS 180-4 via node:crypto).
+    const shaOfA = 'ca978112ca1bbdcafac231b39a23dc4da786eff8147c4e72b9807785afee48bb';
+    expect(requestFingerprint('POST /x', { ...base, fileSha256: shaOfA })).toBe(requestFingerprint('POST /x', { ...base, file: { buffer: Buffer.from('a') } }));
   });
 });

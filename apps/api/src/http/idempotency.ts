@@ -26,11 +26,21 @@ export interface IdempotentAnswer {
   replayed: boolean;
 }
 
+/**
+ * Where an upload middleware that hashes the file as it streams leaves its SHA-256 (hex), so the fingerprint of the
+ * request covers the file without hashing it twice.
+ */
+export const UPLOAD_SHA256_LOCAL = 'uploadSha256';
+
 /** What identifies "the same request": its route, parameters, query, validated body and any uploaded file. */
-export function requestFingerprint(route: string, parts: { params: unknown; query: unknown; body: unknown; file?: { buffer: Buffer } | undefined }): string {
+export function requestFingerprint(
+  route: string,
+  parts: { params: unknown; query: unknown; body: unknown; file?: { buffer: Buffer } | undefined; fileSha256?: string | undefined },
+): string {
   const hash = createHash('sha256');
   hash.update(route).update('\0').update(canonicalJson({ params: parts.params, query: parts.query, body: parts.body ?? null }));
-  if (parts.file) hash.update('\0file\0').update(createHash('sha256').update(parts.file.buffer).digest());
+  const fileDigest = parts.fileSha256 ?? (parts.file ? createHash('sha256').update(parts.file.buffer).digest('hex') : undefined);
+  if (fileDigest) hash.update('\0file\0').update(fileDigest);
   return hash.digest('hex');
 }
 

@@ -33,7 +33,8 @@ export function openApiDocument(routes: RegisteredRoute[], serverUrl: string) {
     }
     const success = String(r.status ?? (r.response && !(r.response instanceof z.ZodUndefined) ? 200 : 204));
     const responses: Record<string, unknown> = {
-      [success]: r.response && success !== '204' ? { description: 'OK', content: { 'application/json': { schema: schema(r.response, 'output') } } } : { description: 'Done, no content' },
+      [success]: r.response && success !== '204' ? { description: 'OK', content: { [r.contentType ?? 'application/json']: { schema: schema(r.response, 'output') } } } : { description: 'Done, no content' },
+      ...(r.conditional ? { '304': { description: 'Not modified: the If-None-Match header named the current ETag' } } : {}),
       '4XX': { description: 'What was wrong, and how to fix it', content: { 'application/json': { schema: schema(ErrorBody, 'output') } } },
     };
     (paths[path] ??= {})[r.method] = {

@@ -4,7 +4,7 @@ import type { ZodType } from 'zod';
 import type { Role } from '@gelpoint/contracts';
 import { authenticate, type AuthContext } from './auth-context';
 import { AppError, fromZod } from './errors';
-import { IdempotencyStore, REPLAYED_HEADER, idempotencyKeyOf, requestFingerprint } from './idempotency';
+import { IdempotencyStore, REPLAYED_HEADER, UPLOAD_SHA256_LOCAL, idempotencyKeyOf, requestFingerprint } from './idempotency';
 
 export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
@@ -33,6 +33,10 @@ export interface RouteSpec {
    * member's same key gets the first answer again for 24 hours instead of a second record.
    */
   idempotent?: boolean;
+  /** The success answer's media type when it is not JSON (an event stream); `response` then describes each event's data. */
+  contentType?: string;
+  /** The route answers 304 to an If-None-Match that matches its ETag. */
+  conditional?: boolean;
 }
 
 export interface HandlerInput<A> {
@@ -85,7 +89,7 @@ export class RouteRegistry {
       const key = spec.idempotent && auth ? idempotencyKeyOf(req) : undefined;
       if (key && auth) {
         const route = `POST ${fullPath}`;
-        const scope = { shopId: auth.shopId, userId: auth.userId, key, route, fingerprint: requestFingerprint(route, { params, query, body, file: req.file }) };
+        const scope = { shopId: auth.shopId, userId: auth.userId, key, route, fingerprint: requestFingerprint(route, { params, query, body, file: req.file, fileSha256: res.locals[UPLOAD_SHA256_LOCAL] as string | undefined }) };
         const answer = await this.idempotency.run(
           scope,
           async () => ({ status: spec.status ?? 200, body: await handler({ body, query, params, auth, req, res }) }),

@@ -1,4 +1,4 @@
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { join } from 'node:path';
 import { expect } from 'vitest';
 import { testDatabaseUrl } from './harness';
@@ -27,14 +27,27 @@ export const resinInput = (over: Record<string, unknown> = {}) => ({
   ...over,
 });
 
-/** The worker, as its own process, analysing the queued moulds (as its cron tick does) and nothing else. */
-export function analyseQueuedMoulds(): void {
-  const r = spawnSync(process.execPath, ['--import', 'tsx', 'apps/worker/src/main.ts', '--once'], {
+const workerOnce = {
+  args: ['--import', 'tsx', 'apps/worker/src/main.ts', '--once'],
+  options: () => ({
     cwd: join(import.meta.dirname, '../../../..'),
     env: { ...process.env, DATABASE_URL: testDatabaseUrl(), GELPOINT_WORKER_JOBS: 'molds', GELPOINT_LOG_LEVEL: 'silent' },
-    encoding: 'utf8',
-    timeout: 60_000,
-  });
+  }),
+};
+
+/** The worker, as its own process, analysing the queued moulds (as its cron tick does) and nothing else. */
+export function analyseQueuedMoulds(): void {
+  const r = spawnSync(process.execPath, workerOnce.args, { ...workerOnce.options(), encoding: 'utf8', timeout: 60_000 });
   expect(r.stderr).toBe('');
   expect(r.status).toBe(0);
+}
+
+/** The same, leaving this process's event loop free (to serve a stream that follows the analysis meanwhile). */
+export async function analyseQueuedMouldsMeanwhile(): Promise<void> {
+  const child = spawn(process.execPath, workerOnce.args, { ...workerOnce.options(), stdio: ['ignore', 'ignore', 'pipe'], timeout: 60_000 });
+  let stderr = '';
+  child.stderr.on('data', (b: Buffer) => (stderr += b.toString()));
+  const code = await new Promise<number | null>((resolve) => child.once('exit', resolve));
+  expect(stderr).toBe('');
+  expect(code).toBe(0);
 }

@@ -41,6 +41,7 @@ export function useHarness(overrides: Record<string, string> = {}): Harness {
     h.http = () => supertest.agent(h.app.app);
   });
   afterAll(async () => {
+    h.app?.close();
     await h.ds?.destroy();
   });
   return h;

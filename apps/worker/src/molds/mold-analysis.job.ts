@@ -1,8 +1,10 @@
+import type { Worker } from 'node:worker_threads';
 import { cavityAnalysisVersion } from '@gelpoint/mesh';
 import { tsWorker } from '../ts-worker';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import type { AnalysisMessage, AnalysisRequest } from './mold-analysis.thread';
+import { readMoldFileBytes } from './mold-file-bytes';
 
 export interface MoldAnalysisSettings {
   maxTriangles: number;
@@ -41,9 +43,28 @@ export async function claimQueuedMold(ds: DataSource, s: MoldAnalysisSettings): 
 /** The analysis was cut short because the worker is stopping; the mould goes back to the queue. */
 class AnalysisStopped extends Error {}
 
-function runThread(req: AnalysisRequest, onProgress: (v: number) => void, stop?: AbortSignal): Promise<Extract<AnalysisMessage, { type: 'done' | 'refused' }>> {
+/** A started analysis thread, and what ended it if it ended before it was given its work. */
+interface AnalysisThread {
+  worker: Worker;
+  failed?: Error;
+}
+
+function spawnAnalysisThread(): AnalysisThread {
+  const worker = tsWorker(new URL('./mold-analysis.thread.ts', import.meta.url), { resourceLimits: { maxOldGenerationSizeMb: 4096 } });
+  const thread: AnalysisThread = { worker };
+  worker.on('error', (err) => (thread.failed ??= err));
+  worker.once('exit', (code) => (thread.failed ??= new Error(`the analysis thread stopped (exit ${code})`)));
+  return thread;
+}
+
+function runThread(thread: AnalysisThread, req: AnalysisRequest, onProgress: (v: number) => void, stop?: AbortSignal): Promise<Extract<AnalysisMessage, { type: 'done' | 'refused' }>> {
+  const w = thread.worker;
   return new Promise((resolve, reject) => {
-    const w = tsWorker(new URL('./mold-analysis.thread.ts', import.meta.url), { resourceLimits: { maxOldGenerationSizeMb: 4096 } });
+    if (thread.failed) return reject(thread.failed);
+    if (stop?.aborted) {
+      void w.terminate();
+      return reject(new AnalysisStopped('the worker is stopping'));
+    }
     let settled = false;
     const onStop = () => {
       if (settled) return;
@@ -82,11 +103,18 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
   if (!mold) return false;
   const log = logger.child({ moldId: mold.id });
   try {
-    const [file] = (await ds.query('SELECT bytes FROM mold_files WHERE mold_id = $1', [mold.id])) as [{ bytes: Buffer } | undefined];
-    if (!file) throw new Error('the mould file bytes are missing');
-    await ds.query('UPDATE molds SET progress = 0.15 WHERE id = $1', [mold.id]);
-    const bytes = new Uint8Array(file.bytes.buffer.slice(file.bytes.byteOffset, file.bytes.byteOffset + file.bytes.byteLength));
-    const outcome = await runThread({ bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes }, (value) => {
+    // The thread starts (and loads the engine) while the file is read.
+    const thread = spawnAnalysisThread();
+    let bytes: Uint8Array | null;
+    try {
+      bytes = await readMoldFileBytes(ds, mold.id);
+      if (!bytes) throw new Error('the mould file bytes are missing');
+      await ds.query('UPDATE molds SET progress = 0.15 WHERE id = $1', [mold.id]);
+    } catch (err) {
+      void thread.worker.terminate();
+      throw err;
+    }
+    const outcome = await runThread(thread, { bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes }, (value) => {
       void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing'`, [mold.id, value]).catch(() => undefined);
     }, stop);
     // Units or up axis corrected while this ran: the mould is queued again and this outcome is of the old reading.
@@ -100,10 +128,10 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
       return true;
     }
     await ds.query(
-      `UPDATE molds SET status = 'ready', progress = 1, analysis = $4, report = $5, triangle_count = $6, analysed_at = now(),
+      `UPDATE molds SET status = 'ready', progress = 1, analysis = $4, report = $5, depth_map = $6, triangle_count = $7, analysed_at = now(),
               error_code = NULL, error_message = NULL, locked_until = NULL, updated_at = now()
         WHERE id = $1 ${sameReading}`,
-      [mold.id, mold.units, mold.up_axis, JSON.stringify(outcome.analysis), JSON.stringify(outcome.report), outcome.triangles],
+      [mold.id, mold.units, mold.up_axis, outcome.analysisJson, outcome.reportJson, outcome.depthMapJson, outcome.triangles],
     );
     log.info('mould analysed');
   } catch (err) {
@@ -124,7 +152,6 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
   return true;
 }
 
-/** Every queued mould, one after another. */
 /**
  * Moulds whose stored analysis an older engine wrote go back in the queue: their reports were computed by rules the
  * engine no longer follows (the liquid fill replaced the drop-straight-down rule in version 2).
@@ -141,8 +168,12 @@ export async function requeueOutdatedMolds(ds: DataSource, logger: Logger): Prom
   return n;
 }
 
-export async function analyseQueuedMolds(ds: DataSource, s: MoldAnalysisSettings, logger: Logger, stop?: AbortSignal): Promise<number> {
-  await requeueOutdatedMolds(ds, logger);
+/**
+ * Every queued mould, one after another. Looking for outdated analyses reads every stored one, so a long-running
+ * worker does it once at start (only a new build brings a new engine) rather than before each upload.
+ */
+export async function analyseQueuedMolds(ds: DataSource, s: MoldAnalysisSettings, logger: Logger, stop?: AbortSignal, requeueOutdated = true): Promise<number> {
+  if (requeueOutdated) await requeueOutdatedMolds(ds, logger);
   let n = 0;
   while (!stop?.aborted && (await analyseNextMold(ds, s, logger, stop))) n++;
   return n;

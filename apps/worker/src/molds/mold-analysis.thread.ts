@@ -12,7 +12,8 @@ export interface AnalysisRequest {
 
 export type AnalysisMessage =
   | { type: 'progress'; value: number }
-  | { type: 'done'; analysis: unknown; report: unknown; triangles: number }
+  /** As JSON text, written in the thread: the worker's event loop only passes the strings on to the database. */
+  | { type: 'done'; analysisJson: string; reportJson: string; depthMapJson: string; triangles: number }
   | { type: 'refused'; code: string; message: string };
 
 const post = (m: AnalysisMessage) => parentPort!.postMessage(m);
@@ -31,6 +32,7 @@ parentPort!.once('message', (req: AnalysisRequest) => {
   if (!analysis.ok) return post({ type: 'refused', code: analysis.error.code, message: analysis.error.message });
   post({ type: 'progress', value: 0.9 });
   // Typed as the contract's report, so the shape the engine writes and the one the API answers cannot drift apart.
-  const report: CavityReport = cavityReport(analysis.value);
-  post({ type: 'done', analysis: analysis.value, report, triangles: analysis.value.triangles });
+  const { fillToTop: { depthMap, ...fillToTop }, ...summary } = cavityReport(analysis.value);
+  const report: CavityReport = { ...summary, fillToTop };
+  post({ type: 'done', analysisJson: JSON.stringify(analysis.value), reportJson: JSON.stringify(report), depthMapJson: JSON.stringify(depthMap), triangles: analysis.value.triangles });
 });

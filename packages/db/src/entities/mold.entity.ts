@@ -40,8 +40,13 @@ export class Mold {
   @Column({ name: 'error_code', type: 'text', nullable: true }) errorCode!: string | null;
   @Column({ name: 'error_message', type: 'text', nullable: true }) errorMessage!: string | null;
   @Column({ name: 'triangle_count', type: 'integer', nullable: true }) triangleCount!: number | null;
-  /** The report shown to people (summary, warnings, curve, depth map). */
+  /** The report shown to people (summary, warnings, curve, the fill to the top); its depth map is kept apart. */
   @Column({ type: 'jsonb', nullable: true }) report!: Record<string, unknown> | null;
+  /**
+   * The depth map of the report's fill to the top: the largest part of the report, which only the depth map and 3D
+   * views draw, so the mould's own answer and the lists never carry it.
+   */
+  @Column({ name: 'depth_map', type: 'jsonb', nullable: true }) depthMap!: Record<string, unknown> | null;
   /** What the engine needs to answer a fill at any level without the mesh. */
   @Column({ type: 'jsonb', nullable: true }) analysis!: Record<string, unknown> | null;
   @Column({ name: 'analysed_at', type: 'timestamptz', nullable: true }) analysedAt!: Date | null;

@@ -47,7 +47,9 @@ export async function seedDemoMould(m: EntityManager, shopId: string, people: Ma
   const read = valueOf(analyzeMouldFile(bytes, { units: 'mm', up: 'z' }));
   // Stored and read back as the worker and the API do, so the plan comes from what the database holds.
   const storedAnalysis = JSON.parse(JSON.stringify(read.analysis)) as Record<string, unknown>;
-  const report = JSON.parse(JSON.stringify(cavityReport(read.analysis))) as Record<string, unknown>;
+  const { fillToTop: { depthMap, ...fillToTop }, ...summary } = cavityReport(read.analysis);
+  // The depth map is kept apart from the report, as the worker keeps it.
+  const report = JSON.parse(JSON.stringify({ ...summary, fillToTop })) as Record<string, unknown>;
   const mold = await m.save(
     m.create(Mold, {
       shopId,
@@ -64,6 +66,7 @@ export async function seedDemoMould(m: EntityManager, shopId: string, people: Ma
       progress: 1,
       triangleCount: read.analysis.triangles,
       report,
+      depthMap: JSON.parse(JSON.stringify(depthMap)) as Record<string, unknown>,
       analysis: storedAnalysis,
       analysedAt: new Date(),
       createdById: maker.id,

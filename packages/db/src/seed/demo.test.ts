@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
 import type { PourPlan as CorePourPlan } from '@gelpoint/core';
-import type { CavityReportRecord } from '@gelpoint/mesh';
+import type { CavityReportRecord, DepthMapRecord } from '@gelpoint/mesh';
 import { loadManifold, outlineDamResin, wettedAreaOf, type ManifoldKernel } from '../../../mesh/test/manifold-reference';
 import { readBinaryStlIndexed, type IndexedStl } from '../../../mesh/test/stl-indexed';
 import { createDataSource } from '../data-source';
@@ -114,7 +114,8 @@ describe('the demo mould', () => {
     expect(report.triangles).toBe(stl.triangles.length / 3);
     expect(mold.triangleCount).toBe(report.triangles);
     // The deepest resin stands on the file's lowest floor corner (z = 20 mm) under the top face (z = 60 mm).
-    const map = report.fillToTop.depthMap;
+    expect(report.fillToTop).not.toHaveProperty('depthMap');
+    const map = mold.depthMap as unknown as DepthMapRecord;
     expect(map.nx * map.ny).toBe(map.depthsMm.length);
     expect(report.fillToTop.maxDepthMm).toBeCloseTo(60 - 20, 9);
     expect(Math.max(...map.depthsMm)).toBeLessThanOrEqual(40);

@@ -17,10 +17,17 @@ export function moldView(m: Mold): MoldView {
     status: m.status,
     progress: m.progress,
     error: m.errorCode ? { code: m.errorCode, message: m.errorMessage ?? '' } : null,
-    report: (m.report as CavityReport | null) ?? null,
+    report: reportWithoutDepthMap(m.report),
     createdAt: m.createdAt.toISOString(),
     analysedAt: m.analysedAt?.toISOString() ?? null,
   };
+}
+
+/** A report an older worker wrote may still hold its depth map, which is served on its own. */
+function reportWithoutDepthMap(report: Mold['report']): CavityReport | null {
+  if (!report) return null;
+  const { depthMap: _apart, ...fillToTop } = (report as { fillToTop: CavityReport['fillToTop'] & { depthMap?: unknown } }).fillToTop;
+  return { ...(report as CavityReport), fillToTop };
 }
 
 export function fillView(f: CavityFill, withDepthMap: boolean): FillView {

@@ -1,9 +1,10 @@
 import { createHash } from 'node:crypto';
+import type { RequestHandler } from 'express';
 import type { DataSource, EntityManager } from 'typeorm';
 import { planCavityFromMold } from '@gelpoint/core';
 import { MOLD_ANALYSIS_CHANNEL, Mold, MoldFile, Piece, type MoldFormat, type UpAxis } from '@gelpoint/db';
-import type { CavityReport, Dam, LevelFrom, MoldFill, MoldView, UpdateMoldRequest } from '@gelpoint/contracts';
-import { curve, fillAt, layerVolumes, type CavityModel } from '@gelpoint/mesh';
+import type { CavityReport, Dam, LevelFrom, MoldDepthMap, MoldFill, MoldView, UpdateMoldRequest } from '@gelpoint/contracts';
+import { curve, fillAt, layerVolumes, type CavityModel, type DepthMapRecord } from '@gelpoint/mesh';
 import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
@@ -14,13 +15,9 @@ import { aboveFloor, floorOf, inMouldFrame } from './mold-levels';
 import { namedList, plansUsingMold } from './mold-users';
 import { fillView, moldView } from './mold-views';
 import { RecentlyUsed } from './recently-used';
-import type { StlChecker } from './stl-check';
-
-export interface UploadedStl {
-  originalname: string;
-  buffer: Buffer;
-  size: number;
-}
+import { storeMoldFile } from './mold-file-store';
+import type { UploadedMould } from './mold-upload';
+import type { StlCheck, StlChecker } from './stl-check';
 
 export interface UploadFields {
   /** Absent: a 3MF is read in the unit it states, any other file in mm. */
@@ -42,6 +39,7 @@ const PLAN_CURVE_POINTS = 241;
 export class Molds {
   private readonly cache = new AnalysisCache();
   private readonly reports = new RecentlyUsed<NonNullable<Mold['report']>>(64);
+  private readonly depthMaps = new RecentlyUsed<{ json: string; etag: string }>(16);
 
   constructor(
     private readonly ds: DataSource,
@@ -49,21 +47,32 @@ export class Molds {
     private readonly quota = new UploadQuota(),
   ) {}
 
-  async upload(auth: AuthContext, file: UploadedStl | undefined, fields: UploadFields): Promise<MoldView> {
+  /** Called as an upload starts to arrive: the checking thread starts meanwhile rather than after the last byte. */
+  readonly warmUp: RequestHandler = (_req, _res, next) => {
+    this.checker.warm();
+    next();
+  };
+
+  async upload(auth: AuthContext, file: UploadedMould | undefined, fields: UploadFields): Promise<MoldView> {
     if (!file) throw new AppError('bad_request', 'file_missing', 'attach the mould file (STL, 3MF or OBJ) in the part named "file"', { file: 'choose an STL, 3MF or OBJ file' });
     if (!mouldFileName.test(file.originalname)) {
       throw new AppError('unprocessable', 'not_a_mould_file_name', `"${file.originalname.slice(0, 80)}" does not end in .stl, .3mf or .obj; export the mould from your CAD program in one of those formats`, { file: 'the file must be an .stl, .3mf or .obj' });
     }
-    const checked = await this.checker.check(file.buffer);
-    if (!checked.ok) {
+    // The file is read (to refuse a bad one with the reader's sentence) while it is written: a refusal cancels the
+    // write and the transaction rolls back whole.
+    const stopWrite = new AbortController();
+    const checking = this.checker.check(file.bytes).then((checked) => {
+      if (!checked.ok) stopWrite.abort();
+      return checked;
+    });
+    const refusal = (checked: Extract<StlCheck, { ok: false }>) => {
       const kind = tooLargeCodes.has(checked.error.code) ? 'payload_too_large' : 'unprocessable';
-      throw new AppError(kind, checked.error.code, checked.error.message, { file: checked.error.message });
-    }
-    const units = fields.units ?? checked.fileUnits ?? 'mm';
-    const sha256 = createHash('sha256').update(file.buffer).digest('hex');
+      return new AppError(kind, checked.error.code, checked.error.message, { file: checked.error.message });
+    };
     const id = await this.ds.transaction(async (m) => {
       if (fields.pieceId && !(await m.findOneBy(Piece, { id: fields.pieceId, shopId: auth.shopId }))) throw notFound('piece');
       await this.quota.reserve(m, auth.userId, file.size);
+      // Format, units and triangles are the check's to say; the row is completed below, before anyone can see it.
       const mold = await m.save(
         m.create(Mold, {
           shopId: auth.shopId,
@@ -71,19 +80,29 @@ export class Molds {
           // The stored name is ours to choose: the client's file name is kept only as text to show.
           name: fields.name || file.originalname.replace(mouldFileName, '').slice(0, 120) || 'Mould',
           fileName: file.originalname.slice(0, 200),
-          format: checked.format,
-          units,
-          fileUnits: checked.fileUnits,
+          format: 'stl',
+          units: fields.units ?? 'mm',
+          fileUnits: null,
           upAxis: fields.up,
           sizeBytes: file.size,
-          sha256,
+          sha256: file.sha256,
           status: 'queued',
-          triangleCount: checked.triangles,
+          triangleCount: null,
           createdById: auth.userId,
         }),
       );
-      await m.insert(MoldFile, { moldId: mold.id, bytes: file.buffer });
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'mold.upload', objectType: 'mold', objectId: mold.id, detail: { name: mold.name, sha256, format: checked.format, units, triangles: checked.triangles } });
+      try {
+        await storeMoldFile(m, mold.id, file.bytes, stopWrite.signal);
+      } catch (err) {
+        const checked = await checking;
+        if (!checked.ok) throw refusal(checked);
+        throw err;
+      }
+      const checked = await checking;
+      if (!checked.ok) throw refusal(checked);
+      const units = fields.units ?? checked.fileUnits ?? 'mm';
+      await m.update(Mold, { id: mold.id }, { format: checked.format, units, fileUnits: checked.fileUnits, triangleCount: checked.triangles });
+      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'mold.upload', objectType: 'mold', objectId: mold.id, detail: { name: mold.name, sha256: file.sha256, format: checked.format, units, triangles: checked.triangles } });
       await m.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, mold.id]);
       return mold.id;
     });
@@ -125,6 +144,35 @@ export class Molds {
     }
     if (key && report) this.reports.set(key, report);
     return report;
+  }
+
+  /**
+   * The depth map of the report's fill to the top, as the JSON it is served as, with a strong validator: a hash of
+   * exactly those bytes, so a browser holding it revalidates without downloading it again.
+   */
+  async depthMap(shopId: string, id: string): Promise<{ json: string; etag: string }> {
+    const rows: { status: string; analysed_at: Date | null }[] = await this.ds.query('SELECT status, analysed_at FROM molds WHERE id = $1 AND shop_id = $2', [id, shopId]);
+    const row = rows[0];
+    if (!row) throw notFound('mould');
+    const notReady = () =>
+      new AppError('conflict', 'mold_not_ready', row.status === 'failed' ? 'this mould could not be analysed; see its error and upload a corrected file' : 'the cavity report is not ready yet; try again in a moment');
+    if (row.status !== 'ready' || !row.analysed_at) throw notReady();
+    // Keyed by the analysis, so a mould read again (new units or up axis) is served anew.
+    const key = `${id}@${row.analysed_at.toISOString()}`;
+    const hit = this.depthMaps.get(key);
+    if (hit) return hit;
+    const [stored] = (await this.ds.query(
+      `SELECT analysed_at, COALESCE(depth_map, report -> 'fillToTop' -> 'depthMap') AS depth_map,
+              (report -> 'fillToTop' ->> 'levelMm')::float8 AS level, report -> 'fillToTop' ->> 'dam' AS dam
+         FROM molds WHERE id = $1 AND status = 'ready'`,
+      [id],
+    )) as { analysed_at: Date; depth_map: DepthMapRecord | null; level: number | null; dam: Dam | null }[];
+    // Analysed again between the two reads: the next request finds the new analysis.
+    if (!stored?.depth_map || stored.level === null || !stored.dam || stored.analysed_at.getTime() !== row.analysed_at.getTime()) throw notReady();
+    const json = JSON.stringify({ ...stored.depth_map, levelMm: stored.level, dam: stored.dam } satisfies MoldDepthMap);
+    const served = { json, etag: `"${createHash('sha256').update(json).digest('base64url')}"` };
+    this.depthMaps.set(key, served);
+    return served;
   }
 
   async list(shopId: string, q: { pieceId?: string; limit: number; offset: number }) {

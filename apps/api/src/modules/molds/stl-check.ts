@@ -40,12 +40,19 @@ export class StlChecker {
     this.waiting.clear();
   }
 
-  check(bytes: Buffer): Promise<StlCheck> {
+  /** Starts the thread if it is not running, so it is ready by the time an upload that is still arriving is in. */
+  warm(): void {
+    this.thread();
+  }
+
+  check(bytes: Uint8Array): Promise<StlCheck> {
     const id = this.nextId++;
     return new Promise((resolve) => {
       this.waiting.set(id, resolve);
-      // A copy goes to the thread: the request keeps its buffer to store it.
-      this.thread().postMessage({ id, bytes: new Uint8Array(bytes), maxTriangles: this.maxTriangles, maxUnpackedBytes: this.maxUnpackedBytes });
+      // An upload read into shared memory is read by the thread in place while the request stores it; any other
+      // buffer goes as a copy, since the request keeps its own.
+      const shared = bytes.buffer instanceof SharedArrayBuffer ? bytes : new Uint8Array(bytes);
+      this.thread().postMessage({ id, bytes: shared, maxTriangles: this.maxTriangles, maxUnpackedBytes: this.maxUnpackedBytes });
     });
   }
 

@@ -21,6 +21,6 @@ export const moldFillQueryOptions = (moldId: string, key: FillKey, analysedAt: s
     ...(initialData ? { initialData } : {}),
   });
 
-export function useMoldFill(moldId: string, key: FillKey, analysedAt: string | null, initialData?: MoldFill) {
-  return useQuery(moldFillQueryOptions(moldId, key, analysedAt, initialData));
+export function useMoldFill(moldId: string, key: FillKey, analysedAt: string | null, initialData?: MoldFill, enabled = true) {
+  return useQuery({ ...moldFillQueryOptions(moldId, key, analysedAt, initialData), enabled });
 }

@@ -13,9 +13,10 @@ describe('moldKeys', () => {
     expect(partialMatchKey(moldKeys.detail(moldId), moldKeys.lists())).toBe(false);
   });
 
-  it('forgets a mould’s fills, layers and STL with the mould', () => {
+  it('forgets a mould’s fills, layers, depth map and STL with the mould', () => {
     expect(partialMatchKey(fill, moldKeys.detail(moldId))).toBe(true);
     expect(partialMatchKey(moldKeys.stl(moldId), moldKeys.detail(moldId))).toBe(true);
+    expect(partialMatchKey(moldKeys.depthMap(moldId, '2026-11-01T10:00:00.000Z'), moldKeys.detail(moldId))).toBe(true);
     expect(partialMatchKey(moldKeys.layers(moldId, { levelsMm: [10, 20], dam: 'box' }), moldKeys.detail(moldId))).toBe(true);
   });
 

@@ -19,8 +19,8 @@ export interface LayersKey {
   dam: Dam;
 }
 
-// Fill, layers and the mould file sit under their mould's detail key, so forgetting a mould forgets them too. Its
-// analysis time is part of the fill and layer keys: a mould read again (new units or up axis) answers anew.
+// Fill, layers, the depth map and the mould file sit under their mould's detail key, so forgetting a mould forgets them too. Its
+// analysis time is part of the fill, layer and depth map keys: a mould read again (new units or up axis) answers anew.
 export const moldKeys = {
   all: ['molds'] as const,
   lists: () => [...moldKeys.all, 'list'] as const,
@@ -30,4 +30,5 @@ export const moldKeys = {
   fill: (moldId: string, key: FillKey, analysedAt: string | null = null) => [...moldKeys.detail(moldId), 'fill', analysedAt, key] as const,
   layers: (moldId: string, key: LayersKey, analysedAt: string | null = null) => [...moldKeys.detail(moldId), 'layers', analysedAt, key] as const,
   stl: (moldId: string) => [...moldKeys.detail(moldId), 'stl'] as const,
+  depthMap: (moldId: string, analysedAt: string | null = null) => [...moldKeys.detail(moldId), 'depth-map', analysedAt] as const,
 };

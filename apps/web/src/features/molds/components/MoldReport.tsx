@@ -2,10 +2,11 @@ import type { UnitSystem } from '@gelpoint/core';
 import { useState } from 'react';
 import { Card } from '../../../components/ui/Card';
 import { ErrorAlert } from '../../../components/ui/ErrorAlert';
+import { useMoldDepthMap } from '../api/get-mold-depth-map';
 import { useMoldFill } from '../api/get-mold-fill';
 import { useMoldLayers } from '../api/get-mold-layers';
 import { useDebouncedValue } from '../hooks/use-debounced-value';
-import type { CavityReport, Dam, MoldFill, MoldView } from '../types';
+import type { CavityReport, Dam, MoldView } from '../types';
 import { mmPerFileUnit } from '../utils/file-units';
 import { layerLines } from '../utils/layer-lines';
 import { curveAboveFloor, curveFromLayers, floorOf, levelsToRim, rimAboveFloorMm, storedFillToTop } from '../utils/level-datum';
@@ -38,11 +39,6 @@ function roundLevel(levelMm: number): number {
   return Math.round(levelMm * 1000) / 1000;
 }
 
-function withoutDepthMap(fill: MoldFill): MoldFill {
-  const { depthMap: _dropped, ...numbers } = fill;
-  return numbers;
-}
-
 export interface MoldReportProps {
   mold: MoldView;
   report: CavityReport;
@@ -67,10 +63,17 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
   const mapLevel = useDebouncedValue(levelMm, depthMapDebounceMs);
   const stored = storedFillToTop(report);
   const storedAt = (level: number) => level === stored.levelMm && dam === stored.dam;
-  const numbers = useMoldFill(mold.id, { levelMm: numbersLevel, dam, depthMap: false }, mold.analysedAt, storedAt(numbersLevel) ? withoutDepthMap(stored) : undefined);
-  const mapped = useMoldFill(mold.id, { levelMm: mapLevel, dam, depthMap: true }, mold.analysedAt, storedAt(mapLevel) ? stored : undefined);
+  const numbers = useMoldFill(mold.id, { levelMm: numbersLevel, dam, depthMap: false }, mold.analysedAt, storedAt(numbersLevel) ? stored : undefined);
+  // At the report's own fill the map is the report's, a resource of its own; at any other level the fill draws one.
+  const mapIsStored = storedAt(mapLevel);
+  const storedMap = useMoldDepthMap(mold.id, mold.analysedAt, mapIsStored);
+  const mapped = useMoldFill(mold.id, { levelMm: mapLevel, dam, depthMap: true }, mold.analysedAt, undefined, !mapIsStored);
   const fill = numbers.data ?? stored;
-  const depthMap = mapped.data?.depthMap;
+  // Until the first map at another level arrives, the report's own stays on screen, marked as updating.
+  const drawn = mapIsStored || !mapped.data?.depthMap ? (storedMap.data ? { map: storedMap.data, levelMm: stored.levelMm } : undefined) : { map: mapped.data.depthMap, levelMm: mapped.data.levelMm };
+  const depthMap = drawn?.map;
+  const depthMapUpdating = !mapIsStored && (mapped.isPlaceholderData || !mapped.data?.depthMap);
+  const depthMapError = mapIsStored ? storedMap.error : mapped.error;
 
   const boxCurve = useMoldLayers(mold.id, dam === 'box' ? { levelsMm: levelsToRim(spanMm, boxCurvePoints), dam } : null, mold.analysedAt);
   const curve = dam === 'outline' ? curveAboveFloor(report.curve, floorMm) : boxCurve.data?.dam === 'box' ? curveFromLayers(boxCurve.data) : null;
@@ -113,7 +116,7 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
             levelMm={floorMm + levelMm}
             layerLevelsMm={lines?.ok ? lines.value.levelsMm.map((l) => floorMm + l) : []}
             footprint={depthMap}
-            footprintLevelMm={mapped.data?.levelMm}
+            footprintLevelMm={drawn?.levelMm}
             unitSystem={unitSystem}
           />
         </Card>
@@ -144,9 +147,9 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
           <div className="flex flex-col gap-4">
             <CautionList cautions={cautions.filter((c) => c.appliesTo.kind === 'layer')} label="Cautions about depth" />
             {depthMap ? (
-              <DepthMapView map={depthMap} unitSystem={unitSystem} updating={mapped.isPlaceholderData} />
-            ) : mapped.isError ? (
-              <ErrorAlert error={mapped.error} live="none" />
+              <DepthMapView map={depthMap} unitSystem={unitSystem} updating={depthMapUpdating} />
+            ) : depthMapError ? (
+              <ErrorAlert error={depthMapError} live="none" />
             ) : (
               <p className="text-ink-soft">Drawing the depth map…</p>
             )}
