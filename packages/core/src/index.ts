@@ -34,3 +34,4 @@ export * from './forecast-track';
 export * from './shop-time';
 export * from './release-evidence';
 export * from './log-guards';
+export * from './exotherm-settings';
