@@ -23,6 +23,7 @@ import { moldRoutes } from './modules/molds/molds.routes';
 import { Molds } from './modules/molds/molds.service';
 import { StlChecker } from './modules/molds/stl-check';
 import { pourPlanRoutes } from './modules/pour-plans/pour-plans.routes';
+import { exothermRoutes } from './modules/exotherm/exotherm.routes';
 import { PourPlans } from './modules/pour-plans/pour-plans.service';
 import { pourRoutes } from './modules/pours/pours.routes';
 import { calendarRoutes } from './modules/calendar/calendar.routes';
@@ -91,6 +92,7 @@ export function createApp({ ds, config, logger = createLogger(config.logLevel) }
   const molds = new Molds(ds, new StlChecker(config.maxStlTriangles, config.maxUnpackedBytes), quota);
   moldRoutes(registry, molds, config.maxStlBytes, uploadLimit);
   pourPlanRoutes(registry, new PourPlans(ds, molds.cavityForPlan));
+  exothermRoutes(registry);
   pourRoutes(registry, new Pours(ds, undefined, quota), new PourLog(ds), uploadLimit);
   pourExportRoutes(registry, ds);
   calendarRoutes(registry, ds, new CalendarFeeds(ds, config.publicUrl), settings);

@@ -35,3 +35,4 @@ export * from './shop-time';
 export * from './release-evidence';
 export * from './log-guards';
 export * from './exotherm-settings';
+export * from './plan-exotherm';
