@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { potLifeMinAt } from './pot-life';
 import { buildPourPlan, type PourPlan, type PourPlanInput } from './pour-plan';
 import { rectangleCavity } from './quick-shapes';
 import type { ResinSystem } from './shelf';
@@ -114,5 +115,24 @@ describe('the plan’s exotherm forecast', () => {
     if (!plan.forecast.available) expect(plan.forecast.reason).toMatch(/35 °C/);
     // The data sheet's own split stands: ceil(60 / 40) = 2 layers.
     expect(plan.fill.layerCount).toBe(2);
+  });
+
+  it('gives every cup its own pot life: a heavy cup less than the data sheet’s, a light one no more', () => {
+    // An invented fast casting product (demo numbers): 30 min pot life, 1 h gel, 6 mm layers, at 22 °C.
+    const fast: ResinSystem = { ...product, potLifeMin: 30, gelTimeH: 1, thinFilmGelMin: 60, tackFreeH: 3, recoatWindow: { earliestH: 3, latestH: 8 }, demoldH: 12, maxLayerMm: 6, acceptedPeakC: 60 };
+    const heavy = trayPlan(6, 22, {}, { ...fast, maxBatchG: 500 });
+    const light = trayPlan(6, 22, {}, { ...fast, maxBatchG: 60 });
+    // At the data sheet's own temperature the Arrhenius move is nil: its pot life stands at 30 min.
+    const sheet = potLifeMinAt(fast, 22);
+    expect(sheet).toBeCloseTo(30, 9);
+    const heavyCup = heavy.layers[0]!.batches[0]!;
+    const lightCup = light.layers[0]!.batches[0]!;
+    expect(heavyCup.cupPotLifeMin!).toBeLessThanOrEqual(sheet);
+    expect(lightCup.cupPotLifeMin!).toBeLessThanOrEqual(sheet);
+    // A bigger mass keeps its heat longer (sphere of the cup's volume, Churchill's free convection): it gels sooner.
+    expect(heavyCup.cupPotLifeMin!).toBeLessThan(lightCup.cupPotLifeMin!);
+    expect(heavyCup.cupPotLifeLimitedBy).toBe('cup_heating');
+    // One pot life per cup: equal cups of one layer share it.
+    for (const b of heavy.layers[0]!.batches) expect(b.cupPotLifeMin).toBe(heavyCup.cupPotLifeMin);
   });
 });

@@ -1,7 +1,8 @@
-import { calibrateToDataSheet, forecastLayer, forecastMould, proposeLayers, type Calibration, type ForecastPoint, type PlannedLayer } from '@gelpoint/thermal';
+import { calibrateToDataSheet, cupPotLife, forecastLayer, forecastMould, proposeLayers, type Calibration, type ForecastPoint, type PlannedLayer } from '@gelpoint/thermal';
 import { exothermSettingsOf, type ExothermSettingField, type ExothermSettings } from './exotherm-settings';
 import type { LayerSlice } from './layers';
 import { fail, ok, type Result } from './result';
+import { potLifeMinAt } from './pot-life';
 import type { ResinSystem } from './shelf';
 
 /** A cavity report's resin depths at the plan's fill level, in the mould's own frame (mm). */
@@ -209,4 +210,23 @@ export function planForecastOf(product: ResinSystem, shopTempC: number, maxLayer
 
 export function unavailable(code: string, reason: string): PlanForecast {
   return { version: planForecastVersion, available: false, code, reason };
+}
+
+export interface CupPotLifeAnswer {
+  potLifeMin: number;
+  limitedBy: 'cup_heating' | 'data_sheet';
+}
+
+/**
+ * How long a cup of this mass stays workable at the shop's temperature: the cup's own heat shortens the
+ * data sheet's pot life (packages/thermal cupPotLife), never lengthens it. When the forecast cannot run
+ * (its settings do not calibrate), the data sheet's pot life moved to the shop's temperature stands.
+ */
+export function cupPotLifeOf(product: ResinSystem, resinMassG: number, shopTempC: number): CupPotLifeAnswer {
+  const sheet: CupPotLifeAnswer = { potLifeMin: potLifeMinAt(product, shopTempC), limitedBy: 'data_sheet' };
+  const cal = calibratedProduct(product);
+  const resin = cal.ok ? cal.value.calibration.resin : exothermSettingsOf(product).resin;
+  const cup = cupPotLife(resin, { massG: resinMassG, ambientC: shopTempC, sheetPotLifeMin: product.potLifeMin, sheetPotLifeTempC: product.referenceTempC });
+  if (!cup.ok) return sheet;
+  return { potLifeMin: Math.min(cup.value.potLifeMin, sheet.potLifeMin), limitedBy: cup.value.potLifeMin < sheet.potLifeMin ? 'cup_heating' : 'data_sheet' };
 }

@@ -57,6 +57,10 @@ export interface PlannedBatch extends MixResult {
   cost: CostTotals;
   /** How far the shown grams of A and B are from the product's ratio, in percent (+: A-rich). */
   ratioErrorPct: number;
+  /** This cup's pot life at the shop's temperature, its own heat counted (absent on plans saved before it was). */
+  cupPotLifeMin?: number;
+  /** 'cup_heating' when the cup's heat makes it shorter than the data sheet's pot life at that temperature. */
+  cupPotLifeLimitedBy?: 'cup_heating' | 'data_sheet';
 }
 
 export interface LayerPlan extends Omit<LayerSlice, 'fillVolumeMm3'> {

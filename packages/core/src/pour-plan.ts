@@ -5,7 +5,7 @@ import { woodCost } from './cost';
 import { splitIntoLayers, type LayerSlice } from './layers';
 import { checkPigmentPct, massRatioAToB, mixBatch, mixedDensity, resinMassForVolume, type MixResult } from './mix';
 import { pourPlanCautions } from './pour-plan-cautions';
-import { forecastMaxLayer, forecastPlanLayers, planForecastOf, unavailable, type PlanForecast } from './plan-exotherm';
+import { cupPotLifeOf, forecastMaxLayer, forecastPlanLayers, planForecastOf, unavailable, type PlanForecast } from './plan-exotherm';
 import { groupedTree, readGroupedTree, roundGrouped, type GroupedAmounts, type RoundedGroups } from './pour-plan-rounding';
 import type { CostTotals, CupWaste, LayerPlan, PartTotals, PlannedBatch, PourPlan, PourPlanInput, SealCoatPlan } from './pour-plan-types';
 import { fail, ok, type Result } from './result';
@@ -249,14 +249,31 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
   const woodShown = stepsToAmount(pieceCost.children[2]!.steps, costStep);
 
   let nextIndex = 0;
-  const planBatch = (exact: ExactBatch, shown: PartTotals & { ratioErrorPct: number }, cost: CostTotals): PlannedBatch => ({
-    ...shown,
-    mixedDensityGPerMl: exact.mix.mixedDensityGPerMl,
-    pigmentMl: exact.mix.pigmentMl,
-    index: nextIndex++,
-    pour: exact.pour,
-    cost,
-  });
+  // The cups of one pour weigh the same, so each product and mass is worked out once.
+  const cupPotLives = new Map<string, ReturnType<typeof cupPotLifeOf>>();
+  const cupPotLife = (product: ResinSystem, resinG: number) => {
+    const key = `${product.name}|${resinG}`;
+    let known = cupPotLives.get(key);
+    if (!known) {
+      known = cupPotLifeOf(product, resinG, input.shopTempC);
+      cupPotLives.set(key, known);
+    }
+    return known;
+  };
+  const planBatch = (exact: ExactBatch, shown: PartTotals & { ratioErrorPct: number }, cost: CostTotals): PlannedBatch => {
+    const product = exact.pour.kind === 'seal_coat' && sealProduct?.ok ? sealProduct.value : deep;
+    const cup = cupPotLife(product, shown.partA.grams + shown.partB.grams);
+    return {
+      ...shown,
+      mixedDensityGPerMl: exact.mix.mixedDensityGPerMl,
+      pigmentMl: exact.mix.pigmentMl,
+      index: nextIndex++,
+      pour: exact.pour,
+      cost,
+      cupPotLifeMin: cup.potLifeMin,
+      cupPotLifeLimitedBy: cup.limitedBy,
+    };
+  };
 
   const sealCoat: SealCoatPlan | null =
     input.sealCoat && sealProduct?.ok

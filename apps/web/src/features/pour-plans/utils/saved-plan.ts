@@ -21,6 +21,8 @@ const PlannedBatch = z.object({
   // Plans saved before cups were rounded on ratio carry neither figure.
   ratioErrorPct: z.number().default(0),
   pigmentMl: z.number().default(0),
+  cupPotLifeMin: z.number().optional(),
+  cupPotLifeLimitedBy: z.enum(['cup_heating', 'data_sheet']).optional(),
 });
 
 const Times: z.ZodType<TimesAtTemperature> = z.object({
