@@ -24,6 +24,7 @@ import { MoldProgressHub } from './modules/molds/mold-progress-hub';
 import { Molds } from './modules/molds/molds.service';
 import { StlChecker } from './modules/molds/stl-check';
 import { pourPlanRoutes } from './modules/pour-plans/pour-plans.routes';
+import { exothermRoutes } from './modules/exotherm/exotherm.routes';
 import { PourPlans } from './modules/pour-plans/pour-plans.service';
 import { pourRoutes } from './modules/pours/pours.routes';
 import { calendarRoutes } from './modules/calendar/calendar.routes';
@@ -95,6 +96,7 @@ export function createApp({ ds, config, logger = createLogger(config.logLevel) }
   const progress = new MoldProgressHub(config.databaseUrl, logger);
   moldRoutes(registry, molds, config.maxStlBytes, uploadLimit, { ds, hub: progress, heartbeatMs: config.eventsHeartbeatMs });
   pourPlanRoutes(registry, new PourPlans(ds, molds.cavityForPlan));
+  exothermRoutes(registry);
   pourRoutes(registry, new Pours(ds, undefined, quota), new PourLog(ds), uploadLimit);
   pourExportRoutes(registry, ds);
   calendarRoutes(registry, ds, new CalendarFeeds(ds, config.publicUrl), settings);

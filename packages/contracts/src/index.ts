@@ -8,5 +8,6 @@ export * from './audit-words';
 export * from './health';
 export * from './shelf';
 export * from './molds';
+export * from './exotherm';
 export * from './pour-plans';
 export * from './pours';

@@ -32,12 +32,42 @@ const resinSystemFields = {
   maxBatchG: positive('maximum batch mass', 1_000_000),
   activationEnergyKJPerMol: positive('activation energy', 500).nullable().default(null),
   hardnessShoreD: positive('Shore D hardness', 100).nullable().default(null).describe('the cured hardness the data sheet states; release then needs a cure check that reached it'),
+  reactionHeatJPerG: positive('heat of reaction', 1500)
+    .nullable()
+    .default(null)
+    .describe('J/g of mixed A + B, by DSC; null takes a published DGEBA/amine value (486 J/g). The exotherm forecast calibrates it to the data sheet'),
+  thinFilmGelMin: positive('thin-film gel time', 43_200)
+    .nullable()
+    .default(null)
+    .describe("minutes for a thin film to gel at the reference temperature; null takes the data sheet's gel time"),
+  heatCapacityJPerGK: z
+    .number({ message: 'heat capacity must be a number' })
+    .min(0.5, { message: 'heat capacity must be at least 0.5 J/(g·K)' })
+    .max(4, { message: 'heat capacity must be at most 4 J/(g·K)' })
+    .nullable()
+    .default(null)
+    .describe('J/(g·K) of the mixed resin; null takes 1.5, typical of published cure models'),
+  conductivityWPerMK: z
+    .number({ message: 'thermal conductivity must be a number' })
+    .min(0.05, { message: 'thermal conductivity must be at least 0.05 W/(m·K)' })
+    .max(5, { message: 'thermal conductivity must be at most 5 W/(m·K)' })
+    .nullable()
+    .default(null)
+    .describe('W/(m·K) of the cured resin; null takes 0.2, typical of unfilled polymers'),
+  acceptedPeakC: z
+    .number({ message: 'accepted peak temperature must be a number (°C)' })
+    .max(300, { message: 'accepted peak temperature must be at most 300 °C' })
+    .nullable()
+    .default(null)
+    .describe("°C: the hottest the shop lets a layer get; the forecast is calibrated so the data sheet's maximum layer peaks here. null takes 60 °C"),
   pricePerKit: nonNegative('price per kit', 1_000_000),
   kitSizeG: positive('kit size', 10_000_000),
   shelfLifeMonths: positive('shelf life', 600),
 };
 
 type TimesToCheck = {
+  referenceTempC?: number;
+  acceptedPeakC?: number | null;
   recoatWindow?: { earliestH: number; latestH: number };
   minWorkTempC?: number;
   maxWorkTempC?: number;
@@ -81,6 +111,10 @@ const resinSystemRules = <T extends z.ZodType<TimesToCheck>>(s: T) =>
       message: 'the pot life cannot be longer than the gel time: a mixed cup gels no later than a thin film does',
       path: ['potLifeMin'],
     })
+    .refine((v) => v.acceptedPeakC === undefined || v.acceptedPeakC === null || v.referenceTempC === undefined || v.acceptedPeakC > v.referenceTempC, {
+      message: "the accepted peak temperature must be above the reference temperature: a layer poured at the data sheet's temperature warms, it never cools",
+      path: ['acceptedPeakC'],
+    })
     .superRefine((v, ctx) => {
       const wrong = timesOutOfOrder(v);
       // Either time may be the slip: both fields carry the sentence.
@@ -98,6 +132,15 @@ export const ResinSystemView = z.object({
   readyToMachineH: z.number().nullable(),
   activationEnergyKJPerMol: z.number().nullable(),
   hardnessShoreD: z.number().nullable(),
+  reactionHeatJPerG: z.number().nullable(),
+  thinFilmGelMin: z.number().nullable(),
+  heatCapacityJPerGK: z.number().nullable(),
+  conductivityWPerMK: z.number().nullable(),
+  acceptedPeakC: z.number().nullable(),
+  /** What the exotherm forecast uses for each setting: the shelf's value, or the named default when it is empty. */
+  exothermSettings: z
+    .record(z.enum(['reactionHeatJPerG', 'thinFilmGelMin', 'heatCapacityJPerGK', 'conductivityWPerMK', 'acceptedPeakC', 'activationEnergyKJPerMol']), z.object({ value: z.number(), isDefault: z.boolean(), source: z.string() }))
+    .describe('per setting: the value the forecast uses, whether it is a default, and where it comes from'),
   /** The activation energy the cure model uses: the data sheet's, or the common-practice default. */
   effectiveActivationEnergyKJPerMol: z.number(),
   archived: z.boolean(),

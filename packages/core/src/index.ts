@@ -34,3 +34,5 @@ export * from './forecast-track';
 export * from './shop-time';
 export * from './release-evidence';
 export * from './log-guards';
+export * from './exotherm-settings';
+export * from './plan-exotherm';

@@ -1,3 +1,4 @@
+import type { PlanDepthMap } from './plan-exotherm';
 import { fail, ok, type Result } from './result';
 import { checkVolumeCurve, volumeAtLevel, type VolumeCurve } from './volume-curve';
 
@@ -8,12 +9,15 @@ export interface MoldFillFacts {
   wettedAreaMm2: number;
   /** Deepest resin at the fill level. */
   maxDepthMm: number;
+  /** Resin depth per column at the fill level, for the exotherm forecast's hottest spot. */
+  depthMap?: PlanDepthMap;
 }
 
 export interface PlanCavity {
   curve: VolumeCurve;
   wettedAreaMm2: number;
   maxDepthMm?: number;
+  depthMap?: PlanDepthMap;
 }
 
 /**
@@ -41,5 +45,5 @@ export function planCavityFromMold(facts: MoldFillFacts, fillLevelMm: number): R
     relative.push({ levelMm: p.levelMm - floorMm, volumeMm3: p.volumeMm3 });
   }
   relative.push({ levelMm: fillLevelMm - floorMm, volumeMm3: volumeAtLevel(curve, fillLevelMm) });
-  return ok({ cavity: { curve: relative, wettedAreaMm2: facts.wettedAreaMm2, maxDepthMm: facts.maxDepthMm }, fillLevelMm: fillLevelMm - floorMm });
+  return ok({ cavity: { curve: relative, wettedAreaMm2: facts.wettedAreaMm2, maxDepthMm: facts.maxDepthMm, ...(facts.depthMap ? { depthMap: facts.depthMap } : {}) }, fillLevelMm: fillLevelMm - floorMm });
 }

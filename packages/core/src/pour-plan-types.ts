@@ -3,6 +3,7 @@ import type { TimesAtTemperature } from './cure-model';
 import type { WoodBlank, WoodCost } from './cost';
 import type { LayerSlice } from './layers';
 import type { MixResult } from './mix';
+import type { PlanDepthMap, PlanForecast } from './plan-exotherm';
 import type { Pigment, ResinSystem } from './shelf';
 import type { ScaleResolutionG } from './unit-format';
 import type { VolumeCurve } from './volume-curve';
@@ -18,6 +19,8 @@ export interface PourPlanInput {
     wettedAreaMm2: number;
     /** Resin depth at the deepest point when filled to fillLevelMm (depth map); leave out when the curve starts at that point. */
     maxDepthMm?: number;
+    /** A mould's resin depths at the fill level: the forecast then finds the hottest spot; without it every column is alike. */
+    depthMap?: PlanDepthMap;
   };
   fillLevelMm: number;
   deepPour: { product: ResinSystem; pigment?: { pigment: Pigment; pct: number } };
@@ -54,6 +57,10 @@ export interface PlannedBatch extends MixResult {
   cost: CostTotals;
   /** How far the shown grams of A and B are from the product's ratio, in percent (+: A-rich). */
   ratioErrorPct: number;
+  /** This cup's pot life at the shop's temperature, its own heat counted (absent on plans saved before it was). */
+  cupPotLifeMin?: number;
+  /** 'cup_heating' when the cup's heat makes it shorter than the data sheet's pot life at that temperature. */
+  cupPotLifeLimitedBy?: 'cup_heating' | 'data_sheet';
 }
 
 export interface LayerPlan extends Omit<LayerSlice, 'fillVolumeMm3'> {
@@ -91,6 +98,8 @@ export interface PourPlan {
   cost: { sealCoat: number; deepPour: number; wood: (WoodCost & { shownCost: number }) | null; piece: number };
   /** The data sheet's times at the shop temperature. */
   shopTimes: { deepPour: TimesAtTemperature; sealCoat: TimesAtTemperature | null };
+  /** The exotherm forecast of the deep pour's layers at the shop's temperature (an estimate; see its calibratedTo). */
+  forecast: PlanForecast;
   /** appliesTo.kind 'product': index 0 is the deep-pour product, 1 the seal-coat product. */
   cautions: Caution[];
 }

@@ -2,9 +2,10 @@ import { batchCount } from './batches';
 import { defaultOffRatioTolerancePct, roundCupOnRatio } from './cup-rounding';
 import { timesAtTemperature } from './cure-model';
 import { woodCost } from './cost';
-import { splitIntoLayers } from './layers';
+import { splitIntoLayers, type LayerSlice } from './layers';
 import { checkPigmentPct, massRatioAToB, mixBatch, mixedDensity, resinMassForVolume, type MixResult } from './mix';
 import { pourPlanCautions } from './pour-plan-cautions';
+import { cupPotLifeOf, forecastMaxLayer, forecastPlanLayers, planForecastOf, unavailable, type PlanForecast } from './plan-exotherm';
 import { groupedTree, readGroupedTree, roundGrouped, type GroupedAmounts, type RoundedGroups } from './pour-plan-rounding';
 import type { CostTotals, CupWaste, LayerPlan, PartTotals, PlannedBatch, PourPlan, PourPlanInput, SealCoatPlan } from './pour-plan-types';
 import { fail, ok, type Result } from './result';
@@ -136,6 +137,42 @@ function groupCosts(rounded: RoundedGroups): { batches: CostTotals[]; group: Cos
   });
 }
 
+// Each extra layer is one more whole-mould forecast; past this many the split stays and the layers say they are over.
+const extraLayersTried = 4;
+
+/**
+ * The layers: the fewest equal ones no thicker than the data sheet allows nor than the forecast keeps
+ * under the accepted peak at the shop's temperature, then one more while any layer (on the cured ones
+ * below, at the mould's deepest spot) is forecast over it. The forecast only ever makes layers thinner.
+ */
+function layersUnderForecast(input: PourPlanInput, deep: ResinSystem): Result<{ slices: Result<LayerSlice[]> & { ok: true }; forecast: PlanForecast }> {
+  const split = (maxLayerMm: number) =>
+    splitIntoLayers({
+      curve: input.cavity.curve,
+      fillLevelMm: input.fillLevelMm,
+      maxLayerMm,
+      ...(input.cavity.maxDepthMm === undefined ? {} : { maxDepthMm: input.cavity.maxDepthMm }),
+    });
+  const sheetSplit = split(deep.maxLayerMm);
+  if (!sheetSplit.ok) return sheetSplit;
+  const max = forecastMaxLayer(deep, input.shopTempC);
+  if (!max.ok) return ok({ slices: sheetSplit, forecast: unavailable(max.error.code, max.error.message) });
+  let slices = max.value.maxLayerMm < deep.maxLayerMm ? split(max.value.maxLayerMm) : sheetSplit;
+  if (!slices.ok) return slices;
+  for (let extra = 0; ; extra++) {
+    const layers = forecastPlanLayers(deep, { slices: slices.value, fillLevelMm: input.fillLevelMm, shopTempC: input.shopTempC, depthMap: input.cavity.depthMap });
+    if (!layers.ok) return ok({ slices, forecast: unavailable(layers.error.code, layers.error.message) });
+    if (!layers.value.some((l) => l.overLimit) || extra >= extraLayersTried) {
+      return ok({ slices, forecast: planForecastOf(deep, input.shopTempC, max.value, layers.value) });
+    }
+    const first = slices.value[0]!;
+    const heightMm = slices.value.at(-1)!.toLevelMm - first.fromLevelMm;
+    const thinner = split(heightMm / (slices.value.length + 1));
+    if (!thinner.ok) return thinner;
+    slices = thinner;
+  }
+}
+
 export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
   const deepProduct = planProduct(input.deepPour.product, 'Deep-pour product');
   if (!deepProduct.ok) return deepProduct;
@@ -161,13 +198,9 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
   }
   if (!Number.isFinite(input.shopTempC)) return fail('temperature_invalid', `The shop temperature must be a number in °C, got ${String(input.shopTempC)}.`);
 
-  const slices = splitIntoLayers({
-    curve: input.cavity.curve,
-    fillLevelMm: input.fillLevelMm,
-    maxLayerMm: deep.maxLayerMm,
-    ...(input.cavity.maxDepthMm === undefined ? {} : { maxDepthMm: input.cavity.maxDepthMm }),
-  });
-  if (!slices.ok) return slices;
+  const layered = layersUnderForecast(input, deep);
+  if (!layered.ok) return layered;
+  const { slices, forecast } = layered.value;
 
   // Seal coat: one pour per coat, since each coat is mixed once the one before is tacky.
   const sealGroups: ExactBatch[][] = [];
@@ -216,14 +249,31 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
   const woodShown = stepsToAmount(pieceCost.children[2]!.steps, costStep);
 
   let nextIndex = 0;
-  const planBatch = (exact: ExactBatch, shown: PartTotals & { ratioErrorPct: number }, cost: CostTotals): PlannedBatch => ({
-    ...shown,
-    mixedDensityGPerMl: exact.mix.mixedDensityGPerMl,
-    pigmentMl: exact.mix.pigmentMl,
-    index: nextIndex++,
-    pour: exact.pour,
-    cost,
-  });
+  // The cups of one pour weigh the same, so each product and mass is worked out once.
+  const cupPotLives = new Map<string, ReturnType<typeof cupPotLifeOf>>();
+  const cupPotLife = (product: ResinSystem, resinG: number) => {
+    const key = `${product.name}|${resinG}`;
+    let known = cupPotLives.get(key);
+    if (!known) {
+      known = cupPotLifeOf(product, resinG, input.shopTempC);
+      cupPotLives.set(key, known);
+    }
+    return known;
+  };
+  const planBatch = (exact: ExactBatch, shown: PartTotals & { ratioErrorPct: number }, cost: CostTotals): PlannedBatch => {
+    const product = exact.pour.kind === 'seal_coat' && sealProduct?.ok ? sealProduct.value : deep;
+    const cup = cupPotLife(product, shown.partA.grams + shown.partB.grams);
+    return {
+      ...shown,
+      mixedDensityGPerMl: exact.mix.mixedDensityGPerMl,
+      pigmentMl: exact.mix.pigmentMl,
+      index: nextIndex++,
+      pour: exact.pour,
+      cost,
+      cupPotLifeMin: cup.potLifeMin,
+      cupPotLifeLimitedBy: cup.limitedBy,
+    };
+  };
 
   const sealCoat: SealCoatPlan | null =
     input.sealCoat && sealProduct?.ok
@@ -298,6 +348,7 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
       deepPour: timesAtTemperature(deep, input.shopTempC),
       sealCoat: sealProduct?.ok ? timesAtTemperature(sealProduct.value, input.shopTempC) : null,
     },
+    forecast,
     cautions: [],
   };
   const cautions = pourPlanCautions(input, plan, deep, sealProduct?.ok ? sealProduct.value : null);

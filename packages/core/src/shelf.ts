@@ -31,6 +31,14 @@ export interface ResinSystem {
    * machining then also needs a cure check that measured at least this.
    */
   hardnessShoreD?: number;
+  /** Exotherm forecast settings; each one absent takes the default exothermSettingsOf names. Heat of reaction of the mix, J/g (DSC). */
+  reactionHeatJPerG?: number;
+  /** Isothermal gel time of a thin film at referenceTempC, minutes; the data sheet's gel time when absent. */
+  thinFilmGelMin?: number;
+  heatCapacityJPerGK?: number;
+  conductivityWPerMK?: number;
+  /** The hottest the shop lets a layer get, °C; what the forecast is calibrated to at the data sheet's maximum layer. */
+  acceptedPeakC?: number;
   /** Price of one kit of A+B together, in the shop's currency. */
   pricePerKit: number;
   /** Mass of A+B in one kit. */
@@ -143,7 +151,29 @@ export function validateResinSystem(product: ResinSystem): Result<ResinSystem> {
   if (product.hardnessShoreD !== undefined && !(product.hardnessShoreD > 0 && product.hardnessShoreD <= 100)) {
     issues.push({ field: 'hardnessShoreD', message: `hardnessShoreD must be between 0 and 100 when given, got ${product.hardnessShoreD}.` });
   }
+  exothermSettingIssues(product, issues);
   return finish(product, 'resin_system', issues);
+}
+
+// The ranges the forecast accepts (packages/thermal checkResinThermal); a shelf entry outside them could never be forecast.
+const exothermRanges: { field: 'reactionHeatJPerG' | 'thinFilmGelMin' | 'heatCapacityJPerGK' | 'conductivityWPerMK'; min: number; max: number; unit: string }[] = [
+  { field: 'reactionHeatJPerG', min: 0, max: 1500, unit: 'J/g' },
+  { field: 'thinFilmGelMin', min: 0, max: 43_200, unit: 'min' },
+  { field: 'heatCapacityJPerGK', min: 0.5, max: 4, unit: 'J/(g·K)' },
+  { field: 'conductivityWPerMK', min: 0.05, max: 5, unit: 'W/(m·K)' },
+];
+
+function exothermSettingIssues(product: ResinSystem, issues: CoreIssue[]): void {
+  for (const { field, min, max, unit } of exothermRanges) {
+    const v = product[field];
+    if (v !== undefined && !(Number.isFinite(v) && v > min && v <= max)) {
+      issues.push({ field, message: `${field} must be above ${min} and at most ${max} ${unit} when given, got ${String(v)}.` });
+    }
+  }
+  const peak = product.acceptedPeakC;
+  if (peak !== undefined && !(Number.isFinite(peak) && peak > product.referenceTempC && peak <= 300)) {
+    issues.push({ field: 'acceptedPeakC', message: `acceptedPeakC must be above the reference temperature (${product.referenceTempC} °C) and at most 300 °C when given, got ${String(peak)}.` });
+  }
 }
 
 export function validatePigment(pigment: Pigment): Result<Pigment> {

@@ -27,3 +27,4 @@ export {
 } from './calibration';
 export { forecastMould, type DepthGrid, type MouldForecast, type MouldLayerForecast, type MouldOptions, type PlannedLayer } from './mould-forecast';
 export { cupPotLife, type CupInput, type CupPotLife } from './cup-pot-life';
+export { exothermCaution, forecastSingleLayer, type SingleLayerForecast, type SingleLayerInput } from './single-layer';

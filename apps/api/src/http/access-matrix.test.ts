@@ -136,6 +136,7 @@ const table: Record<string, Rule> = {
   'GET /api/pour-plans/:id': { allowed: 'member', params: ownOrOther(freshPlan, 'plan') },
   'PUT /api/pour-plans/:id': { allowed: ['lead', 'maker'], body: (w) => planBody(w.ownPiece, w.ownResin), params: ownOrOther(freshPlan, 'plan') },
   'DELETE /api/pour-plans/:id': { allowed: ['lead', 'maker'], params: ownOrOther(freshPlan, 'plan') },
+  'POST /api/exotherm': { allowed: 'member', body: () => ({ depthMm: 10, ambientC: 21, reactionHeatJG: 300, activationKJMol: 53, refTempC: 22, gelMin: 480 }) },
   'GET /api/pours': { allowed: 'member' },
   'POST /api/pours': { allowed: 'member', body: (w) => ({ pourPlanId: w.ownPlan }) },
   'GET /api/pours/:id': { allowed: 'member', params: ownOrOther(freshPour, 'pour') },

@@ -197,6 +197,7 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
     'GET /api/pour-plans': { query: { pieceId: ids.piece, limit: '10', offset: '0' } },
     'POST /api/pour-plans': { body: planBody(ids.piece, ids.resin, { pigmentId: ids.pigment, sealResinId: ids.sealResin }) },
     'PUT /api/pour-plans/:id': { body: planBody(ids.piece, ids.resin, { pigmentId: ids.pigment, sealResinId: ids.sealResin }) },
+    'POST /api/exotherm': { body: { depthMm: 20, ambientC: 21, reactionHeatJG: 300, activationKJMol: 53, refTempC: 22, gelMin: 480, densityGMl: 1.1, heatCapacityJGK: 1.5, conductivityWMK: 0.2, base: 'wood', limitC: 55 } },
     'GET /api/pours': { query: { status: 'all', readyToday: 'false', pieceId: ids.piece, limit: '10', offset: '0' } },
     'POST /api/pours': { body: { pourPlanId: ids.plan, notifyUserIds: [shop.lead.user.id] } },
     'POST /api/pours/:id/batches': {

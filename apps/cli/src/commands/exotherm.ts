@@ -1,8 +1,5 @@
-import { dgebaAmineDefaults, forecastLayer, maxLayerDepth, type LayerForecast, type MaxLayer, type ResinThermal } from '@gelpoint/thermal';
+import { exothermCaution as caution, forecastSingleLayer, type LayerForecast, type MaxLayer } from '@gelpoint/thermal';
 import { CliError, numberOption, parseOptions, type Command } from '../command';
-
-
-const caution = 'Estimate only: the model cannot see your product; follow its SDS and TDS for layer thickness and safe handling.';
 
 const options = {
   'depth-mm': { type: 'string' },
@@ -50,25 +47,21 @@ export const command: Command = async (argv) => {
   const base = values.base ?? 'wood';
   if (base !== 'wood' && base !== 'insulated') throw new CliError(`--base must be "wood" or "insulated", got "${base}"`);
   const limitC = numberOption(values['limit-c'], 'limit-c');
-  const resin: ResinThermal = {
+  const answer = forecastSingleLayer({
+    depthMm,
+    ambientC,
     reactionHeatJPerG: numberOption(values['reaction-heat-j-g'], 'reaction-heat-j-g', { required: true })!,
     activationEnergyKJPerMol: numberOption(values['activation-kj-mol'], 'activation-kj-mol', { required: true })!,
     refTempC: numberOption(values['ref-temp-c'], 'ref-temp-c', { required: true })!,
     gelTimeMin: numberOption(values['gel-min'], 'gel-min', { required: true })!,
-    densityGPerMl: numberOption(values['density-g-ml'], 'density-g-ml') ?? dgebaAmineDefaults.densityGPerMl,
-    heatCapacityJPerGK: numberOption(values['heat-capacity-j-gk'], 'heat-capacity-j-gk') ?? dgebaAmineDefaults.heatCapacityJPerGK,
-    conductivityWPerMK: numberOption(values['conductivity-w-mk'], 'conductivity-w-mk') ?? dgebaAmineDefaults.conductivityWPerMK,
-  };
-  const conditions = { ambient: ambientC, base } as const;
-  const forecast = forecastLayer(resin, conditions, depthMm, { series: false });
-  if (!forecast.ok) throw new CliError(forecast.error.message);
-  let max: MaxLayer | null = null;
-  if (limitC !== undefined) {
-    const found = maxLayerDepth(resin, conditions, limitC);
-    if (!found.ok) throw new CliError(found.error.message);
-    max = found.value;
-  }
-  const f = forecast.value;
+    densityGPerMl: numberOption(values['density-g-ml'], 'density-g-ml'),
+    heatCapacityJPerGK: numberOption(values['heat-capacity-j-gk'], 'heat-capacity-j-gk'),
+    conductivityWPerMK: numberOption(values['conductivity-w-mk'], 'conductivity-w-mk'),
+    base,
+    limitC,
+  });
+  if (!answer.ok) throw new CliError(answer.error.message);
+  const { forecast: f, max } = answer.value;
   if (!values.json) return report(f, ambientC, base, max);
   return JSON.stringify(
     {

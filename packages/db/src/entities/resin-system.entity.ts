@@ -8,6 +8,7 @@ export type ResinUse = 'seal' | 'deep_pour' | 'casting' | 'coating';
 @Entity({ name: 'resin_systems' })
 @Check('resin_systems_use_check', `use IN ('seal', 'deep_pour', 'casting', 'coating')`)
 @Check('resin_systems_ratio_basis_check', `ratio_basis IN ('weight', 'volume')`)
+@Check('resin_systems_exotherm_check', `(reaction_heat_j_per_g IS NULL OR reaction_heat_j_per_g > 0) AND (thin_film_gel_min IS NULL OR thin_film_gel_min > 0) AND (heat_capacity_j_per_gk IS NULL OR heat_capacity_j_per_gk > 0) AND (conductivity_w_per_mk IS NULL OR conductivity_w_per_mk > 0) AND (accepted_peak_c IS NULL OR accepted_peak_c > reference_temp_c)`)
 @Index('resin_systems_shop_name_idx', ['shopId', 'name'])
 export class ResinSystem {
   @PrimaryGeneratedColumn('uuid', { primaryKeyConstraintName: 'resin_systems_pkey' }) id!: string;
@@ -36,6 +37,12 @@ export class ResinSystem {
   @Column({ name: 'activation_energy_kj_per_mol', type: 'double precision', nullable: true }) activationEnergyKJPerMol!: number | null;
   /** Shore D of the cured product when the data sheet states it: release then needs a check that reached it. */
   @Column({ name: 'hardness_shore_d', type: 'double precision', nullable: true }) hardnessShoreD!: number | null;
+  /** Exotherm forecast settings; null takes the default core's exothermSettingsOf names. */
+  @Column({ name: 'reaction_heat_j_per_g', type: 'double precision', nullable: true }) reactionHeatJPerG!: number | null;
+  @Column({ name: 'thin_film_gel_min', type: 'double precision', nullable: true }) thinFilmGelMin!: number | null;
+  @Column({ name: 'heat_capacity_j_per_gk', type: 'double precision', nullable: true }) heatCapacityJPerGK!: number | null;
+  @Column({ name: 'conductivity_w_per_mk', type: 'double precision', nullable: true }) conductivityWPerMK!: number | null;
+  @Column({ name: 'accepted_peak_c', type: 'double precision', nullable: true }) acceptedPeakC!: number | null;
   @Column({ name: 'price_per_kit', type: 'double precision' }) pricePerKit!: number;
   @Column({ name: 'kit_size_g', type: 'double precision' }) kitSizeG!: number;
   @Column({ name: 'shelf_life_months', type: 'double precision' }) shelfLifeMonths!: number;

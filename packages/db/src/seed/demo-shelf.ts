@@ -1,7 +1,8 @@
 import type { EntityManager } from 'typeorm';
 import { Lot, Pigment, ResinSystem } from '../entities';
 
-// Invented products with numbers of the kind their data sheets give; demo data only.
+// Invented products with numbers of the kind their data sheets give; demo data only (the exotherm settings too:
+// heats of reaction, film gel times, heat capacities, conductivities and accepted peaks are plausible, not measured).
 const resinSystems = [
   {
     name: 'Kettle Deep Pour 2:1',
@@ -11,6 +12,7 @@ const resinSystems = [
     densityAGPerMl: 1.15, densityBGPerMl: 0.97,
     potLifeMin: 60, gelTimeH: 10, tackFreeH: 24, recoatEarliestH: 18, recoatLatestH: 48, demoldH: 72, fullCureH: 168, readyToMachineH: null,
     referenceTempC: 22, minWorkTempC: 18, maxWorkTempC: 30, maxLayerMm: 50, maxBatchG: 6000, activationEnergyKJPerMol: null, hardnessShoreD: null,
+    reactionHeatJPerG: 380, thinFilmGelMin: 900, heatCapacityJPerGK: 1.6, conductivityWPerMK: 0.19, acceptedPeakC: 55,
     pricePerKit: 165, kitSizeG: 6000, shelfLifeMonths: 12,
   },
   {
@@ -21,6 +23,7 @@ const resinSystems = [
     densityAGPerMl: 1.13, densityBGPerMl: 0.98,
     potLifeMin: 25, gelTimeH: 1.5, tackFreeH: 5, recoatEarliestH: 4, recoatLatestH: 24, demoldH: 24, fullCureH: 72, readyToMachineH: null,
     referenceTempC: 22, minWorkTempC: 15, maxWorkTempC: 32, maxLayerMm: 3, maxBatchG: 1000, activationEnergyKJPerMol: null, hardnessShoreD: null,
+    reactionHeatJPerG: 450, thinFilmGelMin: 120, heatCapacityJPerGK: null, conductivityWPerMK: null, acceptedPeakC: 60,
     pricePerKit: 78, kitSizeG: 2000, shelfLifeMonths: 18,
   },
   {
@@ -31,6 +34,7 @@ const resinSystems = [
     densityAGPerMl: 1.16, densityBGPerMl: 0.96,
     potLifeMin: 35, gelTimeH: 4, tackFreeH: 10, recoatEarliestH: 8, recoatLatestH: 24, demoldH: 24, fullCureH: 96, readyToMachineH: 72,
     referenceTempC: 23, minWorkTempC: 18, maxWorkTempC: 29, maxLayerMm: 25, maxBatchG: 2500, activationEnergyKJPerMol: 55, hardnessShoreD: 82,
+    reactionHeatJPerG: 430, thinFilmGelMin: 330, heatCapacityJPerGK: 1.45, conductivityWPerMK: 0.21, acceptedPeakC: 65,
     pricePerKit: 110, kitSizeG: 4350, shelfLifeMonths: 12,
   },
 ];

@@ -286,7 +286,16 @@ export class Molds {
       const levels = Array.from({ length: PLAN_CURVE_POINTS }, (_, i) => floor + ((top - floor) * i) / (PLAN_CURVE_POINTS - 1));
       const c = curve(model, levels, dam);
       if (!c.ok) throw new AppError('unprocessable', c.error.code, c.error.message);
-      const planned = planCavityFromMold({ curve: dedupeLevels(c.value), wettedAreaMm2: f.value.wettedAreaMm2, maxDepthMm: f.value.maxDepthMm }, top);
+      const { depthMap } = f.value;
+      const planned = planCavityFromMold(
+        {
+          curve: dedupeLevels(c.value),
+          wettedAreaMm2: f.value.wettedAreaMm2,
+          maxDepthMm: f.value.maxDepthMm,
+          depthMap: { originMm: depthMap.originMm, cellMm: depthMap.cellMm, nx: depthMap.nx, ny: depthMap.ny, depthsMm: depthMap.depthsMm },
+        },
+        top,
+      );
       if (!planned.ok) throw new AppError('unprocessable', planned.error.code, planned.error.message);
       return planned.value;
     },

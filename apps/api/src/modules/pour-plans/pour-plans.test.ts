@@ -36,6 +36,17 @@ describe('pour plans', () => {
     expect(plan.fill.layerThicknessMm).toBeCloseTo(15, 6);
     expect(plan.fill.pourVolumeMl).toBeCloseTo(1800 * 1.05, 0);
     expect(res.body.productSnapshot.deepPour).toMatchObject({ id: product.id, name: 'Stillwater Deep 50', maxLayerMm: 20 });
+    // The forecast of each layer, calibrated to the data sheet's 20 mm at 22 °C; at 22 °C it never makes a layer thicker.
+    const forecast = plan.forecast;
+    expect(forecast).toMatchObject({ version: 1, available: true, shopTempC: 22, calibration: { maxLayerMm: 20, tempC: 22 } });
+    expect(forecast.calibratedTo).toMatch(/20 mm layer poured at 22 °C/);
+    expect(forecast.layers).toHaveLength(2);
+    for (const layer of forecast.layers) {
+      expect(layer.peakC).toBeGreaterThan(22);
+      expect(layer.peakC).toBeLessThanOrEqual(forecast.limitC);
+      expect(layer.overLimit).toBe(false);
+      expect(layer.curve.length).toBeGreaterThan(2);
+    }
 
     await h.http().put(`/api/shelf/resin-systems/${product.id}`).set(bearer(shop.lead)).send(resin({ name: 'Renamed on the shelf', maxLayerMm: 50 })).expect(200);
     const again = (await h.http().get(`/api/pour-plans/${res.body.id}`).set(bearer(maker)).expect(200)).body;
@@ -60,6 +71,12 @@ describe('pour plans', () => {
     expect(plan.result.fill.fillVolumeMl).toBeCloseTo(64, 1);
     expect(plan.result.layers).toHaveLength(1);
     expect(plan.moldId).toBe(mold.id);
+    // The forecast runs on the mould's depth map: its hottest spot lies inside the pocket, x 10..90, y 10..50 mm in the mould's frame.
+    const [layer] = plan.result.forecast.layers;
+    expect(layer.hottest.xMm).toBeGreaterThan(10);
+    expect(layer.hottest.xMm).toBeLessThan(90);
+    expect(layer.hottest.yMm).toBeGreaterThan(10);
+    expect(layer.hottest.yMm).toBeLessThan(50);
     // At or below the floor there is nothing to pour.
     const tooLow = await h.http().post('/api/pour-plans').set(bearer(maker)).send({ ...body, fillLevelMm: -5 }).expect(422);
     expect(tooLow.body.error.code).toBe('fill_below_floor');

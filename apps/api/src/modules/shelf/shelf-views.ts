@@ -1,4 +1,4 @@
-import { activationEnergyOf } from '@gelpoint/core';
+import { activationEnergyOf, exothermSettingsOf } from '@gelpoint/core';
 import { toCoreResinSystem, type Lot, type Pigment, type ResinSystem } from '@gelpoint/db';
 import type { LotView, PigmentView, ResinSystemInput, ResinSystemView } from '@gelpoint/contracts';
 
@@ -25,6 +25,12 @@ export function resinSystemView(r: ResinSystem): ResinSystemView {
     maxBatchG: r.maxBatchG,
     activationEnergyKJPerMol: r.activationEnergyKJPerMol,
     hardnessShoreD: r.hardnessShoreD,
+    reactionHeatJPerG: r.reactionHeatJPerG,
+    thinFilmGelMin: r.thinFilmGelMin,
+    heatCapacityJPerGK: r.heatCapacityJPerGK,
+    conductivityWPerMK: r.conductivityWPerMK,
+    acceptedPeakC: r.acceptedPeakC,
+    exothermSettings: exothermSettingsOf(toCoreResinSystem(r)).settings,
     effectiveActivationEnergyKJPerMol: activationEnergyOf(toCoreResinSystem(r)),
     pricePerKit: r.pricePerKit,
     kitSizeG: r.kitSizeG,
@@ -60,6 +66,11 @@ export function resinSystemColumns(input: Required<Omit<ResinSystemInput, 'maker
     maxBatchG: input.maxBatchG,
     activationEnergyKJPerMol: input.activationEnergyKJPerMol,
     hardnessShoreD: input.hardnessShoreD,
+    reactionHeatJPerG: input.reactionHeatJPerG,
+    thinFilmGelMin: input.thinFilmGelMin,
+    heatCapacityJPerGK: input.heatCapacityJPerGK,
+    conductivityWPerMK: input.conductivityWPerMK,
+    acceptedPeakC: input.acceptedPeakC,
     pricePerKit: input.pricePerKit,
     kitSizeG: input.kitSizeG,
     shelfLifeMonths: input.shelfLifeMonths,

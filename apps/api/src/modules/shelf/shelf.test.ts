@@ -35,6 +35,41 @@ describe('resin systems', () => {
     expect((await h.http().get('/api/shelf/resin-systems').set(bearer(shop.lead)).expect(200)).body.total).toBe(0);
   });
 
+  it('keeps the exotherm settings, names the default of each empty one and refuses impossible ones in a sentence', async () => {
+    const shop = await createShop(h);
+    const empty = await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ name: 'Defaults only' })).expect(201);
+    expect(empty.body).toMatchObject({ reactionHeatJPerG: null, thinFilmGelMin: null, heatCapacityJPerGK: null, conductivityWPerMK: null, acceptedPeakC: null });
+    const used = empty.body.exothermSettings;
+    // 486 J/g: DGEBA/TETA by DSC (Polímeros, SciELO); 1.5 J/(g·K) and 0.2 W/(m·K): inside the published ranges (from memory).
+    expect(used.reactionHeatJPerG).toMatchObject({ value: 486, isDefault: true });
+    expect(used.heatCapacityJPerGK).toMatchObject({ value: 1.5, isDefault: true });
+    expect(used.conductivityWPerMK).toMatchObject({ value: 0.2, isDefault: true });
+    // The empty film gel time falls back on the data sheet's 8 h gel time.
+    expect(used.thinFilmGelMin).toMatchObject({ value: 480, isDefault: true });
+    expect(used.acceptedPeakC.isDefault).toBe(true);
+
+    const settings = { reactionHeatJPerG: 410, thinFilmGelMin: 720, heatCapacityJPerGK: 1.7, conductivityWPerMK: 0.18, acceptedPeakC: 58 };
+    const given = await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ name: 'Measured', ...settings })).expect(201);
+    expect(given.body).toMatchObject(settings);
+    expect(given.body.exothermSettings.acceptedPeakC).toMatchObject({ value: 58, isDefault: false });
+    const read = await h.http().get(`/api/shelf/resin-systems/${given.body.id}`).set(bearer(shop.lead)).expect(200);
+    expect(read.body).toMatchObject(settings);
+    const cleared = await h.http().put(`/api/shelf/resin-systems/${given.body.id}`).set(bearer(shop.lead)).send(resinInput({ name: 'Measured', ...settings, acceptedPeakC: null })).expect(200);
+    expect(cleared.body.acceptedPeakC).toBeNull();
+
+    const cases: [Record<string, unknown>, string, RegExp][] = [
+      [{ reactionHeatJPerG: -5 }, 'reactionHeatJPerG', /heat of reaction must be above zero/],
+      [{ thinFilmGelMin: 'slow' }, 'thinFilmGelMin', /thin-film gel time must be a number/],
+      [{ heatCapacityJPerGK: 12 }, 'heatCapacityJPerGK', /heat capacity must be at most 4/],
+      [{ conductivityWPerMK: 0 }, 'conductivityWPerMK', /thermal conductivity must be at least 0.05/],
+      [{ acceptedPeakC: 20 }, 'acceptedPeakC', /accepted peak temperature must be above the reference temperature/],
+    ];
+    for (const [over, field, sentence] of cases) {
+      const res = await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ name: 'Refused', ...over })).expect(400);
+      expect(res.body.error.fields[field], JSON.stringify(over)).toMatch(sentence);
+    }
+  });
+
   it('replaces, searches and archives', async () => {
     const shop = await createShop(h);
     const a = await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ name: 'Tabletop Clear' })).expect(201);

@@ -10,9 +10,9 @@ export interface MoldFillRequest {
   dam: 'outline' | 'box';
 }
 
-/** What the mould holds and wets at one level, with its dam: the wetted area and deepest resin for the plan. */
+/** What the mould holds and wets at one level, with its dam: the wetted area, deepest resin and depth map (for the heat forecast) for the plan. */
 export function getMoldFill({ moldId, levelMm, dam }: MoldFillRequest, signal?: AbortSignal): Promise<MoldFill> {
-  return api.get(`/molds/${encodeURIComponent(moldId)}/fill`, MoldFill, { query: { level: levelMm, from: 'floor', dam }, ...(signal ? { signal } : {}) });
+  return api.get(`/molds/${encodeURIComponent(moldId)}/fill`, MoldFill, { query: { level: levelMm, from: 'floor', dam, depthMap: 'true' }, ...(signal ? { signal } : {}) });
 }
 
 export const moldFillQueryOptions = (request: MoldFillRequest) =>

@@ -63,7 +63,13 @@ export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG, link 
         <strong>
           pot life {formatMinutes(batch.potLifeMin)} at {formatTemperature(batch.shopTempC, unitSystem).text}
         </strong>
+        {batch.potLifeShortenedByHeat ? ' (shorter than the data sheet’s: this much mixed resin heats itself)' : ''}
       </p>
+      {batch.forecastPeakC !== null ? (
+        <p className={batch.forecastOverLimit ? 'text-lg font-semibold text-ember-700' : 'text-lg'}>
+          {batch.pourLabel} forecast peak: {formatTemperature(batch.forecastPeakC, unitSystem).text} (an estimate{batch.forecastOverLimit ? ', over the accepted peak' : ''})
+        </p>
+      ) : null}
       {batch.targetLevelMm !== null || batch.window ? (
         <p className="run-sheet-beside-qr text-lg" data-testid="pour-timing">
           {batch.targetLevelMm !== null ? (

@@ -5,6 +5,7 @@ import { cautionsFor } from '../utils/caution-words';
 import { formatMoney } from '../../../lib/money';
 import { formatArea, formatHours, formatMinutes } from '../utils/plan-format';
 import { CautionList } from './CautionList';
+import { ForecastBlock } from './ForecastBlock';
 import { LayerChart } from './LayerChart';
 
 export interface PlanResultProps {
@@ -109,6 +110,13 @@ function TimesFacts({ times, unitSystem }: { times: TimesAtTemperature; unitSyst
   );
 }
 
+function forecastRow(plan: PourPlan, index: number, unitSystem: UnitSystem): { term: string; value: ReactNode }[] {
+  const layer = plan.forecast.available ? plan.forecast.layers[index] : undefined;
+  if (!layer) return [];
+  const value = `${formatTemperature(layer.peakC, unitSystem).text}${layer.overLimit ? ', over the accepted peak' : ''}`;
+  return [{ term: 'Forecast peak (estimate)', value }];
+}
+
 /** A pour plan's numbers: the same view for the live planner and for a saved plan's stored result. */
 export function PlanResult({ plan, unitSystem, currency, curve }: PlanResultProps) {
   const money = (amount: number) => formatMoney(amount, currency);
@@ -138,6 +146,10 @@ export function PlanResult({ plan, unitSystem, currency, curve }: PlanResultProp
 
       <Block title="Layers against the cavity">
         <LayerChart layers={plan.layers} unitSystem={unitSystem} {...(curve ? { curve } : {})} />
+      </Block>
+
+      <Block title="Heat forecast (an estimate)">
+        <ForecastBlock forecast={plan.forecast} unitSystem={unitSystem} />
       </Block>
 
       <Block title={`Deep pour: ${plan.deepPour.productName}`}>
@@ -184,6 +196,7 @@ export function PlanResult({ plan, unitSystem, currency, curve }: PlanResultProp
             rows={[
               { term: 'Level', value: `${length(layer.fromLevelMm)} to ${length(layer.toLevelMm)}` },
               { term: 'Thickness', value: length(layer.thicknessMm) },
+              ...forecastRow(plan, layer.index, unitSystem),
               { term: 'Fill', value: volume(layer.fillVolumeMl) },
               { term: 'Over-pour', value: volume(layer.overPourMl) },
               { term: 'To pour', value: volume(layer.pourVolumeMl) },

@@ -61,7 +61,13 @@ export function useLivePlan({ values, pieceId, units, resinSystems, pigments, sc
     // Answers fetched for another level or dam must not be mixed with this one.
     const top = layers.data?.layers.at(-1)?.toMm;
     if (!fill.data || fill.data.levelMm !== levelMm || top !== levelsMm.at(-1) || layers.data?.dam !== moldRequest?.dam) return null;
-    return { curve: curveFromLayerVolumes(layers.data?.layers ?? []), wettedAreaMm2: fill.data.wettedAreaMm2, maxDepthMm: fill.data.maxDepthMm };
+    const depthMap = fill.data.depthMap;
+    return {
+      curve: curveFromLayerVolumes(layers.data?.layers ?? []),
+      wettedAreaMm2: fill.data.wettedAreaMm2,
+      maxDepthMm: fill.data.maxDepthMm,
+      ...(depthMap ? { depthMap: { originMm: depthMap.originMm, cellMm: depthMap.cellMm, nx: depthMap.nx, ny: depthMap.ny, depthsMm: depthMap.depthsMm } } : {}),
+    };
   }, [fill.data, layers.data, levelMm, levelsMm, moldRequest?.dam]);
 
   const result = useMemo(

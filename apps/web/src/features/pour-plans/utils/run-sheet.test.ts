@@ -34,9 +34,11 @@ describe('runSheetBatches', () => {
     const [firstSeal, , firstLayer] = batches;
     expect(firstSeal).toMatchObject({ product: { name: 'Bench Seal 3', mixRatio: { a: 100, b: 45, basis: 'weight' } }, pigmentName: null, shopTempC: 20 });
     expect(firstLayer).toMatchObject({ product: { name: 'Bench Deep 20' }, pigmentName: 'Bench Teal', batchInPour: 1, batchesInPour: 1 });
-    expect(firstLayer?.potLifeMin).toBe(plan.shopTimes.deepPour.potLifeMin);
-    // Common practice (Q10 ≈ 2): two degrees below the 22 °C reference the pot life is a little longer, not shorter.
-    expect(firstLayer!.potLifeMin).toBeGreaterThan(40);
+    // One pot life per cup: the plan's own for that cup, its heat counted, never longer than the data sheet's at the shop temperature.
+    expect(firstLayer?.potLifeMin).toBe(plan.layers[0]!.batches[0]!.cupPotLifeMin);
+    expect(firstLayer!.potLifeMin).toBeLessThanOrEqual(plan.shopTimes.deepPour.potLifeMin);
+    expect(firstLayer!.forecastPeakC).toBe(plan.forecast.available ? plan.forecast.layers[0]!.peakC : null);
+    expect(firstSeal!.forecastPeakC).toBeNull();
   });
 
   // CRC Concise Encyclopedia of Mathematics: a right prism fills evenly, so the tray's 30 mm split into n equal

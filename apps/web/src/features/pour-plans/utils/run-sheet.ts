@@ -18,11 +18,16 @@ export interface RunSheetBatch {
   partBG: number;
   pigmentG: number;
   totalG: number;
-  /** Pot life at the shop temperature the plan was made for. */
+  /** This cup's pot life at the shop temperature the plan was made for, its own heat counted when the plan says. */
   potLifeMin: number;
+  /** True when the cup's own heat makes its pot life shorter than the data sheet's. */
+  potLifeShortenedByHeat: boolean;
   shopTempC: number;
   /** How far the shown grams are from the product's ratio, in percent, when more than the shop allows; else null. */
   offRatioPct: number | null;
+  /** The layer's forecast peak (an estimate), when the plan has a forecast; null for a seal coat. */
+  forecastPeakC: number | null;
+  forecastOverLimit: boolean;
   /** Where the layer's resin stands when it is poured: its top level, measured from the cavity floor (mm); null for a seal coat. */
   targetLevelMm: number | null;
   /**
@@ -40,6 +45,7 @@ interface Pour {
   shopTempC: number;
   pigmentName: string | null;
   targetLevelMm: number | null;
+  forecast: { peakC: number; overLimit: boolean } | null;
   /** The window this pour opens for the next one: a seal coat's recoat window before the first layer, the deep pour's between layers. */
   recoat: { opensH: number; closesH: number };
 }
@@ -61,6 +67,7 @@ export function runSheetBatches(plan: PourPlan, snapshot: PlanSnapshot): RunShee
         shopTempC: sealTimes.tempC,
         pigmentName: null,
         targetLevelMm: null,
+        forecast: null,
         recoat: { opensH: sealTimes.nextLayerOpensH, closesH: sealTimes.nextLayerClosesH },
       });
     }
@@ -75,6 +82,7 @@ export function runSheetBatches(plan: PourPlan, snapshot: PlanSnapshot): RunShee
       shopTempC: deep.tempC,
       pigmentName: plan.deepPour.pigmentName,
       targetLevelMm: layer.toLevelMm,
+      forecast: plan.forecast.available ? (plan.forecast.layers[layer.index] ?? null) : null,
       recoat: { opensH: deep.nextLayerOpensH, closesH: deep.nextLayerClosesH },
     });
   }
@@ -96,10 +104,13 @@ export function runSheetBatches(plan: PourPlan, snapshot: PlanSnapshot): RunShee
         partBG: batch.partB.grams,
         pigmentG: batch.pigment.grams,
         totalG: batch.totalGrams,
-        potLifeMin: pour.potLifeMin,
+        potLifeMin: batch.cupPotLifeMin ?? pour.potLifeMin,
+        potLifeShortenedByHeat: batch.cupPotLifeLimitedBy === 'cup_heating',
         shopTempC: pour.shopTempC,
         offRatioPct: Math.abs(batch.ratioErrorPct) > plan.resolution.offRatioTolerancePct ? batch.ratioErrorPct : null,
         targetLevelMm: pour.targetLevelMm,
+        forecastPeakC: pour.forecast?.peakC ?? null,
+        forecastOverLimit: pour.forecast?.overLimit ?? false,
         window: windowOf(p),
       },
     })),

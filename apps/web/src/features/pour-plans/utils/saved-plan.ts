@@ -1,4 +1,4 @@
-import { PourPlanInput, type PourPlanView } from '@gelpoint/contracts';
+import { PlanForecast, PourPlanInput, type PourPlanView } from '@gelpoint/contracts';
 import { fail, ok, type Caution, type PourPlan, type Result, type TimesAtTemperature } from '@gelpoint/core';
 import { z } from 'zod';
 import type { SavedPlanInput } from './planner-values';
@@ -21,6 +21,8 @@ const PlannedBatch = z.object({
   // Plans saved before cups were rounded on ratio carry neither figure.
   ratioErrorPct: z.number().default(0),
   pigmentMl: z.number().default(0),
+  cupPotLifeMin: z.number().optional(),
+  cupPotLifeLimitedBy: z.enum(['cup_heating', 'data_sheet']).optional(),
 });
 
 const Times: z.ZodType<TimesAtTemperature> = z.object({
@@ -43,6 +45,14 @@ const SavedCaution: z.ZodType<Caution> = z.object({
   message: z.string(),
   appliesTo: z.object({ kind: z.enum(['plan', 'layer', 'batch', 'product', 'pigment']), index: z.number().int().optional() }),
 });
+
+/** What a plan saved before the forecast existed says in its place. */
+export const notForecast = {
+  version: 1,
+  available: false,
+  code: 'saved_before_forecast',
+  reason: 'This plan was saved before Gelpoint forecast the exotherm; save it again to see each layer’s forecast peak.',
+} as const;
 
 export const SavedPourPlan: z.ZodType<PourPlan> = z.object({
   margins: z.object({
@@ -86,6 +96,7 @@ export const SavedPourPlan: z.ZodType<PourPlan> = z.object({
     piece: z.number(),
   }),
   shopTimes: z.object({ deepPour: Times, sealCoat: Times.nullable() }),
+  forecast: PlanForecast.default(notForecast),
   cautions: z.array(SavedCaution),
 });
 

@@ -1,3 +1,4 @@
+import { exothermSettingsOf } from '@gelpoint/core';
 import type { PigmentView, ResinSystemView } from '@gelpoint/contracts';
 
 // Invented shelf entries for the tests, shaped like data sheets; the densities are typical values from memory
@@ -24,6 +25,12 @@ export const benchDeep: ResinSystemView = {
   maxBatchG: 4000,
   activationEnergyKJPerMol: null,
   hardnessShoreD: null,
+  reactionHeatJPerG: null,
+  thinFilmGelMin: null,
+  heatCapacityJPerGK: null,
+  conductivityWPerMK: null,
+  acceptedPeakC: null,
+  exothermSettings: exothermSettingsOf({ mixRatio: { a: 2, b: 1, basis: 'volume' }, densityAGPerMl: 1.16, densityBGPerMl: 0.97, gelTimeH: 8, referenceTempC: 22, maxLayerMm: 20 }).settings,
   effectiveActivationEnergyKJPerMol: 51.6,
   pricePerKit: 180,
   kitSizeG: 6000,

@@ -79,8 +79,8 @@ export function BatchCard({ pourId, cup, of, logged, shop, shopTempC, viewer, op
 
       {open && (!logged || mixing.startedAtMs !== null) ? (
         <PotLifeClock
-          potLifeMin={potLifeMinAt(cup.product, shopTempC)}
-          basis={`at ${formatTemperature(shopTempC, shop.unitSystem).text}, the plan's shop temperature`}
+          potLifeMin={cup.potLifeMin ?? potLifeMinAt(cup.product, shopTempC)}
+          basis={`at ${formatTemperature(shopTempC, shop.unitSystem).text}, the plan's shop temperature${cup.potLifeMin === undefined ? '' : ', this cup’s own heat counted'}`}
           startedAtMs={mixing.startedAtMs}
           cupName={`cup ${cup.order}`}
           onStart={() => {

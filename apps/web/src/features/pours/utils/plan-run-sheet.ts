@@ -10,6 +10,7 @@ const PlannedCup = z.object({
   partB: Grams,
   pigment: Grams,
   totalGrams: z.number(),
+  cupPotLifeMin: z.number().optional(),
 });
 const StoredCaution = z.object({
   code: z.string(),
@@ -64,6 +65,8 @@ export interface RunSheetCup {
   targetPigmentG: number;
   totalG: number;
   product: PlanProduct;
+  /** The plan's pot life for this very cup (its own heat counted); absent on plans saved before it was worked out. */
+  potLifeMin?: number;
   pigment: { id: string; name: string } | null;
   /** The plan's cautions about this very cup (too heavy, heats fast). */
   cautions: PlanCaution[];
@@ -110,6 +113,7 @@ export function runSheetOf(plan: Pick<PourPlanView, 'result' | 'productSnapshot'
         targetPigmentG: batch.pigment.grams,
         totalG: batch.totalGrams,
         product: pour.product,
+        ...(batch.cupPotLifeMin === undefined ? {} : { potLifeMin: batch.cupPotLifeMin }),
         pigment: batch.pigment.grams > 0 ? pour.pigment : null,
         cautions: cautions.filter((c) => c.appliesTo.kind === 'batch' && c.appliesTo.index === batch.index),
       })),

@@ -7,6 +7,7 @@ import { Field } from '../../../components/ui/Field';
 import { Input } from '../../../components/ui/Input';
 import { Select } from '../../../components/ui/Select';
 import { useProductForm } from '../hooks/use-product-form';
+import { exothermDefaults } from '@gelpoint/core';
 import { activationEnergyUsed } from '../utils/activation-energy';
 import { newResinSystemDefaults, resinSystemInputOf } from '../utils/form-defaults';
 import { optionalNumber, requiredNumber } from '../../../lib/form-input';
@@ -48,6 +49,11 @@ const fieldNames: readonly FieldPath<FormInput>[] = [
   'maxBatchG',
   'activationEnergyKJPerMol',
   'hardnessShoreD',
+  'reactionHeatJPerG',
+  'thinFilmGelMin',
+  'heatCapacityJPerGK',
+  'conductivityWPerMK',
+  'acceptedPeakC',
   'pricePerKit',
   'kitSizeG',
   'shelfLifeMonths',
@@ -185,6 +191,47 @@ export function ResinSystemForm({ resinSystem, submitLabel, busyLabel, busy, sav
         </Field>
         <Field label="Maximum working temperature (°C)" error={errors.maxWorkTempC?.message} required>
           {(control) => <Input {...control} inputMode="decimal" {...number('maxWorkTempC')} />}
+        </Field>
+      </FormSection>
+
+      <FormSection
+        legend="Exotherm forecast"
+        hint="What the heat forecast needs. Leave a field empty to use the default named under it; the forecast is calibrated so the maximum layer above, poured at the reference temperature, peaks at the accepted peak."
+      >
+        <Field
+          label="Heat of reaction (J/g)"
+          hint={`From a DSC measurement of the mixed product. Empty: ${exothermDefaults.reactionHeatJPerG} J/g, a published value for bisphenol-A epoxy with an amine hardener.`}
+          error={errors.reactionHeatJPerG?.message}
+        >
+          {(control) => <Input {...control} inputMode="decimal" {...optional('reactionHeatJPerG')} />}
+        </Field>
+        <Field
+          label="Thin-film gel time (min)"
+          hint="How long a thin film takes to gel at the reference temperature. Empty: the gel time above (a cup gels sooner than a film, so that errs hot)."
+          error={errors.thinFilmGelMin?.message}
+        >
+          {(control) => <Input {...control} inputMode="decimal" {...optional('thinFilmGelMin')} />}
+        </Field>
+        <Field
+          label="Heat capacity (J/(g·K))"
+          hint={`Empty: ${exothermDefaults.heatCapacityJPerGK} J/(g·K), typical of published cure models for epoxy.`}
+          error={errors.heatCapacityJPerGK?.message}
+        >
+          {(control) => <Input {...control} inputMode="decimal" {...optional('heatCapacityJPerGK')} />}
+        </Field>
+        <Field
+          label="Thermal conductivity (W/(m·K))"
+          hint={`Empty: ${exothermDefaults.conductivityWPerMK} W/(m·K), typical of unfilled plastics.`}
+          error={errors.conductivityWPerMK?.message}
+        >
+          {(control) => <Input {...control} inputMode="decimal" {...optional('conductivityWPerMK')} />}
+        </Field>
+        <Field
+          label="Accepted peak temperature (°C)"
+          hint={`The hottest the shop lets a layer get. Empty: ${exothermDefaults.acceptedPeakC} °C, a starting value to replace with the shop's own.`}
+          error={errors.acceptedPeakC?.message}
+        >
+          {(control) => <Input {...control} inputMode="decimal" {...optional('acceptedPeakC')} />}
         </Field>
       </FormSection>
 

@@ -4,6 +4,14 @@ import { mixRatioText, resinUseWords } from '../utils/shelf-words';
 import { formatMoney } from '../../../lib/money';
 import { DataSheet } from './DataSheet';
 
+const exothermRows = [
+  { field: 'reactionHeatJPerG', term: 'Heat of reaction', unit: 'J/g' },
+  { field: 'thinFilmGelMin', term: 'Thin-film gel time', unit: 'min' },
+  { field: 'heatCapacityJPerGK', term: 'Heat capacity', unit: 'J/(g·K)' },
+  { field: 'conductivityWPerMK', term: 'Thermal conductivity', unit: 'W/(m·K)' },
+  { field: 'acceptedPeakC', term: 'Accepted peak', unit: '°C' },
+] as const;
+
 export function ResinSystemSheet({ resinSystem: r, unitSystem, currency }: { resinSystem: ResinSystemView; unitSystem: UnitSystem; currency: string }) {
   const temp = (tempC: number) => formatTemperature(tempC, unitSystem).text;
   return (
@@ -49,6 +57,14 @@ export function ResinSystemSheet({ resinSystem: r, unitSystem, currency }: { res
             { term: 'Maximum batch', value: formatMass(r.maxBatchG, unitSystem).text },
             { term: 'Working temperature', value: `${temp(r.minWorkTempC)} to ${temp(r.maxWorkTempC)}` },
           ],
+        },
+        {
+          title: 'Exotherm forecast',
+          rows: exothermRows.map(({ field, term, unit }) => {
+            const used = r.exothermSettings[field];
+            const shown = field === 'acceptedPeakC' ? temp(used.value) : `${used.value.toFixed(field === 'conductivityWPerMK' ? 2 : 1)} ${unit}`;
+            return { term, value: `${shown}${used.isDefault ? ` (default: ${used.source})` : ''}` };
+          }),
         },
         {
           title: 'Price',

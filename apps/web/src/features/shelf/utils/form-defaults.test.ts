@@ -1,3 +1,4 @@
+import { exothermSettingsOf } from '@gelpoint/core';
 import { LotUpdate, PigmentInput, ResinSystemInput, type LotView, type PigmentView, type ResinSystemView } from '@gelpoint/contracts';
 import { describe, expect, it } from 'vitest';
 import { lotEditValuesOf, pigmentInputOf, resinSystemInputOf } from './form-defaults';
@@ -25,6 +26,12 @@ const resinSystem: ResinSystemView = {
   maxBatchG: 4000,
   activationEnergyKJPerMol: null,
   hardnessShoreD: null,
+  reactionHeatJPerG: null,
+  thinFilmGelMin: null,
+  heatCapacityJPerGK: null,
+  conductivityWPerMK: null,
+  acceptedPeakC: null,
+  exothermSettings: exothermSettingsOf({ mixRatio: { a: 2, b: 1, basis: 'volume' }, densityAGPerMl: 1.16, densityBGPerMl: 0.97, gelTimeH: 8, referenceTempC: 22, maxLayerMm: 20 }).settings,
   effectiveActivationEnergyKJPerMol: 51.6,
   pricePerKit: 180,
   kitSizeG: 6000,

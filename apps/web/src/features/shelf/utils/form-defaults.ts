@@ -3,7 +3,7 @@ import type { DefaultValues } from 'react-hook-form';
 
 /** A saved entry as the form edits it: the view without what only the API adds (id, archive state, derived values). */
 export function resinSystemInputOf(view: ResinSystemView): ResinSystemInput {
-  const { id: _id, effectiveActivationEnergyKJPerMol: _used, archived: _archived, updatedAt: _updated, ...input } = view;
+  const { id: _id, effectiveActivationEnergyKJPerMol: _used, exothermSettings: _settings, archived: _archived, updatedAt: _updated, ...input } = view;
   return input;
 }
 
@@ -21,6 +21,11 @@ export const newResinSystemDefaults: DefaultValues<ResinSystemInput> = {
   readyToMachineH: null,
   activationEnergyKJPerMol: null,
   hardnessShoreD: null,
+  reactionHeatJPerG: null,
+  thinFilmGelMin: null,
+  heatCapacityJPerGK: null,
+  conductivityWPerMK: null,
+  acceptedPeakC: null,
 };
 
 export const newPigmentDefaults: DefaultValues<PigmentInput> = { name: '', kind: 'paste' };
