@@ -115,7 +115,9 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
       throw err;
     }
     const outcome = await runThread(thread, { bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes }, (value) => {
-      void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing'`, [mold.id, value]).catch(() => undefined);
+      // Sent without waiting, so two may reach the database out of order on different connections: progress only
+      // ever rises, and a late, lower one changes nothing (and announces nothing).
+      void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing' AND progress < $2`, [mold.id, value]).catch(() => undefined);
     }, stop);
     // Units or up axis corrected while this ran: the mould is queued again and this outcome is of the old reading.
     const sameReading = 'AND units = $2 AND up_axis = $3';

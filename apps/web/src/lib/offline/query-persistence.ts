@@ -23,8 +23,10 @@ export async function startQueryPersistence(queryClient: QueryClient, { askAgain
   // A copy that says nobody was signed in shows nothing offline, and may be out of date after a sign-in elsewhere.
   for (const queryKey of askAgain) {
     if (queryClient.getQueryData(queryKey) === null) queryClient.removeQueries({ queryKey, exact: true });
-    else await queryClient.invalidateQueries({ queryKey, exact: true, refetchType: 'none' });
   }
+  // Everything put back is as of the last visit: shown at once, and asked again by each page that shows it, so a
+  // reload online reads what the server holds now (a member who joined, a cup logged on another phone).
+  await queryClient.invalidateQueries({ refetchType: 'none' });
   persistQueryClientSubscribe({ queryClient, persister, buster, dehydrateOptions: { shouldDehydrateQuery: shouldPersistQuery } });
 }
 

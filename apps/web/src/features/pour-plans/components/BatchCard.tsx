@@ -50,6 +50,8 @@ export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG, link 
     >
       {/* In the corner, beside the heading and the product lines, so the code adds no height to the card. */}
       <QrCode value={link.href} label={`QR code: opens ${link.opens} to log cup ${batch.order}`} sizePx={96} className="run-sheet-qr absolute top-4 right-4" />
+      {/* At least as tall as the code, so the amounts below never run under it. */}
+      <div className="run-sheet-top flex flex-col gap-3">
       <header className="run-sheet-beside-qr flex flex-wrap items-baseline justify-between gap-2">
         <h3 className="text-2xl font-bold">
           Cup {batch.order} of {batch.of}
@@ -63,28 +65,33 @@ export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG, link 
         <strong>
           pot life {formatMinutes(batch.potLifeMin)} at {formatTemperature(batch.shopTempC, unitSystem).text}
         </strong>
-        {batch.potLifeShortenedByHeat ? ' (shorter than the data sheet’s: this much mixed resin heats itself)' : ''}
+        {batch.potLifeShortenedByHeat ? ' (shortened: a cup this size heats itself)' : ''}
       </p>
-      {batch.forecastPeakC !== null ? (
-        <p className={batch.forecastOverLimit ? 'text-lg font-semibold text-ember-700' : 'text-lg'}>
-          {batch.pourLabel} forecast peak: {formatTemperature(batch.forecastPeakC, unitSystem).text} (an estimate{batch.forecastOverLimit ? ', over the accepted peak' : ''})
-        </p>
-      ) : null}
-      {batch.targetLevelMm !== null || batch.window ? (
+      {batch.targetLevelMm !== null || batch.window || batch.forecastPeakC !== null ? (
         <p className="run-sheet-beside-qr text-lg" data-testid="pour-timing">
-          {batch.targetLevelMm !== null ? (
-            <>
-              Fill to <strong>{formatLength(batch.targetLevelMm, unitSystem).text}</strong> above the cavity floor
-            </>
-          ) : null}
-          {batch.targetLevelMm !== null && batch.window ? ' · ' : null}
-          {batch.window ? (
-            <>
-              pour <strong>{formatHours(batch.window.opensH)}</strong> to <strong>{formatHours(batch.window.closesH)}</strong> after {batch.window.afterLabel.toLowerCase()}
-            </>
-          ) : null}
+          {[
+            batch.targetLevelMm !== null ? (
+              <span key="level">
+                Fill to <strong>{formatLength(batch.targetLevelMm, unitSystem).text}</strong> above the cavity floor
+              </span>
+            ) : null,
+            batch.window ? (
+              <span key="window">
+                pour <strong>{formatHours(batch.window.opensH)}</strong> to <strong>{formatHours(batch.window.closesH)}</strong> after {batch.window.afterLabel.toLowerCase()}
+              </span>
+            ) : null,
+            batch.forecastPeakC !== null ? (
+              <span key="peak" className={batch.forecastOverLimit ? 'font-semibold text-ember-700' : undefined}>
+                estimated peak {formatTemperature(batch.forecastPeakC, unitSystem).text}
+                {batch.forecastOverLimit ? ', over the accepted peak' : ''}
+              </span>
+            ) : null,
+          ]
+            .filter((part) => part !== null)
+            .flatMap((part, i) => (i === 0 ? [part] : [' · ', part]))}
         </p>
       ) : null}
+      </div>
       <div className={batch.pigmentG > 0 ? 'grid grid-cols-2 gap-2 sm:grid-cols-4' : 'grid grid-cols-3 gap-2'}>
         <Amount part="Part A" grams={grams(batch.partAG)} />
         <Amount part="Part B" grams={grams(batch.partBG)} />
