@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import type { RequestHandler } from 'express';
 import type { DataSource, EntityManager } from 'typeorm';
 import { planCavityFromMold } from '@gelpoint/core';
-import { MOLD_ANALYSIS_CHANNEL, Mold, MoldFile, Piece, type MoldFormat, type UpAxis } from '@gelpoint/db';
+import { MOLD_ANALYSIS_CHANNEL, Mold, Piece, type MoldFormat, type UpAxis } from '@gelpoint/db';
 import type { CavityReport, Dam, LevelFrom, MoldDepthMap, MoldFill, MoldView, UpdateMoldRequest } from '@gelpoint/contracts';
 import { fillAt, layerVolumes, planCavityFacts, type CavityModel, type DepthMapRecord } from '@gelpoint/mesh';
 import type { AuthContext } from '../../http/auth-context';
