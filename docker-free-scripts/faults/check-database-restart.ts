@@ -40,7 +40,7 @@ export async function databaseRestart(stack: FaultStack, pool: pg.Pool): Promise
   await waitUntil('the worker listening for new work', 15_000, async () => (await listening(pool)) || undefined);
 
   postgres('stop');
-  let slowest = 0;
+  let slowest: number;
   try {
     const health = await call(stack.baseUrl, 'GET', '/api/health', { timeoutMs: 10_000 });
     mustBeUnavailable('/api/health', health);

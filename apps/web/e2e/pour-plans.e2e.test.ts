@@ -1,4 +1,4 @@
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { watchedPage } from './support/browser';
 import { useBrowserStack } from './support/use-browser-stack';

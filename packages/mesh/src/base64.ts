@@ -25,7 +25,7 @@ export function bytesToBase64(bytes: Uint8Array): string {
     chars[w++] = alphabetCodes[b0 >> 2]!;
     chars[w++] = alphabetCodes[((b0 & 3) << 4) | (b1 >> 4)]!;
     chars[w++] = whole + 1 < bytes.length ? alphabetCodes[(b1 & 15) << 2]! : 61;
-    chars[w++] = 61;
+    chars[w] = 61;
   }
   const parts: string[] = [];
   const chunk = 1 << 15;

@@ -14,6 +14,7 @@ export { readAnalysis } from './analysis-codec';
 export { cavityAnalysisVersion } from './cavity-analysis';
 export { fillAt, curve, layerVolumes, type CavitySource } from './fill-queries';
 export { cavityFloorMm } from './cavity-floor';
+export { planCavityFacts, PLAN_CURVE_POINTS, type PlanCavityFacts } from './plan-cavity-facts';
 export { fillRecord, type DepthMapRecord, type FillRecord } from './fill-record';
 export { cavityReport, type CavityReportRecord } from './cavity-report';
 export type { Dam } from './dam';

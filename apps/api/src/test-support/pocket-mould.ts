@@ -55,7 +55,12 @@ export function binaryStl(triangles: V[][], scale = 1): Buffer {
   buf.writeUInt32LE(triangles.length, 80);
   triangles.forEach((tri, k) => {
     let o = 84 + 50 * k + 12;
-    for (const v of tri) for (const c of v) (buf.writeFloatLE(c * scale, o), (o += 4));
+    for (const v of tri) {
+      for (const c of v) {
+        buf.writeFloatLE(c * scale, o);
+        o += 4;
+      }
+    }
   });
   return buf;
 }

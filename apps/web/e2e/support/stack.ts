@@ -83,7 +83,7 @@ export class E2eStack {
       // The API compiles its TypeScript on start: on a busy 2-core machine that alone can take half a minute.
       await Promise.all([waitFor(`${this.baseUrl}/api/health`, 60_000), waitFor(`http://127.0.0.1:${this.mailHttpPort}/api/messages`, 60_000)]);
     } catch (err) {
-      throw new Error(`${(err as Error).message}\n${this.output}`);
+      throw new Error(`${(err as Error).message}\n${this.output}`, { cause: err });
     }
   }
 

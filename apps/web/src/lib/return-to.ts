@@ -7,6 +7,8 @@ const probeOrigin = 'https://gelpoint.invalid';
  */
 export function safeReturnTo(candidate: string | null | undefined, fallback: string): string {
   if (!candidate || !candidate.startsWith('/') || candidate.startsWith('//') || candidate.startsWith('/\\')) return fallback;
+  // Control characters (C0 and DEL) in a path can split a header or hide a scheme from a later reader.
+  // eslint-disable-next-line no-control-regex
   if (/[\u0000-\u001f\u007f]/.test(candidate)) return fallback;
   let url: URL;
   try {

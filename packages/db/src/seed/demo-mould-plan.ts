@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import { buildPourPlan, planCavityFromMold } from '@gelpoint/core';
-import { analyzeMouldFile, cavityReport, curve, fillAt, readAnalysis, type CavityModel, type Dam } from '@gelpoint/mesh';
+import { analyzeMouldFile, cavityReport, planCavityFacts, readAnalysis, type CavityModel, type Dam } from '@gelpoint/mesh';
 import { Mold, MoldFile, Pigment, Piece, PourPlan, ResinSystem, User } from '../entities';
 import { toCorePigment, toCoreResinSystem } from '../shelf-values';
 import { demoMouldStl } from './demo-mould';
@@ -17,23 +17,14 @@ export const demoMould = {
   shopTempC: 21,
 };
 
-/** Levels sampled for a plan's curve between the cavity floor and the fill level, as the API samples them. */
-const PLAN_CURVE_POINTS = 241;
-
 function valueOf<T>(r: { ok: true; value: T } | { ok: false; error: { code: string; message: string } }): T {
   if (!r.ok) throw new Error(`demo mould: ${r.error.code}: ${r.error.message}`);
   return r.value;
 }
 
-/**
- * The plan's cavity from its stored analysis, sampled the way the API's mould plans are: evenly from the cavity floor,
- * where the curve bends, up to the level.
- */
+/** The plan's cavity from its stored analysis, made as the API makes a mould plan's. */
 function planCavity(model: CavityModel, dam: Dam, floorMm: number, frameLevelMm: number) {
-  const f = valueOf(fillAt(model, frameLevelMm, dam));
-  const levels = Array.from({ length: PLAN_CURVE_POINTS }, (_, i) => floorMm + ((frameLevelMm - floorMm) * i) / (PLAN_CURVE_POINTS - 1));
-  const points = valueOf(curve(model, levels, dam)).filter((p, i, all) => i === 0 || p.levelMm > all[i - 1]!.levelMm);
-  return valueOf(planCavityFromMold({ curve: points, wettedAreaMm2: f.wettedAreaMm2, maxDepthMm: f.maxDepthMm }, frameLevelMm));
+  return valueOf(planCavityFromMold(valueOf(planCavityFacts(model, dam, floorMm, frameLevelMm)), frameLevelMm));
 }
 
 /**

@@ -1,5 +1,5 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import { Membership, Piece, Shop, User, type PieceStage, type Role } from '../entities';
+import { Membership, Piece, Shop, User, type PieceStage } from '../entities';
 import { hashPassword } from '../passwords';
 import { DEMO_PASSWORD, demoPeople as people } from './demo-people';
 import { seedDemoMould } from './demo-mould-plan';

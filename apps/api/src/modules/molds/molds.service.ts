@@ -2,9 +2,9 @@ import { createHash } from 'node:crypto';
 import type { RequestHandler } from 'express';
 import type { DataSource, EntityManager } from 'typeorm';
 import { planCavityFromMold } from '@gelpoint/core';
-import { MOLD_ANALYSIS_CHANNEL, Mold, MoldFile, Piece, type MoldFormat, type UpAxis } from '@gelpoint/db';
+import { MOLD_ANALYSIS_CHANNEL, Mold, Piece, type MoldFormat, type UpAxis } from '@gelpoint/db';
 import type { CavityReport, Dam, LevelFrom, MoldDepthMap, MoldFill, MoldView, UpdateMoldRequest } from '@gelpoint/contracts';
-import { curve, fillAt, layerVolumes, type CavityModel, type DepthMapRecord } from '@gelpoint/mesh';
+import { fillAt, layerVolumes, planCavityFacts, type CavityModel, type DepthMapRecord } from '@gelpoint/mesh';
 import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
@@ -32,9 +32,6 @@ const mouldFileName = /\.(stl|3mf|obj)$/i;
 const extensionOf: Record<MoldFormat, string> = { stl: 'stl', '3mf': '3mf', obj: 'obj' };
 /** Reader refusals that are about size: the file unpacks to more than the service reads. */
 const tooLargeCodes = new Set(['threemf_too_large']);
-
-/** Levels sampled for a plan's curve between the cavity floor and the fill level. */
-const PLAN_CURVE_POINTS = 241;
 
 export class Molds {
   private readonly cache = new AnalysisCache();
@@ -280,31 +277,14 @@ export class Molds {
         throw new AppError('unprocessable', 'fill_above_report', `The fill level ${levelAboveFloorMm} mm is above the top of the mould, ${aboveFloor(rim, floor)} mm above its cavity floor; choose a level inside the mould, or dam it higher and report again.`);
       }
       const top = Math.min(rim, floor + levelAboveFloorMm);
-      const f = fillAt(model, top, dam);
-      if (!f.ok) throw new AppError('unprocessable', f.error.code, f.error.message);
-      // Sampled from the floor, where the curve bends, so the first layer starts where the resin does.
-      const levels = Array.from({ length: PLAN_CURVE_POINTS }, (_, i) => floor + ((top - floor) * i) / (PLAN_CURVE_POINTS - 1));
-      const c = curve(model, levels, dam);
-      if (!c.ok) throw new AppError('unprocessable', c.error.code, c.error.message);
-      const { depthMap } = f.value;
-      const planned = planCavityFromMold(
-        {
-          curve: dedupeLevels(c.value),
-          wettedAreaMm2: f.value.wettedAreaMm2,
-          maxDepthMm: f.value.maxDepthMm,
-          depthMap: { originMm: depthMap.originMm, cellMm: depthMap.cellMm, nx: depthMap.nx, ny: depthMap.ny, depthsMm: depthMap.depthsMm },
-        },
-        top,
-      );
+      const facts = planCavityFacts(model, dam, floor, top);
+      if (!facts.ok) throw new AppError('unprocessable', facts.error.code, facts.error.message);
+      const planned = planCavityFromMold(facts.value, top);
       if (!planned.ok) throw new AppError('unprocessable', planned.error.code, planned.error.message);
       return planned.value;
     },
     floorMm: async (m: EntityManager, shopId, moldId, dam) => floorOf(await this.cache.model(m, shopId, moldId), dam),
   };
-}
-
-function dedupeLevels(points: { levelMm: number; volumeMm3: number }[]) {
-  return points.filter((p, i) => i === 0 || p.levelMm > points[i - 1]!.levelMm);
 }
 
 const summaryColumns = ['id', 'shopId', 'pieceId', 'name', 'fileName', 'format', 'units', 'fileUnits', 'upAxis', 'sizeBytes', 'sha256', 'status', 'progress', 'errorCode', 'errorMessage', 'createdAt', 'analysedAt'] as const;

@@ -33,7 +33,7 @@ export function createConnectionWatch({ reachServer, probeEveryMs, online = onli
 
   const probe = async () => {
     timer = undefined;
-    let reached = false;
+    let reached: boolean;
     try {
       reached = await reachServer();
     } catch {

@@ -99,6 +99,7 @@ export function PourPlanner({
   const key = valuesKey(values);
   // Every change goes to the draft (written a moment after typing stops); the original values again forget it. The
   // key stands for the values, which are a new object on every render.
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- `key` is the values' identity; `draft` is stable
   useEffect(() => draft.keep(values), [key]);
 
   const source = values.cavity?.source ?? 'shape';
