@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useQueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
@@ -9,7 +10,6 @@ import { authKeys } from '../../../features/auth/api/keys';
 import { shopQueryOptions, useShop } from '../../../features/shop/api/get-shop';
 import { ShopSettingsForm } from '../../../features/shop/components/ShopSettingsForm';
 import { ThermometerToken } from '../../../features/shop/components/ThermometerToken';
-import { can } from '../../../lib/authorization';
 import { useSignedInSession } from '../../signed-in-session';
 import { requireSession } from '../../session-loaders';
 import { LeadOnlyNotice } from './lead-only';

@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useQueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
@@ -12,7 +13,6 @@ import { membersQueryOptions, useMembers } from '../../../features/team/api/get-
 import { InvitationsTable } from '../../../features/team/components/InvitationsTable';
 import { InviteForm } from '../../../features/team/components/InviteForm';
 import { MembersTable } from '../../../features/team/components/MembersTable';
-import { can } from '../../../lib/authorization';
 import { useSignedInSession } from '../../signed-in-session';
 import { requireSession } from '../../session-loaders';
 import { LeadOnlyNotice } from './lead-only';

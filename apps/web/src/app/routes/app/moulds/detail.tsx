@@ -1,4 +1,4 @@
-import { Id } from '@gelpoint/contracts';
+import { can, Id } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { data, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Card } from '../../../../components/ui/Card';
@@ -14,7 +14,6 @@ import { DeleteMoldButton } from '../../../../features/molds/components/DeleteMo
 import { MoldReport } from '../../../../features/molds/components/MoldReport';
 import { MoldSettingsForm } from '../../../../features/molds/components/MoldSettingsForm';
 import { MoldStatusBadge } from '../../../../features/molds/components/MoldStatusBadge';
-import { mayChangeMolds } from '../../../../features/molds/utils/mold-permissions';
 import { piecesQueryOptions, usePieces } from '../../../../features/pieces/api/get-pieces';
 import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
@@ -46,7 +45,7 @@ export function Component() {
   const shop = useShop();
   const pieces = usePieces(pieceNamesQuery);
   const unitSystem = shop.data?.unitSystem ?? 'metric';
-  const mayChange = mayChangeMolds(session.role);
+  const mayChange = can(session.role, 'mold:change');
 
   return (
     <QueryResult query={mold} loadingLabel="Loading the mould…">

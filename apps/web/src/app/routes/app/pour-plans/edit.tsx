@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -11,7 +12,6 @@ import { pieceMoldsQueryOptions } from '../../../../features/pour-plans/api/get-
 import { pourPlanQueryOptions, usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
 import { useUpdatePourPlan } from '../../../../features/pour-plans/api/update-pour-plan';
 import { PourPlanner } from '../../../../features/pour-plans/components/PourPlanner';
-import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
 import { plannerValuesOf } from '../../../../features/pour-plans/utils/planner-values';
 import { mouldFrameInputsMessage, readSavedPlan, unreadableInputsMessage } from '../../../../features/pour-plans/utils/saved-plan';
 import { pigmentsQueryOptions, usePigments } from '../../../../features/shelf/api/get-pigments';
@@ -52,7 +52,7 @@ export function Component() {
 
   const failed = plan.error ?? shop.error ?? resinSystems.error ?? pigments.error;
   const body = () => {
-    if (!mayPlanPours(session.role)) {
+    if (!can(session.role, 'plan:change')) {
       return (
         <Alert tone="warning" title="Your role can't change pour plans" live="none">
           You are signed in as {roleLabel(session.role).toLowerCase()}. Makers and the shop lead change plans.

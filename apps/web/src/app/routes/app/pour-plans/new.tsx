@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -11,7 +12,6 @@ import { pieceQueryOptions, usePiece } from '../../../../features/pieces/api/get
 import { useCreatePourPlan } from '../../../../features/pour-plans/api/create-pour-plan';
 import { pieceMoldsQueryOptions } from '../../../../features/pour-plans/api/get-piece-molds';
 import { PourPlanner } from '../../../../features/pour-plans/components/PourPlanner';
-import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
 import { newPlannerValues } from '../../../../features/pour-plans/utils/planner-values';
 import { pigmentsQueryOptions, usePigments } from '../../../../features/shelf/api/get-pigments';
 import { resinSystemsQueryOptions, useResinSystems } from '../../../../features/shelf/api/get-resin-systems';
@@ -49,7 +49,7 @@ export function Component() {
 
   const failed = piece.error ?? shop.error ?? resinSystems.error ?? pigments.error;
   const body = () => {
-    if (!mayPlanPours(session.role)) {
+    if (!can(session.role, 'plan:change')) {
       return (
         <Alert tone="warning" title="Your role can't plan pours" live="none">
           You are signed in as {roleLabel(session.role).toLowerCase()}. Makers and the shop lead plan pours; the run sheet of every plan is open to you.

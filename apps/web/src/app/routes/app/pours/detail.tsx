@@ -1,4 +1,4 @@
-import { Id } from '@gelpoint/contracts';
+import { can, Id } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { data, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -19,7 +19,6 @@ import { ReleaseButton } from '../../../../features/pours/components/ReleaseButt
 import { RunSheet } from '../../../../features/pours/components/RunSheet';
 import { pourStatusWords } from '../../../../features/pours/utils/cure-words';
 import { runSheetOf } from '../../../../features/pours/utils/plan-run-sheet';
-import { mayMarkMachined, mayRelease } from '../../../../features/pours/utils/pour-permissions';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 
@@ -60,7 +59,7 @@ export function Component() {
               </>
             }
             actions={
-              current.status === 'open' && current.cure.release.allowed && mayRelease(session.role) ? <ReleaseButton pourId={current.id} pieceName={current.piece.name} /> : null
+              current.status === 'open' && current.cure.release.allowed && can(session.role, 'pour:release') ? <ReleaseButton pourId={current.id} pieceName={current.piece.name} /> : null
             }
           />
           <nav aria-label="On this page" className="mb-6 flex flex-wrap gap-x-6">
@@ -83,7 +82,7 @@ export function Component() {
               .
             </Alert>
           ) : null}
-          {current.status === 'released' && mayMarkMachined(session.role) ? (
+          {current.status === 'released' && can(session.role, 'pour:machined') ? (
             <Card title="Machining done?" className="mb-6">
               <MachinedForm pourId={current.id} />
             </Card>

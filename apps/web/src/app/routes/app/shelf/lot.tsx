@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { Card } from '../../../../components/ui/Card';
@@ -15,7 +16,6 @@ import { LotSheet } from '../../../../features/shelf/components/LotSheet';
 import { LotUses } from '../../../../features/shelf/components/LotUses';
 import { LotStateMark } from '../../../../features/shelf/components/LotStateMark';
 import { lotStateOf } from '../../../../features/shelf/utils/lot-status';
-import { mayKeepShelf } from '../../../../features/shelf/utils/shelf-access';
 import { lotPartWords } from '../../../../features/shelf/utils/shelf-words';
 import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
@@ -47,7 +47,7 @@ export function Component() {
   const usesPage = usesPageOf(search);
   const shop = useShop();
   const update = useUpdateLot();
-  const mayKeep = mayKeepShelf(session.role);
+  const mayKeep = can(session.role, 'shelf:keep');
   const backToLots = paths.shelf.getHref({ tab: 'lots' });
 
   return (
