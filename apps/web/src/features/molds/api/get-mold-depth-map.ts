@@ -1,7 +1,7 @@
 import { MoldDepthMap } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { moldKeys } from './keys';
+import { moldKeys } from '../../../lib/resources/molds';
 
 /**
  * The depth map of the report's fill to the top. The API tags it with an ETag and asks browsers to check before

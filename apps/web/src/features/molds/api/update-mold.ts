@@ -1,7 +1,7 @@
 import { MoldView, type UpdateMoldRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { moldKeys } from './keys';
+import { moldKeys } from '../../../lib/resources/molds';
 
 export interface UpdateMoldInput {
   moldId: string;

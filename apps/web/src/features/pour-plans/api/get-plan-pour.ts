@@ -1,7 +1,7 @@
 import { PourList } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { pourPlanKeys } from './keys';
+import { pourPlanKeys } from '../../../lib/resources/pour-plans';
 
 /** The newest pour started from a plan, if any: its printed run sheet's codes then open that pour. */
 export async function getLatestPourOfPlan(planId: string, signal?: AbortSignal): Promise<string | null> {

@@ -3,7 +3,7 @@ import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query'
 import type { z } from 'zod';
 import { api } from '../../../lib/api-client';
 import type { PlanListQuery } from '../utils/plan-list-filters';
-import { pourPlanKeys } from './keys';
+import { pourPlanKeys } from '../../../lib/resources/pour-plans';
 
 export type PourPlanPage = z.infer<typeof PourPlanList>;
 

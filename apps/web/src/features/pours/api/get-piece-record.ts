@@ -1,7 +1,7 @@
 import { PourList, type PourPlanView, type PourView } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { getPlan } from './get-plan';
+import { getPourPlan } from '../../../lib/resources/pour-plans';
 import { getPour } from './get-pour';
 import { pourKeys } from './keys';
 
@@ -18,7 +18,7 @@ export async function getPieceRecord(pieceId: string, signal?: AbortSignal): Pro
   return Promise.all(
     oldestFirst.map(async (summary) => {
       const pour = await getPour(summary.id, signal);
-      return { pour, plan: await getPlan(pour.pourPlanId, signal) };
+      return { pour, plan: await getPourPlan(pour.pourPlanId, signal) };
     }),
   );
 }

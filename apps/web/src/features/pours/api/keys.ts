@@ -15,7 +15,6 @@ export const pourKeys = {
   detail: (pourId: string) => [...pourKeys.details(), pourId] as const,
   today: () => [...pourKeys.all, 'today'] as const,
   planChoices: () => [...pourKeys.all, 'plan-choices'] as const,
-  plan: (planId: string) => [...pourKeys.all, 'plan', planId] as const,
   lotChoices: (query: LotChoicesQuery) => [...pourKeys.all, 'lot-choices', query] as const,
   shop: () => [...pourKeys.all, 'shop'] as const,
   members: () => [...pourKeys.all, 'members'] as const,

@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { pieceQueryOptions } from '../../../../features/pieces/api/get-piece';
-import { pourPlanQueryOptions } from '../../../../features/pour-plans/api/get-pour-plan';
+import { pourPlanQueryOptions } from '../../../../lib/resources/pour-plans';
 import { shopQueryOptions } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { readId } from './read-id';

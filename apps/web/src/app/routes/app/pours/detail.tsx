@@ -1,5 +1,5 @@
 import { can, Id } from '@gelpoint/contracts';
-import type { QueryClient } from '@tanstack/react-query';
+import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { data, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
 import { Card } from '../../../../components/ui/Card';
@@ -9,7 +9,6 @@ import { PageHeader } from '../../../../components/ui/PageHeader';
 import { QueryResult } from '../../../../components/ui/QueryResult';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
-import { planQueryOptions, usePlan } from '../../../../features/pours/api/get-plan';
 import { pourQueryOptions, usePour } from '../../../../features/pours/api/get-pour';
 import { shopUnitsQueryOptions, useShopUnits } from '../../../../features/pours/api/get-shop-units';
 import { CureLog } from '../../../../features/pours/components/CureLog';
@@ -19,6 +18,7 @@ import { ReleaseButton } from '../../../../features/pours/components/ReleaseButt
 import { RunSheet } from '../../../../features/pours/components/RunSheet';
 import { pourStatusWords } from '../../../../features/pours/utils/cure-words';
 import { runSheetOf } from '../../../../features/pours/utils/plan-run-sheet';
+import { pourPlanQueryOptions } from '../../../../lib/resources/pour-plans';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 
@@ -34,7 +34,7 @@ export const createLoader =
   async ({ params, request }: LoaderFunctionArgs) => {
     await requireSession(queryClient, request);
     const [pour] = await Promise.all([queryClient.ensureQueryData(pourQueryOptions(readPourId(params))), queryClient.ensureQueryData(shopUnitsQueryOptions())]);
-    await queryClient.ensureQueryData(planQueryOptions(pour.pourPlanId));
+    await queryClient.ensureQueryData(pourPlanQueryOptions(pour.pourPlanId));
     return null;
   };
 
@@ -42,7 +42,8 @@ export function Component() {
   const pourId = readPourId(useParams());
   const session = useSignedInSession();
   const pour = usePour(pourId);
-  const plan = usePlan(pour.data?.pourPlanId);
+  const planId = pour.data?.pourPlanId;
+  const plan = useQuery({ ...pourPlanQueryOptions(planId ?? ''), enabled: planId !== undefined });
   const shop = useShopUnits();
 
   return (
