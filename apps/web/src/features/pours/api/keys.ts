@@ -16,6 +16,4 @@ export const pourKeys = {
   today: () => [...pourKeys.all, 'today'] as const,
   planChoices: () => [...pourKeys.all, 'plan-choices'] as const,
   lotChoices: (query: LotChoicesQuery) => [...pourKeys.all, 'lot-choices', query] as const,
-  shop: () => [...pourKeys.all, 'shop'] as const,
-  members: () => [...pourKeys.all, 'members'] as const,
 };

@@ -1,7 +1,7 @@
 import { Member, type UpdateMemberRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { teamKeys } from './keys';
+import { shopResourceKeys } from '../../../lib/resources/shop';
 
 export interface UpdateMemberInput {
   memberId: string;
@@ -17,7 +17,7 @@ export function useUpdateMember({ onSuccess }: { onSuccess?: (member: Member) =>
   return useMutation({
     mutationFn: updateMember,
     onSuccess: async (member) => {
-      await queryClient.invalidateQueries({ queryKey: teamKeys.members() });
+      await queryClient.invalidateQueries({ queryKey: shopResourceKeys.members() });
       await onSuccess?.(member);
     },
   });

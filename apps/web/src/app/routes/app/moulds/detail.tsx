@@ -16,9 +16,10 @@ import { MoldReport } from '../../../../features/molds/components/MoldReport';
 import { MoldSettingsForm } from '../../../../features/molds/components/MoldSettingsForm';
 import { MoldStatusBadge } from '../../../../features/molds/components/MoldStatusBadge';
 import { piecesQueryOptions, usePieces } from '../../../../features/pieces/api/get-pieces';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 const pieceNamesQuery = { limit: 200, offset: 0 };
 

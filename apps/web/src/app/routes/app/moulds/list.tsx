@@ -14,9 +14,10 @@ import { moldsQueryOptions, useMolds } from '../../../../features/molds/api/get-
 import { MoldsTable } from '../../../../features/molds/components/MoldsTable';
 import { QuickShapeForm } from '../../../../features/molds/components/QuickShapeForm';
 import { piecesQueryOptions, usePieces } from '../../../../features/pieces/api/get-pieces';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 const moldListQuery = { limit: 100, offset: 0 };
 // Piece names for the table; the API lists at most 200 at a time.

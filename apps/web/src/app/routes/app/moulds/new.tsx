@@ -9,10 +9,11 @@ import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { UploadMoldForm } from '../../../../features/molds/components/UploadMoldForm';
 import { piecesQueryOptions, usePieces } from '../../../../features/pieces/api/get-pieces';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { roleLabel } from '../../../../lib/roles';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 const piecesToChooseFrom = { limit: 200, offset: 0 };
 

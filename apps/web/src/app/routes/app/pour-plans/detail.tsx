@@ -18,10 +18,10 @@ import { DeletePourPlanButton } from '../../../../features/pour-plans/components
 import { PlanResult } from '../../../../features/pour-plans/components/PlanResult';
 import { SnapshotDetails } from '../../../../features/pour-plans/components/SnapshotDetails';
 import { readSavedPlan } from '../../../../features/pour-plans/utils/saved-plan';
-import { useShop } from '../../../../features/shop/api/get-shop';
 import { useSignedInSession } from '../../../signed-in-session';
 import { createPlanPageLoader } from './plan-page-loader';
 import { readId } from './read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
 
 export const createLoader = createPlanPageLoader;
 

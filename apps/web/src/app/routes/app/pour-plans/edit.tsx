@@ -18,11 +18,12 @@ import { mouldFrameInputsMessage, readSavedPlan, unreadableInputsMessage } from 
 import { pigmentsQueryOptions, usePigments } from '../../../../features/shelf/api/get-pigments';
 import { resinSystemsQueryOptions, useResinSystems } from '../../../../features/shelf/api/get-resin-systems';
 import { wholeShelfQuery } from '../../../../features/shelf/utils/shelf-queries';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { roleLabel } from '../../../../lib/roles';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 import { readId } from './read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>

@@ -16,9 +16,10 @@ import { PlanAPour } from '../../../../features/pour-plans/components/PlanAPour'
 import { PlanPieceFilter } from '../../../../features/pour-plans/components/PlanPieceFilter';
 import { PourPlansTable } from '../../../../features/pour-plans/components/PourPlansTable';
 import { planListQuery, plansPerPage, readPlanListFilters } from '../../../../features/pour-plans/utils/plan-list-filters';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 // The piece picker and the piece names come from one page of the shop's pieces, the most the API gives at once.
 const allPieces = { limit: 200, offset: 0 };

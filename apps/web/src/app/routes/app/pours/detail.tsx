@@ -10,7 +10,6 @@ import { QueryResult } from '../../../../components/ui/QueryResult';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { pourQueryOptions, usePour } from '../../../../features/pours/api/get-pour';
-import { shopUnitsQueryOptions, useShopUnits } from '../../../../features/pours/api/get-shop-units';
 import { CureLog } from '../../../../features/pours/components/CureLog';
 import { MachinedForm } from '../../../../features/pours/components/MachinedForm';
 import { PourDownloads } from '../../../../features/pours/components/PourDownloads';
@@ -21,6 +20,8 @@ import { runSheetOf } from '../../../../features/pours/utils/plan-run-sheet';
 import { pourPlanQueryOptions } from '../../../../lib/resources/pour-plans';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 function readPourId(params: Record<string, string | undefined>): string {
   const parsed = Id.safeParse(params.pourId);
@@ -33,7 +34,7 @@ export const createLoader =
   (queryClient: QueryClient) =>
   async ({ params, request }: LoaderFunctionArgs) => {
     await requireSession(queryClient, request);
-    const [pour] = await Promise.all([queryClient.ensureQueryData(pourQueryOptions(readPourId(params))), queryClient.ensureQueryData(shopUnitsQueryOptions())]);
+    const [pour] = await Promise.all([queryClient.ensureQueryData(pourQueryOptions(readPourId(params))), queryClient.ensureQueryData(shopQueryOptions())]);
     await queryClient.ensureQueryData(pourPlanQueryOptions(pour.pourPlanId));
     return null;
   };
@@ -44,7 +45,7 @@ export function Component() {
   const pour = usePour(pourId);
   const planId = pour.data?.pourPlanId;
   const plan = useQuery({ ...pourPlanQueryOptions(planId ?? ''), enabled: planId !== undefined });
-  const shop = useShopUnits();
+  const shop = useShop();
 
   return (
     <QueryResult query={pour} loadingLabel="Loading the pour…">

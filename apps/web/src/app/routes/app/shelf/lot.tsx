@@ -17,10 +17,11 @@ import { LotUses } from '../../../../features/shelf/components/LotUses';
 import { LotStateMark } from '../../../../features/shelf/components/LotStateMark';
 import { lotStateOf } from '../../../../features/shelf/utils/lot-status';
 import { lotPartWords } from '../../../../features/shelf/utils/shelf-words';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 import { readId } from './read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 /** The page of batches shown: a whole number from 1, whatever the address says. */
 function usesPageOf(search: URLSearchParams): number {

@@ -16,9 +16,10 @@ import { LotsSection, PigmentsSection, ResinSystemsSection } from '../../../../f
 import { ShelfTabs } from '../../../../features/shelf/components/ShelfTabs';
 import { useShelfFilters } from '../../../../features/shelf/hooks/use-shelf-filters';
 import { lotListQuery, pigmentListQuery, readShelfFilters, resinSystemListQuery, type ShelfTab } from '../../../../features/shelf/utils/shelf-queries';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>

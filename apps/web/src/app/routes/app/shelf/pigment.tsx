@@ -10,10 +10,11 @@ import { PigmentForm } from '../../../../features/shelf/components/PigmentForm';
 import { PigmentSheet } from '../../../../features/shelf/components/PigmentSheet';
 import { ProductPage } from '../../../../features/shelf/components/ProductPage';
 import { pigmentKindWords } from '../../../../features/shelf/utils/shelf-words';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 import { readId } from './read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>
