@@ -50,7 +50,8 @@ async function send(client: ApiClient, route: RouteDef, path: string, body: unkn
       return client.get(path, schema, options);
     case 'post':
       if (!schema) return client.postWithoutContent(path, body, options);
-      return client.post(path, body, schema, options);
+      // An action without fields (release, a new token) still sends an empty JSON object, as a form would.
+      return client.post(path, body ?? {}, schema, options);
     case 'put':
       if (!schema) throw new Error(`${route.path} answers no JSON`);
       return client.put(path, body, schema, options);

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { forgetMold } from '../../../lib/resources/molds';
 
 export function deleteMold(moldId: string): Promise<void> {
-  return api.delete(`/molds/${encodeURIComponent(moldId)}`);
+  return callRoute('deleteMold', { params: { id: moldId } });
 }
 
 export function useDeleteMold({ onSuccess }: { onSuccess?: () => unknown } = {}) {

@@ -1,6 +1,6 @@
 import { MoldDepthMap } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { moldKeys } from '../../../lib/resources/molds';
 
 /**
@@ -8,7 +8,7 @@ import { moldKeys } from '../../../lib/resources/molds';
  * reuse, so a page opened again gets a 304 rather than the map.
  */
 export function getMoldDepthMap(moldId: string, signal?: AbortSignal): Promise<MoldDepthMap> {
-  return api.get(`/molds/${encodeURIComponent(moldId)}/depth-map`, MoldDepthMap, signal ? { signal } : {});
+  return callRoute('moldDepthMap', { params: { id: moldId } }, signal ? { signal } : {});
 }
 
 export const moldDepthMapQueryOptions = (moldId: string, analysedAt: string | null) =>

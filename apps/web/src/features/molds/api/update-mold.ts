@@ -1,6 +1,6 @@
 import { MoldView, type UpdateMoldRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { moldKeys } from '../../../lib/resources/molds';
 
 export interface UpdateMoldInput {
@@ -9,7 +9,7 @@ export interface UpdateMoldInput {
 }
 
 export function updateMold({ moldId, changes }: UpdateMoldInput): Promise<MoldView> {
-  return api.patch(`/molds/${encodeURIComponent(moldId)}`, changes, MoldView);
+  return callRoute('updateMold', { params: { id: moldId }, body: changes });
 }
 
 export function useUpdateMold({ onSuccess }: { onSuccess?: (mold: MoldView) => unknown } = {}) {

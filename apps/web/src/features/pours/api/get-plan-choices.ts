@@ -1,7 +1,7 @@
 import { PourPlanList } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { pourKeys } from './keys';
 
 export type PlanChoices = z.infer<typeof PourPlanList>;
@@ -10,7 +10,7 @@ export type PlanChoices = z.infer<typeof PourPlanList>;
 export const planChoicesLimit = 200;
 
 export function getPlanChoices(signal?: AbortSignal): Promise<PlanChoices> {
-  return api.get('/pour-plans', PourPlanList, { query: { limit: planChoicesLimit }, ...(signal ? { signal } : {}) });
+  return callRoute('listPourPlans', { query: { limit: planChoicesLimit } }, signal ? { signal } : {});
 }
 
 export const planChoicesQueryOptions = () =>

@@ -1,11 +1,11 @@
 import { Shop, type UpdateShopRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shopResourceKeys } from '../../../lib/resources/shop';
 import { shopKeys } from './keys';
 
 export function updateShop(changes: UpdateShopRequest): Promise<Shop> {
-  return api.patch('/shop', changes, Shop);
+  return callRoute('updateShop', { body: changes });
 }
 
 export function useUpdateShop({ onSuccess }: { onSuccess?: (shop: Shop) => unknown } = {}) {
