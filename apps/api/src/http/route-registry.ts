@@ -8,7 +8,7 @@ import { IdempotencyStore, REPLAYED_HEADER, UPLOAD_SHA256_LOCAL, idempotencyKeyO
 
 export type { Method } from '@gelpoint/contracts';
 
-/** Who may call a route, resolved: anyone, any signed-in member, or members with one of these roles. */
+/** Who may call a route, resolved: anyone, every signed-in member, or members with one of these roles. */
 export type Access = 'public' | 'member' | readonly Role[];
 
 /** The caller as a route sees it: a public route may be called signed out. */
