@@ -1,13 +1,14 @@
 import { PourPlanView, type MoldView, type PourPlanInput } from '@gelpoint/contracts';
-import { QueryClient, QueryObserver, type QueryObserverOptions } from '@tanstack/react-query';
+import { partialMatchKey, QueryClient, QueryObserver, type QueryObserverOptions } from '@tanstack/react-query';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { deleteMold } from '../features/molds/api/delete-mold';
 import { moldsQueryOptions } from '../features/molds/api/get-molds';
 import { pieceMoldsQueryOptions } from '../features/pour-plans/api/get-piece-molds';
 import { updatePourPlan } from '../features/pour-plans/api/update-pour-plan';
+import { planChoicesQueryOptions } from '../features/pours/api/get-plan-choices';
 import { testPlan } from '../features/pours/utils/test-plan';
 import { forgetMold, moldKeys, moldQueryOptions } from '../lib/resources/molds';
-import { keepPourPlan, pourPlanQueryOptions } from '../lib/resources/pour-plans';
+import { keepPourPlan, pourPlanKeys, pourPlanQueryOptions } from '../lib/resources/pour-plans';
 
 // Each screen reads a server resource through the shared query options; these checks hold a view of each screen open
 // (a real QueryClient, observers as mounted components hold them) over a small in-memory API, change the resource the
@@ -121,5 +122,10 @@ describe('one cache entry per server resource', () => {
     expect(pourRunSheet.current().data?.name).toBe('Second plan');
     // The PUT itself, and no GET of the plan: its answer is the plan every view shows.
     expect(vi.mocked(globalThis.fetch).mock.calls.length).toBe(asked + 1);
+  });
+
+  // Reference: TanStack Query's prefix matcher, which invalidateQueries uses to pick what to refetch.
+  it('offers a new pour only plans that still exist: the choices are a page of the plans’ own list', () => {
+    expect(partialMatchKey(planChoicesQueryOptions().queryKey, pourPlanKeys.lists())).toBe(true);
   });
 });

@@ -2,7 +2,7 @@ import { PourPlanList } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { callRoute } from '../../../lib/api-routes';
-import { pourKeys } from './keys';
+import { pourPlanKeys } from '../../../lib/resources/pour-plans';
 
 export type PlanChoices = z.infer<typeof PourPlanList>;
 
@@ -15,7 +15,8 @@ export function getPlanChoices(signal?: AbortSignal): Promise<PlanChoices> {
 
 export const planChoicesQueryOptions = () =>
   queryOptions({
-    queryKey: pourKeys.planChoices(),
+    // A page of the plans' own list: a plan saved or deleted anywhere refreshes the choices.
+    queryKey: pourPlanKeys.list({ limit: planChoicesLimit }),
     queryFn: ({ signal }) => getPlanChoices(signal),
   });
 

@@ -15,6 +15,5 @@ export const pourKeys = {
   details: () => [...pourKeys.all, 'detail'] as const,
   detail: (pourId: string) => [...pourKeys.details(), pourId] as const,
   today: () => [...pourKeys.all, 'today'] as const,
-  planChoices: () => [...pourKeys.all, 'plan-choices'] as const,
   lotChoices: (query: LotChoicesQuery) => [...pourKeys.all, 'lot-choices', query] as const,
 };
