@@ -3,6 +3,7 @@ import express, { type Express } from 'express';
 import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
+import { apiRoutes } from '@gelpoint/contracts';
 import type { Config } from './config';
 import { createLogger } from './logger';
 import { compressAnswers } from './http/compress-answers';
@@ -100,6 +101,7 @@ export function createApp({ ds, config, logger = createLogger(config.logLevel) }
   pourRoutes(registry, new Pours(ds, undefined, quota), new PourLog(ds), uploadLimit);
   pourExportRoutes(registry, ds);
   calendarRoutes(registry, ds, new CalendarFeeds(ds, config.publicUrl), settings);
+  registry.assertServes(apiRoutes);
 
   api.get('/openapi.json', (_req, res) => {
     res.json(openApiDocument(registry.routes, `${config.publicUrl}`));

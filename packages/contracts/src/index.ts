@@ -11,3 +11,5 @@ export * from './molds';
 export * from './exotherm';
 export * from './pour-plans';
 export * from './pours';
+export * from './permissions';
+export * from './routes';

@@ -1,13 +1,15 @@
 import type { Test } from 'supertest';
 import { describe, expect, it, beforeAll } from 'vitest';
-import type { Role, SessionResponse } from '@gelpoint/contracts';
+import { rolesFor, type Action, type Role, type SessionResponse } from '@gelpoint/contracts';
 import { PASSWORD, bearer, createShop, uniqueEmail, useHarness, type ShopFixture } from '../test-support/harness';
 import { resinInput } from '../test-support/fixtures';
 import { binaryStl, pocketMouldTriangles } from '../test-support/pocket-mould';
 
 // Every route × every caller: anonymous → 401, a role without the right → 403, a role with it → neither,
-// and another shop's object → 404. The table is written out here, apart from the code under test, and
-// must name every registered route, so a new route cannot ship without its access rule being checked.
+// and another shop's object → 404. Which permission each route needs is written out here, apart from the
+// route table, and must name every registered route, so a new route cannot ship without its access rule being
+// checked; which roles hold a permission comes from the one permission table the web's screens also follow,
+// so the API's answers are checked against what the screens show.
 // Fixtures in the own shop use fresh lead sessions too: the matrix signs the lead out everywhere.
 
 const h = useHarness();
@@ -28,7 +30,7 @@ interface World {
 
 type Params = (w: World, shop: 'own' | 'other') => Promise<Record<string, string>>;
 interface Rule {
-  allowed: 'public' | 'member' | Role[];
+  allowed: 'public' | 'member' | Action;
   body?: (w: World) => object;
   params?: Params;
   query?: string;
@@ -85,57 +87,56 @@ const table: Record<string, Rule> = {
   'POST /api/auth/password-reset': { allowed: 'public' },
   'POST /api/auth/password-reset/confirm': { allowed: 'public' },
   'GET /api/shop': { allowed: 'member' },
-  'PATCH /api/shop': { allowed: ['lead'], body: () => ({ unitSystem: 'metric' }) },
+  'PATCH /api/shop': { allowed: 'shop:manage', body: () => ({ unitSystem: 'metric' }) },
   'GET /api/shop/members': { allowed: 'member' },
-  'PATCH /api/shop/members/:id': {
-    allowed: ['lead'],
+  'PATCH /api/shop/members/:id': { allowed: 'team:manage',
     body: () => ({ role: 'apprentice' }),
     params: async (w, shop) => ({ id: shop === 'own' ? await membershipOf(await sessionFor('lead'), w.people.apprentice.user.id) : w.otherIds.membership }),
   },
-  'GET /api/shop/invitations': { allowed: ['lead'] },
-  'POST /api/shop/invitations': { allowed: ['lead'], body: () => ({ email: uniqueEmail('mx'), role: 'maker' }) },
-  'DELETE /api/shop/invitations/:id': { allowed: ['lead'], params: async (w, shop) => ({ id: shop === 'own' ? await freshInvitation(w, 'own') : w.otherIds.invitation }) },
+  'GET /api/shop/invitations': { allowed: 'team:manage' },
+  'POST /api/shop/invitations': { allowed: 'team:manage', body: () => ({ email: uniqueEmail('mx'), role: 'maker' }) },
+  'DELETE /api/shop/invitations/:id': { allowed: 'team:manage', params: async (w, shop) => ({ id: shop === 'own' ? await freshInvitation(w, 'own') : w.otherIds.invitation }) },
   'GET /api/invitations/:token': { allowed: 'public' },
   'POST /api/invitations/:token/accept': { allowed: 'public' },
   'GET /api/pieces': { allowed: 'member' },
-  'POST /api/pieces': { allowed: ['lead', 'maker'], body: () => ({ name: 'matrix piece' }) },
+  'POST /api/pieces': { allowed: 'piece:create', body: () => ({ name: 'matrix piece' }) },
   'GET /api/pieces/:id': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
-  'PATCH /api/pieces/:id': { allowed: ['lead', 'maker'], body: () => ({ notes: 'checked' }), params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
-  'DELETE /api/pieces/:id': { allowed: ['lead'], params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
-  'GET /api/audit': { allowed: ['lead'] },
-  'GET /api/audit/export': { allowed: ['lead'] },
+  'PATCH /api/pieces/:id': { allowed: 'piece:edit', body: () => ({ notes: 'checked' }), params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
+  'DELETE /api/pieces/:id': { allowed: 'piece:delete', params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
+  'GET /api/audit': { allowed: 'audit:read' },
+  'GET /api/audit/export': { allowed: 'audit:read' },
   'GET /api/shelf/resin-systems': { allowed: 'member' },
-  'POST /api/shelf/resin-systems': { allowed: ['lead'], body: () => resinInput() },
+  'POST /api/shelf/resin-systems': { allowed: 'shelf:keep', body: () => resinInput() },
   'GET /api/shelf/resin-systems/:id': { allowed: 'member', params: ownOrOther(freshResin, 'resin') },
-  'PUT /api/shelf/resin-systems/:id': { allowed: ['lead'], body: () => resinInput({ name: 'Renamed' }), params: ownOrOther(freshResin, 'resin') },
-  'DELETE /api/shelf/resin-systems/:id': { allowed: ['lead'], params: ownOrOther(freshResin, 'resin') },
+  'PUT /api/shelf/resin-systems/:id': { allowed: 'shelf:keep', body: () => resinInput({ name: 'Renamed' }), params: ownOrOther(freshResin, 'resin') },
+  'DELETE /api/shelf/resin-systems/:id': { allowed: 'shelf:keep', params: ownOrOther(freshResin, 'resin') },
   'GET /api/shelf/pigments': { allowed: 'member' },
-  'POST /api/shelf/pigments': { allowed: ['lead'], body: () => ({ name: 'Matrix ochre', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }) },
+  'POST /api/shelf/pigments': { allowed: 'shelf:keep', body: () => ({ name: 'Matrix ochre', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }) },
   'GET /api/shelf/pigments/:id': { allowed: 'member', params: ownOrOther(freshPigment, 'pigment') },
-  'PUT /api/shelf/pigments/:id': { allowed: ['lead'], body: () => ({ name: 'Matrix ochre', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }), params: ownOrOther(freshPigment, 'pigment') },
-  'DELETE /api/shelf/pigments/:id': { allowed: ['lead'], params: ownOrOther(freshPigment, 'pigment') },
+  'PUT /api/shelf/pigments/:id': { allowed: 'shelf:keep', body: () => ({ name: 'Matrix ochre', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }), params: ownOrOther(freshPigment, 'pigment') },
+  'DELETE /api/shelf/pigments/:id': { allowed: 'shelf:keep', params: ownOrOther(freshPigment, 'pigment') },
   'GET /api/shelf/lots': { allowed: 'member' },
-  'POST /api/shelf/lots': { allowed: ['lead'], body: (w) => ({ part: 'pigment', pigmentId: w.ownPigment, lotNumber: 'MX-2', quantityG: 25, receivedOn: '2026-11-02' }) },
+  'POST /api/shelf/lots': { allowed: 'shelf:keep', body: (w) => ({ part: 'pigment', pigmentId: w.ownPigment, lotNumber: 'MX-2', quantityG: 25, receivedOn: '2026-11-02' }) },
   'GET /api/shelf/lots/:id': { allowed: 'member', params: ownOrOther(freshLot, 'lot') },
-  'PATCH /api/shelf/lots/:id': { allowed: ['lead'], body: () => ({ notes: 'checked' }), params: ownOrOther(freshLot, 'lot') },
-  'DELETE /api/shelf/lots/:id': { allowed: ['lead'], params: ownOrOther(freshLot, 'lot') },
+  'PATCH /api/shelf/lots/:id': { allowed: 'shelf:keep', body: () => ({ notes: 'checked' }), params: ownOrOther(freshLot, 'lot') },
+  'DELETE /api/shelf/lots/:id': { allowed: 'shelf:keep', params: ownOrOther(freshLot, 'lot') },
   'GET /api/shelf/lots/:id/uses': { allowed: 'member', params: ownOrOther(freshLot, 'lot') },
-  'POST /api/molds': { allowed: ['lead', 'maker'] },
+  'POST /api/molds': { allowed: 'mold:change' },
   'GET /api/molds': { allowed: 'member' },
   'GET /api/molds/:id': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
-  'PATCH /api/molds/:id': { allowed: ['lead', 'maker'], body: () => ({ name: 'matrix mould' }), params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
+  'PATCH /api/molds/:id': { allowed: 'mold:change', body: () => ({ name: 'matrix mould' }), params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'GET /api/molds/:id/fill': { allowed: 'member', query: 'level=5', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'GET /api/molds/:id/layers': { allowed: 'member', query: 'levels=4,6', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'GET /api/molds/:id/stl': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   // A finished mould's stream says so and closes, so each call here gets a whole answer.
   'GET /api/molds/:id/events': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? await settledMold(w) : w.otherIds.mold }) },
   'GET /api/molds/:id/depth-map': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
-  'DELETE /api/molds/:id': { allowed: ['lead', 'maker'], params: async (w, shop) => ({ id: shop === 'own' ? await uploadMold(w, 'own') : w.otherIds.mold }) },
+  'DELETE /api/molds/:id': { allowed: 'mold:change', params: async (w, shop) => ({ id: shop === 'own' ? await uploadMold(w, 'own') : w.otherIds.mold }) },
   'GET /api/pour-plans': { allowed: 'member' },
-  'POST /api/pour-plans': { allowed: ['lead', 'maker'], body: (w) => planBody(w.ownPiece, w.ownResin) },
+  'POST /api/pour-plans': { allowed: 'plan:change', body: (w) => planBody(w.ownPiece, w.ownResin) },
   'GET /api/pour-plans/:id': { allowed: 'member', params: ownOrOther(freshPlan, 'plan') },
-  'PUT /api/pour-plans/:id': { allowed: ['lead', 'maker'], body: (w) => planBody(w.ownPiece, w.ownResin), params: ownOrOther(freshPlan, 'plan') },
-  'DELETE /api/pour-plans/:id': { allowed: ['lead', 'maker'], params: ownOrOther(freshPlan, 'plan') },
+  'PUT /api/pour-plans/:id': { allowed: 'plan:change', body: (w) => planBody(w.ownPiece, w.ownResin), params: ownOrOther(freshPlan, 'plan') },
+  'DELETE /api/pour-plans/:id': { allowed: 'plan:change', params: ownOrOther(freshPlan, 'plan') },
   'POST /api/exotherm': { allowed: 'member', body: () => ({ depthMm: 10, ambientC: 21, reactionHeatJG: 300, activationKJMol: 53, refTempC: 22, gelMin: 480 }) },
   'GET /api/pours': { allowed: 'member' },
   'POST /api/pours': { allowed: 'member', body: (w) => ({ pourPlanId: w.ownPlan }) },
@@ -152,10 +153,10 @@ const table: Record<string, Rule> = {
   'DELETE /api/pours/:id/readings/:readingId': { allowed: 'member', body: () => ({ reason: 'matrix' }), params: async (w, shop) => ({ id: shop === 'own' ? w.ownPour : w.otherIds.pour, readingId: '00000000-0000-4000-8000-000000000000' }) },
   'POST /api/pours/:id/batches/:batchId/void': { allowed: 'member', body: () => ({ reason: 'matrix' }), params: async (w, shop) => ({ id: shop === 'own' ? w.ownPour : w.otherIds.pour, batchId: '00000000-0000-4000-8000-000000000000' }) },
   'POST /api/reminders/:id/done': { allowed: 'member', params: async () => ({ id: '00000000-0000-4000-8000-000000000000' }) },
-  'POST /api/pours/:id/release': { allowed: ['lead'], params: ownOrOther(freshPour, 'pour') },
-  'POST /api/pours/:id/machined': { allowed: ['lead', 'maker'], body: () => ({ finishCoats: 1, hoursBetweenCoats: 12 }), params: ownOrOther(freshPour, 'pour') },
+  'POST /api/pours/:id/release': { allowed: 'pour:release', params: ownOrOther(freshPour, 'pour') },
+  'POST /api/pours/:id/machined': { allowed: 'pour:machined', body: () => ({ finishCoats: 1, hoursBetweenCoats: 12 }), params: ownOrOther(freshPour, 'pour') },
   'GET /api/today': { allowed: 'member' },
-  'POST /api/shop/ingest-token': { allowed: ['lead'] },
+  'POST /api/shop/ingest-token': { allowed: 'shop:manage' },
   'POST /api/ingest/readings': { allowed: 'public' },
 };
 
@@ -220,6 +221,12 @@ describe('access matrix', () => {
     expect(registered).toEqual(Object.keys(table).sort());
   });
 
+  it('serves each route under the permission the table names', () => {
+    const served = Object.fromEntries(h.app.registry.routes.map((r) => [`${r.method.toUpperCase()} ${r.fullPath}`, r.action ?? r.access]));
+    const wanted = Object.fromEntries(Object.entries(table).map(([key, rule]) => [key, rule.allowed]));
+    expect(served).toEqual(wanted);
+  });
+
   it('answers each caller as the table says', async () => {
     const failures: string[] = [];
     for (const route of h.app.registry.routes) {
@@ -230,7 +237,7 @@ describe('access matrix', () => {
       const anon = await call(route.method, route.fullPath, params, rule);
       if (anon.status !== 401) failures.push(`${key} anonymous → ${anon.status}, want 401`);
       for (const role of ROLES) {
-        const allowed = rule.allowed === 'member' || rule.allowed.includes(role);
+        const allowed = rule.allowed === 'member' || rolesFor(rule.allowed).includes(role);
         const p = rule.params ? await rule.params(world, 'own') : {};
         const res = await call(route.method, route.fullPath, p, rule, await sessionFor(role));
         if (allowed && (res.status === 401 || res.status === 403 || res.status >= 500)) failures.push(`${key} ${role} → ${res.status}, want allowed`);

@@ -37,7 +37,7 @@ async function pourUnderWay() {
 const count = async (sql: string, params: unknown[]) => Number(((await h.ds.query(sql, params)) as { n: string }[])[0]!.n);
 
 describe('Idempotency-Key on creates', () => {
-  it('answers a replayed batch with the same status and body and logs the cup once, on any API instance', async () => {
+  it('answers a replayed batch with the same status and body and logs the cup once, on every API instance', async () => {
     const w = await pourUnderWay();
     const cup = w.cups[0]!;
     const key = randomUUID();
@@ -185,7 +185,7 @@ describe('Idempotency-Key on creates', () => {
 });
 
 describe('request fingerprints', () => {
-  it('ignore the order of keys and notice any changed value', () => {
+  it('ignore the order of keys and notice a changed value', () => {
     expect(canonicalJson({ b: 1, a: { d: [2, { f: 1, e: 0 }], c: null } })).toBe('{"a":{"c":null,"d":[2,{"e":0,"f":1}]},"b":1}');
     const base = { params: { id: 'p' }, query: {}, body: { a: 1, b: 'x' } };
     expect(requestFingerprint('POST /x', base)).toBe(requestFingerprint('POST /x', { ...base, body: { b: 'x', a: 1 } }));

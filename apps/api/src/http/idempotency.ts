@@ -32,7 +32,7 @@ export interface IdempotentAnswer {
  */
 export const UPLOAD_SHA256_LOCAL = 'uploadSha256';
 
-/** What identifies "the same request": its route, parameters, query, validated body and any uploaded file. */
+/** What identifies "the same request": its route, parameters, query, validated body and the uploaded file, if one came. */
 export function requestFingerprint(
   route: string,
   parts: { params: unknown; query: unknown; body: unknown; file?: { buffer: Buffer } | undefined; fileSha256?: string | undefined },

@@ -10,7 +10,7 @@ function accessText(r: RegisteredRoute): string {
   return `Roles: ${r.access.join(', ')}.`;
 }
 
-/** The OpenAPI document, built from the same zod schemas that validate the requests. */
+/** The OpenAPI document, built from the contracts' route table as the registry serves it: the same schemas validate the requests. */
 export function openApiDocument(routes: RegisteredRoute[], serverUrl: string) {
   const paths: Record<string, Record<string, unknown>> = {};
   for (const r of routes) {
@@ -38,6 +38,7 @@ export function openApiDocument(routes: RegisteredRoute[], serverUrl: string) {
       '4XX': { description: 'What was wrong, and how to fix it', content: { 'application/json': { schema: schema(ErrorBody, 'output') } } },
     };
     (paths[path] ??= {})[r.method] = {
+      operationId: r.name,
       summary: r.summary,
       description: accessText(r),
       tags: [r.tag],

@@ -36,7 +36,7 @@ function appFileHeaders(res: ServerResponse, path: string): void {
  * Serves the built web app. Hashed assets never change under their name, so they are cached for a
  * year and sent as the .br or .gz twin the build wrote beside them when the client accepts it (Vary:
  * Accept-Encoding). The HTML, the service worker and the manifest are revalidated on every visit so a new
- * build is picked up at once; any other non-API GET gets index.html so deep links work.
+ * build is picked up at once; every other non-API GET gets index.html so deep links work.
  */
 export function staticWeb(distDir: string): Router {
   const router = express.Router();

@@ -1,6 +1,5 @@
-import type { Role } from '@gelpoint/contracts';
+import { type Action, can, type Role } from '@gelpoint/contracts';
 import { paths } from '../config/paths';
-import { can, type Permission } from '../lib/authorization';
 
 export type NavKey = 'today' | 'pieces' | 'moulds' | 'pourPlans' | 'cureBoard' | 'shelf' | 'team' | 'audit' | 'shopSettings';
 
@@ -10,7 +9,7 @@ export interface NavItem {
   href: string;
 }
 
-const items: ReadonlyArray<NavItem & { needs?: Permission }> = [
+const items: ReadonlyArray<NavItem & { needs?: Action }> = [
   { key: 'today', label: 'Today', href: paths.today.getHref() },
   { key: 'pieces', label: 'Pieces', href: paths.pieces.getHref() },
   { key: 'moulds', label: 'Moulds', href: paths.moulds.getHref() },

@@ -1,26 +1,14 @@
 import type { DataSource } from 'typeorm';
-import { z } from 'zod';
+import { calendarRoutes as routes } from '@gelpoint/contracts';
 import type { RouteRegistry } from '../../http/route-registry';
 import { AppError } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { rotateCalendarToken } from './calendar-token';
 import type { CalendarFeeds } from './calendar.service';
 
-// The feed's token is its key, like an invitation's: a bearer capability in the path.
-const FeedParams = z.object({ token: z.string().max(200) });
-const CalendarUrl = z.object({ calendarUrl: z.string() });
-
 export function calendarRoutes(api: RouteRegistry, ds: DataSource, feeds: CalendarFeeds, settings: { jwtSecret: string; publicUrl: string }): void {
-  api.add(
-    {
-      method: 'get',
-      path: '/calendar/:token',
-      tag: 'calendar',
-      summary: "A member's private calendar feed (text/calendar, RFC 5545): the shop's coming pour steps. The URL is the key; no sign-in.",
-      access: 'public',
-      params: FeedParams,
-    },
-    async ({ params, res }) => {
+  api.implement(routes, {
+    calendarFeed: async ({ params, res }) => {
       const token = params.token.replace(/\.ics$/i, '');
       if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) throw new AppError('not_found', 'not_found', 'no such calendar feed; the link may have been replaced');
       const text = await feeds.feed(token);
@@ -30,15 +18,12 @@ export function calendarRoutes(api: RouteRegistry, ds: DataSource, feeds: Calend
       res.status(200).end(text);
       return undefined;
     },
-  );
-  api.add(
-    { method: 'post', path: '/me/calendar/rotate', tag: 'calendar', summary: 'Replace your calendar feed URL: the old one answers 404 from now on', access: 'member', response: CalendarUrl },
-    ({ auth }) =>
+    rotateCalendar: ({ auth }) =>
       ds.transaction(async (m) => {
         const rows: { id: string }[] = await m.query('SELECT id FROM memberships WHERE user_id = $1 AND shop_id = $2 FOR UPDATE', [auth.userId, auth.shopId]);
         const calendarUrl = await rotateCalendarToken(m, rows[0]!.id, settings.jwtSecret, settings.publicUrl);
         await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'calendar.rotate', objectType: 'member', objectId: rows[0]!.id });
         return { calendarUrl };
       }),
-  );
+  });
 }

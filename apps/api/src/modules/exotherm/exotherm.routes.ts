@@ -1,4 +1,4 @@
-import { ExothermAnswer, ExothermRequest } from '@gelpoint/contracts';
+import { ExothermAnswer, ExothermRequest, exothermRoutes as routes } from '@gelpoint/contracts';
 import { exothermCaution, forecastSingleLayer } from '@gelpoint/thermal';
 import type { z } from 'zod';
 import { AppError } from '../../http/errors';
@@ -38,16 +38,5 @@ export function exothermAnswer(body: z.output<typeof ExothermRequest>): Exotherm
 }
 
 export function exothermRoutes(api: RouteRegistry): void {
-  api.add(
-    {
-      method: 'post',
-      path: '/exotherm',
-      tag: 'exotherm',
-      summary: 'Forecast one layer’s exotherm (peak, when, how deep; with limitC the deepest layer under it), as `gelpoint exotherm --json` does',
-      access: 'member',
-      body: ExothermRequest,
-      response: ExothermAnswer,
-    },
-    ({ body }) => exothermAnswer(body),
-  );
+  api.implement(routes, { forecastExotherm: ({ body }) => exothermAnswer(body) });
 }

@@ -115,7 +115,7 @@ async function readStream(url: string, headers: Record<string, string>, forMs: n
   let ended = false;
   const timer = setTimeout(() => stop.abort(), forMs);
   try {
-    for await (const chunk of res.body as unknown as AsyncIterable<Uint8Array>) text += Buffer.from(chunk).toString();
+    for await (const chunk of res.body ?? []) text += Buffer.from(chunk).toString();
     ended = true;
   } catch (err) {
     if (!stop.signal.aborted) throw err;

@@ -16,7 +16,7 @@ import {
   type ResinSystem,
 } from '@gelpoint/core';
 import { Lot, PourBatch, Shop, TemperatureReading } from '@gelpoint/db';
-import type { BatchView, ReadingView } from '@gelpoint/contracts';
+import { mayVoidEntry, type BatchView, type ReadingView } from '@gelpoint/contracts';
 import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
@@ -274,7 +274,7 @@ export class PourLog {
   }
 
   private mayVoid(auth: AuthContext, loggedById: string | null): void {
-    if (auth.role === 'lead' || (loggedById !== null && loggedById === auth.userId)) return;
+    if (mayVoidEntry(auth, loggedById)) return;
     throw new AppError('forbidden', 'not_yours_to_void', 'only the person who logged it or a lead may void it');
   }
 

@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useMemo } from 'react';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
@@ -14,7 +15,6 @@ import { AuditFilterForm } from '../../../features/shop/components/AuditFilterFo
 import { AuditTable } from '../../../features/shop/components/AuditTable';
 import { useAuditQuery } from '../../../features/shop/hooks/use-audit-query';
 import { readAuditFilters, readAuditQuery } from '../../../features/shop/utils/audit-cursor';
-import { can } from '../../../lib/authorization';
 import { useSignedInSession } from '../../signed-in-session';
 import { requireSession } from '../../session-loaders';
 import { LeadOnlyNotice } from './lead-only';

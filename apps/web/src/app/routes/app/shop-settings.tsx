@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useQueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
@@ -6,13 +7,13 @@ import { DocumentTitle } from '../../../components/ui/DocumentTitle';
 import { PageHeader } from '../../../components/ui/PageHeader';
 import { QueryResult } from '../../../components/ui/QueryResult';
 import { authKeys } from '../../../features/auth/api/keys';
-import { shopQueryOptions, useShop } from '../../../features/shop/api/get-shop';
 import { ShopSettingsForm } from '../../../features/shop/components/ShopSettingsForm';
 import { ThermometerToken } from '../../../features/shop/components/ThermometerToken';
-import { can } from '../../../lib/authorization';
 import { useSignedInSession } from '../../signed-in-session';
 import { requireSession } from '../../session-loaders';
 import { LeadOnlyNotice } from './lead-only';
+import { useShop } from '../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>

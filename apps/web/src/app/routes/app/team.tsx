@@ -1,5 +1,6 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
-import { useQueryClient } from '@tanstack/react-query';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { Card } from '../../../components/ui/Card';
 import { DocumentTitle } from '../../../components/ui/DocumentTitle';
@@ -8,14 +9,13 @@ import { PageHeader } from '../../../components/ui/PageHeader';
 import { QueryResult } from '../../../components/ui/QueryResult';
 import { authKeys } from '../../../features/auth/api/keys';
 import { invitationsQueryOptions, useInvitations } from '../../../features/team/api/get-invitations';
-import { membersQueryOptions, useMembers } from '../../../features/team/api/get-members';
 import { InvitationsTable } from '../../../features/team/components/InvitationsTable';
 import { InviteForm } from '../../../features/team/components/InviteForm';
 import { MembersTable } from '../../../features/team/components/MembersTable';
-import { can } from '../../../lib/authorization';
 import { useSignedInSession } from '../../signed-in-session';
 import { requireSession } from '../../session-loaders';
 import { LeadOnlyNotice } from './lead-only';
+import { membersQueryOptions } from '../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>
@@ -41,7 +41,7 @@ export function Component() {
 
 function TeamAreas({ currentUserId }: { currentUserId: string }) {
   const queryClient = useQueryClient();
-  const members = useMembers();
+  const members = useQuery(membersQueryOptions());
   const invitations = useInvitations();
 
   return (

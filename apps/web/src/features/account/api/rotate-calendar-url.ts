@@ -1,13 +1,10 @@
 import type { MeResponse } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
 import { authKeys } from '../../auth/api/keys';
-import { api } from '../../../lib/api-client';
-
-const CalendarUrl = z.object({ calendarUrl: z.string() });
+import { callRoute } from '../../../lib/api-routes';
 
 export function rotateCalendarUrl(): Promise<{ calendarUrl: string }> {
-  return api.post('/me/calendar/rotate', {}, CalendarUrl);
+  return callRoute('rotateCalendar', {});
 }
 
 /** A new private feed link; the old one stops answering at once, so the page shows the new one straight away. */

@@ -1,6 +1,6 @@
 import { SessionResponse, type AcceptInvitationRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 
 export interface AcceptInvitationInput {
   token: string;
@@ -8,7 +8,7 @@ export interface AcceptInvitationInput {
 }
 
 export function acceptInvitation({ token, body }: AcceptInvitationInput): Promise<SessionResponse> {
-  return api.post(`/invitations/${encodeURIComponent(token)}/accept`, body, SessionResponse);
+  return callRoute('acceptInvitation', { params: { token }, body });
 }
 
 export function useAcceptInvitation({ onSuccess }: { onSuccess?: (session: SessionResponse) => unknown } = {}) {

@@ -1,11 +1,11 @@
 import { InvitationPreview } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { authKeys } from './keys';
 
 /** What an e-mailed invitation offers: the shop, the role and the address it was sent to. */
 export function getInvitation(token: string, signal?: AbortSignal): Promise<InvitationPreview> {
-  return api.get(`/invitations/${encodeURIComponent(token)}`, InvitationPreview, signal ? { signal } : {});
+  return callRoute('previewInvitation', { params: { token } }, signal ? { signal } : {});
 }
 
 export const invitationQueryOptions = (token: string) =>

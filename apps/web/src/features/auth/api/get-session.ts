@@ -1,13 +1,13 @@
 import { MeResponse } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { hasStatus } from '../../../lib/api-error';
 import { authKeys } from './keys';
 
 /** Who is signed in, in which shop, with which role; null when nobody is (the API answers 401). */
 export async function getSession(signal?: AbortSignal): Promise<MeResponse | null> {
   try {
-    return await api.get('/me', MeResponse, signal ? { signal } : {});
+    return await callRoute('me', {}, signal ? { signal } : {});
   } catch (error) {
     if (hasStatus(error, 401)) return null;
     throw error;

@@ -1,10 +1,10 @@
 import { SessionResponse, type RegisterRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 
 /** Creates a shop with the person as its lead, and signs them in. */
 export function registerShop(body: RegisterRequest): Promise<SessionResponse> {
-  return api.post('/auth/register', body, SessionResponse);
+  return callRoute('register', { body });
 }
 
 export function useRegisterShop({ onSuccess }: { onSuccess?: (session: SessionResponse) => unknown } = {}) {

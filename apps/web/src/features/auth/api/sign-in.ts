@@ -1,9 +1,9 @@
 import { SessionResponse, type LoginRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 
 export function signIn(body: LoginRequest): Promise<SessionResponse> {
-  return api.post('/auth/login', body, SessionResponse);
+  return callRoute('login', { body });
 }
 
 export function useSignIn({ onSuccess }: { onSuccess?: (session: SessionResponse) => unknown } = {}) {

@@ -1,9 +1,9 @@
 import { SessionResponse, type SwitchShopRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 
 export function switchShop(body: SwitchShopRequest): Promise<SessionResponse> {
-  return api.post('/auth/switch-shop', body, SessionResponse);
+  return callRoute('switchShop', { body });
 }
 
 export function useSwitchShop({ onSuccess }: { onSuccess?: (session: SessionResponse) => unknown } = {}) {

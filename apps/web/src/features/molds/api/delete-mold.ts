@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { moldKeys } from './keys';
+import { callRoute } from '../../../lib/api-routes';
+import { forgetMold } from '../../../lib/resources/molds';
 
 export function deleteMold(moldId: string): Promise<void> {
-  return api.delete(`/molds/${encodeURIComponent(moldId)}`);
+  return callRoute('deleteMold', { params: { id: moldId } });
 }
 
 export function useDeleteMold({ onSuccess }: { onSuccess?: () => unknown } = {}) {
@@ -13,8 +13,7 @@ export function useDeleteMold({ onSuccess }: { onSuccess?: () => unknown } = {})
     onSuccess: async (_result, moldId) => {
       // Leave the page first, then forget the mould, so its page never renders without it.
       await onSuccess?.();
-      queryClient.removeQueries({ queryKey: moldKeys.detail(moldId) });
-      await queryClient.invalidateQueries({ queryKey: moldKeys.lists() });
+      await forgetMold(queryClient, moldId);
     },
   });
 }

@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { env } from '../../../config/env';
 import { buildUrl } from '../../../lib/api-client';
 import { errorFromResponse, networkError } from '../../../lib/api-error';
-import { moldKeys } from './keys';
+import { moldKeys } from '../../../lib/resources/molds';
 
 /** The mould file (STL, 3MF or OBJ) as uploaded, for the 3D view; bytes, not JSON, so it goes around the JSON client. */
 export async function getMoldStl(moldId: string, signal?: AbortSignal): Promise<ArrayBuffer> {

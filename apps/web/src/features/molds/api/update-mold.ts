@@ -1,7 +1,7 @@
 import { MoldView, type UpdateMoldRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { moldKeys } from './keys';
+import { callRoute } from '../../../lib/api-routes';
+import { moldKeys } from '../../../lib/resources/molds';
 
 export interface UpdateMoldInput {
   moldId: string;
@@ -9,7 +9,7 @@ export interface UpdateMoldInput {
 }
 
 export function updateMold({ moldId, changes }: UpdateMoldInput): Promise<MoldView> {
-  return api.patch(`/molds/${encodeURIComponent(moldId)}`, changes, MoldView);
+  return callRoute('updateMold', { params: { id: moldId }, body: changes });
 }
 
 export function useUpdateMold({ onSuccess }: { onSuccess?: (mold: MoldView) => unknown } = {}) {

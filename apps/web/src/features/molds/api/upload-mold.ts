@@ -3,7 +3,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { env } from '../../../config/env';
 import { buildUrl, csrfHeaderName } from '../../../lib/api-client';
 import { networkError } from '../../../lib/api-error';
-import { moldKeys } from './keys';
+import { moldKeys } from '../../../lib/resources/molds';
 import { moldUploadBody, readUploadAnswer, type MoldUploadInput } from './upload-answer';
 
 export interface UploadMoldRequest extends MoldUploadInput {

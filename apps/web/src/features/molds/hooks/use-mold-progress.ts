@@ -2,7 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
 import { env } from '../../../config/env';
 import { buildUrl } from '../../../lib/api-client';
-import { moldKeys } from '../api/keys';
+import { moldKeys } from '../../../lib/resources/molds';
 import type { MoldStatus, MoldView } from '../types';
 import { progressEventTypes, readProgressEvent, withProgress } from '../utils/mold-progress';
 import { isAnalysing } from '../utils/mold-status';

@@ -1,10 +1,10 @@
 import { Piece, type CreatePieceRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { pieceKeys } from './keys';
 
 export function createPiece(body: CreatePieceRequest): Promise<Piece> {
-  return api.post('/pieces', body, Piece);
+  return callRoute('createPiece', { body });
 }
 
 export function useCreatePiece({ onSuccess }: { onSuccess?: (piece: Piece) => unknown } = {}) {

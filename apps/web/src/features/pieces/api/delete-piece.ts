@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { pieceKeys } from './keys';
 
 export function deletePiece(pieceId: string): Promise<void> {
-  return api.delete(`/pieces/${encodeURIComponent(pieceId)}`);
+  return callRoute('deletePiece', { params: { id: pieceId } });
 }
 
 export function useDeletePiece({ onSuccess }: { onSuccess?: () => unknown } = {}) {

@@ -1,10 +1,10 @@
 import { Piece } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { pieceKeys } from './keys';
 
 export function getPiece(pieceId: string, signal?: AbortSignal): Promise<Piece> {
-  return api.get(`/pieces/${encodeURIComponent(pieceId)}`, Piece, signal ? { signal } : {});
+  return callRoute('getPiece', { params: { id: pieceId } }, signal ? { signal } : {});
 }
 
 export const pieceQueryOptions = (pieceId: string) =>

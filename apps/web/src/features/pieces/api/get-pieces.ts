@@ -1,11 +1,11 @@
 import { PieceList } from '@gelpoint/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import type { PieceListQuery } from '../utils/piece-filters';
 import { pieceKeys } from './keys';
 
 export function getPieces(query: PieceListQuery, signal?: AbortSignal): Promise<PieceList> {
-  return api.get('/pieces', PieceList, { query: { ...query }, ...(signal ? { signal } : {}) });
+  return callRoute('listPieces', { query: { ...query } }, signal ? { signal } : {});
 }
 
 export const piecesQueryOptions = (query: PieceListQuery) =>

@@ -1,6 +1,6 @@
 import { Piece, type UpdatePieceRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { pieceKeys } from './keys';
 
 export interface UpdatePieceInput {
@@ -9,7 +9,7 @@ export interface UpdatePieceInput {
 }
 
 export function updatePiece({ pieceId, changes }: UpdatePieceInput): Promise<Piece> {
-  return api.patch(`/pieces/${encodeURIComponent(pieceId)}`, changes, Piece);
+  return callRoute('updatePiece', { params: { id: pieceId }, body: changes });
 }
 
 export function useUpdatePiece({ onSuccess }: { onSuccess?: (piece: Piece) => unknown } = {}) {

@@ -1,10 +1,10 @@
-import { PourPlanView, type PourPlanInput } from '@gelpoint/contracts';
+import type { PourPlanInput, PourPlanView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { pourPlanKeys } from './keys';
+import { callRoute } from '../../../lib/api-routes';
+import { keepPourPlan } from '../../../lib/resources/pour-plans';
 
 export function createPourPlan(body: PourPlanInput): Promise<PourPlanView> {
-  return api.post('/pour-plans', body, PourPlanView);
+  return callRoute('createPourPlan', { body });
 }
 
 export function useCreatePourPlan({ onSuccess }: { onSuccess?: (plan: PourPlanView) => unknown } = {}) {
@@ -12,8 +12,7 @@ export function useCreatePourPlan({ onSuccess }: { onSuccess?: (plan: PourPlanVi
   return useMutation({
     mutationFn: createPourPlan,
     onSuccess: async (plan) => {
-      queryClient.setQueryData(pourPlanKeys.detail(plan.id), plan);
-      await queryClient.invalidateQueries({ queryKey: pourPlanKeys.lists() });
+      await keepPourPlan(queryClient, plan);
       await onSuccess?.(plan);
     },
   });

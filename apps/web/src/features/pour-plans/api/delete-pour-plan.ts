@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { pourPlanKeys } from './keys';
+import { callRoute } from '../../../lib/api-routes';
+import { forgetPourPlan } from '../../../lib/resources/pour-plans';
 
 export function deletePourPlan(planId: string): Promise<void> {
-  return api.delete(`/pour-plans/${encodeURIComponent(planId)}`);
+  return callRoute('deletePourPlan', { params: { id: planId } });
 }
 
 export function useDeletePourPlan({ onSuccess }: { onSuccess?: () => unknown } = {}) {
@@ -12,8 +12,7 @@ export function useDeletePourPlan({ onSuccess }: { onSuccess?: () => unknown } =
     mutationFn: deletePourPlan,
     onSuccess: async (_result, planId) => {
       await onSuccess?.();
-      queryClient.removeQueries({ queryKey: pourPlanKeys.detail(planId) });
-      await queryClient.invalidateQueries({ queryKey: pourPlanKeys.lists() });
+      await forgetPourPlan(queryClient, planId);
     },
   });
 }

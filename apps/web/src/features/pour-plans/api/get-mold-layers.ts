@@ -1,10 +1,5 @@
-import { LayerVolumes } from '@gelpoint/contracts';
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { z } from 'zod';
-import { api } from '../../../lib/api-client';
-import { pourPlanKeys } from './keys';
-
-export type MoldLayerVolumes = z.infer<typeof LayerVolumes>;
+import { useQuery } from '@tanstack/react-query';
+import { moldLayersQueryOptions, moldQueryOptions } from '../../../lib/resources/molds';
 
 export interface MoldLayersRequest {
   moldId: string;
@@ -14,18 +9,8 @@ export interface MoldLayersRequest {
 }
 
 /** The volume between consecutive levels with the chosen dam: the mould's curve as the plan needs it. */
-export function getMoldLayers({ moldId, levelsMm, dam }: MoldLayersRequest, signal?: AbortSignal): Promise<MoldLayerVolumes> {
-  return api.get(`/molds/${encodeURIComponent(moldId)}/layers`, LayerVolumes, { query: { levels: levelsMm.join(','), from: 'floor', dam }, ...(signal ? { signal } : {}) });
-}
-
 export function useMoldLayers(request: MoldLayersRequest | null) {
-  const levels = request?.levelsMm ?? [];
-  return useQuery({
-    ...queryOptions({
-      queryKey: pourPlanKeys.moldLayers(request?.moldId ?? '', levels[0] ?? 0, levels[levels.length - 1] ?? 0, request?.dam ?? 'outline'),
-      queryFn: ({ signal }) => getMoldLayers(request!, signal),
-      staleTime: Number.POSITIVE_INFINITY,
-    }),
-    enabled: request !== null && levels.length >= 2,
-  });
+  const mold = useQuery({ ...moldQueryOptions(request?.moldId ?? ''), enabled: request !== null });
+  const key = { levelsMm: request?.levelsMm ?? [], dam: request?.dam ?? 'outline' };
+  return useQuery({ ...moldLayersQueryOptions(request?.moldId ?? '', key, mold.data?.analysedAt ?? null), enabled: request !== null && key.levelsMm.length >= 2 && mold.data !== undefined });
 }

@@ -1,20 +1,7 @@
-import { PourList } from '@gelpoint/contracts';
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { pourPlanKeys } from './keys';
+import { useQuery } from '@tanstack/react-query';
+import { pourListQueryOptions } from '../../../lib/resources/pours';
 
 /** The newest pour started from a plan, if any: its printed run sheet's codes then open that pour. */
-export async function getLatestPourOfPlan(planId: string, signal?: AbortSignal): Promise<string | null> {
-  const list = await api.get('/pours', PourList, { query: { pourPlanId: planId, status: 'all', limit: 1 }, ...(signal ? { signal } : {}) });
-  return list.items[0]?.id ?? null;
-}
-
-export const planPourQueryOptions = (planId: string) =>
-  queryOptions({
-    queryKey: [...pourPlanKeys.detail(planId), 'latest-pour'] as const,
-    queryFn: ({ signal }) => getLatestPourOfPlan(planId, signal),
-  });
-
 export function usePlanPour(planId: string) {
-  return useQuery(planPourQueryOptions(planId));
+  return useQuery({ ...pourListQueryOptions({ pourPlanId: planId, status: 'all', limit: 1 }), select: (page) => page.items[0]?.id ?? null });
 }

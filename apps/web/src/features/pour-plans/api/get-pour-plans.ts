@@ -1,14 +1,14 @@
 import { PourPlanList } from '@gelpoint/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import type { PlanListQuery } from '../utils/plan-list-filters';
-import { pourPlanKeys } from './keys';
+import { pourPlanKeys } from '../../../lib/resources/pour-plans';
 
 export type PourPlanPage = z.infer<typeof PourPlanList>;
 
 export function getPourPlans(query: PlanListQuery, signal?: AbortSignal): Promise<PourPlanPage> {
-  return api.get('/pour-plans', PourPlanList, { query: { ...query }, ...(signal ? { signal } : {}) });
+  return callRoute('listPourPlans', { query: { ...query } }, signal ? { signal } : {});
 }
 
 export const pourPlansQueryOptions = (query: PlanListQuery) =>

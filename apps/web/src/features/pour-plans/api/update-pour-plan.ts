@@ -1,7 +1,7 @@
-import { PourPlanView, type PourPlanInput } from '@gelpoint/contracts';
+import type { PourPlanInput, PourPlanView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { pourPlanKeys } from './keys';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
+import { keepPourPlan } from '../../../lib/resources/pour-plans';
 
 export interface UpdatePourPlanInput {
   planId: string;
@@ -10,7 +10,7 @@ export interface UpdatePourPlanInput {
 }
 
 export function updatePourPlan({ planId, values }: UpdatePourPlanInput): Promise<PourPlanView> {
-  return api.put(`/pour-plans/${encodeURIComponent(planId)}`, values, PourPlanView);
+  return callRoute('replacePourPlan', { params: { id: planId }, body: values });
 }
 
 export function useUpdatePourPlan({ onSuccess }: { onSuccess?: (plan: PourPlanView) => unknown } = {}) {
@@ -18,8 +18,7 @@ export function useUpdatePourPlan({ onSuccess }: { onSuccess?: (plan: PourPlanVi
   return useMutation({
     mutationFn: updatePourPlan,
     onSuccess: async (plan) => {
-      queryClient.setQueryData(pourPlanKeys.detail(plan.id), plan);
-      await queryClient.invalidateQueries({ queryKey: pourPlanKeys.lists() });
+      await keepPourPlan(queryClient, plan);
       await onSuccess?.(plan);
     },
   });

@@ -1,7 +1,7 @@
 import { LotView, Page } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { pourKeys, type LotChoicesQuery } from './keys';
 
 const LotPage = Page(LotView);
@@ -9,7 +9,7 @@ export type LotChoices = z.infer<typeof LotPage>;
 
 /** Every lot of one part of one product, expired ones included: the mixing form offers those with stock left. */
 export function getLotChoices(query: LotChoicesQuery, signal?: AbortSignal): Promise<LotChoices> {
-  return api.get('/shelf/lots', LotPage, { query: { ...query, status: 'all', limit: 100 }, ...(signal ? { signal } : {}) });
+  return callRoute('listLots', { query: { ...query, status: 'all', limit: 100 } }, signal ? { signal } : {});
 }
 
 export const lotChoicesQueryOptions = (query: LotChoicesQuery) =>

@@ -1,13 +1,13 @@
 import { PourList } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import type { PourPage } from '../types';
 import { boardRefreshMs } from './get-pours';
 import { pourKeys } from './keys';
 
 /** Every pour of one piece, whatever its state (at most 200: more than any piece is poured in). */
 export function getPiecePours(pieceId: string, signal?: AbortSignal): Promise<PourPage> {
-  return api.get('/pours', PourList, { query: { pieceId, status: 'all', limit: 200 }, ...(signal ? { signal } : {}) });
+  return callRoute('listPours', { query: { pieceId, status: 'all', limit: 200 } }, signal ? { signal } : {});
 }
 
 export const piecePoursQueryOptions = (pieceId: string) =>

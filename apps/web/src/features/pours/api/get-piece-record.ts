@@ -1,7 +1,7 @@
 import { PourList, type PourPlanView, type PourView } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { getPlan } from './get-plan';
+import { callRoute } from '../../../lib/api-routes';
+import { getPourPlan } from '../../../lib/resources/pour-plans';
 import { getPour } from './get-pour';
 import { pourKeys } from './keys';
 
@@ -13,12 +13,12 @@ export interface PieceRecordPour {
 /** Pours of one piece, oldest first, each with its whole log and the plan it followed: everything a cure record prints. */
 export async function getPieceRecord(pieceId: string, signal?: AbortSignal): Promise<PieceRecordPour[]> {
   const opts = signal ? { signal } : {};
-  const list = await api.get('/pours', PourList, { query: { pieceId, status: 'all', limit: 50, offset: 0 }, ...opts });
+  const list = await callRoute('listPours', { query: { pieceId, status: 'all', limit: 50, offset: 0 } }, opts);
   const oldestFirst = [...list.items].sort((p, q) => p.startedAt.localeCompare(q.startedAt));
   return Promise.all(
     oldestFirst.map(async (summary) => {
       const pour = await getPour(summary.id, signal);
-      return { pour, plan: await getPlan(pour.pourPlanId, signal) };
+      return { pour, plan: await getPourPlan(pour.pourPlanId, signal) };
     }),
   );
 }

@@ -1,8 +1,8 @@
 import { PourPlanList } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { api } from '../../../lib/api-client';
-import { pourKeys } from './keys';
+import { callRoute } from '../../../lib/api-routes';
+import { pourPlanKeys } from '../../../lib/resources/pour-plans';
 
 export type PlanChoices = z.infer<typeof PourPlanList>;
 
@@ -10,12 +10,13 @@ export type PlanChoices = z.infer<typeof PourPlanList>;
 export const planChoicesLimit = 200;
 
 export function getPlanChoices(signal?: AbortSignal): Promise<PlanChoices> {
-  return api.get('/pour-plans', PourPlanList, { query: { limit: planChoicesLimit }, ...(signal ? { signal } : {}) });
+  return callRoute('listPourPlans', { query: { limit: planChoicesLimit } }, signal ? { signal } : {});
 }
 
 export const planChoicesQueryOptions = () =>
   queryOptions({
-    queryKey: pourKeys.planChoices(),
+    // A page of the plans' own list: a plan saved or deleted anywhere refreshes the choices.
+    queryKey: pourPlanKeys.list({ limit: planChoicesLimit }),
     queryFn: ({ signal }) => getPlanChoices(signal),
   });
 

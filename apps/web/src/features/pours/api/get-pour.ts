@@ -1,11 +1,11 @@
 import { PourView } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { boardRefreshMs } from './get-pours';
 import { pourKeys } from './keys';
 
 export function getPour(pourId: string, signal?: AbortSignal): Promise<PourView> {
-  return api.get(`/pours/${encodeURIComponent(pourId)}`, PourView, signal ? { signal } : {});
+  return callRoute('getPour', { params: { id: pourId } }, signal ? { signal } : {});
 }
 
 export const pourQueryOptions = (pourId: string) =>

@@ -1,6 +1,6 @@
 import { PourList } from '@gelpoint/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import type { PourPage } from '../types';
 import type { CureBoardQuery } from '../utils/cure-board-filters';
 import { pourKeys } from './keys';
@@ -9,7 +9,7 @@ import { pourKeys } from './keys';
 export const boardRefreshMs = 60_000;
 
 export function getPours(query: CureBoardQuery, signal?: AbortSignal): Promise<PourPage> {
-  return api.get('/pours', PourList, { query: { ...query }, ...(signal ? { signal } : {}) });
+  return callRoute('listPours', { query: { ...query } }, signal ? { signal } : {});
 }
 
 export const poursQueryOptions = (query: CureBoardQuery) =>

@@ -1,12 +1,12 @@
 import { TodayView } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import type { Today } from '../types';
 import { boardRefreshMs } from './get-pours';
 import { pourKeys } from './keys';
 
 export function getToday(signal?: AbortSignal): Promise<Today> {
-  return api.get('/today', TodayView, signal ? { signal } : {});
+  return callRoute('today', {}, signal ? { signal } : {});
 }
 
 export const todayQueryOptions = () =>

@@ -1,3 +1,4 @@
+import { pourListKeys } from '../../../lib/resources/pours';
 import type { CureBoardQuery } from '../utils/cure-board-filters';
 
 export interface LotChoicesQuery {
@@ -8,15 +9,11 @@ export interface LotChoicesQuery {
 // Everything this feature caches lives under 'pours', so one invalidation after a change reaches the board,
 // the pour pages and Today together.
 export const pourKeys = {
-  all: ['pours'] as const,
-  lists: () => [...pourKeys.all, 'list'] as const,
+  all: pourListKeys.all,
+  lists: pourListKeys.lists,
   list: (query: CureBoardQuery) => [...pourKeys.lists(), query] as const,
   details: () => [...pourKeys.all, 'detail'] as const,
   detail: (pourId: string) => [...pourKeys.details(), pourId] as const,
   today: () => [...pourKeys.all, 'today'] as const,
-  planChoices: () => [...pourKeys.all, 'plan-choices'] as const,
-  plan: (planId: string) => [...pourKeys.all, 'plan', planId] as const,
   lotChoices: (query: LotChoicesQuery) => [...pourKeys.all, 'lot-choices', query] as const,
-  shop: () => [...pourKeys.all, 'shop'] as const,
-  members: () => [...pourKeys.all, 'members'] as const,
 };

@@ -1,6 +1,6 @@
 import { PourView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { pourKeys } from './keys';
 import { refreshPour } from './refresh-pour';
 
@@ -11,7 +11,7 @@ export interface MachinedInput {
 }
 
 export function markMachined(pourId: string, input: MachinedInput): Promise<PourView> {
-  return api.post(`/pours/${encodeURIComponent(pourId)}/machined`, input, PourView);
+  return callRoute('markMachined', { params: { id: pourId }, body: input });
 }
 
 export function useMarkMachined(pourId: string) {

@@ -1,11 +1,11 @@
 import { PourView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { pourKeys } from './keys';
 import { refreshPour } from './refresh-pour';
 
 export function releasePour(pourId: string): Promise<PourView> {
-  return api.post(`/pours/${encodeURIComponent(pourId)}/release`, {}, PourView);
+  return callRoute('releasePour', { params: { id: pourId } });
 }
 
 export function useReleasePour({ onSuccess }: { onSuccess?: (pour: PourView) => unknown } = {}) {

@@ -1,6 +1,6 @@
 import { PourView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { pourKeys } from './keys';
 
 export interface StartPourInput {
@@ -9,7 +9,7 @@ export interface StartPourInput {
 }
 
 export function startPour(input: StartPourInput): Promise<PourView> {
-  return api.post('/pours', input, PourView);
+  return callRoute('startPour', { body: input });
 }
 
 export function useStartPour({ onSuccess }: { onSuccess?: (pour: PourView) => unknown } = {}) {

@@ -1,14 +1,14 @@
 import { BatchView, ReadingView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { refreshPour } from './refresh-pour';
 
 export function voidReading(pourId: string, readingId: string, reason: string): Promise<ReadingView> {
-  return api.deleteWith(`/pours/${encodeURIComponent(pourId)}/readings/${encodeURIComponent(readingId)}`, { reason }, ReadingView);
+  return callRoute('voidReading', { params: { id: pourId, readingId }, body: { reason } });
 }
 
 export function voidBatch(pourId: string, batchId: string, reason: string): Promise<BatchView> {
-  return api.post(`/pours/${encodeURIComponent(pourId)}/batches/${encodeURIComponent(batchId)}/void`, { reason }, BatchView);
+  return callRoute('voidBatch', { params: { id: pourId, batchId }, body: { reason } });
 }
 
 /** Voids a reading or a cup with its reason; the pour, the board and Today follow. */

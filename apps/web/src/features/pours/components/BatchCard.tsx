@@ -1,4 +1,4 @@
-import type { BatchView, Role, Shop } from '@gelpoint/contracts';
+import { type BatchView, mayVoidEntry, type Role, type Shop } from '@gelpoint/contracts';
 import { formatTemperature, potLifeMinAt } from '@gelpoint/core';
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
@@ -11,7 +11,6 @@ import { LoggedBatch } from './LoggedBatch';
 import { PotLifeClock } from './PotLifeClock';
 import { TargetAmounts } from './TargetAmounts';
 import { VoidEntryButton } from './VoidEntryButton';
-import { mayVoid } from '../utils/pour-permissions';
 
 export interface BatchCardProps {
   pourId: string;
@@ -94,7 +93,7 @@ export function BatchCard({ pourId, cup, of, logged, shop, shopTempC, viewer, op
       {logged ? (
         <>
           <LoggedBatch batch={logged} unitSystem={shop.unitSystem} scaleResolutionG={shop.scaleResolutionG} />
-          {open && mayVoid(viewer, logged.mixedBy) ? (
+          {open && mayVoidEntry(viewer, logged.mixedBy?.id ?? null) ? (
             <div>
               <VoidEntryButton pourId={pourId} kind="batch" id={logged.id} what={`cup ${cup.order}`} />
             </div>

@@ -1,9 +1,8 @@
-import type { PourSummary, Role } from '@gelpoint/contracts';
+import { can, type PourSummary, type Role } from '@gelpoint/contracts';
 import { TextLink } from '../../../components/ui/TextLink';
 import { paths } from '../../../config/paths';
 import { nextEvent } from '../utils/cure-progress';
 import { pourStatusWords, stageAheadWords, stageReachedWords, stepWords } from '../utils/cure-words';
-import { mayRelease } from '../utils/pour-permissions';
 import { CureEvidence } from './CureEvidence';
 import { CureProgressBar } from './CureProgressBar';
 import { CureStageIcon } from './CureStageIcon';
@@ -53,7 +52,7 @@ export function CureBoardList({ pours, role }: { pours: readonly PourSummary[]; 
             ) : null}
             <CureEvidence cure={pour.cure} open={pour.status === 'open'} />
             {pour.cure.release.allowed && pour.status === 'open' ? (
-              mayRelease(role) ? (
+              can(role, 'pour:release') ? (
                 <div>
                   <ReleaseButton pourId={pour.id} pieceName={pour.piece.name} />
                 </div>

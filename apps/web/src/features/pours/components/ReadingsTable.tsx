@@ -1,8 +1,7 @@
-import type { ReadingView, Role } from '@gelpoint/contracts';
+import { mayVoidEntry, type ReadingView, type Role } from '@gelpoint/contracts';
 import { formatTemperature, type UnitSystem } from '@gelpoint/core';
 import { DateTime } from '../../../components/ui/DateTime';
 import { Table, Td, Th, Thead, Tr } from '../../../components/ui/Table';
-import { mayVoid } from '../utils/pour-permissions';
 import { VoidEntryButton } from './VoidEntryButton';
 
 const sourceWords = { manual: 'typed in', csv: 'from a file', sensor: 'shop thermometer' } as const;
@@ -47,7 +46,7 @@ export function ReadingsTable({ pourId, readings, voided, unitSystem, viewer }: 
                 {sourceWords[r.source]}
                 {r.loggedBy ? ` by ${r.loggedBy.name}` : ''}
               </Td>
-              <Td>{mayVoid(viewer, r.loggedBy) ? <VoidEntryButton pourId={pourId} kind="reading" id={r.id} what={`the reading of ${temp(r.tempC)}`} /> : null}</Td>
+              <Td>{mayVoidEntry(viewer, r.loggedBy?.id ?? null) ? <VoidEntryButton pourId={pourId} kind="reading" id={r.id} what={`the reading of ${temp(r.tempC)}`} /> : null}</Td>
             </Tr>
           ))}
           {voided.map((r) => (

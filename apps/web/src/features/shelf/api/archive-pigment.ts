@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 /** The API archives rather than deletes: saved plans and lots keep pointing at it. */
 export function archivePigment(pigmentId: string): Promise<void> {
-  return api.delete(`/shelf/pigments/${encodeURIComponent(pigmentId)}`);
+  return callRoute('archivePigment', { params: { id: pigmentId } });
 }
 
 export function useArchivePigment({ onSuccess }: { onSuccess?: () => unknown } = {}) {

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 /** The API archives rather than deletes: saved plans and lots keep pointing at it. */
 export function archiveResinSystem(resinSystemId: string): Promise<void> {
-  return api.delete(`/shelf/resin-systems/${encodeURIComponent(resinSystemId)}`);
+  return callRoute('archiveResinSystem', { params: { id: resinSystemId } });
 }
 
 export function useArchiveResinSystem({ onSuccess }: { onSuccess?: () => unknown } = {}) {

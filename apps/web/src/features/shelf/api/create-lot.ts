@@ -1,10 +1,10 @@
 import { LotView, type LotInput } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 export function createLot(body: LotInput): Promise<LotView> {
-  return api.post('/shelf/lots', body, LotView);
+  return callRoute('createLot', { body });
 }
 
 export function useCreateLot({ onSuccess }: { onSuccess?: (lot: LotView) => unknown } = {}) {

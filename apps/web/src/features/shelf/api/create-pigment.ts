@@ -1,10 +1,10 @@
 import { PigmentView, type PigmentInput } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 export function createPigment(body: PigmentInput): Promise<PigmentView> {
-  return api.post('/shelf/pigments', body, PigmentView);
+  return callRoute('createPigment', { body });
 }
 
 export function useCreatePigment({ onSuccess }: { onSuccess?: (pigment: PigmentView) => unknown } = {}) {

@@ -1,10 +1,10 @@
 import { ResinSystemView, type ResinSystemInput } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 export function createResinSystem(body: ResinSystemInput): Promise<ResinSystemView> {
-  return api.post('/shelf/resin-systems', body, ResinSystemView);
+  return callRoute('createResinSystem', { body });
 }
 
 export function useCreateResinSystem({ onSuccess }: { onSuccess?: (resinSystem: ResinSystemView) => unknown } = {}) {

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 /** For a lot entered by mistake; a lot that was used up stays, with nothing remaining. */
 export function deleteLot(lotId: string): Promise<void> {
-  return api.delete(`/shelf/lots/${encodeURIComponent(lotId)}`);
+  return callRoute('deleteLot', { params: { id: lotId } });
 }
 
 export function useDeleteLot({ onSuccess }: { onSuccess?: () => unknown } = {}) {

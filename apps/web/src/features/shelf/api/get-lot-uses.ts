@@ -1,6 +1,6 @@
 import { LotUse, Page } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 const LotUses = Page(LotUse);
@@ -9,7 +9,7 @@ export type LotUses = ReturnType<typeof LotUses.parse>;
 export const lotUsesPageSize = 50;
 
 export function getLotUses(lotId: string, page: number, signal?: AbortSignal): Promise<LotUses> {
-  return api.get(`/shelf/lots/${encodeURIComponent(lotId)}/uses`, LotUses, { query: { limit: lotUsesPageSize, offset: (page - 1) * lotUsesPageSize }, ...(signal ? { signal } : {}) });
+  return callRoute('lotUses', { params: { id: lotId }, query: { limit: lotUsesPageSize, offset: (page - 1) * lotUsesPageSize } }, signal ? { signal } : {});
 }
 
 export const lotUsesQueryOptions = (lotId: string, page: number) =>

@@ -1,10 +1,10 @@
 import { LotView } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 export function getLot(lotId: string, signal?: AbortSignal): Promise<LotView> {
-  return api.get(`/shelf/lots/${encodeURIComponent(lotId)}`, LotView, signal ? { signal } : {});
+  return callRoute('getLot', { params: { id: lotId } }, signal ? { signal } : {});
 }
 
 export const lotQueryOptions = (lotId: string) =>

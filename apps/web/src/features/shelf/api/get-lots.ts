@@ -1,7 +1,7 @@
 import { LotView, Page } from '@gelpoint/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import type { LotListQuery } from '../utils/shelf-queries';
 import { shelfKeys } from './keys';
 
@@ -9,7 +9,7 @@ export const LotPage = Page(LotView);
 export type LotPage = z.infer<typeof LotPage>;
 
 export function getLots(query: LotListQuery, signal?: AbortSignal): Promise<LotPage> {
-  return api.get('/shelf/lots', LotPage, { query: { ...query }, ...(signal ? { signal } : {}) });
+  return callRoute('listLots', { query: { ...query } }, signal ? { signal } : {});
 }
 
 export const lotsQueryOptions = (query: LotListQuery) =>

@@ -1,10 +1,10 @@
 import { PigmentView } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 export function getPigment(pigmentId: string, signal?: AbortSignal): Promise<PigmentView> {
-  return api.get(`/shelf/pigments/${encodeURIComponent(pigmentId)}`, PigmentView, signal ? { signal } : {});
+  return callRoute('getPigment', { params: { id: pigmentId } }, signal ? { signal } : {});
 }
 
 export const pigmentQueryOptions = (pigmentId: string) =>

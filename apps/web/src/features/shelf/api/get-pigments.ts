@@ -1,7 +1,7 @@
 import { Page, PigmentView } from '@gelpoint/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import type { PigmentListQuery } from '../utils/shelf-queries';
 import { shelfKeys } from './keys';
 
@@ -9,7 +9,7 @@ export const PigmentPage = Page(PigmentView);
 export type PigmentPage = z.infer<typeof PigmentPage>;
 
 export function getPigments(query: PigmentListQuery, signal?: AbortSignal): Promise<PigmentPage> {
-  return api.get('/shelf/pigments', PigmentPage, { query: { ...query }, ...(signal ? { signal } : {}) });
+  return callRoute('listPigments', { query: { ...query } }, signal ? { signal } : {});
 }
 
 export const pigmentsQueryOptions = (query: PigmentListQuery) =>

@@ -1,10 +1,10 @@
 import { ResinSystemView } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 export function getResinSystem(resinSystemId: string, signal?: AbortSignal): Promise<ResinSystemView> {
-  return api.get(`/shelf/resin-systems/${encodeURIComponent(resinSystemId)}`, ResinSystemView, signal ? { signal } : {});
+  return callRoute('getResinSystem', { params: { id: resinSystemId } }, signal ? { signal } : {});
 }
 
 export const resinSystemQueryOptions = (resinSystemId: string) =>

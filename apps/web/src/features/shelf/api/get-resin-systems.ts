@@ -1,7 +1,7 @@
 import { Page, ResinSystemView } from '@gelpoint/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import type { ResinSystemListQuery } from '../utils/shelf-queries';
 import { shelfKeys } from './keys';
 
@@ -9,7 +9,7 @@ export const ResinSystemPage = Page(ResinSystemView);
 export type ResinSystemPage = z.infer<typeof ResinSystemPage>;
 
 export function getResinSystems(query: ResinSystemListQuery, signal?: AbortSignal): Promise<ResinSystemPage> {
-  return api.get('/shelf/resin-systems', ResinSystemPage, { query: { ...query }, ...(signal ? { signal } : {}) });
+  return callRoute('listResinSystems', { query: { ...query } }, signal ? { signal } : {});
 }
 
 export const resinSystemsQueryOptions = (query: ResinSystemListQuery) =>

@@ -1,7 +1,7 @@
 import { LotUpdate, LotView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
 export interface UpdateLotInput {
@@ -10,7 +10,7 @@ export interface UpdateLotInput {
 }
 
 export function updateLot({ lotId, changes }: UpdateLotInput): Promise<LotView> {
-  return api.patch(`/shelf/lots/${encodeURIComponent(lotId)}`, changes, LotView);
+  return callRoute('updateLot', { params: { id: lotId }, body: changes });
 }
 
 export function useUpdateLot({ onSuccess }: { onSuccess?: (lot: LotView) => unknown } = {}) {

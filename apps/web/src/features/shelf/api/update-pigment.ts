@@ -1,7 +1,7 @@
 import { PigmentView, type PigmentInput } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { shelfKeys } from './keys';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 
 export interface UpdatePigmentInput {
   pigmentId: string;
@@ -10,7 +10,7 @@ export interface UpdatePigmentInput {
 }
 
 export function updatePigment({ pigmentId, values }: UpdatePigmentInput): Promise<PigmentView> {
-  return api.put(`/shelf/pigments/${encodeURIComponent(pigmentId)}`, values, PigmentView);
+  return callRoute('replacePigment', { params: { id: pigmentId }, body: values });
 }
 
 export function useUpdatePigment({ onSuccess }: { onSuccess?: (pigment: PigmentView) => unknown } = {}) {

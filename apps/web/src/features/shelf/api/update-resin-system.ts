@@ -1,7 +1,7 @@
 import { ResinSystemView, type ResinSystemInput } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { shelfKeys } from './keys';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 
 export interface UpdateResinSystemInput {
   resinSystemId: string;
@@ -10,7 +10,7 @@ export interface UpdateResinSystemInput {
 }
 
 export function updateResinSystem({ resinSystemId, values }: UpdateResinSystemInput): Promise<ResinSystemView> {
-  return api.put(`/shelf/resin-systems/${encodeURIComponent(resinSystemId)}`, values, ResinSystemView);
+  return callRoute('replaceResinSystem', { params: { id: resinSystemId }, body: values });
 }
 
 export function useUpdateResinSystem({ onSuccess }: { onSuccess?: (resinSystem: ResinSystemView) => unknown } = {}) {

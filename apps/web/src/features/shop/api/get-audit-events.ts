@@ -1,7 +1,7 @@
 import { AuditList } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { shopKeys, type AuditListQuery } from './keys';
 
 export type AuditPage = z.infer<typeof AuditList>;
@@ -9,7 +9,7 @@ export type AuditPage = z.infer<typeof AuditList>;
 export const auditPageSize = 50;
 
 export function getAuditEvents(query: AuditListQuery, signal?: AbortSignal): Promise<AuditPage> {
-  return api.get('/audit', AuditList, { query: { ...query }, ...(signal ? { signal } : {}) });
+  return callRoute('listAudit', { query: { ...query } }, signal ? { signal } : {});
 }
 
 export const auditEventsQueryOptions = (query: AuditListQuery) =>

@@ -1,9 +1,9 @@
 import { IngestToken } from '@gelpoint/contracts';
 import { useMutation } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 
 export function issueIngestToken(): Promise<IngestToken> {
-  return api.post('/shop/ingest-token', {}, IngestToken);
+  return callRoute('issueIngestToken', {});
 }
 
 export function useIssueIngestToken() {

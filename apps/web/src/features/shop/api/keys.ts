@@ -11,8 +11,6 @@ export interface AuditListQuery {
 
 export const shopKeys = {
   all: ['shop'] as const,
-  detail: () => [...shopKeys.all, 'detail'] as const,
-  members: () => [...shopKeys.all, 'members'] as const,
   audit: () => [...shopKeys.all, 'audit'] as const,
   auditList: (query: AuditListQuery) => [...shopKeys.audit(), 'list', query] as const,
 };

@@ -1,10 +1,11 @@
 import { Shop, type UpdateShopRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
+import { shopResourceKeys } from '../../../lib/resources/shop';
 import { shopKeys } from './keys';
 
 export function updateShop(changes: UpdateShopRequest): Promise<Shop> {
-  return api.patch('/shop', changes, Shop);
+  return callRoute('updateShop', { body: changes });
 }
 
 export function useUpdateShop({ onSuccess }: { onSuccess?: (shop: Shop) => unknown } = {}) {
@@ -12,7 +13,7 @@ export function useUpdateShop({ onSuccess }: { onSuccess?: (shop: Shop) => unkno
   return useMutation({
     mutationFn: updateShop,
     onSuccess: async (shop) => {
-      queryClient.setQueryData(shopKeys.detail(), shop);
+      queryClient.setQueryData(shopResourceKeys.shop(), shop);
       await queryClient.invalidateQueries({ queryKey: shopKeys.audit() });
       await onSuccess?.(shop);
     },

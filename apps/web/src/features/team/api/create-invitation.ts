@@ -1,11 +1,11 @@
 import { Invitation, type CreateInvitationRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { teamKeys } from './keys';
 
 /** Sends the invitation e-mail; the person joins by opening its link. */
 export function createInvitation(body: CreateInvitationRequest): Promise<Invitation> {
-  return api.post('/shop/invitations', body, Invitation);
+  return callRoute('createInvitation', { body });
 }
 
 export function useCreateInvitation({ onSuccess }: { onSuccess?: (invitation: Invitation) => unknown } = {}) {

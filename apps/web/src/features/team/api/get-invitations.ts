@@ -1,13 +1,10 @@
 import { Invitation } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { teamKeys } from './keys';
 
-const InvitationList = z.array(Invitation);
-
 export function getInvitations(signal?: AbortSignal): Promise<Invitation[]> {
-  return api.get('/shop/invitations', InvitationList, signal ? { signal } : {});
+  return callRoute('listInvitations', {}, signal ? { signal } : {});
 }
 
 export const invitationsQueryOptions = () =>

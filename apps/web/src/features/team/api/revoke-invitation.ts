@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { callRoute } from '../../../lib/api-routes';
 import { teamKeys } from './keys';
 
 export function revokeInvitation(invitationId: string): Promise<void> {
-  return api.delete(`/shop/invitations/${encodeURIComponent(invitationId)}`);
+  return callRoute('revokeInvitation', { params: { id: invitationId } });
 }
 
 export function useRevokeInvitation() {

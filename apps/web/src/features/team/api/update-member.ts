@@ -1,7 +1,7 @@
 import { Member, type UpdateMemberRequest } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { teamKeys } from './keys';
+import { callRoute } from '../../../lib/api-routes';
+import { shopResourceKeys } from '../../../lib/resources/shop';
 
 export interface UpdateMemberInput {
   memberId: string;
@@ -9,7 +9,7 @@ export interface UpdateMemberInput {
 }
 
 export function updateMember({ memberId, changes }: UpdateMemberInput): Promise<Member> {
-  return api.patch(`/shop/members/${encodeURIComponent(memberId)}`, changes, Member);
+  return callRoute('updateMember', { params: { id: memberId }, body: changes });
 }
 
 export function useUpdateMember({ onSuccess }: { onSuccess?: (member: Member) => unknown } = {}) {
@@ -17,7 +17,7 @@ export function useUpdateMember({ onSuccess }: { onSuccess?: (member: Member) =>
   return useMutation({
     mutationFn: updateMember,
     onSuccess: async (member) => {
-      await queryClient.invalidateQueries({ queryKey: teamKeys.members() });
+      await queryClient.invalidateQueries({ queryKey: shopResourceKeys.members() });
       await onSuccess?.(member);
     },
   });

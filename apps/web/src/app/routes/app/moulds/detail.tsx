@@ -1,4 +1,4 @@
-import { Id } from '@gelpoint/contracts';
+import { can, Id } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { data, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Card } from '../../../../components/ui/Card';
@@ -8,17 +8,18 @@ import { PageHeader } from '../../../../components/ui/PageHeader';
 import { QueryResult } from '../../../../components/ui/QueryResult';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
-import { moldQueryOptions, useMold } from '../../../../features/molds/api/get-mold';
+import { useMold } from '../../../../features/molds/api/get-mold';
+import { moldQueryOptions } from '../../../../lib/resources/molds';
 import { AnalysisState } from '../../../../features/molds/components/AnalysisState';
 import { DeleteMoldButton } from '../../../../features/molds/components/DeleteMoldButton';
 import { MoldReport } from '../../../../features/molds/components/MoldReport';
 import { MoldSettingsForm } from '../../../../features/molds/components/MoldSettingsForm';
 import { MoldStatusBadge } from '../../../../features/molds/components/MoldStatusBadge';
-import { mayChangeMolds } from '../../../../features/molds/utils/mold-permissions';
 import { piecesQueryOptions, usePieces } from '../../../../features/pieces/api/get-pieces';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 const pieceNamesQuery = { limit: 200, offset: 0 };
 
@@ -46,7 +47,7 @@ export function Component() {
   const shop = useShop();
   const pieces = usePieces(pieceNamesQuery);
   const unitSystem = shop.data?.unitSystem ?? 'metric';
-  const mayChange = mayChangeMolds(session.role);
+  const mayChange = can(session.role, 'mold:change');
 
   return (
     <QueryResult query={mold} loadingLabel="Loading the mould…">

@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -12,11 +13,11 @@ import { paths } from '../../../../config/paths';
 import { moldsQueryOptions, useMolds } from '../../../../features/molds/api/get-molds';
 import { MoldsTable } from '../../../../features/molds/components/MoldsTable';
 import { QuickShapeForm } from '../../../../features/molds/components/QuickShapeForm';
-import { mayChangeMolds } from '../../../../features/molds/utils/mold-permissions';
 import { piecesQueryOptions, usePieces } from '../../../../features/pieces/api/get-pieces';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 const moldListQuery = { limit: 100, offset: 0 };
 // Piece names for the table; the API lists at most 200 at a time.
@@ -38,7 +39,7 @@ export function Component() {
   const pieces = usePieces(pieceNamesQuery);
   const unitSystem = shop.data?.unitSystem ?? 'metric';
   const pieceNames = new Map((pieces.data?.items ?? []).map((piece) => [piece.id, piece.name]));
-  const mayUpload = mayChangeMolds(session.role);
+  const mayUpload = can(session.role, 'mold:change');
   const upload = (
     <ButtonLink to={paths.newMould.getHref()}>
       <PlusIcon />

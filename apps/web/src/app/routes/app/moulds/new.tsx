@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -7,12 +8,12 @@ import { PageHeader } from '../../../../components/ui/PageHeader';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { UploadMoldForm } from '../../../../features/molds/components/UploadMoldForm';
-import { mayChangeMolds } from '../../../../features/molds/utils/mold-permissions';
 import { piecesQueryOptions, usePieces } from '../../../../features/pieces/api/get-pieces';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { roleLabel } from '../../../../lib/roles';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 const piecesToChooseFrom = { limit: 200, offset: 0 };
 
@@ -36,7 +37,7 @@ export function Component() {
     <>
       <DocumentTitle title="Upload a mould" />
       <PageHeader eyebrow="Moulds" title="Upload a mould" description="Send the mould file (STL, 3MF or OBJ); Gelpoint measures the cavity and writes its report." />
-      {mayChangeMolds(session.role) ? (
+      {can(session.role, 'mold:change') ? (
         <Card className="max-w-2xl">
           <UploadMoldForm
             pieces={pieces.data?.items ?? []}

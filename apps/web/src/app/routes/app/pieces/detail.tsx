@@ -1,4 +1,4 @@
-import { Id } from '@gelpoint/contracts';
+import { can, Id } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { data, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -16,7 +16,6 @@ import { DeletePieceButton } from '../../../../features/pieces/components/Delete
 import { PieceDetails } from '../../../../features/pieces/components/PieceDetails';
 import { PieceForm } from '../../../../features/pieces/components/PieceForm';
 import { PieceStageBadge } from '../../../../features/pieces/components/PieceStageBadge';
-import { can } from '../../../../lib/authorization';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 import { PieceWork, prefetchPieceWork } from './piece-work';

@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -14,7 +15,6 @@ import { PiecesList } from '../../../../features/pieces/components/PiecesList';
 import { PiecesPager } from '../../../../features/pieces/components/PiecesPager';
 import { usePieceFilters } from '../../../../features/pieces/hooks/use-piece-filters';
 import { pieceListQuery, readPieceFilters } from '../../../../features/pieces/utils/piece-filters';
-import { can } from '../../../../lib/authorization';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 

@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import { useNavigate } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
 import { Card } from '../../../../components/ui/Card';
@@ -7,7 +8,6 @@ import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { useCreatePiece } from '../../../../features/pieces/api/create-piece';
 import { PieceForm } from '../../../../features/pieces/components/PieceForm';
-import { can } from '../../../../lib/authorization';
 import { roleLabel } from '../../../../lib/roles';
 import { useSignedInSession } from '../../../signed-in-session';
 

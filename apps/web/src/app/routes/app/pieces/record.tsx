@@ -8,17 +8,18 @@ import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { pieceQueryOptions, usePiece } from '../../../../features/pieces/api/get-piece';
 import { pieceRecordQueryOptions, usePieceRecord } from '../../../../features/pours/api/get-piece-record';
-import { shopUnitsQueryOptions, useShopUnits } from '../../../../features/pours/api/get-shop-units';
 import { CureRecord } from '../../../../features/pours/components/CureRecord';
 import { requireSession } from '../../../session-loaders';
 import { readId } from '../pour-plans/read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>
   async ({ params, request }: LoaderFunctionArgs) => {
     await requireSession(queryClient, request);
     const pieceId = readId(params, 'pieceId', 'piece');
-    await Promise.all([queryClient.ensureQueryData(pieceQueryOptions(pieceId)), queryClient.ensureQueryData(pieceRecordQueryOptions(pieceId)), queryClient.ensureQueryData(shopUnitsQueryOptions())]);
+    await Promise.all([queryClient.ensureQueryData(pieceQueryOptions(pieceId)), queryClient.ensureQueryData(pieceRecordQueryOptions(pieceId)), queryClient.ensureQueryData(shopQueryOptions())]);
     return null;
   };
 
@@ -27,7 +28,7 @@ export function Component() {
   const pieceId = readId(useParams(), 'pieceId', 'piece');
   const piece = usePiece(pieceId);
   const record = usePieceRecord(pieceId);
-  const shop = useShopUnits();
+  const shop = useShop();
 
   const body = () => {
     const failed = piece.error ?? record.error ?? shop.error;

@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import { useQuery } from '@tanstack/react-query';
 import { useNavigate, useParams } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -16,12 +17,11 @@ import { usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
 import { DeletePourPlanButton } from '../../../../features/pour-plans/components/DeletePourPlanButton';
 import { PlanResult } from '../../../../features/pour-plans/components/PlanResult';
 import { SnapshotDetails } from '../../../../features/pour-plans/components/SnapshotDetails';
-import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
 import { readSavedPlan } from '../../../../features/pour-plans/utils/saved-plan';
-import { useShop } from '../../../../features/shop/api/get-shop';
 import { useSignedInSession } from '../../../signed-in-session';
 import { createPlanPageLoader } from './plan-page-loader';
 import { readId } from './read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
 
 export const createLoader = createPlanPageLoader;
 
@@ -33,7 +33,7 @@ export function Component() {
   const shop = useShop();
   const piece = useQuery({ ...pieceQueryOptions(plan.data?.pieceId ?? ''), enabled: Boolean(plan.data) });
   const mold = useMold(plan.data?.moldId ?? null);
-  const mayPlan = mayPlanPours(session.role);
+  const mayPlan = can(session.role, 'plan:change');
 
   if (plan.error) return <ErrorAlert error={plan.error} />;
   if (shop.error) return <ErrorAlert error={shop.error} />;

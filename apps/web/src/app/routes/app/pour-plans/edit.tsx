@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -8,20 +9,21 @@ import { PageSpinner } from '../../../../components/ui/PageSpinner';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { pieceMoldsQueryOptions } from '../../../../features/pour-plans/api/get-piece-molds';
-import { pourPlanQueryOptions, usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
+import { usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
+import { pourPlanQueryOptions } from '../../../../lib/resources/pour-plans';
 import { useUpdatePourPlan } from '../../../../features/pour-plans/api/update-pour-plan';
 import { PourPlanner } from '../../../../features/pour-plans/components/PourPlanner';
-import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
 import { plannerValuesOf } from '../../../../features/pour-plans/utils/planner-values';
 import { mouldFrameInputsMessage, readSavedPlan, unreadableInputsMessage } from '../../../../features/pour-plans/utils/saved-plan';
 import { pigmentsQueryOptions, usePigments } from '../../../../features/shelf/api/get-pigments';
 import { resinSystemsQueryOptions, useResinSystems } from '../../../../features/shelf/api/get-resin-systems';
 import { wholeShelfQuery } from '../../../../features/shelf/utils/shelf-queries';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { roleLabel } from '../../../../lib/roles';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 import { readId } from './read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>
@@ -52,7 +54,7 @@ export function Component() {
 
   const failed = plan.error ?? shop.error ?? resinSystems.error ?? pigments.error;
   const body = () => {
-    if (!mayPlanPours(session.role)) {
+    if (!can(session.role, 'plan:change')) {
       return (
         <Alert tone="warning" title="Your role can't change pour plans" live="none">
           You are signed in as {roleLabel(session.role).toLowerCase()}. Makers and the shop lead change plans.

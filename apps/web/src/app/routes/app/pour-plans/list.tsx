@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { useSearchParams } from 'react-router';
@@ -14,11 +15,11 @@ import { pourPlansQueryOptions, usePourPlans } from '../../../../features/pour-p
 import { PlanAPour } from '../../../../features/pour-plans/components/PlanAPour';
 import { PlanPieceFilter } from '../../../../features/pour-plans/components/PlanPieceFilter';
 import { PourPlansTable } from '../../../../features/pour-plans/components/PourPlansTable';
-import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
 import { planListQuery, plansPerPage, readPlanListFilters } from '../../../../features/pour-plans/utils/plan-list-filters';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 // The piece picker and the piece names come from one page of the shop's pieces, the most the API gives at once.
 const allPieces = { limit: 200, offset: 0 };
@@ -43,7 +44,7 @@ export function Component() {
   const plans = usePourPlans(planListQuery(filters));
   const pieces = usePieces(allPieces);
   const shop = useShop();
-  const mayPlan = mayPlanPours(session.role);
+  const mayPlan = can(session.role, 'plan:change');
   const pieceList = pieces.data?.items ?? [];
   const pieceNames = new Map(pieceList.map((p) => [p.id, p.name]));
   const pages = Math.max(1, Math.ceil((plans.data?.total ?? 0) / plansPerPage));

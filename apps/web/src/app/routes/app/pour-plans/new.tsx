@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -11,16 +12,16 @@ import { pieceQueryOptions, usePiece } from '../../../../features/pieces/api/get
 import { useCreatePourPlan } from '../../../../features/pour-plans/api/create-pour-plan';
 import { pieceMoldsQueryOptions } from '../../../../features/pour-plans/api/get-piece-molds';
 import { PourPlanner } from '../../../../features/pour-plans/components/PourPlanner';
-import { mayPlanPours } from '../../../../features/pour-plans/utils/plan-access';
 import { newPlannerValues } from '../../../../features/pour-plans/utils/planner-values';
 import { pigmentsQueryOptions, usePigments } from '../../../../features/shelf/api/get-pigments';
 import { resinSystemsQueryOptions, useResinSystems } from '../../../../features/shelf/api/get-resin-systems';
 import { wholeShelfQuery } from '../../../../features/shelf/utils/shelf-queries';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { roleLabel } from '../../../../lib/roles';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 import { readId } from './read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>
@@ -49,7 +50,7 @@ export function Component() {
 
   const failed = piece.error ?? shop.error ?? resinSystems.error ?? pigments.error;
   const body = () => {
-    if (!mayPlanPours(session.role)) {
+    if (!can(session.role, 'plan:change')) {
       return (
         <Alert tone="warning" title="Your role can't plan pours" live="none">
           You are signed in as {roleLabel(session.role).toLowerCase()}. Makers and the shop lead plan pours; the run sheet of every plan is open to you.

@@ -1,10 +1,10 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { pieceQueryOptions } from '../../../../features/pieces/api/get-piece';
-import { pourPlanQueryOptions } from '../../../../features/pour-plans/api/get-pour-plan';
-import { shopQueryOptions } from '../../../../features/shop/api/get-shop';
+import { pourPlanQueryOptions } from '../../../../lib/resources/pour-plans';
 import { requireSession } from '../../../session-loaders';
 import { readId } from './read-id';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 /** A saved plan's pages (the plan and its run sheet) need the plan, its piece and the shop's units. */
 export const createPlanPageLoader =

@@ -12,10 +12,10 @@ import { usePlanPour } from '../../../../features/pour-plans/api/get-plan-pour';
 import { usePourPlan } from '../../../../features/pour-plans/api/get-pour-plan';
 import { RunSheet } from '../../../../features/pour-plans/components/RunSheet';
 import { readSavedPlan } from '../../../../features/pour-plans/utils/saved-plan';
-import { useShop } from '../../../../features/shop/api/get-shop';
 import { appLink } from '../../../../lib/app-link';
 import { createPlanPageLoader } from './plan-page-loader';
 import { readId } from './read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
 
 export const createLoader = createPlanPageLoader;
 

@@ -1,5 +1,5 @@
-import { Id } from '@gelpoint/contracts';
-import type { QueryClient } from '@tanstack/react-query';
+import { can, Id } from '@gelpoint/contracts';
+import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { data, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
 import { Card } from '../../../../components/ui/Card';
@@ -9,9 +9,7 @@ import { PageHeader } from '../../../../components/ui/PageHeader';
 import { QueryResult } from '../../../../components/ui/QueryResult';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
-import { planQueryOptions, usePlan } from '../../../../features/pours/api/get-plan';
 import { pourQueryOptions, usePour } from '../../../../features/pours/api/get-pour';
-import { shopUnitsQueryOptions, useShopUnits } from '../../../../features/pours/api/get-shop-units';
 import { CureLog } from '../../../../features/pours/components/CureLog';
 import { MachinedForm } from '../../../../features/pours/components/MachinedForm';
 import { PourDownloads } from '../../../../features/pours/components/PourDownloads';
@@ -19,9 +17,11 @@ import { ReleaseButton } from '../../../../features/pours/components/ReleaseButt
 import { RunSheet } from '../../../../features/pours/components/RunSheet';
 import { pourStatusWords } from '../../../../features/pours/utils/cure-words';
 import { runSheetOf } from '../../../../features/pours/utils/plan-run-sheet';
-import { mayMarkMachined, mayRelease } from '../../../../features/pours/utils/pour-permissions';
+import { pourPlanQueryOptions } from '../../../../lib/resources/pour-plans';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 function readPourId(params: Record<string, string | undefined>): string {
   const parsed = Id.safeParse(params.pourId);
@@ -34,8 +34,8 @@ export const createLoader =
   (queryClient: QueryClient) =>
   async ({ params, request }: LoaderFunctionArgs) => {
     await requireSession(queryClient, request);
-    const [pour] = await Promise.all([queryClient.ensureQueryData(pourQueryOptions(readPourId(params))), queryClient.ensureQueryData(shopUnitsQueryOptions())]);
-    await queryClient.ensureQueryData(planQueryOptions(pour.pourPlanId));
+    const [pour] = await Promise.all([queryClient.ensureQueryData(pourQueryOptions(readPourId(params))), queryClient.ensureQueryData(shopQueryOptions())]);
+    await queryClient.ensureQueryData(pourPlanQueryOptions(pour.pourPlanId));
     return null;
   };
 
@@ -43,8 +43,9 @@ export function Component() {
   const pourId = readPourId(useParams());
   const session = useSignedInSession();
   const pour = usePour(pourId);
-  const plan = usePlan(pour.data?.pourPlanId);
-  const shop = useShopUnits();
+  const planId = pour.data?.pourPlanId;
+  const plan = useQuery({ ...pourPlanQueryOptions(planId ?? ''), enabled: planId !== undefined });
+  const shop = useShop();
 
   return (
     <QueryResult query={pour} loadingLabel="Loading the pour…">
@@ -60,7 +61,7 @@ export function Component() {
               </>
             }
             actions={
-              current.status === 'open' && current.cure.release.allowed && mayRelease(session.role) ? <ReleaseButton pourId={current.id} pieceName={current.piece.name} /> : null
+              current.status === 'open' && current.cure.release.allowed && can(session.role, 'pour:release') ? <ReleaseButton pourId={current.id} pieceName={current.piece.name} /> : null
             }
           />
           <nav aria-label="On this page" className="mb-6 flex flex-wrap gap-x-6">
@@ -83,7 +84,7 @@ export function Component() {
               .
             </Alert>
           ) : null}
-          {current.status === 'released' && mayMarkMachined(session.role) ? (
+          {current.status === 'released' && can(session.role, 'pour:machined') ? (
             <Card title="Machining done?" className="mb-6">
               <MachinedForm pourId={current.id} />
             </Card>

@@ -1,4 +1,4 @@
-import type { QueryClient } from '@tanstack/react-query';
+import { type QueryClient, useQuery } from '@tanstack/react-query';
 import { useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { Card } from '../../../../components/ui/Card';
 import { DocumentTitle } from '../../../../components/ui/DocumentTitle';
@@ -7,12 +7,12 @@ import { QueryResult } from '../../../../components/ui/QueryResult';
 import { SafetyNote } from '../../../../components/ui/SafetyNote';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
-import { membersQueryOptions, useMembers } from '../../../../features/pours/api/get-members';
 import { planChoicesQueryOptions, usePlanChoices } from '../../../../features/pours/api/get-plan-choices';
-import { shopUnitsQueryOptions, useShopUnits } from '../../../../features/pours/api/get-shop-units';
 import { StartPourForm } from '../../../../features/pours/components/StartPourForm';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { membersQueryOptions, shopQueryOptions } from '../../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>
@@ -21,7 +21,7 @@ export const createLoader =
     await Promise.all([
       queryClient.ensureQueryData(planChoicesQueryOptions()),
       queryClient.ensureQueryData(membersQueryOptions()),
-      queryClient.ensureQueryData(shopUnitsQueryOptions()),
+      queryClient.ensureQueryData(shopQueryOptions()),
     ]);
     return null;
   };
@@ -31,8 +31,8 @@ export function Component() {
   const navigate = useNavigate();
   const [search] = useSearchParams();
   const plans = usePlanChoices();
-  const members = useMembers();
-  const shop = useShopUnits();
+  const members = useQuery(membersQueryOptions());
+  const shop = useShop();
 
   return (
     <>

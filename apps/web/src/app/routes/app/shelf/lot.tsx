@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { Card } from '../../../../components/ui/Card';
@@ -15,12 +16,12 @@ import { LotSheet } from '../../../../features/shelf/components/LotSheet';
 import { LotUses } from '../../../../features/shelf/components/LotUses';
 import { LotStateMark } from '../../../../features/shelf/components/LotStateMark';
 import { lotStateOf } from '../../../../features/shelf/utils/lot-status';
-import { mayKeepShelf } from '../../../../features/shelf/utils/shelf-access';
 import { lotPartWords } from '../../../../features/shelf/utils/shelf-words';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 import { readId } from './read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 /** The page of batches shown: a whole number from 1, whatever the address says. */
 function usesPageOf(search: URLSearchParams): number {
@@ -47,7 +48,7 @@ export function Component() {
   const usesPage = usesPageOf(search);
   const shop = useShop();
   const update = useUpdateLot();
-  const mayKeep = mayKeepShelf(session.role);
+  const mayKeep = can(session.role, 'shelf:keep');
   const backToLots = paths.shelf.getHref({ tab: 'lots' });
 
   return (

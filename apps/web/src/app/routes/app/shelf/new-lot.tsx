@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, type LoaderFunctionArgs } from 'react-router';
 import { Card } from '../../../../components/ui/Card';
@@ -11,7 +12,6 @@ import { useCreateLot } from '../../../../features/shelf/api/create-lot';
 import { pigmentsQueryOptions, usePigments } from '../../../../features/shelf/api/get-pigments';
 import { resinSystemsQueryOptions, useResinSystems } from '../../../../features/shelf/api/get-resin-systems';
 import { LotForm } from '../../../../features/shelf/components/LotForm';
-import { mayKeepShelf } from '../../../../features/shelf/utils/shelf-access';
 import { wholeShelfQuery } from '../../../../features/shelf/utils/shelf-queries';
 import { LeadOnlyNotice } from '../lead-only';
 import { requireSession } from '../../../session-loaders';
@@ -33,7 +33,7 @@ export function Component() {
   const create = useCreateLot({ onSuccess: () => navigate(paths.shelf.getHref({ tab: 'lots' }), { replace: true }) });
 
   const body = () => {
-    if (!mayKeepShelf(session.role)) return <LeadOnlyNotice area="the shelf" role={session.role} />;
+    if (!can(session.role, 'shelf:keep')) return <LeadOnlyNotice area="the shelf" role={session.role} />;
     if (resinSystems.isError) return <ErrorAlert error={resinSystems.error} />;
     if (pigments.isError) return <ErrorAlert error={pigments.error} />;
     if (!resinSystems.data || !pigments.data) return <PageSpinner label="Loading the shelf…" />;

@@ -1,9 +1,9 @@
+import { can } from '@gelpoint/contracts';
 import { useNavigate } from 'react-router';
 import { paths } from '../../../../config/paths';
 import { useCreatePigment } from '../../../../features/shelf/api/create-pigment';
 import { NewProductPage } from '../../../../features/shelf/components/NewProductPage';
 import { PigmentForm } from '../../../../features/shelf/components/PigmentForm';
-import { mayKeepShelf } from '../../../../features/shelf/utils/shelf-access';
 import { LeadOnlyNotice } from '../lead-only';
 import { useSignedInSession } from '../../../signed-in-session';
 
@@ -16,7 +16,7 @@ export function Component() {
     <NewProductPage
       title="New pigment"
       description="Its loading limits from the maker's data sheet, and what a pack costs."
-      mayKeep={mayKeepShelf(session.role)}
+      mayKeep={can(session.role, 'shelf:keep')}
       notAllowed={<LeadOnlyNotice area="the shelf" role={session.role} />}
       cardClassName="max-w-3xl"
       form={<PigmentForm submitLabel="Add to the shelf" busyLabel="Adding…" busy={create.isPending} save={(values) => create.mutateAsync(values)} />}

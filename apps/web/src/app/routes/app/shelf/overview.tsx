@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
@@ -14,11 +15,11 @@ import { ShelfSearchForm } from '../../../../features/shelf/components/ShelfSear
 import { LotsSection, PigmentsSection, ResinSystemsSection } from '../../../../features/shelf/components/ShelfSections';
 import { ShelfTabs } from '../../../../features/shelf/components/ShelfTabs';
 import { useShelfFilters } from '../../../../features/shelf/hooks/use-shelf-filters';
-import { mayKeepShelf } from '../../../../features/shelf/utils/shelf-access';
 import { lotListQuery, pigmentListQuery, readShelfFilters, resinSystemListQuery, type ShelfTab } from '../../../../features/shelf/utils/shelf-queries';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>
@@ -47,7 +48,7 @@ export function Component() {
   const session = useSignedInSession();
   const filters = useShelfFilters();
   const shop = useShop();
-  const mayKeep = mayKeepShelf(session.role);
+  const mayKeep = can(session.role, 'shelf:keep');
   const add = addActions[filters.tab];
 
   return (

@@ -1,3 +1,4 @@
+import { can } from '@gelpoint/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { QueryResult } from '../../../../components/ui/QueryResult';
@@ -8,12 +9,12 @@ import { useUpdateResinSystem } from '../../../../features/shelf/api/update-resi
 import { ProductPage } from '../../../../features/shelf/components/ProductPage';
 import { ResinSystemForm } from '../../../../features/shelf/components/ResinSystemForm';
 import { ResinSystemSheet } from '../../../../features/shelf/components/ResinSystemSheet';
-import { mayKeepShelf } from '../../../../features/shelf/utils/shelf-access';
 import { resinUseWords } from '../../../../features/shelf/utils/shelf-words';
-import { shopQueryOptions, useShop } from '../../../../features/shop/api/get-shop';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
 import { readId } from './read-id';
+import { useShop } from '../../../../features/shop/api/get-shop';
+import { shopQueryOptions } from '../../../../lib/resources/shop';
 
 export const createLoader =
   (queryClient: QueryClient) =>
@@ -32,7 +33,7 @@ export function Component() {
   const shop = useShop();
   const update = useUpdateResinSystem();
   const archive = useArchiveResinSystem({ onSuccess: () => navigate(paths.shelf.getHref(), { replace: true }) });
-  const mayKeep = mayKeepShelf(session.role);
+  const mayKeep = can(session.role, 'shelf:keep');
 
   return (
     <QueryResult query={resinSystem} loadingLabel="Loading the resin system…">

@@ -1,6 +1,6 @@
 import { partialMatchKey } from '@tanstack/react-query';
 import { describe, expect, it } from 'vitest';
-import { moldKeys } from './keys';
+import { moldKeys } from './molds';
 
 // Reference: TanStack Query's own prefix matcher, which invalidateQueries and removeQueries use.
 describe('moldKeys', () => {
