@@ -1,7 +1,7 @@
 import { onlineManager } from '@tanstack/react-query';
 import type { ReactElement } from 'react';
 import { RouterProvider } from 'react-router';
-import { authKeys } from '../features/auth/api/keys';
+import { authKeys } from '../lib/resources/session';
 import { refreshAfterSent } from '../features/pours/api/refresh-after-sent';
 import type { MeResponse } from '@gelpoint/contracts';
 import { forgetDeviceData } from '../lib/offline/device-data';

@@ -1,6 +1,6 @@
 import { QueryClient } from '@tanstack/react-query';
 import { describe, expect, it } from 'vitest';
-import { authKeys } from '../features/auth/api/keys';
+import { authKeys } from '../lib/resources/session';
 import { createSessionControl, type SessionRouter } from './session-control';
 
 interface FakeLocation {

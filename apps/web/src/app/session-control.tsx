@@ -2,7 +2,7 @@ import { hashKey, type QueryClient } from '@tanstack/react-query';
 import { createContext, useContext, type ReactNode } from 'react';
 import type { DataRouter } from 'react-router';
 import { paths } from '../config/paths';
-import { authKeys } from '../features/auth/api/keys';
+import { authKeys } from '../lib/resources/session';
 
 export interface SessionControl {
   /** After sign-in, registration or joining: go where the person was heading. */

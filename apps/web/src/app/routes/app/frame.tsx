@@ -15,7 +15,7 @@ import {
 } from '../../../components/ui/icons';
 import { PageSpinner } from '../../../components/ui/PageSpinner';
 import { useSession } from '../../../features/auth/api/get-session';
-import { authKeys } from '../../../features/auth/api/keys';
+import { authKeys } from '../../../lib/resources/session';
 import { OfflineNotice } from '../../../features/offline/components/OfflineNotice';
 import { OutboxPanel } from '../../../features/offline/components/OutboxPanel';
 import { ShopSwitcher } from '../../../features/auth/components/ShopSwitcher';

@@ -6,7 +6,7 @@ import { Card } from '../../../components/ui/Card';
 import { DocumentTitle } from '../../../components/ui/DocumentTitle';
 import { PageHeader } from '../../../components/ui/PageHeader';
 import { QueryResult } from '../../../components/ui/QueryResult';
-import { authKeys } from '../../../features/auth/api/keys';
+import { authKeys } from '../../../lib/resources/session';
 import { ShopSettingsForm } from '../../../features/shop/components/ShopSettingsForm';
 import { ThermometerToken } from '../../../features/shop/components/ThermometerToken';
 import { useSignedInSession } from '../../signed-in-session';

@@ -7,7 +7,7 @@ import { DocumentTitle } from '../../../components/ui/DocumentTitle';
 import { EmptyState } from '../../../components/ui/EmptyState';
 import { PageHeader } from '../../../components/ui/PageHeader';
 import { QueryResult } from '../../../components/ui/QueryResult';
-import { authKeys } from '../../../features/auth/api/keys';
+import { authKeys } from '../../../lib/resources/session';
 import { invitationsQueryOptions, useInvitations } from '../../../features/team/api/get-invitations';
 import { InvitationsTable } from '../../../features/team/components/InvitationsTable';
 import { InviteForm } from '../../../features/team/components/InviteForm';

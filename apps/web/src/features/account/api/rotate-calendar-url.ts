@@ -1,6 +1,6 @@
 import type { MeResponse } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { authKeys } from '../../auth/api/keys';
+import { authKeys } from '../../../lib/resources/session';
 import { callRoute } from '../../../lib/api-routes';
 
 export function rotateCalendarUrl(): Promise<{ calendarUrl: string }> {

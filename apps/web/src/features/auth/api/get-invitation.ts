@@ -1,7 +1,7 @@
 import { InvitationPreview } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
-import { authKeys } from './keys';
+import { authKeys } from '../../../lib/resources/session';
 
 /** What an e-mailed invitation offers: the shop, the role and the address it was sent to. */
 export function getInvitation(token: string, signal?: AbortSignal): Promise<InvitationPreview> {

@@ -2,7 +2,7 @@ import { MeResponse } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
 import { hasStatus } from '../../../lib/api-error';
-import { authKeys } from './keys';
+import { authKeys } from '../../../lib/resources/session';
 
 /** Who is signed in, in which shop, with which role; null when nobody is (the API answers 401). */
 export async function getSession(signal?: AbortSignal): Promise<MeResponse | null> {

@@ -1,11 +1,9 @@
-import { LotView, Page } from '@gelpoint/contracts';
+import type { ApiRoutes, RouteResponse } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { z } from 'zod';
 import { callRoute } from '../../../lib/api-routes';
 import { pourKeys, type LotChoicesQuery } from './keys';
 
-const LotPage = Page(LotView);
-export type LotChoices = z.infer<typeof LotPage>;
+export type LotChoices = RouteResponse<ApiRoutes['listLots']>;
 
 /** Every lot of one part of one product, expired ones included: the mixing form offers those with stock left. */
 export function getLotChoices(query: LotChoicesQuery, signal?: AbortSignal): Promise<LotChoices> {

@@ -1,4 +1,3 @@
-import { PourList } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
 import type { PourPage } from '../types';

@@ -1,4 +1,4 @@
-import { PourList, type PourPlanView, type PourView } from '@gelpoint/contracts';
+import type { PourPlanView, PourView } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
 import { getPourPlan } from '../../../lib/resources/pour-plans';

@@ -1,4 +1,3 @@
-import { TodayView } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
 import type { Today } from '../types';

@@ -1,10 +1,9 @@
-import { LotUse, Page } from '@gelpoint/contracts';
+import type { ApiRoutes, RouteResponse } from '@gelpoint/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
 import { shelfKeys } from './keys';
 
-const LotUses = Page(LotUse);
-export type LotUses = ReturnType<typeof LotUses.parse>;
+export type LotUses = RouteResponse<ApiRoutes['lotUses']>;
 
 export const lotUsesPageSize = 50;
 

@@ -1,3 +1,4 @@
+/** The session and invitation keys: who is signed in is read by the frame, the account page and sign-in alike. */
 export const authKeys = {
   all: ['auth'] as const,
   session: () => [...authKeys.all, 'session'] as const,
