@@ -36,7 +36,7 @@ export default defineConfig({
     pool: 'forks',
     // mathjs is a thousand small modules: loading them costs a test file about a second. Pre-bundled once a run
     // (esbuild, into node_modules/.vite), every file that converts units loads one file instead; the code is mathjs's own.
-    deps: { optimizer: { ssr: { enabled: true, include: ['mathjs'] } } },
+    deps: { optimizer: { ssr: { enabled: process.env.GELPOINT_TEST_BUNDLE_MATHJS !== '0', include: ['mathjs'] } } },
     projects: [
       {
         extends: true,

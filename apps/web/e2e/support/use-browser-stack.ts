@@ -4,6 +4,13 @@ import { launchBrowser } from './browser';
 import { freshDemoDatabase, type FreshDemoDatabase } from './fresh-demo-database';
 import { E2eStack } from './stack';
 
+declare module 'vitest' {
+  export interface ProvidedContext {
+    /** The ports of the run's shared stack (docker-free-scripts/test-setup/browser-project.ts). */
+    sharedStack: { apiPort: number; mailHttpPort: number };
+  }
+}
+
 export interface BrowserStackOptions {
   /** Start from a demo database of the flow's own, seeded just now and dropped afterwards (see freshDemoDatabase). */
   freshDemoFor?: string;
