@@ -21,34 +21,23 @@ async function asSuperuser(sql: string): Promise<void> {
   });
 }
 
-async function runDbScript(script: 'migrate' | 'seed', url: string): Promise<void> {
-  await run(process.execPath, ['--import', 'tsx', `packages/db/src/cli/${script}.ts`], { cwd: root, env: { ...process.env, DATABASE_URL: url } });
-}
-
 const quoted = (identifier: string) => `"${identifier.replaceAll('"', '""')}"`;
 
 /**
- * A database of its own for one flow, migrated and seeded with the demo shop just now, the way npm test makes
- * gelpoint_e2e. It is not copied from gelpoint_e2e: a copy fails while any other test is connected to it, and
- * would carry whatever those tests changed there; the seed's times are relative to now, so seeding here also
- * keeps "due in the next hours" true.
+ * A database of its own for one flow: a copy of the demo the browser project's set-up migrated and seeded into a
+ * template at the start of the run. Not a copy of gelpoint_e2e: a copy fails while any other test is connected to
+ * the source, and would carry whatever those tests changed there; nobody connects to the template. The seed's times
+ * are relative to when it ran, minutes ago, so "due in the next hours" stays true.
  */
 export async function freshDemoDatabase(flow: string): Promise<FreshDemoDatabase> {
   const base = process.env.GELPOINT_E2E_DATABASE_URL;
-  if (!base) throw new Error('GELPOINT_E2E_DATABASE_URL is not set: run the browser tests through npm test');
+  const template = process.env.GELPOINT_E2E_TEMPLATE_DATABASE;
+  if (!base || !template) throw new Error('GELPOINT_E2E_DATABASE_URL is not set: run the browser tests through npm test');
   if (!/^[a-z0-9_]+$/.test(flow)) throw new Error(`the flow name "${flow}" must be lower-case letters, digits and underscores`);
   const name = `gelpoint_e2e_${flow}_${randomBytes(4).toString('hex')}`;
   const url = new URL(base);
   url.pathname = `/${name}`;
   const owner = decodeURIComponent(url.username);
-  await asSuperuser(`CREATE DATABASE ${quoted(name)} OWNER ${quoted(owner)} ENCODING 'UTF8' TEMPLATE template0`);
-  const drop = () => asSuperuser(`DROP DATABASE IF EXISTS ${quoted(name)} WITH (FORCE)`);
-  try {
-    await runDbScript('migrate', url.toString());
-    await runDbScript('seed', url.toString());
-  } catch (err) {
-    await drop();
-    throw err;
-  }
-  return { name, url: url.toString(), drop };
+  await asSuperuser(`CREATE DATABASE ${quoted(name)} OWNER ${quoted(owner)} TEMPLATE ${quoted(template)}`);
+  return { name, url: url.toString(), drop: () => asSuperuser(`DROP DATABASE IF EXISTS ${quoted(name)} WITH (FORCE)`) };
 }

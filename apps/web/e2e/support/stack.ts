@@ -43,10 +43,18 @@ export interface SinkMail {
  */
 export class E2eStack {
   private children: ChildProcess[] = [];
-  private readonly dataDir = mkdtempSync(join(tmpdir(), 'gelpoint-e2e-'));
+  private dataDir = '';
   apiPort = 0;
   mailHttpPort = 0;
   private output = '';
+
+  /** The run's shared stack, started by the browser project's global set-up; this side only reads from it. */
+  static shared(ports: { apiPort: number; mailHttpPort: number }): E2eStack {
+    const stack = new E2eStack();
+    stack.apiPort = ports.apiPort;
+    stack.mailHttpPort = ports.mailHttpPort;
+    return stack;
+  }
 
   get baseUrl(): string {
     return `http://127.0.0.1:${this.apiPort}`;
@@ -55,6 +63,7 @@ export class E2eStack {
   /** Against the seeded demo database npm test made, unless a flow brings its own (see freshDemoDatabase). */
   async start(url = process.env.GELPOINT_E2E_DATABASE_URL): Promise<void> {
     if (!url) throw new Error('GELPOINT_E2E_DATABASE_URL is not set: run the browser tests through npm test');
+    this.dataDir = mkdtempSync(join(tmpdir(), 'gelpoint-e2e-'));
     this.apiPort = await freePort();
     this.mailHttpPort = await freePort();
     const smtpPort = await freePort();
@@ -110,6 +119,6 @@ export class E2eStack {
           }),
       ),
     );
-    rmSync(this.dataDir, { recursive: true, force: true });
+    if (this.dataDir) rmSync(this.dataDir, { recursive: true, force: true });
   }
 }

@@ -1,4 +1,3 @@
-import { stepKeyOf } from '@gelpoint/core';
 import { describe, expect, it } from 'vitest';
 import { hasStepAfter, productOfStep, runSheetOf } from './plan-run-sheet';
 import { testPlan } from './test-plan';
@@ -36,10 +35,16 @@ describe('runSheetOf', () => {
     expect(layerCup.totalG).toBe(layerCup.targetAG + layerCup.targetBG + layerCup.targetPigmentG);
   });
 
-  it('names each cup’s step as the API and core do', () => {
-    // Reference: core's stepKeyOf, which the API stores with every logged batch.
-    const planned = [...(saved.result.sealCoat?.coats.flatMap((c) => c.batches) ?? []), ...saved.result.layers.flatMap((l) => l.batches)];
-    for (const batch of planned) expect(cups.find((c) => c.index === batch.index)?.stepKey).toBe(stepKeyOf(batch));
+  it('names each cup’s step in the form the API stores with a logged cup: seal_coat:<coat> or layer:<layer>, counted from 1', () => {
+    // The form is the stored one (packages/contracts/src/shelf.ts, LotUse.step: "layer:2 or seal_coat:1"); the
+    // numbers come from what the sheet shows the person mixing, its "Seal coat 2" or "Layer 1".
+    expect(cups.length).toBeGreaterThan(0);
+    for (const cup of cups) {
+      const [, kind, n] = /^(Seal coat|Layer) (\d+)$/.exec(cup.pourLabel) ?? [];
+      expect(cup.stepKey).toBe(`${kind === 'Seal coat' ? 'seal_coat' : 'layer'}:${n}`);
+    }
+    expect(new Set(cups.filter((c) => c.kind === 'seal_coat').map((c) => c.stepKey))).toEqual(new Set(['seal_coat:1']));
+    expect(cups.some((c) => c.stepKey === 'layer:2')).toBe(true);
   });
 
   it('numbers cups within their pour', () => {

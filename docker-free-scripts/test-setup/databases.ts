@@ -1,0 +1,62 @@
+import { execFileSync } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
+
+// The test set-up runs the same shell helpers as npm start (lib.sh knows the cluster, its port and the
+// superuser's password), so a test run and the scripts never disagree about where the databases are.
+const root = fileURLToPath(new URL('../..', import.meta.url));
+
+function libSh(script: string, ...args: string[]): string {
+  return execFileSync('bash', ['-c', `source docker-free-scripts/lib.sh && ${script}`, 'test-setup', ...args], {
+    cwd: root,
+    env: { ...process.env, PGOPTIONS: '-c client_min_messages=warning' },
+    stdio: ['ignore', 'pipe', 'inherit'],
+    encoding: 'utf8',
+  });
+}
+
+function dbScript(script: 'migrate' | 'seed', url: string): void {
+  execFileSync(process.execPath, ['--import', 'tsx', `packages/db/src/cli/${script}.ts`], {
+    cwd: root,
+    env: { ...process.env, DATABASE_URL: url },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+}
+
+const urlOf = (name: string) => libSh('db_url "$1"', name);
+
+/** The database the API, worker and db integration tests use: dropped, created and migrated once a run. */
+export function freshTestDatabase(): string {
+  libSh('pg_start >&2 && ensure_database gelpoint_test --fresh');
+  const url = urlOf('gelpoint_test');
+  dbScript('migrate', url);
+  return url;
+}
+
+export interface DemoDatabases {
+  /** gelpoint_e2e: the demo the shared browser stack serves and the seed's own test reads. */
+  url: string;
+  /** The demo as the seed left it, which nobody connects to, so a flow can copy it in a moment. */
+  template: string;
+}
+
+let demo: DemoDatabases | undefined;
+
+/**
+ * Migrates and seeds the demo once a run, into a template, and copies it to gelpoint_e2e. A flow that needs the demo
+ * as it is (freshDemoDatabase) copies the template too, instead of migrating and seeding again; the seed's times are
+ * relative to now and a run lasts minutes, so "due in the next hours" stays true.
+ */
+export function demoDatabases(): DemoDatabases {
+  if (demo) return demo;
+  const template = 'gelpoint_e2e_template';
+  libSh('pg_start >&2 && ensure_database "$1" --fresh', template);
+  const templateUrl = urlOf(template);
+  dbScript('migrate', templateUrl);
+  dbScript('seed', templateUrl);
+  libSh(
+    'superuser_psql -c "DROP DATABASE IF EXISTS gelpoint_e2e WITH (FORCE)" -c "CREATE DATABASE gelpoint_e2e OWNER \\"$GELPOINT_DB_USER\\" TEMPLATE $1"',
+    template,
+  );
+  demo = { url: urlOf('gelpoint_e2e'), template };
+  return demo;
+}
