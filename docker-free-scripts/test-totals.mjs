@@ -1,9 +1,9 @@
 // Prints the closing totals line of npm test from vitest's JSON report, counting the type-check, the
-// build and the import-cycle check as one check each (when they ran), so a failure there is never hidden behind
+// build, the import-cycle check and the lint and format check as one check each (when they ran), so a failure there is never hidden behind
 // green tests.
 import { existsSync, readFileSync } from 'node:fs';
 
-const [file, typecheck, build, acyclic] = process.argv.slice(2);
+const [file, typecheck, build, acyclic, linted] = process.argv.slice(2);
 let passed = 0;
 let failed = 0;
 let skipped = 0;
@@ -19,7 +19,7 @@ if (existsSync(file)) {
   console.error('no test report was written: vitest did not run to the end');
 }
 // npm test -- <file> runs only vitest: the checks of the whole tree were not part of it.
-const checks = typecheck === '--tests-only' ? [] : [['type-check', typecheck], ['build', build], ['import-cycle check', acyclic]];
+const checks = typecheck === '--tests-only' ? [] : [['type-check', typecheck], ['build', build], ['import-cycle check', acyclic], ['lint and format check', linted]];
 for (const [name, ok] of checks) {
   if (ok === '1') passed += 1;
   else {

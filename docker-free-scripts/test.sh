@@ -15,7 +15,7 @@ export GELPOINT_JWT_SECRET="$(node -e 'process.stdout.write(require("crypto").ra
 export GELPOINT_LOG_LEVEL="${GELPOINT_LOG_LEVEL:-silent}"
 
 status=0
-typecheck=1 built=1 acyclic=1
+typecheck=1 built=1 acyclic=1 linted=1
 if [ $# -eq 0 ]; then
   say "type-checking every workspace (tsc -b, incremental)…"
   npx tsc -b tsconfig.json || { typecheck=0; status=1; }
@@ -23,6 +23,9 @@ if [ $# -eq 0 ]; then
   node docker-free-scripts/build.mjs || { built=0; status=1; }
   say "looking for import cycles…"
   node docker-free-scripts/check-cycles.mjs || { acyclic=0; status=1; }
+  say "linting (ESLint: the layout's boundaries, the rules of hooks) and checking the format (Prettier)…"
+  npx eslint . --cache --cache-location "$GELPOINT_DATA_DIR/eslintcache" --max-warnings 0 || { linted=0; status=1; }
+  npx prettier --check --cache --log-level warn . || { linted=0; status=1; }
 fi
 
 mkdir -p "$GELPOINT_DATA_DIR"
@@ -30,7 +33,7 @@ results="$GELPOINT_DATA_DIR/test-results.json"
 rm -f "$results"
 npx vitest run --reporter=default --reporter=json --outputFile.json="$results" "$@" || status=1
 if [ $# -eq 0 ]; then
-  node docker-free-scripts/test-totals.mjs "$results" "$typecheck" "$built" "$acyclic" || status=1
+  node docker-free-scripts/test-totals.mjs "$results" "$typecheck" "$built" "$acyclic" "$linted" || status=1
 else
   node docker-free-scripts/test-totals.mjs "$results" --tests-only || status=1
 fi
