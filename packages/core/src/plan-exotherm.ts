@@ -38,11 +38,26 @@ export interface PlanLayerForecast {
   curve: ForecastCurvePoint[];
 }
 
-export const planForecastVersion = 1;
+/**
+ * The forecast peak over a mould, kept small: a column's peak depends only on its resin depth (the
+ * depth classes of the whole-mould forecast), so a step table of depth bands paints any cell of the
+ * plan's depth map. Bands are sorted by depth; a column belongs to the first band whose upToMm is at
+ * or above its depth.
+ */
+export interface PlanPeakMap {
+  bands: { upToMm: number; peakC: number }[];
+  /** The hottest column of the whole pour, in the mould's frame (mm). */
+  hottest: { xMm: number; yMm: number; layerIndex: number; peakC: number; timeToPeakMin: number };
+}
+
+/** 2 added the mould's peak map; 1 (stored before it) reads the same without one. */
+export const planForecastVersion = 2;
+/** Versions a stored plan may carry; a new forecast is always planForecastVersion. */
+export type PlanForecastVersion = 1 | typeof planForecastVersion;
 
 export type PlanForecast =
   | {
-      version: typeof planForecastVersion;
+      version: PlanForecastVersion;
       available: true;
       /** The rate law and the numerical scheme, in words. */
       model: string;
@@ -57,8 +72,10 @@ export type PlanForecast =
       /** Shelf settings that were empty and took their default. */
       defaultsUsed: ExothermSettingField[];
       layers: PlanLayerForecast[];
+      /** A mould's peak map; absent for a quick shape and in forecasts stored before version 2. */
+      peakMap?: PlanPeakMap;
     }
-  | { version: typeof planForecastVersion; available: false; code: string; reason: string };
+  | { version: PlanForecastVersion; available: false; code: string; reason: string };
 
 const curvePoints = 48;
 
@@ -116,8 +133,57 @@ interface LayerInput {
   depthMap?: PlanDepthMap | undefined;
 }
 
-/** Each planned layer's forecast: a quick shape's uniform depth, or a mould's depth map by depth classes. */
-export function forecastPlanLayers(product: ResinSystem, input: LayerInput): Result<PlanLayerForecast[]> {
+export interface PlanLayersForecast {
+  layers: PlanLayerForecast[];
+  peakMap?: PlanPeakMap;
+}
+
+/** Depths to millimetre thousandths: finer than any depth map, coarse enough to keep the table short. */
+const bandDigits = 3;
+
+/**
+ * The step table of a mould's peak map: columns sorted by depth, runs of equal peak merged, each band
+ * ending half-way to the next band's shallowest column so a client's float depths fall on the right side.
+ */
+export function peakBandsOf(depthsMm: Float32Array, peakMap: Float32Array): PlanPeakMap['bands'] {
+  const order: number[] = [];
+  for (let k = 0; k < depthsMm.length; k++) if (depthsMm[k]! > 0 && Number.isFinite(peakMap[k]!)) order.push(k);
+  order.sort((a, b) => depthsMm[a]! - depthsMm[b]!);
+  const bands: { upToMm: number; peakC: number }[] = [];
+  let lastDepth = 0;
+  for (const k of order) {
+    const peakC = round(peakMap[k]!, 2);
+    const d = depthsMm[k]!;
+    const open = bands.at(-1);
+    if (open && open.peakC === peakC) {
+      lastDepth = d;
+      continue;
+    }
+    if (open) open.upToMm = round((lastDepth + d) / 2, bandDigits);
+    bands.push({ upToMm: d, peakC });
+    lastDepth = d;
+  }
+  const closing = bands.at(-1);
+  if (closing) closing.upToMm = round(lastDepth, bandDigits) + 10 ** -bandDigits;
+  return bands;
+}
+
+/** The painted peak of a column of this resin depth; null where no resin stands or beyond the table. */
+export function peakAtDepth(bands: PlanPeakMap['bands'], depthMm: number): number | null {
+  if (!(depthMm > 0) || bands.length === 0) return null;
+  let lo = 0;
+  let hi = bands.length - 1;
+  if (depthMm > bands[hi]!.upToMm) return null;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (bands[mid]!.upToMm >= depthMm) hi = mid;
+    else lo = mid + 1;
+  }
+  return bands[lo]!.peakC;
+}
+
+/** Each planned layer's forecast: a quick shape's uniform depth, or a mould's depth map by depth classes (with its peak map). */
+export function forecastPlanLayers(product: ResinSystem, input: LayerInput): Result<PlanLayersForecast> {
   const cal = calibratedProduct(product);
   if (!cal.ok) return cal;
   const resin = cal.value.calibration.resin;
@@ -141,7 +207,7 @@ export function forecastPlanLayers(product: ResinSystem, input: LayerInput): Res
         curve: curveOf(f.value.series),
       });
     }
-    return ok(out);
+    return ok({ layers: out });
   }
 
   const map = input.depthMap;
@@ -184,11 +250,25 @@ export function forecastPlanLayers(product: ResinSystem, input: LayerInput): Res
       curve: curveOf(f.value.series),
     });
   }
-  return ok(out);
+  const top = mould.value.hottest;
+  if (!top) return ok({ layers: out });
+  return ok({
+    layers: out,
+    peakMap: {
+      bands: peakBandsOf(depths, mould.value.peakMap),
+      hottest: {
+        xMm: map.originMm[0] + (top.i + 0.5) * map.cellMm[0],
+        yMm: map.originMm[1] + (top.j + 0.5) * map.cellMm[1],
+        layerIndex: top.layerIndex,
+        peakC: top.tempC,
+        timeToPeakMin: top.timeToPeakMin,
+      },
+    },
+  });
 }
 
 /** The forecast part of a plan: its layers, what it was calibrated to, and what it assumed. */
-export function planForecastOf(product: ResinSystem, shopTempC: number, maxLayer: { maxLayerMm: number; limitedBy: 'data_sheet' | 'forecast' }, layers: PlanLayerForecast[]): PlanForecast {
+export function planForecastOf(product: ResinSystem, shopTempC: number, maxLayer: { maxLayerMm: number; limitedBy: 'data_sheet' | 'forecast' }, forecast: PlanLayersForecast): PlanForecast {
   const cal = calibratedProduct(product);
   if (!cal.ok) return unavailable(cal.error.code, cal.error.message);
   const { settings, calibration } = cal.value;
@@ -204,7 +284,8 @@ export function planForecastOf(product: ResinSystem, shopTempC: number, maxLayer
     maxLayerMm: maxLayer.maxLayerMm,
     limitedBy: maxLayer.limitedBy,
     defaultsUsed: (Object.keys(settings.settings) as ExothermSettingField[]).filter((f) => settings.settings[f].isDefault),
-    layers,
+    layers: forecast.layers,
+    ...(forecast.peakMap ? { peakMap: forecast.peakMap } : {}),
   };
 }
 

@@ -162,7 +162,7 @@ function layersUnderForecast(input: PourPlanInput, deep: ResinSystem): Result<{ 
   for (let extra = 0; ; extra++) {
     const layers = forecastPlanLayers(deep, { slices: slices.value, fillLevelMm: input.fillLevelMm, shopTempC: input.shopTempC, depthMap: input.cavity.depthMap });
     if (!layers.ok) return ok({ slices, forecast: unavailable(layers.error.code, layers.error.message) });
-    if (!layers.value.some((l) => l.overLimit) || extra >= extraLayersTried) {
+    if (!layers.value.layers.some((l) => l.overLimit) || extra >= extraLayersTried) {
       return ok({ slices, forecast: planForecastOf(deep, input.shopTempC, max.value, layers.value) });
     }
     const first = slices.value[0]!;

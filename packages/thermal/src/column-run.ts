@@ -29,8 +29,10 @@ export interface ColumnRunInput {
   until: 'peak' | 'fixed';
   /** Keep every step's resin temperatures and conversions (for series). */
   record: boolean;
-  /** Stop as soon as any reacting node reaches this conversion (a pot-life clock). */
+  /** Stop as soon as the resin reaches this conversion (a pot-life clock). */
   stopAtConversion?: number;
+  /** Whose conversion stops the clock: the most-cured node (default) or the resin's volume-weighted mean. */
+  stopConversionOf?: 'first_node' | 'mean';
   /** Stop as soon as the peak passes this temperature (a search only needs to know that it did). */
   stopAboveC?: number;
 }
@@ -116,6 +118,14 @@ export function runColumn(input: ColumnRunInput): ColumnRun {
     return { node: best, c: temp[best]!, depthM: v.x };
   };
 
+  let reactingTotal = 0;
+  for (let i = 0; i < nr; i++) reactingTotal += grid.reactingVolume[i]!;
+  const meanConversion = () => {
+    let sum = 0;
+    for (let i = 0; i < nr; i++) sum += alpha[i]! * grid.reactingVolume[i]!;
+    return sum / reactingTotal;
+  };
+
   let t = 0;
   let dt = Math.min(1, input.maxStepS);
   let steps = 0;
@@ -183,7 +193,7 @@ export function runColumn(input: ColumnRunInput): ColumnRun {
       minAlpha = Math.min(minAlpha, alpha[i]!);
       maxAlpha = Math.max(maxAlpha, alpha[i]!);
     }
-    if (input.stopAtConversion !== undefined && maxAlpha >= input.stopAtConversion) {
+    if (input.stopAtConversion !== undefined && (input.stopConversionOf === 'mean' ? meanConversion() : maxAlpha) >= input.stopAtConversion) {
       conversionReachedS = t;
       break;
     }

@@ -36,8 +36,11 @@ export interface CupPotLife {
 /**
  * How long a mixed cup stays workable. The cup is modelled as a sphere of the same volume (the
  * shape that keeps heat best for its mass, so it errs hot), cooled by free convection (Churchill's
- * sphere correlation) and radiation; its pot life ends when its centre reaches the conversion a thin
- * film reaches within the data sheet's pot life. The cup's own heat only speeds the cure, and the
+ * sphere correlation) and radiation; its pot life ends when the cup as a whole (the mass-weighted mean
+ * conversion) reaches the conversion a thin film reaches within the data sheet's pot life. The centre
+ * alone would not do: past a few centimetres of radius every centre is adiabatic for the length of a
+ * pot life, so a 100 g and a 1000 g cup would run out together, while the share of the mass near the
+ * cooled wall, and with it the cup's mean heating, falls as the cup grows. The cup's own heat only speeds the cure, and the
  * answer is capped by the data sheet's pot life at the same temperature, so it is never longer.
  */
 export function cupPotLife(resin: ResinThermal, cup: CupInput): Result<CupPotLife> {
@@ -81,6 +84,7 @@ export function cupPotLife(resin: ResinThermal, cup: CupInput): Result<CupPotLif
     until: 'fixed',
     record: false,
     stopAtConversion: threshold,
+    stopConversionOf: 'mean',
   });
   const cupS = run.conversionReachedS ?? sheetAtAmbientS;
   const limitedBy = run.conversionReachedS !== null && cupS < sheetAtAmbientS ? 'cup_heating' : 'data_sheet';
