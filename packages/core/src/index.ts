@@ -15,6 +15,8 @@ export * from './pour-plan-rounding';
 export * from './cost';
 export * from './cautions';
 export * from './cup-rounding';
+export * from './lot-expiry';
+export * from './off-ratio';
 export * from './pour-plan';
 export * from './pour-plan-cautions';
 export * from './dew-point';

@@ -11,7 +11,7 @@ import { pigmentView, resinSystemColumns, resinSystemView } from './shelf-views'
 
 const IdParams = z.object({ id: Id });
 
-export function shelfRoutes(api: RouteRegistry, ds: DataSource): void {
+export function shelfRoutes(api: RouteRegistry, ds: DataSource, now: () => Date = () => new Date()): void {
   const resins = new Catalogue(ds, ResinSystem, 'resin_system', resinSystemView, resinSystemSortColumns);
   const pigments = new Catalogue(ds, Pigment, 'pigment', pigmentView, pigmentSortColumns);
 
@@ -45,9 +45,9 @@ export function shelfRoutes(api: RouteRegistry, ds: DataSource): void {
   });
 
   const lots = '/shelf/lots';
-  api.add({ method: 'get', path: lots, tag: 'shelf', summary: 'Lots on the shelf, sorted by the chosen column (soonest expiry unless told), then paged', access: 'member', query: LotListQuery, response: Page(LotView) }, ({ auth, query }) => listLots(ds, auth.shopId, query));
+  api.add({ method: 'get', path: lots, tag: 'shelf', summary: 'Lots on the shelf, sorted by the chosen column (soonest expiry unless told), then paged', access: 'member', query: LotListQuery, response: Page(LotView) }, ({ auth, query }) => listLots(ds, auth.shopId, query, now()));
   api.add({ method: 'post', path: lots, tag: 'shelf', summary: 'Receive a lot of part A, part B or a pigment', access: ['lead'], body: LotInput, response: LotView, status: 201, idempotent: true }, ({ auth, body }) => createLot(ds, auth, body));
-  api.add({ method: 'get', path: `${lots}/:id`, tag: 'shelf', summary: 'One lot', access: 'member', params: IdParams, response: LotView }, ({ auth, params }) => getLot(ds, auth.shopId, params.id));
+  api.add({ method: 'get', path: `${lots}/:id`, tag: 'shelf', summary: 'One lot', access: 'member', params: IdParams, response: LotView }, ({ auth, params }) => getLot(ds, auth.shopId, params.id, now()));
   api.add({ method: 'patch', path: `${lots}/:id`, tag: 'shelf', summary: 'Correct a lot (number, remaining stock, expiry, notes)', access: ['lead'], params: IdParams, body: LotUpdate, response: LotView }, ({ auth, params, body }) =>
     updateLot(ds, auth, params.id, body),
   );
