@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { RouteRegistry } from '../../http/route-registry';
 import { AppError } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
-import { rotateCalendarToken } from './calendar-token';
+import { lockedMembershipId, rotateCalendarToken } from './calendar-token';
 import type { CalendarFeeds } from './calendar.service';
 
 // The feed's token is its key, like an invitation's: a bearer capability in the path.
@@ -35,9 +35,10 @@ export function calendarRoutes(api: RouteRegistry, ds: DataSource, feeds: Calend
     { method: 'post', path: '/me/calendar/rotate', tag: 'calendar', summary: 'Replace your calendar feed URL: the old one answers 404 from now on', access: 'member', response: CalendarUrl },
     ({ auth }) =>
       ds.transaction(async (m) => {
-        const rows: { id: string }[] = await m.query('SELECT id FROM memberships WHERE user_id = $1 AND shop_id = $2 FOR UPDATE', [auth.userId, auth.shopId]);
-        const calendarUrl = await rotateCalendarToken(m, rows[0]!.id, settings.jwtSecret, settings.publicUrl);
-        await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'calendar.rotate', objectType: 'member', objectId: rows[0]!.id });
+        const membershipId = await lockedMembershipId(m, auth.userId, auth.shopId);
+        if (!membershipId) throw new AppError('not_found', 'not_found', 'you are no longer a member of this shop');
+        const calendarUrl = await rotateCalendarToken(m, membershipId, settings.jwtSecret, settings.publicUrl);
+        await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'calendar.rotate', objectType: 'member', objectId: membershipId });
         return { calendarUrl };
       }),
   );
