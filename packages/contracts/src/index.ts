@@ -9,6 +9,8 @@ export * from './health';
 export * from './shelf';
 export * from './molds';
 export * from './exotherm';
+export * from './plan-forecast';
+export * from './pour-plan-result';
 export * from './pour-plans';
 export * from './pours';
 export * from './permissions';

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { offRatioPct, roundCupOnRatio } from './cup-rounding';
+import { roundCupOnRatio } from './cup-rounding';
+import { offRatioPct } from './off-ratio';
 
 describe('cups rounded to the scale on the product ratio', () => {
   it('keeps a small 100:45 seal-coat cup near its ratio on a 1 g scale', () => {

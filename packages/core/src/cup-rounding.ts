@@ -45,10 +45,3 @@ export function roundCupOnRatio(exactAG: number, exactBG: number, pigmentPct: nu
   return { aG, bG, pigmentG, ratioErrorPct: (aG / bG / ratio - 1) * 100 };
 }
 
-/** The signed error of a weighed cup against the product's ratio by mass, in percent (+: too much A). */
-export function offRatioPct(weighedAG: number, weighedBG: number, massRatioAToB: number): number {
-  return (weighedAG / weighedBG / massRatioAToB - 1) * 100;
-}
-
-/** The shop's off-ratio tolerance when none is given: the shop setting's own default, in percent. */
-export const defaultOffRatioTolerancePct = 3;

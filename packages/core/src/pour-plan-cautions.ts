@@ -1,7 +1,7 @@
 import { caution, handlingCautions, type Caution } from './cautions';
 import { timesAtTemperature } from './cure-model';
 import { surfaceDewPointCheck } from './dew-point';
-import { defaultOffRatioTolerancePct } from './cup-rounding';
+import { defaultOffRatioTolerancePct } from './off-ratio';
 import type { PlannedBatch, PourPlan, PourPlanInput } from './pour-plan-types';
 import { ok, type Result } from './result';
 import type { ResinSystem } from './shelf';

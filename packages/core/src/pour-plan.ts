@@ -1,5 +1,6 @@
 import { batchCount } from './batches';
-import { defaultOffRatioTolerancePct, roundCupOnRatio } from './cup-rounding';
+import { roundCupOnRatio } from './cup-rounding';
+import { defaultOffRatioTolerancePct } from './off-ratio';
 import { timesAtTemperature } from './cure-model';
 import { woodCost } from './cost';
 import { splitIntoLayers, type LayerSlice } from './layers';

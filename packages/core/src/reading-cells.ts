@@ -61,6 +61,18 @@ export function parseDecimal(text: string): number {
   return decimal.test(plain) ? Number(plain) : Number.NaN;
 }
 
+/**
+ * A number as a person types it in a form field, read by parseDecimal's grammar: blanks around it are dropped and
+ * one decimal comma is read as a point (212,4). Null for an empty field and for anything that is not a plain finite
+ * decimal: 0x10, 1e999, 12 g, 1.2.3. Imported files use parseDecimal itself, where a comma separates fields.
+ */
+export function readDecimal(text: string): number | null {
+  const trimmed = text.trim();
+  if (trimmed === '') return null;
+  const value = parseDecimal(trimmed.replace(',', '.'));
+  return Number.isFinite(value) ? value : null;
+}
+
 /** A temperature in °C written as a plain decimal (no hex, no "Infinity"), above absolute zero. */
 export function readTempCell(text: string): Result<number> {
   const tempC = parseDecimal(text);

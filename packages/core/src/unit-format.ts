@@ -1,6 +1,7 @@
 import { convertLength, convertMass, convertTemperature, convertVolume } from './units';
+import { unitSystemUnits, type UnitSystem } from './unit-systems';
 
-export type UnitSystem = 'metric' | 'us';
+export type { UnitSystem } from './unit-systems';
 /** What the shop's scale reads to; weighed masses are rounded to it. */
 export type ScaleResolutionG = 0.1 | 1;
 
@@ -51,15 +52,18 @@ export function formatMass(massG: number, unitSystem: UnitSystem): DisplayQuanti
  */
 export function formatWeighedMass(massG: number, unitSystem: UnitSystem, scaleResolutionG: ScaleResolutionG): DisplayQuantity {
   const grams = roundToScale(massG, scaleResolutionG);
-  if (unitSystem === 'metric') return show(grams, scaleResolutionG === 1 ? 0 : 1, 'g');
+  const { unit, symbol } = unitSystemUnits[unitSystem].mass;
+  if (unitSystem === 'metric') return show(grams, scaleResolutionG === 1 ? 0 : 1, symbol);
   // 0.1 g is about 0.0035 oz and 1 g about 0.035 oz: one more decimal than that step would hide it.
-  return show(convertMass(grams, 'g', 'oz'), scaleResolutionG === 1 ? 2 : 3, 'oz');
+  return show(convertMass(grams, 'g', unit), scaleResolutionG === 1 ? 2 : 3, symbol);
 }
 
 export function formatLength(lengthMm: number, unitSystem: UnitSystem): DisplayQuantity {
-  return unitSystem === 'metric' ? show(lengthMm, 1, 'mm') : show(convertLength(lengthMm, 'mm', 'in'), 3, 'in');
+  const { unit, symbol } = unitSystemUnits[unitSystem].length;
+  return show(convertLength(lengthMm, 'mm', unit), unitSystem === 'metric' ? 1 : 3, symbol);
 }
 
 export function formatTemperature(tempC: number, unitSystem: UnitSystem): DisplayQuantity {
-  return unitSystem === 'metric' ? show(tempC, 1, '°C') : show(convertTemperature(tempC, 'C', 'F'), 1, '°F');
+  const { unit, symbol } = unitSystemUnits[unitSystem].temperature;
+  return show(convertTemperature(tempC, 'C', unit), 1, symbol);
 }

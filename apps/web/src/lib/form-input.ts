@@ -1,4 +1,4 @@
-import { parseDecimal } from '@gelpoint/core';
+import { readDecimal } from '@gelpoint/core';
 
 /**
  * Form inputs hand over text. A required number left empty becomes NaN, which the contract refuses with its own
@@ -7,15 +7,14 @@ import { parseDecimal } from '@gelpoint/core';
  */
 export function requiredNumber(raw: unknown): number {
   if (typeof raw === 'number') return raw;
-  const text = String(raw ?? '').trim().replace(',', '.');
-  return text === '' ? Number.NaN : parseDecimal(text);
+  return readDecimal(String(raw ?? '')) ?? Number.NaN;
 }
 
 export function optionalNumber(raw: unknown): number | null {
   if (raw === null || raw === undefined) return null;
   if (typeof raw === 'number') return Number.isNaN(raw) ? null : raw;
-  const text = String(raw).trim().replace(',', '.');
-  return text === '' ? null : parseDecimal(text);
+  const text = String(raw);
+  return text.trim() === '' ? null : (readDecimal(text) ?? Number.NaN);
 }
 
 export function optionalText(raw: unknown): string | null {

@@ -5,7 +5,7 @@ import { calendarUrlOf } from '../calendar/calendar-token';
 import type { RouteRegistry } from '../../http/route-registry';
 import { recordAudit } from '../audit/audit.service';
 import { confirmPasswordReset, login, register, requestPasswordReset, type AuthSettings } from './auth.service';
-import { clearSessionCookie, describeMe, openSession, revokeSessions, setSessionCookie } from './session.service';
+import { clearSessionCookie, describeMe, openSession, revokeSession, revokeSessions, setSessionCookie } from './session.service';
 
 export function authRoutes(api: RouteRegistry, ds: DataSource, s: AuthSettings): void {
   const ua = (req: { get(h: string): string | undefined }) => req.get('user-agent') ?? '';
@@ -23,7 +23,7 @@ export function authRoutes(api: RouteRegistry, ds: DataSource, s: AuthSettings):
     },
     logout: async ({ auth, res }) => {
       await ds.transaction(async (m) => {
-        await m.query('UPDATE sessions SET revoked_at = now() WHERE id = $1 AND revoked_at IS NULL', [auth.sessionId]);
+        await revokeSession(m, auth.sessionId);
         await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'session.close', objectType: 'user', objectId: auth.userId });
       });
       clearSessionCookie(res, s);
@@ -39,7 +39,7 @@ export function authRoutes(api: RouteRegistry, ds: DataSource, s: AuthSettings):
       ds.transaction(async (m) => {
         const user = await m.findOneByOrFail(User, { id: auth.userId });
         const session = await openSession(m, s, user, body.shopId, ua(req));
-        await m.query('UPDATE sessions SET revoked_at = now() WHERE id = $1', [auth.sessionId]);
+        await revokeSession(m, auth.sessionId);
         setSessionCookie(res, s, session);
         return session;
       }),

@@ -71,3 +71,8 @@ export async function describeMe(m: EntityManager, userId: string, shopId: strin
     calendarUrl,
   };
 }
+
+/** Ends one session for good (sign-out, or a shop switch that replaces it); an ended one stays as it was. */
+export async function revokeSession(m: EntityManager, sessionId: string): Promise<void> {
+  await m.query('UPDATE sessions SET revoked_at = now() WHERE id = $1 AND revoked_at IS NULL', [sessionId]);
+}

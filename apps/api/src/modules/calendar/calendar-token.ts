@@ -29,3 +29,9 @@ export async function rotateCalendarToken(m: EntityManager, membershipId: string
   await m.query('UPDATE memberships SET calendar_token_salt = $2, calendar_token_hash = $3 WHERE id = $1', [membershipId, salt, feedTokenHash(token)]);
   return feedUrl(publicUrl, token);
 }
+
+/** The id of the member's membership in the shop, locked for the rest of the transaction. */
+export async function lockedMembershipId(m: EntityManager, userId: string, shopId: string): Promise<string | null> {
+  const rows: { id: string }[] = await m.query('SELECT id FROM memberships WHERE user_id = $1 AND shop_id = $2 FOR UPDATE', [userId, shopId]);
+  return rows[0]?.id ?? null;
+}

@@ -3,7 +3,7 @@ import { calendarRoutes as routes } from '@gelpoint/contracts';
 import type { RouteRegistry } from '../../http/route-registry';
 import { AppError } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
-import { rotateCalendarToken } from './calendar-token';
+import { lockedMembershipId, rotateCalendarToken } from './calendar-token';
 import type { CalendarFeeds } from './calendar.service';
 
 export function calendarRoutes(api: RouteRegistry, ds: DataSource, feeds: CalendarFeeds, settings: { jwtSecret: string; publicUrl: string }): void {
@@ -20,9 +20,10 @@ export function calendarRoutes(api: RouteRegistry, ds: DataSource, feeds: Calend
     },
     rotateCalendar: ({ auth }) =>
       ds.transaction(async (m) => {
-        const rows: { id: string }[] = await m.query('SELECT id FROM memberships WHERE user_id = $1 AND shop_id = $2 FOR UPDATE', [auth.userId, auth.shopId]);
-        const calendarUrl = await rotateCalendarToken(m, rows[0]!.id, settings.jwtSecret, settings.publicUrl);
-        await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'calendar.rotate', objectType: 'member', objectId: rows[0]!.id });
+        const membershipId = await lockedMembershipId(m, auth.userId, auth.shopId);
+        if (!membershipId) throw new AppError('not_found', 'not_found', 'you are no longer a member of this shop');
+        const calendarUrl = await rotateCalendarToken(m, membershipId, settings.jwtSecret, settings.publicUrl);
+        await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'calendar.rotate', objectType: 'member', objectId: membershipId });
         return { calendarUrl };
       }),
   });

@@ -9,6 +9,7 @@ import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { quickShapeCavity } from './plan-cavity';
 import { measuredFromFloor, storedInputs, type MoldCavityLookup } from './plan-level';
+import { storedPlanResult } from './stored-plan-result';
 
 export type { MoldCavityLookup };
 
@@ -64,11 +65,15 @@ async function compute(m: EntityManager, shopId: string, input: PlanInput, moldC
 }
 
 /** Everything weighed for the piece: the seal coat and the deep pour. */
-function totalGramsOf(plan: CorePourPlan): number {
-  return (plan.sealCoat?.totals.totalGrams ?? 0) + (plan.deepPour?.totals.totalGrams ?? 0);
+function totalGramsOf(plan: Pick<CorePourPlan, 'sealCoat' | 'deepPour'>): number {
+  return (plan.sealCoat?.totals.totalGrams ?? 0) + plan.deepPour.totals.totalGrams;
 }
 
 function view(p: PourPlan, inputs: Record<string, unknown> = p.inputs): PourPlanView {
+  return { ...summaryOf(p, inputs), result: storedPlanResult(p.result) };
+}
+
+function summaryOf(p: PourPlan, inputs: Record<string, unknown> = p.inputs): Omit<PourPlanView, 'result'> {
   return {
     id: p.id,
     pieceId: p.pieceId,
@@ -76,11 +81,10 @@ function view(p: PourPlan, inputs: Record<string, unknown> = p.inputs): PourPlan
     name: p.name,
     inputs,
     productSnapshot: p.productSnapshot,
-    result: p.result,
     createdBy: p.createdBy ? { id: p.createdBy.id, name: p.createdBy.name } : null,
     createdAt: p.createdAt.toISOString(),
     updatedAt: p.updatedAt.toISOString(),
-  } as PourPlanView;
+  };
 }
 
 interface ShopScale {
@@ -112,8 +116,8 @@ export class PourPlans {
     return {
       total,
       items: rows.map((p) => {
-        const { result, inputs: _i, productSnapshot: _s, ...rest } = view(p);
-        return { ...rest, totalGrams: totalGramsOf(result as unknown as CorePourPlan) };
+        const { inputs: _i, productSnapshot: _s, ...rest } = summaryOf(p);
+        return { ...rest, totalGrams: totalGramsOf(storedPlanResult(p.result)) };
       }),
     };
   }

@@ -2,7 +2,8 @@ import type { DataSource, EntityManager } from 'typeorm';
 import {
   dewPointC,
   massRatioAToB,
-  offRatioPct as offRatioPctOf,
+  lotExpired,
+  offRatioCheck,
   parseIsoInstant,
   plannedBatches,
   planSteps,
@@ -48,7 +49,6 @@ export interface LogBatchInput {
 
 type Warning = { code: string; message: string };
 
-const today = (now: Date) => now.toISOString().slice(0, 10);
 
 /** How long before a pour was set up in Gelpoint its first cups may be logged (mixed first, logged later). */
 const retroLogWindowMs = 30 * 24 * 3_600_000;
@@ -119,6 +119,7 @@ export class PourLog {
       // A confirmed question stays on the cup, so the log shows it was asked and answered.
       const warnings: Warning[] = concerns.map((c) => ({ code: c.code, message: `Confirmed when logged: ${c.message}` }));
 
+      const shop = await m.findOneByOrFail(Shop, { id: auth.shopId });
       const lots = { A: input.lotAId, B: input.lotBId, pigment: input.lotPigmentId } as const;
       const lotNumbers = { A: input.lotANumber, B: input.lotBNumber, pigment: input.lotPigmentNumber };
       const grams = { A: input.weighedAG, B: input.weighedBG, pigment: weighedPigmentG };
@@ -128,7 +129,7 @@ export class PourLog {
         const lot = await m.findOne(Lot, { where: { id: lotId, shopId: auth.shopId }, lock: { mode: 'pessimistic_write' } });
         if (!lot) throw new AppError('not_found', 'not_found', `no such lot (part ${part}) on this shop's shelf`);
         if (lot.part !== part) throw new AppError('bad_request', 'invalid_input', `lot ${lot.lotNumber} is a part ${lot.part} lot, not part ${part}`, { [`lot${part === 'pigment' ? 'Pigment' : part}Id`]: 'wrong part' });
-        if (lot.expiresOn && lot.expiresOn < today(now)) {
+        if (lotExpired(lot.expiresOn, mixedAt.getTime(), shop.timeZone)) {
           if (!input.acknowledgeExpiredLot) {
             throw new AppError('conflict', 'expired_lot_unacknowledged', `lot ${lot.lotNumber} expired on ${lot.expiresOn}; confirm that you want to use it (test a small cup first), or pick another lot`);
           }
@@ -138,12 +139,12 @@ export class PourLog {
         // Stock is drawn down by what was weighed; it never goes below zero.
         await m.query('UPDATE lots SET remaining_g = GREATEST(0, remaining_g - $2), updated_at = now() WHERE id = $1', [lot.id, grams[part]]);
       }
-      const shop = await m.findOneByOrFail(Shop, { id: auth.shopId });
       // The product's own ratio by mass, not the cup's rounded targets: a weighed cup is checked against the chemistry.
       const product = productOfBatch(l, planned);
       const targetRatio = massRatioAToB(product.mixRatio, product.densityAGPerMl, product.densityBGPerMl);
-      const offRatioPct = offRatioPctOf(input.weighedAG, input.weighedBG, targetRatio);
-      if (Math.abs(offRatioPct) > shop.offRatioTolerancePct) {
+      const offRatio = offRatioCheck({ partAG: input.weighedAG, partBG: input.weighedBG }, targetRatio, shop.offRatioTolerancePct);
+      const offRatioPct = offRatio?.signedPct ?? 0;
+      if (offRatio?.beyondTolerance) {
         warnings.push({
           code: 'off_ratio',
           message: `Off ratio: A:B weighed ${(input.weighedAG / input.weighedBG).toFixed(3)} against ${targetRatio.toFixed(3)} for ${product.mixRatio.a}:${product.mixRatio.b} by ${product.mixRatio.basis} (${offRatioPct > 0 ? '+' : ''}${offRatioPct.toFixed(1)} %, tolerance ${shop.offRatioTolerancePct} %). An off-ratio cup may never cure: follow the TDS, and do not pour it if in doubt.`,

@@ -2,6 +2,7 @@ import type { EntityManager } from 'typeorm';
 import type { CureReading, PlanSnapshot, PourPlan as CorePourPlan, ReleaseCheck, ShopHours } from '@gelpoint/core';
 import { Piece, Pour, PourPlan, Shop } from '@gelpoint/db';
 import { notFound } from '../../http/errors';
+import { storedPlanResult } from '../pour-plans/stored-plan-result';
 
 /** A pour with what its cure is worked out from: the piece, the plan, and the plan's stored result and products. */
 export interface LoadedPour {
@@ -26,7 +27,7 @@ export interface LoggedStep {
 }
 
 export function loadedOf(pour: Pour, plan: PourPlan, piece: Piece): LoadedPour {
-  return { pour, piece, plan, result: plan.result as unknown as CorePourPlan, snapshot: plan.productSnapshot as unknown as PlanSnapshot };
+  return { pour, piece, plan, result: storedPlanResult(plan.result), snapshot: plan.productSnapshot as unknown as PlanSnapshot };
 }
 
 export async function loadPour(m: EntityManager, shopId: string, id: string, lock = false): Promise<LoadedPour> {

@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from 'node:crypto';
-import { In, type DataSource, type EntityManager } from 'typeorm';
-import { CureCheck, Piece, Pour, PourBatch, PourPlan, Reminder, TemperatureReading, type CureCheckStage, type PieceStage } from '@gelpoint/db';
+import type { DataSource } from 'typeorm';
+import type { CureCheckStage, Reminder } from '@gelpoint/db';
 import type { PourSummary, PourView, ReminderView, TodayView } from '@gelpoint/contracts';
 import type { z } from 'zod';
 import type { AuthContext } from '../../http/auth-context';
@@ -8,10 +8,28 @@ import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { UploadQuota } from '../uploads/upload-quota';
 import { loadPourState, pourStateOf, refreshReminders, type PourState } from './pour-cure-state';
-import { cureSettingsOf, groupByPour, loadedOf, loadPour, makerAndLeadsOf, shopHoursOf, type LoadedPour } from './pour-queries';
+import { cureSettingsOf, loadedOf, loadPour, makerAndLeadsOf, shopHoursOf, type LoadedPour } from './pour-queries';
 import { markReminderDone, queueNotice } from './pour-reminders';
 import { shopTemperatureFor } from './shop-temperature-of';
 import { batchView, cureView, flagsOf, namesOf, readingView, reminderView, type Names } from './pour-view';
+import {
+  activeMembersAmong,
+  cureCheckPhoto,
+  dueReminders,
+  insertCureCheck,
+  insertPour,
+  openPourCount,
+  pourLogOf,
+  pourPage,
+  pourPageDetails,
+  pourPlanOf,
+  reminderById,
+  setIngestTokenHash,
+  setPieceStage,
+  shopOfIngestTokenHash,
+  updatePour,
+  type PourListFilter,
+} from './pours.queries';
 
 const tokenHash = (t: string) => createHash('sha256').update(t).digest('hex');
 
@@ -22,10 +40,6 @@ export class Pours {
     private readonly now: () => Date = () => new Date(),
     private readonly quota = new UploadQuota(),
   ) {}
-
-  private async setPieceStage(m: EntityManager, pieceId: string, stage: PieceStage) {
-    await m.update(Piece, { id: pieceId }, { stage });
-  }
 
   private summaryOf(l: LoadedPour, { state, release, batchesLogged, batchesPlanned }: PourState, next: Reminder | null, flags: PourSummary['flags'], names: Names): PourSummary {
     return {
@@ -46,10 +60,7 @@ export class Pours {
     const m = this.ds.manager;
     const l = await loadPour(m, shopId, id);
     const state = await loadPourState(m, l, this.now());
-    const batches = await m.find(PourBatch, { where: { pourId: id }, order: { planBatchIndex: 'ASC', createdAt: 'ASC' } });
-    const readings = await m.find(TemperatureReading, { where: { pourId: id }, order: { takenAt: 'ASC', createdAt: 'ASC' } });
-    const checks = await m.find(CureCheck, { where: { pourId: id }, order: { checkedAt: 'ASC' } });
-    const reminders = await m.find(Reminder, { where: { pourId: id }, order: { dueAt: 'ASC' } });
+    const { batches, readings, checks, reminders } = await pourLogOf(m, id);
     const next = reminders.find((r) => r.status === 'pending' && r.doneAt === null) ?? null;
     const names = await namesOf(m, [
       ...l.pour.notifyUserIds,
@@ -83,47 +94,10 @@ export class Pours {
     };
   }
 
-  async list(shopId: string, q: { status: 'active' | 'released' | 'machined' | 'all'; readyToday: 'true' | 'false'; pieceId?: string; pourPlanId?: string; limit: number; offset: number }) {
-    const qb = this.ds.getRepository(Pour).createQueryBuilder('p').where('p.shop_id = :shopId', { shopId });
-    if (q.status === 'active') qb.andWhere(`p.status = 'open'`);
-    else if (q.status !== 'all') qb.andWhere('p.status = :s', { s: q.status });
-    if (q.pieceId) qb.andWhere('p.piece_id = :pieceId', { pieceId: q.pieceId });
-    if (q.pourPlanId) qb.andWhere('p.pour_plan_id = :pourPlanId', { pourPlanId: q.pourPlanId });
-    if (q.readyToday === 'true') {
-      // Ready today: open pours whose ready-to-machine reminder falls before the end of the day.
-      qb.andWhere(`p.status = 'open'`).andWhere(
-        `EXISTS (SELECT 1 FROM reminders r WHERE r.pour_id = p.id AND r.kind = 'ready_to_machine' AND r.status <> 'cancelled' AND r.due_at < date_trunc('day', now()) + interval '1 day')`,
-      );
-    }
-    const [pours, total] = await qb.orderBy('p.createdAt', 'DESC').addOrderBy('p.id').take(q.limit).skip(q.offset).getManyAndCount();
-    // Everything the page shows in a fixed number of queries, whatever its length: plans, pieces, and the logged
-    // batches, readings, checks and next reminder of every pour on it.
+  async list(shopId: string, q: PourListFilter) {
+    const [pours, total] = await pourPage(this.ds, shopId, q);
     const m = this.ds.manager;
-    const ids = pours.map((p) => p.id);
-    const plans = new Map((await m.findBy(PourPlan, { id: In(pours.map((p) => p.pourPlanId)) })).map((p) => [p.id, p]));
-    const pieces = new Map((await m.findBy(Piece, { id: In(pours.map((p) => p.pieceId)) })).map((p) => [p.id, p]));
-    const batches = groupByPour<{ pour_id: string; step: string; mixed_at: Date; warnings: { code: string }[]; voided: boolean }>(
-      ids.length ? await m.query('SELECT pour_id, step, mixed_at, warnings, voided_at IS NOT NULL AS voided FROM pour_batches WHERE pour_id = ANY($1)', [ids]) : [],
-    );
-    const readings = groupByPour<{ pour_id: string; taken_at: Date; temp_c: number; voided: boolean }>(
-      ids.length ? await m.query('SELECT pour_id, taken_at, temp_c, voided_at IS NOT NULL AS voided FROM temperature_readings WHERE pour_id = ANY($1) ORDER BY pour_id, taken_at', [ids]) : [],
-    );
-    const checks = groupByPour<{ pour_id: string; checked_at: Date; hardness_shore_d: number | null; stage: string }>(
-      ids.length ? await m.query('SELECT pour_id, checked_at, hardness_shore_d, stage FROM cure_checks WHERE pour_id = ANY($1)', [ids]) : [],
-    );
-    const next = ids.length
-      ? await m
-          .getRepository(Reminder)
-          .createQueryBuilder('r')
-          .distinctOn(['r.pourId'])
-          .where('r.pourId IN (:...ids)', { ids })
-          .andWhere(`r.status = 'pending'`)
-          .andWhere('r.doneAt IS NULL')
-          .orderBy('r.pourId')
-          .addOrderBy('r.dueAt', 'ASC')
-          .getMany()
-      : [];
-    const nextOf = new Map(next.map((r) => [r.pourId, r]));
+    const { plans, pieces, batches, readings, checks, nextOf } = await pourPageDetails(m, pours);
     const settings = await cureSettingsOf(m, shopId);
     const now = this.now();
     const assumedFor = await shopTemperatureFor(m, shopId, now);
@@ -147,14 +121,14 @@ export class Pours {
 
   async start(auth: AuthContext, pourPlanId: string, notifyUserIds?: string[]): Promise<PourView> {
     const id = await this.ds.transaction(async (m) => {
-      const plan = await m.findOneBy(PourPlan, { id: pourPlanId, shopId: auth.shopId });
+      const plan = await pourPlanOf(m, auth.shopId, pourPlanId);
       if (!plan) throw notFound('pour plan');
       const wanted = notifyUserIds ?? [...new Set([auth.userId, plan.createdById].filter((x): x is string => Boolean(x)))];
-      const members: { user_id: string }[] = await m.query(`SELECT user_id FROM memberships WHERE shop_id = $1 AND status = 'active' AND user_id = ANY($2)`, [auth.shopId, wanted]);
+      const members = await activeMembersAmong(m, auth.shopId, wanted);
       if (members.length !== wanted.length) throw new AppError('bad_request', 'invalid_input', 'everyone to notify must be an active member of this shop', { notifyUserIds: 'not all are members' });
       const inputs = plan.inputs as { shopTempC?: number };
-      const pour = await m.save(m.create(Pour, { shopId: auth.shopId, pieceId: plan.pieceId, pourPlanId: plan.id, status: 'open', assumedTempC: inputs.shopTempC ?? 20, notifyUserIds: wanted, startedById: auth.userId }));
-      await this.setPieceStage(m, plan.pieceId, 'pouring');
+      const pour = await insertPour(m, { shopId: auth.shopId, pieceId: plan.pieceId, pourPlanId: plan.id, status: 'open', assumedTempC: inputs.shopTempC ?? 20, notifyUserIds: wanted, startedById: auth.userId });
+      await setPieceStage(m, plan.pieceId, 'pouring');
       await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'pour.start', objectType: 'pour', objectId: pour.id, detail: { pourPlanId } });
       return pour.id;
     });
@@ -165,8 +139,7 @@ export class Pours {
     return this.ds.transaction(async (m) => {
       const l = await loadPour(m, auth.shopId, pourId, true);
       if (photo) await this.quota.reserve(m, auth.userId, photo.bytes.length);
-      const check = await m.save(
-        m.create(CureCheck, {
+      const check = await insertCureCheck(m, {
           shopId: auth.shopId,
           pourId,
           checkedAt: input.checkedAt ? new Date(input.checkedAt) : this.now(),
@@ -176,8 +149,7 @@ export class Pours {
           photoType: photo?.type ?? null,
           photo: photo?.bytes ?? null,
           checkedById: auth.userId,
-        }),
-      );
+      });
       // A check at a stage is the logged step of that stage's reminder (a demold check).
       await refreshReminders(m, l, this.now());
       await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'cure_check.add', objectType: 'pour', objectId: pourId, detail: { stage: input.stage } });
@@ -186,9 +158,9 @@ export class Pours {
   }
 
   async photo(shopId: string, pourId: string, checkId: string): Promise<{ bytes: Buffer; type: string }> {
-    const rows: { photo: Buffer | null; photo_type: string | null }[] = await this.ds.query('SELECT photo, photo_type FROM cure_checks WHERE id = $1 AND pour_id = $2 AND shop_id = $3', [checkId, pourId, shopId]);
-    if (!rows[0]?.photo || !rows[0].photo_type) throw notFound('photo');
-    return { bytes: rows[0].photo, type: rows[0].photo_type };
+    const photo = await cureCheckPhoto(this.ds, shopId, pourId, checkId);
+    if (!photo) throw notFound('photo');
+    return photo;
   }
 
   async release(auth: AuthContext, pourId: string): Promise<PourView> {
@@ -200,8 +172,8 @@ export class Pours {
       if (!release.allowed) {
         throw new AppError('conflict', 'not_ready', `The log does not show this piece ready to machine yet. ${release.reasons.join(' ')}`);
       }
-      await m.update(Pour, { id: pourId }, { status: 'released', releasedAt: now, releasedById: auth.userId });
-      await this.setPieceStage(m, l.piece.id, 'released');
+      await updatePour(m, pourId, { status: 'released', releasedAt: now, releasedById: auth.userId });
+      await setPieceStage(m, l.piece.id, 'released');
       l.pour.status = 'released';
       await refreshReminders(m, l, now);
       const recipients = await makerAndLeadsOf(m, auth.shopId, l.plan.createdById);
@@ -224,9 +196,9 @@ export class Pours {
       if (l.pour.status === 'open') throw new AppError('conflict', 'not_released', 'release the piece for machining first');
       const now = this.now();
       const machinedAt = input.machinedAt ? new Date(input.machinedAt) : now;
-      await m.update(Pour, { id: pourId }, { status: 'machined', machinedAt, finishCoats: input.finishCoats, finishCoatIntervalH: input.hoursBetweenCoats });
+      await updatePour(m, pourId, { status: 'machined', machinedAt, finishCoats: input.finishCoats, finishCoatIntervalH: input.hoursBetweenCoats });
       Object.assign(l.pour, { status: 'machined', machinedAt, finishCoats: input.finishCoats, finishCoatIntervalH: input.hoursBetweenCoats });
-      await this.setPieceStage(m, l.piece.id, input.finishCoats > 0 ? 'finishing' : 'done');
+      await setPieceStage(m, l.piece.id, input.finishCoats > 0 ? 'finishing' : 'done');
       await refreshReminders(m, l, now);
       const recipients = await makerAndLeadsOf(m, auth.shopId, l.plan.createdById);
       const coats = input.finishCoats > 0 ? `; ${input.finishCoats} finish coat${input.finishCoats === 1 ? '' : 's'} to go` : '';
@@ -238,24 +210,10 @@ export class Pours {
 
   /** What is due in the next 24 hours or overdue and not done, with what was sent in the last 24 hours. */
   async today(shopId: string): Promise<z.infer<typeof TodayView>> {
-    const reminders = await this.ds
-      .getRepository(Reminder)
-      .createQueryBuilder('r')
-      .innerJoin(Pour, 'p', 'p.id = r.pour_id')
-      .innerJoin(Piece, 'pc', 'pc.id = p.piece_id')
-      .addSelect('pc.name', 'piece_name')
-      .where('r.shop_id = :shopId', { shopId })
-      .andWhere(`r.status <> 'cancelled'`)
-      .andWhere('r.done_at IS NULL')
-      .andWhere(`r.due_at < now() + interval '24 hours'`)
-      .andWhere(`(r.status = 'pending' OR r.sent_at > now() - interval '24 hours')`)
-      .orderBy('r.due_at')
-      .limit(200)
-      .getRawAndEntities();
-    const open: { n: number }[] = await this.ds.query(`SELECT count(*)::int AS n FROM pours WHERE shop_id = $1 AND status = 'open'`, [shopId]);
+    const due = await dueReminders(this.ds, shopId);
     return {
-      due: reminders.entities.map((r, i) => ({ ...reminderView(r), pourId: r.pourId, pieceName: String(reminders.raw[i]?.piece_name ?? '') })),
-      openPours: open[0]?.n ?? 0,
+      due: due.map(({ reminder, pieceName }) => ({ ...reminderView(reminder), pourId: reminder.pourId, pieceName })),
+      openPours: await openPourCount(this.ds, shopId),
     };
   }
 
@@ -265,14 +223,14 @@ export class Pours {
       if (!(await markReminderDone(m, auth.shopId, reminderId, auth.userId))) throw notFound('reminder');
       await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'reminder.done', objectType: 'reminder', objectId: reminderId });
     });
-    const row = await this.ds.getRepository(Reminder).findOneByOrFail({ id: reminderId });
+    const row = await reminderById(this.ds.manager, reminderId);
     return reminderView(row, await namesOf(this.ds.manager, [row.doneById]));
   }
 
   async issueIngestToken(auth: AuthContext): Promise<string> {
     const token = randomBytes(24).toString('base64url');
     await this.ds.transaction(async (m) => {
-      await m.query('UPDATE shops SET ingest_token_hash = $2 WHERE id = $1', [auth.shopId, tokenHash(token)]);
+      await setIngestTokenHash(m, auth.shopId, tokenHash(token));
       await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'ingest_token.issue', objectType: 'shop', objectId: auth.shopId });
     });
     return token;
@@ -280,7 +238,6 @@ export class Pours {
 
   /** The shop a thermometer token belongs to, or null. */
   async shopOfIngestToken(token: string): Promise<string | null> {
-    const shops: { id: string }[] = await this.ds.query('SELECT id FROM shops WHERE ingest_token_hash = $1', [tokenHash(token)]);
-    return shops[0]?.id ?? null;
+    return shopOfIngestTokenHash(this.ds, tokenHash(token));
   }
 }

@@ -1,11 +1,12 @@
 import type { DataSource } from 'typeorm';
-import { Lot, Pigment, ResinSystem } from '@gelpoint/db';
+import { shopLocalDate } from '@gelpoint/core';
+import { Lot, Pigment, ResinSystem, Shop } from '@gelpoint/db';
 import type { LotInput, LotSort, LotView } from '@gelpoint/contracts';
 import type { AuthContext } from '../../http/auth-context';
 import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { likePattern } from './catalogue.service';
-import { lotView } from './shelf-views';
+import { lotView, type ShopInstant } from './shelf-views';
 import { orderByColumn, type SortDir } from './shelf-sort';
 
 export interface LotQuery {
@@ -31,17 +32,27 @@ const lotSortColumns: Record<LotSort, string> = {
   expires: 'l.expires_on',
   // Stock state, worst first: expired (unusable however much is left), then used up, then low (under a
   // tenth of what came in), then in stock — the same rules as the lot's own expired and low flags.
-  state: 'CASE WHEN l.expires_on < CURRENT_DATE THEN 0 WHEN l.remaining_g <= 0 THEN 1 WHEN l.remaining_g < l.quantity_g * 0.1 THEN 2 ELSE 3 END',
+  state: 'CASE WHEN l.expires_on < :shopToday THEN 0 WHEN l.remaining_g <= 0 THEN 1 WHEN l.remaining_g < l.quantity_g * 0.1 THEN 2 ELSE 3 END',
 };
 
-function baseQuery(ds: DataSource, shopId: string) {
+// Expiry is judged by the shop's calendar date (core's lotExpired), passed to the SQL as :shopToday so the database's
+// own date and zone never decide it.
+function baseQuery(ds: DataSource, shopId: string, at: ShopInstant) {
   return ds
     .getRepository(Lot)
     .createQueryBuilder('l')
     .leftJoin(ResinSystem, 'r', 'r.id = l.resin_system_id')
     .leftJoin(Pigment, 'g', 'g.id = l.pigment_id')
     .addSelect('COALESCE(r.name, g.name)', 'product_name')
-    .where('l.shop_id = :shopId', { shopId });
+    .where('l.shop_id = :shopId', { shopId })
+    .setParameter('shopToday', shopLocalDate(at.atMs, at.zone));
+}
+
+/** The instant of the caller's clock in the shop's zone. */
+async function shopInstant(ds: DataSource, shopId: string, now: Date): Promise<ShopInstant> {
+  const shop = await ds.manager.findOne(Shop, { where: { id: shopId }, select: { id: true, timeZone: true } });
+  if (!shop) throw notFound('shop');
+  return { atMs: now.getTime(), zone: shop.timeZone };
 }
 
 async function withNames(qb: ReturnType<typeof baseQuery>): Promise<LotRow[]> {
@@ -49,23 +60,25 @@ async function withNames(qb: ReturnType<typeof baseQuery>): Promise<LotRow[]> {
   return entities.map((e, i) => Object.assign(e, { productName: String((raw[i] as { product_name: string }).product_name ?? '') }));
 }
 
-export async function listLots(ds: DataSource, shopId: string, q: LotQuery): Promise<{ items: LotView[]; total: number }> {
-  const qb = baseQuery(ds, shopId);
+export async function listLots(ds: DataSource, shopId: string, q: LotQuery, now = new Date()): Promise<{ items: LotView[]; total: number }> {
+  const at = await shopInstant(ds, shopId, now);
+  const qb = baseQuery(ds, shopId, at);
   if (q.part) qb.andWhere('l.part = :part', { part: q.part });
   if (q.productId) qb.andWhere('(l.resin_system_id = :pid OR l.pigment_id = :pid)', { pid: q.productId });
   if (q.q) qb.andWhere('(l.lot_number ILIKE :like OR r.name ILIKE :like OR g.name ILIKE :like)', { like: likePattern(q.q) });
-  if (q.status === 'expired') qb.andWhere('l.expires_on < CURRENT_DATE');
+  if (q.status === 'expired') qb.andWhere('l.expires_on < :shopToday');
   if (q.status === 'low') qb.andWhere('l.remaining_g < l.quantity_g * 0.1');
-  if (q.status === 'in_stock') qb.andWhere('l.remaining_g > 0 AND (l.expires_on IS NULL OR l.expires_on >= CURRENT_DATE)');
+  if (q.status === 'in_stock') qb.andWhere('l.remaining_g > 0 AND (l.expires_on IS NULL OR l.expires_on >= :shopToday)');
   const total = await qb.getCount();
   const rows = await withNames(orderByColumn(qb, lotSortColumns[q.sort ?? 'expires'], q.dir, 'l.id').offset(q.offset).limit(q.limit));
-  return { items: rows.map(lotView), total };
+  return { items: rows.map((row) => lotView(row, at)), total };
 }
 
-export async function getLot(ds: DataSource, shopId: string, id: string): Promise<LotView> {
-  const [row] = await withNames(baseQuery(ds, shopId).andWhere('l.id = :id', { id }));
+export async function getLot(ds: DataSource, shopId: string, id: string, now = new Date()): Promise<LotView> {
+  const at = await shopInstant(ds, shopId, now);
+  const [row] = await withNames(baseQuery(ds, shopId, at).andWhere('l.id = :id', { id }));
   if (!row) throw notFound('lot');
-  return lotView(row);
+  return lotView(row, at);
 }
 
 export async function createLot(ds: DataSource, auth: AuthContext, input: LotInput & { resinSystemId: string | null; pigmentId: string | null }): Promise<LotView> {

@@ -1,6 +1,11 @@
-import { activationEnergyOf, exothermSettingsOf } from '@gelpoint/core';
+import { activationEnergyOf, exothermSettingsOf, lotExpired } from '@gelpoint/core';
 import { toCoreResinSystem, type Lot, type Pigment, type ResinSystem } from '@gelpoint/db';
 import type { LotView, PigmentView, ResinSystemInput, ResinSystemView } from '@gelpoint/contracts';
+
+export interface ShopInstant {
+  atMs: number;
+  zone: string;
+}
 
 export function resinSystemView(r: ResinSystem): ResinSystemView {
   return {
@@ -93,10 +98,8 @@ export function pigmentView(p: Pigment): PigmentView {
   };
 }
 
-
-const today = () => new Date().toISOString().slice(0, 10);
-
-export function lotView(l: Lot & { productName: string }): LotView {
+/** The lot as the shop sees it at an instant of the caller's clock, in the shop's own zone. */
+export function lotView(l: Lot & { productName: string }, at: ShopInstant): LotView {
   return {
     id: l.id,
     part: l.part,
@@ -109,7 +112,7 @@ export function lotView(l: Lot & { productName: string }): LotView {
     receivedOn: l.receivedOn,
     expiresOn: l.expiresOn,
     notes: l.notes,
-    expired: l.expiresOn !== null && l.expiresOn < today(),
+    expired: lotExpired(l.expiresOn, at.atMs, at.zone),
     low: l.remainingG < l.quantityG * 0.1,
   };
 }

@@ -8,7 +8,7 @@ import { lotUses } from './lot-use.service';
 import { createLot, deleteLot, getLot, listLots, updateLot } from './lots.service';
 import { pigmentView, resinSystemColumns, resinSystemView } from './shelf-views';
 
-export function shelfRoutes(api: RouteRegistry, ds: DataSource): void {
+export function shelfRoutes(api: RouteRegistry, ds: DataSource, now: () => Date = () => new Date()): void {
   const resins = new Catalogue(ds, ResinSystem, 'resin_system', resinSystemView, resinSystemSortColumns);
   const pigments = new Catalogue(ds, Pigment, 'pigment', pigmentView, pigmentSortColumns);
 
@@ -31,9 +31,9 @@ export function shelfRoutes(api: RouteRegistry, ds: DataSource): void {
       return undefined;
     },
 
-    listLots: ({ auth, query }) => listLots(ds, auth.shopId, query),
+    listLots: ({ auth, query }) => listLots(ds, auth.shopId, query, now()),
     createLot: ({ auth, body }) => createLot(ds, auth, body),
-    getLot: ({ auth, params }) => getLot(ds, auth.shopId, params.id),
+    getLot: ({ auth, params }) => getLot(ds, auth.shopId, params.id, now()),
     updateLot: ({ auth, params, body }) => updateLot(ds, auth, params.id, body),
     deleteLot: async ({ auth, params }) => {
       await deleteLot(ds, auth, params.id);

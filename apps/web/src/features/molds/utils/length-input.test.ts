@@ -44,6 +44,10 @@ describe('readLengthInput', () => {
     expect(!read.ok && read.error.code).toBe('length_unreadable');
     const blank = readLengthInput('  ', 'metric', rim, 'Fill level');
     expect(blank.ok).toBe(false);
+    // Number('0x10') is 16 (ECMA-262 reads a hexadecimal literal); 16 mm would fit this rim, yet nobody types a hex length.
+    const hex = readLengthInput('0x10', 'metric', rim, 'Fill level');
+    expect(!hex.ok && hex.error.code).toBe('length_unreadable');
+    expect(readOptionalLength('0x10', 'metric', 'Layer thickness').ok).toBe(false);
   });
 });
 

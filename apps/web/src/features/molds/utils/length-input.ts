@@ -1,7 +1,7 @@
-import { convertLength, fail, formatLength, ok, type LengthUnit, type Result, type UnitSystem } from '@gelpoint/core';
+import { convertLength, fail, formatLength, ok, readDecimal, unitSystemUnits, type LengthUnit, type Result, type UnitSystem } from '@gelpoint/core';
 
 export function shopLengthUnit(unitSystem: UnitSystem): LengthUnit {
-  return unitSystem === 'metric' ? 'mm' : 'in';
+  return unitSystemUnits[unitSystem].length.unit;
 }
 
 export function mmToShopLength(lengthMm: number, unitSystem: UnitSystem): number {
@@ -38,9 +38,8 @@ export interface LengthBoundsMm {
 export function readLengthInput(text: string, unitSystem: UnitSystem, bounds: LengthBoundsMm, label: string): Result<number> {
   const unit = shopLengthUnit(unitSystem);
   const range = `between ${formatLength(bounds.minMm, unitSystem).text} and ${formatLength(bounds.maxMm, unitSystem).text}`;
-  const trimmed = text.trim();
-  const value = Number(trimmed);
-  if (trimmed === '' || !Number.isFinite(value)) {
+  const value = readDecimal(text);
+  if (value === null) {
     return fail('length_unreadable', `${label} must be a number in ${unit}, ${range}; type digits only, such as ${lengthInputValue(bounds.maxMm, unitSystem)}.`);
   }
   const lengthMm = shopLengthToMm(value, unitSystem);
@@ -55,8 +54,8 @@ export function readLengthInput(text: string, unitSystem: UnitSystem, bounds: Le
 export function readOptionalLength(text: string, unitSystem: UnitSystem, label: string): Result<number | null> {
   const trimmed = text.trim();
   if (trimmed === '') return ok(null);
-  const value = Number(trimmed);
-  if (!Number.isFinite(value) || value <= 0) {
+  const value = readDecimal(trimmed);
+  if (value === null || value <= 0) {
     return fail('length_not_positive', `${label} must be a number above zero in ${shopLengthUnit(unitSystem)}, or left empty; "${trimmed}" is not.`);
   }
   return ok(shopLengthToMm(value, unitSystem));

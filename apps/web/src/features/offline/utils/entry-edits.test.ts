@@ -21,6 +21,8 @@ describe('changing a refused entry', () => {
 
   it('says which value is not a number', () => {
     expect(applyEdits(batch, 'batch', { weighedAG: 'two hundred', weighedBG: '100' })).toEqual({ ok: false, problem: { name: 'weighedAG', message: '“two hundred” is not a number.' } });
+    // Number('0xC8') is 200 (ECMA-262 hexadecimal literal); a scale never shows one, so it is a slip, not 200 g.
+    expect(applyEdits(batch, 'batch', { weighedAG: '0xC8', weighedBG: '100' })).toEqual({ ok: false, problem: { name: 'weighedAG', message: '“0xC8” is not a number.' } });
   });
 
   it('changes a reading’s temperature and a check’s hardness', () => {

@@ -1,3 +1,4 @@
+import { readDecimal } from '@gelpoint/core';
 import type { OutboxEntry, OutboxRequest } from '../../../lib/offline/outbox-entry';
 
 /** One value of a refused entry the person may change before sending it again. */
@@ -52,10 +53,9 @@ export type EditProblem = { name: string; message: string };
 /** The entry's request with the changed values, or the first value that is not a number where one is needed. */
 export function applyEdits(request: OutboxRequest, kind: OutboxEntry['kind'], edits: Readonly<Record<string, string>>): { ok: true; request: OutboxRequest } | { ok: false; problem: EditProblem } {
   const numberOf = (name: string, required: boolean): number | null | EditProblem => {
-    const raw = (edits[name] ?? '').trim().replace(',', '.');
-    if (raw === '') return required ? { name, message: 'Enter a number.' } : null;
-    const n = Number(raw);
-    return Number.isFinite(n) ? n : { name, message: `“${edits[name]}” is not a number.` };
+    const raw = edits[name] ?? '';
+    if (raw.trim() === '') return required ? { name, message: 'Enter a number.' } : null;
+    return readDecimal(raw) ?? { name, message: `“${raw}” is not a number.` };
   };
   const isProblem = (v: unknown): v is EditProblem => typeof v === 'object' && v !== null && 'message' in v;
 

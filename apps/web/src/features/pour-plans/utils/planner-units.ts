@@ -1,4 +1,4 @@
-import { convertLength, convertMass, convertTemperature, convertVolume, type UnitSystem } from '@gelpoint/core';
+import { convertLength, convertMass, convertTemperature, convertVolume, unitSystemUnits, type UnitSystem } from '@gelpoint/core';
 import { get, set } from 'react-hook-form';
 import type { PlannerValues } from './planner-values';
 
@@ -28,14 +28,10 @@ export interface ShownUnitNames {
   volume: string;
 }
 
-const unitNames: Record<UnitSystem, ShownUnitNames> = {
-  metric: { length: 'mm', area: 'mm²', temperature: '°C', mass: 'g', volume: 'mL' },
-  us: { length: 'in', area: 'in²', temperature: '°F', mass: 'oz', volume: 'fl oz' },
-};
-
 /** The unit each kind of planner number is typed in, for labels and messages. */
 export function shownUnitNames(unitSystem: UnitSystem): ShownUnitNames {
-  return unitNames[unitSystem];
+  const u = unitSystemUnits[unitSystem];
+  return { length: u.length.symbol, area: u.area.symbol, temperature: u.temperature.symbol, mass: u.mass.symbol, volume: u.volume.symbol };
 }
 
 const mmPerInch = convertLength(1, 'in', 'mm');

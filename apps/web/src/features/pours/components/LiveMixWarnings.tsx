@@ -1,7 +1,6 @@
-import { formatWeighedMass, type UnitSystem } from '@gelpoint/core';
+import { formatWeighedMass, offRatioCheck, partBForRatio, type UnitSystem } from '@gelpoint/core';
 import { Alert } from '../../../components/ui/Alert';
 import { dewPointReadout } from '../utils/dew-point-warning';
-import { offRatio, partBForRatio } from '../utils/off-ratio';
 import { scaleStepOf } from '../utils/shop-units';
 
 export interface LiveMixWarningsProps {
@@ -20,7 +19,7 @@ export interface LiveMixWarningsProps {
 /** Off-ratio and dew-point warnings while the numbers are typed; the server checks again when the batch is logged. */
 export function LiveMixWarnings(props: LiveMixWarningsProps) {
   const { weighedAG, weighedBG, massRatioAToB, tolerancePct, unitSystem, scaleResolutionG } = props;
-  const ratio = weighedAG !== null && weighedBG !== null ? offRatio({ partAG: weighedAG, partBG: weighedBG }, massRatioAToB, tolerancePct) : null;
+  const ratio = weighedAG !== null && weighedBG !== null ? offRatioCheck({ partAG: weighedAG, partBG: weighedBG }, massRatioAToB, tolerancePct) : null;
   const dew = dewPointReadout(props.ambientTempC, props.surfaceTempC, props.rhPct, unitSystem);
   const matchingB = weighedAG !== null ? partBForRatio(weighedAG, massRatioAToB) : null;
   const shown = (grams: number) => formatWeighedMass(grams, unitSystem, scaleStepOf(scaleResolutionG)).text;

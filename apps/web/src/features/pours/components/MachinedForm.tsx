@@ -1,3 +1,4 @@
+import { readDecimal } from '@gelpoint/core';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
@@ -9,7 +10,6 @@ import { FormAlert } from '../../../components/ui/FormAlert';
 import { Input } from '../../../components/ui/Input';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useMarkMachined } from '../api/mark-machined';
-import { readDecimal } from '../utils/shop-units';
 
 const MachinedFields = z.object({
   finishCoats: z.string().transform((text, ctx) => {

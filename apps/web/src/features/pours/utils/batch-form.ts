@@ -1,7 +1,7 @@
 import type { LogBatchRequest } from '@gelpoint/contracts';
-import type { UnitSystem } from '@gelpoint/core';
+import { readDecimal, type UnitSystem } from '@gelpoint/core';
 import { z } from 'zod';
-import { inputUnitsOf, massToGrams, readDecimal, temperatureToC } from './shop-units';
+import { inputUnitsOf, massToGrams, temperatureToC } from './shop-units';
 
 /** The select's value for "the lot is not listed, I'll type its number". */
 export const typedLot = 'typed';

@@ -1,30 +1,9 @@
-import type { PourPlanView } from '@gelpoint/contracts';
+import { PourPlanResult } from '@gelpoint/contracts';
 import { fail, ok, type Result } from '@gelpoint/core';
 import { z } from 'zod';
 
-// Only what the pour page needs from a saved plan's stored result and product snapshot, checked before it is used.
-const Grams = z.object({ grams: z.number() });
-const PlannedCup = z.object({
-  index: z.number().int(),
-  partA: Grams,
-  partB: Grams,
-  pigment: Grams,
-  totalGrams: z.number(),
-  cupPotLifeMin: z.number().optional(),
-});
-const StoredCaution = z.object({
-  code: z.string(),
-  severity: z.enum(['info', 'warning', 'danger']),
-  message: z.string(),
-  appliesTo: z.object({ kind: z.string(), index: z.number().int().optional() }),
-});
-const StoredResult = z.object({
-  sealCoat: z.object({ productName: z.string(), coats: z.array(z.object({ index: z.number().int(), batches: z.array(PlannedCup) })) }).nullable(),
-  layers: z.array(z.object({ index: z.number().int(), batches: z.array(PlannedCup) })),
-  deepPour: z.object({ productName: z.string(), pigmentName: z.string().nullable() }),
-  cautions: z.array(StoredCaution).default([]),
-});
-
+// The stored result is read through contracts' PourPlanResult (older plans brought up to its current version); the
+// product snapshot only as far as the pour page needs it.
 const StoredProduct = z.looseObject({
   id: z.string(),
   name: z.string(),
@@ -46,7 +25,7 @@ const StoredSnapshot = z.looseObject({
 });
 
 export type PlanProduct = z.infer<typeof StoredProduct>;
-export type PlanCaution = z.infer<typeof StoredCaution>;
+export type PlanCaution = PourPlanResult['cautions'][number];
 
 export interface RunSheetCup {
   /** The plan's batch index: what the API calls planBatchIndex. */
@@ -78,12 +57,15 @@ export interface RunSheet {
   sealCoat: PlanProduct | null;
 }
 
+/** A saved plan as it arrives: checked here, whatever its declared type, since it may be older than this page. */
+type StoredPlan = { result: unknown; productSnapshot: unknown };
+
 /**
  * Every cup of a saved plan in mixing order (seal coats first, then layers from the floor up), with the grams the
  * plan shows and the product each cup is mixed from. The plan's own batch index stays the key.
  */
-export function runSheetOf(plan: Pick<PourPlanView, 'result' | 'productSnapshot'>): Result<RunSheet> {
-  const result = StoredResult.safeParse(plan.result);
+export function runSheetOf(plan: StoredPlan): Result<RunSheet> {
+  const result = PourPlanResult.safeParse(plan.result);
   const snapshot = StoredSnapshot.safeParse(plan.productSnapshot);
   if (!result.success || !snapshot.success) {
     return fail('plan_unreadable', 'The stored pour plan is not in a form this page can read. Open the plan and save it again, then reload this page.');

@@ -1,7 +1,7 @@
-import type { UnitSystem } from '@gelpoint/core';
+import { readDecimal, type UnitSystem } from '@gelpoint/core';
 import { z } from 'zod';
 import { localInputToIso } from './local-time';
-import { inputUnitsOf, readDecimal, temperatureToC } from './shop-units';
+import { inputUnitsOf, temperatureToC } from './shop-units';
 
 export interface ReadingFormInput {
   at: string;

@@ -1,4 +1,4 @@
-import { activationEnergyOf, equivalentAge, parseIsoInstant, type CureReading, type CureSpanSource, type UnitSystem } from '@gelpoint/core';
+import { activationEnergyOf, equivalentAge, parseIsoInstant, unitSystemUnits, type CureReading, type CureSpanSource, type UnitSystem } from '@gelpoint/core';
 import { hourMs } from './relative-time';
 import { temperatureFromC } from './shop-units';
 
@@ -143,7 +143,7 @@ export function temperaturePlot(input: TemperaturePlotInput): TemperaturePlot | 
 
   return {
     frame,
-    unit: input.unitSystem === 'us' ? '°F' : '°C',
+    unit: unitSystemUnits[input.unitSystem].temperature.symbol,
     fromMs,
     toMs: untilMs,
     spans: coreSpans.map((s) => ({

@@ -1,5 +1,5 @@
 import { ScaleResolutionG, ShopTemperatureProfile, UpdateShopRequest, type Shop } from '@gelpoint/contracts';
-import { convertTemperature } from '@gelpoint/core';
+import { convertTemperature, unitSystemUnits } from '@gelpoint/core';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
@@ -130,7 +130,7 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
   const currencies = useMemo(() => currencyOptions(shop.currency), [shop.currency]);
   const { errors, isDirty } = form.formState;
   const [profileMode, unitSystem] = useWatch({ control: form.control, name: ['profileMode', 'unitSystem'] });
-  const tempUnit = unitSystem === 'us' ? '°F' : '°C';
+  const tempUnit = unitSystemUnits[unitSystem].temperature.symbol;
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
