@@ -12,8 +12,14 @@ const pureFrameworkBan = {
     message: 'core, mesh, thermal and contracts import no framework and do no I/O; keep this in an app or in packages/db.',
   })),
   patterns: [
-    { group: ['node:*', 'fs', 'fs/*', 'path', 'http', 'https', 'net', 'child_process', 'worker_threads'], message: 'a pure package does no I/O; take the bytes or values as arguments.' },
-    { group: ['@tanstack/*', '@react-three/*', 'three-stdlib', '@gelpoint/api', '@gelpoint/web', '@gelpoint/worker'], message: 'a pure package imports no framework or app.' },
+    {
+      group: ['node:*', 'fs', 'fs/*', 'path', 'http', 'https', 'net', 'child_process', 'worker_threads'],
+      message: 'a pure package does no I/O; take the bytes or values as arguments.',
+    },
+    {
+      group: ['@tanstack/*', '@react-three/*', 'three-stdlib', '@gelpoint/api', '@gelpoint/web', '@gelpoint/worker'],
+      message: 'a pure package imports no framework or app.',
+    },
   ],
 };
 
@@ -28,7 +34,10 @@ export default tseslint.config(
       'gelpoint/layout': 'error',
       // A handler set up before the value it calls exists (an event hub, a router made after its client).
       'prefer-const': ['error', { ignoreReadBeforeAssign: true }],
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrorsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrorsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' },
+      ],
     },
   },
   {

@@ -40,7 +40,15 @@ const nodeTargets = [
 // Everything the web build reads; its own dist, tests and benchmarks are left out.
 const webInputs = {
   dirs: ['apps/web/src', 'apps/web/public', 'packages/core/src', 'packages/contracts/src'],
-  files: ['apps/web/index.html', 'apps/web/vite.config.ts', 'apps/web/installable.ts', 'apps/web/package.json', 'apps/web/tsconfig.json', 'packages/core/package.json', 'packages/contracts/package.json'],
+  files: [
+    'apps/web/index.html',
+    'apps/web/vite.config.ts',
+    'apps/web/installable.ts',
+    'apps/web/package.json',
+    'apps/web/tsconfig.json',
+    'packages/core/package.json',
+    'packages/contracts/package.json',
+  ],
   skip: /\.test\.tsx?$/,
 };
 
@@ -114,7 +122,9 @@ async function buildNode(target) {
     logLevel: 'warning',
     plugins: target.bundleRegistryPackages ? [] : [workspaceOnly],
     // Bundled CommonJS modules may require Node's own modules; an ES module has no `require` of its own.
-    banner: target.bundleRegistryPackages ? { js: "import { createRequire as __gpRequire } from 'node:module'; const require = __gpRequire(import.meta.url);" } : {},
+    banner: target.bundleRegistryPackages
+      ? { js: "import { createRequire as __gpRequire } from 'node:module'; const require = __gpRequire(import.meta.url);" }
+      : {},
   });
   const sources = Object.keys(result.metafile.inputs).filter((f) => !f.startsWith('node_modules/'));
   // A workspace's package.json (sideEffects, exports) and tsconfig.json (decorators) shape its code too.
@@ -156,4 +166,3 @@ for (const t of targets) {
   built.push(`${t.name} (${((Date.now() - started) / 1000).toFixed(1)} s)`);
 }
 console.log(built.length ? `built ${built.join(', ')}` : 'build: everything is up to date');
-

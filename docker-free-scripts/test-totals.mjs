@@ -19,7 +19,15 @@ if (existsSync(file)) {
   console.error('no test report was written: vitest did not run to the end');
 }
 // npm test -- <file> runs only vitest: the checks of the whole tree were not part of it.
-const checks = typecheck === '--tests-only' ? [] : [['type-check', typecheck], ['build', build], ['import-cycle check', acyclic], ['lint and format check', linted]];
+const checks =
+  typecheck === '--tests-only'
+    ? []
+    : [
+        ['type-check', typecheck],
+        ['build', build],
+        ['import-cycle check', acyclic],
+        ['lint and format check', linted],
+      ];
 for (const [name, ok] of checks) {
   if (ok === '1') passed += 1;
   else {

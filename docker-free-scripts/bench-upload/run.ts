@@ -25,7 +25,10 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor((xs.le
 function cliRun(file: string): Promise<number> {
   return new Promise((resolve, reject) => {
     const started = performance.now();
-    const child = spawn(process.execPath, ['apps/cli/bin/gelpoint.mjs', 'mold', file, '--level', String(BENCH_LEVEL_MM)], { cwd: repoRoot, stdio: ['ignore', 'ignore', 'pipe'] });
+    const child = spawn(process.execPath, ['apps/cli/bin/gelpoint.mjs', 'mold', file, '--level', String(BENCH_LEVEL_MM)], {
+      cwd: repoRoot,
+      stdio: ['ignore', 'ignore', 'pipe'],
+    });
     let err = '';
     child.stderr.on('data', (b: Buffer) => (err += b.toString()));
     child.once('exit', (code) => (code === 0 ? resolve(performance.now() - started) : reject(new Error(`gelpoint mold exited ${code}: ${err}`))));

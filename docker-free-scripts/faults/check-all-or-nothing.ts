@@ -37,17 +37,22 @@ async function cutMidWrite(pool: pg.Pool, wroteTable: string, send: () => Promis
     await gate.query('BEGIN');
     await gate.query('LOCK TABLE audit_events IN SHARE MODE');
     pending = send();
-    const pid = await waitUntil(`the API's write to ${wroteTable} waiting before its audit row`, 20_000, async () => {
-      const rows = (
-        await pool.query<{ pid: number }>(
-          `SELECT a.pid FROM pg_stat_activity a
+    const pid = await waitUntil(
+      `the API's write to ${wroteTable} waiting before its audit row`,
+      20_000,
+      async () => {
+        const rows = (
+          await pool.query<{ pid: number }>(
+            `SELECT a.pid FROM pg_stat_activity a
             WHERE a.application_name = 'gelpoint-api' AND a.wait_event_type = 'Lock'
               AND EXISTS (SELECT 1 FROM pg_locks l JOIN pg_class c ON c.oid = l.relation WHERE l.pid = a.pid AND c.relname = $1 AND l.mode = 'RowExclusiveLock')`,
-          [wroteTable],
-        )
-      ).rows;
-      return rows[0]?.pid;
-    }, 20);
+            [wroteTable],
+          )
+        ).rows;
+        return rows[0]?.pid;
+      },
+      20,
+    );
     await pool.query('SELECT pg_terminate_backend($1)', [pid]);
   } finally {
     await gate.query('ROLLBACK').catch(() => undefined);
@@ -57,7 +62,10 @@ async function cutMidWrite(pool: pg.Pool, wroteTable: string, send: () => Promis
 }
 
 function mustBeCut(what: string, a: Answer): void {
-  must(a.status === 503 && isApiError(a.body) && a.body.error.code === 'database_unavailable', `${what} cut off from the database should answer 503 database_unavailable; got ${describe(a)}`);
+  must(
+    a.status === 503 && isApiError(a.body) && a.body.error.code === 'database_unavailable',
+    `${what} cut off from the database should answer 503 database_unavailable; got ${describe(a)}`,
+  );
 }
 
 /**
@@ -69,7 +77,11 @@ export async function allOrNothing(stack: FaultStack, pool: pg.Pool): Promise<st
   await stack.startApi();
   const { token, answer } = await signIn(stack.baseUrl, 'lead@gelpoint.test');
   must(token, `signing in should work; got ${describe(answer)}`);
-  const [pour] = (await pool.query<{ id: string; shop_id: string; pour_plan_id: string }>(`SELECT id, shop_id, pour_plan_id FROM pours WHERE status = 'open' ORDER BY created_at LIMIT 1`)).rows;
+  const [pour] = (
+    await pool.query<{ id: string; shop_id: string; pour_plan_id: string }>(
+      `SELECT id, shop_id, pour_plan_id FROM pours WHERE status = 'open' ORDER BY created_at LIMIT 1`,
+    )
+  ).rows;
   must(pour, 'the seeded shop should have an open pour');
   const readingsOf = () => count(pool, 'temperature_readings WHERE pour_id = $1', [pour.id]);
   const auditOf = () => count(pool, 'audit_events WHERE shop_id = $1', [pour.shop_id]);
@@ -79,7 +91,10 @@ export async function allOrNothing(stack: FaultStack, pool: pg.Pool): Promise<st
   const readings0 = await readingsOf();
   const audit0 = await auditOf();
   const bad = await csv(readingsCsv(20, 250))();
-  must(bad.status === 422 && isApiError(bad.body) && bad.body.error.code === 'csv_invalid', `a log with a bad row should be refused with 422 csv_invalid; got ${describe(bad)}`);
+  must(
+    bad.status === 422 && isApiError(bad.body) && bad.body.error.code === 'csv_invalid',
+    `a log with a bad row should be refused with 422 csv_invalid; got ${describe(bad)}`,
+  );
   must((await readingsOf()) === readings0, `a refused log should add no readings; ${(await readingsOf()) - readings0} were added`);
 
   // A good log whose connection is cut after its readings were written.
@@ -88,7 +103,10 @@ export async function allOrNothing(stack: FaultStack, pool: pg.Pool): Promise<st
   must((await readingsOf()) === readings0, `a log cut off mid-write should leave no readings; ${(await readingsOf()) - readings0} were left`);
   must((await auditOf()) === audit0, 'a log cut off mid-write should leave no audit event');
   const again = await csv(log)();
-  must(again.status === 200 && (again.body as { added?: number }).added === READINGS, `the same log sent again should import all ${READINGS} rows; got ${describe(again)}`);
+  must(
+    again.status === 200 && (again.body as { added?: number }).added === READINGS,
+    `the same log sent again should import all ${READINGS} rows; got ${describe(again)}`,
+  );
   must((await readingsOf()) === readings0 + READINGS, 'the log sent again should be there in full');
 
   // A mould upload whose connection is cut after the mould and its file were written.
@@ -111,13 +129,24 @@ export async function allOrNothing(stack: FaultStack, pool: pg.Pool): Promise<st
   const started = await call(stack.baseUrl, 'POST', '/api/pours', { token, json: { pourPlanId: pour.pour_plan_id } });
   must(started.status === 201, `starting a pour should work; got ${describe(started)}`);
   const newPour = (started.body as { id: string }).id;
-  const [lotA] = (await pool.query<{ id: string; remaining_g: number }>(`SELECT id, remaining_g FROM lots WHERE shop_id = $1 AND part = 'A' AND remaining_g > 100 ORDER BY created_at LIMIT 1`, [pour.shop_id])).rows;
+  const [lotA] = (
+    await pool.query<{ id: string; remaining_g: number }>(
+      `SELECT id, remaining_g FROM lots WHERE shop_id = $1 AND part = 'A' AND remaining_g > 100 ORDER BY created_at LIMIT 1`,
+      [pour.shop_id],
+    )
+  ).rows;
   must(lotA, 'the seeded shelf should have a part A lot with stock');
   const audit2 = await auditOf();
-  const batch = await call(stack.baseUrl, 'POST', `/api/pours/${newPour}/batches`, { token, json: { planBatchIndex: 0, lotAId: lotA.id, lotBId: lotA.id, weighedAG: 100, weighedBG: 50, confirmUnusual: true } });
+  const batch = await call(stack.baseUrl, 'POST', `/api/pours/${newPour}/batches`, {
+    token,
+    json: { planBatchIndex: 0, lotAId: lotA.id, lotBId: lotA.id, weighedAG: 100, weighedBG: 50, confirmUnusual: true },
+  });
   must(batch.status === 400, `a batch with a part A lot in the part B slot should be refused with 400; got ${describe(batch)}`);
   const [lotAfter] = (await pool.query<{ remaining_g: number }>('SELECT remaining_g FROM lots WHERE id = $1', [lotA.id])).rows;
-  must(lotAfter?.remaining_g === lotA.remaining_g, `the refused batch should not draw down the part A lot (${lotA.remaining_g} g before, ${lotAfter?.remaining_g} g after)`);
+  must(
+    lotAfter?.remaining_g === lotA.remaining_g,
+    `the refused batch should not draw down the part A lot (${lotA.remaining_g} g before, ${lotAfter?.remaining_g} g after)`,
+  );
   must((await count(pool, 'pour_batches WHERE pour_id = $1', [newPour])) === 0, 'the refused batch should leave no batch row');
   must((await auditOf()) === audit2, 'the refused batch should leave no audit event');
 

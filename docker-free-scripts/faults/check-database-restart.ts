@@ -23,7 +23,10 @@ function mustBeUnavailable(what: string, a: Answer): void {
 function mustSayDatabaseDown(what: string, a: Answer): void {
   mustBeUnavailable(what, a);
   must(isApiError(a.body) && a.body.error.code === 'database_unavailable', `${what} should answer with the database_unavailable error; got ${describe(a)}`);
-  must(/database/.test(a.body.error.message) && a.body.error.message.length > 20, `${what}'s error should say in a sentence that the database is away; got "${a.body.error.message}"`);
+  must(
+    /database/.test(a.body.error.message) && a.body.error.message.length > 20,
+    `${what}'s error should say in a sentence that the database is away; got "${a.body.error.message}"`,
+  );
 }
 
 /**
@@ -59,10 +62,15 @@ export async function databaseRestart(stack: FaultStack, pool: pg.Pool): Promise
     postgres('start');
   }
 
-  const health = await waitUntil('/api/health reporting the database up again', 20_000, async () => {
-    const h = await call(stack.baseUrl, 'GET', '/api/health', { timeoutMs: 5_000 });
-    return h.status === 200 ? h : undefined;
-  }, 250);
+  const health = await waitUntil(
+    '/api/health reporting the database up again',
+    20_000,
+    async () => {
+      const h = await call(stack.baseUrl, 'GET', '/api/health', { timeoutMs: 5_000 });
+      return h.status === 200 ? h : undefined;
+    },
+    250,
+  );
   must((health.body as { database?: string }).database === 'up', `/api/health should report the database up; got ${describe(health)}`);
   const after = await signIn(stack.baseUrl, LEAD);
   must(after.token, `signing in after the restart should work without restarting the API; got ${describe(after.answer)}`);
@@ -77,7 +85,12 @@ export async function databaseRestart(stack: FaultStack, pool: pg.Pool): Promise
   const asked = Date.now();
   const reset = await call(stack.baseUrl, 'POST', '/api/auth/password-reset', { json: { email: LEAD } });
   must(reset.status === 202, `a password reset after the restart should be accepted; got ${describe(reset)}`);
-  await waitUntil('the reset mail after the restart', 15_000, async () => ((await stack.sinkMail()).some((m) => m.to.includes(LEAD) && /password/i.test(m.subject)) ? true : undefined), 100);
+  await waitUntil(
+    'the reset mail after the restart',
+    15_000,
+    async () => ((await stack.sinkMail()).some((m) => m.to.includes(LEAD) && /password/i.test(m.subject)) ? true : undefined),
+    100,
+  );
   const resetS = (Date.now() - asked) / 1000;
 
   must(api.running && worker.running && api.pid === pids.api && worker.pid === pids.worker, 'the same API and worker processes should serve after the restart');

@@ -152,7 +152,10 @@ export async function workerStopsCleanly(stack: FaultStack, pool: pg.Pool): Prom
   const sentAtStop = atStop.filter((r) => r.status === 'sent').length;
   const held = atStop.filter((r) => r.status === 'sending').length;
   must(held === 0, `a stopped worker should hold nothing; ${held} mails are still marked sending`);
-  must(sentAtStop > PAUSE_AFTER_SENT && sentAtStop < expected, `the send under way should have been finished and the rest handed back; ${sentAtStop} of ${expected} were sent at the stop`);
+  must(
+    sentAtStop > PAUSE_AFTER_SENT && sentAtStop < expected,
+    `the send under way should have been finished and the rest handed back; ${sentAtStop} of ${expected} were sent at the stop`,
+  );
 
   // The default two-minute lease: only mail handed back can go out within the wait below.
   await stack.startWorker({ cron: '*/2 * * * * *' });

@@ -16,13 +16,26 @@ export async function mailSinkDown(stack: FaultStack, pool: pg.Pool): Promise<st
   await stack.stopSink();
 
   const due = await makeDueReminders(pool, 1, 'sink down');
-  const failing = await waitUntil('the worker trying each mail twice and failing', 30_000, async () => {
-    const rows = await outboxOf(pool, due.reminderIds);
-    return rows.length === due.recipients.length && rows.every((r) => r.attempts >= 2) ? rows : undefined;
-  }, 200);
-  const errors = (await pool.query<{ last_error: string | null }>(`SELECT last_error FROM outbound_mail WHERE message_id = ANY($1)`, [failing.map((r) => r.message_id)])).rows;
-  must(failing.every((r: OutboxRow) => r.status === 'pending' || r.status === 'sending'), `while the sink is down the mail should wait in the outbox; it is ${[...new Set(failing.map((r) => r.status))].join(', ')}`);
-  must(errors.every((e) => e.last_error), 'each waiting outbox row should say why its send failed');
+  const failing = await waitUntil(
+    'the worker trying each mail twice and failing',
+    30_000,
+    async () => {
+      const rows = await outboxOf(pool, due.reminderIds);
+      return rows.length === due.recipients.length && rows.every((r) => r.attempts >= 2) ? rows : undefined;
+    },
+    200,
+  );
+  const errors = (
+    await pool.query<{ last_error: string | null }>(`SELECT last_error FROM outbound_mail WHERE message_id = ANY($1)`, [failing.map((r) => r.message_id)])
+  ).rows;
+  must(
+    failing.every((r: OutboxRow) => r.status === 'pending' || r.status === 'sending'),
+    `while the sink is down the mail should wait in the outbox; it is ${[...new Set(failing.map((r) => r.status))].join(', ')}`,
+  );
+  must(
+    errors.every((e) => e.last_error),
+    'each waiting outbox row should say why its send failed',
+  );
 
   await stack.startSink();
   const back = Date.now();

@@ -20,6 +20,9 @@ export async function twoWorkers(stack: FaultStack, pool: pg.Pool): Promise<stri
   const tally = await mustBeMailedOnce(stack, pool, due);
   const twice = (await outboxOf(pool, due.reminderIds)).filter((r) => r.attempts !== 1);
   must(twice.length === 0, `${twice.length} mails were claimed more than once although no worker died`);
-  must(workers.every((w) => w.running), 'both workers should still be running');
+  must(
+    workers.every((w) => w.running),
+    'both workers should still be running',
+  );
   return `${POURS} reminders, ${tally.mails} mails, each sent once (worker 1 sent ${sentBy[0]}, worker 2 sent ${sentBy[1]})`;
 }

@@ -18,7 +18,11 @@ export function postgres(action: 'stop' | 'start'): void {
   if (!port || port === SHARED_PG_PORT || port !== process.env.GELPOINT_PG_PORT) {
     throw new Error('refusing to stop or start PostgreSQL: run the checks through npm run check:faults, which gives them a cluster of their own');
   }
-  const r = spawnSync('bash', ['-c', `source docker-free-scripts/lib.sh && pg_${action}`], { cwd: repoRoot, env: { ...process.env, GELPOINT_PG_ROOT: '' }, encoding: 'utf8' });
+  const r = spawnSync('bash', ['-c', `source docker-free-scripts/lib.sh && pg_${action}`], {
+    cwd: repoRoot,
+    env: { ...process.env, GELPOINT_PG_ROOT: '' },
+    encoding: 'utf8',
+  });
   if (r.status !== 0) throw new Error(`pg_${action} failed: ${r.stderr || r.stdout}`);
 }
 
@@ -40,7 +44,12 @@ export async function makeDueReminders(pool: pg.Pool, count: number, tag: string
     await client.query('BEGIN');
     const [template] = (await client.query<{ id: string; shop_id: string }>(`SELECT id, shop_id FROM pours ORDER BY created_at LIMIT 1`)).rows;
     if (!template) throw new Error('the fault-check database has no seeded pour');
-    const members = (await client.query<{ id: string; email: string }>(`SELECT u.id, u.email FROM users u JOIN memberships ms ON ms.user_id = u.id WHERE ms.shop_id = $1 AND ms.status = 'active' ORDER BY u.email`, [template.shop_id])).rows;
+    const members = (
+      await client.query<{ id: string; email: string }>(
+        `SELECT u.id, u.email FROM users u JOIN memberships ms ON ms.user_id = u.id WHERE ms.shop_id = $1 AND ms.status = 'active' ORDER BY u.email`,
+        [template.shop_id],
+      )
+    ).rows;
     const pours = (
       await client.query<{ id: string }>(
         `INSERT INTO pours (shop_id, piece_id, pour_plan_id, status, assumed_temp_c, notify_user_ids, started_by_id)
@@ -89,6 +98,8 @@ export async function outboxOf(pool: pg.Pool, reminderIds: string[]): Promise<Ou
 }
 
 export async function reminderStatuses(pool: pg.Pool, reminderIds: string[]): Promise<Map<string, number>> {
-  const rows = (await pool.query<{ status: string; n: number }>(`SELECT status, count(*)::int AS n FROM reminders WHERE id = ANY($1) GROUP BY status`, [reminderIds])).rows;
+  const rows = (
+    await pool.query<{ status: string; n: number }>(`SELECT status, count(*)::int AS n FROM reminders WHERE id = ANY($1) GROUP BY status`, [reminderIds])
+  ).rows;
   return new Map(rows.map((r) => [r.status, r.n]));
 }

@@ -7,10 +7,15 @@ import { must } from './verdict';
 /** Waits until every mail of these reminders is marked sent in the outbox. */
 export async function waitForAllSent(pool: pg.Pool, due: DueReminders, timeoutMs: number): Promise<void> {
   const expected = due.reminderIds.length * due.recipients.length;
-  await waitUntil(`all ${expected} reminder mails being sent`, timeoutMs, async () => {
-    const rows = await outboxOf(pool, due.reminderIds);
-    return (rows.length === expected && rows.every((r) => r.status === 'sent')) || undefined;
-  }, 250);
+  await waitUntil(
+    `all ${expected} reminder mails being sent`,
+    timeoutMs,
+    async () => {
+      const rows = await outboxOf(pool, due.reminderIds);
+      return (rows.length === expected && rows.every((r) => r.status === 'sent')) || undefined;
+    },
+    250,
+  );
 }
 
 export interface DeliveryTally {
@@ -26,10 +31,16 @@ export interface DeliveryTally {
 export async function mustBeMailedOnce(stack: FaultStack, pool: pg.Pool, due: DueReminders): Promise<DeliveryTally> {
   const expected = due.reminderIds.length * due.recipients.length;
   const statuses = await reminderStatuses(pool, due.reminderIds);
-  must(statuses.get('sent') === due.reminderIds.length, `every reminder should be marked sent; the database has ${JSON.stringify(Object.fromEntries(statuses))}`);
+  must(
+    statuses.get('sent') === due.reminderIds.length,
+    `every reminder should be marked sent; the database has ${JSON.stringify(Object.fromEntries(statuses))}`,
+  );
 
   const rows = await outboxOf(pool, due.reminderIds);
-  must(rows.length === expected, `the outbox should hold ${expected} reminder mails (${due.reminderIds.length} reminders × ${due.recipients.length} people); it holds ${rows.length}`);
+  must(
+    rows.length === expected,
+    `the outbox should hold ${expected} reminder mails (${due.reminderIds.length} reminders × ${due.recipients.length} people); it holds ${rows.length}`,
+  );
   const perPerson = new Set(rows.map((r) => `${r.reminder_id}|${r.to_address}`));
   must(perPerson.size === expected, `each reminder should have one mail per person; ${expected - perPerson.size} were doubled`);
   const unsent = rows.filter((r) => r.status !== 'sent');

@@ -76,7 +76,11 @@ export class AppProcess {
   ) {}
 
   start(): this {
-    const child = spawn(process.execPath, nodeArgs(this.entry), { cwd: repoRoot, env: { NODE_ENV: 'production', ...this.env }, stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(process.execPath, nodeArgs(this.entry), {
+      cwd: repoRoot,
+      env: { NODE_ENV: 'production', ...this.env },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     let partial = '';
     const keep = (b: Buffer) => {
       const text = b.toString();

@@ -51,8 +51,13 @@ for (const c of chosen) {
     failed++;
     console.log(`not ok - ${c.title} (${((performance.now() - started) / 1000).toFixed(1)} s)`);
     // A failed expectation speaks for itself; anything else is a fault in the check, shown with its stack.
-    const detail = `${err instanceof CheckFailed ? err.message : (err as Error).stack ?? String(err)}\n${stack.outputs()}`;
-    console.log(detail.split('\n').map((l) => `#   ${l}`).join('\n'));
+    const detail = `${err instanceof CheckFailed ? err.message : ((err as Error).stack ?? String(err))}\n${stack.outputs()}`;
+    console.log(
+      detail
+        .split('\n')
+        .map((l) => `#   ${l}`)
+        .join('\n'),
+    );
   } finally {
     await stack.stop();
   }

@@ -10,11 +10,15 @@ const appPackages = new Set(['@gelpoint/api', '@gelpoint/web', '@gelpoint/worker
 
 /** @type {import('eslint').Rule.RuleModule} */
 const layout = {
-  meta: { type: 'problem', schema: [], messages: {
-    otherApp: '{{from}} may not import from the {{to}} app: share code through a package under packages/.',
-    appPackage: 'import {{name}} is an app; apps import packages, not each other.',
-    otherFeature: 'The {{from}} feature may not import from the {{to}} feature: move what both need to src/components, src/lib or src/hooks.',
-  } },
+  meta: {
+    type: 'problem',
+    schema: [],
+    messages: {
+      otherApp: '{{from}} may not import from the {{to}} app: share code through a package under packages/.',
+      appPackage: 'import {{name}} is an app; apps import packages, not each other.',
+      otherFeature: 'The {{from}} feature may not import from the {{to}} feature: move what both need to src/components, src/lib or src/hooks.',
+    },
+  },
   create(context) {
     const file = context.filename;
     const check = (node) => {
@@ -36,7 +40,8 @@ const layout = {
       }
       const fromFeature = featureOf(file);
       const toFeature = featureOf(target);
-      if (fromFeature && toFeature && fromFeature !== toFeature) context.report({ node: node.source, messageId: 'otherFeature', data: { from: fromFeature, to: toFeature } });
+      if (fromFeature && toFeature && fromFeature !== toFeature)
+        context.report({ node: node.source, messageId: 'otherFeature', data: { from: fromFeature, to: toFeature } });
     };
     return { ImportDeclaration: check, ExportNamedDeclaration: check, ExportAllDeclaration: check, ImportExpression: check };
   },

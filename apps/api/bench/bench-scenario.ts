@@ -111,12 +111,28 @@ export async function prepareBoard(apis: string[], t: Tokens, boardPours: number
   const resin = await must<{ id: string }>(201, a, 'POST', '/shelf/resin-systems', { token: t.lead, json: benchResin });
   await waitForAnalysis(b, t.maker, mold.id, 90_000);
 
-  const pieceIds = [piece.id, ...(await inGroups(Array.from({ length: boardPours }, (_, i) => i + 2), 4, async (n) => (await must<{ id: string }>(201, n % 2 ? a : b, 'POST', '/pieces', { token: t.maker, json: { name: `Bench tray ${n}` } })).id))];
+  const pieceIds = [
+    piece.id,
+    ...(await inGroups(
+      Array.from({ length: boardPours }, (_, i) => i + 2),
+      4,
+      async (n) => (await must<{ id: string }>(201, n % 2 ? a : b, 'POST', '/pieces', { token: t.maker, json: { name: `Bench tray ${n}` } })).id,
+    )),
+  ];
   const reminderPieceId = pieceIds.pop()!;
   const planFor = (pieceId: string, i: number) =>
     must<PlanBody>(201, i % 2 ? a : b, 'POST', '/pour-plans', {
       token: t.maker,
-      json: { pieceId, name: `Tray pocket, level 55 mm (${i + 1})`, cavity: { source: 'mold', moldId: mold.id }, fillLevelMm: 55, levelFrom: 'mould', deepPour: { resinSystemId: resin.id }, overPourPct: 5, shopTempC: 21 },
+      json: {
+        pieceId,
+        name: `Tray pocket, level 55 mm (${i + 1})`,
+        cavity: { source: 'mold', moldId: mold.id },
+        fillLevelMm: 55,
+        levelFrom: 'mould',
+        deepPour: { resinSystemId: resin.id },
+        overPourPct: 5,
+        shopTempC: 21,
+      },
     });
   const plans = await inGroups(pieceIds, 4, planFor);
 
@@ -125,18 +141,45 @@ export async function prepareBoard(apis: string[], t: Tokens, boardPours: number
     const base = i % 2 ? a : b;
     const pour = await must<{ id: string }>(201, base, 'POST', '/pours', { token: t.apprentice, json: { pourPlanId: plan.id } });
     for (const cup of runSheetOf(plan).filter((c) => c.layer === 0)) {
-      await must(201, base, 'POST', `/pours/${pour.id}/batches`, { token: t.apprentice, json: { planBatchIndex: cup.index, mixedAt: new Date(now - 6 * hour).toISOString(), weighedAG: cup.partAG, weighedBG: cup.partBG, lotANumber: 'BD25-A-0412', lotBNumber: 'BD25-B-0412', ambientTempC: 21, surfaceTempC: 20, rhPct: 45 } });
+      await must(201, base, 'POST', `/pours/${pour.id}/batches`, {
+        token: t.apprentice,
+        json: {
+          planBatchIndex: cup.index,
+          mixedAt: new Date(now - 6 * hour).toISOString(),
+          weighedAG: cup.partAG,
+          weighedBG: cup.partBG,
+          lotANumber: 'BD25-A-0412',
+          lotBNumber: 'BD25-B-0412',
+          ambientTempC: 21,
+          surfaceTempC: 20,
+          rhPct: 45,
+        },
+      });
     }
-    await must(200, base, 'POST', `/pours/${pour.id}/readings/csv`, { token: t.apprentice, csv: csvLog(now - 6 * hour, now - 60_000, 5 * 60_000, (k) => 20.5 + Math.sin(k / 9)) });
+    await must(200, base, 'POST', `/pours/${pour.id}/readings/csv`, {
+      token: t.apprentice,
+      csv: csvLog(now - 6 * hour, now - 60_000, 5 * 60_000, (k) => 20.5 + Math.sin(k / 9)),
+    });
     return pour.id;
   });
 
   const reminderPlan = await planFor(reminderPieceId, plans.length);
   const reminderPour = await must<{ id: string }>(201, a, 'POST', '/pours', { token: t.apprentice, json: { pourPlanId: reminderPlan.id } });
   for (const cup of runSheetOf(reminderPlan)) {
-    await must(201, b, 'POST', `/pours/${reminderPour.id}/batches`, { token: t.apprentice, json: { planBatchIndex: cup.index, mixedAt: new Date(now - 400 * hour).toISOString(), weighedAG: cup.partAG, weighedBG: cup.partBG } });
+    await must(201, b, 'POST', `/pours/${reminderPour.id}/batches`, {
+      token: t.apprentice,
+      json: { planBatchIndex: cup.index, mixedAt: new Date(now - 400 * hour).toISOString(), weighedAG: cup.partAG, weighedBG: cup.partBG },
+    });
   }
-  return { moldId: mold.id, floorMm: TRAY.floorZ, topMm: TRAY.outer[2], planIds: plans.map((p) => p.id), pourIds, reminderPourId: reminderPour.id, resinSystemId: resin.id };
+  return {
+    moldId: mold.id,
+    floorMm: TRAY.floorZ,
+    topMm: TRAY.outer[2],
+    planIds: plans.map((p) => p.id),
+    pourIds,
+    reminderPourId: reminderPour.id,
+    resinSystemId: resin.id,
+  };
 }
 
 export interface WriteScenario {
@@ -149,8 +192,20 @@ export async function prepareWritePours(apis: string[], t: Tokens, resinSystemId
   const piece = await must<{ id: string }>(201, apis[1]!, 'POST', '/pieces', { token: t.maker, json: { name: 'Bench river table' } });
   const plan = await must<PlanBody>(201, apis[0]!, 'POST', '/pour-plans', {
     token: t.maker,
-    json: { pieceId: piece.id, name: 'Channel, 1.8 m × 300 mm × 50 mm', cavity: { source: 'shape', shape: { kind: 'channel', lengthMm: 1800, widthMm: 300, depthMm: 50 } }, fillLevelMm: 50, deepPour: { resinSystemId }, overPourPct: 5, shopTempC: 21 },
+    json: {
+      pieceId: piece.id,
+      name: 'Channel, 1.8 m × 300 mm × 50 mm',
+      cavity: { source: 'shape', shape: { kind: 'channel', lengthMm: 1800, widthMm: 300, depthMm: 50 } },
+      fillLevelMm: 50,
+      deepPour: { resinSystemId },
+      overPourPct: 5,
+      shopTempC: 21,
+    },
   });
-  const pourIds = await inGroups(Array.from({ length: count }, (_, i) => i), 8, async (i) => (await must<{ id: string }>(201, apis[i % 2]!, 'POST', '/pours', { token: t.apprentice, json: { pourPlanId: plan.id } })).id);
+  const pourIds = await inGroups(
+    Array.from({ length: count }, (_, i) => i),
+    8,
+    async (i) => (await must<{ id: string }>(201, apis[i % 2]!, 'POST', '/pours', { token: t.apprentice, json: { pourPlanId: plan.id } })).id,
+  );
   return { pourIds, runSheet: runSheetOf(plan) };
 }

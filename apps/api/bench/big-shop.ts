@@ -1,7 +1,32 @@
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
-import { buildPourPlan, channelCavity, cureState, plannedBatches, planSteps, rectangleCavity, stepKeyOf, wantedReminders, type PlanSnapshot, type PourPlan as CorePourPlan } from '@gelpoint/core';
-import { Lot, Pigment, Piece, Pour, PourBatch, PourPlan, Reminder, ResinSystem, Shop, TemperatureReading, User, toCorePigment, toCoreResinSystem } from '@gelpoint/db';
+import {
+  buildPourPlan,
+  channelCavity,
+  cureState,
+  plannedBatches,
+  planSteps,
+  rectangleCavity,
+  stepKeyOf,
+  wantedReminders,
+  type PlanSnapshot,
+  type PourPlan as CorePourPlan,
+} from '@gelpoint/core';
+import {
+  Lot,
+  Pigment,
+  Piece,
+  Pour,
+  PourBatch,
+  PourPlan,
+  Reminder,
+  ResinSystem,
+  Shop,
+  TemperatureReading,
+  User,
+  toCorePigment,
+  toCoreResinSystem,
+} from '@gelpoint/db';
 
 const hour = 3_600_000;
 const day = 24 * hour;
@@ -45,7 +70,12 @@ const woods = ['black walnut', 'white oak', 'hard maple', 'cherry', 'ash', 'elm 
 
 async function insertChunked<T extends ObjectLiteral>(m: EntityManager, entity: EntityTarget<T>, rows: T[], chunk = 500): Promise<void> {
   for (let i = 0; i < rows.length; i += chunk) {
-    await m.createQueryBuilder().insert().into(entity).values(rows.slice(i, i + chunk)).execute();
+    await m
+      .createQueryBuilder()
+      .insert()
+      .into(entity)
+      .values(rows.slice(i, i + chunk))
+      .execute();
   }
 }
 
@@ -128,9 +158,42 @@ export async function seedBigShop(ds: DataSource, size: BigShopSize, now = new D
       const pourHoursAgo = 2 + ((i * 37) % 288);
       const sealHoursAgo = t.sealCoat ? pourHoursAgo + 8 : 0;
       const startedAt = new Date(now.getTime() - Math.max(pourHoursAgo, sealHoursAgo) * hour - 30 * 60_000);
-      pieces.push({ id: pieceId, shopId, name: pieceName, wood: woods[i % woods.length]!, notes: '', stage: 'curing', createdById: maker.id, createdAt: startedAt, updatedAt: startedAt });
-      plans.push({ id: planId, shopId, pieceId, moldId: null, name: `${t.label} pour`, inputs: { ...t.inputs, pieceId }, productSnapshot: t.snapshot, result: t.result as unknown as Record<string, unknown>, createdById: maker.id, createdAt: startedAt, updatedAt: startedAt });
-      pours.push({ id: pourId, shopId, pieceId, pourPlanId: planId, status: 'open', assumedTempC: t.tempC, notifyUserIds: [maker.id, lead.id], startedById: apprentice.id, createdAt: startedAt, updatedAt: startedAt });
+      pieces.push({
+        id: pieceId,
+        shopId,
+        name: pieceName,
+        wood: woods[i % woods.length]!,
+        notes: '',
+        stage: 'curing',
+        createdById: maker.id,
+        createdAt: startedAt,
+        updatedAt: startedAt,
+      });
+      plans.push({
+        id: planId,
+        shopId,
+        pieceId,
+        moldId: null,
+        name: `${t.label} pour`,
+        inputs: { ...t.inputs, pieceId },
+        productSnapshot: t.snapshot,
+        result: t.result as unknown as Record<string, unknown>,
+        createdById: maker.id,
+        createdAt: startedAt,
+        updatedAt: startedAt,
+      });
+      pours.push({
+        id: pourId,
+        shopId,
+        pieceId,
+        pourPlanId: planId,
+        status: 'open',
+        assumedTempC: t.tempC,
+        notifyUserIds: [maker.id, lead.id],
+        startedById: apprentice.id,
+        createdAt: startedAt,
+        updatedAt: startedAt,
+      });
 
       const logged: { step: string; mixedAt: Date }[] = [];
       for (const b of plannedBatches(t.result)) {
@@ -140,11 +203,32 @@ export async function seedBigShop(ds: DataSource, size: BigShopSize, now = new D
         const mixedAt = new Date(now.getTime() - (isSeal ? sealHoursAgo : pourHoursAgo) * hour + b.index * 6 * 60_000);
         const [lotA, lotB] = [lotFor('A', productId), lotFor('B', productId)];
         batches.push({
-          id: randomUUID(), shopId, pourId, planBatchIndex: b.index, step: stepKeyOf(b), mixedById: apprentice.id, mixedAt,
-          lotAId: lotA?.id ?? null, lotBId: lotB?.id ?? null, lotPigmentId: null, lotANumber: lotA?.lotNumber ?? '', lotBNumber: lotB?.lotNumber ?? '', lotPigmentNumber: '',
-          targetAG: b.partA.grams, targetBG: b.partB.grams, targetPigmentG: b.pigment.grams,
-          weighedAG: b.partA.grams, weighedBG: b.partB.grams, weighedPigmentG: b.pigment.grams, offRatioPct: 0,
-          ambientTempC: t.tempC, surfaceTempC: t.tempC - 0.5, rhPct: 45, dewPointC: null, warnings: [], notes: '',
+          id: randomUUID(),
+          shopId,
+          pourId,
+          planBatchIndex: b.index,
+          step: stepKeyOf(b),
+          mixedById: apprentice.id,
+          mixedAt,
+          lotAId: lotA?.id ?? null,
+          lotBId: lotB?.id ?? null,
+          lotPigmentId: null,
+          lotANumber: lotA?.lotNumber ?? '',
+          lotBNumber: lotB?.lotNumber ?? '',
+          lotPigmentNumber: '',
+          targetAG: b.partA.grams,
+          targetBG: b.partB.grams,
+          targetPigmentG: b.pigment.grams,
+          weighedAG: b.partA.grams,
+          weighedBG: b.partB.grams,
+          weighedPigmentG: b.pigment.grams,
+          offRatioPct: 0,
+          ambientTempC: t.tempC,
+          surfaceTempC: t.tempC - 0.5,
+          rhPct: 45,
+          dewPointC: null,
+          warnings: [],
+          notes: '',
         });
         logged.push({ step: stepKeyOf(b), mixedAt });
       }
@@ -159,14 +243,41 @@ export async function seedBigShop(ds: DataSource, size: BigShopSize, now = new D
       const state = cureState(planSteps(t.result, t.snapshot), logged, pourReadings, t.tempC, now);
       for (const w of wantedReminders(state, pieceName, now, null)) {
         const past = w.dueAt.getTime() <= now.getTime();
-        reminders.push({ id: randomUUID(), shopId, pourId, kind: w.kind, step: w.step, dueAt: w.dueAt, eventAt: w.eventAt, leadMin: w.leadMin, assumed: w.assumed, title: w.title, status: past ? 'sent' : 'pending', sentAt: past ? w.dueAt : null });
+        reminders.push({
+          id: randomUUID(),
+          shopId,
+          pourId,
+          kind: w.kind,
+          step: w.step,
+          dueAt: w.dueAt,
+          eventAt: w.eventAt,
+          leadMin: w.leadMin,
+          assumed: w.assumed,
+          title: w.title,
+          status: past ? 'sent' : 'pending',
+          sentAt: past ? w.dueAt : null,
+        });
       }
     }
 
     const lots: Partial<Lot>[] = [];
     const products = [
-      ...(await m.findBy(ResinSystem, { shopId })).flatMap((r) => (['A', 'B'] as const).map((part) => ({ part, resinSystemId: r.id, pigmentId: null, code: r.name.slice(0, 3).toUpperCase(), kitG: part === 'A' ? r.kitSizeG * 0.66 : r.kitSizeG * 0.34 }))),
-      ...(await m.findBy(Pigment, { shopId })).map((p) => ({ part: 'pigment' as const, resinSystemId: null, pigmentId: p.id, code: p.name.slice(0, 3).toUpperCase(), kitG: p.packSizeG })),
+      ...(await m.findBy(ResinSystem, { shopId })).flatMap((r) =>
+        (['A', 'B'] as const).map((part) => ({
+          part,
+          resinSystemId: r.id,
+          pigmentId: null,
+          code: r.name.slice(0, 3).toUpperCase(),
+          kitG: part === 'A' ? r.kitSizeG * 0.66 : r.kitSizeG * 0.34,
+        })),
+      ),
+      ...(await m.findBy(Pigment, { shopId })).map((p) => ({
+        part: 'pigment' as const,
+        resinSystemId: null,
+        pigmentId: p.id,
+        code: p.name.slice(0, 3).toUpperCase(),
+        kitG: p.packSizeG,
+      })),
     ];
     for (let i = 0; i < size.lots; i++) {
       const p = products[i % products.length]!;
@@ -176,7 +287,19 @@ export async function seedBigShop(ds: DataSource, size: BigShopSize, now = new D
       const remainingG = i % 7 === 0 ? 0 : i % 10 === 0 ? Math.round(quantityG * 0.05) : Math.round(quantityG * (0.2 + ((i * 17) % 80) / 100));
       const receivedOn = new Date(now.getTime() - receivedDaysAgo * day).toISOString().slice(0, 10);
       const expiresOn = p.part === 'pigment' && i % 3 === 0 ? null : new Date(now.getTime() + (365 - receivedDaysAgo) * day).toISOString().slice(0, 10);
-      lots.push({ id: randomUUID(), shopId, part: p.part, resinSystemId: p.resinSystemId, pigmentId: p.pigmentId, lotNumber: `${p.code}-${p.part === 'pigment' ? 'P' : p.part}-${String(i + 1).padStart(4, '0')}`, quantityG, remainingG, receivedOn, expiresOn, notes: '' });
+      lots.push({
+        id: randomUUID(),
+        shopId,
+        part: p.part,
+        resinSystemId: p.resinSystemId,
+        pigmentId: p.pigmentId,
+        lotNumber: `${p.code}-${p.part === 'pigment' ? 'P' : p.part}-${String(i + 1).padStart(4, '0')}`,
+        quantityG,
+        remainingG,
+        receivedOn,
+        expiresOn,
+        notes: '',
+      });
     }
 
     await insertChunked(m, Piece, pieces as Piece[]);
@@ -187,6 +310,15 @@ export async function seedBigShop(ds: DataSource, size: BigShopSize, now = new D
     await insertChunked(m, Reminder, reminders as Reminder[]);
     await insertChunked(m, Lot, lots as Lot[]);
     await m.query('ANALYZE');
-    return { shopName: shop.name, pieces: pieces.length, pourPlans: plans.length, pours: pours.length, batches: batches.length, readings: readings.length, reminders: reminders.length, lots: lots.length };
+    return {
+      shopName: shop.name,
+      pieces: pieces.length,
+      pourPlans: plans.length,
+      pours: pours.length,
+      batches: batches.length,
+      readings: readings.length,
+      reminders: reminders.length,
+      lots: lots.length,
+    };
   });
 }

@@ -36,7 +36,9 @@ export class CpuMeter {
   ) {}
 
   private async backendPids(): Promise<number[]> {
-    const { rows } = await this.db.query<{ pid: number }>(`SELECT pid FROM pg_stat_activity WHERE datname = current_database() AND application_name = 'gelpoint-api'`);
+    const { rows } = await this.db.query<{ pid: number }>(
+      `SELECT pid FROM pg_stat_activity WHERE datname = current_database() AND application_name = 'gelpoint-api'`,
+    );
     return rows.map((r) => r.pid);
   }
 

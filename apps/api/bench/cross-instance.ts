@@ -39,8 +39,16 @@ export async function rateLimitAcrossInstances(apis: string[], limit: number): P
   const onA = (await attempt(a)).status;
   const counted = first.filter((s) => s === 429).length;
   return [
-    { what: `instance 1 refuses sign-in attempt ${limit + 1} for one account (limit ${limit} per 15 min)`, ok: onA === 429 && counted === 0, detail: `attempts 1–${limit} on 1: ${[...new Set(first)].join('/')}; attempt ${limit + 2} on 1: ${onA}` },
-    { what: `instance 2 sees the attempts counted on instance 1`, ok: onB === 429, detail: `attempt ${limit + 1}, on 2: ${onB}${onB === 429 ? '' : ' (the count is kept in each process, not in the database)'}` },
+    {
+      what: `instance 1 refuses sign-in attempt ${limit + 1} for one account (limit ${limit} per 15 min)`,
+      ok: onA === 429 && counted === 0,
+      detail: `attempts 1–${limit} on 1: ${[...new Set(first)].join('/')}; attempt ${limit + 2} on 1: ${onA}`,
+    },
+    {
+      what: `instance 2 sees the attempts counted on instance 1`,
+      ok: onB === 429,
+      detail: `attempt ${limit + 1}, on 2: ${onB}${onB === 429 ? '' : ' (the count is kept in each process, not in the database)'}`,
+    },
   ];
 }
 
@@ -48,7 +56,12 @@ export async function rateLimitAcrossInstances(apis: string[], limit: number): P
  * Both instances give the same answer: whatever one keeps in memory, the other rebuilds from the
  * database. `stable` picks what does not move with the clock (cure progress is computed as of now).
  */
-export async function sameAnswerOnBoth(apis: string[], token: string, path: string, stable: (body: Record<string, unknown>) => unknown = (b) => b): Promise<Finding> {
+export async function sameAnswerOnBoth(
+  apis: string[],
+  token: string,
+  path: string,
+  stable: (body: Record<string, unknown>) => unknown = (b) => b,
+): Promise<Finding> {
   const [x, y] = (await Promise.all(apis.map((u) => must(200, u, 'GET', path, { token })))).map((b) => JSON.stringify(stable(b)));
   return { what: `both instances answer GET /api${path.split('?')[0]} alike`, ok: x === y, detail: `${x!.length} bytes compared` };
 }

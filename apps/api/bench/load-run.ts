@@ -97,7 +97,9 @@ async function settle(db: pg.Client, timeoutMs = 30_000): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   let quiet = 0;
   while (quiet < 2 && Date.now() < deadline) {
-    const { rows } = await db.query<{ n: number }>(`SELECT count(*)::int AS n FROM pg_stat_activity WHERE datname = current_database() AND application_name = 'gelpoint-api' AND state <> 'idle'`);
+    const { rows } = await db.query<{ n: number }>(
+      `SELECT count(*)::int AS n FROM pg_stat_activity WHERE datname = current_database() AND application_name = 'gelpoint-api' AND state <> 'idle'`,
+    );
     quiet = rows[0]!.n === 0 ? quiet + 1 : 0;
     await new Promise((r) => setTimeout(r, 100));
   }

@@ -46,9 +46,19 @@ async function main(): Promise<number> {
     const depth = board.topMm - board.floorMm;
     const reads = [
       { endpoint: 'GET /api/pours (cure board)', token: tokens.lead, path: '/api/pours' },
-      { endpoint: 'GET /api/pour-plans/:id', token: tokens.maker, path: '', next: (i: number) => ({ path: `/api/pour-plans/${board.planIds[i % board.planIds.length]}` }) },
+      {
+        endpoint: 'GET /api/pour-plans/:id',
+        token: tokens.maker,
+        path: '',
+        next: (i: number) => ({ path: `/api/pour-plans/${board.planIds[i % board.planIds.length]}` }),
+      },
       { endpoint: 'GET /api/molds/:id (cavity report)', token: tokens.maker, path: `/api/molds/${board.moldId}` },
-      { endpoint: 'GET /api/molds/:id/fill', token: tokens.maker, path: '', next: (i: number) => ({ path: `/api/molds/${board.moldId}/fill?level=${(board.floorMm + ((i * 7) % 100) * (depth / 100)).toFixed(2)}&from=mould` }) },
+      {
+        endpoint: 'GET /api/molds/:id/fill',
+        token: tokens.maker,
+        path: '',
+        next: (i: number) => ({ path: `/api/molds/${board.moldId}/fill?level=${(board.floorMm + ((i * 7) % 100) * (depth / 100)).toFixed(2)}&from=mould` }),
+      },
     ];
     say('warming up (2 s, not counted)…');
     const target: LoadTarget = { apiUrls: apis, apiPids: stack.apiPids, databaseUrl };
@@ -64,7 +74,9 @@ async function main(): Promise<number> {
     // Each cup of each run sheet is logged once: request k logs cup ⌊k / pours⌋ of pour k mod pours.
     const cups = writes.runSheet.length * writes.pourIds.length;
     const batchAmount = cups - 2 * CONNECTIONS;
-    say(`POST batches: ${CONNECTIONS} connections, up to ${batchAmount} distinct cups (${writes.pourIds.length} pours × ${writes.runSheet.length}) or ${WRITE_S} s…`);
+    say(
+      `POST batches: ${CONNECTIONS} connections, up to ${batchAmount} distinct cups (${writes.pourIds.length} pours × ${writes.runSheet.length}) or ${WRITE_S} s…`,
+    );
     rows.push(
       await measure(target, {
         endpoint: 'POST /api/pours/:id/batches',
@@ -78,7 +90,16 @@ async function main(): Promise<number> {
           const cup = writes.runSheet[Math.floor(k / writes.pourIds.length)]!;
           return {
             path: `/api/pours/${writes.pourIds[k % writes.pourIds.length]}/batches`,
-            body: { planBatchIndex: cup.index, weighedAG: Math.round(cup.partAG), weighedBG: Math.round(cup.partBG), lotANumber: 'BD25-A-0412', lotBNumber: 'BD25-B-0412', ambientTempC: 21, surfaceTempC: 20, rhPct: 45 },
+            body: {
+              planBatchIndex: cup.index,
+              weighedAG: Math.round(cup.partAG),
+              weighedBG: Math.round(cup.partBG),
+              lotANumber: 'BD25-A-0412',
+              lotBNumber: 'BD25-B-0412',
+              ambientTempC: 21,
+              surfaceTempC: 20,
+              rhPct: 45,
+            },
           };
         },
       }),
@@ -99,7 +120,10 @@ async function main(): Promise<number> {
         amount: readingAmount,
         next: (k) => {
           const n = Math.floor(k / writes.pourIds.length);
-          return { path: `/api/pours/${writes.pourIds[k % writes.pourIds.length]}/readings`, body: { readings: [{ at: new Date(firstAt + n * 30_000).toISOString(), tempC: 20 + (n % 20) / 10 }] } };
+          return {
+            path: `/api/pours/${writes.pourIds[k % writes.pourIds.length]}/readings`,
+            body: { readings: [{ at: new Date(firstAt + n * 30_000).toISOString(), tempC: 20 + (n % 20) / 10 }] },
+          };
         },
       }),
     );

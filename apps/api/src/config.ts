@@ -4,7 +4,10 @@ import { z } from 'zod';
 import { databaseUrl } from '@gelpoint/db';
 
 const Env = z.object({
-  DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL').optional(),
+  DATABASE_URL: z
+    .string()
+    .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL')
+    .optional(),
   // Read by the password hashing in packages/db; checked here so a bad value stops the boot, not a sign-in.
   GELPOINT_SCRYPT_LOG_N: z.coerce.number().int().min(10, 'GELPOINT_SCRYPT_LOG_N must be 10 to 20').max(20, 'GELPOINT_SCRYPT_LOG_N must be 10 to 20').optional(),
   GELPOINT_HOST: z.string().default('127.0.0.1'),
@@ -12,9 +15,17 @@ const Env = z.object({
   GELPOINT_PUBLIC_URL: z.url().optional(),
   GELPOINT_JWT_SECRET: z.string().min(32, 'GELPOINT_JWT_SECRET must be at least 32 characters').optional(),
   GELPOINT_DATA_DIR: z.string().optional(),
-  GELPOINT_SESSION_HOURS: z.coerce.number().positive().max(24 * 90).default(24 * 7),
+  GELPOINT_SESSION_HOURS: z.coerce
+    .number()
+    .positive()
+    .max(24 * 90)
+    .default(24 * 7),
   GELPOINT_INVITATION_DAYS: z.coerce.number().positive().max(60).default(7),
-  GELPOINT_RESET_MINUTES: z.coerce.number().positive().max(24 * 60).default(60),
+  GELPOINT_RESET_MINUTES: z.coerce
+    .number()
+    .positive()
+    .max(24 * 60)
+    .default(60),
   GELPOINT_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   GELPOINT_WEB_DIST: z.string().optional(),
   GELPOINT_AUTH_RATE_PER_15MIN: z.coerce.number().int().positive().default(30),

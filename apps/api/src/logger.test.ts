@@ -94,7 +94,10 @@ describe('what the API logs', () => {
     const seen = new Set<string>();
     for (const line of lines) {
       const entry = JSON.parse(line) as { req?: { headers?: Record<string, unknown> }; res?: { headers?: Record<string, unknown> } };
-      const headers: Record<string, unknown> = { ...entry.req?.headers, ...(entry.res?.headers?.['set-cookie'] ? { 'set-cookie': entry.res.headers['set-cookie'] } : {}) };
+      const headers: Record<string, unknown> = {
+        ...entry.req?.headers,
+        ...(entry.res?.headers?.['set-cookie'] ? { 'set-cookie': entry.res.headers['set-cookie'] } : {}),
+      };
       for (const name of ['authorization', 'cookie', 'x-gelpoint-csrf', 'x-gelpoint-ingest-token', 'set-cookie']) {
         if (headers[name] === undefined) continue;
         seen.add(name);
@@ -114,4 +117,3 @@ describe('withoutTokens', () => {
     expect(withoutTokens('/api/pieces?page=2')).toBe('/api/pieces?page=2');
   });
 });
-

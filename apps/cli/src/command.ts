@@ -5,7 +5,10 @@ export type Command = (argv: string[]) => Promise<string>;
 
 /** An error the user caused: printed as one line on stderr, no stack trace. */
 export class CliError extends Error {
-  constructor(message: string, readonly exitCode = 2) {
+  constructor(
+    message: string,
+    readonly exitCode = 2,
+  ) {
     super(message);
   }
 }
@@ -25,7 +28,9 @@ function attachNegativeValues(argv: string[]): string[] {
   return out;
 }
 
-type ParsedOptions<T extends ParseArgsConfig['options']> = ReturnType<typeof parseArgs<{ args: string[]; options: T; allowPositionals: boolean; strict: true }>>;
+type ParsedOptions<T extends ParseArgsConfig['options']> = ReturnType<
+  typeof parseArgs<{ args: string[]; options: T; allowPositionals: boolean; strict: true }>
+>;
 
 /** node:util parseArgs, with its errors turned into one readable line. */
 export function parseOptions<T extends ParseArgsConfig['options']>(argv: string[], options: T, allowPositionals = false): ParsedOptions<T> {

@@ -13,8 +13,7 @@ prints where the cavity floor stands and how high L is above it (the height the 
 level means); --curve N adds N points of the volume-versus-level curve.`,
   },
   mix: {
-    synopsis:
-      'gelpoint mix --volume-ml V --ratio A:B --by weight|volume --density-a DA --density-b DB [--pigment-pct P] [--pigment-density-g-ml DP] [--json]',
+    synopsis: 'gelpoint mix --volume-ml V --ratio A:B --by weight|volume --density-a DA --density-b DB [--pigment-pct P] [--pigment-density-g-ml DP] [--json]',
     about: `Grams and millilitres of part A, part B and pigment for one cup of V mL (pigment included).
 --pigment-pct is a percentage of part A + part B by mass; without --pigment-density-g-ml the pigment
 is taken to be as dense as the mixed resin.`,

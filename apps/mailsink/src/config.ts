@@ -46,9 +46,6 @@ function readPort(env: NodeJS.ProcessEnv, variable: string, fallback: number): P
   if (Number.isInteger(port) && port >= 0 && port <= 65535) return { ok: true, port };
   return {
     ok: false,
-    error: new MailSinkError(
-      'INVALID_CONFIG',
-      `${variable} is "${text}", which is not a port — set it to a whole number from 0 to 65535`,
-    ),
+    error: new MailSinkError('INVALID_CONFIG', `${variable} is "${text}", which is not a port — set it to a whole number from 0 to 65535`),
   };
 }

@@ -33,8 +33,7 @@ export function createHttpApp(store: MessageStore, smtp: SmtpEndpoint): express.
     next();
   });
 
-  const matching = (recipient: string) =>
-    recipient === '' ? store.list() : store.list().filter((message) => isAddressedTo(message, recipient));
+  const matching = (recipient: string) => (recipient === '' ? store.list() : store.list().filter((message) => isAddressedTo(message, recipient)));
 
   app.get('/api/messages', (req, res) => {
     const filter = recipientFilter(req);
@@ -45,12 +44,7 @@ export function createHttpApp(store: MessageStore, smtp: SmtpEndpoint): express.
   app.get('/api/messages/:id', (req, res) => {
     const message = store.find(req.params.id);
     if (!message) {
-      return sendError(
-        res,
-        404,
-        'MESSAGE_NOT_FOUND',
-        `No message has the id "${req.params.id}"; list /api/messages for the ids the sink holds.`,
-      );
+      return sendError(res, 404, 'MESSAGE_NOT_FOUND', `No message has the id "${req.params.id}"; list /api/messages for the ids the sink holds.`);
     }
     res.json(message);
   });

@@ -23,11 +23,7 @@ function listenFailure(cause: NodeJS.ErrnoException, role: ListenerRole, host: s
   const listener = { role, host, port };
   const what = role === 'smtp' ? 'SMTP' : 'HTTP';
   if (cause.code === 'EADDRINUSE') {
-    return new MailSinkError(
-      'PORT_IN_USE',
-      `port ${port} on ${host} is already in use — stop the other process or choose another ${what} port`,
-      listener,
-    );
+    return new MailSinkError('PORT_IN_USE', `port ${port} on ${host} is already in use — stop the other process or choose another ${what} port`, listener);
   }
   return new MailSinkError(
     'LISTEN_FAILED',

@@ -148,9 +148,10 @@ describe('receiving mail over SMTP', () => {
     const line = `${'g'.repeat(998)}\r\n`;
     const body = line.repeat(Math.ceil((10 * 1024 * 1024 + 1) / line.length));
     const raw = `From: a@gelpoint.test\r\nTo: b@example.com\r\nSubject: too big\r\n\r\n${body}`;
-    const refusal = await transport
-      .sendMail({ envelope: { from: 'a@gelpoint.test', to: ['b@example.com'] }, raw })
-      .then(() => null, (error: { responseCode?: number }) => error);
+    const refusal = await transport.sendMail({ envelope: { from: 'a@gelpoint.test', to: ['b@example.com'] }, raw }).then(
+      () => null,
+      (error: { responseCode?: number }) => error,
+    );
     // RFC 1870 §4: a message larger than the advertised SIZE is rejected with a permanent 552.
     expect(refusal?.responseCode).toBe(552);
     expect(sink.messages()).toEqual([]);

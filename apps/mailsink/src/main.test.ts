@@ -73,9 +73,7 @@ describe('main', () => {
       MAILSINK_DATA_DIR: await tempFolder(),
     });
     expect(await run.exited).toBe(1);
-    expect(run.stderr()).toBe(
-      `mail sink: port ${port} on ${HOST} is already in use — stop the other process or set MAILSINK_SMTP_PORT\n`,
-    );
+    expect(run.stderr()).toBe(`mail sink: port ${port} on ${HOST} is already in use — stop the other process or set MAILSINK_SMTP_PORT\n`);
   });
 
   it('refuses a port setting that is not a number', async () => {
@@ -99,7 +97,10 @@ describe('main', () => {
     await transport.sendMail({ from: 'a@gelpoint.test', to: 'maker@example.com', subject: 'Ready to machine', text: 'x' });
     await transport.sendMail({ from: 'a@gelpoint.test', to: 'lead@shop.test', subject: 'Demold check', text: 'y' });
     const received = await waitFor(() => {
-      const lines = run.stdout().split('\n').filter((line) => line.includes('received'));
+      const lines = run
+        .stdout()
+        .split('\n')
+        .filter((line) => line.includes('received'));
       return lines.length === 2 ? lines : undefined;
     }, 'two received lines');
     expect(received[0]).toMatch(/to maker@example\.com — "Ready to machine"$/);

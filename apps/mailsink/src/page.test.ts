@@ -25,16 +25,11 @@ function message(overrides: Partial<SinkMessage>): SinkMessage {
 }
 
 // htmlparser2 (registry package, installed at the root) reads the page the way a browser tokenizer would.
-const elements = (html: string, name: string) =>
-  findAll((node) => node.name === name, parseDocument(html).children);
+const elements = (html: string, name: string) => findAll((node) => node.name === name, parseDocument(html).children);
 
 describe('inbox page', () => {
   it('lists when, to and subject, newest first as given, each linking to its message', () => {
-    const page = renderInboxPage(
-      [message({ id: 'm-2', subject: 'Second', to: ['a@x.test', 'b@x.test'] }), message({ id: 'm-1', subject: 'First' })],
-      smtp,
-      '',
-    );
+    const page = renderInboxPage([message({ id: 'm-2', subject: 'Second', to: ['a@x.test', 'b@x.test'] }), message({ id: 'm-1', subject: 'First' })], smtp, '');
     expect(textContent(elements(page, 'title'))).toBe('Gelpoint mail sink');
     const rows = elements(page, 'tbody').flatMap((tbody) => findAll((node) => node.name === 'tr', tbody.children));
     expect(rows.map((row) => findAll((node) => node.name === 'td', row.children).map((cell) => textContent(cell).trim()))).toEqual([
@@ -73,9 +68,7 @@ describe('message page', () => {
     const page = renderMessagePage(message({}), smtp);
     const [pre] = elements(page, 'pre');
     expect(textContent(pre!)).toBe('Open https://gelpoint.test/pours/9 to log it.');
-    expect(findAll((node) => node.name === 'a', pre!.children).map((a) => getAttributeValue(a, 'href'))).toEqual([
-      'https://gelpoint.test/pours/9',
-    ]);
+    expect(findAll((node) => node.name === 'a', pre!.children).map((a) => getAttributeValue(a, 'href'))).toEqual(['https://gelpoint.test/pours/9']);
   });
 
   it('puts an HTML body only inside a fully sandboxed srcdoc frame', () => {

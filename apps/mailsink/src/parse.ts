@@ -11,11 +11,7 @@ export interface ReceiptStamp {
   receivedAt: Date;
 }
 
-export async function parseMessage(
-  raw: Buffer,
-  envelope: ReceivedEnvelope,
-  stamp: ReceiptStamp,
-): Promise<SinkMessage> {
+export async function parseMessage(raw: Buffer, envelope: ReceivedEnvelope, stamp: ReceiptStamp): Promise<SinkMessage> {
   // Attachments and the text→HTML rendering are not shown by the sink, so skip that work.
   const parsed = await simpleParser(raw, { skipTextToHtml: true, skipTextLinks: true });
   const receivedAt = stamp.receivedAt.toISOString();

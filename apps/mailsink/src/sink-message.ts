@@ -27,7 +27,5 @@ export interface SinkMessage {
 /** A recipient matches when it appears in To, Cc or the SMTP envelope, ignoring case. */
 export function isAddressedTo(message: SinkMessage, address: string): boolean {
   const wanted = address.trim().toLowerCase();
-  return [...message.to, ...message.cc, ...message.envelope.rcptTo].some(
-    (recipient) => recipient.toLowerCase() === wanted,
-  );
+  return [...message.to, ...message.cc, ...message.envelope.rcptTo].some((recipient) => recipient.toLowerCase() === wanted);
 }

@@ -83,9 +83,7 @@ describe('message log on disk', () => {
   });
 
   it('leaves out lines that are not messages without giving up on the rest', async () => {
-    const folder = await folderWithLog(
-      `${encodeLogLine(sample('a'))}not json at all\n{"id":42}\n\n${encodeLogLine(sample('b'))}`,
-    );
+    const folder = await folderWithLog(`${encodeLogLine(sample('a'))}not json at all\n{"id":42}\n\n${encodeLogLine(sample('b'))}`);
     const store = await open(folder);
     expect(store.list().map((m) => m.id)).toEqual(['b', 'a']);
     expect(store.skippedLines).toBe(2);

@@ -41,14 +41,27 @@ export async function measureHome(browser: Browser, baseUrl: string, state: Stor
   try {
     const recorder = recordScripts(page);
     await page.goto(`${baseUrl}/today`, { waitUntil: 'commit' });
-    const contentMs = await pageTimeWhen(page, () => document.getElementById('today-due') !== null || document.body.innerText.includes('Nothing due in the next 24 hours'), null);
+    const contentMs = await pageTimeWhen(
+      page,
+      () => document.getElementById('today-due') !== null || document.body.innerText.includes('Nothing due in the next 24 hours'),
+      null,
+    );
     const tti = await timeToInteractiveMs(page, contentMs, quietMs);
     recorder.stop();
     const scripts = await recorder.loads();
     const fcpMs = await firstContentfulPaintMs(page);
     if (fcpMs === null) throw new Error('Chromium reported no first-contentful-paint entry');
     mustBeClean(errors, 'the home page');
-    return { scripts, gzipBytes: totalGzipBytes(scripts), rawBytes: totalRawBytes(scripts), fcpMs, contentMs, ttiMs: tti.ttiMs, longestTaskMs: tti.longestTaskMs, domNodes: await domNodeCount(page) };
+    return {
+      scripts,
+      gzipBytes: totalGzipBytes(scripts),
+      rawBytes: totalRawBytes(scripts),
+      fcpMs,
+      contentMs,
+      ttiMs: tti.ttiMs,
+      longestTaskMs: tti.longestTaskMs,
+      domNodes: await domNodeCount(page),
+    };
   } finally {
     await context.close();
   }
@@ -105,7 +118,16 @@ export async function measureCureBoard(browser: Browser, baseUrl: string, state:
     recorder.stop();
     const threeLoaded = (await recorder.loads()).some((l) => l.isThree);
     mustBeClean(errors, 'the cure board');
-    return { listMs, rows, domNodes, pageChangeMs: pageChange.ms, pageChangeLongestTaskMs: pageChange.longestTaskMs, filterMs: filter.ms, filterLongestTaskMs: filter.longestTaskMs, threeLoaded };
+    return {
+      listMs,
+      rows,
+      domNodes,
+      pageChangeMs: pageChange.ms,
+      pageChangeLongestTaskMs: pageChange.longestTaskMs,
+      filterMs: filter.ms,
+      filterLongestTaskMs: filter.longestTaskMs,
+      threeLoaded,
+    };
   } finally {
     await context.close();
   }
@@ -126,7 +148,8 @@ export async function measureShelfLots(browser: Browser, baseUrl: string, state:
     const next = page.getByRole('navigation', { name: 'Pages of lots' }).getByRole('link', { name: 'Next page' });
     const pageChange = await timeClick(
       next,
-      ({ sel, b }: { sel: string; b: string | null }) => document.querySelector(`${sel} td, ${sel} th`)?.textContent !== b && document.body.innerText.includes('Page 2 of'),
+      ({ sel, b }: { sel: string; b: string | null }) =>
+        document.querySelector(`${sel} td, ${sel} th`)?.textContent !== b && document.body.innerText.includes('Page 2 of'),
       { sel: rowsSelector, b: before },
     );
 
@@ -144,7 +167,16 @@ export async function measureShelfLots(browser: Browser, baseUrl: string, state:
     recorder.stop();
     const threeLoaded = (await recorder.loads()).some((l) => l.isThree);
     mustBeClean(errors, 'the shelf');
-    return { listMs, rows, domNodes, pageChangeMs: pageChange.ms, pageChangeLongestTaskMs: pageChange.longestTaskMs, filterMs: filter.ms, filterLongestTaskMs: filter.longestTaskMs, threeLoaded };
+    return {
+      listMs,
+      rows,
+      domNodes,
+      pageChangeMs: pageChange.ms,
+      pageChangeLongestTaskMs: pageChange.longestTaskMs,
+      filterMs: filter.ms,
+      filterLongestTaskMs: filter.longestTaskMs,
+      threeLoaded,
+    };
   } finally {
     await context.close();
   }

@@ -76,7 +76,12 @@ export async function domNodeCount(page: Page): Promise<number> {
  * at most two requests in flight; the network is not watched here.) A page that never goes quiet
  * within `giveUpMs` answers null rather than a number it did not reach.
  */
-export async function timeToInteractiveMs(page: Page, contentMs: number, quietMs: number, giveUpMs = 15_000): Promise<{ ttiMs: number | null; longTasks: number; longestTaskMs: number }> {
+export async function timeToInteractiveMs(
+  page: Page,
+  contentMs: number,
+  quietMs: number,
+  giveUpMs = 15_000,
+): Promise<{ ttiMs: number | null; longTasks: number; longestTaskMs: number }> {
   for (;;) {
     const { nowMs, fcpMs, tasks } = await page.evaluate(() => ({
       nowMs: performance.now(),
@@ -94,7 +99,10 @@ export async function timeToInteractiveMs(page: Page, contentMs: number, quietMs
 
 /** The longest main-thread task that began at or after `sinceMs`, 0 when none reached 50 ms. */
 export async function longestTaskSinceMs(page: Page, sinceMs: number): Promise<number> {
-  return page.evaluate((since) => (window.gelpointBenchLongTasks ?? []).filter((t) => t.startMs >= since).reduce((m, t) => Math.max(m, t.endMs - t.startMs), 0), sinceMs);
+  return page.evaluate(
+    (since) => (window.gelpointBenchLongTasks ?? []).filter((t) => t.startMs >= since).reduce((m, t) => Math.max(m, t.endMs - t.startMs), 0),
+    sinceMs,
+  );
 }
 
 /**

@@ -49,11 +49,25 @@ try {
   const rows: FigureRow[] = [
     bytesRow('initial JS of the signed-in home, gzip', pick(home, 'gzipBytes'), budgets.initialJsGzipBytes),
     bytesRow('initial JS of the signed-in home, as served', pick(home, 'rawBytes')),
-    checkRow('three.js before the mould route', threeBefore.length === 0, threeBefore.length ? `loaded on ${[...new Set(threeBefore)].join(', ')}` : `none (${mould.otherPages.length} pages)`, 'none'),
-    checkRow('three.js on the mould route', mould.threeOnMould !== null, mould.threeOnMould ? `${(mould.threeOnMould.gzipBytes / 1000).toFixed(1)} kB gzip, lazily` : 'not loaded', 'loaded'),
+    checkRow(
+      'three.js before the mould route',
+      threeBefore.length === 0,
+      threeBefore.length ? `loaded on ${[...new Set(threeBefore)].join(', ')}` : `none (${mould.otherPages.length} pages)`,
+      'none',
+    ),
+    checkRow(
+      'three.js on the mould route',
+      mould.threeOnMould !== null,
+      mould.threeOnMould ? `${(mould.threeOnMould.gzipBytes / 1000).toFixed(1)} kB gzip, lazily` : 'not loaded',
+      'loaded',
+    ),
     msRow('home: first contentful paint', pick(home, 'fcpMs'), budgets.firstContentfulPaintMs),
     msRow('home: list of what is due on screen', pick(home, 'contentMs')),
-    msRow('home: time to interactive (approx.)', home.map((h) => h.ttiMs ?? Infinity), budgets.timeToInteractiveMs),
+    msRow(
+      'home: time to interactive (approx.)',
+      home.map((h) => h.ttiMs ?? Infinity),
+      budgets.timeToInteractiveMs,
+    ),
     countRow('home: DOM elements', pick(home, 'domNodes'), budgets.domNodes),
     msRow('cure board (500 pours): first page on screen', pick(board, 'listMs'), budgets.listRenderedMs),
     countRow('cure board: cards drawn', pick(board, 'rows'), budgets.rowsAtOnce),
@@ -70,9 +84,12 @@ try {
 
   const chunks = [...home[0]!.scripts].sort((a, b) => b.gzipBytes - a.gzipBytes);
   console.log(`\nJavaScript the signed-in home fetched (first run, ${chunks.length} files):`);
-  for (const c of chunks) console.log(`  ${c.name.padEnd(40)} ${(c.rawBytes / 1000).toFixed(1).padStart(7)} kB  ${(c.gzipBytes / 1000).toFixed(1).padStart(6)} kB gzip`);
+  for (const c of chunks)
+    console.log(`  ${c.name.padEnd(40)} ${(c.rawBytes / 1000).toFixed(1).padStart(7)} kB  ${(c.gzipBytes / 1000).toFixed(1).padStart(6)} kB gzip`);
   const longest = (list: { longestTaskMs: number }[]) => Math.round(median(list.map((r) => r.longestTaskMs)));
-  console.log(`\nLongest main-thread task (median of runs): home ${longest(home)} ms; cure board next page ${Math.round(median(pick(board, 'pageChangeLongestTaskMs')))} ms, filter ${Math.round(median(pick(board, 'filterLongestTaskMs')))} ms; shelf next page ${Math.round(median(pick(shelf, 'pageChangeLongestTaskMs')))} ms, search ${Math.round(median(pick(shelf, 'filterLongestTaskMs')))} ms (0 = no task over 50 ms).`);
+  console.log(
+    `\nLongest main-thread task (median of runs): home ${longest(home)} ms; cure board next page ${Math.round(median(pick(board, 'pageChangeLongestTaskMs')))} ms, filter ${Math.round(median(pick(board, 'filterLongestTaskMs')))} ms; shelf next page ${Math.round(median(pick(shelf, 'pageChangeLongestTaskMs')))} ms, search ${Math.round(median(pick(shelf, 'filterLongestTaskMs')))} ms (0 = no task over 50 ms).`,
+  );
   console.log(`\n${markdownTable(rows)}\n`);
   console.log('Budgets:');
   for (const b of Object.values(budgets)) console.log(`  ${b.source}`);

@@ -31,7 +31,12 @@ export function recordScripts(page: Page): ScriptRecorder {
     if (!isScript(r) || r.status() !== 200) return;
     pending.push(
       r.body().then(
-        (body) => ({ name: new URL(r.url()).pathname.split('/').pop() ?? r.url(), rawBytes: body.byteLength, gzipBytes: gzipSync(body).byteLength, isThree: body.includes('__THREE__') }),
+        (body) => ({
+          name: new URL(r.url()).pathname.split('/').pop() ?? r.url(),
+          rawBytes: body.byteLength,
+          gzipBytes: gzipSync(body).byteLength,
+          isThree: body.includes('__THREE__'),
+        }),
         () => null,
       ),
     );

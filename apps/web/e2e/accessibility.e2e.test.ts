@@ -1,16 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { axeFindings, focusProblems, type Finding, type FocusProblem } from './support/a11y-checks';
 import { watchedPage, type PageWatch } from './support/browser';
-import {
-  prepareMainPages,
-  publicPages,
-  settle,
-  signIn,
-  signedInPages,
-  type DemoRole,
-  type MainPage,
-  type PageFixtures,
-} from './support/main-pages';
+import { prepareMainPages, publicPages, settle, signIn, signedInPages, type DemoRole, type MainPage, type PageFixtures } from './support/main-pages';
 import { useBrowserStack } from './support/use-browser-stack';
 
 // A demo database of this file's own, seeded just now (packages/db/src/seed); the mould and the invitation are made here.
@@ -29,7 +20,12 @@ beforeAll(async () => {
  * other roles see and more, so the lead and the signed-out pages get both checks, and the maker and the apprentice
  * get axe on the pages where their view differs (a machine of two cores runs the whole set within the time limit).
  */
-async function checkPages(role: DemoRole | null, pages: MainPage[], walkFocus: boolean, watchAll: PageWatch[]): Promise<{ findings: Finding[]; focus: FocusProblem[]; stops: number }> {
+async function checkPages(
+  role: DemoRole | null,
+  pages: MainPage[],
+  walkFocus: boolean,
+  watchAll: PageWatch[],
+): Promise<{ findings: Finding[]; focus: FocusProblem[]; stops: number }> {
   const context = await e2e.browser().newContext({ viewport: { width: 1280, height: 900 } });
   const { page, watch } = await watchedPage(context, stack.baseUrl);
   watchAll.push(watch);
@@ -65,7 +61,10 @@ describe('accessibility of every main page in a real browser', () => {
     // Two browser contexts at a time: the machine has two cores.
     const runs = await Promise.all([
       checkPages(null, publicPages(invitation), true, watches).then(async (signedOut) => [signedOut, await checkPages('lead', pagesOf('lead'), true, watches)]),
-      checkPages('maker', pagesOf('maker'), false, watches).then(async (maker) => [maker, await checkPages('apprentice', pagesOf('apprentice'), false, watches)]),
+      checkPages('maker', pagesOf('maker'), false, watches).then(async (maker) => [
+        maker,
+        await checkPages('apprentice', pagesOf('apprentice'), false, watches),
+      ]),
     ]).then((pairs) => pairs.flat());
     const findings = runs.flatMap((r) => r.findings);
     const focus = runs.flatMap((r) => r.focus);
@@ -125,7 +124,10 @@ describe('accessibility of every main page in a real browser', () => {
     await expect.poll(() => view.locator('canvas').count()).toBe(1);
     // The canvas is a picture with a name; its description is the figure's caption, the numbers in words.
     const description = await view.evaluate((el) =>
-      (el.getAttribute('aria-describedby') ?? '').split(' ').map((id) => document.getElementById(id)?.textContent ?? '').join(' '),
+      (el.getAttribute('aria-describedby') ?? '')
+        .split(' ')
+        .map((id) => document.getElementById(id)?.textContent ?? '')
+        .join(' '),
     );
     // Prism formula (CRC Concise Encyclopedia of Mathematics): the 80 × 40 × 20 mm pocket holds 64 000 mm³ = 64 mL at its rim.
     expect(description).toContain('64.0 mL');

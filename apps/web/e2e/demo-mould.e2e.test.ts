@@ -10,7 +10,7 @@ const e2e = useBrowserStack();
 const stack = e2e.stack;
 
 describe("the demo shop's mould in a real browser", () => {
-  it('is there at the maker\'s first sign-in: in 3D, with its depth map, its curve and a plan made from it', { timeout: 60_000 }, async () => {
+  it("is there at the maker's first sign-in: in 3D, with its depth map, its curve and a plan made from it", { timeout: 60_000 }, async () => {
     const context = await e2e.browser().newContext({ viewport: { width: 1280, height: 900 } });
     const { page, watch } = await watchedPage(context, stack.baseUrl);
     page.setDefaultTimeout(10_000);

@@ -6,7 +6,6 @@ import { useBrowserStack } from './support/use-browser-stack';
 const e2e = useBrowserStack();
 const stack = e2e.stack;
 
-
 describe('the foundation in a real browser', () => {
   it('signs the lead in, keeps the session across a reload, invites a maker by e-mail and signs out for real', async () => {
     const context = await e2e.browser().newContext({ viewport: { width: 1280, height: 900 } });

@@ -19,7 +19,11 @@ const depthMm = 15;
 const resinMl = (80 * 40 * depthMm) / 1000;
 
 async function token(email: string): Promise<string> {
-  const res = await fetch(`${stack.baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password: demoPassword }) });
+  const res = await fetch(`${stack.baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password: demoPassword }),
+  });
   expect(res.status).toBe(200);
   return ((await res.json()) as { token: string }).token;
 }
@@ -87,69 +91,96 @@ async function makerPage(width = 1440): Promise<{ page: Page; watch: { problems:
 }
 
 describe('one datum for the fill level, in the browser', () => {
-  it('gives the same resin for the same depth on the mould page, in the planner from the mould and from a quick shape, and in the API', { timeout: 90_000 }, async () => {
-    const { page, watch, close } = await makerPage();
+  it(
+    'gives the same resin for the same depth on the mould page, in the planner from the mould and from a quick shape, and in the API',
+    { timeout: 90_000 },
+    async () => {
+      const { page, watch, close } = await makerPage();
 
-    await page.goto(`${stack.baseUrl}/moulds/${world.moldId}`);
-    const volume = page.getByTestId('fill-volume');
-    await expect.poll(() => volume.textContent(), { timeout: 20_000 }).toBe('64.0 mL');
-    // The report opens at the rim: 20 mm above the pocket floor, 30 mm in the file's own frame.
-    const level = page.getByLabel('Fill level', { exact: true });
-    expect(await level.inputValue()).toBe('20.0');
-    await level.fill(String(depthMm));
-    await expect.poll(() => volume.textContent()).toBe(`${resinMl.toFixed(1)} mL`);
-    expect(await page.getByTestId('level-in-mould-frame').textContent()).toBe('In the mould file’s own frame: resin surface at 25.0 mm, cavity floor at 10.0 mm.');
-    // The curve's axis is the input's: it runs from the floor (0) to the rim (20).
-    const plotTitle = page.getByRole('img', { name: /Volume against fill level/ });
-    await expect.poll(() => plotTitle.count()).toBe(1);
-    const ticks = await plotTitle.locator('text').allTextContents();
-    expect(ticks).toContain('0');
-    expect(ticks).toContain('20');
-    expect(ticks).not.toContain('30');
+      await page.goto(`${stack.baseUrl}/moulds/${world.moldId}`);
+      const volume = page.getByTestId('fill-volume');
+      await expect.poll(() => volume.textContent(), { timeout: 20_000 }).toBe('64.0 mL');
+      // The report opens at the rim: 20 mm above the pocket floor, 30 mm in the file's own frame.
+      const level = page.getByLabel('Fill level', { exact: true });
+      expect(await level.inputValue()).toBe('20.0');
+      await level.fill(String(depthMm));
+      await expect.poll(() => volume.textContent()).toBe(`${resinMl.toFixed(1)} mL`);
+      expect(await page.getByTestId('level-in-mould-frame').textContent()).toBe(
+        'In the mould file’s own frame: resin surface at 25.0 mm, cavity floor at 10.0 mm.',
+      );
+      // The curve's axis is the input's: it runs from the floor (0) to the rim (20).
+      const plotTitle = page.getByRole('img', { name: /Volume against fill level/ });
+      await expect.poll(() => plotTitle.count()).toBe(1);
+      const ticks = await plotTitle.locator('text').allTextContents();
+      expect(ticks).toContain('0');
+      expect(ticks).toContain('20');
+      expect(ticks).not.toContain('30');
 
-    await page.goto(`${stack.baseUrl}/pieces/${world.pieceId}/pour-plans/new`);
-    const planner = page.getByRole('form', { name: 'Pour plan' });
-    await planner.getByLabel('Plan name', { exact: true }).fill(`From the mould ${stamp}`);
-    await planner.getByText("The piece's mould", { exact: true }).click();
-    await planner.getByLabel('Mould', { exact: true }).selectOption({ label: world.moldName });
-    await planner.getByLabel('Fill level (mm)', { exact: true }).fill(String(depthMm));
-    const deep = planner.getByLabel('Deep-pour product', { exact: true });
-    await deep.selectOption((await deep.locator('option', { hasText: world.productName }).getAttribute('value'))!);
-    await planner.getByLabel('Over-pour (% of each layer)', { exact: true }).fill('0');
-    await planner.getByLabel('Shop temperature (°C)', { exact: true }).fill('21');
-    await expect.poll(() => planner.getByTestId('planner-level-in-mould-frame').textContent()).toBe('In the mould file’s own frame: cavity floor at 10.0 mm, resin surface at 25.0 mm.');
-    const live = page.getByRole('region', { name: 'Live numbers of this plan' });
-    // One 15 mm layer under the product's 30 mm limit, holding the prism's 48 mL.
-    await expect.poll(() => live.getByText('1 × 15.0 mm').isVisible(), { timeout: 10_000 }).toBe(true);
-    expect(await live.getByText(`${resinMl.toFixed(1)} mL`).first().isVisible()).toBe(true);
+      await page.goto(`${stack.baseUrl}/pieces/${world.pieceId}/pour-plans/new`);
+      const planner = page.getByRole('form', { name: 'Pour plan' });
+      await planner.getByLabel('Plan name', { exact: true }).fill(`From the mould ${stamp}`);
+      await planner.getByText("The piece's mould", { exact: true }).click();
+      await planner.getByLabel('Mould', { exact: true }).selectOption({ label: world.moldName });
+      await planner.getByLabel('Fill level (mm)', { exact: true }).fill(String(depthMm));
+      const deep = planner.getByLabel('Deep-pour product', { exact: true });
+      await deep.selectOption((await deep.locator('option', { hasText: world.productName }).getAttribute('value'))!);
+      await planner.getByLabel('Over-pour (% of each layer)', { exact: true }).fill('0');
+      await planner.getByLabel('Shop temperature (°C)', { exact: true }).fill('21');
+      await expect
+        .poll(() => planner.getByTestId('planner-level-in-mould-frame').textContent())
+        .toBe('In the mould file’s own frame: cavity floor at 10.0 mm, resin surface at 25.0 mm.');
+      const live = page.getByRole('region', { name: 'Live numbers of this plan' });
+      // One 15 mm layer under the product's 30 mm limit, holding the prism's 48 mL.
+      await expect.poll(() => live.getByText('1 × 15.0 mm').isVisible(), { timeout: 10_000 }).toBe(true);
+      expect(
+        await live
+          .getByText(`${resinMl.toFixed(1)} mL`)
+          .first()
+          .isVisible(),
+      ).toBe(true);
 
-    // The same pocket typed as a quick shape gives the same resin for the same depth.
-    await planner.getByText('A quick shape', { exact: true }).click();
-    await planner.getByLabel('Shape of the cavity', { exact: true }).selectOption('rectangle');
-    await planner.getByLabel('Length (mm)', { exact: true }).fill('80');
-    await planner.getByLabel('Width (mm)', { exact: true }).fill('40');
-    await planner.getByLabel('Depth (mm)', { exact: true }).fill('20');
-    await expect.poll(() => live.getByText('1 × 15.0 mm').isVisible(), { timeout: 10_000 }).toBe(true);
-    expect(await live.getByText(`${resinMl.toFixed(1)} mL`).first().isVisible()).toBe(true);
+      // The same pocket typed as a quick shape gives the same resin for the same depth.
+      await planner.getByText('A quick shape', { exact: true }).click();
+      await planner.getByLabel('Shape of the cavity', { exact: true }).selectOption('rectangle');
+      await planner.getByLabel('Length (mm)', { exact: true }).fill('80');
+      await planner.getByLabel('Width (mm)', { exact: true }).fill('40');
+      await planner.getByLabel('Depth (mm)', { exact: true }).fill('20');
+      await expect.poll(() => live.getByText('1 × 15.0 mm').isVisible(), { timeout: 10_000 }).toBe(true);
+      expect(
+        await live
+          .getByText(`${resinMl.toFixed(1)} mL`)
+          .first()
+          .isVisible(),
+      ).toBe(true);
 
-    await planner.getByText("The piece's mould", { exact: true }).click();
-    await expect.poll(() => planner.getByLabel('Mould', { exact: true }).locator('option:checked').textContent()).toBe(world.moldName);
-    await planner.getByRole('button', { name: 'Save pour plan' }).click();
-    await page.waitForURL(/\/pour-plans\/[0-9a-f-]{36}$/);
-    world.planId = page.url().split('/').at(-1)!;
-    const stored = page.getByRole('region', { name: 'The saved plan' });
-    await expect.poll(() => stored.getByText('1 × 15.0 mm').isVisible()).toBe(true);
-    expect(await stored.getByText(`${resinMl.toFixed(1)} mL`).first().isVisible()).toBe(true);
-    expect(await page.getByRole('link', { name: world.moldName }).isVisible()).toBe(true);
+      await planner.getByText("The piece's mould", { exact: true }).click();
+      await expect.poll(() => planner.getByLabel('Mould', { exact: true }).locator('option:checked').textContent()).toBe(world.moldName);
+      await planner.getByRole('button', { name: 'Save pour plan' }).click();
+      await page.waitForURL(/\/pour-plans\/[0-9a-f-]{36}$/);
+      world.planId = page.url().split('/').at(-1)!;
+      const stored = page.getByRole('region', { name: 'The saved plan' });
+      await expect.poll(() => stored.getByText('1 × 15.0 mm').isVisible()).toBe(true);
+      expect(
+        await stored
+          .getByText(`${resinMl.toFixed(1)} mL`)
+          .first()
+          .isVisible(),
+      ).toBe(true);
+      expect(await page.getByRole('link', { name: world.moldName }).isVisible()).toBe(true);
 
-    const saved = await call<{ inputs: { fillLevelMm: number; levelFrom: string }; result: { fill: { fillVolumeMl: number } } }>(world.maker, 'GET', `/pour-plans/${world.planId}`);
-    expect(saved.inputs).toMatchObject({ fillLevelMm: depthMm, levelFrom: 'floor' });
-    expect(saved.result.fill.fillVolumeMl).toBeCloseTo(resinMl, 6);
-    const fill = await call<{ volumeMm3: number }>(world.maker, 'GET', `/molds/${world.moldId}/fill?level=${depthMm}`);
-    expect(fill.volumeMm3).toBeCloseTo(resinMl * 1000, 3);
-    expect(watch.problems).toEqual([]);
-    await close();
-  });
+      const saved = await call<{ inputs: { fillLevelMm: number; levelFrom: string }; result: { fill: { fillVolumeMl: number } } }>(
+        world.maker,
+        'GET',
+        `/pour-plans/${world.planId}`,
+      );
+      expect(saved.inputs).toMatchObject({ fillLevelMm: depthMm, levelFrom: 'floor' });
+      expect(saved.result.fill.fillVolumeMl).toBeCloseTo(resinMl, 6);
+      const fill = await call<{ volumeMm3: number }>(world.maker, 'GET', `/molds/${world.moldId}/fill?level=${depthMm}`);
+      expect(fill.volumeMm3).toBeCloseTo(resinMl * 1000, 3);
+      expect(watch.problems).toEqual([]);
+      await close();
+    },
+  );
 });
 
 describe('links that hold, in the browser', () => {
@@ -212,36 +243,47 @@ describe('links that hold, in the browser', () => {
     await close();
   });
 
-  it('refuses to delete a mould a plan uses, naming the plan, and corrects a mould’s units and piece without uploading it again', { timeout: 120_000 }, async () => {
-    const { page, watch, close } = await makerPage();
-    await page.goto(`${stack.baseUrl}/moulds/${world.moldId}`);
-    await page.getByRole('button', { name: 'Delete mould' }).click();
-    await page.getByRole('button', { name: 'Delete for good' }).click();
-    await expect.poll(() => page.getByRole('dialog').getByText(/is the cavity of the pour plan “Changed /).isVisible()).toBe(true);
-    await page.getByRole('button', { name: 'Keep it' }).click();
-    expect(page.url()).toMatch(new RegExp(`/moulds/${world.moldId}$`));
+  it(
+    'refuses to delete a mould a plan uses, naming the plan, and corrects a mould’s units and piece without uploading it again',
+    { timeout: 120_000 },
+    async () => {
+      const { page, watch, close } = await makerPage();
+      await page.goto(`${stack.baseUrl}/moulds/${world.moldId}`);
+      await page.getByRole('button', { name: 'Delete mould' }).click();
+      await page.getByRole('button', { name: 'Delete for good' }).click();
+      await expect
+        .poll(() =>
+          page
+            .getByRole('dialog')
+            .getByText(/is the cavity of the pour plan “Changed /)
+            .isVisible(),
+        )
+        .toBe(true);
+      await page.getByRole('button', { name: 'Keep it' }).click();
+      expect(page.url()).toMatch(new RegExp(`/moulds/${world.moldId}$`));
 
-    // The same blank drawn in centimetres but uploaded as millimetres, and with no piece: a tenth of its size.
-    const smallName = `Links drawn in cm ${stamp}`;
-    const smallId = await upload(world.maker, pocketBlockStl({ block: [10, 6, 3], pocket: [8, 4, 2] }).bytes, { name: smallName, units: 'mm', up: 'z' });
-    await analysed(world.maker, smallId);
-    await page.goto(`${stack.baseUrl}/moulds/${smallId}`);
-    const volume = page.getByTestId('fill-volume');
-    await expect.poll(() => volume.isVisible(), { timeout: 20_000 }).toBe(true);
-    expect(await volume.textContent()).not.toBe('64.0 mL');
-    const settings = page.getByRole('form', { name: 'Name, piece and frame' });
-    await settings.getByLabel('Units in the file', { exact: true }).selectOption('cm');
-    await settings.getByLabel('Piece', { exact: true }).selectOption({ label: world.pieceName });
-    await settings.getByLabel('Mould name', { exact: true }).fill(`${smallName}, corrected`);
-    await settings.getByRole('button', { name: 'Save changes' }).click();
-    await expect.poll(() => settings.getByText(/The file is being read again/).isVisible(), { timeout: 10_000 }).toBe(true);
-    // Read again as centimetres (1 cm = 10 mm, NIST SP 811): the 80 × 40 × 20 mm pocket, 64 mL to the rim.
-    await expect.poll(() => volume.textContent(), { timeout: 30_000 }).toBe('64.0 mL');
-    expect(await page.getByRole('heading', { level: 1, name: `${smallName}, corrected` }).isVisible()).toBe(true);
-    expect(await page.getByRole('link', { name: `For ${world.pieceName}` }).isVisible()).toBe(true);
-    expect(watch.problems).toEqual([]);
-    await close();
-  });
+      // The same blank drawn in centimetres but uploaded as millimetres, and with no piece: a tenth of its size.
+      const smallName = `Links drawn in cm ${stamp}`;
+      const smallId = await upload(world.maker, pocketBlockStl({ block: [10, 6, 3], pocket: [8, 4, 2] }).bytes, { name: smallName, units: 'mm', up: 'z' });
+      await analysed(world.maker, smallId);
+      await page.goto(`${stack.baseUrl}/moulds/${smallId}`);
+      const volume = page.getByTestId('fill-volume');
+      await expect.poll(() => volume.isVisible(), { timeout: 20_000 }).toBe(true);
+      expect(await volume.textContent()).not.toBe('64.0 mL');
+      const settings = page.getByRole('form', { name: 'Name, piece and frame' });
+      await settings.getByLabel('Units in the file', { exact: true }).selectOption('cm');
+      await settings.getByLabel('Piece', { exact: true }).selectOption({ label: world.pieceName });
+      await settings.getByLabel('Mould name', { exact: true }).fill(`${smallName}, corrected`);
+      await settings.getByRole('button', { name: 'Save changes' }).click();
+      await expect.poll(() => settings.getByText(/The file is being read again/).isVisible(), { timeout: 10_000 }).toBe(true);
+      // Read again as centimetres (1 cm = 10 mm, NIST SP 811): the 80 × 40 × 20 mm pocket, 64 mL to the rim.
+      await expect.poll(() => volume.textContent(), { timeout: 30_000 }).toBe('64.0 mL');
+      expect(await page.getByRole('heading', { level: 1, name: `${smallName}, corrected` }).isVisible()).toBe(true);
+      expect(await page.getByRole('link', { name: `For ${world.pieceName}` }).isVisible()).toBe(true);
+      expect(watch.problems).toEqual([]);
+      await close();
+    },
+  );
 
   it('lists a piece’s moulds, plans and pours on its page, each linked with its state', { timeout: 60_000 }, async () => {
     const pour = await call<{ id: string }>(world.maker, 'POST', '/pours', { pourPlanId: world.planId });

@@ -11,13 +11,21 @@ const password = 'gelpoint-demo';
 const unique = `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 6)}`;
 
 async function signIn(email: string): Promise<string> {
-  const res = await fetch(`${stack.baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password }) });
+  const res = await fetch(`${stack.baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
   expect(res.status).toBe(200);
   return ((await res.json()) as { token: string }).token;
 }
 
 async function call<T>(token: string, method: string, path: string, body: unknown, status: number): Promise<T> {
-  const res = await fetch(`${stack.baseUrl}/api${path}`, { method, headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` }, body: JSON.stringify(body) });
+  const res = await fetch(`${stack.baseUrl}/api${path}`, {
+    method,
+    headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` },
+    body: JSON.stringify(body),
+  });
   const text = await res.text();
   expect(res.status, text).toBe(status);
   return JSON.parse(text) as T;
@@ -81,7 +89,14 @@ describe('a log that questions odd values and keeps its corrections', () => {
     await dialog.getByLabel('Why is it wrong?').fill('weighed part A three times over');
     await dialog.getByRole('button', { name: 'Void it' }).click();
     await expect.poll(() => card.getByText('To mix').isVisible(), { timeout: 10_000 }).toBe(true);
-    await expect.poll(() => page.getByRole('region', { name: 'Voided cups' }).getByText(/weighed part A three times over/).isVisible()).toBe(true);
+    await expect
+      .poll(() =>
+        page
+          .getByRole('region', { name: 'Voided cups' })
+          .getByText(/weighed part A three times over/)
+          .isVisible(),
+      )
+      .toBe(true);
 
     // 70 typed as °C: the form asks whether it was °F and offers 21.1 °C.
     const reading = page.getByRole('form', { name: 'Add a temperature reading' });
@@ -106,7 +121,9 @@ describe('a log that questions odd values and keeps its corrections', () => {
     await expect.poll(() => table.getByText(/Voided by Mika Hale: read before the thermometer settled/).isVisible(), { timeout: 10_000 }).toBe(true);
 
     // The API kept both, voided, with their reasons.
-    const view = await fetch(`${stack.baseUrl}/api/pours/${pour.id}`, { headers: { Authorization: `Bearer ${lead}` } }).then((r) => r.json() as Promise<{ batches: unknown[]; voidedBatches: { voided: { reason: string } }[]; voidedReadings: { voided: { reason: string } }[] }>);
+    const view = await fetch(`${stack.baseUrl}/api/pours/${pour.id}`, { headers: { Authorization: `Bearer ${lead}` } }).then(
+      (r) => r.json() as Promise<{ batches: unknown[]; voidedBatches: { voided: { reason: string } }[]; voidedReadings: { voided: { reason: string } }[] }>,
+    );
     expect(view.batches).toEqual([]);
     expect(view.voidedBatches.map((b) => b.voided.reason)).toEqual(['weighed part A three times over']);
     expect(view.voidedReadings.map((r) => r.voided.reason)).toEqual(['read before the thermometer settled']);

@@ -51,7 +51,9 @@ describe('the mould screen in a real browser', () => {
     await level.fill('10');
     await expect.poll(() => volume.textContent()).toBe('32.0 mL');
     // The floor stands 10 mm above the block's underside, so the surface is at 20 mm in the file's own frame.
-    expect(await page.getByTestId('level-in-mould-frame').textContent()).toBe('In the mould file’s own frame: resin surface at 20.0 mm, cavity floor at 10.0 mm.');
+    expect(await page.getByTestId('level-in-mould-frame').textContent()).toBe(
+      'In the mould file’s own frame: resin surface at 20.0 mm, cavity floor at 10.0 mm.',
+    );
     await level.fill('20');
     await expect.poll(() => volume.textContent()).toBe('64.0 mL');
 
@@ -73,42 +75,46 @@ describe('the mould screen in a real browser', () => {
     await context.close();
   });
 
-  it('uploads the same block as a 3MF in inches: the form names the format and the unit the file states, and the report reads it so', { timeout: 90_000 }, async () => {
-    const stl = pocketBlockStl({ block: [100, 60, 30], pocket: [80, 40, 20] });
-    const read = readMouldFile(stl.bytes);
-    if (!read.ok) throw new Error(read.error.message);
-    // The block's numbers in inches, the file saying so (NIST SP 811: 1 in = 25.4 mm).
-    const threemf = encode3mf({ positions: Float64Array.from(read.value.soup.positions), triangleCount: read.value.soup.triangleCount }, 'inch', 25.4);
+  it(
+    'uploads the same block as a 3MF in inches: the form names the format and the unit the file states, and the report reads it so',
+    { timeout: 90_000 },
+    async () => {
+      const stl = pocketBlockStl({ block: [100, 60, 30], pocket: [80, 40, 20] });
+      const read = readMouldFile(stl.bytes);
+      if (!read.ok) throw new Error(read.error.message);
+      // The block's numbers in inches, the file saying so (NIST SP 811: 1 in = 25.4 mm).
+      const threemf = encode3mf({ positions: Float64Array.from(read.value.soup.positions), triangleCount: read.value.soup.triangleCount }, 'inch', 25.4);
 
-    const context = await e2e.browser().newContext({ viewport: { width: 1280, height: 900 } });
-    const { page, watch } = await watchedPage(context, stack.baseUrl);
-    await page.goto(`${stack.baseUrl}/moulds/new`);
-    await page.waitForURL(/\/sign-in/);
-    await page.getByLabel('Email').fill('maker@gelpoint.test');
-    await page.getByLabel('Password').fill('gelpoint-demo');
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(/\/moulds\/new$/);
+      const context = await e2e.browser().newContext({ viewport: { width: 1280, height: 900 } });
+      const { page, watch } = await watchedPage(context, stack.baseUrl);
+      await page.goto(`${stack.baseUrl}/moulds/new`);
+      await page.waitForURL(/\/sign-in/);
+      await page.getByLabel('Email').fill('maker@gelpoint.test');
+      await page.getByLabel('Password').fill('gelpoint-demo');
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.waitForURL(/\/moulds\/new$/);
 
-    const name = `E2E 3MF block ${Date.now()}`;
-    const form = page.getByRole('form', { name: 'Upload a mould' });
-    await form.getByLabel('Mould file').setInputFiles({ name: 'pocket-block.3mf', mimeType: 'model/3mf', buffer: Buffer.from(threemf) });
-    await expect.poll(() => form.getByText(`This is a 3MF file of ${stl.triangleCount} triangles, in inches as it states.`).isVisible()).toBe(true);
-    await expect.poll(() => form.getByLabel('Units in the file').inputValue()).toBe('');
-    await expect.poll(() => form.getByRole('option', { name: 'As the file states: inches' }).count()).toBe(1);
-    await expect.poll(() => form.getByText('Read as inches, the mould is 100.0 mm × 60.0 mm × 30.0 mm.').isVisible()).toBe(true);
-    await form.getByLabel('Name', { exact: true }).fill(name);
-    await form.getByRole('button', { name: 'Upload and measure' }).click();
-    await page.waitForURL(/\/moulds\/[0-9a-f-]{36}$/);
+      const name = `E2E 3MF block ${Date.now()}`;
+      const form = page.getByRole('form', { name: 'Upload a mould' });
+      await form.getByLabel('Mould file').setInputFiles({ name: 'pocket-block.3mf', mimeType: 'model/3mf', buffer: Buffer.from(threemf) });
+      await expect.poll(() => form.getByText(`This is a 3MF file of ${stl.triangleCount} triangles, in inches as it states.`).isVisible()).toBe(true);
+      await expect.poll(() => form.getByLabel('Units in the file').inputValue()).toBe('');
+      await expect.poll(() => form.getByRole('option', { name: 'As the file states: inches' }).count()).toBe(1);
+      await expect.poll(() => form.getByText('Read as inches, the mould is 100.0 mm × 60.0 mm × 30.0 mm.').isVisible()).toBe(true);
+      await form.getByLabel('Name', { exact: true }).fill(name);
+      await form.getByRole('button', { name: 'Upload and measure' }).click();
+      await page.waitForURL(/\/moulds\/[0-9a-f-]{36}$/);
 
-    // Prism formula (CRC): 80 × 40 × 20 mm³ = 64 mL, whatever unit the file was written in.
-    await expect.poll(() => page.getByTestId('fill-volume').textContent(), { timeout: 30_000 }).toBe('64.0 mL');
-    await expect.poll(() => page.getByText(/inches \(as the file states\)/).count()).toBe(1);
-    await expect.poll(() => page.locator('[data-testid="mold-3d"] canvas').count(), { timeout: 15_000 }).toBe(1);
+      // Prism formula (CRC): 80 × 40 × 20 mm³ = 64 mL, whatever unit the file was written in.
+      await expect.poll(() => page.getByTestId('fill-volume').textContent(), { timeout: 30_000 }).toBe('64.0 mL');
+      await expect.poll(() => page.getByText(/inches \(as the file states\)/).count()).toBe(1);
+      await expect.poll(() => page.locator('[data-testid="mold-3d"] canvas').count(), { timeout: 15_000 }).toBe(1);
 
-    await page.getByRole('button', { name: 'Delete mould' }).click();
-    await page.getByRole('button', { name: 'Delete for good' }).click();
-    await page.waitForURL(/\/moulds$/);
-    expect(watch.problems).toEqual([]);
-    await context.close();
-  });
+      await page.getByRole('button', { name: 'Delete mould' }).click();
+      await page.getByRole('button', { name: 'Delete for good' }).click();
+      await page.waitForURL(/\/moulds$/);
+      expect(watch.problems).toEqual([]);
+      await context.close();
+    },
+  );
 });

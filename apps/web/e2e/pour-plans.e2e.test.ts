@@ -7,7 +7,6 @@ import { useBrowserStack } from './support/use-browser-stack';
 const e2e = useBrowserStack();
 const stack = e2e.stack;
 
-
 async function signIn(page: Page, email: string) {
   await page.goto(`${stack.baseUrl}/sign-in`);
   await page.getByLabel('Email').fill(email);

@@ -15,13 +15,21 @@ const unique = `${Date.now().toString(36)}-${Math.random().toString(36).slice(2,
 const tinyPng = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==', 'base64');
 
 async function signIn(email: string): Promise<string> {
-  const res = await fetch(`${stack.baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password }) });
+  const res = await fetch(`${stack.baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
   expect(res.status).toBe(200);
   return ((await res.json()) as { token: string }).token;
 }
 
 async function post<T>(token: string, path: string, body: unknown, status = 201): Promise<T> {
-  const res = await fetch(`${stack.baseUrl}/api${path}`, { method: 'POST', headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` }, body: JSON.stringify(body) });
+  const res = await fetch(`${stack.baseUrl}/api${path}`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` },
+    body: JSON.stringify(body),
+  });
   const text = await res.text();
   expect(res.status, text).toBe(status);
   return JSON.parse(text) as T;
@@ -63,7 +71,6 @@ async function pourToLog(): Promise<Setup> {
   const pour = await post<{ id: string }>(maker, '/pours', { pourPlanId: plan.id, notifyUserIds: [apprenticeId] });
   return { pourId: pour.id, pieceName, cup: cup! };
 }
-
 
 describe('pours in a real browser', () => {
   it('lets an apprentice on a phone log a cup, a temperature and a cure check with a photo, and shows the pour on the cure board', async () => {

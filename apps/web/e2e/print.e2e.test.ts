@@ -41,85 +41,99 @@ interface PrintLayout {
 }
 
 /** The sheet laid out as print media on the page's printable width: what overflows, how tall the unbreakable blocks are. */
-async function printLayout(page: Page, widthPx: number, heightPx: number, root = '.run-sheet', navSelector = 'nav[aria-label="Run sheet"]'): Promise<PrintLayout> {
+async function printLayout(
+  page: Page,
+  widthPx: number,
+  heightPx: number,
+  root = '.run-sheet',
+  navSelector = 'nav[aria-label="Run sheet"]',
+): Promise<PrintLayout> {
   await page.emulateMedia({ media: 'print' });
   await page.setViewportSize({ width: Math.floor(widthPx), height: Math.floor(heightPx) });
-  const layout = await page.evaluate(({ width, root, navSelector }) => {
-    const overflowing: string[] = [];
-    for (const el of document.querySelectorAll(`${root} *`)) {
-      const box = el.getBoundingClientRect();
-      if (box.width > 0 && (box.right > width + 0.5 || box.left < -0.5)) overflowing.push(`${el.tagName.toLowerCase()} "${(el.textContent ?? '').trim().slice(0, 40)}" ${Math.round(box.left)}–${Math.round(box.right)} px`);
-    }
-    const blocks = [...document.querySelectorAll<HTMLElement>('.run-sheet-card, .run-sheet-label, .run-sheet aside')];
-    const nav = document.querySelector(navSelector);
-    return {
-      scrollWidthPx: (document.scrollingElement ?? document.documentElement).scrollWidth,
-      overflowing: overflowing.slice(0, 10),
-      tallestBlockPx: Math.max(...blocks.map((b) => b.getBoundingClientRect().height)),
-      navShown: nav !== null && getComputedStyle(nav).display !== 'none',
-      cardTexts: [...document.querySelectorAll<HTMLElement>('.run-sheet-card')].map((c) => c.innerText),
-      labelTexts: [...document.querySelectorAll<HTMLElement>('.run-sheet-label')].map((c) => c.innerText),
-    };
-  }, { width: widthPx, root, navSelector });
+  const layout = await page.evaluate(
+    ({ width, root, navSelector }) => {
+      const overflowing: string[] = [];
+      for (const el of document.querySelectorAll(`${root} *`)) {
+        const box = el.getBoundingClientRect();
+        if (box.width > 0 && (box.right > width + 0.5 || box.left < -0.5))
+          overflowing.push(`${el.tagName.toLowerCase()} "${(el.textContent ?? '').trim().slice(0, 40)}" ${Math.round(box.left)}–${Math.round(box.right)} px`);
+      }
+      const blocks = [...document.querySelectorAll<HTMLElement>('.run-sheet-card, .run-sheet-label, .run-sheet aside')];
+      const nav = document.querySelector(navSelector);
+      return {
+        scrollWidthPx: (document.scrollingElement ?? document.documentElement).scrollWidth,
+        overflowing: overflowing.slice(0, 10),
+        tallestBlockPx: Math.max(...blocks.map((b) => b.getBoundingClientRect().height)),
+        navShown: nav !== null && getComputedStyle(nav).display !== 'none',
+        cardTexts: [...document.querySelectorAll<HTMLElement>('.run-sheet-card')].map((c) => c.innerText),
+        labelTexts: [...document.querySelectorAll<HTMLElement>('.run-sheet-label')].map((c) => c.innerText),
+      };
+    },
+    { width: widthPx, root, navSelector },
+  );
   await page.emulateMedia({ media: null });
   return layout;
 }
 
 describe('printing the run sheet and its cup labels', () => {
-  it('prints on A4 and US Letter: the right paper, a sensible page count, nothing past the margins, every cup’s grams on its card and label', { timeout: 90_000 }, async () => {
-    const context = await e2e.browser().newContext({ viewport: { width: 1280, height: 900 } });
-    const { page, watch } = await watchedPage(context, stack.baseUrl);
-    page.setDefaultTimeout(20_000);
-    await signIn(page, stack.baseUrl, 'apprentice');
-    const { planId } = await demoIds(page, stack.baseUrl);
-    const saved = (await (await page.request.get(`${stack.baseUrl}/api/pour-plans/${planId}`)).json()) as { result: PourPlan };
-    const shop = (await (await page.request.get(`${stack.baseUrl}/api/shop`)).json()) as { unitSystem: UnitSystem; scaleResolutionG: ScaleResolutionG };
-    const cups = plannedBatches(saved.result);
-    expect(cups.length).toBeGreaterThanOrEqual(2);
-    const grams = (g: number) => formatWeighedMass(g, shop.unitSystem, saved.result.resolution.grams).text;
-    expect(shop.scaleResolutionG).toBe(saved.result.resolution.grams);
+  it(
+    'prints on A4 and US Letter: the right paper, a sensible page count, nothing past the margins, every cup’s grams on its card and label',
+    { timeout: 90_000 },
+    async () => {
+      const context = await e2e.browser().newContext({ viewport: { width: 1280, height: 900 } });
+      const { page, watch } = await watchedPage(context, stack.baseUrl);
+      page.setDefaultTimeout(20_000);
+      await signIn(page, stack.baseUrl, 'apprentice');
+      const { planId } = await demoIds(page, stack.baseUrl);
+      const saved = (await (await page.request.get(`${stack.baseUrl}/api/pour-plans/${planId}`)).json()) as { result: PourPlan };
+      const shop = (await (await page.request.get(`${stack.baseUrl}/api/shop`)).json()) as { unitSystem: UnitSystem; scaleResolutionG: ScaleResolutionG };
+      const cups = plannedBatches(saved.result);
+      expect(cups.length).toBeGreaterThanOrEqual(2);
+      const grams = (g: number) => formatWeighedMass(g, shop.unitSystem, saved.result.resolution.grams).text;
+      expect(shop.scaleResolutionG).toBe(saved.result.resolution.grams);
 
-    await page.goto(`${stack.baseUrl}/pour-plans/${planId}/run-sheet`);
-    await settle(page);
-    await expect.poll(() => page.locator('.run-sheet-label').count()).toBe(cups.length);
+      await page.goto(`${stack.baseUrl}/pour-plans/${planId}/run-sheet`);
+      await settle(page);
+      await expect.poll(() => page.locator('.run-sheet-label').count()).toBe(cups.length);
 
-    for (const format of ['A4', 'Letter'] as const) {
-      const size = paper[format];
-      const pdf = await page.pdf({ format });
-      expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
-      const pages = pdfPages(pdf);
-      // Cups and labels run on from page to page: no card per page, no blank runs of paper.
-      expect(pages.length).toBeGreaterThanOrEqual(1);
-      expect(pages.length).toBeLessThanOrEqual(Math.ceil(cups.length / 2) + 1);
-      for (const p of pages) {
-        // Chromium rounds the sheet to whole CSS pixels: within a point of the standard size.
-        expect(Math.abs(p.widthPt - mmToPt(size.widthMm))).toBeLessThan(1.5);
-        expect(Math.abs(p.heightPt - mmToPt(size.heightMm))).toBeLessThan(1.5);
+      for (const format of ['A4', 'Letter'] as const) {
+        const size = paper[format];
+        const pdf = await page.pdf({ format });
+        expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+        const pages = pdfPages(pdf);
+        // Cups and labels run on from page to page: no card per page, no blank runs of paper.
+        expect(pages.length).toBeGreaterThanOrEqual(1);
+        expect(pages.length).toBeLessThanOrEqual(Math.ceil(cups.length / 2) + 1);
+        for (const p of pages) {
+          // Chromium rounds the sheet to whole CSS pixels: within a point of the standard size.
+          expect(Math.abs(p.widthPt - mmToPt(size.widthMm))).toBeLessThan(1.5);
+          expect(Math.abs(p.heightPt - mmToPt(size.heightMm))).toBeLessThan(1.5);
+        }
+
+        const printable = { widthPx: mmToPx(size.widthMm - 2 * marginMm), heightPx: mmToPx(size.heightMm - 2 * marginMm) };
+        const layout = await printLayout(page, printable.widthPx, printable.heightPx);
+        expect(layout.overflowing, `${format}: nothing runs past the margins`).toEqual([]);
+        expect(layout.scrollWidthPx).toBeLessThanOrEqual(Math.floor(printable.widthPx));
+        expect(layout.navShown).toBe(false);
+        // Every card and label fits on one sheet, so break-inside: avoid can keep it whole.
+        expect(layout.tallestBlockPx).toBeLessThan(printable.heightPx);
+        expect(layout.labelTexts).toHaveLength(cups.length);
+        // Mixing order is the plan's batch order (core's plannedBatches); each label and card shows that cup's A and B.
+        cups.forEach((cup, i) => {
+          const a = grams(cup.partA.grams);
+          const b = grams(cup.partB.grams);
+          expect(layout.labelTexts[i]).toContain(`A ${a} · B ${b}`);
+          expect(layout.labelTexts[i]).toContain(`cup ${i + 1} of ${cups.length}`);
+          expect(layout.cardTexts[i]).toContain(a);
+          expect(layout.cardTexts[i]).toContain(b);
+          if (cup.pigment.grams > 0) expect(layout.labelTexts[i]).toContain(`pigment ${grams(cup.pigment.grams)}`);
+        });
       }
-
-      const printable = { widthPx: mmToPx(size.widthMm - 2 * marginMm), heightPx: mmToPx(size.heightMm - 2 * marginMm) };
-      const layout = await printLayout(page, printable.widthPx, printable.heightPx);
-      expect(layout.overflowing, `${format}: nothing runs past the margins`).toEqual([]);
-      expect(layout.scrollWidthPx).toBeLessThanOrEqual(Math.floor(printable.widthPx));
-      expect(layout.navShown).toBe(false);
-      // Every card and label fits on one sheet, so break-inside: avoid can keep it whole.
-      expect(layout.tallestBlockPx).toBeLessThan(printable.heightPx);
-      expect(layout.labelTexts).toHaveLength(cups.length);
-      // Mixing order is the plan's batch order (core's plannedBatches); each label and card shows that cup's A and B.
-      cups.forEach((cup, i) => {
-        const a = grams(cup.partA.grams);
-        const b = grams(cup.partB.grams);
-        expect(layout.labelTexts[i]).toContain(`A ${a} · B ${b}`);
-        expect(layout.labelTexts[i]).toContain(`cup ${i + 1} of ${cups.length}`);
-        expect(layout.cardTexts[i]).toContain(a);
-        expect(layout.cardTexts[i]).toContain(b);
-        if (cup.pigment.grams > 0) expect(layout.labelTexts[i]).toContain(`pigment ${grams(cup.pigment.grams)}`);
-      });
-    }
-    await page.setViewportSize({ width: 1280, height: 900 });
-    expect(watch.problems).toEqual([]);
-    await context.close();
-  });
+      await page.setViewportSize({ width: 1280, height: 900 });
+      expect(watch.problems).toEqual([]);
+      await context.close();
+    },
+  );
 });
 
 /** A product whose 10 mm layer limit splits a 30 mm pocket into three layers, and a plan of it: one cup per layer. */
@@ -189,8 +203,20 @@ describe('a short run sheet and a cure record', () => {
     const maker = await apiSession(stack.baseUrl, demoEmail('maker'));
     const apprentice = await apiSession(stack.baseUrl, demoEmail('apprentice'));
     const { pieceId, planId, productId } = await threeCupPlan(lead, maker, 'record');
-    const lotA = await lead.post<{ id: string }>('/shelf/lots', { part: 'A', resinSystemId: productId, lotNumber: 'REC-A-0412', quantityG: 4000, receivedOn: '2026-10-01' });
-    const lotB = await lead.post<{ id: string }>('/shelf/lots', { part: 'B', resinSystemId: productId, lotNumber: 'REC-B-0077', quantityG: 2000, receivedOn: '2026-10-01' });
+    const lotA = await lead.post<{ id: string }>('/shelf/lots', {
+      part: 'A',
+      resinSystemId: productId,
+      lotNumber: 'REC-A-0412',
+      quantityG: 4000,
+      receivedOn: '2026-10-01',
+    });
+    const lotB = await lead.post<{ id: string }>('/shelf/lots', {
+      part: 'B',
+      resinSystemId: productId,
+      lotNumber: 'REC-B-0077',
+      quantityG: 2000,
+      receivedOn: '2026-10-01',
+    });
     const pour = await apprentice.post<{ id: string }>('/pours', { pourPlanId: planId });
     const plan = await apprentice.get<{ result: PourPlan }>(`/pour-plans/${planId}`);
     const hour = 3_600_000;
@@ -200,7 +226,17 @@ describe('a short run sheet and a cure record', () => {
       const a = Math.round((cup.partA.grams + 0.4) * 10) / 10;
       const b = Math.round((cup.partB.grams - 0.3) * 10) / 10;
       weighed.push({ a, b });
-      await apprentice.post(`/pours/${pour.id}/batches`, { planBatchIndex: cup.index, mixedAt: new Date(start + i * 14 * hour).toISOString(), lotAId: lotA.id, lotBId: lotB.id, weighedAG: a, weighedBG: b, ambientTempC: 21, rhPct: 45, confirmUnusual: true });
+      await apprentice.post(`/pours/${pour.id}/batches`, {
+        planBatchIndex: cup.index,
+        mixedAt: new Date(start + i * 14 * hour).toISOString(),
+        lotAId: lotA.id,
+        lotBId: lotB.id,
+        weighedAG: a,
+        weighedBG: b,
+        ambientTempC: 21,
+        rhPct: 45,
+        confirmUnusual: true,
+      });
     }
     const readings = Array.from({ length: 48 }, (_, k) => ({ at: new Date(start + k * 6 * hour).toISOString(), tempC: k === 7 ? 18.4 : k === 30 ? 23.6 : 21 }));
     await apprentice.post(`/pours/${pour.id}/readings`, { readings });
@@ -208,9 +244,17 @@ describe('a short run sheet and a cure record', () => {
     checkForm.set('stage', 'machinable');
     checkForm.set('hardnessShoreD', '82');
     checkForm.set('note', 'rings when tapped');
-    const login = await fetch(`${stack.baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: demoEmail('lead'), password: 'gelpoint-demo' }) });
+    const login = await fetch(`${stack.baseUrl}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email: demoEmail('lead'), password: 'gelpoint-demo' }),
+    });
     const { token } = (await login.json()) as { token: string };
-    const checked = await fetch(`${stack.baseUrl}/api/pours/${pour.id}/checks`, { method: 'POST', headers: { Authorization: `Bearer ${token}` }, body: checkForm });
+    const checked = await fetch(`${stack.baseUrl}/api/pours/${pour.id}/checks`, {
+      method: 'POST',
+      headers: { Authorization: `Bearer ${token}` },
+      body: checkForm,
+    });
     expect(checked.status).toBe(201);
     await lead.post(`/pours/${pour.id}/release`, {});
 
@@ -246,7 +290,13 @@ describe('a short run sheet and a cure record', () => {
     expect(text).toContain('highest 23.6 °C');
     expect(text).toMatch(/Hard enough to machine\s+82\s+Rosa Lindqvist\s+rings when tapped/);
     expect(text).toMatch(/Released for machining by Rosa Lindqvist on /);
-    const layout = await printLayout(page, mmToPx(paper.A4.widthMm - 2 * marginMm), mmToPx(paper.A4.heightMm - 2 * marginMm), '.cure-record', 'nav[aria-label="Cure record"]');
+    const layout = await printLayout(
+      page,
+      mmToPx(paper.A4.widthMm - 2 * marginMm),
+      mmToPx(paper.A4.heightMm - 2 * marginMm),
+      '.cure-record',
+      'nav[aria-label="Cure record"]',
+    );
     expect(layout.overflowing, 'nothing runs past the margins').toEqual([]);
     expect(layout.navShown).toBe(false);
 

@@ -20,7 +20,9 @@ describe('the shop’s records in the browser', () => {
     // The river table's part A lot: every batch that drew on it is listed, each linked to its pour and piece.
     const pour = (await (await page.request.get(`${stack.baseUrl}/api/pours/${ids.pourId}`)).json()) as { batches: { lotA: string }[] };
     const lotNumber = pour.batches.at(-1)!.lotA;
-    const lots = (await (await page.request.get(`${stack.baseUrl}/api/shelf/lots?q=${encodeURIComponent(lotNumber)}`)).json()) as { items: { id: string; lotNumber: string }[] };
+    const lots = (await (await page.request.get(`${stack.baseUrl}/api/shelf/lots?q=${encodeURIComponent(lotNumber)}`)).json()) as {
+      items: { id: string; lotNumber: string }[];
+    };
     const lot = lots.items.find((l) => l.lotNumber === lotNumber)!;
     const uses = (await (await page.request.get(`${stack.baseUrl}/api/shelf/lots/${lot.id}/uses`)).json()) as { total: number };
     expect(uses.total).toBeGreaterThan(0);
@@ -67,7 +69,12 @@ describe('the shop’s records in the browser', () => {
     expect(file.suggestedFilename()).toMatch(/^gelpoint-audit-\d{4}-\d{2}-\d{2}\.csv$/);
     const csv = parse(readFileSync(await file.path(), 'utf8'), { columns: true }) as Record<string, string>[];
     expect(csv).toHaveLength(1);
-    expect(csv[0]).toMatchObject({ actor: 'Rosa Lindqvist', action: 'lot.update', objectName: lotNumber, event: `Lot ${lotNumber} corrected by Rosa Lindqvist` });
+    expect(csv[0]).toMatchObject({
+      actor: 'Rosa Lindqvist',
+      action: 'lot.update',
+      objectName: lotNumber,
+      event: `Lot ${lotNumber} corrected by Rosa Lindqvist`,
+    });
 
     expect(watch.problems).toEqual([]);
     await context.close();

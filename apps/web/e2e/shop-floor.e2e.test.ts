@@ -67,7 +67,9 @@ async function restoreNetwork(context: BrowserContext): Promise<void> {
 }
 
 async function waitForServiceWorker(page: Page): Promise<void> {
-  await page.waitForFunction(() => navigator.serviceWorker?.controller !== null && navigator.serviceWorker?.controller !== undefined, undefined, { timeout: 30_000 });
+  await page.waitForFunction(() => navigator.serviceWorker?.controller !== null && navigator.serviceWorker?.controller !== undefined, undefined, {
+    timeout: 30_000,
+  });
 }
 
 /** Decodes the QR code in a screenshot with jsQR, on the pixels pngjs reads: independent of the code's maker. */

@@ -56,7 +56,10 @@ describe('the pour planner in a US shop, in a real browser', () => {
     await planner.getByLabel('Width (in)', { exact: true }).fill('5');
     await planner.getByLabel('Depth (in)', { exact: true }).fill('1');
     await planner.getByLabel('Fill level (in)', { exact: true }).fill('1');
-    const productOption = (await planner.getByLabel('Deep-pour product', { exact: true }).locator('option', { hasText: `Inch Deep ${unique}` }).getAttribute('value'))!;
+    const productOption = (await planner
+      .getByLabel('Deep-pour product', { exact: true })
+      .locator('option', { hasText: `Inch Deep ${unique}` })
+      .getAttribute('value'))!;
     await planner.getByLabel('Deep-pour product', { exact: true }).selectOption(productOption);
     await planner.getByLabel('Shop temperature (°F)', { exact: true }).fill('68');
     expect(await planner.getByLabel('Length (mm)', { exact: true }).count()).toBe(0);

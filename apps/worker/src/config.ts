@@ -2,7 +2,10 @@ import { z } from 'zod';
 import { databaseUrl } from '@gelpoint/db';
 
 const Env = z.object({
-  DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL').optional(),
+  DATABASE_URL: z
+    .string()
+    .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL')
+    .optional(),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
   SMTP_SECURE: z.enum(['true', 'false']).default('false'),
@@ -21,7 +24,12 @@ const Env = z.object({
   GELPOINT_WORKER_JOBS: z
     .string()
     .default('reminders,mail,molds')
-    .transform((s) => s.split(',').map((x) => x.trim()).filter(Boolean))
+    .transform((s) =>
+      s
+        .split(',')
+        .map((x) => x.trim())
+        .filter(Boolean),
+    )
     .pipe(z.array(z.enum(['reminders', 'mail', 'molds'], { message: 'GELPOINT_WORKER_JOBS lists reminders, mail and/or molds' })).min(1)),
   GELPOINT_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   GELPOINT_SHUTDOWN_GRACE_S: z.coerce.number().positive().max(600).default(25),
@@ -54,8 +62,18 @@ export function loadWorkerConfig(raw: NodeJS.ProcessEnv = process.env): WorkerCo
     jobs: e.GELPOINT_WORKER_JOBS,
     publicUrl: e.GELPOINT_PUBLIC_URL.replace(/\/$/, ''),
     cron: e.GELPOINT_WORKER_CRON,
-    mail: { batch: e.GELPOINT_MAIL_BATCH, retryBaseS: e.GELPOINT_MAIL_RETRY_BASE_S, maxAttempts: e.GELPOINT_MAIL_MAX_ATTEMPTS, leaseS: e.GELPOINT_MAIL_LEASE_S },
-    molds: { maxTriangles: e.GELPOINT_MAX_STL_TRIANGLES, maxUnpackedBytes: Math.round(e.GELPOINT_MAX_UNPACKED_MB * 1024 * 1024), leaseS: e.GELPOINT_ANALYSIS_LEASE_S, maxAttempts: 3 },
+    mail: {
+      batch: e.GELPOINT_MAIL_BATCH,
+      retryBaseS: e.GELPOINT_MAIL_RETRY_BASE_S,
+      maxAttempts: e.GELPOINT_MAIL_MAX_ATTEMPTS,
+      leaseS: e.GELPOINT_MAIL_LEASE_S,
+    },
+    molds: {
+      maxTriangles: e.GELPOINT_MAX_STL_TRIANGLES,
+      maxUnpackedBytes: Math.round(e.GELPOINT_MAX_UNPACKED_MB * 1024 * 1024),
+      leaseS: e.GELPOINT_ANALYSIS_LEASE_S,
+      maxAttempts: 3,
+    },
     logLevel: e.GELPOINT_LOG_LEVEL,
     shutdownGraceMs: Math.round(e.GELPOINT_SHUTDOWN_GRACE_S * 1000),
   };

@@ -34,7 +34,9 @@ const transport = smtpTransport(config.smtp);
 
 if (once) {
   const result = await runDueWork(ds, transport, config, logger);
-  process.stdout.write(`worker: sent ${result.mail.sent} mail, ${result.mail.failed} failed (will be retried); analysed ${result.molds} mould(s); ${result.reminders} reminder(s) came due; ${result.digests} morning digest(s)\n`);
+  process.stdout.write(
+    `worker: sent ${result.mail.sent} mail, ${result.mail.failed} failed (will be retried); analysed ${result.molds} mould(s); ${result.reminders} reminder(s) came due; ${result.digests} morning digest(s)\n`,
+  );
   transport.close();
   await ds.destroy();
   process.exit(0);

@@ -6,7 +6,10 @@ export class SerialRunner {
   private running: Promise<void> | undefined;
   private again = false;
 
-  constructor(private readonly job: () => Promise<void>, private readonly onError: (err: unknown) => void) {}
+  constructor(
+    private readonly job: () => Promise<void>,
+    private readonly onError: (err: unknown) => void,
+  ) {}
 
   wake(): void {
     if (this.running) {

@@ -1,7 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { auditKinds, auditSentence, auditText } from './audit-words';
 
-const event = (action: string, objectType: string, objectName: string | null, detail: Record<string, unknown> = {}) => ({ action, objectType, objectName, detail });
+const event = (action: string, objectType: string, objectName: string | null, detail: Record<string, unknown> = {}) => ({
+  action,
+  objectType,
+  objectName,
+  detail,
+});
 
 describe('the audit in words', () => {
   it('names the object and who did it', () => {
@@ -12,7 +17,11 @@ describe('the audit in words', () => {
   });
 
   it('keeps the name apart so a page can link it, and counts cups from 1', () => {
-    expect(auditSentence(event('batch.log', 'pour', 'Walnut tray', { planBatchIndex: 1 }))).toEqual({ before: 'Batch 2 logged on the pour of', name: 'Walnut tray', after: '' });
+    expect(auditSentence(event('batch.log', 'pour', 'Walnut tray', { planBatchIndex: 1 }))).toEqual({
+      before: 'Batch 2 logged on the pour of',
+      name: 'Walnut tray',
+      after: '',
+    });
     expect(auditSentence(event('readings.add', 'pour', 'Walnut tray', { added: 1 })).before).toBe('1 temperature reading added to the pour of');
     expect(auditSentence(event('readings.add', 'pour', 'Walnut tray', { added: 24 })).before).toBe('24 temperature readings added to the pour of');
     expect(auditSentence(event('cure_check.add', 'pour', 'Walnut tray', { stage: 'tack_free' })).before).toBe('Cure check (tack-free) recorded on the pour of');

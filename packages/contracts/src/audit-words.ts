@@ -69,7 +69,11 @@ export function auditSentence(e: AuditWordsInput): AuditSentence {
     case 'pigment.create':
       return { before: nouns[e.objectType] ?? 'Product', name, after: 'added to the shelf' };
     case 'member.update':
-      return { before: 'Member', name, after: `changed${typeof d.role === 'string' ? ` (role: ${d.role})` : ''}${typeof d.status === 'string' ? ` (${d.status})` : ''}` };
+      return {
+        before: 'Member',
+        name,
+        after: `changed${typeof d.role === 'string' ? ` (role: ${d.role})` : ''}${typeof d.status === 'string' ? ` (${d.status})` : ''}`,
+      };
     case 'invitation.create':
       return { before: 'Invitation sent to', name, after: typeof d.role === 'string' ? `as ${d.role}` : '' };
     case 'pour.start':

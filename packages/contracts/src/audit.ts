@@ -4,7 +4,7 @@ import { Id, Timestamp, UserRef, instant, text } from './common';
 export const AuditEvent = z.object({
   id: Id,
   at: Timestamp,
-  actor: UserRef.nullable().describe("who did it, by their name today (or the name they had then, if they left)"),
+  actor: UserRef.nullable().describe('who did it, by their name today (or the name they had then, if they left)'),
   action: z.string().describe('dotted verb, e.g. piece.create, member.update'),
   objectType: z.string(),
   objectId: z.string().nullable(),

@@ -38,7 +38,9 @@ export const MeResponse = z.object({
   shop: Shop,
   role: Role,
   shops: z.array(ShopMembershipSummary),
-  calendarUrl: z.string().describe("the member's private calendar feed (text/calendar) of the shop's coming pour steps; POST /api/me/calendar/rotate replaces it"),
+  calendarUrl: z
+    .string()
+    .describe("the member's private calendar feed (text/calendar) of the shop's coming pour steps; POST /api/me/calendar/rotate replaces it"),
 });
 export type MeResponse = z.infer<typeof MeResponse>;
 

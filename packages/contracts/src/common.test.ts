@@ -12,7 +12,15 @@ describe('instant', () => {
   it('refuses what PostgreSQL cannot store or no shop record needs: year 0000, offsets past ±14:00, far years', () => {
     // PostgreSQL 15 answers "date/time field value out of range" for year 0000 and "time zone displacement
     // out of range" past ±15:59 (checked with psql on the project's server).
-    for (const bad of ['0000-01-01T00:00:00Z', '2026-01-01T00:00:00+16:00', '2026-01-01T00:00:00-14:30', '1899-12-31T23:59:59Z', '3000-01-01T00:00:00Z', '2026-02-30T00:00:00Z', '2026-11-01 14:30']) {
+    for (const bad of [
+      '0000-01-01T00:00:00Z',
+      '2026-01-01T00:00:00+16:00',
+      '2026-01-01T00:00:00-14:30',
+      '1899-12-31T23:59:59Z',
+      '3000-01-01T00:00:00Z',
+      '2026-02-30T00:00:00Z',
+      '2026-11-01 14:30',
+    ]) {
       const r = at.safeParse(bad);
       expect(r.success, bad).toBe(false);
       expect(r.error?.issues[0]?.message).toMatch(/^at must/);

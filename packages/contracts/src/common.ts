@@ -15,8 +15,7 @@ export const text = (max: number, label: string) =>
     // PostgreSQL text cannot hold U+0000; refused here, the answer names the field.
     .refine((s) => !s.includes('\u0000'), { message: `${label} contains a NUL character (U+0000); remove it` });
 
-export const requiredText = (max: number, label: string) =>
-  text(max, label).min(1, { message: `${label} is required` });
+export const requiredText = (max: number, label: string) => text(max, label).min(1, { message: `${label} is required` });
 
 export const Email = z
   .string({ message: 'email must be text' })
@@ -37,17 +36,15 @@ const OFFSET = /(?:Z|([+-])(\d{2}):?(\d{2}))$/;
  * in use (IANA tz database, Pacific/Kiritimati); PostgreSQL refuses year 0000 and offsets past ±15:59.
  */
 export const instant = (label = 'time') =>
-  z.iso
-    .datetime({ offset: true, message: `${label} must be an ISO time with Z or an offset, e.g. 2026-11-01T14:30:00Z` })
-    .refine(
-      (s) => {
-        const year = Number(s.slice(0, 4));
-        const offset = OFFSET.exec(s);
-        const offsetMin = offset?.[1] ? Number(offset[2]) * 60 + Number(offset[3]) : 0;
-        return year >= 1900 && year <= 2999 && offsetMin <= 14 * 60;
-      },
-      { message: `${label} must fall between the years 1900 and 2999, with an offset of at most ±14:00` },
-    );
+  z.iso.datetime({ offset: true, message: `${label} must be an ISO time with Z or an offset, e.g. 2026-11-01T14:30:00Z` }).refine(
+    (s) => {
+      const year = Number(s.slice(0, 4));
+      const offset = OFFSET.exec(s);
+      const offsetMin = offset?.[1] ? Number(offset[2]) * 60 + Number(offset[3]) : 0;
+      return year >= 1900 && year <= 2999 && offsetMin <= 14 * 60;
+    },
+    { message: `${label} must fall between the years 1900 and 2999, with an offset of at most ±14:00` },
+  );
 
 export const Timestamp = instant().describe('ISO 8601 date-time');
 

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 
-const num = (label: string, unit: string) => z.number({ message: `${label} must be a number (${unit})` }).refine(Number.isFinite, { message: `${label} must be finite` });
+const num = (label: string, unit: string) =>
+  z.number({ message: `${label} must be a number (${unit})` }).refine(Number.isFinite, { message: `${label} must be finite` });
 
 /** One layer's forecast, with the inputs of `gelpoint exotherm` (same names, in JSON). */
 export const ExothermRequest = z

@@ -74,7 +74,9 @@ export const CavityReport = z.object({
   fillToTop: CavityFill.omit({ depthMap: true }),
   floorMm: z
     .object({ outline: z.number(), box: z.number() })
-    .describe("the cavity floor with each dam, as a height in the mould's own frame (mm): a level from the floor plus this is the same level in the mould's frame"),
+    .describe(
+      "the cavity floor with each dam, as a height in the mould's own frame (mm): a level from the floor plus this is the same level in the mould's frame",
+    ),
 });
 export type CavityReport = z.infer<typeof CavityReport>;
 

@@ -29,7 +29,11 @@ describe('permission table', () => {
 
   it('names an action of the table for every route not open to all members, so no route invents its own roles', () => {
     const known = new Set<string>(['public', 'member', ...actions]);
-    expect(Object.entries(apiRoutes).filter(([, r]) => !known.has(r.access)).map(([name]) => name)).toEqual([]);
+    expect(
+      Object.entries(apiRoutes)
+        .filter(([, r]) => !known.has(r.access))
+        .map(([name]) => name),
+    ).toEqual([]);
   });
 });
 

@@ -13,14 +13,40 @@ const cup = {
   pour: { kind: 'layer', layer: 0 },
   cost: { resin: 9, pigment: 0, total: 9 },
 };
-const times = { tempC: 20, rateFactor: 1, belowMinimum: false, potLifeMin: 40, gelTimeH: 6, nextLayerOpensH: 12, nextLayerClosesH: 24, tackFreeH: 12, demoldH: 48, fullCureH: 168, readyToMachineH: 72 };
+const times = {
+  tempC: 20,
+  rateFactor: 1,
+  belowMinimum: false,
+  potLifeMin: 40,
+  gelTimeH: 6,
+  nextLayerOpensH: 12,
+  nextLayerClosesH: 24,
+  tackFreeH: 12,
+  demoldH: 48,
+  fullCureH: 168,
+  readyToMachineH: 72,
+};
 const totals = { partA: { grams: 200, ml: 172.4 }, partB: { grams: 100, ml: 100 }, pigment: { grams: 0 }, totalGrams: 300 };
 const versionOneRow = {
   margins: { overPour: { label: 'over-pour', pct: 5, volumeMl: 12 }, cupWaste: { label: 'left in the cup', perBatch: { massG: 5 }, batches: 1, resinG: 5 } },
   resolution: { grams: 1, ml: 1, cost: 0.01 },
   fill: { fillLevelMm: 20, fillVolumeMl: 250, pourVolumeMl: 267, layerCount: 1, layerThicknessMm: 20, deepestResinMm: 20 },
   sealCoat: null,
-  layers: [{ index: 0, fromLevelMm: 0, toLevelMm: 20, thicknessMm: 20, deepestResinMm: 20, fillVolumeMl: 250, overPourMl: 12, pourVolumeMl: 267, batches: [cup], totals, cost: cup.cost }],
+  layers: [
+    {
+      index: 0,
+      fromLevelMm: 0,
+      toLevelMm: 20,
+      thicknessMm: 20,
+      deepestResinMm: 20,
+      fillVolumeMl: 250,
+      overPourMl: 12,
+      pourVolumeMl: 267,
+      batches: [cup],
+      totals,
+      cost: cup.cost,
+    },
+  ],
   deepPour: { productName: 'Deep pour', pigmentName: null, pigmentPct: 0, totals, cost: cup.cost },
   cost: { sealCoat: 0, deepPour: 9, wood: null, piece: 9 },
   shopTimes: { deepPour: times, sealCoat: null },
@@ -51,7 +77,11 @@ describe('a stored pour plan result', () => {
   });
 
   it('keeps a stored forecast and a stored tolerance instead of the defaults', () => {
-    const read = PourPlanResult.parse({ ...versionOneRow, resolution: { ...versionOneRow.resolution, offRatioTolerancePct: 5 }, forecast: { version: 1, available: false, code: 'no_depth', reason: 'No depth.' } });
+    const read = PourPlanResult.parse({
+      ...versionOneRow,
+      resolution: { ...versionOneRow.resolution, offRatioTolerancePct: 5 },
+      forecast: { version: 1, available: false, code: 'no_depth', reason: 'No depth.' },
+    });
     expect(read.resolution.offRatioTolerancePct).toBe(5);
     expect(read.forecast).toEqual({ version: 1, available: false, code: 'no_depth', reason: 'No depth.' });
   });

@@ -26,7 +26,10 @@ const PlannedBatch = z.object({
   totalGrams: z.number(),
   mixedDensityGPerMl: z.number(),
   index: z.number().int(),
-  pour: z.discriminatedUnion('kind', [z.object({ kind: z.literal('seal_coat'), coat: z.number().int() }), z.object({ kind: z.literal('layer'), layer: z.number().int() })]),
+  pour: z.discriminatedUnion('kind', [
+    z.object({ kind: z.literal('seal_coat'), coat: z.number().int() }),
+    z.object({ kind: z.literal('layer'), layer: z.number().int() }),
+  ]),
   cost: CostTotals,
   // Version 1 cups were weighed exactly on ratio before being rounded, and their pigment was left out of the volume.
   ratioErrorPct: z.number().default(0),
@@ -70,8 +73,20 @@ export const PourPlanResult = z.object({
     overPour: z.object({ label: z.string(), pct: z.number(), volumeMl: z.number() }),
     cupWaste: z.object({ label: z.string(), perBatch: CupWaste, batches: z.number().int(), resinG: z.number() }),
   }),
-  resolution: z.object({ grams: z.union([z.literal(0.1), z.literal(1)]), ml: z.number(), cost: z.number(), offRatioTolerancePct: z.number().default(defaultOffRatioTolerancePct) }),
-  fill: z.object({ fillLevelMm: z.number(), fillVolumeMl: z.number(), pourVolumeMl: z.number(), layerCount: z.number().int(), layerThicknessMm: z.number(), deepestResinMm: z.number() }),
+  resolution: z.object({
+    grams: z.union([z.literal(0.1), z.literal(1)]),
+    ml: z.number(),
+    cost: z.number(),
+    offRatioTolerancePct: z.number().default(defaultOffRatioTolerancePct),
+  }),
+  fill: z.object({
+    fillLevelMm: z.number(),
+    fillVolumeMl: z.number(),
+    pourVolumeMl: z.number(),
+    layerCount: z.number().int(),
+    layerThicknessMm: z.number(),
+    deepestResinMm: z.number(),
+  }),
   sealCoat: z
     .object({
       productName: z.string(),

@@ -23,8 +23,22 @@ const maxDepthMm = 500;
 export const QuickShape = z.discriminatedUnion(
   'kind',
   [
-    z.object({ kind: z.literal('rectangle'), lengthMm: positive('length', maxLengthMm, 'mm'), widthMm: positive('width', maxWidthMm, 'mm'), depthMm: positive('depth', maxDepthMm, 'mm') }).strict(),
-    z.object({ kind: z.literal('channel'), lengthMm: positive('length', maxLengthMm, 'mm'), widthMm: positive('width', maxWidthMm, 'mm'), depthMm: positive('depth', maxDepthMm, 'mm') }).strict(),
+    z
+      .object({
+        kind: z.literal('rectangle'),
+        lengthMm: positive('length', maxLengthMm, 'mm'),
+        widthMm: positive('width', maxWidthMm, 'mm'),
+        depthMm: positive('depth', maxDepthMm, 'mm'),
+      })
+      .strict(),
+    z
+      .object({
+        kind: z.literal('channel'),
+        lengthMm: positive('length', maxLengthMm, 'mm'),
+        widthMm: positive('width', maxWidthMm, 'mm'),
+        depthMm: positive('depth', maxDepthMm, 'mm'),
+      })
+      .strict(),
     z.object({ kind: z.literal('cylinder'), diameterMm: positive('diameter', maxWidthMm, 'mm'), depthMm: positive('depth', maxDepthMm, 'mm') }).strict(),
     z
       .object({
@@ -57,21 +71,34 @@ export const PourPlanInput = z
     fillLevelMm: z
       .number({ message: 'fill level must be a number (mm)' })
       .refine(Number.isFinite, { message: 'fill level must be finite' })
-      .describe("height of the resin surface above the cavity floor (mm), for a mould as for a quick shape; with levelFrom 'mould', a height in the mould's own frame"),
+      .describe(
+        "height of the resin surface above the cavity floor (mm), for a mould as for a quick shape; with levelFrom 'mould', a height in the mould's own frame",
+      ),
     levelFrom: LevelFrom.default('floor').describe(
       "floor (default): fillLevelMm is measured from the cavity floor. mould: from the mould file's own frame, for a mould's cavity only; the plan is stored measured from the floor either way",
     ),
     deepPour: z.object({ resinSystemId: Id, pigmentId: Id.nullable().default(null), pigmentPct: nonNegative('pigment loading', 100).default(0) }).strict(),
     sealCoat: z
-      .object({ resinSystemId: Id, filmThicknessMm: positive('film thickness', 5), coats: z.number().int().min(1).max(10), absorptionFactor: z.number().min(1).max(5) })
+      .object({
+        resinSystemId: Id,
+        filmThicknessMm: positive('film thickness', 5),
+        coats: z.number().int().min(1).max(10),
+        absorptionFactor: z.number().min(1).max(5),
+      })
       .strict()
       .nullable()
       .default(null),
     overPourPct: nonNegative('over-pour', 50, '%').default(5),
     // A scraped cup keeps grams, not kilograms: half a kilogram is already far more than any cup holds back.
-    cupWaste: z.union([z.object({ massG: nonNegative('cup waste', 500, 'g') }).strict(), z.object({ volumeMl: nonNegative('cup waste', 500, 'mL') }).strict()]).default({ massG: 5 }),
+    cupWaste: z
+      .union([z.object({ massG: nonNegative('cup waste', 500, 'g') }).strict(), z.object({ volumeMl: nonNegative('cup waste', 500, 'mL') }).strict()])
+      .default({ massG: 5 }),
     shopTempC: z.number({ message: 'shop temperature must be a number (°C)' }).min(-30).max(60),
-    shopAir: z.object({ rhPct: z.number().min(0).max(100), surfaceTempC: z.number().min(-30).max(80) }).strict().nullable().default(null),
+    shopAir: z
+      .object({ rhPct: z.number().min(0).max(100), surfaceTempC: z.number().min(-30).max(80) })
+      .strict()
+      .nullable()
+      .default(null),
     wood: z
       .object({
         lengthMm: positive('wood length', maxLengthMm, 'mm'),
@@ -85,7 +112,6 @@ export const PourPlanInput = z
   })
   .strict();
 export type PourPlanInput = z.input<typeof PourPlanInput>;
-
 
 export const PourPlanView = z.object({
   id: Id,
@@ -108,7 +134,14 @@ export const PourPlanView = z.object({
 });
 export type PourPlanView = z.infer<typeof PourPlanView>;
 
-export const PourPlanList = z.object({ items: z.array(PourPlanView.omit({ result: true, inputs: true, productSnapshot: true }).extend({ totalGrams: z.number() })), total: z.number().int() });
+export const PourPlanList = z.object({
+  items: z.array(PourPlanView.omit({ result: true, inputs: true, productSnapshot: true }).extend({ totalGrams: z.number() })),
+  total: z.number().int(),
+});
 export const PourPlanListQuery = z
-  .object({ pieceId: Id.optional(), limit: z.coerce.number().int().min(1).max(200).default(50), offset: z.coerce.number().int().min(0).max(1_000_000).default(0) })
+  .object({
+    pieceId: Id.optional(),
+    limit: z.coerce.number().int().min(1).max(200).default(50),
+    offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
+  })
   .strict();

@@ -2,12 +2,22 @@ import { z } from 'zod';
 import { Id, Timestamp, UserRef, instant, requiredText, text } from './common';
 import { Warning } from './molds';
 
-const grams = (label: string) => z.number({ message: `${label} must be a number (g)` }).min(0, { message: `${label} cannot be negative` }).max(1_000_000, { message: `${label} is implausibly large` });
-const temp = (label: string) => z.number({ message: `${label} must be a number (°C)` }).min(-30, { message: `${label} must be at least −30 °C` }).max(80, { message: `${label} must be at most 80 °C` });
+const grams = (label: string) =>
+  z
+    .number({ message: `${label} must be a number (g)` })
+    .min(0, { message: `${label} cannot be negative` })
+    .max(1_000_000, { message: `${label} is implausibly large` });
+const temp = (label: string) =>
+  z
+    .number({ message: `${label} must be a number (°C)` })
+    .min(-30, { message: `${label} must be at least −30 °C` })
+    .max(80, { message: `${label} must be at most 80 °C` });
 const lotNumber = text(80, 'lot number');
 
 export const PourStatus = z.enum(['open', 'released', 'machined', 'cancelled']);
-export const CureCheckStage = z.enum(['liquid', 'gelled', 'tack_free', 'demoldable', 'machinable'], { message: 'stage must be liquid, gelled, tack_free, demoldable or machinable' });
+export const CureCheckStage = z.enum(['liquid', 'gelled', 'tack_free', 'demoldable', 'machinable'], {
+  message: 'stage must be liquid, gelled, tack_free, demoldable or machinable',
+});
 export const ReminderKind = z.enum([
   'seal_coat_window_opens',
   'seal_coat_window_closes',
@@ -74,7 +84,10 @@ export const BatchView = z.object({
   dewPointC: z.number().nullable(),
   warnings: z.array(Warning),
   notes: z.string(),
-  voided: z.object({ at: Timestamp, by: UserRef.nullable(), reason: z.string() }).nullable().describe('a voided cup stays in the history, out of the cure and the stock'),
+  voided: z
+    .object({ at: Timestamp, by: UserRef.nullable(), reason: z.string() })
+    .nullable()
+    .describe('a voided cup stays in the history, out of the cure and the stock'),
 });
 export type BatchView = z.infer<typeof BatchView>;
 
@@ -125,9 +138,21 @@ export const CureView = z.object({
   loggedEquivalentHours: z.number().describe('equivalent hours at the reference temperature that the readings themselves show'),
   assumedEquivalentHours: z.number().describe('equivalent hours counted on gaps and unlogged stretches, each at its conservative temperature'),
   readingCarryH: z.number(),
-  gaps: z.array(z.object({ from: Timestamp, to: Timestamp, hours: z.number(), tempC: z.number() })).describe('stretches more than the carry limit from any reading'),
+  gaps: z
+    .array(z.object({ from: Timestamp, to: Timestamp, hours: z.number(), tempC: z.number() }))
+    .describe('stretches more than the carry limit from any reading'),
   spans: z
-    .array(z.object({ from: Timestamp, to: Timestamp, source: z.enum(['logged', 'carried', 'gap', 'assumed']), tempC: z.number(), startTempC: z.number(), endTempC: z.number(), belowMinimum: z.boolean() }))
+    .array(
+      z.object({
+        from: Timestamp,
+        to: Timestamp,
+        source: z.enum(['logged', 'carried', 'gap', 'assumed']),
+        tempC: z.number(),
+        startTempC: z.number(),
+        endTempC: z.number(),
+        belowMinimum: z.boolean(),
+      }),
+    )
     .describe('the history the cure sum ran over'),
   ahead: z
     .array(z.object({ from: Timestamp, to: Timestamp, tempC: z.number() }))
@@ -157,7 +182,15 @@ export const ReminderView = z.object({
 });
 export type ReminderView = z.infer<typeof ReminderView>;
 
-export const CureCheckView = z.object({ id: Id, checkedAt: Timestamp, stage: CureCheckStage, hardnessShoreD: z.number().nullable(), note: z.string(), hasPhoto: z.boolean(), checkedBy: UserRef.nullable() });
+export const CureCheckView = z.object({
+  id: Id,
+  checkedAt: Timestamp,
+  stage: CureCheckStage,
+  hardnessShoreD: z.number().nullable(),
+  note: z.string(),
+  hasPhoto: z.boolean(),
+  checkedBy: UserRef.nullable(),
+});
 export const CureCheckFields = z
   .object({
     stage: CureCheckStage,
@@ -211,7 +244,16 @@ export const PourListQuery = z
   .strict();
 export const PourList = z.object({ items: z.array(PourSummary), total: z.number().int() });
 
-export const MachinedRequest = z.object({ machinedAt: instant('machinedAt').optional(), finishCoats: z.number().int().min(0).max(20), hoursBetweenCoats: z.number().positive().max(24 * 30) }).strict();
+export const MachinedRequest = z
+  .object({
+    machinedAt: instant('machinedAt').optional(),
+    finishCoats: z.number().int().min(0).max(20),
+    hoursBetweenCoats: z
+      .number()
+      .positive()
+      .max(24 * 30),
+  })
+  .strict();
 
 export const TodayView = z.object({
   due: z.array(ReminderView.extend({ pourId: Id, pieceName: z.string() })).describe('reminders due in the next 24 hours or overdue'),

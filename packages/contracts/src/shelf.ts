@@ -2,11 +2,20 @@ import { z } from 'zod';
 import { Id, Timestamp, UserRef, requiredText, text } from './common';
 
 const positive = (label: string, max: number) =>
-  z.number({ message: `${label} must be a number` }).gt(0, { message: `${label} must be above zero` }).max(max, { message: `${label} must be at most ${max}` });
+  z
+    .number({ message: `${label} must be a number` })
+    .gt(0, { message: `${label} must be above zero` })
+    .max(max, { message: `${label} must be at most ${max}` });
 const nonNegative = (label: string, max: number) =>
-  z.number({ message: `${label} must be a number` }).min(0, { message: `${label} must be zero or more` }).max(max, { message: `${label} must be at most ${max}` });
+  z
+    .number({ message: `${label} must be a number` })
+    .min(0, { message: `${label} must be zero or more` })
+    .max(max, { message: `${label} must be at most ${max}` });
 const tempC = (label: string) =>
-  z.number({ message: `${label} must be a number (°C)` }).min(-40, { message: `${label} must be at least −40 °C` }).max(150, { message: `${label} must be at most 150 °C` });
+  z
+    .number({ message: `${label} must be a number (°C)` })
+    .min(-40, { message: `${label} must be at least −40 °C` })
+    .max(150, { message: `${label} must be at most 150 °C` });
 
 export const ResinUse = z.enum(['seal', 'deep_pour', 'casting', 'coating'], { message: 'use must be seal, deep_pour, casting or coating' });
 export const RatioBasis = z.enum(['weight', 'volume'], { message: 'the ratio basis must be weight or volume' });
@@ -31,7 +40,10 @@ const resinSystemFields = {
   maxLayerMm: positive('maximum layer thickness', 1000),
   maxBatchG: positive('maximum batch mass', 1_000_000),
   activationEnergyKJPerMol: positive('activation energy', 500).nullable().default(null),
-  hardnessShoreD: positive('Shore D hardness', 100).nullable().default(null).describe('the cured hardness the data sheet states; release then needs a cure check that reached it'),
+  hardnessShoreD: positive('Shore D hardness', 100)
+    .nullable()
+    .default(null)
+    .describe('the cured hardness the data sheet states; release then needs a cure check that reached it'),
   reactionHeatJPerG: positive('heat of reaction', 1500)
     .nullable()
     .default(null)
@@ -95,14 +107,21 @@ function timesOutOfOrder(v: TimesToCheck): { paths: string[]; message: string } 
     const b = given[i + 1]!;
     const ta = v[a.field] as number;
     const tb = v[b.field] as number;
-    if (ta > tb) return { paths: [a.field, b.field], message: `${b.words} (${tb} h) comes before ${a.words} (${ta} h); a cure reaches gel, tack-free, demold, machining and full cure in that order — check the data sheet` };
+    if (ta > tb)
+      return {
+        paths: [a.field, b.field],
+        message: `${b.words} (${tb} h) comes before ${a.words} (${ta} h); a cure reaches gel, tack-free, demold, machining and full cure in that order — check the data sheet`,
+      };
   }
   return null;
 }
 
 const resinSystemRules = <T extends z.ZodType<TimesToCheck>>(s: T) =>
   s
-    .refine((v) => !v.recoatWindow || v.recoatWindow.earliestH <= v.recoatWindow.latestH, { message: 'the recoat window must open before it closes', path: ['recoatWindow'] })
+    .refine((v) => !v.recoatWindow || v.recoatWindow.earliestH <= v.recoatWindow.latestH, {
+      message: 'the recoat window must open before it closes',
+      path: ['recoatWindow'],
+    })
     .refine((v) => v.minWorkTempC === undefined || v.maxWorkTempC === undefined || v.minWorkTempC < v.maxWorkTempC, {
       message: 'the minimum working temperature must be below the maximum',
       path: ['minWorkTempC'],
@@ -139,7 +158,10 @@ export const ResinSystemView = z.object({
   acceptedPeakC: z.number().nullable(),
   /** What the exotherm forecast uses for each setting: the shelf's value, or the named default when it is empty. */
   exothermSettings: z
-    .record(z.enum(['reactionHeatJPerG', 'thinFilmGelMin', 'heatCapacityJPerGK', 'conductivityWPerMK', 'acceptedPeakC', 'activationEnergyKJPerMol']), z.object({ value: z.number(), isDefault: z.boolean(), source: z.string() }))
+    .record(
+      z.enum(['reactionHeatJPerG', 'thinFilmGelMin', 'heatCapacityJPerGK', 'conductivityWPerMK', 'acceptedPeakC', 'activationEnergyKJPerMol']),
+      z.object({ value: z.number(), isDefault: z.boolean(), source: z.string() }),
+    )
     .describe('per setting: the value the forecast uses, whether it is a default, and where it comes from'),
   /** The activation energy the cure model uses: the data sheet's, or the common-practice default. */
   effectiveActivationEnergyKJPerMol: z.number(),
@@ -191,7 +213,12 @@ export const LotInput = z
 export type LotInput = z.input<typeof LotInput>;
 
 export const LotUpdate = z
-  .object({ lotNumber: requiredText(80, 'lot number'), remainingG: nonNegative('remaining quantity', 10_000_000), expiresOn: IsoDate.nullable(), notes: text(1000, 'notes') })
+  .object({
+    lotNumber: requiredText(80, 'lot number'),
+    remainingG: nonNegative('remaining quantity', 10_000_000),
+    expiresOn: IsoDate.nullable(),
+    notes: text(1000, 'notes'),
+  })
   .partial()
   .strict();
 

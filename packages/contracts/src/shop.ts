@@ -27,8 +27,16 @@ export const TimeZone = z
   );
 
 const hour = (label: string) =>
-  z.number({ message: `${label} must be a whole hour from 0 to 23` }).int({ message: `${label} must be a whole hour from 0 to 23` }).min(0, { message: `${label} must be a whole hour from 0 to 23` }).max(23, { message: `${label} must be a whole hour from 0 to 23` });
-const profileTemp = (label: string) => z.number({ message: `${label} must be a number (°C)` }).min(-30, { message: `${label} must be at least −30 °C` }).max(60, { message: `${label} must be at most 60 °C` });
+  z
+    .number({ message: `${label} must be a whole hour from 0 to 23` })
+    .int({ message: `${label} must be a whole hour from 0 to 23` })
+    .min(0, { message: `${label} must be a whole hour from 0 to 23` })
+    .max(23, { message: `${label} must be a whole hour from 0 to 23` });
+const profileTemp = (label: string) =>
+  z
+    .number({ message: `${label} must be a number (°C)` })
+    .min(-30, { message: `${label} must be at least −30 °C` })
+    .max(60, { message: `${label} must be at most 60 °C` });
 
 export const ShopTemperatureProfile = z
   .discriminatedUnion(
@@ -36,7 +44,13 @@ export const ShopTemperatureProfile = z
     [
       z.object({ mode: z.literal('plan') }).strict(),
       z
-        .object({ mode: z.literal('day_night'), dayTempC: profileTemp('the day temperature'), nightTempC: profileTemp('the night temperature'), dayStartHour: hour('the hour the day starts'), nightStartHour: hour('the hour the night starts') })
+        .object({
+          mode: z.literal('day_night'),
+          dayTempC: profileTemp('the day temperature'),
+          nightTempC: profileTemp('the night temperature'),
+          dayStartHour: hour('the hour the day starts'),
+          nightStartHour: hour('the hour the night starts'),
+        })
         .strict()
         .refine((p) => p.dayStartHour !== p.nightStartHour, { message: 'day and night must start at different hours', path: ['nightStartHour'] }),
       z.object({ mode: z.literal('learned') }).strict(),
@@ -77,8 +91,14 @@ export const UpdateShopRequest = z
     name: requiredText(120, 'shop name'),
     unitSystem: UnitSystem,
     scaleResolutionG: ScaleResolutionG,
-    offRatioTolerancePct: z.number({ message: 'the off-ratio tolerance must be a number (%)' }).min(0.5, { message: 'the off-ratio tolerance must be at least 0.5 %' }).max(20, { message: 'the off-ratio tolerance must be at most 20 %' }),
-    readingCarryH: z.number({ message: 'how long a reading speaks for must be a number of hours' }).min(0, { message: 'how long a reading speaks for cannot be negative' }).max(48, { message: 'how long a reading speaks for must be at most 48 h' }),
+    offRatioTolerancePct: z
+      .number({ message: 'the off-ratio tolerance must be a number (%)' })
+      .min(0.5, { message: 'the off-ratio tolerance must be at least 0.5 %' })
+      .max(20, { message: 'the off-ratio tolerance must be at most 20 %' }),
+    readingCarryH: z
+      .number({ message: 'how long a reading speaks for must be a number of hours' })
+      .min(0, { message: 'how long a reading speaks for cannot be negative' })
+      .max(48, { message: 'how long a reading speaks for must be at most 48 h' }),
     timeZone: TimeZone,
     temperatureProfile: ShopTemperatureProfile,
     dayStartHour: hour('the hour the working day starts'),

@@ -42,7 +42,7 @@ describe('cups rounded to the scale on the product ratio', () => {
     );
   });
 
-  it('signs a weighed cup\'s error against the product ratio, not the rounded targets', () => {
+  it("signs a weighed cup's error against the product ratio, not the rounded targets", () => {
     // 17 g A with 7 g B for a 100:45 product is 9.3 % A-rich, though those are the amounts a naive rounding prints.
     expect(offRatioPct(17, 7, 100 / 45)).toBeCloseTo(9.29, 2);
     expect(offRatioPct(100, 45, 100 / 45)).toBeCloseTo(0, 12);

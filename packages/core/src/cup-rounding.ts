@@ -44,4 +44,3 @@ export function roundCupOnRatio(exactAG: number, exactBG: number, pigmentPct: nu
   const pigmentG = pigmentPct > 0 ? fromSteps(toSteps(((aG + bG) * pigmentPct) / 100, step), step) : 0;
   return { aG, bG, pigmentG, ratioErrorPct: (aG / bG / ratio - 1) * 100 };
 }
-

@@ -56,7 +56,11 @@ type Raw = { piece: HistoryPiece; ceilingC?: undefined } | { piece: HistoryPiece
 export function historyPieces(readings: TimedReading[], fromMs: number, toMs: number, carryH: number, shop: ShopTemperature | undefined): HistoryPiece[] {
   const carryMs = carryH * msPerHour;
   const raw: Raw[] = [];
-  const open = (a: number, b: number, ceilingC: number | undefined, source: CureSpanSource): Raw => ({ piece: flat(a, b, ceilingC ?? Number.NaN, source), ceilingC, followsShop: true });
+  const open = (a: number, b: number, ceilingC: number | undefined, source: CureSpanSource): Raw => ({
+    piece: flat(a, b, ceilingC ?? Number.NaN, source),
+    ceilingC,
+    followsShop: true,
+  });
   if (readings.length === 0) {
     raw.push(open(fromMs, toMs, undefined, 'assumed'));
   } else {
@@ -115,6 +119,12 @@ export function forwardPieces(readings: TimedReading[], asOfMs: number, carryH: 
   if (!last) return splitByShopTemperature(asOfMs, Infinity, shop, (a, b, t) => flat(a, b, t, 'assumed'), asOfMs + forecastHorizonMs);
   const carriedUntil = last.ms + carryH * msPerHour;
   const shortfall = Math.min(0, last.tempC - shop.at(last.ms));
-  const later = splitByShopTemperature(Math.max(asOfMs, carriedUntil), Infinity, shop, (a, b, t) => flat(a, b, t + shortfall, 'gap'), asOfMs + forecastHorizonMs);
+  const later = splitByShopTemperature(
+    Math.max(asOfMs, carriedUntil),
+    Infinity,
+    shop,
+    (a, b, t) => flat(a, b, t + shortfall, 'gap'),
+    asOfMs + forecastHorizonMs,
+  );
   return asOfMs < carriedUntil ? [flat(asOfMs, carriedUntil, last.tempC, 'carried'), ...later] : later;
 }

@@ -67,7 +67,9 @@ describe('predicted stage times', () => {
     // Below the 18 °C minimum the rate still follows Arrhenius: 2 equivalent hours at 10 °C take 2 / k(10 °C) hours.
     const cold = predictStages({ product: demoDeepPour, equivalentHoursAtRef: 12, asOf: '2025-02-01T10:00:00Z', assumedTempC: 10 });
     const k10 = rateFactor(10, 22, activationEnergyForDoublingPer10K(22));
-    expect(cold.ok && Date.parse(cold.value.find((s) => s.key === 'tack_free')!.predictedAt!)).toBe(Date.parse('2025-02-01T10:00:00Z') + Math.round((2 / k10) * 3_600_000));
+    expect(cold.ok && Date.parse(cold.value.find((s) => s.key === 'tack_free')!.predictedAt!)).toBe(
+      Date.parse('2025-02-01T10:00:00Z') + Math.round((2 / k10) * 3_600_000),
+    );
   });
 
   it('has no cliff at the minimum temperature: demold at 17.99 °C comes just after demold at 18.00 °C', () => {
@@ -83,7 +85,13 @@ describe('predicted stage times', () => {
   });
 
   it('writes times in the shop zone when asked', () => {
-    const prediction = predictStages({ product: demoDeepPour, equivalentHoursAtRef: 12, asOf: '2025-02-01T10:00:00Z', assumedTempC: 22, zone: 'Europe/Berlin' });
+    const prediction = predictStages({
+      product: demoDeepPour,
+      equivalentHoursAtRef: 12,
+      asOf: '2025-02-01T10:00:00Z',
+      assumedTempC: 22,
+      zone: 'Europe/Berlin',
+    });
     expect(prediction.ok && prediction.value.find((s) => s.key === 'tack_free')?.predictedAt).toBe('2025-02-01T13:00:00+01:00');
     const badZone = predictStages({ product: demoDeepPour, equivalentHoursAtRef: 12, asOf: '2025-02-01T10:00:00Z', assumedTempC: 22, zone: 'Mars/Olympus' });
     expect(badZone.ok || badZone.error.code).toBe('zone_unknown');
@@ -154,7 +162,13 @@ describe('cureStatus', () => {
     const gel = status.value.stages.find((s) => s.key === 'gel')!;
     expect(Date.parse(gel.predictedAt!)).toBe(Date.parse('2025-02-01T04:00:00Z') + Math.round(((8 - 4 * k14) / k14) * 3_600_000));
     // A warm log with a cooler plan: the reading carries 2 h, then the plan's 22 °C caps the forecast.
-    const warm = cureStatus({ product: demoDeepPour, readings: readings.map((r) => ({ ...r, tempC: 30 })), pouredAt: '2025-02-01T00:00:00Z', asOf: '2025-02-01T04:00:00Z', assumedTempC: 22 });
+    const warm = cureStatus({
+      product: demoDeepPour,
+      readings: readings.map((r) => ({ ...r, tempC: 30 })),
+      pouredAt: '2025-02-01T00:00:00Z',
+      asOf: '2025-02-01T04:00:00Z',
+      assumedTempC: 22,
+    });
     expect(warm.ok && warm.value.ahead.map((p) => [p.tempC, (p.toMs - p.fromMs) / 3_600_000])).toEqual([
       [30, 2],
       [22, Infinity],

@@ -220,7 +220,11 @@ export function cureStatus(input: CureStatusInput): Result<CureStatus> {
   if (!timed.ok) return timed;
   if (!asOfMs.ok) return asOfMs;
   const upToNow = timed.value.filter((r) => r.ms <= asOfMs.value);
-  const ahead = forwardPieces(upToNow, asOfMs.value, age.value.readingCarryH, shopTemperatureOf(input.assumedTempC)).map(({ fromMs, toMs, tempC }) => ({ fromMs, toMs, tempC }));
+  const ahead = forwardPieces(upToNow, asOfMs.value, age.value.readingCarryH, shopTemperatureOf(input.assumedTempC)).map(({ fromMs, toMs, tempC }) => ({
+    fromMs,
+    toMs,
+    tempC,
+  }));
   const te = age.value.equivalentHoursAtRef;
   const predicted = predictStages({ product, equivalentHoursAtRef: te, asOf: input.asOf, ahead, ...zoneArg });
   if (!predicted.ok) return predicted;
@@ -252,7 +256,15 @@ export function cureStatus(input: CureStatusInput): Result<CureStatus> {
       ),
     );
   }
-  return ok({ age: age.value, progress: cureProgress(te, product), stageReached: stageReached(te, product), nextLayerWindow: windowState, stages, ahead, cautions });
+  return ok({
+    age: age.value,
+    progress: cureProgress(te, product),
+    stageReached: stageReached(te, product),
+    nextLayerWindow: windowState,
+    stages,
+    ahead,
+    cautions,
+  });
 }
 
 function round1(x: number): number {

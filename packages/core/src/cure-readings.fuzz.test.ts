@@ -59,11 +59,37 @@ function expectAllOrNothing(text: string, result: Result<CureReading[]>): void {
 /** Pieces a damaged or foreign log is made of. */
 const logPiece = fc.oneof(
   fc.constantFrom(
-    'time,tempC', '2025-03-01T18:00:00Z,21.5', '2025-03-01T17:00:00Z,21', '"2025-03-01T19:00:00+01:00","20"', '2025-03-01T18:00:00,20',
-    '2025-W09-6T18:00Z,20', '2025-060T18:00Z,20', '20250301T180000Z,20', '+002025-03-01T18:00Z,20', '2025-02-29T18:00Z,20',
-    '2025-03-01T18:00:00+16:00,20', '0000-03-01T18:00:00Z,20', '2025-03-01T18:00:00Z,0x10', '2025-03-01T18:00:00Z,-300',
-    '2025-03-01T18:00:00Z,Infinity', '2025-03-01T18:00:00Z,1e999', '2025-03-01T18:00:00Z,"21,5"', '""', '"', ',', ',,,', '\uFEFF',
-    '\r\n', '\r', '\n', '\u2028', '\u00a0', '١٢', '温度', '🌡️', '\0',
+    'time,tempC',
+    '2025-03-01T18:00:00Z,21.5',
+    '2025-03-01T17:00:00Z,21',
+    '"2025-03-01T19:00:00+01:00","20"',
+    '2025-03-01T18:00:00,20',
+    '2025-W09-6T18:00Z,20',
+    '2025-060T18:00Z,20',
+    '20250301T180000Z,20',
+    '+002025-03-01T18:00Z,20',
+    '2025-02-29T18:00Z,20',
+    '2025-03-01T18:00:00+16:00,20',
+    '0000-03-01T18:00:00Z,20',
+    '2025-03-01T18:00:00Z,0x10',
+    '2025-03-01T18:00:00Z,-300',
+    '2025-03-01T18:00:00Z,Infinity',
+    '2025-03-01T18:00:00Z,1e999',
+    '2025-03-01T18:00:00Z,"21,5"',
+    '""',
+    '"',
+    ',',
+    ',,,',
+    '\uFEFF',
+    '\r\n',
+    '\r',
+    '\n',
+    '\u2028',
+    '\u00a0',
+    '١٢',
+    '温度',
+    '🌡️',
+    '\0',
   ),
   fc.string({ maxLength: 40 }),
   fc.string({ unit: 'binary', maxLength: 40 }),
@@ -73,31 +99,46 @@ const separator = fc.constantFrom('\n', '\r\n', '\r', ',', '');
 
 describe('parseCureReadingsCsv on hostile input: all rows or per-row errors, never a throw or a hang', () => {
   it('answers arbitrary unicode text', () => {
-    fc.assert(fc.property(fc.string({ unit: 'binary', maxLength: 600 }), (text) => {
-      const { result, ms } = timedParse(text);
-      expectAllOrNothing(text, result);
-      expect(ms).toBeLessThan(smallBudgetMs);
-    }), { numRuns: 400 });
+    fc.assert(
+      fc.property(fc.string({ unit: 'binary', maxLength: 600 }), (text) => {
+        const { result, ms } = timedParse(text);
+        expectAllOrNothing(text, result);
+        expect(ms).toBeLessThan(smallBudgetMs);
+      }),
+      { numRuns: 400 },
+    );
   });
 
   it('answers logs stitched from valid rows, foreign dates, quotes, BOMs, line breaks of every kind and garbage', () => {
-    fc.assert(fc.property(fc.array(fc.tuple(logPiece, separator), { maxLength: 30 }), fc.boolean(), (parts, bom) => {
-      const text = (bom ? '\uFEFF' : '') + parts.map(([piece, sep]) => piece + sep).join('');
-      const { result, ms } = timedParse(text);
-      expectAllOrNothing(text, result);
-      expect(ms).toBeLessThan(smallBudgetMs);
-    }), { numRuns: 500 });
+    fc.assert(
+      fc.property(fc.array(fc.tuple(logPiece, separator), { maxLength: 30 }), fc.boolean(), (parts, bom) => {
+        const text = (bom ? '\uFEFF' : '') + parts.map(([piece, sep]) => piece + sep).join('');
+        const { result, ms } = timedParse(text);
+        expectAllOrNothing(text, result);
+        expect(ms).toBeLessThan(smallBudgetMs);
+      }),
+      { numRuns: 500 },
+    );
   });
 
   it('answers one huge line, with a bounded message, in bounded time', () => {
     const filler = fc.constantFrom('1', ',', '"', ' ', 'x', 'T', '2025-03-01T18:00:00Z,', '\u00e9');
     const tail = fc.constantFrom('', 'x', '.', 'e', ',', '"');
-    fc.assert(fc.property(filler, fc.integer({ min: 100_000, max: 400_000 }), fc.constantFrom('', '2025-03-01T', '2025-03-01T18:00:00Z,'), tail, (unit, repeat, head, end) => {
-      const text = head + unit.repeat(repeat) + end;
-      const { result, ms } = timedParse(text);
-      expectAllOrNothing(text, result);
-      expect(ms).toBeLessThan(largeBudgetMs);
-    }), { numRuns: 12 });
+    fc.assert(
+      fc.property(
+        filler,
+        fc.integer({ min: 100_000, max: 400_000 }),
+        fc.constantFrom('', '2025-03-01T', '2025-03-01T18:00:00Z,'),
+        tail,
+        (unit, repeat, head, end) => {
+          const text = head + unit.repeat(repeat) + end;
+          const { result, ms } = timedParse(text);
+          expectAllOrNothing(text, result);
+          expect(ms).toBeLessThan(largeBudgetMs);
+        },
+      ),
+      { numRuns: 12 },
+    );
   });
 });
 
@@ -176,43 +217,52 @@ function written(rows: GeneratedRow[], l: Layout): { text: string; rowOf: number
 
 describe('parseCureReadingsCsv on generated valid logs', () => {
   it('gives back every reading: the time as written, the instant it names, the temperature it says', () => {
-    fc.assert(fc.property(generatedLog, layout, (rows, l) => {
-      const { text } = written(rows, l);
-      const { result, ms } = timedParse(text);
-      expect(ms).toBeLessThan(smallBudgetMs);
-      expect(result.ok).toBe(true);
-      if (!result.ok) return;
-      expect(result.value.map((r) => r.at)).toEqual(rows.map((r) => r.timeText));
-      expect(result.value.map((r) => r.tempC)).toEqual(rows.map((r) => Number(r.tempText)));
-      const instants = result.value.map((r) => readTimeCell(r.at));
-      expect(instants.map((t) => t.ok && t.value)).toEqual(rows.map((r) => r.epochMs));
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(generatedLog, layout, (rows, l) => {
+        const { text } = written(rows, l);
+        const { result, ms } = timedParse(text);
+        expect(ms).toBeLessThan(smallBudgetMs);
+        expect(result.ok).toBe(true);
+        if (!result.ok) return;
+        expect(result.value.map((r) => r.at)).toEqual(rows.map((r) => r.timeText));
+        expect(result.value.map((r) => r.tempC)).toEqual(rows.map((r) => Number(r.tempText)));
+        const instants = result.value.map((r) => readTimeCell(r.at));
+        expect(instants.map((t) => t.ok && t.value)).toEqual(rows.map((r) => r.epochMs));
+      }),
+      { numRuns: 200 },
+    );
   });
 
   it('reads each time as the same instant as luxon and as ECMAScript Date.parse do', () => {
     // Reference libraries: luxon's ISO 8601 reader and the ECMAScript date-time string format
     // (ECMA-262 §21.4.1.32), both of which the product's other time checks rely on.
-    fc.assert(fc.property(fc.integer({ min: 0, max: 4_000_000_000_000 }), offsetMinutes, offsetStyle, fc.boolean(), (epochMs, minutes, style, longForm) => {
-      const text = timeText(epochMs, minutes, style, longForm);
-      const ours = readTimeCell(text);
-      expect(ours.ok && ours.value).toBe(DateTime.fromISO(text, { setZone: true }).toMillis());
-      if (style !== 'compact') expect(ours.ok && ours.value).toBe(Date.parse(text));
-    }), { numRuns: 500 });
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 4_000_000_000_000 }), offsetMinutes, offsetStyle, fc.boolean(), (epochMs, minutes, style, longForm) => {
+        const text = timeText(epochMs, minutes, style, longForm);
+        const ours = readTimeCell(text);
+        expect(ours.ok && ours.value).toBe(DateTime.fromISO(text, { setZone: true }).toMillis());
+        if (style !== 'compact') expect(ours.ok && ours.value).toBe(Date.parse(text));
+      }),
+      { numRuns: 500 },
+    );
   });
 
   it('names exactly the rows that were damaged, and imports none of them', () => {
     const damage = fc.constantFrom('warm', '0x1A', '-300', 'Infinity', '', '21,5', '2l');
-    fc.assert(fc.property(generatedLog, layout, fc.array(fc.tuple(fc.nat(), damage), { minLength: 1, maxLength: 8 }), (rows, l, hits) => {
-      const broken = rows.map((r) => ({ ...r }));
-      for (const [pick, bad] of hits) broken[pick % rows.length]!.tempText = bad;
-      const { text, rowOf } = written(broken, l);
-      const { result } = timedParse(text);
-      expectAllOrNothing(text, result);
-      expect(result.ok).toBe(false);
-      if (result.ok) return;
-      const damaged = [...new Set(hits.map(([pick]) => rowOf[pick % rows.length]!))].sort((a, b) => a - b);
-      expect([...new Set(result.error.issues!.map((i) => i.row))]).toEqual(damaged);
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(generatedLog, layout, fc.array(fc.tuple(fc.nat(), damage), { minLength: 1, maxLength: 8 }), (rows, l, hits) => {
+        const broken = rows.map((r) => ({ ...r }));
+        for (const [pick, bad] of hits) broken[pick % rows.length]!.tempText = bad;
+        const { text, rowOf } = written(broken, l);
+        const { result } = timedParse(text);
+        expectAllOrNothing(text, result);
+        expect(result.ok).toBe(false);
+        if (result.ok) return;
+        const damaged = [...new Set(hits.map(([pick]) => rowOf[pick % rows.length]!))].sort((a, b) => a - b);
+        expect([...new Set(result.error.issues!.map((i) => i.row))]).toEqual(damaged);
+      }),
+      { numRuns: 200 },
+    );
   });
 });
 

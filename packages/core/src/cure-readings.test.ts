@@ -68,7 +68,12 @@ describe('parseCureReadingsCsv: cells the rest of the product would read differe
   });
 
   it('refuses hexadecimal, binary and other spellings that are not plain decimals', () => {
-    expect(rowsOf('2025-03-01T18:00:00Z,0x10\n2025-03-01T19:00:00Z,0b101\n2025-03-01T20:00:00Z,1_0\n2025-03-01T21:00:00Z,-Infinity\n')).toEqual(['1:tempC', '2:tempC', '3:tempC', '4:tempC']);
+    expect(rowsOf('2025-03-01T18:00:00Z,0x10\n2025-03-01T19:00:00Z,0b101\n2025-03-01T20:00:00Z,1_0\n2025-03-01T21:00:00Z,-Infinity\n')).toEqual([
+      '1:tempC',
+      '2:tempC',
+      '3:tempC',
+      '4:tempC',
+    ]);
     const plain = parseCureReadingsCsv('2025-03-01T18:00:00Z,+.5\n2025-03-01T19:00:00Z,2.\n2025-03-01T20:00:00Z,2.5E1\n');
     expect(plain.ok && plain.value.map((r) => r.tempC)).toEqual([0.5, 2, 25]);
   });
@@ -76,7 +81,15 @@ describe('parseCureReadingsCsv: cells the rest of the product would read differe
   it('refuses ISO forms the database refuses: week and ordinal dates, basic format, expanded years, year 0, offsets past ±14:00', () => {
     // Each of these made PostgreSQL 15 refuse the timestamptz (checked against its date/time input
     // on this project's server), so the import ended in a 500 instead of naming the row.
-    const foreign = ['2025-W09-6T18:00Z', '2025-060T18:00Z', '20250301T180000Z', '+002025-03-01T18:00Z', '0000-03-01T18:00:00Z', '2025-03-01T18:00:00+16:00', '2025-03-01T18Z'];
+    const foreign = [
+      '2025-W09-6T18:00Z',
+      '2025-060T18:00Z',
+      '20250301T180000Z',
+      '+002025-03-01T18:00Z',
+      '0000-03-01T18:00:00Z',
+      '2025-03-01T18:00:00+16:00',
+      '2025-03-01T18Z',
+    ];
     const csv = foreign.map((t) => `${t},20`).join('\n');
     expect(rowsOf(csv)).toEqual(foreign.map((_, i) => `${i + 1}:time`));
     const accepted = ['2025-03-01T18:00Z', '2025-03-01t18:00:00.5z', '2025-03-01T20:00:00+0130', '2025-03-01T22:00:00-12', '2025-03-03T24:00:00+14:00'];
@@ -86,8 +99,11 @@ describe('parseCureReadingsCsv: cells the rest of the product would read differe
 
   it('refuses dates that do not exist', () => {
     // Gregorian calendar: 2025 is not a leap year, 2024 is, 1900 is not, 2000 is.
-    expect(rowsOf('1900-02-29T00:00Z,20\n2000-02-29T00:00Z,20\n2024-02-29T18:00Z,20\n2025-02-29T18:00Z,20\n2025-04-31T18:00Z,20\n2025-05-01T23:60Z,20\n2025-05-01T24:00:01Z,20\n'))
-      .toEqual(['1:time', '4:time', '5:time', '6:time', '7:time']);
+    expect(
+      rowsOf(
+        '1900-02-29T00:00Z,20\n2000-02-29T00:00Z,20\n2024-02-29T18:00Z,20\n2025-02-29T18:00Z,20\n2025-04-31T18:00Z,20\n2025-05-01T23:60Z,20\n2025-05-01T24:00:01Z,20\n',
+      ),
+    ).toEqual(['1:time', '4:time', '5:time', '6:time', '7:time']);
   });
 
   it('quotes at most 40 characters of a cell, so a 2 MB cell makes a short message, and reads a long run of digits at once', () => {

@@ -12,7 +12,10 @@ export interface CureReading {
 export const maxReadingIssues = 1000;
 
 function unquoted(cell: string): string {
-  return cell.trim().replace(/^"(.*)"$/, '$1').trim();
+  return cell
+    .trim()
+    .replace(/^"(.*)"$/, '$1')
+    .trim();
 }
 
 /** The cells of a row, or how many there are when that is not two (without splitting a huge row). */
@@ -40,7 +43,10 @@ function headerUnit(line: string): Result<LogTemperatureUnit> {
   const second = unquoted(line.slice(line.indexOf(',') + 1));
   if (line.indexOf(',') < 0 || celsiusColumn.test(second)) return ok('C');
   if (fahrenheitColumn.test(second)) return ok('F');
-  return fail('readings_unit_unknown', `the temperature column is headed ${quotedCell(second)}; head it tempC (degrees Celsius) or tempF (degrees Fahrenheit) so Gelpoint knows the unit`);
+  return fail(
+    'readings_unit_unknown',
+    `the temperature column is headed ${quotedCell(second)}; head it tempC (degrees Celsius) or tempF (degrees Fahrenheit) so Gelpoint knows the unit`,
+  );
 }
 
 export interface CureLog {
@@ -122,7 +128,10 @@ export function readCureLog(text: string): Result<CureLog> {
     readings.push({ at: timeText, tempC: temp.value });
   }
   if (issueCount > 0) {
-    const shown = issues.slice(0, 5).map((issue) => issue.message).join('; ');
+    const shown = issues
+      .slice(0, 5)
+      .map((issue) => issue.message)
+      .join('; ');
     const more = issueCount > 5 ? `; and ${issueCount - 5} more` : '';
     return fail('readings_invalid', `The temperature log was not imported: ${shown}${more}. Fix these rows and import it again.`, issues);
   }

@@ -144,7 +144,15 @@ describe('equivalent age (maturity method of ASTM C1074: te = Σ exp(−Q(1/Ta �
     expect(age.value.assumedHours).toBe(8);
     expect(age.value.cautions.map((c) => c.code)).toEqual(['cure_log_gap']);
     // A longer carry (a shop setting) covers the same gap with the interval average.
-    const carried = equivalentAge({ readings: [{ at: '2025-01-10T00:00:00Z', tempC: 20 }, { at: '2025-01-10T12:00:00Z', tempC: 24 }], refTempC: 20, activationEnergyKJPerMol: q5000, readingCarryH: 6 });
+    const carried = equivalentAge({
+      readings: [
+        { at: '2025-01-10T00:00:00Z', tempC: 20 },
+        { at: '2025-01-10T12:00:00Z', tempC: 24 },
+      ],
+      refTempC: 20,
+      activationEnergyKJPerMol: q5000,
+      readingCarryH: 6,
+    });
     expect(carried.ok && carried.value.gaps).toEqual([]);
     expect(carried.ok && carried.value.equivalentHoursAtRef).toBeCloseTo(12 * rate(22), 10);
   });
@@ -153,7 +161,14 @@ describe('equivalent age (maturity method of ASTM C1074: te = Σ exp(−Q(1/Ta �
     // Logged 15 °C for 12 h, then the logger stopped; the plan assumed 21 °C. After 2 h of carry the
     // rest of the 90 h is counted at 15 °C, not 21 °C.
     const readings = sampled(() => 15, 12, 1);
-    const age = equivalentAge({ readings, refTempC: 21, activationEnergyKJPerMol: 52, minTempC: 18, window: { from: iso(t0), to: iso(t0 + 90 * hour) }, assumedTempC: 21 });
+    const age = equivalentAge({
+      readings,
+      refTempC: 21,
+      activationEnergyKJPerMol: 52,
+      minTempC: 18,
+      window: { from: iso(t0), to: iso(t0 + 90 * hour) },
+      assumedTempC: 21,
+    });
     expect(age.ok).toBe(true);
     if (!age.ok) return;
     expect(age.value.spans.at(-1)).toMatchObject({ source: 'gap', tempC: 15 });
@@ -180,7 +195,13 @@ describe('equivalent age (maturity method of ASTM C1074: te = Σ exp(−Q(1/Ta �
   });
 
   it('uses the assumed temperature where no reading exists at all, and says so', () => {
-    const age = equivalentAge({ readings: [], refTempC: 20, activationEnergyKJPerMol: q5000, window: { from: '2025-01-10T00:00:00Z', to: '2025-01-10T16:00:00Z' }, assumedTempC: 20 });
+    const age = equivalentAge({
+      readings: [],
+      refTempC: 20,
+      activationEnergyKJPerMol: q5000,
+      window: { from: '2025-01-10T00:00:00Z', to: '2025-01-10T16:00:00Z' },
+      assumedTempC: 20,
+    });
     expect(age.ok).toBe(true);
     if (!age.ok) return;
     expect(age.value.equivalentHoursAtRef).toBeCloseTo(16, 10);
@@ -243,7 +264,10 @@ describe('equivalent age (maturity method of ASTM C1074: te = Σ exp(−Q(1/Ta �
   it('refuses a reading at or below absolute zero instead of counting it as an endless cure', () => {
     // Zero kelvin is −273.15 °C exactly (SI Brochure, 9th ed., 2019).
     const age = equivalentAge({
-      readings: [{ at: '2025-03-01T18:00:00Z', tempC: -300 }, { at: '2025-03-01T19:00:00Z', tempC: 20 }],
+      readings: [
+        { at: '2025-03-01T18:00:00Z', tempC: -300 },
+        { at: '2025-03-01T19:00:00Z', tempC: 20 },
+      ],
       refTempC: 20,
       activationEnergyKJPerMol: q5000,
     });

@@ -82,12 +82,17 @@ export function readTimedReadings(readings: CureReading[]): Result<TimedReading[
     const reading = readings[i]!;
     const ms = parseIsoInstant(reading.at);
     if (!ms.ok) return fail(ms.error.code, `Reading ${i + 1}: ${ms.error.message}`);
-    if (!Number.isFinite(reading.tempC)) return fail('temperature_invalid', `Reading ${i + 1}: the temperature must be a number in °C, got ${String(reading.tempC)}.`);
+    if (!Number.isFinite(reading.tempC))
+      return fail('temperature_invalid', `Reading ${i + 1}: the temperature must be a number in °C, got ${String(reading.tempC)}.`);
     // At or below 0 K (−273.15 °C, SI Brochure 2019) the Arrhenius factor is undefined or infinite.
-    if (reading.tempC <= -273.15) return fail('temperature_invalid', `Reading ${i + 1}: ${reading.tempC} °C is at or below absolute zero (−273.15 °C); check that the log is in °C.`);
+    if (reading.tempC <= -273.15)
+      return fail('temperature_invalid', `Reading ${i + 1}: ${reading.tempC} °C is at or below absolute zero (−273.15 °C); check that the log is in °C.`);
     const before = timed[i - 1];
     if (before && ms.value <= before.ms) {
-      return fail('readings_out_of_order', `Reading ${i + 1} (${reading.at}) is not later than the reading before it; give readings in time order, each time once.`);
+      return fail(
+        'readings_out_of_order',
+        `Reading ${i + 1} (${reading.at}) is not later than the reading before it; give readings in time order, each time once.`,
+      );
     }
     timed.push({ ms: ms.value, tempC: reading.tempC });
   }
@@ -123,7 +128,8 @@ export function equivalentAge(input: EquivalentAgeInput): Result<EquivalentAge> 
   if (!zone.ok) return zone;
   const carry = checkReadingCarry(input.readingCarryH);
   if (!carry.ok) return carry;
-  if (!Number.isFinite(input.refTempC)) return fail('temperature_invalid', `The reference temperature must be a number in °C, got ${String(input.refTempC)}; it is on the data sheet.`);
+  if (!Number.isFinite(input.refTempC))
+    return fail('temperature_invalid', `The reference temperature must be a number in °C, got ${String(input.refTempC)}; it is on the data sheet.`);
   if (!Number.isFinite(input.activationEnergyKJPerMol) || input.activationEnergyKJPerMol <= 0) {
     return fail('activation_energy_not_positive', `The activation energy must be above zero (in kJ/mol), got ${String(input.activationEnergyKJPerMol)}.`);
   }
@@ -143,14 +149,18 @@ export function equivalentAge(input: EquivalentAgeInput): Result<EquivalentAge> 
     fromMs = from.value;
     toMs = to.value;
   } else {
-    if (readings.length === 0) return fail('readings_empty', 'There are no temperature readings to add up; log at least one, or give a window and an assumed temperature.');
+    if (readings.length === 0)
+      return fail('readings_empty', 'There are no temperature readings to add up; log at least one, or give a window and an assumed temperature.');
     fromMs = readings[0]!.ms;
     toMs = readings[readings.length - 1]!.ms;
   }
 
   const pieces = historyPieces(readings, fromMs, toMs, carry.value, shop);
   if (pieces.some((p) => !Number.isFinite(p.tempC))) {
-    return fail('assumed_temp_missing', 'Part of the cure window has no temperature readings; give the temperature to assume there (the planned shop temperature).');
+    return fail(
+      'assumed_temp_missing',
+      'Part of the cure window has no temperature readings; give the temperature to assume there (the planned shop temperature).',
+    );
   }
 
   const minTempC = input.minTempC ?? -Infinity;
@@ -204,17 +214,23 @@ export function equivalentAge(input: EquivalentAgeInput): Result<EquivalentAge> 
       caution(
         'cure_temp_assumed',
         'info',
-        `No temperature has been logged for this cure, so ${shop?.words ?? 'the plan\'s shop temperature'} was assumed; log temperatures to make the cure rest on what happened.`,
+        `No temperature has been logged for this cure, so ${shop?.words ?? "the plan's shop temperature"} was assumed; log temperatures to make the cure rest on what happened.`,
         'plan',
       ),
     );
   }
   return ok({
-    equivalentHoursAtRef: sum(() => true, (s) => s.equivalentHoursAtRef),
+    equivalentHoursAtRef: sum(
+      () => true,
+      (s) => s.equivalentHoursAtRef,
+    ),
     elapsedHours: hours(fromMs, toMs),
     belowMinimumHours,
     assumedHours,
-    loggedEquivalentHours: sum((s) => !uncovered(s), (s) => s.equivalentHoursAtRef),
+    loggedEquivalentHours: sum(
+      (s) => !uncovered(s),
+      (s) => s.equivalentHoursAtRef,
+    ),
     assumedEquivalentHours: sum(uncovered, (s) => s.equivalentHoursAtRef),
     readingCarryH: carry.value,
     gaps,

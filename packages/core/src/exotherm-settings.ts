@@ -18,7 +18,8 @@ export const exothermDefaults = {
   acceptedPeakC: defaultAcceptedPeakC,
 } as const;
 
-export type ExothermSettingField = 'reactionHeatJPerG' | 'thinFilmGelMin' | 'heatCapacityJPerGK' | 'conductivityWPerMK' | 'acceptedPeakC' | 'activationEnergyKJPerMol';
+export type ExothermSettingField =
+  'reactionHeatJPerG' | 'thinFilmGelMin' | 'heatCapacityJPerGK' | 'conductivityWPerMK' | 'acceptedPeakC' | 'activationEnergyKJPerMol';
 
 export interface ExothermSetting {
   value: number;
@@ -65,10 +66,25 @@ export function exothermSettingsOf(product: ExothermProduct): ExothermSettings {
   const settings: Record<ExothermSettingField, ExothermSetting> = {
     reactionHeatJPerG: setting(product.reactionHeatJPerG, dgebaAmineDefaults.reactionHeatJPerG, 'the shelf', 'DGEBA/amine by DSC (Polímeros, SciELO)'),
     thinFilmGelMin: setting(product.thinFilmGelMin, product.gelTimeH * 60, 'the shelf', "the data sheet's gel time"),
-    heatCapacityJPerGK: setting(product.heatCapacityJPerGK, dgebaAmineDefaults.heatCapacityJPerGK, 'the shelf', 'typical of published cure models (from memory)'),
-    conductivityWPerMK: setting(product.conductivityWPerMK, dgebaAmineDefaults.conductivityWPerMK, 'the shelf', 'typical of unfilled polymers (Windberger et al. 2021)'),
+    heatCapacityJPerGK: setting(
+      product.heatCapacityJPerGK,
+      dgebaAmineDefaults.heatCapacityJPerGK,
+      'the shelf',
+      'typical of published cure models (from memory)',
+    ),
+    conductivityWPerMK: setting(
+      product.conductivityWPerMK,
+      dgebaAmineDefaults.conductivityWPerMK,
+      'the shelf',
+      'typical of unfilled polymers (Windberger et al. 2021)',
+    ),
     acceptedPeakC: setting(product.acceptedPeakC, defaultAcceptedPeakC, 'the shelf', 'a default (from memory): enter the shop’s own'),
-    activationEnergyKJPerMol: setting(product.activationEnergyKJPerMol, activationEnergyOf(product), 'the data sheet', 'the rate doubling per 10 °C (common practice)'),
+    activationEnergyKJPerMol: setting(
+      product.activationEnergyKJPerMol,
+      activationEnergyOf(product),
+      'the data sheet',
+      'the rate doubling per 10 °C (common practice)',
+    ),
   };
   return {
     resin: {

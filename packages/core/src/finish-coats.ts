@@ -25,7 +25,10 @@ export function finishCoatSchedule(input: FinishCoatInput): Result<FinishCoatDue
     return fail('coats_not_whole', `The number of finish coats must be a whole number of at least 1, got ${String(input.coats)}.`);
   }
   if (!Number.isFinite(input.hoursBetweenCoats) || input.hoursBetweenCoats <= 0) {
-    return fail('interval_not_positive', `The hours between finish coats must be above zero, got ${String(input.hoursBetweenCoats)}; take them from the finish's data sheet.`);
+    return fail(
+      'interval_not_positive',
+      `The hours between finish coats must be above zero, got ${String(input.hoursBetweenCoats)}; take them from the finish's data sheet.`,
+    );
   }
   return ok(
     Array.from({ length: input.coats }, (_, i) => ({

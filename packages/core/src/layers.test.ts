@@ -74,9 +74,23 @@ describe('splitIntoLayers', () => {
     expect(above.ok || above.error.code).toBe('fill_level_above_curve');
     const below = splitIntoLayers({ curve, fillLevelMm: 0, maxLayerMm: 20 });
     expect(below.ok || below.error.code).toBe('fill_level_below_floor');
-    const flat = splitIntoLayers({ curve: [{ levelMm: 0, volumeMm3: 0 }, { levelMm: 0, volumeMm3: 10 }], fillLevelMm: 0, maxLayerMm: 20 });
+    const flat = splitIntoLayers({
+      curve: [
+        { levelMm: 0, volumeMm3: 0 },
+        { levelMm: 0, volumeMm3: 10 },
+      ],
+      fillLevelMm: 0,
+      maxLayerMm: 20,
+    });
     expect(flat.ok || flat.error.code).toBe('curve_not_rising');
-    const shrinking = splitIntoLayers({ curve: [{ levelMm: 0, volumeMm3: 10 }, { levelMm: 5, volumeMm3: 5 }], fillLevelMm: 5, maxLayerMm: 20 });
+    const shrinking = splitIntoLayers({
+      curve: [
+        { levelMm: 0, volumeMm3: 10 },
+        { levelMm: 5, volumeMm3: 5 },
+      ],
+      fillLevelMm: 5,
+      maxLayerMm: 20,
+    });
     expect(shrinking.ok || shrinking.error.code).toBe('curve_volume_falls');
   });
 });

@@ -29,19 +29,31 @@ export function splitIntoLayers(input: LayerSplitInput): Result<LayerSlice[]> {
   const curve = checkVolumeCurve(input.curve);
   if (!curve.ok) return curve;
   if (!Number.isFinite(input.maxLayerMm) || input.maxLayerMm <= 0) {
-    return fail('max_layer_not_positive', `The product's maximum layer thickness must be above zero (in mm), got ${String(input.maxLayerMm)}; take it from the data sheet.`);
+    return fail(
+      'max_layer_not_positive',
+      `The product's maximum layer thickness must be above zero (in mm), got ${String(input.maxLayerMm)}; take it from the data sheet.`,
+    );
   }
   const startMm = curveStartLevelMm(input.curve);
   const topMm = curveTopLevelMm(input.curve);
   const fillLevelMm = input.fillLevelMm;
   if (!Number.isFinite(fillLevelMm) || fillLevelMm <= startMm) {
-    return fail('fill_level_below_floor', `The fill level (${String(fillLevelMm)} mm) must be above the cavity floor (${startMm} mm); choose a level inside the cavity.`);
+    return fail(
+      'fill_level_below_floor',
+      `The fill level (${String(fillLevelMm)} mm) must be above the cavity floor (${startMm} mm); choose a level inside the cavity.`,
+    );
   }
   if (fillLevelMm > topMm + levelToleranceMm) {
-    return fail('fill_level_above_curve', `The fill level (${fillLevelMm} mm) is above the top of the cavity's volume curve (${topMm} mm); lower it, or extend the curve to that level.`);
+    return fail(
+      'fill_level_above_curve',
+      `The fill level (${fillLevelMm} mm) is above the top of the cavity's volume curve (${topMm} mm); lower it, or extend the curve to that level.`,
+    );
   }
   if (input.maxDepthMm !== undefined && (!Number.isFinite(input.maxDepthMm) || input.maxDepthMm <= 0)) {
-    return fail('max_depth_not_positive', `The deepest resin depth must be above zero (in mm), got ${String(input.maxDepthMm)}; take it from the cavity report's depth map.`);
+    return fail(
+      'max_depth_not_positive',
+      `The deepest resin depth must be above zero (in mm), got ${String(input.maxDepthMm)}; take it from the cavity report's depth map.`,
+    );
   }
   const heightMm = fillLevelMm - startMm;
   const count = Math.max(1, Math.ceil(heightMm / input.maxLayerMm - levelToleranceMm));

@@ -32,7 +32,7 @@ describe('mixBatch worked examples (arithmetic written out)', () => {
     expect(byVolume.partA.grams / byVolume.partB.grams).toBeCloseTo(2.392, 3);
     const byWeight = mixed({ target: { volumeMl: 300 }, basis: 'weight' });
     expect(byWeight.partA.grams / byWeight.partB.grams).toBeCloseTo(2, 12);
-    expect(byWeight.partA.ml / byWeight.partB.ml).toBeCloseTo((2 / 1.16) / (1 / 0.97), 12);
+    expect(byWeight.partA.ml / byWeight.partB.ml).toBeCloseTo(2 / 1.16 / (1 / 0.97), 12);
     expect(byWeight.partA.grams).not.toBeCloseTo(byVolume.partA.grams, 0);
   });
 
@@ -113,7 +113,14 @@ describe('mixBatch properties', () => {
   it('by weight, gA/gB equals the ratio and the target is met', () => {
     fc.assert(
       fc.property(ratioPart, ratioPart, density, density, amount, fc.boolean(), pigment, (a, b, rhoA, rhoB, size, byVolumeTarget, pct) => {
-        const result = mixBatch({ target: byVolumeTarget ? { volumeMl: size } : { massG: size }, ratio: { a, b }, basis: 'weight', densityAGPerMl: rhoA, densityBGPerMl: rhoB, pigmentPct: pct });
+        const result = mixBatch({
+          target: byVolumeTarget ? { volumeMl: size } : { massG: size },
+          ratio: { a, b },
+          basis: 'weight',
+          densityAGPerMl: rhoA,
+          densityBGPerMl: rhoB,
+          pigmentPct: pct,
+        });
         if (!result.ok) return false;
         const m = result.value;
         // A volume target holds the pigment too (here as dense as the resin, no density being given).
@@ -131,7 +138,13 @@ describe('mixBatch properties', () => {
   it('by volume, mLA/mLB equals the ratio and masses follow the densities', () => {
     fc.assert(
       fc.property(ratioPart, ratioPart, density, density, amount, fc.boolean(), (a, b, rhoA, rhoB, size, byVolumeTarget) => {
-        const result = mixBatch({ target: byVolumeTarget ? { volumeMl: size } : { massG: size }, ratio: { a, b }, basis: 'volume', densityAGPerMl: rhoA, densityBGPerMl: rhoB });
+        const result = mixBatch({
+          target: byVolumeTarget ? { volumeMl: size } : { massG: size },
+          ratio: { a, b },
+          basis: 'volume',
+          densityAGPerMl: rhoA,
+          densityBGPerMl: rhoB,
+        });
         if (!result.ok) return false;
         const m = result.value;
         const reached = byVolumeTarget ? m.partA.ml + m.partB.ml : m.partA.grams + m.partB.grams;
@@ -144,18 +157,34 @@ describe('mixBatch properties', () => {
     );
   });
 
-  it('counts the pigment\'s own volume in a volume target: 6 % of a liquid colourant takes about 6 % of the cup', () => {
+  it("counts the pigment's own volume in a volume target: 6 % of a liquid colourant takes about 6 % of the cup", () => {
     // Volumes add for these mixtures (the assumption every data sheet's mixed-volume figure makes):
     // V = mA/1.16 + mB/0.97 + 0.06·(mA + mB)/1.0 for 1000 mL of a 2:1-by-volume resin with a 1.0 g/mL colourant.
-    const mix = mixBatch({ target: { volumeMl: 1000 }, ratio: '2:1', basis: 'volume', densityAGPerMl: 1.16, densityBGPerMl: 0.97, pigmentPct: 6, pigmentDensityGPerMl: 1.0 });
+    const mix = mixBatch({
+      target: { volumeMl: 1000 },
+      ratio: '2:1',
+      basis: 'volume',
+      densityAGPerMl: 1.16,
+      densityBGPerMl: 0.97,
+      pigmentPct: 6,
+      pigmentDensityGPerMl: 1.0,
+    });
     expect(mix.ok).toBe(true);
     if (!mix.ok) return;
     const m = mix.value;
     expect(m.partA.ml + m.partB.ml + m.pigment.grams / 1.0).toBeCloseTo(1000, 9);
     expect(m.pigmentMl).toBeCloseTo(m.pigment.grams, 12);
     // 6 % by mass of resin at 1.0967 g/mL in a 1.0 g/mL colourant: 6.2 % of the cup's volume.
-    expect(m.pigmentMl / 1000).toBeCloseTo(0.06 * 1.096667 / (1 + 0.06 * 1.096667), 5);
-    const bad = mixBatch({ target: { volumeMl: 1000 }, ratio: '2:1', basis: 'volume', densityAGPerMl: 1.16, densityBGPerMl: 0.97, pigmentPct: 6, pigmentDensityGPerMl: 0 });
+    expect(m.pigmentMl / 1000).toBeCloseTo((0.06 * 1.096667) / (1 + 0.06 * 1.096667), 5);
+    const bad = mixBatch({
+      target: { volumeMl: 1000 },
+      ratio: '2:1',
+      basis: 'volume',
+      densityAGPerMl: 1.16,
+      densityBGPerMl: 0.97,
+      pigmentPct: 6,
+      pigmentDensityGPerMl: 0,
+    });
     expect(bad.ok || bad.error.code).toBe('density_not_positive');
   });
 });

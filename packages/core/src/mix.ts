@@ -54,7 +54,10 @@ function checkDensity(value: number, part: 'A' | 'B'): Result<number> {
 
 export function checkPigmentPct(pigmentPct: number, pigmentMaxPct?: number): Result<number> {
   if (!Number.isFinite(pigmentPct) || pigmentPct < 0 || pigmentPct > 100) {
-    return fail('pigment_pct_out_of_range', `Pigment must be between 0 and 100 % of part A + part B by mass, got ${String(pigmentPct)}; enter a percentage such as 2.`);
+    return fail(
+      'pigment_pct_out_of_range',
+      `Pigment must be between 0 and 100 % of part A + part B by mass, got ${String(pigmentPct)}; enter a percentage such as 2.`,
+    );
   }
   if (pigmentMaxPct !== undefined && pigmentPct > pigmentMaxPct) {
     return fail(
@@ -84,7 +87,10 @@ export function mixBatch(input: MixInput): Result<MixResult> {
   const rhoB = densityB.value;
   const share = pigmentPct.value / 100;
   if (input.pigmentDensityGPerMl !== undefined && !(Number.isFinite(input.pigmentDensityGPerMl) && input.pigmentDensityGPerMl > 0)) {
-    return fail('density_not_positive', `The pigment's density must be above zero (in g/mL), got ${String(input.pigmentDensityGPerMl)}; liquid colourants are near 1, mica powders near 2.8.`);
+    return fail(
+      'density_not_positive',
+      `The pigment's density must be above zero (in g/mL), got ${String(input.pigmentDensityGPerMl)}; liquid colourants are near 1, mica powders near 2.8.`,
+    );
   }
   const rhoAB = mixedDensity({ a, b, basis: input.basis }, rhoA, rhoB);
   const rhoPigment = input.pigmentDensityGPerMl ?? rhoAB;

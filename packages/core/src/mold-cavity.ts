@@ -31,13 +31,19 @@ export function planCavityFromMold(facts: MoldFillFacts, fillLevelMm: number): R
   const curve = checked.value;
   const top = curve[curve.length - 1]!.levelMm;
   if (!(fillLevelMm <= top)) {
-    return fail('fill_above_report', `The fill level ${fillLevelMm} mm is above the top of the mould's report (${top} mm); choose a level inside the mould, or dam it higher and report again.`);
+    return fail(
+      'fill_above_report',
+      `The fill level ${fillLevelMm} mm is above the top of the mould's report (${top} mm); choose a level inside the mould, or dam it higher and report again.`,
+    );
   }
   let floorIndex = 0;
   while (floorIndex + 1 < curve.length && curve[floorIndex + 1]!.volumeMm3 === 0) floorIndex++;
   const floorMm = curve[floorIndex]!.levelMm;
   if (!(fillLevelMm > floorMm)) {
-    return fail('fill_below_floor', `The fill level ${fillLevelMm} mm is at or below the cavity floor (${floorMm} mm): no resin would be poured; raise the level.`);
+    return fail(
+      'fill_below_floor',
+      `The fill level ${fillLevelMm} mm is at or below the cavity floor (${floorMm} mm): no resin would be poured; raise the level.`,
+    );
   }
   const relative: VolumeCurve = [];
   for (const p of curve.slice(floorIndex)) {
@@ -45,5 +51,8 @@ export function planCavityFromMold(facts: MoldFillFacts, fillLevelMm: number): R
     relative.push({ levelMm: p.levelMm - floorMm, volumeMm3: p.volumeMm3 });
   }
   relative.push({ levelMm: fillLevelMm - floorMm, volumeMm3: volumeAtLevel(curve, fillLevelMm) });
-  return ok({ cavity: { curve: relative, wettedAreaMm2: facts.wettedAreaMm2, maxDepthMm: facts.maxDepthMm, ...(facts.depthMap ? { depthMap: facts.depthMap } : {}) }, fillLevelMm: fillLevelMm - floorMm });
+  return ok({
+    cavity: { curve: relative, wettedAreaMm2: facts.wettedAreaMm2, maxDepthMm: facts.maxDepthMm, ...(facts.depthMap ? { depthMap: facts.depthMap } : {}) },
+    fillLevelMm: fillLevelMm - floorMm,
+  });
 }

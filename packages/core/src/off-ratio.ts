@@ -21,7 +21,8 @@ export interface OffRatio {
  */
 export function offRatioCheck(weighed: { partAG: number; partBG: number }, massRatioAToB: number, tolerancePct: number): OffRatio | null {
   const { partAG, partBG } = weighed;
-  if (!(partAG > 0) || !(partBG > 0) || !Number.isFinite(partAG) || !Number.isFinite(partBG) || !(massRatioAToB > 0) || !Number.isFinite(massRatioAToB)) return null;
+  if (!(partAG > 0) || !(partBG > 0) || !Number.isFinite(partAG) || !Number.isFinite(partBG) || !(massRatioAToB > 0) || !Number.isFinite(massRatioAToB))
+    return null;
   const signedPct = offRatioPct(partAG, partBG, massRatioAToB);
   const pct = Math.abs(signedPct);
   // The quotient carries binary rounding (206 g : 100 g at 2:1 comes out 3.0000000000000027 %), so a cup exactly at

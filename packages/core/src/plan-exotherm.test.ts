@@ -91,7 +91,12 @@ describe('the plan’s exotherm forecast', () => {
     const shape = rectangleCavity({ lengthMm: 200, widthMm: 100, depthMm: 50 });
     if (!shape.ok) throw new Error(shape.error.message);
     const plan = buildPourPlan({
-      cavity: { curve: shape.value.curve, wettedAreaMm2: shape.value.wettedAreaMm2, maxDepthMm: 50, depthMap: { originMm: [100, 50], cellMm: [5, 5], nx, ny, depthsMm } },
+      cavity: {
+        curve: shape.value.curve,
+        wettedAreaMm2: shape.value.wettedAreaMm2,
+        maxDepthMm: 50,
+        depthMap: { originMm: [100, 50], cellMm: [5, 5], nx, ny, depthsMm },
+      },
       fillLevelMm: 50,
       deepPour: { product },
       overPourPct: 0,
@@ -119,7 +124,17 @@ describe('the plan’s exotherm forecast', () => {
 
   it('gives every cup its own pot life: a heavy cup less than the data sheet’s, a light one no more', () => {
     // An invented fast casting product (demo numbers): 30 min pot life, 1 h gel, 6 mm layers, at 22 °C.
-    const fast: ResinSystem = { ...product, potLifeMin: 30, gelTimeH: 1, thinFilmGelMin: 60, tackFreeH: 3, recoatWindow: { earliestH: 3, latestH: 8 }, demoldH: 12, maxLayerMm: 6, acceptedPeakC: 60 };
+    const fast: ResinSystem = {
+      ...product,
+      potLifeMin: 30,
+      gelTimeH: 1,
+      thinFilmGelMin: 60,
+      tackFreeH: 3,
+      recoatWindow: { earliestH: 3, latestH: 8 },
+      demoldH: 12,
+      maxLayerMm: 6,
+      acceptedPeakC: 60,
+    };
     const heavy = trayPlan(6, 22, {}, { ...fast, maxBatchG: 500 });
     const light = trayPlan(6, 22, {}, { ...fast, maxBatchG: 60 });
     // At the data sheet's own temperature the Arrhenius move is nil: its pot life stands at 30 min.

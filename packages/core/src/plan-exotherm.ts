@@ -1,4 +1,13 @@
-import { calibrateToDataSheet, cupPotLife, forecastLayer, forecastMould, proposeLayers, type Calibration, type ForecastPoint, type PlannedLayer } from '@gelpoint/thermal';
+import {
+  calibrateToDataSheet,
+  cupPotLife,
+  forecastLayer,
+  forecastMould,
+  proposeLayers,
+  type Calibration,
+  type ForecastPoint,
+  type PlannedLayer,
+} from '@gelpoint/thermal';
 import { exothermSettingsOf, type ExothermSettingField, type ExothermSettings } from './exotherm-settings';
 import type { LayerSlice } from './layers';
 import { fail, ok, type Result } from './result';
@@ -115,13 +124,19 @@ export function calibratedProduct(product: ResinSystem): Result<{ settings: Exot
 }
 
 /** The thickest single layer whose forecast peak stays under the accepted peak at the shop's temperature, never above the data sheet's. */
-export function forecastMaxLayer(product: ResinSystem, shopTempC: number): Result<{ maxLayerMm: number; limitedBy: 'data_sheet' | 'forecast'; limitC: number }> {
+export function forecastMaxLayer(
+  product: ResinSystem,
+  shopTempC: number,
+): Result<{ maxLayerMm: number; limitedBy: 'data_sheet' | 'forecast'; limitC: number }> {
   const cal = calibratedProduct(product);
   if (!cal.ok) return cal;
   const proposal = proposeLayers(cal.value.calibration.resin, cal.value.settings.sheet, { ambient: shopTempC, base: 'wood' });
   if (!proposal.ok) return proposal;
   if (proposal.value.maxLayerMm <= 0) {
-    return fail('no_layer_under_limit', `At ${shopTempC} °C the forecast keeps no layer under ${proposal.value.limitC} °C; pour when the shop is cooler or choose a slower product.`);
+    return fail(
+      'no_layer_under_limit',
+      `At ${shopTempC} °C the forecast keeps no layer under ${proposal.value.limitC} °C; pour when the shop is cooler or choose a slower product.`,
+    );
   }
   return ok({ maxLayerMm: proposal.value.maxLayerMm, limitedBy: proposal.value.limitedBy, limitC: proposal.value.limitC });
 }
@@ -229,7 +244,16 @@ export function forecastPlanLayers(product: ResinSystem, input: LayerInput): Res
   for (const layer of mould.value.layers) {
     const slice = input.slices[layer.index]!;
     if (layer.hottest.i < 0) {
-      out.push({ index: layer.index, thicknessMm: slice.thicknessMm, peakC: input.shopTempC, timeToPeakMin: 0, peakDepthMm: 0, overLimit: false, runaway: false, curve: [] });
+      out.push({
+        index: layer.index,
+        thicknessMm: slice.thicknessMm,
+        peakC: input.shopTempC,
+        timeToPeakMin: 0,
+        peakDepthMm: 0,
+        overLimit: false,
+        runaway: false,
+        curve: [],
+      });
       continue;
     }
     const k = layer.hottest.j * map.nx + layer.hottest.i;
@@ -268,7 +292,12 @@ export function forecastPlanLayers(product: ResinSystem, input: LayerInput): Res
 }
 
 /** The forecast part of a plan: its layers, what it was calibrated to, and what it assumed. */
-export function planForecastOf(product: ResinSystem, shopTempC: number, maxLayer: { maxLayerMm: number; limitedBy: 'data_sheet' | 'forecast' }, forecast: PlanLayersForecast): PlanForecast {
+export function planForecastOf(
+  product: ResinSystem,
+  shopTempC: number,
+  maxLayer: { maxLayerMm: number; limitedBy: 'data_sheet' | 'forecast' },
+  forecast: PlanLayersForecast,
+): PlanForecast {
   const cal = calibratedProduct(product);
   if (!cal.ok) return unavailable(cal.error.code, cal.error.message);
   const { settings, calibration } = cal.value;

@@ -41,7 +41,16 @@ describe('the cure clock of a pour', () => {
     expect(w1.map((w) => w.kind)).toEqual(['next_layer_window_opens', 'next_layer_window_closes']);
     // At the reference temperature the Arrhenius factor is 1: the data sheet's hours apply as they are.
     expect(w1[0]!.dueAt.getTime()).toBeCloseTo(pouredAt.getTime() + demoDeepPour.recoatWindow.earliestH * hour, -2);
-    const afterLayer2 = cureState(steps, [{ step: 'layer:1', mixedAt: pouredAt }, { step: 'layer:2', mixedAt: now }], [], demoDeepPour.referenceTempC, now);
+    const afterLayer2 = cureState(
+      steps,
+      [
+        { step: 'layer:1', mixedAt: pouredAt },
+        { step: 'layer:2', mixedAt: now },
+      ],
+      [],
+      demoDeepPour.referenceTempC,
+      now,
+    );
     expect(afterLayer2.isLastStep).toBe(true);
     expect(wantedReminders(afterLayer2, 'Tray', now, null).map((w) => w.kind)).toEqual(['demold_check', 'ready_to_machine']);
   });

@@ -156,10 +156,17 @@ export function wantedReminders(
     if (schedule.ok) {
       for (const c of schedule.value) {
         const dueAt = new Date(c.dueAt);
-        out.push({ kind: 'finish_coat_due', step: `finish:${c.coat}`, dueAt, eventAt: dueAt, leadMin: 0, assumed: false, title: `Finish coat ${c.coat} of ${finish.coats} due: ${pieceName}` });
+        out.push({
+          kind: 'finish_coat_due',
+          step: `finish:${c.coat}`,
+          dueAt,
+          eventAt: dueAt,
+          leadMin: 0,
+          assumed: false,
+          title: `Finish coat ${c.coat} of ${finish.coats} due: ${pieceName}`,
+        });
       }
     }
   }
   return out;
 }
-

@@ -14,7 +14,12 @@ export const minScaleStepsForPigment = 10;
 /** Everything a finished plan should warn about, worked out from the plan's own numbers. */
 export function pourPlanCautions(input: PourPlanInput, plan: PourPlan, deep: ResinSystem, seal: ResinSystem | null): Result<Caution[]> {
   const cautions: Caution[] = [];
-  const products: [ResinSystem, number][] = seal ? [[deep, 0], [seal, 1]] : [[deep, 0]];
+  const products: [ResinSystem, number][] = seal
+    ? [
+        [deep, 0],
+        [seal, 1],
+      ]
+    : [[deep, 0]];
   for (const [product, index] of products) {
     if (input.shopTempC < product.minWorkTempC) {
       cautions.push(

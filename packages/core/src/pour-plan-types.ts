@@ -90,7 +90,12 @@ export interface PourPlan {
     cupWaste: { label: string; perBatch: CupWaste; batches: number; resinG: number };
   };
   /** The steps everything shown is rounded to. */
-  resolution: { grams: ScaleResolutionG; ml: number; cost: number; /** The shop's tolerance the cups' ratio errors were judged against. */ offRatioTolerancePct: number };
+  resolution: {
+    grams: ScaleResolutionG;
+    ml: number;
+    cost: number;
+    /** The shop's tolerance the cups' ratio errors were judged against. */ offRatioTolerancePct: number;
+  };
   fill: { fillLevelMm: number; fillVolumeMl: number; pourVolumeMl: number; layerCount: number; layerThicknessMm: number; deepestResinMm: number };
   sealCoat: SealCoatPlan | null;
   layers: LayerPlan[];
@@ -103,4 +108,3 @@ export interface PourPlan {
   /** appliesTo.kind 'product': index 0 is the deep-pour product, 1 the seal-coat product. */
   cautions: Caution[];
 }
-

@@ -54,7 +54,12 @@ function exactBatches(
   // Rounding a cup on ratio can add up to about (2 + larger/smaller) scale steps; the cup must stay under the limit as shown.
   const ratio = massRatioAToB(product.mixRatio, product.densityAGPerMl, product.densityBGPerMl);
   const roundingG = scaleResolutionG * (2 + Math.max(ratio, 1 / ratio)) * (1 + pigment.pct / 100);
-  const count = batchCount({ deliveredResinG, cupWasteResinG: wasteG, pigmentPct: pigment.pct, maxBatchG: Math.max(product.maxBatchG - roundingG, product.maxBatchG / 2) });
+  const count = batchCount({
+    deliveredResinG,
+    cupWasteResinG: wasteG,
+    pigmentPct: pigment.pct,
+    maxBatchG: Math.max(product.maxBatchG - roundingG, product.maxBatchG / 2),
+  });
   if (!count.ok) return fail(count.error.code, `${product.name}: ${count.error.message}`);
   const mix = mixBatch({
     target: { massG: deliveredResinG / count.value + wasteG },
@@ -161,7 +166,12 @@ function layersUnderForecast(input: PourPlanInput, deep: ResinSystem): Result<{ 
   let slices = max.value.maxLayerMm < deep.maxLayerMm ? split(max.value.maxLayerMm) : sheetSplit;
   if (!slices.ok) return slices;
   for (let extra = 0; ; extra++) {
-    const layers = forecastPlanLayers(deep, { slices: slices.value, fillLevelMm: input.fillLevelMm, shopTempC: input.shopTempC, depthMap: input.cavity.depthMap });
+    const layers = forecastPlanLayers(deep, {
+      slices: slices.value,
+      fillLevelMm: input.fillLevelMm,
+      shopTempC: input.shopTempC,
+      depthMap: input.cavity.depthMap,
+    });
     if (!layers.ok) return ok({ slices, forecast: unavailable(layers.error.code, layers.error.message) });
     if (!layers.value.layers.some((l) => l.overLimit) || extra >= extraLayersTried) {
       return ok({ slices, forecast: planForecastOf(deep, input.shopTempC, max.value, layers.value) });
@@ -188,7 +198,10 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
   const pigmentPct = checkPigmentPct(pigmentChoice?.pct ?? 0);
   if (!pigmentPct.ok) return pigmentPct;
   if (!Number.isFinite(input.overPourPct) || input.overPourPct < 0 || input.overPourPct > 100) {
-    return fail('over_pour_out_of_range', `The over-pour margin must be between 0 and 100 % of the fill, got ${String(input.overPourPct)}; a few percent is usual.`);
+    return fail(
+      'over_pour_out_of_range',
+      `The over-pour margin must be between 0 and 100 % of the fill, got ${String(input.overPourPct)}; a few percent is usual.`,
+    );
   }
   const wasteAmount = 'massG' in input.cupWaste ? input.cupWaste.massG : input.cupWaste.volumeMl;
   if (!Number.isFinite(wasteAmount) || wasteAmount < 0) {
@@ -226,7 +239,14 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
   });
   const layerGroups: ExactBatch[][] = [];
   for (let layer = 0; layer < slices.value.length; layer++) {
-    const batches = exactBatches(deep, layerVolumes[layer]!.pourVolumeMl, input.cupWaste, { pct: pigmentPct.value, densityGPerMl: pigmentChoice?.pigment.densityGPerMl }, input.scaleResolutionG, () => ({ kind: 'layer', layer }));
+    const batches = exactBatches(
+      deep,
+      layerVolumes[layer]!.pourVolumeMl,
+      input.cupWaste,
+      { pct: pigmentPct.value, densityGPerMl: pigmentChoice?.pigment.densityGPerMl },
+      input.scaleResolutionG,
+      () => ({ kind: 'layer', layer }),
+    );
     if (!batches.ok) return batches;
     layerGroups.push(batches.value);
   }
@@ -244,7 +264,10 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
   const sealCostTree = groupedTree(sealCostAmounts);
   const deepCostTree = groupedTree(deepCostAmounts);
   const woodExact = wood?.ok ? wood.value.cost : 0;
-  const pieceCost = roundTree({ exact: sealCostTree.exact + deepCostTree.exact + woodExact, children: [sealCostTree, deepCostTree, { exact: woodExact }] }, costStep);
+  const pieceCost = roundTree(
+    { exact: sealCostTree.exact + deepCostTree.exact + woodExact, children: [sealCostTree, deepCostTree, { exact: woodExact }] },
+    costStep,
+  );
   const sealCosts = groupCosts(readGroupedTree(pieceCost.children[0]!, costStep));
   const deepCosts = groupCosts(readGroupedTree(pieceCost.children[1]!, costStep));
   const woodShown = stepsToAmount(pieceCost.children[2]!.steps, costStep);
@@ -313,8 +336,11 @@ export function buildPourPlan(input: PourPlanInput): Result<PourPlan> {
   const overPourMl = layerVolumes.reduce((a, l) => a + l.overPourMl, 0);
   const batchTotal = sealGroups.flat().length + layerGroups.flat().length;
   const deepDensity = mixedDensity(deep.mixRatio, deep.densityAGPerMl, deep.densityBGPerMl);
-  const sealDensity = sealProduct?.ok ? mixedDensity(sealProduct.value.mixRatio, sealProduct.value.densityAGPerMl, sealProduct.value.densityBGPerMl) : deepDensity;
-  const wasteResinG = sealGroups.flat().length * cupWasteResinG(input.cupWaste, sealDensity) + layerGroups.flat().length * cupWasteResinG(input.cupWaste, deepDensity);
+  const sealDensity = sealProduct?.ok
+    ? mixedDensity(sealProduct.value.mixRatio, sealProduct.value.densityAGPerMl, sealProduct.value.densityBGPerMl)
+    : deepDensity;
+  const wasteResinG =
+    sealGroups.flat().length * cupWasteResinG(input.cupWaste, sealDensity) + layerGroups.flat().length * cupWasteResinG(input.cupWaste, deepDensity);
 
   const plan: PourPlan = {
     margins: {

@@ -80,7 +80,10 @@ export function areaDepthCavity(input: {
   const checked = checkDimensions({ areaMm2, averageDepthMm, maxDepthMm, ...(input.perimeterMm === undefined ? {} : { perimeterMm: input.perimeterMm }) });
   if (!checked.ok) return checked;
   if (maxDepthMm < averageDepthMm) {
-    return fail('shape_depth_inconsistent', `The deepest point (${maxDepthMm} mm) cannot be shallower than the average depth (${averageDepthMm} mm); check both measurements.`);
+    return fail(
+      'shape_depth_inconsistent',
+      `The deepest point (${maxDepthMm} mm) cannot be shallower than the average depth (${averageDepthMm} mm); check both measurements.`,
+    );
   }
   const fillVolumeMm3 = areaMm2 * averageDepthMm;
   const exponent = maxDepthMm / averageDepthMm;

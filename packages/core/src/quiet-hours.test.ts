@@ -12,7 +12,10 @@ const iso = (text: string) => new Date(text);
 describe("the shop's quiet hours", () => {
   it('covers the night from the quiet hour to the start of the day, west of UTC', () => {
     // 22:30 PST on 3 December is 06:30Z on the 4th; quiet began 21:00 PST (05:00Z) and ends 07:00 PST (15:00Z).
-    expect(quietStretchAt(Date.parse('2026-12-04T06:30:00Z'), pacific)).toEqual({ fromMs: Date.parse('2026-12-04T05:00:00Z'), toMs: Date.parse('2026-12-04T15:00:00Z') });
+    expect(quietStretchAt(Date.parse('2026-12-04T06:30:00Z'), pacific)).toEqual({
+      fromMs: Date.parse('2026-12-04T05:00:00Z'),
+      toMs: Date.parse('2026-12-04T15:00:00Z'),
+    });
     expect(quietStretchAt(Date.parse('2026-12-04T04:59:00Z'), pacific)).toBeNull(); // 20:59 PST
     expect(quietStretchAt(Date.parse('2026-12-04T15:00:00Z'), pacific)).toBeNull(); // 07:00 PST, the day has started
   });
@@ -20,7 +23,10 @@ describe("the shop's quiet hours", () => {
   it('covers the night east of UTC too (Kolkata, UTC+5:30)', () => {
     const kolkata: ShopHours = { zone: 'Asia/Kolkata', dayStartHour: 7, quietFromHour: 21 };
     // 23:00 IST on 4 December is 17:30Z; quiet from 21:00 IST (15:30Z) to 07:00 IST on the 5th (01:30Z).
-    expect(quietStretchAt(Date.parse('2026-12-04T17:30:00Z'), kolkata)).toEqual({ fromMs: Date.parse('2026-12-04T15:30:00Z'), toMs: Date.parse('2026-12-05T01:30:00Z') });
+    expect(quietStretchAt(Date.parse('2026-12-04T17:30:00Z'), kolkata)).toEqual({
+      fromMs: Date.parse('2026-12-04T15:30:00Z'),
+      toMs: Date.parse('2026-12-05T01:30:00Z'),
+    });
   });
 
   it('is an hour shorter the night clocks spring forward and an hour longer the night they fall back', () => {

@@ -52,6 +52,12 @@ describe('the unit-system map', () => {
     expect([us.length.symbol, us.area.symbol, us.temperature.symbol, us.mass.symbol, us.volume.symbol]).toEqual(['in', 'in²', '°F', 'oz', 'fl oz']);
     const metric = unitSystemUnits.metric;
     expect(convertLength(1, metric.length.unit, 'mm')).toBe(1);
-    expect([metric.length.symbol, metric.area.symbol, metric.temperature.symbol, metric.mass.symbol, metric.volume.symbol]).toEqual(['mm', 'mm²', '°C', 'g', 'mL']);
+    expect([metric.length.symbol, metric.area.symbol, metric.temperature.symbol, metric.mass.symbol, metric.volume.symbol]).toEqual([
+      'mm',
+      'mm²',
+      '°C',
+      'g',
+      'mL',
+    ]);
   });
 });

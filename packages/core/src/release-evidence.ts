@@ -31,7 +31,9 @@ export function releaseEvidence(state: CureState, checks: ReleaseCheck[]): Relea
   const needed = readyToMachineHOf(product);
   const age = status.age;
   if (age.loggedEquivalentHours <= 0) {
-    reasons.push('No temperature has been logged since the last layer was poured: log readings (by hand, from a file or a shop thermometer) so the cure rests on what happened.');
+    reasons.push(
+      'No temperature has been logged since the last layer was poured: log readings (by hand, from a file or a shop thermometer) so the cure rests on what happened.',
+    );
   }
   const ready = status.stages.find((s) => s.key === 'ready_to_machine');
   if (age.equivalentHoursAtRef < needed) {
@@ -42,7 +44,9 @@ export function releaseEvidence(state: CureState, checks: ReleaseCheck[]): Relea
   }
   if (product.hardnessShoreD !== undefined) {
     const since = state.pouredAt.getTime();
-    const best = checks.filter((c) => c.checkedAt.getTime() >= since && c.hardnessShoreD !== null).reduce<number | null>((m, c) => Math.max(m ?? -Infinity, c.hardnessShoreD!), null);
+    const best = checks
+      .filter((c) => c.checkedAt.getTime() >= since && c.hardnessShoreD !== null)
+      .reduce<number | null>((m, c) => Math.max(m ?? -Infinity, c.hardnessShoreD!), null);
     if (best === null || best < product.hardnessShoreD) {
       reasons.push(
         best === null

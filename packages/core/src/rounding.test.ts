@@ -38,16 +38,32 @@ describe('roundGrouped: shown totals are sums of shown parts, each within one st
         const within = (rounded: number, exact: number, limit: number) => Math.abs(rounded - exact) < limit * step + 1e-9;
         const exactTotal = groups.flat(2).reduce((a, v) => a + v, 0);
         if (!within(shown.total, exactTotal, 0.5 + 1e-9)) return false;
-        if (!close(shown.total, shown.groups.reduce((a, g) => a + g.total, 0))) return false;
+        if (
+          !close(
+            shown.total,
+            shown.groups.reduce((a, g) => a + g.total, 0),
+          )
+        )
+          return false;
         return shown.groups.every((group, gi) => {
           const exactGroup = groups[gi]!.flat().reduce((a, v) => a + v, 0);
-          if (!within(group.total, exactGroup, 1) || !close(group.total, group.batches.reduce((a, b) => a + b.total, 0))) return false;
+          if (
+            !within(group.total, exactGroup, 1) ||
+            !close(
+              group.total,
+              group.batches.reduce((a, b) => a + b.total, 0),
+            )
+          )
+            return false;
           return group.batches.every((batch, bi) => {
             const exactParts = groups[gi]![bi]!;
             const exactBatch = exactParts.reduce((a, v) => a + v, 0);
             return (
               within(batch.total, exactBatch, 1) &&
-              close(batch.total, batch.parts.reduce((a, v) => a + v, 0)) &&
+              close(
+                batch.total,
+                batch.parts.reduce((a, v) => a + v, 0),
+              ) &&
               batch.parts.every((part, pi) => within(part, exactParts[pi]!, 1) && close(part / step, Math.round(part / step)))
             );
           });

@@ -31,9 +31,7 @@ function snap(x: number): number {
 export function apportionSteps(exactSteps: number[], targetSteps: number): number[] {
   const snapped = exactSteps.map(snap);
   const shares = snapped.map((x) => Math.floor(x));
-  const order = snapped
-    .map((x, i) => ({ i, fraction: x - Math.floor(x) }))
-    .sort((p, q) => q.fraction - p.fraction || p.i - q.i);
+  const order = snapped.map((x, i) => ({ i, fraction: x - Math.floor(x) })).sort((p, q) => q.fraction - p.fraction || p.i - q.i);
   let missing = targetSteps - shares.reduce((sum, s) => sum + s, 0);
   // With a parent rounded from these very parts, missing lies between 0 and the count of parts;
   // the loops also keep the sum right for any other target, cycling when they must.

@@ -35,16 +35,25 @@ export interface SealCoatVolume {
 
 export function checkSealCoatInput(input: SealCoatInput): Result<SealCoatInput> {
   if (!Number.isFinite(input.wettedAreaMm2) || input.wettedAreaMm2 <= 0) {
-    return fail('wetted_area_not_positive', `The wetted area must be above zero (in mm²), got ${String(input.wettedAreaMm2)}; take it from the cavity report or a quick shape.`);
+    return fail(
+      'wetted_area_not_positive',
+      `The wetted area must be above zero (in mm²), got ${String(input.wettedAreaMm2)}; take it from the cavity report or a quick shape.`,
+    );
   }
   if (!Number.isFinite(input.filmThicknessMm) || input.filmThicknessMm <= 0) {
-    return fail('film_not_positive', `The seal coat film thickness must be above zero (in mm), got ${String(input.filmThicknessMm)}; a thin seal coat is a few tenths of a millimetre.`);
+    return fail(
+      'film_not_positive',
+      `The seal coat film thickness must be above zero (in mm), got ${String(input.filmThicknessMm)}; a thin seal coat is a few tenths of a millimetre.`,
+    );
   }
   if (!Number.isInteger(input.coats) || input.coats < 1) {
     return fail('coats_not_whole', `The number of seal coats must be a whole number of at least 1, got ${String(input.coats)}.`);
   }
   if (!Number.isFinite(input.absorptionFactor) || input.absorptionFactor < 1) {
-    return fail('absorption_below_one', `The absorption factor must be 1 or more (1 means the wood takes up nothing), got ${String(input.absorptionFactor)}; pick a preset if unsure.`);
+    return fail(
+      'absorption_below_one',
+      `The absorption factor must be 1 or more (1 means the wood takes up nothing), got ${String(input.absorptionFactor)}; pick a preset if unsure.`,
+    );
   }
   return ok(input);
 }

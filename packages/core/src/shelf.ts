@@ -104,14 +104,34 @@ function nonNegativeFields<T extends object>(entry: T, fields: (keyof T & string
 
 function finish<T>(entry: T, what: string, issues: CoreIssue[]): Result<T> {
   if (issues.length === 0) return ok(entry);
-  return fail(`${what}_invalid`, `This ${what.replace('_', ' ')} cannot be saved: ${issues.map((i) => i.message).join(' ')} Correct these from the data sheet.`, issues);
+  return fail(
+    `${what}_invalid`,
+    `This ${what.replace('_', ' ')} cannot be saved: ${issues.map((i) => i.message).join(' ')} Correct these from the data sheet.`,
+    issues,
+  );
 }
 
 /** Every problem of a shelf entry at once, so a form can mark all bad fields in one pass. */
 export function validateResinSystem(product: ResinSystem): Result<ResinSystem> {
   const issues: CoreIssue[] = [];
   if (product.name.trim() === '') issues.push({ field: 'name', message: 'name must not be empty.' });
-  positiveFields(product, ['densityAGPerMl', 'densityBGPerMl', 'potLifeMin', 'gelTimeH', 'tackFreeH', 'demoldH', 'fullCureH', 'maxLayerMm', 'maxBatchG', 'kitSizeG', 'shelfLifeMonths'], issues);
+  positiveFields(
+    product,
+    [
+      'densityAGPerMl',
+      'densityBGPerMl',
+      'potLifeMin',
+      'gelTimeH',
+      'tackFreeH',
+      'demoldH',
+      'fullCureH',
+      'maxLayerMm',
+      'maxBatchG',
+      'kitSizeG',
+      'shelfLifeMonths',
+    ],
+    issues,
+  );
   nonNegativeFields(product, ['pricePerKit'], issues);
   if (!(product.mixRatio.a > 0 && product.mixRatio.b > 0)) {
     issues.push({ field: 'mixRatio', message: `mixRatio must have both parts above zero, got ${product.mixRatio.a}:${product.mixRatio.b}.` });
@@ -145,7 +165,10 @@ export function validateResinSystem(product: ResinSystem): Result<ResinSystem> {
     issues.push({ field: 'readyToMachineH', message: `readyToMachineH must be above zero when given, got ${product.readyToMachineH}.` });
   }
   if (product.activationEnergyKJPerMol !== undefined && !(product.activationEnergyKJPerMol > 0)) {
-    issues.push({ field: 'activationEnergyKJPerMol', message: `activationEnergyKJPerMol must be above zero when given, got ${product.activationEnergyKJPerMol}.` });
+    issues.push({
+      field: 'activationEnergyKJPerMol',
+      message: `activationEnergyKJPerMol must be above zero when given, got ${product.activationEnergyKJPerMol}.`,
+    });
   }
   // Shore D runs from 0 to 100 (ASTM D2240).
   if (product.hardnessShoreD !== undefined && !(product.hardnessShoreD > 0 && product.hardnessShoreD <= 100)) {
@@ -156,7 +179,12 @@ export function validateResinSystem(product: ResinSystem): Result<ResinSystem> {
 }
 
 // The ranges the forecast accepts (packages/thermal checkResinThermal); a shelf entry outside them could never be forecast.
-const exothermRanges: { field: 'reactionHeatJPerG' | 'thinFilmGelMin' | 'heatCapacityJPerGK' | 'conductivityWPerMK'; min: number; max: number; unit: string }[] = [
+const exothermRanges: {
+  field: 'reactionHeatJPerG' | 'thinFilmGelMin' | 'heatCapacityJPerGK' | 'conductivityWPerMK';
+  min: number;
+  max: number;
+  unit: string;
+}[] = [
   { field: 'reactionHeatJPerG', min: 0, max: 1500, unit: 'J/g' },
   { field: 'thinFilmGelMin', min: 0, max: 43_200, unit: 'min' },
   { field: 'heatCapacityJPerGK', min: 0.5, max: 4, unit: 'J/(g·K)' },
@@ -172,7 +200,10 @@ function exothermSettingIssues(product: ResinSystem, issues: CoreIssue[]): void 
   }
   const peak = product.acceptedPeakC;
   if (peak !== undefined && !(Number.isFinite(peak) && peak > product.referenceTempC && peak <= 300)) {
-    issues.push({ field: 'acceptedPeakC', message: `acceptedPeakC must be above the reference temperature (${product.referenceTempC} °C) and at most 300 °C when given, got ${String(peak)}.` });
+    issues.push({
+      field: 'acceptedPeakC',
+      message: `acceptedPeakC must be above the reference temperature (${product.referenceTempC} °C) and at most 300 °C when given, got ${String(peak)}.`,
+    });
   }
 }
 

@@ -57,7 +57,13 @@ describe("the shop's day and night", () => {
     // reference: te = 24·exp(−5000(1/295.15 − 1/293.15)) + 24·exp(−5000(1/287.15 − 1/293.15)).
     const shop = dayNight('utc');
     const from = Date.UTC(2026, 11, 1, 8);
-    const age = equivalentAge({ readings: [], refTempC: 20, activationEnergyKJPerMol: q5000, window: { from: new Date(from).toISOString(), to: new Date(from + 48 * hour).toISOString() }, assumedTempC: shop });
+    const age = equivalentAge({
+      readings: [],
+      refTempC: 20,
+      activationEnergyKJPerMol: q5000,
+      window: { from: new Date(from).toISOString(), to: new Date(from + 48 * hour).toISOString() },
+      assumedTempC: shop,
+    });
     expect(age.ok).toBe(true);
     if (!age.ok) return;
     const byHand = 24 * Math.exp(-5000 * (1 / 295.15 - 1 / 293.15)) + 24 * Math.exp(-5000 * (1 / 287.15 - 1 / 293.15));
@@ -70,7 +76,13 @@ describe("the shop's day and night", () => {
     // A reading of 20 °C at 08:00, nothing after: 2 h carried, then the gap follows min(20, day 22) = 20 until 20:00,
     // then the night's 14.
     const readings = [{ at: '2026-12-01T08:00:00Z', tempC: 20 }];
-    const status = cureStatus({ product: { ...demoDeepPour, referenceTempC: 20, minWorkTempC: 5, activationEnergyKJPerMol: q5000 }, readings, pouredAt: '2026-12-01T08:00:00Z', asOf: '2026-12-02T08:00:00Z', assumedTempC: shop });
+    const status = cureStatus({
+      product: { ...demoDeepPour, referenceTempC: 20, minWorkTempC: 5, activationEnergyKJPerMol: q5000 },
+      readings,
+      pouredAt: '2026-12-01T08:00:00Z',
+      asOf: '2026-12-02T08:00:00Z',
+      assumedTempC: shop,
+    });
     expect(status.ok).toBe(true);
     if (!status.ok) return;
     expect(status.value.age.spans.map((s) => [s.source, s.tempC, (s.toMs - s.fromMs) / hour])).toEqual([

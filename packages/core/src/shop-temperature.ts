@@ -97,7 +97,11 @@ export function learnedShopTemperature(readings: { ms: number; tempC: number }[]
   if (!checked.ok) return checked;
   const since = nowMs - learnedProfileDays * 86_400_000;
   const recent = readings.filter((r) => r.ms >= since && r.ms <= nowMs && Number.isFinite(r.tempC));
-  if (recent.length === 0) return fail('profile_no_readings', `There are no readings from the last ${learnedProfileDays} days to learn the shop's day and night from; log some, or enter day and night temperatures.`);
+  if (recent.length === 0)
+    return fail(
+      'profile_no_readings',
+      `There are no readings from the last ${learnedProfileDays} days to learn the shop's day and night from; log some, or enter day and night temperatures.`,
+    );
   const sums = new Array<number>(24).fill(0);
   const counts = new Array<number>(24).fill(0);
   for (const r of recent) {
@@ -119,7 +123,13 @@ export function learnedShopTemperature(readings: { ms: number; tempC: number }[]
  * Splits [fromMs, toMs) where the shop temperature changes, handing each stretch's temperature to `piece`. A stretch
  * may end at Infinity: it is cut at `horizonMs`, and the last piece carries on from there.
  */
-export function splitByShopTemperature<T>(fromMs: number, toMs: number, shop: ShopTemperature, piece: (fromMs: number, toMs: number, tempC: number) => T, horizonMs = Infinity): T[] {
+export function splitByShopTemperature<T>(
+  fromMs: number,
+  toMs: number,
+  shop: ShopTemperature,
+  piece: (fromMs: number, toMs: number, tempC: number) => T,
+  horizonMs = Infinity,
+): T[] {
   const out: T[] = [];
   let at = fromMs;
   while (at < toMs) {

@@ -7,7 +7,9 @@ const abbreviationLocales = ['en-US', 'en-GB', 'en-AU', 'en-IN', 'en-NZ', 'en-CA
 export function zoneAbbreviation(ms: number, zone: string): string {
   let fallback = '';
   for (const locale of abbreviationLocales) {
-    const name = new Intl.DateTimeFormat(locale, { timeZone: zone, timeZoneName: 'short' }).formatToParts(new Date(ms)).find((p) => p.type === 'timeZoneName')?.value ?? '';
+    const name =
+      new Intl.DateTimeFormat(locale, { timeZone: zone, timeZoneName: 'short' }).formatToParts(new Date(ms)).find((p) => p.type === 'timeZoneName')?.value ??
+      '';
     if (name && !/^GMT[+-−]/.test(name)) return name;
     fallback ||= name;
   }

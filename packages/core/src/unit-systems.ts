@@ -20,6 +20,18 @@ export interface UnitSystemUnits {
 
 /** The one map from a shop's unit system to the units its people type and read. */
 export const unitSystemUnits = {
-  metric: { length: { symbol: 'mm', unit: 'mm' }, area: { symbol: 'mm²' }, temperature: { symbol: '°C', unit: 'C' }, mass: { symbol: 'g', unit: 'g' }, volume: { symbol: 'mL', unit: 'mL' } },
-  us: { length: { symbol: 'in', unit: 'in' }, area: { symbol: 'in²' }, temperature: { symbol: '°F', unit: 'F' }, mass: { symbol: 'oz', unit: 'oz' }, volume: { symbol: 'fl oz', unit: 'floz' } },
+  metric: {
+    length: { symbol: 'mm', unit: 'mm' },
+    area: { symbol: 'mm²' },
+    temperature: { symbol: '°C', unit: 'C' },
+    mass: { symbol: 'g', unit: 'g' },
+    volume: { symbol: 'mL', unit: 'mL' },
+  },
+  us: {
+    length: { symbol: 'in', unit: 'in' },
+    area: { symbol: 'in²' },
+    temperature: { symbol: '°F', unit: 'F' },
+    mass: { symbol: 'oz', unit: 'oz' },
+    volume: { symbol: 'fl oz', unit: 'floz' },
+  },
 } as const satisfies Record<UnitSystem, UnitSystemUnits>;

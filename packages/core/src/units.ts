@@ -54,8 +54,19 @@ const baseUnitOf: Record<Dimension, string> = { volume: 'mL', mass: 'g', length:
 // Spellings people type into a form, mapped onto the unit tables above.
 const typedSpellings: Record<Dimension, Record<string, string>> = {
   volume: {
-    ml: 'mL', l: 'L', cm3: 'cm^3', 'cm^3': 'cm^3', cc: 'cm^3', in3: 'in^3', 'in^3': 'in^3',
-    floz: 'floz', 'fl oz': 'floz', 'fl.oz': 'floz', gal: 'gal', gallon: 'gal', gallons: 'gal',
+    ml: 'mL',
+    l: 'L',
+    cm3: 'cm^3',
+    'cm^3': 'cm^3',
+    cc: 'cm^3',
+    in3: 'in^3',
+    'in^3': 'in^3',
+    floz: 'floz',
+    'fl oz': 'floz',
+    'fl.oz': 'floz',
+    gal: 'gal',
+    gallon: 'gal',
+    gallons: 'gal',
   },
   mass: { g: 'g', kg: 'kg', oz: 'oz', lb: 'lb', lbs: 'lb' },
   length: { mm: 'mm', in: 'in', '"': 'in' },

@@ -11,7 +11,10 @@ export type VolumeCurve = VolumeCurvePoint[];
 /** Levels strictly rising, volumes never falling, at least two points: what interpolation needs. */
 export function checkVolumeCurve(curve: VolumeCurve): Result<VolumeCurve> {
   if (curve.length < 2) {
-    return fail('curve_too_short', `The volume-vs-level curve needs at least two points, got ${curve.length}; sample the cavity at its floor and at its rim at least.`);
+    return fail(
+      'curve_too_short',
+      `The volume-vs-level curve needs at least two points, got ${curve.length}; sample the cavity at its floor and at its rim at least.`,
+    );
   }
   for (let i = 0; i < curve.length; i++) {
     const point = curve[i]!;
@@ -21,10 +24,16 @@ export function checkVolumeCurve(curve: VolumeCurve): Result<VolumeCurve> {
     if (i > 0) {
       const before = curve[i - 1]!;
       if (point.levelMm <= before.levelMm) {
-        return fail('curve_not_rising', `Point ${i + 1} of the volume-vs-level curve is at ${point.levelMm} mm, not above the point before it (${before.levelMm} mm); list levels from the floor up.`);
+        return fail(
+          'curve_not_rising',
+          `Point ${i + 1} of the volume-vs-level curve is at ${point.levelMm} mm, not above the point before it (${before.levelMm} mm); list levels from the floor up.`,
+        );
       }
       if (point.volumeMm3 < before.volumeMm3) {
-        return fail('curve_volume_falls', `Point ${i + 1} of the volume-vs-level curve holds less volume than the point below it; a cavity's volume can only grow with the level.`);
+        return fail(
+          'curve_volume_falls',
+          `Point ${i + 1} of the volume-vs-level curve holds less volume than the point below it; a cavity's volume can only grow with the level.`,
+        );
       }
     }
   }

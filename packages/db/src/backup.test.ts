@@ -44,6 +44,8 @@ describe('backup and restore scripts', () => {
     expect(Object.keys(before)).toContain('pours');
     expect(before.pours!.rows).toBeGreaterThan(0);
     expect(after).toEqual(before);
-    bash('PGOPTIONS="-c client_min_messages=warning" superuser_psql -c "DROP DATABASE gelpoint_backup_src WITH (FORCE)" -c "DROP DATABASE gelpoint_backup_dst WITH (FORCE)"');
+    bash(
+      'PGOPTIONS="-c client_min_messages=warning" superuser_psql -c "DROP DATABASE gelpoint_backup_src WITH (FORCE)" -c "DROP DATABASE gelpoint_backup_dst WITH (FORCE)"',
+    );
   });
 });

@@ -6,9 +6,7 @@ import { randomBytes, scrypt as scryptCb, timingSafeEqual, type ScryptOptions } 
 const KEY_LENGTH = 64;
 
 function scrypt(password: string, salt: Buffer, opts: ScryptOptions): Promise<Buffer> {
-  return new Promise((resolve, reject) =>
-    scryptCb(password.normalize('NFKC'), salt, KEY_LENGTH, opts, (err, key) => (err ? reject(err) : resolve(key))),
-  );
+  return new Promise((resolve, reject) => scryptCb(password.normalize('NFKC'), salt, KEY_LENGTH, opts, (err, key) => (err ? reject(err) : resolve(key))));
 }
 
 function costFromEnv(): number {

@@ -35,5 +35,12 @@ export function toCoreResinSystem(r: ResinSystem): CoreResinSystem {
 }
 
 export function toCorePigment(p: Pigment): CorePigment {
-  return { name: p.name, kind: p.kind, densityGPerMl: p.densityGPerMl, recommendedPct: p.recommendedPct, maxPct: p.maxPct, price: { pricePerPack: p.pricePerPack, packSizeG: p.packSizeG } };
+  return {
+    name: p.name,
+    kind: p.kind,
+    densityGPerMl: p.densityGPerMl,
+    recommendedPct: p.recommendedPct,
+    maxPct: p.maxPct,
+    price: { pricePerPack: p.pricePerPack, packSizeG: p.packSizeG },
+  };
 }

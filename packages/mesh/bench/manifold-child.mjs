@@ -14,7 +14,8 @@ kernel.setup();
 const loaded = performance.now();
 const bytes = readFileSync(file);
 const header = new Uint32Array(bytes.buffer, bytes.byteOffset, 2);
-const vertexCount = header[0], triangleCount = header[1];
+const vertexCount = header[0],
+  triangleCount = header[1];
 const vertProperties = new Float32Array(bytes.buffer, bytes.byteOffset + 8, 3 * vertexCount);
 const triVerts = new Uint32Array(bytes.buffer, bytes.byteOffset + 8 + 12 * vertexCount, 3 * triangleCount);
 const read = performance.now();

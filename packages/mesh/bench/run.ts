@@ -18,7 +18,10 @@ import Module from 'manifold-3d';
 import { analyzeCavity, curve, encodeStlBinary, fillAt, parseStl, prepareMesh, readAnalysis, type CavityFill, type CavityMesh } from '../src/index';
 import { heightFieldBlock } from '../test/moulds';
 
-interface Peak { rssMb: number; heapMb: number }
+interface Peak {
+  rssMb: number;
+  heapMb: number;
+}
 
 function must<T>(r: { ok: true; value: T } | { ok: false; error: { message: string } }): T {
   if (!r.ok) throw new Error(r.error.message);
@@ -51,7 +54,11 @@ function median(values: number[]): number {
   return sorted.length % 2 ? sorted[mid]! : (sorted[mid - 1]! + sorted[mid]!) / 2;
 }
 
-interface ProcessRun { wallMs: number; peakMb: number | null; stdout: string }
+interface ProcessRun {
+  wallMs: number;
+  peakMb: number | null;
+  stdout: string;
+}
 
 /** One whole process: wall time from spawn to exit, and its peak RSS as the kernel counted it. */
 function runProcess(dir: string, args: string[]): ProcessRun {
@@ -75,20 +82,29 @@ function indexedMeshFile(mesh: CavityMesh): Uint8Array {
   return out;
 }
 
-interface WholeProcess { ours: ProcessRun[]; theirs: ProcessRun[]; ratios: number[]; volumes: [number, number] }
+interface WholeProcess {
+  ours: ProcessRun[];
+  theirs: ProcessRun[];
+  ratios: number[];
+  volumes: [number, number];
+}
 
 /** Our command and the reference process in turn, `pairs` times after one unmeasured pair. */
 function wholeProcesses(dir: string, bytes: Uint8Array, mesh: CavityMesh, level: number, pairs: number): WholeProcess {
-  const stl = join(dir, 'mould.stl'), indexed = join(dir, 'mould.mesh');
+  const stl = join(dir, 'mould.stl'),
+    indexed = join(dir, 'mould.mesh');
   writeFileSync(stl, bytes);
   writeFileSync(indexed, indexedMeshFile(mesh));
   const oursArgs = [gelpointBin, 'mold', stl, '--level', String(level), '--dam', 'box', '--json'];
   const theirsArgs = [manifoldChild, indexed, String(level)];
   runProcess(dir, oursArgs);
   runProcess(dir, theirsArgs);
-  const ours: ProcessRun[] = [], theirs: ProcessRun[] = [], ratios: number[] = [];
+  const ours: ProcessRun[] = [],
+    theirs: ProcessRun[] = [],
+    ratios: number[] = [];
   for (let r = 0; r < pairs; r++) {
-    const a = runProcess(dir, oursArgs), b = runProcess(dir, theirsArgs);
+    const a = runProcess(dir, oursArgs),
+      b = runProcess(dir, theirsArgs);
     ours.push(a);
     theirs.push(b);
     ratios.push(b.wallMs / a.wallMs);
@@ -98,7 +114,14 @@ function wholeProcesses(dir: string, bytes: Uint8Array, mesh: CavityMesh, level:
   return { ours, theirs, ratios, volumes: [ourVolume, theirVolume] };
 }
 
-interface OurRun { stages: Record<string, number>; total: number; peak: Peak; fill: CavityFill; mesh: CavityMesh; storedMb: number }
+interface OurRun {
+  stages: Record<string, number>;
+  total: number;
+  peak: Peak;
+  fill: CavityFill;
+  mesh: CavityMesh;
+  storedMb: number;
+}
 
 function ours(bytes: Uint8Array, level: number): OurRun {
   collect();
@@ -130,13 +153,24 @@ async function main(): Promise<void> {
   const kernel = await Module();
   kernel.setup();
   process.stdout.write(`manifold-3d WASM load (once, not counted in-process): ${(performance.now() - wasmStart).toFixed(0)} ms\n\n`);
-  const sizes = [{ name: '10k', cells: 70, runs: 5, pairs: 9 }, { name: '100k', cells: 223, runs: 3, pairs: 7 }, { name: '1M', cells: 707, runs: 3, pairs: 5 }];
+  const sizes = [
+    { name: '10k', cells: 70, runs: 5, pairs: 9 },
+    { name: '100k', cells: 223, runs: 3, pairs: 7 },
+    { name: '1M', cells: 707, runs: 3, pairs: 5 },
+  ];
   for (const size of sizes) {
     const n = size.cells;
-    const bytes = encodeStlBinary(heightFieldBlock({
-      width: 300, depth: 200, bottomZ: 0, nx: n, ny: n,
-      top: (x, y) => 40 - 12 * Math.sin((Math.PI * x) / 300) * Math.sin((Math.PI * y) / 200) - 3 * Math.cos(x / 7) * Math.sin(y / 5),
-    }), 'solid bench mould');
+    const bytes = encodeStlBinary(
+      heightFieldBlock({
+        width: 300,
+        depth: 200,
+        bottomZ: 0,
+        nx: n,
+        ny: n,
+        top: (x, y) => 40 - 12 * Math.sin((Math.PI * x) / 300) * Math.sin((Math.PI * y) / 200) - 3 * Math.cos(x / 7) * Math.sin(y / 5),
+      }),
+      'solid bench mould',
+    );
     const level = 38;
     let best: OurRun | null = null;
     for (let r = 0; r < size.runs; r++) {
@@ -145,15 +179,23 @@ async function main(): Promise<void> {
     }
     const { stages, total, peak, fill, mesh, storedMb } = best!;
 
-    let reference = 0, bestManifold = Infinity, manifoldStages: Record<string, number> = {};
+    let reference = 0,
+      bestManifold = Infinity,
+      manifoldStages: Record<string, number> = {};
     const manifoldPeak: Peak = { rssMb: 0, heapMb: 0 };
     const manifoldTimes: number[] = [];
     for (let r = 0; r < Math.min(size.runs, 3); r++) {
       collect();
       const m: Record<string, number> = {};
-      const solid = measure(m, manifoldPeak, 'ofMesh', () => kernel.Manifold.ofMesh(new kernel.Mesh({
-        numProp: 3, vertProperties: Float32Array.from(mesh.positionsMm), triVerts: Uint32Array.from(mesh.triangles),
-      })));
+      const solid = measure(m, manifoldPeak, 'ofMesh', () =>
+        kernel.Manifold.ofMesh(
+          new kernel.Mesh({
+            numProp: 3,
+            vertProperties: Float32Array.from(mesh.positionsMm),
+            triVerts: Uint32Array.from(mesh.triangles),
+          }),
+        ),
+      );
       const { min, max } = mesh.bboxMm;
       reference = measure(m, manifoldPeak, 'boolean', () => {
         const prism = kernel.Manifold.cube([max[0] - min[0], max[1] - min[1], level - min[2]]).translate([min[0], min[1], min[2]]);
@@ -166,30 +208,37 @@ async function main(): Promise<void> {
       solid.delete();
       const sum = m.ofMesh! + m.boolean!;
       manifoldTimes.push(sum);
-      if (sum < bestManifold) { bestManifold = sum; manifoldStages = m; }
+      if (sum < bestManifold) {
+        bestManifold = sum;
+        manifoldStages = m;
+      }
     }
     const whole = wholeProcesses(dir, bytes, mesh, level, size.pairs);
-    const ourWall = median(whole.ours.map((r) => r.wallMs)), theirWall = median(whole.theirs.map((r) => r.wallMs));
-    const ourPeak = whole.ours.map((r) => r.peakMb ?? NaN), theirPeak = whole.theirs.map((r) => r.peakMb ?? NaN);
+    const ourWall = median(whole.ours.map((r) => r.wallMs)),
+      theirWall = median(whole.theirs.map((r) => r.wallMs));
+    const ourPeak = whole.ours.map((r) => r.peakMb ?? NaN),
+      theirPeak = whole.theirs.map((r) => r.peakMb ?? NaN);
     const inProcessManifold = median(manifoldTimes);
     const mb = (values: number[]): string => (values.every(Number.isFinite) ? `${median(values).toFixed(0)} MB` : 'n/a (no /usr/bin/time)');
     const ms = (v: number): string => `${v.toFixed(1)} ms`;
-    process.stdout.write([
-      `${size.name} mould: ${mesh.triangleCount} triangles (${(bytes.length / 2 ** 20).toFixed(1)} MB binary STL), method ${fill.method}, fastest of ${size.runs} runs`,
-      `  gelpoint   parse ${ms(stages.parse!)} | weld+checks ${ms(stages['weld+checks']!)} | analyse ${ms(stages.analyse!)} | read back ${ms(stages.decode!)}`,
-      `             fill + wetted + depth map ${ms(stages.fill!)} | 100-level curve ${ms(stages.curve!)} | whole report ${ms(total)}`,
-      `             peak RSS ${peak.rssMb.toFixed(0)} MB, heap + array buffers ${peak.heapMb.toFixed(0)} MB | storing the analysis as JSON (API only) ${ms(stages.store!)}, ${storedMb.toFixed(2)} MB`,
-      `  manifold   ofMesh ${ms(manifoldStages.ofMesh!)} | box prism minus mould + volume ${ms(manifoldStages.boolean!)} | together ${ms(bestManifold)} | peak RSS ${manifoldPeak.rssMb.toFixed(0)} MB`,
-      `  fill at ${level} mm, box dam: gelpoint ${fill.volumeMm3.toFixed(3)} mm³ (estimated error ${fill.estimatedErrorPct.toExponential(1)} %), manifold ${reference.toFixed(3)} mm³, difference ${((100 * (fill.volumeMm3 - reference)) / reference).toExponential(1)} %`,
-      `  speed ratio: manifold's boolean takes ${(bestManifold / total).toFixed(1)}× as long as gelpoint's whole report`,
-      `  whole processes, median of ${size.pairs} pairs run in turn (wall, from spawn to exit):`,
-      `    gelpoint mold --dam box --json  ${ms(ourWall)} (range ${ms(Math.min(...whole.ours.map((r) => r.wallMs)))}–${ms(Math.max(...whole.ours.map((r) => r.wallMs)))}), peak RSS ${mb(ourPeak)}`,
-      `    manifold-3d as a process        ${ms(theirWall)} (WASM load + reading the welded mesh + ofMesh + boolean), peak RSS ${mb(theirPeak)}`,
-      `    manifold-3d in this process     ${ms(inProcessManifold)} (ofMesh + boolean, median of ${manifoldTimes.length}, WASM loaded once before)`,
-      `    ratios: manifold process / gelpoint process ${median(whole.ratios).toFixed(2)}× (median of the pairs' ratios); manifold in-process / gelpoint process ${(inProcessManifold / ourWall).toFixed(2)}×`,
-      `    fill: gelpoint ${whole.volumes[0].toFixed(3)} mm³, manifold process ${whole.volumes[1].toFixed(3)} mm³`,
-      '',
-    ].join('\n') + '\n');
+    process.stdout.write(
+      [
+        `${size.name} mould: ${mesh.triangleCount} triangles (${(bytes.length / 2 ** 20).toFixed(1)} MB binary STL), method ${fill.method}, fastest of ${size.runs} runs`,
+        `  gelpoint   parse ${ms(stages.parse!)} | weld+checks ${ms(stages['weld+checks']!)} | analyse ${ms(stages.analyse!)} | read back ${ms(stages.decode!)}`,
+        `             fill + wetted + depth map ${ms(stages.fill!)} | 100-level curve ${ms(stages.curve!)} | whole report ${ms(total)}`,
+        `             peak RSS ${peak.rssMb.toFixed(0)} MB, heap + array buffers ${peak.heapMb.toFixed(0)} MB | storing the analysis as JSON (API only) ${ms(stages.store!)}, ${storedMb.toFixed(2)} MB`,
+        `  manifold   ofMesh ${ms(manifoldStages.ofMesh!)} | box prism minus mould + volume ${ms(manifoldStages.boolean!)} | together ${ms(bestManifold)} | peak RSS ${manifoldPeak.rssMb.toFixed(0)} MB`,
+        `  fill at ${level} mm, box dam: gelpoint ${fill.volumeMm3.toFixed(3)} mm³ (estimated error ${fill.estimatedErrorPct.toExponential(1)} %), manifold ${reference.toFixed(3)} mm³, difference ${((100 * (fill.volumeMm3 - reference)) / reference).toExponential(1)} %`,
+        `  speed ratio: manifold's boolean takes ${(bestManifold / total).toFixed(1)}× as long as gelpoint's whole report`,
+        `  whole processes, median of ${size.pairs} pairs run in turn (wall, from spawn to exit):`,
+        `    gelpoint mold --dam box --json  ${ms(ourWall)} (range ${ms(Math.min(...whole.ours.map((r) => r.wallMs)))}–${ms(Math.max(...whole.ours.map((r) => r.wallMs)))}), peak RSS ${mb(ourPeak)}`,
+        `    manifold-3d as a process        ${ms(theirWall)} (WASM load + reading the welded mesh + ofMesh + boolean), peak RSS ${mb(theirPeak)}`,
+        `    manifold-3d in this process     ${ms(inProcessManifold)} (ofMesh + boolean, median of ${manifoldTimes.length}, WASM loaded once before)`,
+        `    ratios: manifold process / gelpoint process ${median(whole.ratios).toFixed(2)}× (median of the pairs' ratios); manifold in-process / gelpoint process ${(inProcessManifold / ourWall).toFixed(2)}×`,
+        `    fill: gelpoint ${whole.volumes[0].toFixed(3)} mm³, manifold process ${whole.volumes[1].toFixed(3)} mm³`,
+        '',
+      ].join('\n') + '\n',
+    );
   }
   rmSync(dir, { recursive: true, force: true });
 }

@@ -124,7 +124,10 @@ export function readAnalysis(stored: unknown): Result<CavityModel> {
   }
   if (typeof stored.version === 'number' && Number.isInteger(stored.version) && stored.version >= 1 && stored.version < cavityAnalysisVersion) {
     // Earlier versions counted resin only where it could drop straight down from the surface.
-    return fail('analysis_outdated', `This cavity analysis was made by an earlier version of the engine (version ${stored.version}, now ${cavityAnalysisVersion}) whose fill rule has since changed; analyse the mould's STL again.`);
+    return fail(
+      'analysis_outdated',
+      `This cavity analysis was made by an earlier version of the engine (version ${stored.version}, now ${cavityAnalysisVersion}) whose fill rule has since changed; analyse the mould's STL again.`,
+    );
   }
   if (stored.version !== cavityAnalysisVersion || stored.encoding !== 'base64-little-endian') return invalid('unknown version');
   const analysis = stored as unknown as CavityAnalysis;
@@ -175,13 +178,22 @@ export function readAnalysis(stored: unknown): Result<CavityModel> {
   const escapeMm = new Float32Array(intervals.length / 2);
   for (let k = 0; k < escapeMm.length; k++) escapeMm[k] = intervals[2 * k]!;
   for (let p = 0; p < held.length; p += 2) {
-    const k = held[p]!, e = held[p + 1]!;
+    const k = held[p]!,
+      e = held[p + 1]!;
     if (!Number.isInteger(k) || k < 0 || k >= escapeMm.length || !(e === -Infinity || Number.isFinite(e))) return invalid('held air');
     escapeMm[k] = e;
   }
   const grid: ColumnGrid = {
-    originX: columns.originMm[0], originY: columns.originMm[1], cellX: columns.cellMm[0], cellY: columns.cellMm[1],
-    nx, ny, counts, offsets, intervals, escapeMm,
+    originX: columns.originMm[0],
+    originY: columns.originMm[1],
+    cellX: columns.cellMm[0],
+    cellY: columns.cellMm[1],
+    nx,
+    ny,
+    counts,
+    offsets,
+    intervals,
+    escapeMm,
   };
   return ok({ kind: 'gelpoint-cavity-model', analysis, series, grid });
 }

@@ -11,7 +11,9 @@ import { encodeStlAscii, encodeStlBinary } from './stl/encode-stl';
 import { parseStl } from './stl/parse-stl';
 
 const bowl = revolvedPocketBlock({
-  halfSide: 25, bottomZ: 0, topZ: 30,
+  halfSide: 25,
+  bottomZ: 0,
+  topZ: 30,
   profile: Array.from({ length: 25 }, (_, k) => [18 * Math.sin((Math.PI / 2) * (k / 24)), 30 - 18 * Math.cos((Math.PI / 2) * (k / 24))] as [number, number]),
   segments: 96,
 });
@@ -36,8 +38,15 @@ describe('analyzeCavity: the stored analysis', () => {
   it('stays within a few MB, for the exact method and for the columns at their finest', () => {
     expect(JSON.stringify(analysis).length).toBeLessThan(4 * 2 ** 20);
     // With a hole in it the undercut mould goes to the columns, which refine to their cap.
-    const undercut = withoutTriangles(cellSolid([0, 5, 15, 25, 35, 40], [0, 5, 15, 25, 35, 40], [0, 5, 10, 20],
-      (i, j, k) => !((k === 2 && i === 2 && j === 2) || (k === 1 && i >= 1 && i <= 3 && j >= 1 && j <= 3))), [0]);
+    const undercut = withoutTriangles(
+      cellSolid(
+        [0, 5, 15, 25, 35, 40],
+        [0, 5, 15, 25, 35, 40],
+        [0, 5, 10, 20],
+        (i, j, k) => !((k === 2 && i === 2 && j === 2) || (k === 1 && i >= 1 && i <= 3 && j >= 1 && j <= 3)),
+      ),
+      [0],
+    );
     const columns = unwrap(analyzeCavity(meshOf(undercut), { targetErrorPct: 0.01 }));
     expect(columns.method).toBe('columns');
     expect(JSON.stringify(columns).length).toBeLessThan(5 * 2 ** 20);
@@ -56,8 +65,12 @@ describe('analyzeCavity: the stored analysis', () => {
   it('answers the same from the arrays it was made from as from its stored form, held air included', () => {
     // A shaft into a chamber whose ceiling has a recess (held air), closed (exact) and with a hole (columns).
     const xs = [0, 5, 10, 15, 25, 35, 40];
-    const undercut = cellSolid(xs, xs, [0, 5, 10, 12, 20], (i, j, k) =>
-      !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)));
+    const undercut = cellSolid(
+      xs,
+      xs,
+      [0, 5, 10, 12, 20],
+      (i, j, k) => !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)),
+    );
     for (const mesh of [undercut, withoutTriangles(undercut, [0])]) {
       const made = unwrap(analyzeCavity(meshOf(mesh), { levelsMm: [11] }));
       const stored = JSON.parse(JSON.stringify(made));
@@ -104,8 +117,18 @@ describe('analyzeCavity: the stored analysis', () => {
 
 describe('curve and layers', () => {
   const analysis = unwrap(analyzeCavity(meshOf(bowl)));
-  const undercut = unwrap(analyzeCavity(meshOf(cellSolid([0, 5, 15, 25, 35, 40], [0, 5, 15, 25, 35, 40], [0, 5, 10, 20],
-    (i, j, k) => !((k === 2 && i === 2 && j === 2) || (k === 1 && i >= 1 && i <= 3 && j >= 1 && j <= 3))))));
+  const undercut = unwrap(
+    analyzeCavity(
+      meshOf(
+        cellSolid(
+          [0, 5, 15, 25, 35, 40],
+          [0, 5, 15, 25, 35, 40],
+          [0, 5, 10, 20],
+          (i, j, k) => !((k === 2 && i === 2 && j === 2) || (k === 1 && i >= 1 && i <= 3 && j >= 1 && j <= 3)),
+        ),
+      ),
+    ),
+  );
 
   it('samples evenly from the lowest to the highest z, matching single fills', () => {
     for (const a of [analysis, undercut]) {
@@ -160,7 +183,10 @@ describe('units, axes and formats', () => {
     // Files written the way such exporters lay them out; the engine turns them back to Z-up.
     const yUp = mapped(pocket, (x, y, z) => [x, z, -y]);
     const xUp = mapped(pocket, (x, y, z) => [z, x, y]);
-    for (const [file, up] of [[yUp, 'y'], [xUp, 'x']] as const) {
+    for (const [file, up] of [
+      [yUp, 'y'],
+      [xUp, 'x'],
+    ] as const) {
       const analysis = unwrap(analyzeStl(encodeStlBinary(file), { up, levelsMm: [levelMm] }));
       expect(analysis.bboxMm.max[2] - analysis.bboxMm.min[2]).toBeCloseTo(12, 9);
       const f = unwrap(fillAt(analysis, levelMm));
@@ -214,4 +240,3 @@ describe('analyzeStl: slivers', () => {
     expect(relative(result.value.enclosedVolumeMm3!, Math.fround(1e20))).toBeLessThan(1e-12);
   });
 });
-

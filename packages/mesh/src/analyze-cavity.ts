@@ -47,7 +47,10 @@ interface Overhangs {
 
 /** One pass over the faces: whether anything hangs over free space, and the sums the exact fill needs. */
 function surveyOverhangs(table: TriangleTable, zMin: number, height: number, tableToleranceMm: number): Overhangs {
-  let present = false, covered = 0, lowestFloor = Infinity, sliver = 0;
+  let present = false,
+    covered = 0,
+    lowestFloor = Infinity,
+    sliver = 0;
   for (let t = 0; t < table.count; t++) {
     const facing = table.facing[t]!;
     if (facing > 0) {
@@ -76,13 +79,17 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
   if (!(targetErrorPct > 0) || !Number.isFinite(targetErrorPct)) {
     return fail('option_invalid', `targetErrorPct must be a positive percentage, got ${String(targetErrorPct)}.`);
   }
-  if (!Number.isInteger(maxColumns) || maxColumns < 16) return fail('option_invalid', `maxColumns must be a whole number of at least 16, got ${String(maxColumns)}.`);
+  if (!Number.isInteger(maxColumns) || maxColumns < 16)
+    return fail('option_invalid', `maxColumns must be a whole number of at least 16, got ${String(maxColumns)}.`);
   if (!Number.isInteger(maxKnots) || maxKnots < 16) return fail('option_invalid', `maxKnots must be a whole number of at least 16, got ${String(maxKnots)}.`);
   if (!levelsMm.every(Number.isFinite)) return fail('level_invalid', 'Every level must be a finite number of millimetres.');
 
   const { positionsMm: positions, triangles, bboxMm: box } = mesh;
-  const zMin = box.min[2], zMax = box.max[2];
-  const width = box.max[0] - box.min[0], depth = box.max[1] - box.min[1], height = zMax - zMin;
+  const zMin = box.min[2],
+    zMax = box.max[2];
+  const width = box.max[0] - box.min[0],
+    depth = box.max[1] - box.min[1],
+    height = zMax - zMin;
   const rect = { minX: box.min[0], minY: box.min[1], maxX: box.max[0], maxY: box.max[1] };
   // Taken once: a second analysis of the mesh must not write over the table of the first.
   const spare = mesh.spareMemory ?? null;
@@ -101,7 +108,8 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
   if (exact) {
     const survey = surveyOverhangs(table, zMin, height, tableToleranceMm);
     const boxArea = width * depth;
-    let outline = survey.coveredAreaMm2, heldAirFaces = 0;
+    let outline = survey.coveredAreaMm2,
+      heldAirFaces = 0;
     if (survey.present) {
       // Something hangs over free space: find where air is held, and the shadow the outline dams enclose.
       const escapes = escapeHeights(table, mesh.vertexCount, rect);
@@ -176,22 +184,28 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
     gridOf = () => grid;
   }
 
-  return ok(lazyAnalysis({
-    kind: 'gelpoint-cavity-analysis',
-    version: cavityAnalysisVersion,
-    encoding: 'base64-little-endian',
-    triangles: mesh.triangleCount,
-    vertices: mesh.vertexCount,
-    watertight: mesh.topology.watertight,
-    openEdges: mesh.topology.openEdges,
-    nonManifoldEdges: mesh.topology.nonManifoldEdges,
-    bboxMm: { min: [...box.min], max: [...box.max] },
-    enclosedVolumeMm3: mesh.enclosedVolumeMm3,
-    surfaceAreaMm2: mesh.surfaceAreaMm2,
-    heightField,
-    method: exact ? 'exact' : 'columns',
-    targetErrorPct,
-    exact: facts,
-    warnings: [...mesh.warnings],
-  }, series, gridOf));
+  return ok(
+    lazyAnalysis(
+      {
+        kind: 'gelpoint-cavity-analysis',
+        version: cavityAnalysisVersion,
+        encoding: 'base64-little-endian',
+        triangles: mesh.triangleCount,
+        vertices: mesh.vertexCount,
+        watertight: mesh.topology.watertight,
+        openEdges: mesh.topology.openEdges,
+        nonManifoldEdges: mesh.topology.nonManifoldEdges,
+        bboxMm: { min: [...box.min], max: [...box.max] },
+        enclosedVolumeMm3: mesh.enclosedVolumeMm3,
+        surfaceAreaMm2: mesh.surfaceAreaMm2,
+        heightField,
+        method: exact ? 'exact' : 'columns',
+        targetErrorPct,
+        exact: facts,
+        warnings: [...mesh.warnings],
+      },
+      series,
+      gridOf,
+    ),
+  );
 }

@@ -5,7 +5,15 @@ const bytes = (s: string): Uint8Array => new TextEncoder().encode(s);
 
 describe('base64', () => {
   it('matches the RFC 4648 §10 test vectors', () => {
-    const vectors: [string, string][] = [['', ''], ['f', 'Zg=='], ['fo', 'Zm8='], ['foo', 'Zm9v'], ['foob', 'Zm9vYg=='], ['fooba', 'Zm9vYmE='], ['foobar', 'Zm9vYmFy']];
+    const vectors: [string, string][] = [
+      ['', ''],
+      ['f', 'Zg=='],
+      ['fo', 'Zm8='],
+      ['foo', 'Zm9v'],
+      ['foob', 'Zm9vYg=='],
+      ['fooba', 'Zm9vYmE='],
+      ['foobar', 'Zm9vYmFy'],
+    ];
     for (const [plain, encoded] of vectors) {
       expect(bytesToBase64(bytes(plain))).toBe(encoded);
       expect(Array.from(base64ToBytes(encoded)!)).toEqual(Array.from(bytes(plain)));

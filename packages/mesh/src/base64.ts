@@ -21,7 +21,8 @@ export function bytesToBase64(bytes: Uint8Array): string {
     chars[w++] = alphabetCodes[triple & 63]!;
   }
   if (whole < bytes.length) {
-    const b0 = bytes[whole]!, b1 = whole + 1 < bytes.length ? bytes[whole + 1]! : 0;
+    const b0 = bytes[whole]!,
+      b1 = whole + 1 < bytes.length ? bytes[whole + 1]! : 0;
     chars[w++] = alphabetCodes[b0 >> 2]!;
     chars[w++] = alphabetCodes[((b0 & 3) << 4) | (b1 >> 4)]!;
     chars[w++] = whole + 1 < bytes.length ? alphabetCodes[(b1 & 15) << 2]! : 61;
@@ -47,7 +48,10 @@ export function base64ToBytes(text: string): Uint8Array | null {
     return code < 128 ? lookup[code]! : -1;
   };
   for (let i = 0; i < text.length; i += 4) {
-    const d0 = digit(i), d1 = digit(i + 1), d2 = digit(i + 2), d3 = digit(i + 3);
+    const d0 = digit(i),
+      d1 = digit(i + 1),
+      d2 = digit(i + 2),
+      d3 = digit(i + 3);
     if ((d0 | d1 | d2 | d3) < 0) return null;
     const triple = (d0 << 18) | (d1 << 12) | (d2 << 6) | d3;
     if (w < bytes.length) bytes[w++] = (triple >> 16) & 255;
@@ -78,9 +82,15 @@ function fromLittleEndianBytes<T extends Typed>(bytes: Uint8Array, make: (buffer
   return make(copy.buffer);
 }
 
-export function encodeFloat64(array: Float64Array): string { return bytesToBase64(toLittleEndianBytes(array)); }
-export function encodeFloat32(array: Float32Array): string { return bytesToBase64(toLittleEndianBytes(array)); }
-export function encodeUint16(array: Uint16Array): string { return bytesToBase64(toLittleEndianBytes(array)); }
+export function encodeFloat64(array: Float64Array): string {
+  return bytesToBase64(toLittleEndianBytes(array));
+}
+export function encodeFloat32(array: Float32Array): string {
+  return bytesToBase64(toLittleEndianBytes(array));
+}
+export function encodeUint16(array: Uint16Array): string {
+  return bytesToBase64(toLittleEndianBytes(array));
+}
 
 export function decodeFloat64(text: string): Float64Array | null {
   const bytes = base64ToBytes(text);

@@ -7,7 +7,9 @@ import { fillAt } from './fill-queries';
 
 // A bowl blank: a 120 × 120 × 48 mm block with a hemispherical bowl of radius 38 mm turned into its top, so the
 // bowl's bottom stands 10 mm above the blank's underside.
-const r = 38, top = 48, floorZ = top - r;
+const r = 38,
+  top = 48,
+  floorZ = top - r;
 const segments = 256;
 const depthMm = 20;
 const thetaAtDepth = Math.acos((r - depthMm) / r);
@@ -17,7 +19,10 @@ const thetas = [
   ...Array.from({ length: 32 }, (_, k) => thetaAtDepth + ((Math.PI / 2 - thetaAtDepth) * (k + 1)) / 32),
 ];
 const bowlBlank = revolvedPocketBlock({
-  halfSide: 60, bottomZ: 0, topZ: top, segments,
+  halfSide: 60,
+  bottomZ: 0,
+  topZ: top,
+  segments,
   profile: thetas.map((t) => [r * Math.sin(t), top - r * Math.cos(t)] as [number, number]),
 });
 // CRC Concise Encyclopedia of Mathematics, spherical cap: V = πh²(3r − h)/3.
@@ -67,7 +72,19 @@ describe('the cavity floor', () => {
   it('is the table for a box dam round a round blank, and the pocket floor for dams along its outline', () => {
     // A round tray of radius 50 and height 30 with a pocket of radius 40 down to 10 (revolved profile).
     const n = 128;
-    const m = model(revolvedSolid([[0, 0], [50, 0], [50, 30], [40, 30], [40, 10], [0, 10]], n));
+    const m = model(
+      revolvedSolid(
+        [
+          [0, 0],
+          [50, 0],
+          [50, 30],
+          [40, 30],
+          [40, 10],
+          [0, 10],
+        ],
+        n,
+      ),
+    );
     expect(unwrap(cavityFloorMm(m, 'outline'))).toBe(10);
     expect(unwrap(cavityFloorMm(m, 'box'))).toBe(0);
     expectFillStartsAt(m, 0, 'box');
@@ -87,8 +104,14 @@ describe('the cavity floor', () => {
 
   it('ignores a hollow sealed inside the blank below the pocket', () => {
     // A 40 × 40 × 20 block, pocket from z 12 up, and a sealed 10 × 10 × 4 void at z 4 to 8 that no pour reaches.
-    const m = model(cellSolid([0, 10, 15, 25, 30, 40], [0, 10, 15, 25, 30, 40], [0, 4, 8, 12, 20],
-      (i, j, k) => !((k === 3 && i >= 1 && i <= 3 && j >= 1 && j <= 3) || (k === 1 && i === 2 && j === 2))));
+    const m = model(
+      cellSolid(
+        [0, 10, 15, 25, 30, 40],
+        [0, 10, 15, 25, 30, 40],
+        [0, 4, 8, 12, 20],
+        (i, j, k) => !((k === 3 && i >= 1 && i <= 3 && j >= 1 && j <= 3) || (k === 1 && i === 2 && j === 2)),
+      ),
+    );
     expect(unwrap(cavityFloorMm(m))).toBe(12);
     expectFillStartsAt(m, 12, 'outline');
   });

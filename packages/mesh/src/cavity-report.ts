@@ -40,7 +40,13 @@ export function cavityReport(analysis: CavityAnalysis): CavityReportRecord {
   const levels = Array.from({ length: CURVE_POINTS }, (_, i) => bottom + ((top - bottom) * i) / (CURVE_POINTS - 1));
   // The floor is where the curve bends; sampling it exactly keeps layer plans from starting too high.
   if (floorMm.outline > bottom && floorMm.outline < top) levels.push(floorMm.outline);
-  const points = valueOf(curve(model, [...new Set(levels)].sort((a, b) => a - b), 'outline'));
+  const points = valueOf(
+    curve(
+      model,
+      [...new Set(levels)].sort((a, b) => a - b),
+      'outline',
+    ),
+  );
   const f = valueOf(fillAt(model, top, 'outline'));
   const seen = new Set<string>();
   const warnings = [...analysis.warnings, ...f.warnings].filter((w) => (seen.has(w.code) ? false : (seen.add(w.code), true)));

@@ -3,10 +3,12 @@ import type { ColumnGrid } from './column-grid';
 import type { Dam } from './dam';
 
 function firstAbove(levels: Float64Array, z: number): number {
-  let lo = 0, hi = levels.length;
+  let lo = 0,
+    hi = levels.length;
   while (lo < hi) {
     const mid = (lo + hi) >>> 1;
-    if (levels[mid]! <= z) lo = mid + 1; else hi = mid;
+    if (levels[mid]! <= z) lo = mid + 1;
+    else hi = mid;
   }
   return lo;
 }
@@ -28,15 +30,21 @@ export function columnCurve(grid: ColumnGrid, levels: Float64Array, dam: Dam, zM
     const from = firstAbove(levels, floor);
     const to = top === Infinity ? n : firstAbove(levels, top);
     if (to > from) {
-      slope[from]! += 1; slope[to]! -= 1;
-      offset[from]! -= floor; offset[to]! += floor;
+      slope[from]! += 1;
+      slope[to]! -= 1;
+      offset[from]! -= floor;
+      offset[to]! += floor;
     }
-    if (top !== Infinity) { offset[to]! += top - floor; offset[n]! -= top - floor; }
+    if (top !== Infinity) {
+      offset[to]! += top - floor;
+      offset[n]! -= top - floor;
+    }
   };
   for (let c = 0; c < columns; c++) forEachGap(grid, c, dam, zMin, gap);
   const cellArea = grid.cellX * grid.cellY;
   const volumes = new Float64Array(n);
-  let s = 0, o = 0;
+  let s = 0,
+    o = 0;
   for (let k = 0; k < n; k++) {
     s += slope[k]!;
     o += offset[k]!;

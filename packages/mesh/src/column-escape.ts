@@ -8,8 +8,12 @@ class MaxHeap {
 
   push(key: number, item: number): void {
     if (this.size === this.keys.length) {
-      const keys = new Float64Array(2 * this.size); keys.set(this.keys); this.keys = keys;
-      const items = new Int32Array(2 * this.size); items.set(this.items); this.items = items;
+      const keys = new Float64Array(2 * this.size);
+      keys.set(this.keys);
+      this.keys = keys;
+      const items = new Int32Array(2 * this.size);
+      items.set(this.items);
+      this.items = items;
     }
     let at = this.size++;
     while (at > 0) {
@@ -27,7 +31,8 @@ class MaxHeap {
   pop(): number {
     const item = this.items[0]!;
     this.topKey = this.keys[0]!;
-    const key = this.keys[--this.size]!, last = this.items[this.size]!;
+    const key = this.keys[--this.size]!,
+      last = this.items[this.size]!;
     let at = 0;
     for (;;) {
       let child = 2 * at + 1;
@@ -70,31 +75,46 @@ export function columnEscape(grid: ColumnGrid, zMin: number): Float32Array {
     }
   };
   for (let c = 0; c < columns; c++) {
-    const i = c % nx, j = (c - i) / nx;
+    const i = c % nx,
+      j = (c - i) / nx;
     const edge = i === 0 || j === 0 || i === nx - 1 || j === ny - 1;
     for (let k = 0; k <= counts[c]!; k++) {
       const ceiling = ceilingOf(c, k);
       if (k === counts[c]! || edge) offer(offsets[c]! + c + k, ceiling);
     }
   }
-  const columnOfNode = new Int32Array(nodes), gapOfNode = new Int32Array(nodes);
+  const columnOfNode = new Int32Array(nodes),
+    gapOfNode = new Int32Array(nodes);
   for (let c = 0; c < columns; c++) {
-    for (let k = 0; k <= counts[c]!; k++) { columnOfNode[offsets[c]! + c + k] = c; gapOfNode[offsets[c]! + c + k] = k; }
+    for (let k = 0; k <= counts[c]!; k++) {
+      columnOfNode[offsets[c]! + c + k] = c;
+      gapOfNode[offsets[c]! + c + k] = k;
+    }
   }
   while (heap.size > 0) {
     const node = heap.pop();
     const height = heap.topKey;
     if (height < best[node]!) continue;
-    const c = columnOfNode[node]!, k = gapOfNode[node]!;
-    const floor = floorOf(c, k), ceiling = ceilingOf(c, k);
+    const c = columnOfNode[node]!,
+      k = gapOfNode[node]!;
+    const floor = floorOf(c, k),
+      ceiling = ceilingOf(c, k);
     if (!(ceiling > floor)) continue;
-    const i = c % nx, j = (c - i) / nx;
-    for (const [di, dj] of [[1, 0], [-1, 0], [0, 1], [0, -1]] as const) {
-      const ni = i + di, nj = j + dj;
+    const i = c % nx,
+      j = (c - i) / nx;
+    for (const [di, dj] of [
+      [1, 0],
+      [-1, 0],
+      [0, 1],
+      [0, -1],
+    ] as const) {
+      const ni = i + di,
+        nj = j + dj;
       if (ni < 0 || nj < 0 || ni >= nx || nj >= ny) continue;
       const n = nj * nx + ni;
       for (let m = 0; m <= counts[n]!; m++) {
-        const nFloor = floorOf(n, m), nCeiling = ceilingOf(n, m);
+        const nFloor = floorOf(n, m),
+          nCeiling = ceilingOf(n, m);
         if (nFloor >= ceiling) break;
         if (!(nCeiling > floor) || !(nCeiling > nFloor)) continue;
         offer(offsets[n]! + n + m, Math.min(height, nCeiling));

@@ -17,10 +17,9 @@ export interface ColumnFill {
  * highest interval (ceiling and escape Infinity). Dams along the outline hold only columns with
  * mould in them; the box dam holds every column.
  */
-export function forEachGap(
-  grid: ColumnGrid, c: number, dam: Dam, zMin: number, visit: (floor: number, ceiling: number, escape: number) => void,
-): void {
-  const first = grid.offsets[c]!, count = grid.counts[c]!;
+export function forEachGap(grid: ColumnGrid, c: number, dam: Dam, zMin: number, visit: (floor: number, ceiling: number, escape: number) => void): void {
+  const first = grid.offsets[c]!,
+    count = grid.counts[c]!;
   if (count === 0) {
     if (dam === 'box') visit(zMin, Infinity, Infinity);
     return;
@@ -53,7 +52,10 @@ export function columnFill(grid: ColumnGrid, h: number, dam: Dam, zMin: number):
   const columns = nx * ny;
   const depthsMm = new Float32Array(columns);
   const depths = new Float64Array(columns);
-  let volume = 0, trapped = 0, maxDepth = 0, depth = 0;
+  let volume = 0,
+    trapped = 0,
+    maxDepth = 0,
+    depth = 0;
   const visit = (floor: number, ceiling: number, escape: number): void => {
     if (!(h > floor)) return;
     depth += Math.min(h, gapResinTop(floor, ceiling, escape)) - floor;
@@ -90,9 +92,12 @@ function samplingErrorMm3(depths: Float64Array, nx: number, ny: number, cellX: n
   let sum = 0;
   for (let j = 0; j < ny; j++) {
     for (let i = 0; i < nx; i++) {
-      const c = j * nx + i, d = depths[c]!;
-      const left = i > 0 ? depths[c - 1]! : d, right = i + 1 < nx ? depths[c + 1]! : d;
-      const down = j > 0 ? depths[c - nx]! : d, up = j + 1 < ny ? depths[c + nx]! : d;
+      const c = j * nx + i,
+        d = depths[c]!;
+      const left = i > 0 ? depths[c - 1]! : d,
+        right = i + 1 < nx ? depths[c + 1]! : d;
+      const down = j > 0 ? depths[c - nx]! : d,
+        up = j + 1 < ny ? depths[c + nx]! : d;
       sum += Math.abs(left - 2 * d + right) + Math.abs(down - 2 * d + up);
     }
   }

@@ -21,7 +21,14 @@ describe('column grid', () => {
   it('meets every seam exactly once: a pyramid whose apex and edges run through column centres', () => {
     // A square pyramid on a 10 × 10 base, apex above the centre; 10 columns a side put the apex
     // on a corner of four cells and the diagonal edges through cell centres.
-    const pyramid = revolvedSolid([[0, 0], [5 * Math.SQRT2, 0], [0, 6]], 4);
+    const pyramid = revolvedSolid(
+      [
+        [0, 0],
+        [5 * Math.SQRT2, 0],
+        [0, 6],
+      ],
+      4,
+    );
     const { grid: g, unbalancedColumns } = grid(pyramid, 11, 11);
     expect(unbalancedColumns).toBe(0);
     let pairs = 0;
@@ -33,7 +40,11 @@ describe('column grid', () => {
   });
 
   it('gives each column of a block one interval, the block’s full height', () => {
-    const { grid: g } = grid(cellSolid([0, 3, 7, 10], [0, 4, 8], [0, 2, 5], () => true), 7, 8);
+    const { grid: g } = grid(
+      cellSolid([0, 3, 7, 10], [0, 4, 8], [0, 2, 5], () => true),
+      7,
+      8,
+    );
     for (let c = 0; c < g.nx * g.ny; c++) {
       expect(g.counts[c]).toBe(1);
       expect([g.intervals[2 * g.offsets[c]!], g.intervals[2 * g.offsets[c]! + 1]]).toEqual([0, 5]);
@@ -44,7 +55,8 @@ describe('column grid', () => {
     // A table: slab 2..3 mm on four legs; columns through the slab away from the legs meet it once.
     const table = cellSolid([0, 1, 9, 10], [0, 1, 9, 10], [0, 2, 3], (i, j, k) => k === 1 || (i !== 1 && j !== 1));
     const { grid: g } = grid(table, 10, 10);
-    const centre = 5 * 10 + 5, leg = 0;
+    const centre = 5 * 10 + 5,
+      leg = 0;
     expect(g.counts[centre]).toBe(1);
     expect([g.intervals[2 * g.offsets[centre]!], g.intervals[2 * g.offsets[centre]! + 1]]).toEqual([2, 3]);
     expect(g.counts[leg]).toBe(1);

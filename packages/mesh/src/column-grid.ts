@@ -45,11 +45,19 @@ export function offsetsFromCounts(counts: Uint16Array): Uint32Array {
 }
 
 export function buildColumnGrid(
-  positions: Float64Array, triangles: Uint32Array, table: TriangleTable, rect: PlaneRect,
-  floorZ: number, nx: number, ny: number, repair: boolean,
+  positions: Float64Array,
+  triangles: Uint32Array,
+  table: TriangleTable,
+  rect: PlaneRect,
+  floorZ: number,
+  nx: number,
+  ny: number,
+  repair: boolean,
 ): ColumnGridBuild {
-  const originX = rect.minX, originY = rect.minY;
-  const cellX = (rect.maxX - rect.minX) / nx, cellY = (rect.maxY - rect.minY) / ny;
+  const originX = rect.minX,
+    originY = rect.minY;
+  const cellX = (rect.maxX - rect.minX) / nx,
+    cellY = (rect.maxY - rect.minY) / ny;
   let capacity = 2 * nx * ny + 1024;
   let hitColumn = new Int32Array(capacity);
   let hitZ = new Float64Array(capacity);
@@ -61,11 +69,20 @@ export function buildColumnGrid(
   for (let t = 0; t < table.count; t++) {
     const facing = table.facing[t]!;
     if (facing === 0) continue;
-    const a = 3 * triangles[3 * t]!, b = 3 * triangles[3 * t + 1]!, c = 3 * triangles[3 * t + 2]!;
-    const x0 = positions[a]!, y0 = positions[a + 1]!, z0 = positions[a + 2]!;
-    const x1 = positions[b]!, y1 = positions[b + 1]!, z1 = positions[b + 2]!;
-    const x2 = positions[c]!, y2 = positions[c + 1]!, z2 = positions[c + 2]!;
-    const minY = Math.min(y0, y1, y2), maxY = Math.max(y0, y1, y2);
+    const a = 3 * triangles[3 * t]!,
+      b = 3 * triangles[3 * t + 1]!,
+      c = 3 * triangles[3 * t + 2]!;
+    const x0 = positions[a]!,
+      y0 = positions[a + 1]!,
+      z0 = positions[a + 2]!;
+    const x1 = positions[b]!,
+      y1 = positions[b + 1]!,
+      z1 = positions[b + 2]!;
+    const x2 = positions[c]!,
+      y2 = positions[c + 1]!,
+      z2 = positions[c + 2]!;
+    const minY = Math.min(y0, y1, y2),
+      maxY = Math.max(y0, y1, y2);
     const jLo = Math.max(0, Math.ceil((minY - originY) / cellY - 0.5 - 1e-9));
     const jHi = Math.min(ny - 1, Math.floor((maxY - originY) / cellY - 0.5 + 1e-9));
     if (jLo > jHi) continue;
@@ -73,10 +90,17 @@ export function buildColumnGrid(
     const s1 = edgeValue(x2, y2, x0, y0, x1, y1);
     const s2 = edgeValue(x0, y0, x1, y1, x2, y2);
     if (s0 === 0 || s1 === 0 || s2 === 0) continue;
-    const ux = x1 - x0, uy = y1 - y0, uz = z1 - z0, vx = x2 - x0, vy = y2 - y0, vz = z2 - z0;
+    const ux = x1 - x0,
+      uy = y1 - y0,
+      uz = z1 - z0,
+      vx = x2 - x0,
+      vy = y2 - y0,
+      vz = z2 - z0;
     const nz = ux * vy - uy * vx;
-    const gx = -(uy * vz - uz * vy) / nz, gy = -(uz * vx - ux * vz) / nz;
-    const zLo = Math.min(z0, z1, z2), zHi = Math.max(z0, z1, z2);
+    const gx = -(uy * vz - uz * vy) / nz,
+      gy = -(uz * vx - ux * vz) / nz;
+    const zLo = Math.min(z0, z1, z2),
+      zHi = Math.max(z0, z1, z2);
     const up = facing > 0 ? 1 : 0;
     for (let j = jLo; j <= jHi; j++) {
       const py = originY + (j + 0.5) * cellY;
@@ -86,17 +110,25 @@ export function buildColumnGrid(
       for (let i = iLo; i <= iHi; i++) {
         const px = originX + (i + 0.5) * cellX;
         const e0 = edgeValue(x1, y1, x2, y2, px, py);
-        if (e0 === 0 ? s0 < 0 : (e0 > 0) !== (s0 > 0)) continue;
+        if (e0 === 0 ? s0 < 0 : e0 > 0 !== s0 > 0) continue;
         const e1 = edgeValue(x2, y2, x0, y0, px, py);
-        if (e1 === 0 ? s1 < 0 : (e1 > 0) !== (s1 > 0)) continue;
+        if (e1 === 0 ? s1 < 0 : e1 > 0 !== s1 > 0) continue;
         const e2 = edgeValue(x0, y0, x1, y1, px, py);
-        if (e2 === 0 ? s2 < 0 : (e2 > 0) !== (s2 > 0)) continue;
+        if (e2 === 0 ? s2 < 0 : e2 > 0 !== s2 > 0) continue;
         if (hits === capacity) {
           capacity *= 2;
-          const c2 = new Int32Array(capacity); c2.set(hitColumn); hitColumn = c2;
-          const z2b = new Float64Array(capacity); z2b.set(hitZ); hitZ = z2b;
-          const u2 = new Uint8Array(capacity); u2.set(hitUp); hitUp = u2;
-          const t2 = new Int32Array(capacity); t2.set(hitTri); hitTri = t2;
+          const c2 = new Int32Array(capacity);
+          c2.set(hitColumn);
+          hitColumn = c2;
+          const z2b = new Float64Array(capacity);
+          z2b.set(hitZ);
+          hitZ = z2b;
+          const u2 = new Uint8Array(capacity);
+          u2.set(hitUp);
+          hitUp = u2;
+          const t2 = new Int32Array(capacity);
+          t2.set(hitTri);
+          hitTri = t2;
         }
         hitTri[hits] = t;
         const z = z0 + gx * (px - x0) + gy * (py - y0);
@@ -158,18 +190,23 @@ export function buildColumnGrid(
   if (repair && unbalanced.length > 0) {
     // A ray through a seam can meet a neighbour twice or not at all; a nudge far below any
     // feature size moves it off the seam. The nudged rays are cast together.
-    const xs = new Float64Array(unbalanced.length), ys = new Float64Array(unbalanced.length);
+    const xs = new Float64Array(unbalanced.length),
+      ys = new Float64Array(unbalanced.length);
     unbalanced.forEach((col, r) => {
-      const i = col % nx, j = (col - i) / nx;
+      const i = col % nx,
+        j = (col - i) / nx;
       xs[r] = originX + (i + 0.5) * cellX + cellX * 1.3e-7;
       ys[r] = originY + (j + 0.5) * cellY + cellY * 0.7e-7;
     });
     const nudged = castRays(xs, ys, positions, triangles, table, rect, floorZ);
     const replaced = new Map<number, number>();
-    unbalanced.forEach((col, r) => { if (nudged.balanced[r]) replaced.set(col, r); });
+    unbalanced.forEach((col, r) => {
+      if (nudged.balanced[r]) replaced.set(col, r);
+    });
     if (replaced.size > 0) {
       const oldOffsets = offsetsFromCounts(counts);
-      const merged: number[] = [], mergedBottoms: number[] = [];
+      const merged: number[] = [],
+        mergedBottoms: number[] = [];
       for (let col = 0; col < columns; col++) {
         const r = replaced.get(col);
         if (r === undefined) {
@@ -178,7 +215,8 @@ export function buildColumnGrid(
             mergedBottoms.push(bottoms[k]!);
           }
         } else {
-          const from = nudged.start[r]!, to = nudged.start[r + 1]!;
+          const from = nudged.start[r]!,
+            to = nudged.start[r + 1]!;
           for (let k = from; k < to; k++) {
             merged.push(nudged.intervals[2 * k]!, nudged.intervals[2 * k + 1]!);
             mergedBottoms.push(nudged.bottomTriangles[k]!);

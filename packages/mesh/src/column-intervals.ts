@@ -16,11 +16,21 @@ export interface Pairing {
  * the bottom is the floor of a surface open underneath.
  */
 export function pairCrossings(
-  z: Float64Array, up: Uint8Array, tri: Int32Array | null, from: number, to: number, floorZ: number,
-  out: Float32Array | Float64Array, outAt: number, outTri: Int32Array | null, pairing: Pairing,
+  z: Float64Array,
+  up: Uint8Array,
+  tri: Int32Array | null,
+  from: number,
+  to: number,
+  floorZ: number,
+  out: Float32Array | Float64Array,
+  outAt: number,
+  outTri: Int32Array | null,
+  pairing: Pairing,
 ): void {
   for (let i = from + 1; i < to; i++) {
-    const zi = z[i]!, ui = up[i]!, ti = tri ? tri[i]! : 0;
+    const zi = z[i]!,
+      ui = up[i]!,
+      ti = tri ? tri[i]! : 0;
     let j = i - 1;
     while (j >= from && (z[j]! < zi || (z[j] === zi && up[j]! < ui))) {
       z[j + 1] = z[j]!;
@@ -40,7 +50,8 @@ export function pairCrossings(
   let written = 0;
   const triAt = outAt / 2;
   for (let i = from; i <= to; i++) {
-    let bottom: number, bottomTri = -1;
+    let bottom: number,
+      bottomTri = -1;
     if (i < to) {
       if (up[i]) {
         if (winding === 0) top = z[i]!;
@@ -89,12 +100,23 @@ export function pairCrossings(
 
 /** Height where the vertical line through (x, y) meets the plane of triangle t. */
 export function planeZAt(positions: Float64Array, triangles: Uint32Array, t: number, x: number, y: number): number {
-  const a = 3 * triangles[3 * t]!, b = 3 * triangles[3 * t + 1]!, c = 3 * triangles[3 * t + 2]!;
-  const ax = positions[a]!, ay = positions[a + 1]!, az = positions[a + 2]!;
-  const ux = positions[b]! - ax, uy = positions[b + 1]! - ay, uz = positions[b + 2]! - az;
-  const vx = positions[c]! - ax, vy = positions[c + 1]! - ay, vz = positions[c + 2]! - az;
-  const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
+  const a = 3 * triangles[3 * t]!,
+    b = 3 * triangles[3 * t + 1]!,
+    c = 3 * triangles[3 * t + 2]!;
+  const ax = positions[a]!,
+    ay = positions[a + 1]!,
+    az = positions[a + 2]!;
+  const ux = positions[b]! - ax,
+    uy = positions[b + 1]! - ay,
+    uz = positions[b + 2]! - az;
+  const vx = positions[c]! - ax,
+    vy = positions[c + 1]! - ay,
+    vz = positions[c + 2]! - az;
+  const nx = uy * vz - uz * vy,
+    ny = uz * vx - ux * vz,
+    nz = ux * vy - uy * vx;
   const z = az - (nx * (x - ax) + ny * (y - ay)) / nz;
-  const lo = Math.min(az, positions[b + 2]!, positions[c + 2]!), hi = Math.max(az, positions[b + 2]!, positions[c + 2]!);
+  const lo = Math.min(az, positions[b + 2]!, positions[c + 2]!),
+    hi = Math.max(az, positions[b + 2]!, positions[c + 2]!);
   return z < lo ? lo : z > hi ? hi : z;
 }

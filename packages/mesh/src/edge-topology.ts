@@ -29,7 +29,9 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
   const start = memory.uint32(vertexCount + 1).fill(0);
   // Triangle by triangle, its three half-edges a→b, b→c, c→a (no modulo per half-edge).
   for (let e = 0; e < halfEdges; e += 3) {
-    const a = triangles[e]!, b = triangles[e + 1]!, c = triangles[e + 2]!;
+    const a = triangles[e]!,
+      b = triangles[e + 1]!,
+      c = triangles[e + 2]!;
     start[(a < b ? a : b) + 1]!++;
     start[(b < c ? b : c) + 1]!++;
     start[(c < a ? c : a) + 1]!++;
@@ -42,36 +44,50 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
   const grouped = memory.uint32(withNeighbours ? halfEdges : 0);
   const upperWay = memory.uint32(halfEdges);
   for (let e = 0; e < halfEdges; e += 3) {
-    const a = triangles[e]!, b = triangles[e + 1]!, c = triangles[e + 2]!;
+    const a = triangles[e]!,
+      b = triangles[e + 1]!,
+      c = triangles[e + 2]!;
     const at0 = fill[a < b ? a : b]!++;
     upperWay[at0] = a < b ? (b | 0x80000000) >>> 0 : a;
     const at1 = fill[b < c ? b : c]!++;
     upperWay[at1] = b < c ? (c | 0x80000000) >>> 0 : b;
     const at2 = fill[c < a ? c : a]!++;
     upperWay[at2] = c < a ? (a | 0x80000000) >>> 0 : c;
-    if (withNeighbours) { grouped[at0] = e; grouped[at1] = e + 1; grouped[at2] = e + 2; }
+    if (withNeighbours) {
+      grouped[at0] = e;
+      grouped[at1] = e + 1;
+      grouped[at2] = e + 2;
+    }
   }
 
   const neighbour = withNeighbours ? new Int32Array(halfEdges).fill(-1) : new Int32Array(0);
   const sameDirection = new Uint8Array(withNeighbours ? halfEdges : 0);
   // Entries already paired are overwritten with this mark (no vertex has the largest index).
   const done = 0xffffffff;
-  let edgeCount = 0, openEdges = 0, nonManifoldEdges = 0, misorientedEdges = 0;
+  let edgeCount = 0,
+    openEdges = 0,
+    nonManifoldEdges = 0,
+    misorientedEdges = 0;
 
   for (let v = 0; v < vertexCount; v++) {
-    const from = start[v]!, to = start[v + 1]!;
+    const from = start[v]!,
+      to = start[v + 1]!;
     for (let i = from; i < to; i++) {
       const way = upperWay[i]!;
       if (way === done) continue;
       const upper = way & 0x7fffffff;
       let uses = 1;
-      let j2 = -1, way2 = 0;
+      let j2 = -1,
+        way2 = 0;
       for (let j = i + 1; j < to; j++) {
         const other = upperWay[j]!;
         if (other === done || (other & 0x7fffffff) !== upper) continue;
         upperWay[j] = done;
         uses++;
-        if (j2 < 0) { j2 = j; way2 = other; }
+        if (j2 < 0) {
+          j2 = j;
+          way2 = other;
+        }
       }
       edgeCount++;
       if (uses === 1) {
@@ -82,7 +98,8 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
         const same = way >>> 31 === way2 >>> 31 ? 1 : 0;
         if (same) misorientedEdges++;
         if (withNeighbours) {
-          const e1 = grouped[i]!, e2 = grouped[j2]!;
+          const e1 = grouped[i]!,
+            e2 = grouped[j2]!;
           neighbour[e1] = (e2 / 3) | 0;
           neighbour[e2] = (e1 / 3) | 0;
           sameDirection[e1] = same;

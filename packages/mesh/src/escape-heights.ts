@@ -48,7 +48,9 @@ function cornerTriangles(triangles: Uint32Array, vertexCount: number): { start: 
   return { start, list };
 }
 
-const solidAbove = 0, freeAbove = 1, undecided = 2;
+const solidAbove = 0,
+  freeAbove = 1,
+  undecided = 2;
 
 /**
  * Whether the space just above corner v is free, from v's own triangles. The vertical line is
@@ -60,17 +62,29 @@ const solidAbove = 0, freeAbove = 1, undecided = 2;
  */
 function cornerSide(table: TriangleTable, v: number, start: Uint32Array, list: Uint32Array): number {
   const { positions, triangles, facing } = table;
-  const vx = positions[3 * v]!, vy = positions[3 * v + 1]!;
-  let bestGy = -Infinity, bestNegGx = -Infinity, side = undecided;
+  const vx = positions[3 * v]!,
+    vy = positions[3 * v + 1]!;
+  let bestGy = -Infinity,
+    bestNegGx = -Infinity,
+    side = undecided;
   for (let k = start[v]!; k < start[v + 1]!; k++) {
     const t = list[k]!;
     if (facing[t] === 0) continue;
-    const a = 3 * triangles[3 * t]!, b = 3 * triangles[3 * t + 1]!, c = 3 * triangles[3 * t + 2]!;
+    const a = 3 * triangles[3 * t]!,
+      b = 3 * triangles[3 * t + 1]!,
+      c = 3 * triangles[3 * t + 2]!;
     if (!shadowContains(positions[a]!, positions[a + 1]!, positions[b]!, positions[b + 1]!, positions[c]!, positions[c + 1]!, vx, vy)) continue;
-    const ux = positions[b]! - positions[a]!, uy = positions[b + 1]! - positions[a + 1]!, uz = positions[b + 2]! - positions[a + 2]!;
-    const wx = positions[c]! - positions[a]!, wy = positions[c + 1]! - positions[a + 1]!, wz = positions[c + 2]! - positions[a + 2]!;
-    const nx = uy * wz - uz * wy, ny = uz * wx - ux * wz, nz = ux * wy - uy * wx;
-    const gy = -ny / nz, negGx = nx / nz;
+    const ux = positions[b]! - positions[a]!,
+      uy = positions[b + 1]! - positions[a + 1]!,
+      uz = positions[b + 2]! - positions[a + 2]!;
+    const wx = positions[c]! - positions[a]!,
+      wy = positions[c + 1]! - positions[a + 1]!,
+      wz = positions[c + 2]! - positions[a + 2]!;
+    const nx = uy * wz - uz * wy,
+      ny = uz * wx - ux * wz,
+      nz = ux * wy - uy * wx;
+    const gy = -ny / nz,
+      negGx = nx / nz;
     if (gy > bestGy || (gy === bestGy && negGx > bestNegGx)) {
       bestGy = gy;
       bestNegGx = negGx;
@@ -90,7 +104,9 @@ interface UpwardHit {
 /** The vertical line through corner v (by the tie rule), above v: what it meets first and whether it starts in the free space. */
 function castUp(table: TriangleTable, index: ShadowIndex, v: number, out: UpwardHit): void {
   const { positions, triangles, facing } = table;
-  const vx = positions[3 * v]!, vy = positions[3 * v + 1]!, vz = positions[3 * v + 2]!;
+  const vx = positions[3 * v]!,
+    vy = positions[3 * v + 1]!,
+    vz = positions[3 * v + 2]!;
   const i = Math.min(index.nx - 1, Math.max(0, Math.floor((vx - index.originX) / index.cellX)));
   const j = Math.min(index.ny - 1, Math.max(0, Math.floor((vy - index.originY) / index.cellY)));
   const cell = j * index.nx + i;
@@ -99,15 +115,21 @@ function castUp(table: TriangleTable, index: ShadowIndex, v: number, out: Upward
   out.winding = 0;
   for (let k = index.start[cell]!; k < index.start[cell + 1]!; k++) {
     const t = index.items[k]!;
-    const a = triangles[3 * t]!, b = triangles[3 * t + 1]!, c = triangles[3 * t + 2]!;
+    const a = triangles[3 * t]!,
+      b = triangles[3 * t + 1]!,
+      c = triangles[3 * t + 2]!;
     // The corner's own triangles meet the line at the corner itself, not above it.
     if (a === v || b === v || c === v) continue;
     if (table.sortedZ[3 * t + 2]! <= vz) continue;
-    if (!shadowContains(positions[3 * a]!, positions[3 * a + 1]!, positions[3 * b]!, positions[3 * b + 1]!, positions[3 * c]!, positions[3 * c + 1]!, vx, vy)) continue;
+    if (!shadowContains(positions[3 * a]!, positions[3 * a + 1]!, positions[3 * b]!, positions[3 * b + 1]!, positions[3 * c]!, positions[3 * c + 1]!, vx, vy))
+      continue;
     const z = planeZAt(positions, triangles, t, vx, vy);
     if (!(z > vz)) continue;
     out.winding += facing[t]! > 0 ? 1 : -1;
-    if (z < lowest) { lowest = z; out.triangle = t; }
+    if (z < lowest) {
+      lowest = z;
+      out.triangle = t;
+    }
   }
 }
 
@@ -162,7 +184,10 @@ export function escapeHeights(table: TriangleTable, vertexCount: number, rect: P
   const size = new Uint32Array(vertexCount + 1).fill(1);
   const next = new Int32Array(vertexCount + 1).fill(-1);
   const tail = new Int32Array(vertexCount + 1);
-  for (let v = 0; v <= vertexCount; v++) { parent[v] = v; tail[v] = v; }
+  for (let v = 0; v <= vertexCount; v++) {
+    parent[v] = v;
+    tail[v] = v;
+  }
   const escape = new Float64Array(vertexCount).fill(-Infinity);
   const find = (a: number): number => {
     while (parent[a] !== a) {
@@ -173,7 +198,8 @@ export function escapeHeights(table: TriangleTable, vertexCount: number, rect: P
   };
   let height = 0;
   const union = (a: number, b: number): void => {
-    let ra = find(a), rb = find(b);
+    let ra = find(a),
+      rb = find(b);
     if (ra === rb) return;
     const skyRoot = find(sky);
     if (ra === skyRoot || rb === skyRoot) {
@@ -181,7 +207,11 @@ export function escapeHeights(table: TriangleTable, vertexCount: number, rect: P
       const piece = ra === skyRoot ? rb : ra;
       for (let m = piece; m >= 0; m = next[m]!) escape[m] = height;
     }
-    if (size[ra]! < size[rb]!) { const s = ra; ra = rb; rb = s; }
+    if (size[ra]! < size[rb]!) {
+      const s = ra;
+      ra = rb;
+      rb = s;
+    }
     parent[rb] = ra;
     size[ra]! += size[rb]!;
     next[tail[ra]!] = rb;

@@ -8,7 +8,9 @@ import { fillAt } from './fill-queries';
 import type { CavityMesh } from './prepare-mesh';
 
 let kernel: ManifoldKernel;
-beforeAll(async () => { kernel = await loadManifold(); });
+beforeAll(async () => {
+  kernel = await loadManifold();
+});
 
 function fill(mesh: CavityMesh, levelMm: number, dam: 'outline' | 'box' = 'outline', levels: number[] = [levelMm]): CavityFill {
   return unwrap(fillAt(unwrap(analyzeCavity(mesh, { levelsMm: levels })), levelMm, dam));
@@ -25,13 +27,17 @@ describe('spherical bowl: a spherical cap of resin', () => {
   // Hemispherical bowl of radius r = 10 mm cut into the top (z = 20) of a 30 × 30 × 20 block,
   // filled to h = 3 above its lowest point. CRC Concise Encyclopedia of Mathematics, spherical cap:
   // V = πh²(3r − h)/3 = 254.469 mm³ and curved area 2πrh = 188.496 mm² for r = 10, h = 3.
-  const r = 10, h = 3, top = 20, level = top - r + h;
+  const r = 10,
+    h = 3,
+    top = 20,
+    level = top - r + h;
   const capVolume = (radius: number, height: number): number => (Math.PI * height * height * (3 * radius - height)) / 3;
   const capArea = (radius: number, height: number): number => 2 * Math.PI * radius * height;
   const segments = 256;
   const thetaLevel = Math.acos((r - h) / r);
   // Rings at even polar angles below and above the level, with one ring exactly on it.
-  const below = 48, above = 32;
+  const below = 48,
+    above = 32;
   const thetas = [
     ...Array.from({ length: below + 1 }, (_, k) => (thetaLevel * k) / below),
     ...Array.from({ length: above }, (_, k) => thetaLevel + ((Math.PI / 2 - thetaLevel) * (k + 1)) / above),
@@ -47,13 +53,17 @@ describe('spherical bowl: a spherical cap of resin', () => {
   it('equals the mesh’s own polyhedral volume and area to 0.01 % (frustum stack, computed independently)', () => {
     // Between two rings the resin is a frustum of a regular pyramid: V = Δz (A1 + A2 + √(A1 A2)) / 3
     // with N-gon areas A = (N/2) ρ² sin(2π/N); the wetted band is N trapezoids (CRC).
-    let volume = 0, area = 0;
+    let volume = 0,
+      area = 0;
     const ngon = (rho: number): number => (segments / 2) * rho * rho * Math.sin((2 * Math.PI) / segments);
     for (let k = 0; k < below; k++) {
-      const [r0, z0] = profile[k]!, [r1, z1] = profile[k + 1]!;
-      const a0 = ngon(r0), a1 = ngon(r1);
+      const [r0, z0] = profile[k]!,
+        [r1, z1] = profile[k + 1]!;
+      const a0 = ngon(r0),
+        a1 = ngon(r1);
       volume += ((z1 - z0) * (a0 + a1 + Math.sqrt(a0 * a1))) / 3;
-      const side0 = 2 * r0 * Math.sin(Math.PI / segments), side1 = 2 * r1 * Math.sin(Math.PI / segments);
+      const side0 = 2 * r0 * Math.sin(Math.PI / segments),
+        side1 = 2 * r1 * Math.sin(Math.PI / segments);
       const slant = Math.hypot(z1 - z0, (r1 - r0) * Math.cos(Math.PI / segments));
       area += (segments * (side0 + side1) * slant) / 2;
     }
@@ -74,7 +84,8 @@ describe('spherical bowl: a spherical cap of resin', () => {
     // balls cut by the same plane, 7 mm below the centre.
     const dTheta = Math.max(thetaLevel / below, (Math.PI / 2 - thetaLevel) / above);
     const alpha = 0.5 * Math.hypot(dTheta, (2 * Math.PI) / segments);
-    const inner = r * Math.cos(alpha), depthBelowCentre = r - h;
+    const inner = r * Math.cos(alpha),
+      depthBelowCentre = r - h;
     expect(result.volumeMm3).toBeLessThanOrEqual(capVolume(r, h) * (1 + 1e-6));
     expect(result.volumeMm3).toBeGreaterThanOrEqual(capVolume(inner, inner - depthBelowCentre) * (1 - 1e-6));
     // Areas of nested convex bodies grow with the body (Cauchy's surface area formula), so the
@@ -96,13 +107,28 @@ describe('spherical bowl: a spherical cap of resin', () => {
 describe('frustum pocket', () => {
   // A pocket with a 6 mm floor radius widening to 10 mm over 8 mm. CRC, conical frustum:
   // V = πh(R² + Rr + r²)/3 = 1642.006 mm³ for R = 10, r = 6, h = 8.
-  const R = 10, r = 6, h = 8, floor = 10;
+  const R = 10,
+    r = 6,
+    h = 8,
+    floor = 10;
   const frustum = (Math.PI * h * (R * R + R * r + r * r)) / 3;
 
   it('holds exactly the polygonal frustum: the N-gon area factor N sin(2π/N)/(2π) times the cone’s', () => {
     expect(frustum).toBeCloseTo(1642.006, 3);
     for (const segments of [32, 128, 512]) {
-      const mesh = meshOf(revolvedPocketBlock({ halfSide: 15, bottomZ: 0, topZ: floor + h, profile: [[0, floor], [r, floor], [R, floor + h]], segments }));
+      const mesh = meshOf(
+        revolvedPocketBlock({
+          halfSide: 15,
+          bottomZ: 0,
+          topZ: floor + h,
+          profile: [
+            [0, floor],
+            [r, floor],
+            [R, floor + h],
+          ],
+          segments,
+        }),
+      );
       const f = fill(mesh, floor + h);
       // Regular N-gon inscribed in a circle: area (N/2) ρ² sin(2π/N) (CRC), so every cross-section
       // of the polygonal frustum is the circle's times that factor, and so is its volume.
@@ -118,17 +144,26 @@ describe('frustum pocket', () => {
 describe('analytic terrain: a height-field cavity', () => {
   // Top surface z = T − d sin(πx/a) sin(πy/b) over a × b: filled to T the resin holds
   // ∫∫ d sin sin = 4abd/π² (calculus: ∫₀ᵃ sin(πx/a) dx = 2a/π).
-  const a = 60, b = 40, d = 5, T = 20;
+  const a = 60,
+    b = 40,
+    d = 5,
+    T = 20;
   const analytic = (4 * a * b * d) / Math.PI ** 2;
 
   it('matches the trapezoid-rule closed form of the triangulated surface, and tends to 4abd/π²', () => {
-    for (const [nx, ny] of [[12, 8], [60, 40], [240, 160]] as const) {
-      const mesh = meshOf(heightFieldBlock({ width: a, depth: b, bottomZ: 0, nx, ny, top: (x, y) => T - d * Math.sin((Math.PI * x) / a) * Math.sin((Math.PI * y) / b) }));
+    for (const [nx, ny] of [
+      [12, 8],
+      [60, 40],
+      [240, 160],
+    ] as const) {
+      const mesh = meshOf(
+        heightFieldBlock({ width: a, depth: b, bottomZ: 0, nx, ny, top: (x, y) => T - d * Math.sin((Math.PI * x) / a) * Math.sin((Math.PI * y) / b) }),
+      );
       const f = fill(mesh, T);
       // Two triangles per grid square integrate like the 2-D trapezoid rule; with the depth zero
       // on the rim that is d (a/nx) Σ sin(πi/nx) · (b/ny) Σ sin(πj/ny), and
       // Σ_{k=1}^{n−1} sin(kπ/n) = cot(π/2n) (CRC, finite sum of sines).
-      const trapezoid = d * (a / nx) / Math.tan(Math.PI / (2 * nx)) * (b / ny) / Math.tan(Math.PI / (2 * ny));
+      const trapezoid = (((d * (a / nx)) / Math.tan(Math.PI / (2 * nx))) * (b / ny)) / Math.tan(Math.PI / (2 * ny));
       expect(relative(f.volumeMm3, trapezoid)).toBeLessThan(1e-5);
       // The trapezoid rule's ratio to the integral is [(π/2n) cot(π/2n)]² per axis, derived above.
       const ratio = (Math.PI / (2 * nx) / Math.tan(Math.PI / (2 * nx))) * (Math.PI / (2 * ny) / Math.tan(Math.PI / (2 * ny)));
@@ -144,7 +179,17 @@ describe('against manifold-3d booleans', () => {
   it('box dam: bounding-box prism minus mould, for moulds without overhangs', () => {
     const moulds = [
       heightFieldBlock({ width: 50, depth: 30, bottomZ: -4, nx: 40, ny: 30, top: (x, y) => 10 - 3 * Math.cos(x / 6) * Math.sin(y / 4) }),
-      revolvedSolid([[0, 0], [30, 0], [30, 20], [25, 20], [25, 5], [0, 5]], 64),
+      revolvedSolid(
+        [
+          [0, 0],
+          [30, 0],
+          [30, 20],
+          [25, 20],
+          [25, 5],
+          [0, 5],
+        ],
+        64,
+      ),
       cellSolid([0, 10, 30, 40], [0, 15, 30], [0, 6, 14], (i, j, k) => k === 0 || i === 0 || (j === 0 && i !== 1)),
     ];
     for (const generated of moulds) {
@@ -162,7 +207,19 @@ describe('against manifold-3d booleans', () => {
   });
 
   it('outline dam: the mould’s own shadow extruded, minus the mould (a round tray, an L-shaped block)', () => {
-    const tray = meshOf(revolvedSolid([[0, 0], [30, 0], [30, 20], [25, 20], [25, 5], [0, 5]], 64));
+    const tray = meshOf(
+      revolvedSolid(
+        [
+          [0, 0],
+          [30, 0],
+          [30, 20],
+          [25, 20],
+          [25, 5],
+          [0, 5],
+        ],
+        64,
+      ),
+    );
     const ell = meshOf(cellSolid([0, 2, 8, 10, 30], [0, 2, 8, 12, 30], [0, 4, 9], (i, j, k) => (i <= 2 || j <= 2) && !(k === 1 && i === 1 && j === 1)));
     expect(ell.topology.watertight).toBe(true);
     for (const mesh of [tray, ell]) {
@@ -176,9 +233,22 @@ describe('against manifold-3d booleans', () => {
   });
 
   it('outline and box dams agree where the outline is the bounding box', () => {
-    const mesh = meshOf(revolvedPocketBlock({ halfSide: 20, bottomZ: 0, topZ: 12, profile: [[0, 4], [9, 4], [15, 12]], segments: 64 }));
+    const mesh = meshOf(
+      revolvedPocketBlock({
+        halfSide: 20,
+        bottomZ: 0,
+        topZ: 12,
+        profile: [
+          [0, 4],
+          [9, 4],
+          [15, 12],
+        ],
+        segments: 64,
+      }),
+    );
     for (const level of [6, 12, 14]) {
-      const outline = fill(mesh, level, 'outline'), box = fill(mesh, level, 'box');
+      const outline = fill(mesh, level, 'outline'),
+        box = fill(mesh, level, 'box');
       expect(relative(outline.volumeMm3, box.volumeMm3)).toBeLessThan(1e-12);
       expect(relative(outline.volumeMm3, boxDamResin(kernel, mesh, level).volume())).toBeLessThan(1e-6);
     }

@@ -130,7 +130,13 @@ export function fillAt(source: CavitySource, levelMm: number, dam: Dam = 'outlin
     },
     get depthMap(): DepthMap {
       const grid = model.value.grid;
-      return (depthMap ??= { originMm: [grid.originX, grid.originY], cellMm: [grid.cellX, grid.cellY], nx: grid.nx, ny: grid.ny, depthsMm: columns().depthsMm });
+      return (depthMap ??= {
+        originMm: [grid.originX, grid.originY],
+        cellMm: [grid.cellX, grid.cellY],
+        nx: grid.nx,
+        ny: grid.ny,
+        depthsMm: columns().depthsMm,
+      });
     },
     warnings,
   });
@@ -175,7 +181,9 @@ export function curve(source: CavitySource, levels: number | number[], dam: Dam 
   const sorted = Float64Array.from(order.map((i) => points[i]!));
   const volumes = columnCurve(m.grid, sorted, dam, m.analysis.bboxMm.min[2]);
   const out: CurvePoint[] = new Array(points.length);
-  order.forEach((i, k) => { out[i] = { levelMm: points[i]!, volumeMm3: volumes[k]! }; });
+  order.forEach((i, k) => {
+    out[i] = { levelMm: points[i]!, volumeMm3: volumes[k]! };
+  });
   return ok(out);
 }
 
@@ -184,7 +192,10 @@ export function layerVolumes(source: CavitySource, levelsMm: number[], dam: Dam 
   if (levelsMm.length < 2) return fail('level_invalid', `Layers need at least two levels (the bottom and the top of the first layer), got ${levelsMm.length}.`);
   for (let i = 1; i < levelsMm.length; i++) {
     if (!(levelsMm[i]! >= levelsMm[i - 1]!)) {
-      return fail('levels_not_ascending', `Layer level ${i + 1} (${String(levelsMm[i])} mm) is below the level before it; list the layer levels from the bottom up.`);
+      return fail(
+        'levels_not_ascending',
+        `Layer level ${i + 1} (${String(levelsMm[i])} mm) is below the level before it; list the layer levels from the bottom up.`,
+      );
     }
   }
   const points = curve(source, levelsMm, dam);

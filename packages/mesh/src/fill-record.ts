@@ -35,7 +35,15 @@ export function fillRecord(f: CavityFill, withDepthMap: boolean): FillRecord {
     trappedAirMm3: f.trappedAirMm3,
     warnings: f.warnings.map((w) => ({ code: w.code, message: w.message })),
     ...(withDepthMap
-      ? { depthMap: { originMm: f.depthMap.originMm, cellMm: f.depthMap.cellMm, nx: f.depthMap.nx, ny: f.depthMap.ny, depthsMm: Array.from(f.depthMap.depthsMm, (d) => Math.round(d * 1000) / 1000) } }
+      ? {
+          depthMap: {
+            originMm: f.depthMap.originMm,
+            cellMm: f.depthMap.cellMm,
+            nx: f.depthMap.nx,
+            ny: f.depthMap.ny,
+            depthsMm: Array.from(f.depthMap.depthsMm, (d) => Math.round(d * 1000) / 1000),
+          },
+        }
       : {}),
   };
 }

@@ -17,7 +17,11 @@ describe('units and up axis', () => {
 
   it('turns each up axis into z with a proper rotation (determinant +1, linear algebra)', () => {
     for (const up of ['x', 'y', 'z'] as const) {
-      const columns = [[1, 0, 0], [0, 1, 0], [0, 0, 1]].map(([x, y, z]) => {
+      const columns = [
+        [1, 0, 0],
+        [0, 1, 0],
+        [0, 0, 1],
+      ].map(([x, y, z]) => {
         const out = new Float64Array(3);
         toZUpMm(x!, y!, z!, up, 1, out, 0);
         return Array.from(out);

@@ -36,10 +36,16 @@ export function checkUpAxis(up: unknown): Result<UpAxis> {
  */
 export function toZUpMm(x: number, y: number, z: number, up: UpAxis, scale: number, out: Float64Array, at: number): void {
   if (up === 'z') {
-    out[at] = x * scale; out[at + 1] = y * scale; out[at + 2] = z * scale;
+    out[at] = x * scale;
+    out[at + 1] = y * scale;
+    out[at + 2] = z * scale;
   } else if (up === 'y') {
-    out[at] = x * scale; out[at + 1] = -z * scale; out[at + 2] = y * scale;
+    out[at] = x * scale;
+    out[at + 1] = -z * scale;
+    out[at + 2] = y * scale;
   } else {
-    out[at] = y * scale; out[at + 1] = z * scale; out[at + 2] = x * scale;
+    out[at] = y * scale;
+    out[at + 1] = z * scale;
+    out[at + 2] = x * scale;
   }
 }

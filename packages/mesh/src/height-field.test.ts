@@ -14,7 +14,21 @@ function heightField(generated: Parameters<typeof meshOf>[0]): boolean {
 describe('height-field check', () => {
   it('accepts pockets, bowls and steps', () => {
     expect(heightField(cellSolid([0, 5, 15, 20], [0, 5, 15, 20], [0, 4, 10], (i, j, k) => !(i === 1 && j === 1 && k === 1)))).toBe(true);
-    expect(heightField(revolvedPocketBlock({ halfSide: 12, bottomZ: 0, topZ: 10, profile: [[0, 3], [5, 3], [9, 10]], segments: 32 }))).toBe(true);
+    expect(
+      heightField(
+        revolvedPocketBlock({
+          halfSide: 12,
+          bottomZ: 0,
+          topZ: 10,
+          profile: [
+            [0, 3],
+            [5, 3],
+            [9, 10],
+          ],
+          segments: 32,
+        }),
+      ),
+    ).toBe(true);
   });
 
   it('accepts an overhang with nothing below it (a mushroom cap beyond the footprint)', () => {
@@ -23,12 +37,21 @@ describe('height-field check', () => {
 
   it('rejects an undercut: a chamber wider than the shaft above it', () => {
     const xs = [0, 5, 15, 25, 35, 40];
-    expect(heightField(cellSolid(xs, xs, [0, 5, 10, 20], (i, j, k) => !((k === 2 && i === 2 && j === 2) || (k === 1 && i >= 1 && i <= 3 && j >= 1 && j <= 3))))).toBe(false);
+    expect(
+      heightField(cellSolid(xs, xs, [0, 5, 10, 20], (i, j, k) => !((k === 2 && i === 2 && j === 2) || (k === 1 && i >= 1 && i <= 3 && j >= 1 && j <= 3)))),
+    ).toBe(false);
   });
 
   it('rejects a block floating over another', () => {
     const lower = cellSolid([0, 10], [0, 10], [0, 3], () => true);
-    expect(heightField(combined(lower, mapped(lower, (x, y, z) => [x + 4, y + 4, z + 5])))).toBe(false);
+    expect(
+      heightField(
+        combined(
+          lower,
+          mapped(lower, (x, y, z) => [x + 4, y + 4, z + 5]),
+        ),
+      ),
+    ).toBe(false);
   });
 
   it('rejects a thin undercut far smaller than any sampling grid would see', () => {

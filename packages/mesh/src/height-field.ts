@@ -17,37 +17,57 @@ export interface HeightFieldCheck {
  * the overlap's area, writing its vertex average — a point inside it — to centre.
  */
 function shadowOverlap(u: Float64Array, d: Float64Array, centre: Float64Array, work: { a: Float64Array; b: Float64Array }): number {
-  let src = work.a, dst = work.b;
+  let src = work.a,
+    dst = work.b;
   for (let k = 0; k < 6; k++) src[k] = u[k]!;
   let count = 3;
   for (let e = 0; e < 3 && count > 0; e++) {
-    const px = d[2 * e]!, py = d[2 * e + 1]!;
-    const qx = d[(2 * e + 2) % 6]!, qy = d[(2 * e + 3) % 6]!;
-    const rx = d[(2 * e + 4) % 6]!, ry = d[(2 * e + 5) % 6]!;
-    const ex = qx - px, ey = qy - py;
+    const px = d[2 * e]!,
+      py = d[2 * e + 1]!;
+    const qx = d[(2 * e + 2) % 6]!,
+      qy = d[(2 * e + 3) % 6]!;
+    const rx = d[(2 * e + 4) % 6]!,
+      ry = d[(2 * e + 5) % 6]!;
+    const ex = qx - px,
+      ey = qy - py;
     const inward = ex * (ry - py) - ey * (rx - px) > 0 ? 1 : -1;
     let out = 0;
     for (let i = 0; i < count; i++) {
-      const ax = src[2 * i]!, ay = src[2 * i + 1]!;
-      const bx = src[(2 * i + 2) % (2 * count)]!, by = src[(2 * i + 3) % (2 * count)]!;
+      const ax = src[2 * i]!,
+        ay = src[2 * i + 1]!;
+      const bx = src[(2 * i + 2) % (2 * count)]!,
+        by = src[(2 * i + 3) % (2 * count)]!;
       const sa = inward * (ex * (ay - py) - ey * (ax - px));
       const sb = inward * (ex * (by - py) - ey * (bx - px));
-      if (sa >= 0) { dst[2 * out] = ax; dst[2 * out + 1] = ay; out++; }
-      if ((sa >= 0) !== (sb >= 0)) {
+      if (sa >= 0) {
+        dst[2 * out] = ax;
+        dst[2 * out + 1] = ay;
+        out++;
+      }
+      if (sa >= 0 !== sb >= 0) {
         const s = sa / (sa - sb);
-        dst[2 * out] = ax + s * (bx - ax); dst[2 * out + 1] = ay + s * (by - ay); out++;
+        dst[2 * out] = ax + s * (bx - ax);
+        dst[2 * out + 1] = ay + s * (by - ay);
+        out++;
       }
     }
     count = out;
-    const swap = src; src = dst; dst = swap;
+    const swap = src;
+    src = dst;
+    dst = swap;
   }
   if (count < 3) return 0;
-  let twice = 0, sx = 0, sy = 0;
+  let twice = 0,
+    sx = 0,
+    sy = 0;
   for (let i = 0; i < count; i++) {
-    const ax = src[2 * i]!, ay = src[2 * i + 1]!;
-    const bx = src[(2 * i + 2) % (2 * count)]!, by = src[(2 * i + 3) % (2 * count)]!;
+    const ax = src[2 * i]!,
+      ay = src[2 * i + 1]!;
+    const bx = src[(2 * i + 2) % (2 * count)]!,
+      by = src[(2 * i + 3) % (2 * count)]!;
     twice += ax * by - ay * bx;
-    sx += ax; sy += ay;
+    sx += ax;
+    sy += ay;
   }
   centre[0] = sx / count;
   centre[1] = sy / count;
@@ -55,11 +75,21 @@ function shadowOverlap(u: Float64Array, d: Float64Array, centre: Float64Array, w
 }
 
 function planeZ(positions: Float64Array, triangles: Uint32Array, t: number, x: number, y: number): number {
-  const a = 3 * triangles[3 * t]!, b = 3 * triangles[3 * t + 1]!, c = 3 * triangles[3 * t + 2]!;
-  const ax = positions[a]!, ay = positions[a + 1]!, az = positions[a + 2]!;
-  const ux = positions[b]! - ax, uy = positions[b + 1]! - ay, uz = positions[b + 2]! - az;
-  const vx = positions[c]! - ax, vy = positions[c + 1]! - ay, vz = positions[c + 2]! - az;
-  const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
+  const a = 3 * triangles[3 * t]!,
+    b = 3 * triangles[3 * t + 1]!,
+    c = 3 * triangles[3 * t + 2]!;
+  const ax = positions[a]!,
+    ay = positions[a + 1]!,
+    az = positions[a + 2]!;
+  const ux = positions[b]! - ax,
+    uy = positions[b + 1]! - ay,
+    uz = positions[b + 2]! - az;
+  const vx = positions[c]! - ax,
+    vy = positions[c + 1]! - ay,
+    vz = positions[c + 2]! - az;
+  const nx = uy * vz - uz * vy,
+    ny = uz * vx - ux * vz,
+    nz = ux * vy - uy * vx;
   return az - (nx * (x - ax) + ny * (y - ay)) / nz;
 }
 
@@ -69,14 +99,13 @@ function planeZ(positions: Float64Array, triangles: Uint32Array, t: number, x: n
  * with overlapping shadows (the bottom of the upper piece and the top of the lower one). Every
  * down-facing face is tested against the up-facing faces listed in the cells its shadow covers.
  */
-export function checkHeightField(
-  positions: Float64Array, triangles: Uint32Array, table: TriangleTable, rect: PlaneRect, heightMm: number,
-): HeightFieldCheck {
+export function checkHeightField(positions: Float64Array, triangles: Uint32Array, table: TriangleTable, rect: PlaneRect, heightMm: number): HeightFieldCheck {
   // Only a down-facing face above the lowest up-facing corner can have one below it; in most
   // moulds that is none (the base is the only face looking down) and no index is needed.
   let lowestUp = Infinity;
   for (let t = 0; t < table.count; t++) if (table.facing[t]! > 0) lowestUp = Math.min(lowestUp, table.sortedZ[3 * t]!);
-  let unseenMm3 = 0, highestCandidate = -Infinity;
+  let unseenMm3 = 0,
+    highestCandidate = -Infinity;
   const candidate = new Uint8Array(table.count);
   for (let d = 0; d < table.count; d++) {
     if (table.facing[d]! >= 0) continue;
@@ -103,7 +132,10 @@ export function checkHeightField(
     }
   }
   const seenBy = new Int32Array(table.count).fill(-1);
-  const uCorners = new Float64Array(6), dCorners = new Float64Array(6), centre = new Float64Array(2), span = new Float64Array(2);
+  const uCorners = new Float64Array(6),
+    dCorners = new Float64Array(6),
+    centre = new Float64Array(2),
+    span = new Float64Array(2);
   const work = { a: new Float64Array(24), b: new Float64Array(24) };
   const zTolerance = 1e-7 * heightMm;
 
@@ -116,12 +148,19 @@ export function checkHeightField(
       dCorners[2 * k + 1] = positions[v + 1]!;
     }
     const dShadow = Math.abs(table.shadowArea[d]!);
-    const x0 = dCorners[0]!, y0 = dCorners[1]!, x1 = dCorners[2]!, y1 = dCorners[3]!, x2 = dCorners[4]!, y2 = dCorners[5]!;
-    const slackY = index.cellY * 1e-9, slackX = index.cellX * 1e-9;
+    const x0 = dCorners[0]!,
+      y0 = dCorners[1]!,
+      x1 = dCorners[2]!,
+      y1 = dCorners[3]!,
+      x2 = dCorners[4]!,
+      y2 = dCorners[5]!;
+    const slackY = index.cellY * 1e-9,
+      slackX = index.cellX * 1e-9;
     const jLo = Math.max(0, Math.floor((Math.min(y0, y1, y2) - slackY - index.originY) / index.cellY));
     const jHi = Math.min(index.ny - 1, Math.floor((Math.max(y0, y1, y2) + slackY - index.originY) / index.cellY));
     for (let j = jLo; j <= jHi; j++) {
-      const ylo = index.originY + j * index.cellY - slackY, yhi = ylo + index.cellY + 2 * slackY;
+      const ylo = index.originY + j * index.cellY - slackY,
+        yhi = ylo + index.cellY + 2 * slackY;
       if (!shadowSpanInBand(x0, y0, x1, y1, x2, y2, ylo, yhi, span)) continue;
       const iLo = Math.max(0, Math.floor((span[0]! - slackX - index.originX) / index.cellX));
       const iHi = Math.min(index.nx - 1, Math.floor((span[1]! + slackX - index.originX) / index.cellX));

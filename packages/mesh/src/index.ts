@@ -19,7 +19,15 @@ export { fillRecord, type DepthMapRecord, type FillRecord } from './fill-record'
 export { cavityReport, type CavityReportRecord } from './cavity-report';
 export type { Dam } from './dam';
 export type {
-  CavityAnalysis, CavityFill, CavityMethod, CavityModel, CurvePoint, DepthMap, ExactFacts, MethodFigures,
-  StoredColumnGrid, StoredLevelSeries,
+  CavityAnalysis,
+  CavityFill,
+  CavityMethod,
+  CavityModel,
+  CurvePoint,
+  DepthMap,
+  ExactFacts,
+  MethodFigures,
+  StoredColumnGrid,
+  StoredLevelSeries,
 } from './cavity-analysis';
 export type { MeshError, MeshErrorCode, MeshWarning, MeshWarningCode, Result } from './result';

@@ -60,7 +60,13 @@ function sortedUnique(values: number[]): Float64Array {
  * caller asked for, so those stay exact.
  */
 export function chooseKnots(
-  table: TriangleTable, classes: WettingClasses, escape: Float64Array | null, zMin: number, zMax: number, required: number[], maxKnots: number,
+  table: TriangleTable,
+  classes: WettingClasses,
+  escape: Float64Array | null,
+  zMin: number,
+  zMax: number,
+  required: number[],
+  maxKnots: number,
 ): KnotChoice {
   const inRange = required.filter((h) => h > zMin && h < zMax);
   const corners = new BoundedNumberSet(maxKnots);
@@ -95,7 +101,8 @@ export function chooseKnots(
  * per vertex, half a million times for a million triangles).
  */
 export function knotLocator(points: Float64Array): {
-  atLeast: (z: number) => number; above: (z: number, from: number) => number;
+  atLeast: (z: number) => number;
+  above: (z: number, from: number) => number;
 } {
   const n = points.length;
   const size = 4 * n;

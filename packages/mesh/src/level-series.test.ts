@@ -10,7 +10,8 @@ import { classifyWetting, type WettingClasses } from './wetting-classes';
 /** The fill and wetted sums at h taken triangle by triangle, the slow and obvious way. */
 function bruteForce(table: TriangleTable, classes: WettingClasses, h: number): { fill: number; wetted: number } {
   const out = { share: 0, shareSlope: 0, depth: 0 };
-  let fill = 0, wetted = 0;
+  let fill = 0,
+    wetted = 0;
   for (let t = 0; t < table.count; t++) {
     triangleBelow(table.sortedZ[3 * t]!, table.sortedZ[3 * t + 1]!, table.sortedZ[3 * t + 2]!, h, false, out);
     if (table.facing[t]! > 0) fill += table.shadowArea[t]! * out.depth;
@@ -32,15 +33,26 @@ describe('level series', () => {
     const p = (h: number): number => 3 - 2 * h + 0.5 * h * h - 0.125 * h * h * h;
     const dp = (h: number): number => -2 + h - 0.375 * h * h;
     const n = knots.length;
-    const values = new Float64Array(6 * n), slopes = new Float64Array(6 * n);
-    knots.forEach((h, k) => { values[k] = p(h); slopes[k] = dp(h); });
+    const values = new Float64Array(6 * n),
+      slopes = new Float64Array(6 * n);
+    knots.forEach((h, k) => {
+      values[k] = p(h);
+      slopes[k] = dp(h);
+    });
     const coefficients = hermitePieces(knots, { valueLeft: values, slopeLeft: slopes, valueRight: values, slopeRight: slopes });
     const series = { knots, coefficients, endValue: new Float64Array(6), endSlope: new Float64Array(6), complete: true, fillPieceErrorMm3: null };
     for (const h of [0.1, 0.7, 1.3, 2.5, 4.99]) expect(seriesValue(series, LevelQuantity.Up, h)).toBeCloseTo(p(h), 12);
   });
 
   it('is exact when every corner height is a knot: a stepped bowl', () => {
-    const profile: [number, number][] = [[0, 4], [3, 4], [3, 7], [6, 7], [6, 10], [9, 12]];
+    const profile: [number, number][] = [
+      [0, 4],
+      [3, 4],
+      [3, 7],
+      [6, 7],
+      [6, 10],
+      [9, 12],
+    ];
     const { mesh, table, classes } = setup(revolvedPocketBlock({ halfSide: 12, bottomZ: 0, topZ: 12, profile, segments: 48 }));
     const knots = chooseKnots(table, classes, null, mesh.bboxMm.min[2], mesh.bboxMm.max[2], [], 1024);
     expect(knots.complete).toBe(true);
@@ -54,9 +66,16 @@ describe('level series', () => {
   });
 
   it('stays within its error bound when the knots are evenly spaced: a fine terrain', () => {
-    const { mesh, table, classes } = setup(heightFieldBlock({
-      width: 60, depth: 50, bottomZ: 0, nx: 90, ny: 80, top: (x, y) => 20 - 6 * Math.sin(x / 9) ** 2 * Math.cos(y / 13) ** 2 - 0.3 * Math.sin(x + y),
-    }));
+    const { mesh, table, classes } = setup(
+      heightFieldBlock({
+        width: 60,
+        depth: 50,
+        bottomZ: 0,
+        nx: 90,
+        ny: 80,
+        top: (x, y) => 20 - 6 * Math.sin(x / 9) ** 2 * Math.cos(y / 13) ** 2 - 0.3 * Math.sin(x + y),
+      }),
+    );
     const knots = chooseKnots(table, classes, null, mesh.bboxMm.min[2], mesh.bboxMm.max[2], [17.5], 64);
     expect(knots.complete).toBe(false);
     expect(Array.from(knots.knots)).toContain(17.5);

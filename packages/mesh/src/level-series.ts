@@ -69,21 +69,29 @@ const shortRange = 4;
  * are evaluated directly. The cost is O(triangles + points), however many points a tall wall spans.
  */
 export function sampleLevels(
-  points: Float64Array, table: TriangleTable, classes: WettingClasses, escape: Float64Array | null, zMin: number,
+  points: Float64Array,
+  table: TriangleTable,
+  classes: WettingClasses,
+  escape: Float64Array | null,
+  zMin: number,
   cornerShadow: Float64Array | null = null,
 ): LevelSamples {
   const n = points.length;
   const size = levelQuantityCount * n;
   const samples: LevelSamples = {
-    valueLeft: new Float64Array(size), slopeLeft: new Float64Array(size),
-    valueRight: new Float64Array(size), slopeRight: new Float64Array(size),
+    valueLeft: new Float64Array(size),
+    slopeLeft: new Float64Array(size),
+    valueRight: new Float64Array(size),
+    slopeRight: new Float64Array(size),
   };
   const { valueLeft, slopeLeft, valueRight, slopeRight } = samples;
   // runs[(q * 4 + i) * (n + 1) + k]: coefficient i of quantity q, as differences over k.
   const runs = new Float64Array(levelQuantityCount * 4 * (n + 1));
   const below: TriangleBelow = { share: 0, shareSlope: 0, depth: 0 };
   // Per-range polynomials in w = h − z0: share (3 coefficients), depth (4), then per quantity (4).
-  const share = new Float64Array(3), depth = new Float64Array(4), quantity = new Float64Array(4);
+  const share = new Float64Array(3),
+    depth = new Float64Array(4),
+    quantity = new Float64Array(4);
 
   // Unbounded ranges (above a triangle, below one) are linear in h: plain difference arrays.
   const linear = new Float64Array(levelQuantityCount * 2 * (n + 1));
@@ -92,13 +100,23 @@ export function sampleLevels(
       const blockStart = lo - (lo % blockSize);
       const hi = Math.min(to, blockStart + blockSize);
       const d = points[blockStart]! - z0;
-      const c0 = quantity[0]!, c1 = quantity[1]!, c2 = quantity[2]!, c3 = quantity[3]!;
-      const e0 = c0 + d * (c1 + d * (c2 + d * c3)), e1 = c1 + d * (2 * c2 + 3 * c3 * d), e2 = c2 + 3 * c3 * d, e3 = c3;
+      const c0 = quantity[0]!,
+        c1 = quantity[1]!,
+        c2 = quantity[2]!,
+        c3 = quantity[3]!;
+      const e0 = c0 + d * (c1 + d * (c2 + d * c3)),
+        e1 = c1 + d * (2 * c2 + 3 * c3 * d),
+        e2 = c2 + 3 * c3 * d,
+        e3 = c3;
       const base = q * 4 * (n + 1);
-      runs[base + lo]! += e0; runs[base + hi]! -= e0;
-      runs[base + (n + 1) + lo]! += e1; runs[base + (n + 1) + hi]! -= e1;
-      runs[base + 2 * (n + 1) + lo]! += e2; runs[base + 2 * (n + 1) + hi]! -= e2;
-      runs[base + 3 * (n + 1) + lo]! += e3; runs[base + 3 * (n + 1) + hi]! -= e3;
+      runs[base + lo]! += e0;
+      runs[base + hi]! -= e0;
+      runs[base + (n + 1) + lo]! += e1;
+      runs[base + (n + 1) + hi]! -= e1;
+      runs[base + 2 * (n + 1) + lo]! += e2;
+      runs[base + 2 * (n + 1) + hi]! -= e2;
+      runs[base + 3 * (n + 1) + lo]! += e3;
+      runs[base + 3 * (n + 1) + hi]! -= e3;
       lo = hi;
     }
   };
@@ -110,10 +128,13 @@ export function sampleLevels(
   // Each vertex's place among the points, found once: a vertex is shared by about six triangles.
   // Both indices only grow with z, so a triangle's lowest, middle and highest corner take the
   // smallest, middle and largest of its vertices' indices.
-  const positions = table.positions, vertexCount = positions.length / 3;
-  const vertexAtLeast = new Int32Array(vertexCount), vertexAbove = new Int32Array(vertexCount);
+  const positions = table.positions,
+    vertexCount = positions.length / 3;
+  const vertexAtLeast = new Int32Array(vertexCount),
+    vertexAbove = new Int32Array(vertexCount);
   for (let v = 0; v < vertexCount; v++) {
-    const z = positions[3 * v + 2]!, a = atLeast(z);
+    const z = positions[3 * v + 2]!,
+      a = atLeast(z);
     vertexAtLeast[v] = a;
     vertexAbove[v] = points[a] === z ? above(z, a) : a;
   }
@@ -125,16 +146,22 @@ export function sampleLevels(
     const value = right ? valueRight : valueLeft;
     const slope = right ? slopeRight : slopeLeft;
     if (tri.up) {
-      const v = tri.shadowArea * below.depth, dv = tri.shadowArea * below.share;
-      value[LevelQuantity.Up * n + k]! += v; slope[LevelQuantity.Up * n + k]! += dv;
+      const v = tri.shadowArea * below.depth,
+        dv = tri.shadowArea * below.share;
+      value[LevelQuantity.Up * n + k]! += v;
+      slope[LevelQuantity.Up * n + k]! += dv;
     }
     if (tri.down) {
-      const v = tri.shadowArea * (h - zMin - below.depth), dv = tri.shadowArea * (1 - below.share);
-      value[LevelQuantity.Down * n + k]! += v; slope[LevelQuantity.Down * n + k]! += dv;
+      const v = tri.shadowArea * (h - zMin - below.depth),
+        dv = tri.shadowArea * (1 - below.share);
+      value[LevelQuantity.Down * n + k]! += v;
+      slope[LevelQuantity.Down * n + k]! += dv;
     }
     if (tri.wetQ >= 0 && wetToo) {
-      const v = tri.area * below.share, dv = tri.area * below.shareSlope;
-      value[tri.wetQ * n + k]! += v; slope[tri.wetQ * n + k]! += dv;
+      const v = tri.area * below.share,
+        dv = tri.area * below.shareSlope;
+      value[tri.wetQ * n + k]! += v;
+      slope[tri.wetQ * n + k]! += dv;
     }
   };
 
@@ -142,8 +169,10 @@ export function sampleLevels(
   const addLinear = (q: number, from: number, to: number, a: number, b: number): void => {
     if (to <= from) return;
     const base = q * 2 * (n + 1);
-    linear[base + from]! += a; linear[base + to]! -= a;
-    linear[base + (n + 1) + from]! += b; linear[base + (n + 1) + to]! -= b;
+    linear[base + from]! += a;
+    linear[base + to]! -= a;
+    linear[base + (n + 1) + from]! += b;
+    linear[base + (n + 1) + to]! -= b;
   };
 
   /**
@@ -154,33 +183,64 @@ export function sampleLevels(
    * computed once), and adds to both limits the sums `direct` would: bit-identical.
    */
   const insidePoints = (from: number, to: number, lowerBranch: boolean): void => {
-    const z0 = tri.z0, z1 = tri.z1, z2 = tri.z2, shadowArea = tri.shadowArea, area = tri.area;
-    const up = tri.up, down = tri.down, wetQ = tri.wetQ, wetEnd = tri.wetEnd;
-    const span = z2 - z0, lower = (z1 - z0) * span, lower3 = 3 * lower;
-    const upperSpan = z2 - z1, upper = upperSpan * span, upper3 = 3 * upper;
-    const lowerDepth = ((z1 - z0) * (z1 - z0)) / (3 * span), upperSpan2 = upperSpan * upperSpan;
+    const z0 = tri.z0,
+      z1 = tri.z1,
+      z2 = tri.z2,
+      shadowArea = tri.shadowArea,
+      area = tri.area;
+    const up = tri.up,
+      down = tri.down,
+      wetQ = tri.wetQ,
+      wetEnd = tri.wetEnd;
+    const span = z2 - z0,
+      lower = (z1 - z0) * span,
+      lower3 = 3 * lower;
+    const upperSpan = z2 - z1,
+      upper = upperSpan * span,
+      upper3 = 3 * upper;
+    const lowerDepth = ((z1 - z0) * (z1 - z0)) / (3 * span),
+      upperSpan2 = upperSpan * upperSpan;
     for (let k = from; k < to; k++) {
       const h = points[k]!;
       let share: number, shareSlope: number, depth: number;
       if (lowerBranch) {
         const d = h - z0;
-        share = (d * d) / lower; shareSlope = (2 * d) / lower; depth = (d * d * d) / lower3;
+        share = (d * d) / lower;
+        shareSlope = (2 * d) / lower;
+        depth = (d * d * d) / lower3;
       } else {
-        const e = z2 - h, passed = h - z1;
-        share = 1 - (e * e) / upper; shareSlope = (2 * e) / upper;
+        const e = z2 - h,
+          passed = h - z1;
+        share = 1 - (e * e) / upper;
+        shareSlope = (2 * e) / upper;
         depth = lowerDepth + passed * (1 - (upperSpan2 + upperSpan * e + e * e) / upper3);
       }
       if (up) {
-        const v = shadowArea * depth, dv = shadowArea * share, at = LevelQuantity.Up * n + k;
-        valueLeft[at]! += v; slopeLeft[at]! += dv; valueRight[at]! += v; slopeRight[at]! += dv;
+        const v = shadowArea * depth,
+          dv = shadowArea * share,
+          at = LevelQuantity.Up * n + k;
+        valueLeft[at]! += v;
+        slopeLeft[at]! += dv;
+        valueRight[at]! += v;
+        slopeRight[at]! += dv;
       }
       if (down) {
-        const v = shadowArea * (h - zMin - depth), dv = shadowArea * (1 - share), at = LevelQuantity.Down * n + k;
-        valueLeft[at]! += v; slopeLeft[at]! += dv; valueRight[at]! += v; slopeRight[at]! += dv;
+        const v = shadowArea * (h - zMin - depth),
+          dv = shadowArea * (1 - share),
+          at = LevelQuantity.Down * n + k;
+        valueLeft[at]! += v;
+        slopeLeft[at]! += dv;
+        valueRight[at]! += v;
+        slopeRight[at]! += dv;
       }
       if (wetQ >= 0 && k < wetEnd) {
-        const v = area * share, dv = area * shareSlope, at = wetQ * n + k;
-        valueLeft[at]! += v; slopeLeft[at]! += dv; valueRight[at]! += v; slopeRight[at]! += dv;
+        const v = area * share,
+          dv = area * shareSlope,
+          at = wetQ * n + k;
+        valueLeft[at]! += v;
+        slopeLeft[at]! += dv;
+        valueRight[at]! += v;
+        slopeRight[at]! += dv;
       }
     }
   };
@@ -210,41 +270,77 @@ export function sampleLevels(
       addRun(LevelQuantity.Down, from, to, tri.z0);
     }
     if (tri.wetQ >= 0) {
-      quantity[0] = tri.area * share[0]!; quantity[1] = tri.area * share[1]!; quantity[2] = tri.area * share[2]!; quantity[3] = 0;
+      quantity[0] = tri.area * share[0]!;
+      quantity[1] = tri.area * share[1]!;
+      quantity[2] = tri.area * share[2]!;
+      quantity[3] = 0;
       addRun(tri.wetQ, from, Math.min(to, tri.wetEnd), tri.z0);
     }
   };
   const setLower = (): void => {
     const lower = (tri.z1 - tri.z0) * (tri.z2 - tri.z0);
-    share[0] = 0; share[1] = 0; share[2] = 1 / lower;
-    depth[0] = 0; depth[1] = 0; depth[2] = 0; depth[3] = 1 / (3 * lower);
+    share[0] = 0;
+    share[1] = 0;
+    share[2] = 1 / lower;
+    depth[0] = 0;
+    depth[1] = 0;
+    depth[2] = 0;
+    depth[3] = 1 / (3 * lower);
   };
   const setUpper = (): void => {
-    const span = tri.z2 - tri.z0, z10 = tri.z1 - tri.z0, z21 = tri.z2 - tri.z1, upper = z21 * span;
-    share[0] = 1 - (span * span) / upper; share[1] = (2 * span) / upper; share[2] = -1 / upper;
+    const span = tri.z2 - tri.z0,
+      z10 = tri.z1 - tri.z0,
+      z21 = tri.z2 - tri.z1,
+      upper = z21 * span;
+    share[0] = 1 - (span * span) / upper;
+    share[1] = (2 * span) / upper;
+    share[2] = -1 / upper;
     depth[0] = (z10 * z10) / (3 * span) - z10 - (z21 * z21 * z21 - span * span * span) / (3 * upper);
-    depth[1] = 1 - (span * span) / upper; depth[2] = span / upper; depth[3] = -1 / (3 * upper);
+    depth[1] = 1 - (span * span) / upper;
+    depth[2] = span / upper;
+    depth[3] = -1 / (3 * upper);
   };
 
   for (let t = 0; t < table.count; t++) {
     const facing = table.facing[t]!;
     const e = escape ? escape[t]! : Infinity;
     const wet = e === -Infinity ? 0 : classes.wet[t]!;
-    const z0 = table.sortedZ[3 * t]!, z1 = table.sortedZ[3 * t + 1]!, z2 = table.sortedZ[3 * t + 2]!;
-    const up = facing > 0, down = facing < 0 && z2 > zMin;
+    const z0 = table.sortedZ[3 * t]!,
+      z1 = table.sortedZ[3 * t + 1]!,
+      z2 = table.sortedZ[3 * t + 2]!;
+    const up = facing > 0,
+      down = facing < 0 && z2 > zMin;
     if (!up && !down && wet === 0) continue;
-    const shadowArea = Math.abs(table.shadowArea[t]!), area = table.area[t]!;
+    const shadowArea = Math.abs(table.shadowArea[t]!),
+      area = table.area[t]!;
     const wetQ = wet & wetWithOutline ? LevelQuantity.Wetted : wet & wetWithBox ? LevelQuantity.WettedBox : -1;
     // i·a: first point at or above the corner; i·b: first point above it.
-    const va = table.triangles[3 * t]!, vb = table.triangles[3 * t + 1]!, vc = table.triangles[3 * t + 2]!;
-    const aa = vertexAtLeast[va]!, ab = vertexAtLeast[vb]!, ac = vertexAtLeast[vc]!;
-    const i0a = Math.min(aa, ab, ac), i2a = Math.max(aa, ab, ac), i1a = aa + ab + ac - i0a - i2a;
-    const ba = vertexAbove[va]!, bb = vertexAbove[vb]!, bc = vertexAbove[vc]!;
-    const i0b = Math.min(ba, bb, bc), i2b = Math.max(ba, bb, bc), i1b = ba + bb + bc - i0b - i2b;
+    const va = table.triangles[3 * t]!,
+      vb = table.triangles[3 * t + 1]!,
+      vc = table.triangles[3 * t + 2]!;
+    const aa = vertexAtLeast[va]!,
+      ab = vertexAtLeast[vb]!,
+      ac = vertexAtLeast[vc]!;
+    const i0a = Math.min(aa, ab, ac),
+      i2a = Math.max(aa, ab, ac),
+      i1a = aa + ab + ac - i0a - i2a;
+    const ba = vertexAbove[va]!,
+      bb = vertexAbove[vb]!,
+      bc = vertexAbove[vc]!;
+    const i0b = Math.min(ba, bb, bc),
+      i2b = Math.max(ba, bb, bc),
+      i1b = ba + bb + bc - i0b - i2b;
     // Above its escape height the face is held dry by air: it stays wet only below that.
     const wetEnd = e === Infinity ? n : atLeast(e);
-    tri.z0 = z0; tri.z1 = z1; tri.z2 = z2; tri.shadowArea = shadowArea; tri.area = area;
-    tri.up = up; tri.down = down; tri.wetQ = wetQ; tri.wetEnd = wetEnd;
+    tri.z0 = z0;
+    tri.z1 = z1;
+    tri.z2 = z2;
+    tri.shadowArea = shadowArea;
+    tri.area = area;
+    tri.up = up;
+    tri.down = down;
+    tri.wetQ = wetQ;
+    tri.wetEnd = wetEnd;
 
     if (cornerShadow && (up || down)) {
       // For the error bound: the pieces holding a corner strictly inside them.
@@ -263,9 +359,20 @@ export function sampleLevels(
     if (wetQ >= 0) addLinear(wetQ, i2b, wetEnd, area, 0);
 
     // Corner heights: both limits, directly.
-    for (let k = i0a; k < i0b; k++) { direct(k, false, points[k]! <= e); direct(k, true, points[k]! < e); }
-    if (z1 !== z0) for (let k = i1a; k < i1b; k++) { direct(k, false, points[k]! <= e); direct(k, true, points[k]! < e); }
-    if (z2 !== z1) for (let k = i2a; k < i2b; k++) { direct(k, false, points[k]! <= e); direct(k, true, points[k]! < e); }
+    for (let k = i0a; k < i0b; k++) {
+      direct(k, false, points[k]! <= e);
+      direct(k, true, points[k]! < e);
+    }
+    if (z1 !== z0)
+      for (let k = i1a; k < i1b; k++) {
+        direct(k, false, points[k]! <= e);
+        direct(k, true, points[k]! < e);
+      }
+    if (z2 !== z1)
+      for (let k = i2a; k < i2b; k++) {
+        direct(k, false, points[k]! <= e);
+        direct(k, true, points[k]! < e);
+      }
     if (wetQ >= 0 && e !== Infinity) {
       // At the escape height itself the face is still wet from below; above it, what was wet stays so.
       triangleBelow(z0, z1, z2, e, false, below);
@@ -284,16 +391,28 @@ export function sampleLevels(
   if (escape) addHeldAir(points, table, escape, zMin, samples, linear, atLeast, above, cornerShadow);
 
   for (let q = 0; q < levelQuantityCount; q++) {
-    const base = q * 4 * (n + 1), linearBase = q * 2 * (n + 1);
-    let c0 = 0, c1 = 0, c2 = 0, c3 = 0, a = 0, b = 0;
+    const base = q * 4 * (n + 1),
+      linearBase = q * 2 * (n + 1);
+    let c0 = 0,
+      c1 = 0,
+      c2 = 0,
+      c3 = 0,
+      a = 0,
+      b = 0;
     for (let k = 0; k < n; k++) {
-      c0 += runs[base + k]!; c1 += runs[base + (n + 1) + k]!; c2 += runs[base + 2 * (n + 1) + k]!; c3 += runs[base + 3 * (n + 1) + k]!;
-      a += linear[linearBase + k]!; b += linear[linearBase + (n + 1) + k]!;
+      c0 += runs[base + k]!;
+      c1 += runs[base + (n + 1) + k]!;
+      c2 += runs[base + 2 * (n + 1) + k]!;
+      c3 += runs[base + 3 * (n + 1) + k]!;
+      a += linear[linearBase + k]!;
+      b += linear[linearBase + (n + 1) + k]!;
       const sOff = points[k]! - points[k - (k % blockSize)]!;
       const v = c0 + sOff * (c1 + sOff * (c2 + sOff * c3)) + a + b * points[k]!;
       const dv = c1 + sOff * (2 * c2 + 3 * c3 * sOff) + b;
-      valueLeft[q * n + k]! += v; slopeLeft[q * n + k]! += dv;
-      valueRight[q * n + k]! += v; slopeRight[q * n + k]! += dv;
+      valueLeft[q * n + k]! += v;
+      slopeLeft[q * n + k]! += dv;
+      valueRight[q * n + k]! += v;
+      slopeRight[q * n + k]! += dv;
     }
   }
   return samples;
@@ -306,8 +425,15 @@ export function sampleLevels(
  * point by point between e and their top corner; above that the term is a constant.
  */
 function addHeldAir(
-  points: Float64Array, table: TriangleTable, escape: Float64Array, zMin: number, samples: LevelSamples, linear: Float64Array,
-  atLeast: (z: number) => number, above: (z: number, from: number) => number, cornerShadow: Float64Array | null,
+  points: Float64Array,
+  table: TriangleTable,
+  escape: Float64Array,
+  zMin: number,
+  samples: LevelSamples,
+  linear: Float64Array,
+  atLeast: (z: number) => number,
+  above: (z: number, from: number) => number,
+  cornerShadow: Float64Array | null,
 ): void {
   const n = points.length;
   const { valueLeft, slopeLeft, valueRight, slopeRight } = samples;
@@ -318,24 +444,30 @@ function addHeldAir(
     const q = e === -Infinity ? LevelQuantity.Sealed : LevelQuantity.Trapped;
     const s = e === -Infinity ? zMin : e;
     const w = -table.shadowArea[t]!;
-    const z0 = table.sortedZ[3 * t]!, z1 = table.sortedZ[3 * t + 1]!, z2 = table.sortedZ[3 * t + 2]!;
+    const z0 = table.sortedZ[3 * t]!,
+      z1 = table.sortedZ[3 * t + 1]!,
+      z2 = table.sortedZ[3 * t + 2]!;
     triangleBelow(z0, z1, z2, s, false, at);
     const depthAtS = at.depth;
-    const from = atLeast(s), top = above(z2, atLeast(z2));
+    const from = atLeast(s),
+      top = above(z2, atLeast(z2));
     for (let k = from; k < Math.min(top, n); k++) {
       const h = points[k]!;
       for (const right of [false, true]) {
         if (h === s && !right) continue;
         triangleBelow(z0, z1, z2, h, right, at);
-        const value = right ? valueRight : valueLeft, slope = right ? slopeRight : slopeLeft;
+        const value = right ? valueRight : valueLeft,
+          slope = right ? slopeRight : slopeLeft;
         value[q * n + k]! += w * (h - s + depthAtS - at.depth);
         slope[q * n + k]! += w * (1 - at.share);
       }
     }
     const mean = (z0 + z1 + z2) / 3;
     if (top < n) {
-      const base = q * 2 * (n + 1), constant = w * (mean - s + depthAtS);
-      linear[base + top]! += constant; linear[base + n]! -= constant;
+      const base = q * 2 * (n + 1),
+        constant = w * (mean - s + depthAtS);
+      linear[base + top]! += constant;
+      linear[base + n]! -= constant;
     }
     if (cornerShadow) {
       // The slope jumps at e and bends between the corners: at most 2|w| of slope change in all.
@@ -349,13 +481,16 @@ function addHeldAir(
 
 /** Cubic Hermite pieces through exact values and one-sided slopes: exact wherever the function is one cubic. */
 export function hermitePieces(knots: Float64Array, samples: LevelSamples): Float64Array {
-  const n = knots.length, pieces = n - 1;
+  const n = knots.length,
+    pieces = n - 1;
   const coefficients = new Float64Array(levelQuantityCount * pieces * 4);
   for (let q = 0; q < levelQuantityCount; q++) {
     for (let k = 0; k < pieces; k++) {
       const width = knots[k + 1]! - knots[k]!;
-      const y0 = samples.valueRight[q * n + k]!, m0 = samples.slopeRight[q * n + k]!;
-      const y1 = samples.valueLeft[q * n + k + 1]!, m1 = samples.slopeLeft[q * n + k + 1]!;
+      const y0 = samples.valueRight[q * n + k]!,
+        m0 = samples.slopeRight[q * n + k]!;
+      const y1 = samples.valueLeft[q * n + k + 1]!,
+        m1 = samples.slopeLeft[q * n + k + 1]!;
       const secant = (y1 - y0) / width;
       const at = (q * pieces + k) * 4;
       coefficients[at] = y0;
@@ -373,10 +508,12 @@ export function seriesValue(series: LevelSeries, q: LevelQuantity, h: number): n
   const last = knots.length - 1;
   if (!(h > knots[0]!)) return 0;
   if (h > knots[last]!) return series.endValue[q]! + series.endSlope[q]! * (h - knots[last]!);
-  let lo = 0, hi = last;
+  let lo = 0,
+    hi = last;
   while (hi - lo > 1) {
     const mid = (lo + hi) >>> 1;
-    if (knots[mid]! < h) lo = mid; else hi = mid;
+    if (knots[mid]! < h) lo = mid;
+    else hi = mid;
   }
   const t = h - knots[lo]!;
   const at = (q * last + lo) * 4;
@@ -391,10 +528,12 @@ export function seriesFillErrorMm3(series: LevelSeries, h: number): number {
   const knots = series.knots;
   const last = knots.length - 1;
   if (!(h > knots[0]!) || h > knots[last]!) return 0;
-  let lo = 0, hi = last;
+  let lo = 0,
+    hi = last;
   while (hi - lo > 1) {
     const mid = (lo + hi) >>> 1;
-    if (knots[mid]! < h) lo = mid; else hi = mid;
+    if (knots[mid]! < h) lo = mid;
+    else hi = mid;
   }
   return errors[lo]!;
 }
@@ -416,7 +555,12 @@ function fillPieceBounds(knots: Float64Array, cornerShadow: Float64Array): Float
 
 /** Builds the series on the given knots, with the fill's error bound per piece when they are not complete. */
 export function buildLevelSeries(
-  knots: Float64Array, complete: boolean, table: TriangleTable, classes: WettingClasses, escape: Float64Array | null, zMin: number,
+  knots: Float64Array,
+  complete: boolean,
+  table: TriangleTable,
+  classes: WettingClasses,
+  escape: Float64Array | null,
+  zMin: number,
 ): LevelSeries {
   const n = knots.length;
   const cornerShadow = complete ? null : new Float64Array(n - 1);

@@ -9,7 +9,9 @@ import { curve, fillAt } from './fill-queries';
 import type { CavityMesh } from './prepare-mesh';
 
 let kernel: ManifoldKernel;
-beforeAll(async () => { kernel = await loadManifold(); });
+beforeAll(async () => {
+  kernel = await loadManifold();
+});
 
 /** The goal for every exact figure: 0.01 % of the reference. */
 const exactness = 1e-4;
@@ -35,7 +37,8 @@ describe('T-slot: air under flat ceilings slides to the slot and out', () => {
   const analysis = analysed(mesh, [30, 30.1]);
 
   it('rises from 30 mm to 30.1 mm, with no trapped air at either level', () => {
-    const at30 = unwrap(fillAt(analysis, 30)), above = unwrap(fillAt(analysis, 30.1));
+    const at30 = unwrap(fillAt(analysis, 30)),
+      above = unwrap(fillAt(analysis, 30.1));
     expect(analysis.method).toBe('exact');
     expect(relative(at30.volumeMm3, 96_000)).toBeLessThan(1e-9);
     expect(relative(above.volumeMm3, 96_160)).toBeLessThan(1e-9);
@@ -73,7 +76,19 @@ describe('T-slot: air under flat ceilings slides to the slot and out', () => {
 describe('dovetail recess: air escapes up the sloped wall', () => {
   // A round recess whose wall leans inward going up: radius 30 at the floor (z 10), 20 at the top (z 40).
   const segments = 64;
-  const mesh = meshOf(revolvedPocketBlock({ halfSide: 40, bottomZ: 0, topZ: 40, profile: [[0, 10], [30, 10], [20, 40]], segments }));
+  const mesh = meshOf(
+    revolvedPocketBlock({
+      halfSide: 40,
+      bottomZ: 0,
+      topZ: 40,
+      profile: [
+        [0, 10],
+        [30, 10],
+        [20, 40],
+      ],
+      segments,
+    }),
+  );
   const analysis = analysed(mesh, [20, 40]);
 
   it('holds the polygonal frustum below the level, and no air', () => {
@@ -199,7 +214,10 @@ describe('a hollow sealed inside the wood', () => {
 
 describe('a mould standing on the table far from the origin', () => {
   it('keeps the short way (nothing hangs over free space) and its exact pocket', () => {
-    const pocket = mapped(cellSolid([0, 6, 26, 32], [0, 4, 20, 24], [0, 5, 12], (i, j, k) => !(i === 1 && j === 1 && k === 1)), (x, y, z) => [x + 700, y - 900, z + 850]);
+    const pocket = mapped(
+      cellSolid([0, 6, 26, 32], [0, 4, 20, 24], [0, 5, 12], (i, j, k) => !(i === 1 && j === 1 && k === 1)),
+      (x, y, z) => [x + 700, y - 900, z + 850],
+    );
     const analysis = analysed(meshOf(pocket), [860]);
     expect(analysis.exact!.overhangs).toBe(false);
     // 20 × 16 × 5 (cuboid, CRC), from float32 corners near 900 mm.

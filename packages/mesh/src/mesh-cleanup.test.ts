@@ -5,7 +5,17 @@ import { fillAt } from './fill-queries';
 import { analyzeCavity } from './analyze-cavity';
 import { relativeWeldTolerance } from './prepare-mesh';
 
-const mould = revolvedPocketBlock({ halfSide: 15, bottomZ: 0, topZ: 18, profile: [[0, 10], [6, 10], [10, 18]], segments: 48 });
+const mould = revolvedPocketBlock({
+  halfSide: 15,
+  bottomZ: 0,
+  topZ: 18,
+  profile: [
+    [0, 10],
+    [6, 10],
+    [10, 18],
+  ],
+  segments: 48,
+});
 const plain = meshOf(mould);
 const diagonalMm = Math.hypot(30, 30, 18);
 const toleranceMm = relativeWeldTolerance * diagonalMm;
@@ -13,7 +23,7 @@ const toleranceMm = relativeWeldTolerance * diagonalMm;
 /** Each corner of each triangle moved by its own small step, as separate roundings of one point leave it. */
 function jittered(mesh: GeneratedMesh, stepMm: number): GeneratedMesh {
   const p = mesh.positions.slice();
-  for (let i = 0; i < p.length; i++) p[i] = p[i]! + stepMm * (((i * 2654435761) >>> 0) % 3 - 1);
+  for (let i = 0; i < p.length; i++) p[i] = p[i]! + stepMm * ((((i * 2654435761) >>> 0) % 3) - 1);
   return { positions: p, triangleCount: mesh.triangleCount };
 }
 
@@ -58,7 +68,8 @@ describe('prepareMesh clean-up: faces written twice and faces with no area', () 
 
   it('drops a triangle with no area hanging on an edge, and one whose corners nearly meet', () => {
     const p = mould.positions;
-    const a = [p[0]!, p[1]!, p[2]!], b = [p[3]!, p[4]!, p[5]!];
+    const a = [p[0]!, p[1]!, p[2]!],
+      b = [p[3]!, p[4]!, p[5]!];
     const mid = a.map((v, i) => (v + b[i]!) / 2);
     const near = a.map((v, i) => (i === 0 ? v + 0.2 * toleranceMm : v));
     const extra = { positions: Float64Array.from([...a, ...b, ...mid, ...a, ...b, ...near]), triangleCount: 2 };
@@ -71,15 +82,33 @@ describe('prepareMesh clean-up: faces written twice and faces with no area', () 
   it('keeps a triangle with no area that stitches a closed surface at a T-junction', () => {
     // A unit cube whose top face has an extra corner M in the middle of the edge AB it shares with
     // the front face; the flat triangle (A, B, M) makes every edge meet exactly one other.
-    const [P000, P100, P110, P010] = [[0, 0, 0], [1, 0, 0], [1, 1, 0], [0, 1, 0]];
-    const [A, B, C, D, M] = [[0, 0, 1], [1, 0, 1], [1, 1, 1], [0, 1, 1], [0.5, 0, 1]];
+    const [P000, P100, P110, P010] = [
+      [0, 0, 0],
+      [1, 0, 0],
+      [1, 1, 0],
+      [0, 1, 0],
+    ];
+    const [A, B, C, D, M] = [
+      [0, 0, 1],
+      [1, 0, 1],
+      [1, 1, 1],
+      [0, 1, 1],
+      [0.5, 0, 1],
+    ];
     const faces = [
-      [P000, P010, P110], [P000, P110, P100],
-      [A, M, D], [M, C, D], [M, B, C],
-      [P000, P100, B], [P000, B, A],
-      [P010, D, C], [P010, C, P110],
-      [P000, A, D], [P000, D, P010],
-      [P100, P110, C], [P100, C, B],
+      [P000, P010, P110],
+      [P000, P110, P100],
+      [A, M, D],
+      [M, C, D],
+      [M, B, C],
+      [P000, P100, B],
+      [P000, B, A],
+      [P010, D, C],
+      [P010, C, P110],
+      [P000, A, D],
+      [P000, D, P010],
+      [P100, P110, C],
+      [P100, C, B],
       [A, B, M],
     ];
     const mesh = meshOf({ positions: Float64Array.from(faces.flat(2) as number[]), triangleCount: faces.length });

@@ -27,9 +27,13 @@ function unpairedVertices(triangles: Uint32Array, neighbour: Int32Array, vertexC
   let count = 0;
   for (let e = 0; e < neighbour.length; e++) {
     if (neighbour[e]! >= 0) continue;
-    const t = (e / 3) | 0, k = e - 3 * t;
+    const t = (e / 3) | 0,
+      k = e - 3 * t;
     for (const v of [triangles[e]!, triangles[3 * t + ((k + 1) % 3)]!]) {
-      if (!marked[v]) { marked[v] = 1; count++; }
+      if (!marked[v]) {
+        marked[v] = 1;
+        count++;
+      }
     }
   }
   const list = new Uint32Array(count);
@@ -59,19 +63,36 @@ function weldWithin(positionsMm: Float64Array, candidates: Uint32Array, vertexCo
   let welded = 0;
   for (let i = 0; i < n; i++) {
     const v = candidates[i]!;
-    const px = positionsMm[3 * v]!, py = positionsMm[3 * v + 1]!, pz = positionsMm[3 * v + 2]!;
-    const gx = px * inv, gy = py * inv, gz = pz * inv;
-    const cx = Math.floor(gx), cy = Math.floor(gy), cz = Math.floor(gz);
-    cell[3 * i] = cx; cell[3 * i + 1] = cy; cell[3 * i + 2] = cz;
-    const ox = gx - cx < 0.5 ? -1 : 1, oy = gy - cy < 0.5 ? -1 : 1, oz = gz - cz < 0.5 ? -1 : 1;
+    const px = positionsMm[3 * v]!,
+      py = positionsMm[3 * v + 1]!,
+      pz = positionsMm[3 * v + 2]!;
+    const gx = px * inv,
+      gy = py * inv,
+      gz = pz * inv;
+    const cx = Math.floor(gx),
+      cy = Math.floor(gy),
+      cz = Math.floor(gz);
+    cell[3 * i] = cx;
+    cell[3 * i + 1] = cy;
+    cell[3 * i + 2] = cz;
+    const ox = gx - cx < 0.5 ? -1 : 1,
+      oy = gy - cy < 0.5 ? -1 : 1,
+      oz = gz - cz < 0.5 ? -1 : 1;
     let found = -1;
     for (let k = 0; k < 8 && found < 0; k++) {
-      const qx = cx + (k & 1 ? ox : 0), qy = cy + (k & 2 ? oy : 0), qz = cz + (k & 4 ? oz : 0);
+      const qx = cx + (k & 1 ? ox : 0),
+        qy = cy + (k & 2 ? oy : 0),
+        qz = cz + (k & 4 ? oz : 0);
       for (let j = head[cellHash(qx, qy, qz, mask)]!; j >= 0; j = next[j]!) {
         if (cell[3 * j] !== qx || cell[3 * j + 1] !== qy || cell[3 * j + 2] !== qz) continue;
         const w = candidates[j]!;
-        const ex = positionsMm[3 * w]! - px, ey = positionsMm[3 * w + 1]! - py, ez = positionsMm[3 * w + 2]! - pz;
-        if (ex * ex + ey * ey + ez * ez <= tol2) { found = w; break; }
+        const ex = positionsMm[3 * w]! - px,
+          ey = positionsMm[3 * w + 1]! - py,
+          ez = positionsMm[3 * w + 2]! - pz;
+        if (ex * ex + ey * ey + ez * ez <= tol2) {
+          found = w;
+          break;
+        }
       }
     }
     if (found >= 0) {
@@ -96,11 +117,21 @@ function flatTriangles(positionsMm: Float64Array, triangles: Uint32Array, tolera
   const flat: number[] = [];
   const p = positionsMm;
   for (let t = 0; t < triangles.length / 3; t++) {
-    const a = 3 * triangles[3 * t]!, b = 3 * triangles[3 * t + 1]!, c = 3 * triangles[3 * t + 2]!;
-    const ux = p[b]! - p[a]!, uy = p[b + 1]! - p[a + 1]!, uz = p[b + 2]! - p[a + 2]!;
-    const vx = p[c]! - p[a]!, vy = p[c + 1]! - p[a + 1]!, vz = p[c + 2]! - p[a + 2]!;
-    const wx = vx - ux, wy = vy - uy, wz = vz - uz;
-    const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
+    const a = 3 * triangles[3 * t]!,
+      b = 3 * triangles[3 * t + 1]!,
+      c = 3 * triangles[3 * t + 2]!;
+    const ux = p[b]! - p[a]!,
+      uy = p[b + 1]! - p[a + 1]!,
+      uz = p[b + 2]! - p[a + 2]!;
+    const vx = p[c]! - p[a]!,
+      vy = p[c + 1]! - p[a + 1]!,
+      vz = p[c + 2]! - p[a + 2]!;
+    const wx = vx - ux,
+      wy = vy - uy,
+      wz = vz - uz;
+    const nx = uy * vz - uz * vy,
+      ny = uz * vx - ux * vz,
+      nz = ux * vy - uy * vx;
     const longest2 = Math.max(ux * ux + uy * uy + uz * uz, vx * vx + vy * vy + vz * vz, wx * wx + wy * wy + wz * wz);
     // height = |n| / longest edge; compared squared to stay off square roots.
     if (nx * nx + ny * ny + nz * nz <= tol2 * longest2) flat.push(t);
@@ -118,16 +149,26 @@ function duplicateFaces(triangles: Uint32Array): Uint8Array {
   const slots = new Int32Array(size).fill(-1);
   const key = new Uint32Array(3 * count);
   for (let t = 0; t < count; t++) {
-    let a = triangles[3 * t]!, b = triangles[3 * t + 1]!, c = triangles[3 * t + 2]!;
+    let a = triangles[3 * t]!,
+      b = triangles[3 * t + 1]!,
+      c = triangles[3 * t + 2]!;
     // Rotate so the smallest corner leads; the winding is kept.
     if (b < a && b < c) [a, b, c] = [b, c, a];
     else if (c < a && c < b) [a, b, c] = [c, a, b];
-    key[3 * t] = a; key[3 * t + 1] = b; key[3 * t + 2] = c;
+    key[3 * t] = a;
+    key[3 * t + 1] = b;
+    key[3 * t + 2] = c;
     let h = ((Math.imul(a, 0x9e3779b1) ^ Math.imul(b, 0x85ebca77) ^ Math.imul(c, 0xc2b2ae3d)) >>> 0) & mask;
     for (;;) {
       const s = slots[h]!;
-      if (s < 0) { slots[h] = t; break; }
-      if (key[3 * s] === a && key[3 * s + 1] === b && key[3 * s + 2] === c) { duplicate[t] = 1; break; }
+      if (s < 0) {
+        slots[h] = t;
+        break;
+      }
+      if (key[3 * s] === a && key[3 * s + 1] === b && key[3 * s + 2] === c) {
+        duplicate[t] = 1;
+        break;
+      }
       h = (h + 1) & mask;
     }
   }
@@ -142,7 +183,9 @@ function withoutMarked(triangles: Uint32Array, marked: Uint8Array): Uint32Array 
   let at = 0;
   for (let t = 0; t < marked.length; t++) {
     if (marked[t]) continue;
-    out[at++] = triangles[3 * t]!; out[at++] = triangles[3 * t + 1]!; out[at++] = triangles[3 * t + 2]!;
+    out[at++] = triangles[3 * t]!;
+    out[at++] = triangles[3 * t + 1]!;
+    out[at++] = triangles[3 * t + 2]!;
   }
   return out;
 }
@@ -159,13 +202,23 @@ function compacted(positionsMm: Float64Array, triangles: Uint32Array, vertexCoun
   const out = new Float64Array(3 * used);
   for (let v = 0; v < vertexCount; v++) {
     const to = renumber[v]!;
-    if (to >= 0) { out[3 * to] = positionsMm[3 * v]!; out[3 * to + 1] = positionsMm[3 * v + 1]!; out[3 * to + 2] = positionsMm[3 * v + 2]!; }
+    if (to >= 0) {
+      out[3 * to] = positionsMm[3 * v]!;
+      out[3 * to + 1] = positionsMm[3 * v + 1]!;
+      out[3 * to + 2] = positionsMm[3 * v + 2]!;
+    }
   }
   return { positionsMm: out, vertexCount: used };
 }
 
 /** `spare`: memory nothing else uses, for the edge pairing's working arrays (see SpareMemory). */
-export function cleanMesh(positionsMm: Float64Array, triangles: Uint32Array, vertexCount: number, toleranceMm: number, spare: Uint8Array | null = null): CleanedMesh {
+export function cleanMesh(
+  positionsMm: Float64Array,
+  triangles: Uint32Array,
+  vertexCount: number,
+  toleranceMm: number,
+  spare: Uint8Array | null = null,
+): CleanedMesh {
   let edges = analyseEdges(triangles, vertexCount, false, spare);
   let changed = false;
   let verticesWelded = 0;
@@ -180,8 +233,13 @@ export function cleanMesh(positionsMm: Float64Array, triangles: Uint32Array, ver
       const collapsed = new Uint8Array(triangles.length / 3);
       for (let i = 0; i < triangles.length; i++) triangles[i] = weld.into[triangles[i]!]!;
       for (let t = 0; t < collapsed.length; t++) {
-        const a = triangles[3 * t]!, b = triangles[3 * t + 1]!, c = triangles[3 * t + 2]!;
-        if (a === b || b === c || a === c) { collapsed[t] = 1; zeroAreaDropped++; }
+        const a = triangles[3 * t]!,
+          b = triangles[3 * t + 1]!,
+          c = triangles[3 * t + 2]!;
+        if (a === b || b === c || a === c) {
+          collapsed[t] = 1;
+          zeroAreaDropped++;
+        }
       }
       triangles = withoutMarked(triangles, collapsed);
       edges = analyseEdges(triangles, vertexCount, false, spare);
@@ -222,7 +280,12 @@ export function cleanMesh(positionsMm: Float64Array, triangles: Uint32Array, ver
   if (!changed) return { positionsMm, triangles, vertexCount, edges, verticesWelded, zeroAreaDropped, duplicatesDropped };
   const compact = compacted(positionsMm, triangles, vertexCount);
   return {
-    positionsMm: compact.positionsMm, triangles, vertexCount: compact.vertexCount,
-    edges: analyseEdges(triangles, compact.vertexCount, false, spare), verticesWelded, zeroAreaDropped, duplicatesDropped,
+    positionsMm: compact.positionsMm,
+    triangles,
+    vertexCount: compact.vertexCount,
+    edges: analyseEdges(triangles, compact.vertexCount, false, spare),
+    verticesWelded,
+    zeroAreaDropped,
+    duplicatesDropped,
   };
 }

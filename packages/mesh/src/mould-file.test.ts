@@ -12,9 +12,23 @@ import { encodeStlAscii, encodeStlBinary } from './stl/encode-stl';
 // CRC Concise Encyclopedia of Mathematics, conical frustum: V = πh(R² + Rr + r²)/3 = 1642.006 mm³;
 // the mesh's rings are regular 64-gons inscribed in the circles, whose area is the circle's times
 // N sin(2π/N)/(2π) (CRC, regular polygon), so the mesh's pocket holds that factor times V.
-const R = 10, r = 6, h = 8, floorZ = 10, segments = 64;
-const mould = revolvedPocketBlock({ halfSide: 15, bottomZ: 0, topZ: floorZ + h, profile: [[0, floorZ], [r, floorZ], [R, floorZ + h]], segments });
-const handbookFillMm3 = ((segments * Math.sin((2 * Math.PI) / segments)) / (2 * Math.PI)) * (Math.PI * h * (R * R + R * r + r * r)) / 3;
+const R = 10,
+  r = 6,
+  h = 8,
+  floorZ = 10,
+  segments = 64;
+const mould = revolvedPocketBlock({
+  halfSide: 15,
+  bottomZ: 0,
+  topZ: floorZ + h,
+  profile: [
+    [0, floorZ],
+    [r, floorZ],
+    [R, floorZ + h],
+  ],
+  segments,
+});
+const handbookFillMm3 = (((segments * Math.sin((2 * Math.PI) / segments)) / (2 * Math.PI)) * (Math.PI * h * (R * R + R * r + r * r))) / 3;
 const text = (s: string): Uint8Array => new TextEncoder().encode(s);
 
 function fillsOf(bytes: Uint8Array, units?: FileUnits) {
@@ -40,15 +54,23 @@ describe('readMouldFile: every format and quirk gives the fill of the plain bina
     ['binary STL whose count is too high', stlWithCount(mould, mould.triangleCount + 1000), ['stl_count_mismatch']],
     ['binary STL whose count is too low', stlWithCount(mould, 7), ['stl_count_mismatch']],
     ['binary STL with a stray byte after its last record', stlWithTrailingBytes(mould, Uint8Array.of(0x0a)), ['stl_trailing_bytes']],
-    ['binary STL with 49 stray bytes and count 0', (() => {
-      const b = stlWithTrailingBytes(mould, new Uint8Array(49).fill(0x20));
-      new DataView(b.buffer).setUint32(80, 0, true);
-      return b;
-    })(), ['stl_count_mismatch', 'stl_trailing_bytes']],
+    [
+      'binary STL with 49 stray bytes and count 0',
+      (() => {
+        const b = stlWithTrailingBytes(mould, new Uint8Array(49).fill(0x20));
+        new DataView(b.buffer).setUint32(80, 0, true);
+        return b;
+      })(),
+      ['stl_count_mismatch', 'stl_trailing_bytes'],
+    ],
     ['binary STL with colour in its attribute bytes', stlWithColourAttributes(mould), []],
     ['3MF in millimetres', encode3mf(mould), []],
     ['OBJ of triangles', text(encodeObj(mould)), []],
-    ['OBJ of quads with v/vt/vn corners counted from the end, CRLF and continued lines', text(encodeObj(mould, { quads: true, corner: 'v/vt/vn', negative: true, lineEnding: '\r\n', continuation: true })), []],
+    [
+      'OBJ of quads with v/vt/vn corners counted from the end, CRLF and continued lines',
+      text(encodeObj(mould, { quads: true, corner: 'v/vt/vn', negative: true, lineEnding: '\r\n', continuation: true })),
+      [],
+    ],
     ['OBJ with v//vn corners', text(encodeObj(mould, { quads: true, corner: 'v//vn' })), []],
     ['OBJ with v/vt corners', text(encodeObj(mould, { corner: 'v/vt', negative: true })), []],
   ];
@@ -75,7 +97,12 @@ describe('readMouldFile: every format and quirk gives the fill of the plain bina
 
 describe('3MF units: the same mould in millimetres, inches and microns', () => {
   // NIST SP 811, appendix B: 1 in = 25.4 mm exactly; 1 µm = 0.001 mm (SI prefix micro = 10⁻⁶ m).
-  for (const [unit, units, mmPerFileUnit] of [['millimeter', 'mm', 1], ['inch', 'in', 25.4], ['micron', 'um', 0.001], ['centimeter', 'cm', 10]] as const) {
+  for (const [unit, units, mmPerFileUnit] of [
+    ['millimeter', 'mm', 1],
+    ['inch', 'in', 25.4],
+    ['micron', 'um', 0.001],
+    ['centimeter', 'cm', 10],
+  ] as const) {
     it(`${unit}: the fill in mm³ is the same`, () => {
       const got = fillsOf(encode3mf(mould, unit, mmPerFileUnit));
       expect(got.read.units).toBe(units);

@@ -28,8 +28,33 @@ export interface MouldFile {
 }
 
 const objKeywords = new Set([
-  'v', 'vt', 'vn', 'vp', 'f', 'fo', 'l', 'p', 'g', 'o', 's', 'mg', 'usemtl', 'mtllib', 'maplib', 'usemap',
-  'cstype', 'deg', 'curv', 'curv2', 'surf', 'lod', 'bevel', 'c_interp', 'd_interp', 'shadow_obj', 'trace_obj',
+  'v',
+  'vt',
+  'vn',
+  'vp',
+  'f',
+  'fo',
+  'l',
+  'p',
+  'g',
+  'o',
+  's',
+  'mg',
+  'usemtl',
+  'mtllib',
+  'maplib',
+  'usemap',
+  'cstype',
+  'deg',
+  'curv',
+  'curv2',
+  'surf',
+  'lod',
+  'bevel',
+  'c_interp',
+  'd_interp',
+  'shadow_obj',
+  'trace_obj',
 ]);
 /** How much of a text file is looked at to tell OBJ from other text. */
 const sniffBytes = 256 * 1024;
@@ -52,7 +77,10 @@ function looksLikeObj(bytes: Uint8Array): boolean {
     if (line === '' || line.startsWith('#')) continue;
     const keyword = line.split(/\s+/, 1)[0]!;
     firstKeyword ??= keyword;
-    if (keyword === 'v') { vertexLine = true; break; }
+    if (keyword === 'v') {
+      vertexLine = true;
+      break;
+    }
   }
   return firstKeyword !== null && objKeywords.has(firstKeyword) && vertexLine;
 }
@@ -78,10 +106,14 @@ function unknownFormat(bytes: Uint8Array): MeshError {
   if (looksLikeText(bytes)) {
     return {
       code: 'file_not_mould',
-      message: 'The file is text but neither an ASCII STL (which begins with "solid") nor an OBJ (which has "v" and "f" lines); export the mould as STL, 3MF or OBJ and upload that file.',
+      message:
+        'The file is text but neither an ASCII STL (which begins with "solid") nor an OBJ (which has "v" and "f" lines); export the mould as STL, 3MF or OBJ and upload that file.',
     };
   }
-  return { code: 'file_not_mould', message: `The file is only ${bytes.length} bytes of binary data, too short for any mould file; export the mould as STL, 3MF or OBJ and upload the whole file.` };
+  return {
+    code: 'file_not_mould',
+    message: `The file is only ${bytes.length} bytes of binary data, too short for any mould file; export the mould as STL, 3MF or OBJ and upload the whole file.`,
+  };
 }
 
 /**

@@ -20,10 +20,12 @@ function boundaryLoops(table: TriangleTable, inSet: Uint8Array, vertexCount: num
   for (let t = 0; t < table.count; t++) {
     if (!inSet[t]) continue;
     for (let k = 0; k < 3; k++) {
-      const a = triangles[3 * t + k]!, b = triangles[3 * t + ((k + 1) % 3)]!;
+      const a = triangles[3 * t + k]!,
+        b = triangles[3 * t + ((k + 1) % 3)]!;
       if (edges.has(key(b, a))) continue;
       const list = outgoing.get(a);
-      if (list) list.push(b); else outgoing.set(a, [b]);
+      if (list) list.push(b);
+      else outgoing.set(a, [b]);
     }
   }
   const loops: number[][] = [];
@@ -46,13 +48,18 @@ function boundaryLoops(table: TriangleTable, inSet: Uint8Array, vertexCount: num
 /** Area of {points covered by the set at least once}: the union of the loops by the non-zero rule (Clipper2). */
 function unionArea(table: TriangleTable, loops: number[][], rect: PlaneRect): number {
   const positions = table.positions;
-  const cx = (rect.minX + rect.maxX) / 2, cy = (rect.minY + rect.maxY) / 2;
+  const cx = (rect.minX + rect.maxX) / 2,
+    cy = (rect.minY + rect.maxY) / 2;
   // Integer coordinates to about 2^31 across: sub-nanometre steps on a metre-wide mould.
   const scale = 2 ** 31 / Math.max(rect.maxX - rect.minX, rect.maxY - rect.minY, 1e-9);
-  const paths: Paths64 = loops.filter((l) => l.length >= 3).map((loop): Path64 => loop.map((v) => ({
-    x: Math.round((positions[3 * v]! - cx) * scale),
-    y: Math.round((positions[3 * v + 1]! - cy) * scale),
-  })));
+  const paths: Paths64 = loops
+    .filter((l) => l.length >= 3)
+    .map((loop): Path64 =>
+      loop.map((v) => ({
+        x: Math.round((positions[3 * v]! - cx) * scale),
+        y: Math.round((positions[3 * v + 1]! - cy) * scale),
+      })),
+    );
   if (paths.length === 0) return 0;
   return Math.abs(Clipper.areaPaths(Clipper.union(paths, FillRule.NonZero))) / (scale * scale);
 }
@@ -65,8 +72,10 @@ function unionArea(table: TriangleTable, loops: number[][], rect: PlaneRect): nu
  * add beyond it goes through the polygon union.
  */
 export function outlineArea(table: TriangleTable, vertexCount: number, rect: PlaneRect, zMin: number, tableToleranceMm: number): number {
-  const down = new Uint8Array(table.count), base = new Uint8Array(table.count);
-  let baseArea = 0, raised = 0;
+  const down = new Uint8Array(table.count),
+    base = new Uint8Array(table.count);
+  let baseArea = 0,
+    raised = 0;
   for (let t = 0; t < table.count; t++) {
     if (table.facing[t]! >= 0) continue;
     down[t] = 1;

@@ -48,7 +48,12 @@ describe('prepareMesh: welding and topology', () => {
   });
 
   it('turns single backwards triangles to match their neighbours', () => {
-    const flippedOne = inverted(withoutTriangles(pocketBlock, Array.from({ length: pocketBlock.triangleCount }, (_, t) => t).filter((t) => t !== 5)));
+    const flippedOne = inverted(
+      withoutTriangles(
+        pocketBlock,
+        Array.from({ length: pocketBlock.triangleCount }, (_, t) => t).filter((t) => t !== 5),
+      ),
+    );
     const rest = withoutTriangles(pocketBlock, [5]);
     const mesh = meshOf(combined(rest, flippedOne));
     expect(mesh.topology.misorientedEdges).toBe(3);
@@ -80,13 +85,18 @@ describe('prepareMesh: welding and topology', () => {
 
 describe('prepareMesh: enclosed volume of a torus', () => {
   it('matches 2π²Rr² (CRC Concise Encyclopedia of Mathematics) up to the polygon factors of the tessellation', () => {
-    const R = 30, r = 8;
+    const R = 30,
+      r = 8;
     const analytic = 2 * Math.PI ** 2 * R * r ** 2; // CRC: torus V = 2π²Rr²
     // The generated torus has its n × m corners on the true surface. Each of its n segments is
     // a wedge of angle 2π/n whose cross-section is the regular m-gon of area (m/2) r² sin(2π/m)
     // (CRC: regular polygon area), centred at R, so by the wedge integral the mesh encloses
     // exactly n sin(2π/n) · R · (m/2) r² sin(2π/m).
-    for (const [n, m] of [[24, 12], [96, 48], [256, 128]] as const) {
+    for (const [n, m] of [
+      [24, 12],
+      [96, 48],
+      [256, 128],
+    ] as const) {
       const polyhedral = n * Math.sin((2 * Math.PI) / n) * R * (m / 2) * r * r * Math.sin((2 * Math.PI) / m);
       const mesh = meshOf(torus(R, r, n, m));
       expect(mesh.topology.watertight).toBe(true);

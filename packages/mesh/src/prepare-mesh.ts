@@ -91,12 +91,18 @@ export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}
     for (let i = 0; i < soup.positions.length; i++) largest = Math.max(largest, Math.abs(soup.positions[i]!));
     // Cell numbers must stay within 32 bits for the weld's keys.
     if ((largest * scale) / toleranceMm >= 2 ** 31 - 1) {
-      return fail('option_invalid', `A weld tolerance of ${toleranceMm} mm is too fine for coordinates up to ${(largest * scale).toPrecision(3)} mm; use at least ${((largest * scale) / 2 ** 30).toPrecision(2)} mm.`);
+      return fail(
+        'option_invalid',
+        `A weld tolerance of ${toleranceMm} mm is too fine for coordinates up to ${(largest * scale).toPrecision(3)} mm; use at least ${((largest * scale) / 2 ** 30).toPrecision(2)} mm.`,
+      );
     }
   }
   const welded = weldSoup(soup, { up: up.value, scale, toleranceMm });
   if (welded.triangleCount === 0) {
-    return fail('mesh_degenerate', 'Every triangle of the mesh collapses to a line or a point after welding its corners; export the mould again at full precision.');
+    return fail(
+      'mesh_degenerate',
+      'Every triangle of the mesh collapses to a line or a point after welding its corners; export the mould again at full precision.',
+    );
   }
   const weldedBox = boundingBox(welded.positionsMm, welded.vertexCount);
   const diagonalMm = Math.hypot(...[0, 1, 2].map((k) => weldedBox.max[k]! - weldedBox.min[k]!));
@@ -107,12 +113,18 @@ export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}
   const triangles = cleaned.triangles;
   const triangleCount = triangles.length / 3;
   if (triangleCount === 0) {
-    return fail('mesh_degenerate', 'Every triangle of the mesh has no area (its corners lie on a line or at one point); export the mould again at full precision.');
+    return fail(
+      'mesh_degenerate',
+      'Every triangle of the mesh has no area (its corners lie on a line or at one point); export the mould again at full precision.',
+    );
   }
   const bboxMm = cleaned.vertexCount === welded.vertexCount ? weldedBox : boundingBox(cleaned.positionsMm, cleaned.vertexCount);
   const extent = [0, 1, 2].map((k) => bboxMm.max[k]! - bboxMm.min[k]!);
   if (extent.some((e) => !(e > 0))) {
-    return fail('mesh_degenerate', `The mesh is flat (its size is ${extent.map((e) => e.toPrecision(4)).join(' × ')} mm); a mould needs width, depth and height, so check the units and the up axis.`);
+    return fail(
+      'mesh_degenerate',
+      `The mesh is flat (its size is ${extent.map((e) => e.toPrecision(4)).join(' × ')} mm); a mould needs width, depth and height, so check the units and the up axis.`,
+    );
   }
 
   const warnings: MeshWarning[] = [...soup.warnings];
@@ -125,25 +137,43 @@ export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}
     turnedTriangles = repair.turned;
     windingConflicts = repair.conflicts;
     if (turnedTriangles > 0) {
-      warnings.push({ code: 'inconsistent_winding_fixed', message: `${turnedTriangles} triangles were wound against their neighbours and have been turned to match; check the exporter's settings.` });
+      warnings.push({
+        code: 'inconsistent_winding_fixed',
+        message: `${turnedTriangles} triangles were wound against their neighbours and have been turned to match; check the exporter's settings.`,
+      });
     }
   }
   const watertight = edges.openEdges === 0 && edges.nonManifoldEdges === 0;
   if (cleaned.verticesWelded > 0) {
-    warnings.push({ code: 'vertices_welded', message: `${cleaned.verticesWelded} corners lay a hair apart (within ${formatMm(cleanToleranceMm)}) from where their neighbours meet, as a writer's rounding leaves them, and were welded to close the gaps.` });
+    warnings.push({
+      code: 'vertices_welded',
+      message: `${cleaned.verticesWelded} corners lay a hair apart (within ${formatMm(cleanToleranceMm)}) from where their neighbours meet, as a writer's rounding leaves them, and were welded to close the gaps.`,
+    });
   }
   const zeroArea = welded.degenerateDropped + cleaned.zeroAreaDropped;
   if (zeroArea > 0) {
-    warnings.push({ code: 'zero_area_triangles_dropped', message: `${zeroArea} triangles had no area (their corners at one point or on a line) and were left out.` });
+    warnings.push({
+      code: 'zero_area_triangles_dropped',
+      message: `${zeroArea} triangles had no area (their corners at one point or on a line) and were left out.`,
+    });
   }
   if (cleaned.duplicatesDropped > 0) {
-    warnings.push({ code: 'duplicate_triangles_dropped', message: `${cleaned.duplicatesDropped} triangles were written twice and their copies were left out.` });
+    warnings.push({
+      code: 'duplicate_triangles_dropped',
+      message: `${cleaned.duplicatesDropped} triangles were written twice and their copies were left out.`,
+    });
   }
   if (edges.openEdges > 0) {
-    warnings.push({ code: 'open_mesh', message: `The surface has ${edges.openEdges} open edges (holes), so it encloses no volume; the fill is found column by column, taking the highest surface in each column as the mould. Close the holes in your CAD program for exact numbers.` });
+    warnings.push({
+      code: 'open_mesh',
+      message: `The surface has ${edges.openEdges} open edges (holes), so it encloses no volume; the fill is found column by column, taking the highest surface in each column as the mould. Close the holes in your CAD program for exact numbers.`,
+    });
   }
   if (edges.nonManifoldEdges > 0) {
-    warnings.push({ code: 'non_manifold_edges', message: `${edges.nonManifoldEdges} edges are shared by three or more triangles; the fill is found column by column. Clean the mesh in your CAD program for exact numbers.` });
+    warnings.push({
+      code: 'non_manifold_edges',
+      message: `${edges.nonManifoldEdges} edges are shared by three or more triangles; the fill is found column by column. Clean the mesh in your CAD program for exact numbers.`,
+    });
   }
 
   let measures = surfaceMeasures(cleaned.positionsMm, triangles, bboxMm);
@@ -153,7 +183,10 @@ export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}
     turnAllTriangles(triangles);
     measures = { signedVolumeMm3: -measures.signedVolumeMm3, surfaceAreaMm2: measures.surfaceAreaMm2 };
     invertedFixed = true;
-    warnings.push({ code: 'inverted_normals_fixed', message: 'The surface was wound inside-out (its normals pointed into the wood); every triangle has been turned so the normals point out.' });
+    warnings.push({
+      code: 'inverted_normals_fixed',
+      message: 'The surface was wound inside-out (its normals pointed into the wood); every triangle has been turned so the normals point out.',
+    });
   }
 
   return ok({

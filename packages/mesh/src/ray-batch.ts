@@ -21,14 +21,21 @@ export interface RayIntervals {
  * a million triangles.
  */
 export function castRays(
-  xs: Float64Array, ys: Float64Array, positions: Float64Array, triangles: Uint32Array, table: TriangleTable,
-  rect: PlaneRect, floorZ: number,
+  xs: Float64Array,
+  ys: Float64Array,
+  positions: Float64Array,
+  triangles: Uint32Array,
+  table: TriangleTable,
+  rect: PlaneRect,
+  floorZ: number,
 ): RayIntervals {
   const rays = xs.length;
-  const width = Math.max(rect.maxX - rect.minX, 1e-9), depth = Math.max(rect.maxY - rect.minY, 1e-9);
+  const width = Math.max(rect.maxX - rect.minX, 1e-9),
+    depth = Math.max(rect.maxY - rect.minY, 1e-9);
   const nx = Math.max(1, Math.min(2048, Math.round(Math.sqrt((rays * width) / depth))));
   const ny = Math.max(1, Math.min(2048, Math.round(rays / nx)));
-  const cellX = width / nx, cellY = depth / ny;
+  const cellX = width / nx,
+    cellY = depth / ny;
   const cellOf = (x: number, y: number): number => {
     const i = Math.min(nx - 1, Math.max(0, Math.floor((x - rect.minX) / cellX)));
     const j = Math.min(ny - 1, Math.max(0, Math.floor((y - rect.minY) / cellY)));
@@ -42,13 +49,23 @@ export function castRays(
   for (let r = 0; r < rays; r++) cellRays[fill[cellOf(xs[r]!, ys[r]!)]!++] = r;
 
   let capacity = 4 * rays + 64;
-  let hitRay = new Uint32Array(capacity), hitZ = new Float64Array(capacity), hitUp = new Uint8Array(capacity), hitTri = new Int32Array(capacity);
+  let hitRay = new Uint32Array(capacity),
+    hitZ = new Float64Array(capacity),
+    hitUp = new Uint8Array(capacity),
+    hitTri = new Int32Array(capacity);
   let hits = 0;
   if (rays > 0) {
     for (let t = 0; t < table.count; t++) {
       if (table.facing[t] === 0) continue;
-      const a = 3 * triangles[3 * t]!, b = 3 * triangles[3 * t + 1]!, c = 3 * triangles[3 * t + 2]!;
-      const x0 = positions[a]!, y0 = positions[a + 1]!, x1 = positions[b]!, y1 = positions[b + 1]!, x2 = positions[c]!, y2 = positions[c + 1]!;
+      const a = 3 * triangles[3 * t]!,
+        b = 3 * triangles[3 * t + 1]!,
+        c = 3 * triangles[3 * t + 2]!;
+      const x0 = positions[a]!,
+        y0 = positions[a + 1]!,
+        x1 = positions[b]!,
+        y1 = positions[b + 1]!,
+        x2 = positions[c]!,
+        y2 = positions[c + 1]!;
       const iLo = Math.max(0, Math.floor((Math.min(x0, x1, x2) - rect.minX) / cellX));
       const iHi = Math.min(nx - 1, Math.floor((Math.max(x0, x1, x2) - rect.minX) / cellX));
       const jLo = Math.max(0, Math.floor((Math.min(y0, y1, y2) - rect.minY) / cellY));
@@ -58,14 +75,23 @@ export function castRays(
           const cell = j * nx + i;
           for (let k = cellStart[cell]!; k < cellStart[cell + 1]!; k++) {
             const r = cellRays[k]!;
-            const px = xs[r]!, py = ys[r]!;
+            const px = xs[r]!,
+              py = ys[r]!;
             if (!shadowContains(x0, y0, x1, y1, x2, y2, px, py)) continue;
             if (hits === capacity) {
               capacity *= 2;
-              const r2 = new Uint32Array(capacity); r2.set(hitRay); hitRay = r2;
-              const z2 = new Float64Array(capacity); z2.set(hitZ); hitZ = z2;
-              const u2 = new Uint8Array(capacity); u2.set(hitUp); hitUp = u2;
-              const t2 = new Int32Array(capacity); t2.set(hitTri); hitTri = t2;
+              const r2 = new Uint32Array(capacity);
+              r2.set(hitRay);
+              hitRay = r2;
+              const z2 = new Float64Array(capacity);
+              z2.set(hitZ);
+              hitZ = z2;
+              const u2 = new Uint8Array(capacity);
+              u2.set(hitUp);
+              hitUp = u2;
+              const t2 = new Int32Array(capacity);
+              t2.set(hitTri);
+              hitTri = t2;
             }
             hitTri[hits] = t;
             hitRay[hits] = r;
@@ -86,7 +112,9 @@ export function castRays(
     rayStart[r + 1]! += rayStart[r]!;
   }
   const at = rayStart.slice(0, rays);
-  const z = new Float64Array(hits), up = new Uint8Array(hits), tri = new Int32Array(hits);
+  const z = new Float64Array(hits),
+    up = new Uint8Array(hits),
+    tri = new Int32Array(hits);
   for (let h = 0; h < hits; h++) {
     const w = at[hitRay[h]!]!++;
     z[w] = hitZ[h]!;
@@ -95,7 +123,8 @@ export function castRays(
   }
   const start = new Uint32Array(rays + 1);
   const balanced = new Uint8Array(rays);
-  const out = new Float64Array(2 * busiest), outTri = new Int32Array(busiest);
+  const out = new Float64Array(2 * busiest),
+    outTri = new Int32Array(busiest);
   const pairing: Pairing = { intervals: 0, balanced: true };
   let intervals = new Float64Array(Math.max(16, hits + 16));
   let bottoms = new Int32Array(Math.ceil(intervals.length / 2));

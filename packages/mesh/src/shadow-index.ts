@@ -25,18 +25,19 @@ export interface PlaneRect {
   maxY: number;
 }
 
-export function buildShadowIndex(
-  positions: Float64Array, triangles: Uint32Array, include: Uint8Array, rect: PlaneRect,
-): ShadowIndex {
+export function buildShadowIndex(positions: Float64Array, triangles: Uint32Array, include: Uint8Array, rect: PlaneRect): ShadowIndex {
   const count = triangles.length / 3;
   let included = 0;
   for (let t = 0; t < count; t++) if (include[t]) included++;
-  const width = Math.max(rect.maxX - rect.minX, 1e-9), depth = Math.max(rect.maxY - rect.minY, 1e-9);
+  const width = Math.max(rect.maxX - rect.minX, 1e-9),
+    depth = Math.max(rect.maxY - rect.minY, 1e-9);
   const cells = Math.min(1 << 20, Math.max(1, Math.ceil(included / 2)));
   const nx = Math.max(1, Math.min(4096, Math.round(Math.sqrt((cells * width) / depth))));
   const ny = Math.max(1, Math.min(4096, Math.round(cells / nx)));
-  const cellX = width / nx, cellY = depth / ny;
-  const originX = rect.minX, originY = rect.minY;
+  const cellX = width / nx,
+    cellY = depth / ny;
+  const originX = rect.minX,
+    originY = rect.minY;
   const start = new Uint32Array(nx * ny + 1);
   const span = new Float64Array(2);
   let items = new Uint32Array(0);
@@ -45,19 +46,29 @@ export function buildShadowIndex(
   for (let pass = 0; pass < 2; pass++) {
     for (let t = 0; t < count; t++) {
       if (!include[t]) continue;
-      const a = 3 * triangles[3 * t]!, b = 3 * triangles[3 * t + 1]!, c = 3 * triangles[3 * t + 2]!;
-      const x0 = positions[a]!, y0 = positions[a + 1]!, x1 = positions[b]!, y1 = positions[b + 1]!, x2 = positions[c]!, y2 = positions[c + 1]!;
-      const slackX = cellX * 1e-9, slackY = cellY * 1e-9;
+      const a = 3 * triangles[3 * t]!,
+        b = 3 * triangles[3 * t + 1]!,
+        c = 3 * triangles[3 * t + 2]!;
+      const x0 = positions[a]!,
+        y0 = positions[a + 1]!,
+        x1 = positions[b]!,
+        y1 = positions[b + 1]!,
+        x2 = positions[c]!,
+        y2 = positions[c + 1]!;
+      const slackX = cellX * 1e-9,
+        slackY = cellY * 1e-9;
       const iMin = Math.max(0, Math.floor((Math.min(x0, x1, x2) - slackX - originX) / cellX));
       const iMax = Math.min(nx - 1, Math.floor((Math.max(x0, x1, x2) + slackX - originX) / cellX));
       const jMin = Math.max(0, Math.floor((Math.min(y0, y1, y2) - slackY - originY) / cellY));
       const jMax = Math.min(ny - 1, Math.floor((Math.max(y0, y1, y2) + slackY - originY) / cellY));
       const small = (iMax - iMin) * (jMax - jMin) <= 4;
       for (let j = jMin; j <= jMax; j++) {
-        let iLo = iMin, iHi = iMax;
+        let iLo = iMin,
+          iHi = iMax;
         if (!small) {
           // Large triangles: only the cells along their actual shadow, row by row.
-          const ylo = originY + j * cellY - slackY, yhi = originY + (j + 1) * cellY + slackY;
+          const ylo = originY + j * cellY - slackY,
+            yhi = originY + (j + 1) * cellY + slackY;
           if (!shadowSpanInBand(x0, y0, x1, y1, x2, y2, ylo, yhi, span)) continue;
           iLo = Math.max(iMin, Math.floor((span[0]! - slackX - originX) / cellX));
           iHi = Math.min(iMax, Math.floor((span[1]! + slackX - originX) / cellX));

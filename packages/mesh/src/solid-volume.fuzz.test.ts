@@ -29,11 +29,19 @@ function largestCoordinate(mesh: GeneratedMesh): number {
 
 /** Rotation by a unit quaternion (Hamilton): any proper rotation, so winding and volume survive it. */
 const rotation: fc.Arbitrary<Rotation> = fc
-  .tuple(fc.double({ min: -1, max: 1, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true }))
+  .tuple(
+    fc.double({ min: -1, max: 1, noNaN: true }),
+    fc.double({ min: -1, max: 1, noNaN: true }),
+    fc.double({ min: -1, max: 1, noNaN: true }),
+    fc.double({ min: -1, max: 1, noNaN: true }),
+  )
   .filter(([w, x, y, z]) => Math.hypot(w, x, y, z) > 0.1)
   .map(([w0, x0, y0, z0]) => {
     const n = Math.hypot(w0, x0, y0, z0);
-    const w = w0 / n, x = x0 / n, y = y0 / n, z = z0 / n;
+    const w = w0 / n,
+      x = x0 / n,
+      y = y0 / n,
+      z = z0 / n;
     const m = [
       [1 - 2 * (y * y + z * z), 2 * (x * y - w * z), 2 * (x * z + w * y)],
       [2 * (x * y + w * z), 1 - 2 * (x * x + z * z), 2 * (y * z - w * x)],
@@ -44,12 +52,15 @@ const rotation: fc.Arbitrary<Rotation> = fc
 
 /** A turn about z only: the mould keeps its opening up. */
 const yaw: fc.Arbitrary<Rotation> = fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }).map((t) => {
-  const c = Math.cos(t), s = Math.sin(t);
+  const c = Math.cos(t),
+    s = Math.sin(t);
   return (p: Vec): Vec => [c * p[0] - s * p[1], s * p[0] + c * p[1], p[2]];
 });
 
 const side = fc.double({ min: 0.5, max: 500, noNaN: true });
-const offset = fc.tuple(...[0, 1, 2].map(() => fc.double({ min: -1000, max: 1000, noNaN: true })) as [fc.Arbitrary<number>, fc.Arbitrary<number>, fc.Arbitrary<number>]);
+const offset = fc.tuple(
+  ...([0, 1, 2].map(() => fc.double({ min: -1000, max: 1000, noNaN: true })) as [fc.Arbitrary<number>, fc.Arbitrary<number>, fc.Arbitrary<number>]),
+);
 const fileFormat = fc.constantFrom('binary', 'ascii');
 const units = fc.constantFrom<FileUnits>('mm', 'cm', 'in');
 const upAxis = fc.constantFrom<UpAxis>('x', 'y', 'z');
@@ -89,35 +100,41 @@ function regularPrism(n: number, r: number, h: number): GeneratedMesh {
 
 describe('closed solids from generated files: the enclosed volume is the closed-form one', () => {
   it('a box a × b × c, turned any way, moved anywhere, wound either way, in any units and either format', () => {
-    fc.assert(fc.property(side, side, side, rotation, offset, fc.boolean(), fileFormat, units, (a, b, c, turn, shift, insideOut, format, unit) => {
-      const box = cellSolid([0, a], [0, b], [0, c], () => true);
-      const file = placed(insideOut ? inverted(box) : box, turn, shift);
-      const result = analyzeStl(encoded(file, format), { units: unit, maxColumns: 4096 });
-      expect(result.ok).toBe(true);
-      if (!result.ok) return;
-      const scale = mmPerUnit[unit] ** 3;
-      // Rectangular parallelepiped: V = abc (CRC Concise Encyclopedia of Mathematics, "Cuboid").
-      const expected = a * b * c * scale;
-      const slack = float32VolumeSlack(largestCoordinate(file), 2 * (a * b + b * c + c * a)) * scale;
-      expect(result.value.watertight).toBe(true);
-      expect(Math.abs(result.value.enclosedVolumeMm3! - expected)).toBeLessThanOrEqual(slack);
-    }), { numRuns: 60 });
+    fc.assert(
+      fc.property(side, side, side, rotation, offset, fc.boolean(), fileFormat, units, (a, b, c, turn, shift, insideOut, format, unit) => {
+        const box = cellSolid([0, a], [0, b], [0, c], () => true);
+        const file = placed(insideOut ? inverted(box) : box, turn, shift);
+        const result = analyzeStl(encoded(file, format), { units: unit, maxColumns: 4096 });
+        expect(result.ok).toBe(true);
+        if (!result.ok) return;
+        const scale = mmPerUnit[unit] ** 3;
+        // Rectangular parallelepiped: V = abc (CRC Concise Encyclopedia of Mathematics, "Cuboid").
+        const expected = a * b * c * scale;
+        const slack = float32VolumeSlack(largestCoordinate(file), 2 * (a * b + b * c + c * a)) * scale;
+        expect(result.value.watertight).toBe(true);
+        expect(Math.abs(result.value.enclosedVolumeMm3! - expected)).toBeLessThanOrEqual(slack);
+      }),
+      { numRuns: 60 },
+    );
   });
 
   it('a right prism over a regular n-gon, turned and moved', () => {
     const sides = fc.integer({ min: 3, max: 48 });
-    fc.assert(fc.property(sides, side, side, rotation, offset, fileFormat, (n, r, h, turn, shift, format) => {
-      const file = placed(regularPrism(n, r, h), turn, shift);
-      const result = analyzeStl(encoded(file, format), { maxColumns: 4096 });
-      expect(result.ok).toBe(true);
-      if (!result.ok) return;
-      // Regular polygon of circumradius r: A = ½·n·r²·sin(2π/n) (CRC Concise Encyclopedia of
-      // Mathematics, "Regular Polygon"); a right prism holds V = A·h (Cavalieri's principle).
-      const baseArea = 0.5 * n * r * r * Math.sin((2 * Math.PI) / n);
-      const perimeter = 2 * n * r * Math.sin(Math.PI / n);
-      const slack = float32VolumeSlack(largestCoordinate(file), 2 * baseArea + perimeter * h);
-      expect(Math.abs(result.value.enclosedVolumeMm3! - baseArea * h)).toBeLessThanOrEqual(slack);
-    }), { numRuns: 60 });
+    fc.assert(
+      fc.property(sides, side, side, rotation, offset, fileFormat, (n, r, h, turn, shift, format) => {
+        const file = placed(regularPrism(n, r, h), turn, shift);
+        const result = analyzeStl(encoded(file, format), { maxColumns: 4096 });
+        expect(result.ok).toBe(true);
+        if (!result.ok) return;
+        // Regular polygon of circumradius r: A = ½·n·r²·sin(2π/n) (CRC Concise Encyclopedia of
+        // Mathematics, "Regular Polygon"); a right prism holds V = A·h (Cavalieri's principle).
+        const baseArea = 0.5 * n * r * r * Math.sin((2 * Math.PI) / n);
+        const perimeter = 2 * n * r * Math.sin(Math.PI / n);
+        const slack = float32VolumeSlack(largestCoordinate(file), 2 * baseArea + perimeter * h);
+        expect(Math.abs(result.value.enclosedVolumeMm3! - baseArea * h)).toBeLessThanOrEqual(slack);
+      }),
+      { numRuns: 60 },
+    );
   });
 });
 
@@ -126,27 +143,37 @@ describe('a block with a rectangular pocket: the fill is length × width × resi
   const cut = fc.tuple(side, side, side).map(([p, q, r]): Vec => [p, p + q, p + q + r]);
   const floorAndTop = fc.tuple(side, side).map(([p, q]): [number, number] => [p, p + q]);
   it('at any level in the pocket, for any wall thickness, turn about the up axis, position and up axis of the file', () => {
-    fc.assert(fc.property(
-      cut, cut, floorAndTop, fc.double({ min: 0.05, max: 1, noNaN: true }), yaw, offset, upAxis, fileFormat,
-      ([x1, x2, xEnd], [y1, y2, yEnd], [floor, top], fraction, turn, shift, up, format) => {
-        const block = cellSolid([0, x1, x2, xEnd], [0, y1, y2, yEnd], [0, floor, top], (i, j, k) => !(i === 1 && j === 1 && k === 1));
-        const file = placed(block, turn, shift, up);
-        const depth = fraction * (top - floor);
-        // The level is along the file's up axis, so it is the placed floor plus the resin depth.
-        const level = shift[2] + floor + depth;
-        const analysis = analyzeStl(encoded(file, format), { up, maxColumns: 4096, levelsMm: [level] });
-        expect(analysis.ok).toBe(true);
-        if (!analysis.ok) return;
-        expect(analysis.value.method).toBe('exact');
-        const fill = fillAt(analysis.value, level);
-        expect(fill.ok).toBe(true);
-        if (!fill.ok) return;
-        // A rectangular pocket filled to depth d holds V = l·w·d (CRC, "Cuboid").
-        const expected = (x2 - x1) * (y2 - y1) * depth;
-        const surface = 2 * (xEnd * yEnd + yEnd * top + top * xEnd) + 2 * (x2 - x1 + y2 - y1) * (top - floor);
-        const slack = float32VolumeSlack(largestCoordinate(file), surface);
-        expect(Math.abs(fill.value.volumeMm3 - expected)).toBeLessThanOrEqual(slack);
-      },
-    ), { numRuns: 40 });
+    fc.assert(
+      fc.property(
+        cut,
+        cut,
+        floorAndTop,
+        fc.double({ min: 0.05, max: 1, noNaN: true }),
+        yaw,
+        offset,
+        upAxis,
+        fileFormat,
+        ([x1, x2, xEnd], [y1, y2, yEnd], [floor, top], fraction, turn, shift, up, format) => {
+          const block = cellSolid([0, x1, x2, xEnd], [0, y1, y2, yEnd], [0, floor, top], (i, j, k) => !(i === 1 && j === 1 && k === 1));
+          const file = placed(block, turn, shift, up);
+          const depth = fraction * (top - floor);
+          // The level is along the file's up axis, so it is the placed floor plus the resin depth.
+          const level = shift[2] + floor + depth;
+          const analysis = analyzeStl(encoded(file, format), { up, maxColumns: 4096, levelsMm: [level] });
+          expect(analysis.ok).toBe(true);
+          if (!analysis.ok) return;
+          expect(analysis.value.method).toBe('exact');
+          const fill = fillAt(analysis.value, level);
+          expect(fill.ok).toBe(true);
+          if (!fill.ok) return;
+          // A rectangular pocket filled to depth d holds V = l·w·d (CRC, "Cuboid").
+          const expected = (x2 - x1) * (y2 - y1) * depth;
+          const surface = 2 * (xEnd * yEnd + yEnd * top + top * xEnd) + 2 * (x2 - x1 + y2 - y1) * (top - floor);
+          const slack = float32VolumeSlack(largestCoordinate(file), surface);
+          expect(Math.abs(fill.value.volumeMm3 - expected)).toBeLessThanOrEqual(slack);
+        },
+      ),
+      { numRuns: 40 },
+    );
   });
 });

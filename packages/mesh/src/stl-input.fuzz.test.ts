@@ -15,8 +15,21 @@ const headerBytes = 84;
 const recordBytes = 50;
 
 const errorCodes: readonly MeshErrorCode[] = [
-  'file_empty', 'file_not_mould', 'too_many_triangles', 'stl_empty', 'stl_truncated', 'stl_not_stl', 'stl_non_finite', 'stl_too_many_triangles', 'stl_no_triangles',
-  'mesh_degenerate', 'option_invalid', 'level_invalid', 'levels_not_ascending', 'dam_invalid', 'analysis_invalid',
+  'file_empty',
+  'file_not_mould',
+  'too_many_triangles',
+  'stl_empty',
+  'stl_truncated',
+  'stl_not_stl',
+  'stl_non_finite',
+  'stl_too_many_triangles',
+  'stl_no_triangles',
+  'mesh_degenerate',
+  'option_invalid',
+  'level_invalid',
+  'levels_not_ascending',
+  'dam_invalid',
+  'analysis_invalid',
 ];
 
 // Generous for a loaded 2-core machine; a quadratic scan or a runaway loop blows well past them.
@@ -119,7 +132,11 @@ const mutation: fc.Arbitrary<Mutation> = fc.oneof(
   fc.record({ kind: fc.constant('flip' as const), at: fc.nat(), mask: fc.integer({ min: 1, max: 255 }) }),
   fc.record({
     kind: fc.constant('count' as const),
-    count: fc.oneof(fc.constantFrom(0, 1, 2 ** 31, 2 ** 32 - 1, defaultMaxTriangles, defaultMaxTriangles + 1), fc.nat(), fc.integer({ min: 0, max: 2 ** 32 - 1 })),
+    count: fc.oneof(
+      fc.constantFrom(0, 1, 2 ** 31, 2 ** 32 - 1, defaultMaxTriangles, defaultMaxTriangles + 1),
+      fc.nat(),
+      fc.integer({ min: 0, max: 2 ** 32 - 1 }),
+    ),
   }),
   fc.record({ kind: fc.constant('float' as const), record: fc.nat(), slot: fc.integer({ min: 0, max: 11 }), value: fc.oneof(specialFloats, fc.float()) }),
   fc.record({ kind: fc.constant('append' as const), extra: fc.uint8Array({ minLength: 1, maxLength: 120 }) }),
@@ -149,9 +166,44 @@ function applied(source: Uint8Array, mutations: Mutation[]): Uint8Array {
 /** Words a damaged ASCII STL might carry where a keyword or number belongs. */
 const asciiToken = fc.oneof(
   fc.constantFrom(
-    'solid', 'endsolid', 'facet', 'normal', 'outer', 'loop', 'vertex', 'endloop', 'endfacet', 'FACET', 'Vertex',
-    'nan', '-NaN', 'inf', '-inf', 'Infinity', '1e39', '-1e39', '3.4028236e38', '1e-46', '1e', '1e+', '.', '-', '+.e1',
-    '0x1p3', '1,5', '1.5.5', '٣', '１', '\u00a0', '\u2028', '\t', '\r\n', '\r', '\n', '\uFEFF', '\0',
+    'solid',
+    'endsolid',
+    'facet',
+    'normal',
+    'outer',
+    'loop',
+    'vertex',
+    'endloop',
+    'endfacet',
+    'FACET',
+    'Vertex',
+    'nan',
+    '-NaN',
+    'inf',
+    '-inf',
+    'Infinity',
+    '1e39',
+    '-1e39',
+    '3.4028236e38',
+    '1e-46',
+    '1e',
+    '1e+',
+    '.',
+    '-',
+    '+.e1',
+    '0x1p3',
+    '1,5',
+    '1.5.5',
+    '٣',
+    '１',
+    '\u00a0',
+    '\u2028',
+    '\t',
+    '\r\n',
+    '\r',
+    '\n',
+    '\uFEFF',
+    '\0',
   ),
   fc.double().map(String),
   fc.string({ maxLength: 12 }),
@@ -165,7 +217,7 @@ const asciiEdit: fc.Arbitrary<AsciiEdit> = fc.record({ at: fc.nat(), op: fc.cons
 function edited(source: string, edits: AsciiEdit[]): string {
   const parts = source.split(/(\s+)/);
   for (const e of edits) {
-    const i = parts.length === 0 ? 0 : (e.at % parts.length);
+    const i = parts.length === 0 ? 0 : e.at % parts.length;
     if (e.op === 'insert') parts.splice(i, 0, ' ', e.token, ' ');
     else if (e.op === 'replace') parts[i] = e.token;
     else parts.splice(i, 1);
@@ -175,74 +227,110 @@ function edited(source: string, edits: AsciiEdit[]): string {
 
 describe('parseStl and analyzeStl on hostile input: a value, never a throw, in bounded time and memory', () => {
   it('answers arbitrary bytes', () => {
-    fc.assert(fc.property(fc.uint8Array({ maxLength: 2048 }), (bytes) => { checkParse(bytes); }), { numRuns: 400 });
+    fc.assert(
+      fc.property(fc.uint8Array({ maxLength: 2048 }), (bytes) => {
+        checkParse(bytes);
+      }),
+      { numRuns: 400 },
+    );
   });
 
   it('answers arbitrary text, with or without a "solid" opening, a byte-order mark or CRLF', () => {
     const prefix = fc.constantFrom('', 'solid ', 'solid x\n', '\uFEFFsolid x\r\n', '  SOLID\t', 'solid\n facet normal 0 0 1\n outer loop\n');
-    fc.assert(fc.property(prefix, fc.string({ unit: 'grapheme', maxLength: 400 }), (head, body) => {
-      checkParse(text(head + body));
-    }), { numRuns: 300 });
+    fc.assert(
+      fc.property(prefix, fc.string({ unit: 'grapheme', maxLength: 400 }), (head, body) => {
+        checkParse(text(head + body));
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it('answers byte-level mutations of valid binary files: cut short, flipped, recounted, NaN/infinite corners, padded, "solid" headers', () => {
     const sources = fc.constantFrom(validBinary, validBinarySolidHeader);
-    fc.assert(fc.property(sources, fc.array(mutation, { minLength: 1, maxLength: 4 }), (source, mutations) => {
-      const bytes = applied(source, mutations);
-      const soup = checkParse(bytes);
-      // A binary reading takes every whole record and leaves fewer than 50 stray bytes, saying so.
-      if (soup.ok && soup.value.format === 'binary') {
-        const stray = bytes.length - headerBytes - recordBytes * soup.value.triangleCount;
-        expect(stray).toBeGreaterThanOrEqual(0);
-        expect(stray).toBeLessThan(recordBytes);
-        expect(soup.value.warnings.some((w) => w.code === 'stl_trailing_bytes')).toBe(stray > 0);
-      }
-    }), { numRuns: 400 });
+    fc.assert(
+      fc.property(sources, fc.array(mutation, { minLength: 1, maxLength: 4 }), (source, mutations) => {
+        const bytes = applied(source, mutations);
+        const soup = checkParse(bytes);
+        // A binary reading takes every whole record and leaves fewer than 50 stray bytes, saying so.
+        if (soup.ok && soup.value.format === 'binary') {
+          const stray = bytes.length - headerBytes - recordBytes * soup.value.triangleCount;
+          expect(stray).toBeGreaterThanOrEqual(0);
+          expect(stray).toBeLessThan(recordBytes);
+          expect(soup.value.warnings.some((w) => w.code === 'stl_trailing_bytes')).toBe(stray > 0);
+        }
+      }),
+      { numRuns: 400 },
+    );
   });
 
   it('answers valid ASCII files with garbage tokens inserted, replaced or removed, and cut short', () => {
     const sources = fc.constantFrom(validAscii, validAsciiCrlf);
-    fc.assert(fc.property(sources, fc.array(asciiEdit, { minLength: 1, maxLength: 5 }), fc.option(fc.nat()), (source, edits, cut) => {
-      let body = edited(source, edits);
-      if (cut !== null) body = body.slice(0, cut % (body.length + 1));
-      const soup = checkParse(text(body));
-      if (soup.ok) expect(soup.value.triangleCount).toBeLessThanOrEqual(block.triangleCount + edits.length);
-    }), { numRuns: 400 });
+    fc.assert(
+      fc.property(sources, fc.array(asciiEdit, { minLength: 1, maxLength: 5 }), fc.option(fc.nat()), (source, edits, cut) => {
+        let body = edited(source, edits);
+        if (cut !== null) body = body.slice(0, cut % (body.length + 1));
+        const soup = checkParse(text(body));
+        if (soup.ok) expect(soup.value.triangleCount).toBeLessThanOrEqual(block.triangleCount + edits.length);
+      }),
+      { numRuns: 400 },
+    );
   });
 
   it('reads any spelling of a corner coordinate as a finite float32 or refuses it', () => {
     const spelling = fc.oneof(
       fc.double().map(String),
       fc.double().map((v) => v.toExponential()),
-      fc.constantFrom('1e39', '-1e39', '3.4028235e38', '3.4028236e38', '3.40282357e38', '1e-46', '-0', '00', '+.5', '5.', '1E+0', 'nan', 'inf', '-Infinity', '1e999'),
+      fc.constantFrom(
+        '1e39',
+        '-1e39',
+        '3.4028235e38',
+        '3.4028236e38',
+        '3.40282357e38',
+        '1e-46',
+        '-0',
+        '00',
+        '+.5',
+        '5.',
+        '1E+0',
+        'nan',
+        'inf',
+        '-Infinity',
+        '1e999',
+      ),
     );
     const vertexLines = validAscii.split('\n').flatMap((line, i) => (line.trim().startsWith('vertex') ? [i] : []));
-    fc.assert(fc.property(fc.nat(), fc.integer({ min: 1, max: 3 }), spelling, (pick, slot, number) => {
-      const lines = validAscii.split('\n');
-      const at = vertexLines[pick % vertexLines.length]!;
-      const words = lines[at]!.trim().split(/\s+/);
-      words[slot] = number;
-      lines[at] = `      ${words.join(' ')}`;
-      const soup = checkParse(text(lines.join('\n')));
-      const value = Number(number);
-      if (Number.isFinite(Math.fround(value))) expect(soup.ok).toBe(true);
-      else expect(!soup.ok && soup.error.code).toBe('stl_non_finite');
-    }), { numRuns: 300 });
+    fc.assert(
+      fc.property(fc.nat(), fc.integer({ min: 1, max: 3 }), spelling, (pick, slot, number) => {
+        const lines = validAscii.split('\n');
+        const at = vertexLines[pick % vertexLines.length]!;
+        const words = lines[at]!.trim().split(/\s+/);
+        words[slot] = number;
+        lines[at] = `      ${words.join(' ')}`;
+        const soup = checkParse(text(lines.join('\n')));
+        const value = Number(number);
+        if (Number.isFinite(Math.fround(value))) expect(soup.ok).toBe(true);
+        else expect(!soup.ok && soup.error.code).toBe('stl_non_finite');
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it('refuses a header that announces more triangles than the bytes hold when the last one is cut short, at once and without allocating for them', () => {
     const count = fc.integer({ min: 1, max: 2 ** 32 - 1 });
     const padding = fc.integer({ min: 0, max: 200 });
-    fc.assert(fc.property(count, padding, (announced, extra) => {
-      // Whole records are read whatever the count says; a record cut in two cannot be.
-      fc.pre(announced > Math.floor(extra / recordBytes) && (extra % recordBytes !== 0 || extra === 0));
-      const bytes = new Uint8Array(headerBytes + extra);
-      new DataView(bytes.buffer).setUint32(80, announced, true);
-      const run = float32BytesDuring(() => timed(() => parseStl(bytes)));
-      expect(run.value.value.ok).toBe(false);
-      expect(run.bytes).toBe(0);
-      expect(run.value.ms).toBeLessThan(parseBudgetMs);
-    }), { numRuns: 300 });
+    fc.assert(
+      fc.property(count, padding, (announced, extra) => {
+        // Whole records are read whatever the count says; a record cut in two cannot be.
+        fc.pre(announced > Math.floor(extra / recordBytes) && (extra % recordBytes !== 0 || extra === 0));
+        const bytes = new Uint8Array(headerBytes + extra);
+        new DataView(bytes.buffer).setUint32(80, announced, true);
+        const run = float32BytesDuring(() => timed(() => parseStl(bytes)));
+        expect(run.value.value.ok).toBe(false);
+        expect(run.bytes).toBe(0);
+        expect(run.value.ms).toBeLessThan(parseBudgetMs);
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it('refuses an 84-byte file that claims 2^31 triangles as cut short, naming both sizes', () => {
@@ -265,15 +353,21 @@ describe('parseStl and analyzeStl on hostile input: a value, never a throw, in b
     );
     const soup = fc.array(fc.array(coordinate, { minLength: 9, maxLength: 9 }), { minLength: 1, maxLength: 30 });
     const frame = fc.record({ up: fc.constantFrom<UpAxis>('x', 'y', 'z'), units: fc.constantFrom<FileUnits>('mm', 'cm', 'in') });
-    fc.assert(fc.property(soup, fc.boolean(), frame, (triangles, ascii, f) => {
-      const source = { positions: Float64Array.from(triangles.flat()), triangleCount: triangles.length };
-      checkAnalyze(ascii ? text(encodeStlAscii(source)) : encodeStlBinary(source), f);
-    }), { numRuns: 120 });
+    fc.assert(
+      fc.property(soup, fc.boolean(), frame, (triangles, ascii, f) => {
+        const source = { positions: Float64Array.from(triangles.flat()), triangleCount: triangles.length };
+        checkAnalyze(ascii ? text(encodeStlAscii(source)) : encodeStlBinary(source), f);
+      }),
+      { numRuns: 120 },
+    );
   });
 
   it('runs the whole analysis on mutated valid files', () => {
-    fc.assert(fc.property(fc.array(mutation, { minLength: 1, maxLength: 3 }), (mutations) => {
-      checkAnalyze(applied(validBinary, mutations));
-    }), { numRuns: 60 });
+    fc.assert(
+      fc.property(fc.array(mutation, { minLength: 1, maxLength: 3 }), (mutations) => {
+        checkAnalyze(applied(validBinary, mutations));
+      }),
+      { numRuns: 60 },
+    );
   });
 });

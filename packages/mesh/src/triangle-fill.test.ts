@@ -6,17 +6,21 @@ import { triangleBelow, type TriangleBelow } from './triangle-fill';
 function clippedShare(corners: [number, number, number][], h: number): number {
   const below: [number, number][] = [];
   for (let i = 0; i < 3; i++) {
-    const a = corners[i]!, b = corners[(i + 1) % 3]!;
+    const a = corners[i]!,
+      b = corners[(i + 1) % 3]!;
     if (a[2] <= h) below.push([a[0], a[1]]);
-    if ((a[2] < h) !== (b[2] < h) && a[2] !== b[2]) {
+    if (a[2] < h !== b[2] < h && a[2] !== b[2]) {
       const s = (h - a[2]) / (b[2] - a[2]);
       if (s > 0 && s < 1) below.push([a[0] + s * (b[0] - a[0]), a[1] + s * (b[1] - a[1])]);
     }
   }
-  const shoelace = (p: [number, number][]): number => Math.abs(p.reduce((sum, q, i) => {
-    const r = p[(i + 1) % p.length]!;
-    return sum + q[0] * r[1] - q[1] * r[0];
-  }, 0)) / 2;
+  const shoelace = (p: [number, number][]): number =>
+    Math.abs(
+      p.reduce((sum, q, i) => {
+        const r = p[(i + 1) % p.length]!;
+        return sum + q[0] * r[1] - q[1] * r[0];
+      }, 0),
+    ) / 2;
   return below.length < 3 ? 0 : shoelace(below) / shoelace(corners.map((c) => [c[0], c[1]]));
 }
 
@@ -27,27 +31,37 @@ const sorted = (c: [number, number, number][]): [number, number, number] => {
 
 describe('triangleBelow', () => {
   const out: TriangleBelow = { share: 0, shareSlope: 0, depth: 0 };
-  const corners: [number, number, number][] = [[0, 0, 2], [10, 1, 7], [3, 8, 4]];
+  const corners: [number, number, number][] = [
+    [0, 0, 2],
+    [10, 1, 7],
+    [3, 8, 4],
+  ];
   const [z0, z1, z2] = sorted(corners);
 
   it('gives the share below h equal to the clipped polygon area (shoelace formula)', () => {
-    fc.assert(fc.property(fc.double({ min: 1.5, max: 7.5, noNaN: true }), (h) => {
-      triangleBelow(z0, z1, z2, h, false, out);
-      return Math.abs(out.share - clippedShare(corners, h)) < 1e-12;
-    }));
+    fc.assert(
+      fc.property(fc.double({ min: 1.5, max: 7.5, noNaN: true }), (h) => {
+        triangleBelow(z0, z1, z2, h, false, out);
+        return Math.abs(out.share - clippedShare(corners, h)) < 1e-12;
+      }),
+    );
   });
 
-  it('gives depth = ∫ share dh (Simpson’s rule on a fine step) and share\' as its slope', () => {
+  it("gives depth = ∫ share dh (Simpson’s rule on a fine step) and share' as its slope", () => {
     const simpson = (f: (x: number) => number, a: number, b: number, n = 2000): number => {
       const step = (b - a) / n;
       let sum = f(a) + f(b);
       for (let i = 1; i < n; i++) sum += (i % 2 ? 4 : 2) * f(a + i * step);
       return (sum * step) / 3;
     };
-    const share = (h: number): number => { triangleBelow(z0, z1, z2, h, false, out); return out.share; };
+    const share = (h: number): number => {
+      triangleBelow(z0, z1, z2, h, false, out);
+      return out.share;
+    };
     for (const h of [3, 4, 5.5, 7, 9]) {
       triangleBelow(z0, z1, z2, h, false, out);
-      const depth = out.depth, slope = out.shareSlope;
+      const depth = out.depth,
+        slope = out.shareSlope;
       expect(depth).toBeCloseTo(simpson(share, 0, h), 9);
       expect(slope).toBeCloseTo((share(h + 1e-6) - share(h - 1e-6)) / 2e-6, 5);
     }
@@ -58,7 +72,7 @@ describe('triangleBelow', () => {
     // volume base × mean of the three edge heights; here the heights are h − z of each corner.
     const h = 12;
     triangleBelow(z0, z1, z2, h, false, out);
-    expect(out.depth).toBeCloseTo(((h - 2) + (h - 7) + (h - 4)) / 3, 12);
+    expect(out.depth).toBeCloseTo((h - 2 + (h - 7) + (h - 4)) / 3, 12);
     expect(out.share).toBe(1);
   });
 

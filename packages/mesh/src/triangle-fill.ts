@@ -20,22 +20,30 @@ export interface TriangleBelow {
 
 export function triangleBelow(z0: number, z1: number, z2: number, h: number, right: boolean, out: TriangleBelow): void {
   if (h < z0 || (h === z0 && !right)) {
-    out.share = 0; out.shareSlope = 0; out.depth = 0;
+    out.share = 0;
+    out.shareSlope = 0;
+    out.depth = 0;
     return;
   }
   if (h > z2 || (h === z2 && right)) {
-    out.share = 1; out.shareSlope = 0; out.depth = h - (z0 + z1 + z2) / 3;
+    out.share = 1;
+    out.shareSlope = 0;
+    out.depth = h - (z0 + z1 + z2) / 3;
     return;
   }
   const span = z2 - z0;
   if (z1 > z0 && (h < z1 || (h === z1 && !right))) {
-    const d = h - z0, lower = (z1 - z0) * span;
+    const d = h - z0,
+      lower = (z1 - z0) * span;
     out.share = (d * d) / lower;
     out.shareSlope = (2 * d) / lower;
     out.depth = (d * d * d) / (3 * lower);
     return;
   }
-  const upperSpan = z2 - z1, e = z2 - h, upper = upperSpan * span, passed = h - z1;
+  const upperSpan = z2 - z1,
+    e = z2 - h,
+    upper = upperSpan * span,
+    passed = h - z1;
   out.share = 1 - (e * e) / upper;
   out.shareSlope = (2 * e) / upper;
   // (z2 − z1)³ − e³ factored as (h − z1)((z2 − z1)² + (z2 − z1)e + e²): no cancellation near z1.

@@ -38,21 +38,47 @@ export function buildTriangleTable(positions: Float64Array, triangles: Uint32Arr
   const facing = memory.int8(count);
   const steep = memory.uint8(count);
   for (let t = 0; t < count; t++) {
-    const a = 3 * triangles[3 * t]!, b = 3 * triangles[3 * t + 1]!, c = 3 * triangles[3 * t + 2]!;
-    const ax = positions[a]!, ay = positions[a + 1]!, az = positions[a + 2]!;
-    const ux = positions[b]! - ax, uy = positions[b + 1]! - ay, uz = positions[b + 2]! - az;
-    const vx = positions[c]! - ax, vy = positions[c + 1]! - ay, vz = positions[c + 2]! - az;
-    const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
+    const a = 3 * triangles[3 * t]!,
+      b = 3 * triangles[3 * t + 1]!,
+      c = 3 * triangles[3 * t + 2]!;
+    const ax = positions[a]!,
+      ay = positions[a + 1]!,
+      az = positions[a + 2]!;
+    const ux = positions[b]! - ax,
+      uy = positions[b + 1]! - ay,
+      uz = positions[b + 2]! - az;
+    const vx = positions[c]! - ax,
+      vy = positions[c + 1]! - ay,
+      vz = positions[c + 2]! - az;
+    const nx = uy * vz - uz * vy,
+      ny = uz * vx - ux * vz,
+      nz = ux * vy - uy * vx;
     const len = Math.sqrt(nx * nx + ny * ny + nz * nz);
     shadowArea[t] = nz / 2;
     area[t] = len / 2;
     facing[t] = nz > 0 ? 1 : nz < 0 ? -1 : 0;
     steep[t] = Math.abs(nz) <= steepNormalZ * len ? 1 : 0;
-    let z0 = az, z1 = positions[b + 2]!, z2 = positions[c + 2]!;
-    if (z0 > z1) { const s = z0; z0 = z1; z1 = s; }
-    if (z1 > z2) { const s = z1; z1 = z2; z2 = s; }
-    if (z0 > z1) { const s = z0; z0 = z1; z1 = s; }
-    sortedZ[3 * t] = z0; sortedZ[3 * t + 1] = z1; sortedZ[3 * t + 2] = z2;
+    let z0 = az,
+      z1 = positions[b + 2]!,
+      z2 = positions[c + 2]!;
+    if (z0 > z1) {
+      const s = z0;
+      z0 = z1;
+      z1 = s;
+    }
+    if (z1 > z2) {
+      const s = z1;
+      z1 = z2;
+      z2 = s;
+    }
+    if (z0 > z1) {
+      const s = z0;
+      z0 = z1;
+      z1 = s;
+    }
+    sortedZ[3 * t] = z0;
+    sortedZ[3 * t + 1] = z1;
+    sortedZ[3 * t + 2] = z2;
   }
   return { count, positions, triangles, shadowArea, area, sortedZ, facing, steep };
 }

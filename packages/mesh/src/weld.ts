@@ -56,7 +56,9 @@ class VertexTable {
   /** The id of the vertex with these keys; a new id when they were not seen before. */
   idOf(kx: number, ky: number, kz: number, hash: number): number {
     // Locals, and the rare insertion kept out of line, so this stays small enough to inline.
-    const keys = this.keys, slots = this.slots, mask = this.mask;
+    const keys = this.keys,
+      slots = this.slots,
+      mask = this.mask;
     let h = spread(hash) & mask;
     for (;;) {
       const slot = slots[h]!;
@@ -73,7 +75,9 @@ class VertexTable {
       grown.set(this.keys);
       this.keys = grown;
     }
-    this.keys[3 * id] = kx; this.keys[3 * id + 1] = ky; this.keys[3 * id + 2] = kz;
+    this.keys[3 * id] = kx;
+    this.keys[3 * id + 1] = ky;
+    this.keys[3 * id + 2] = kz;
     this.slots[h] = id;
     if (2 * this.count > this.slots.length) this.grow();
     return id;
@@ -124,7 +128,9 @@ function weldExactBits(bits: Uint32Array, corners: number, cornerVertex: Uint32A
   let misses = 0;
   for (let c = 0; c < corners; c++) {
     // -0 and +0 are the same point; their bit patterns are not.
-    let bx = bits[3 * c]!, by = bits[3 * c + 1]!, bz = bits[3 * c + 2]!;
+    let bx = bits[3 * c]!,
+      by = bits[3 * c + 1]!,
+      bz = bits[3 * c + 2]!;
     if (bx === 0x80000000) bx = 0;
     if (by === 0x80000000) by = 0;
     if (bz === 0x80000000) bz = 0;
@@ -142,14 +148,19 @@ function weldExactBits(bits: Uint32Array, corners: number, cornerVertex: Uint32A
     }
     const at = recordSize * misses++;
     // A second mix, so the partitions and their slots do not follow the recent cache's bits.
-    missRecords[at] = c; missRecords[at + 1] = spread(hash);
-    missRecords[at + 2] = bx; missRecords[at + 3] = by; missRecords[at + 4] = bz;
+    missRecords[at] = c;
+    missRecords[at + 1] = spread(hash);
+    missRecords[at + 2] = bx;
+    missRecords[at + 3] = by;
+    missRecords[at + 4] = bz;
     recentCorner[r] = c;
-    recentKey[3 * r] = bx; recentKey[3 * r + 1] = by; recentKey[3 * r + 2] = bz;
+    recentKey[3 * r] = bx;
+    recentKey[3 * r + 1] = by;
+    recentKey[3 * r + 2] = bz;
   }
 
   let partitionBits = 0;
-  while ((misses >>> partitionBits) > partitionTarget && partitionBits < 16) partitionBits++;
+  while (misses >>> partitionBits > partitionTarget && partitionBits < 16) partitionBits++;
   const partitions = 1 << partitionBits;
   const partitionOf = (hash: number): number => (partitionBits === 0 ? 0 : hash >>> (32 - partitionBits));
   const start = new Uint32Array(partitions + 1);
@@ -158,9 +169,13 @@ function weldExactBits(bits: Uint32Array, corners: number, cornerVertex: Uint32A
   const sorted = new Uint32Array(recordSize * misses);
   const next = start.slice(0, partitions);
   for (let m = 0; m < misses; m++) {
-    const from = recordSize * m, to = recordSize * next[partitionOf(missRecords[from + 1]!)]!++;
-    sorted[to] = missRecords[from]!; sorted[to + 1] = missRecords[from + 1]!;
-    sorted[to + 2] = missRecords[from + 2]!; sorted[to + 3] = missRecords[from + 3]!; sorted[to + 4] = missRecords[from + 4]!;
+    const from = recordSize * m,
+      to = recordSize * next[partitionOf(missRecords[from + 1]!)]!++;
+    sorted[to] = missRecords[from]!;
+    sorted[to + 1] = missRecords[from + 1]!;
+    sorted[to + 2] = missRecords[from + 2]!;
+    sorted[to + 3] = missRecords[from + 3]!;
+    sorted[to + 4] = missRecords[from + 4]!;
   }
 
   let largest = 0;
@@ -170,13 +185,18 @@ function weldExactBits(bits: Uint32Array, corners: number, cornerVertex: Uint32A
   // Slot → 1 + index in the sorted misses of the first corner with that key; 0 when empty.
   const slots = new Int32Array(tableSize);
   for (let q = 0; q < partitions; q++) {
-    const from = start[q]!, to = start[q + 1]!;
+    const from = start[q]!,
+      to = start[q + 1]!;
     let size = 16;
     while (size < 2 * (to - from)) size *= 2;
     const mask = size - 1;
     slots.fill(0, 0, size);
     for (let j = from; j < to; j++) {
-      const at = recordSize * j, corner = sorted[at]!, kx = sorted[at + 2]!, ky = sorted[at + 3]!, kz = sorted[at + 4]!;
+      const at = recordSize * j,
+        corner = sorted[at]!,
+        kx = sorted[at + 2]!,
+        ky = sorted[at + 3]!,
+        kz = sorted[at + 4]!;
       let h = sorted[at + 1]! & mask;
       for (;;) {
         const slot = slots[h]!;
@@ -204,11 +224,15 @@ function weldExactBits(bits: Uint32Array, corners: number, cornerVertex: Uint32A
       cornerVertex[c] = cornerVertex[earlier]!;
       continue;
     }
-    let bx = bits[3 * c]!, by = bits[3 * c + 1]!, bz = bits[3 * c + 2]!;
+    let bx = bits[3 * c]!,
+      by = bits[3 * c + 1]!,
+      bz = bits[3 * c + 2]!;
     if (bx === 0x80000000) bx = 0;
     if (by === 0x80000000) by = 0;
     if (bz === 0x80000000) bz = 0;
-    keys[3 * count] = bx; keys[3 * count + 1] = by; keys[3 * count + 2] = bz;
+    keys[3 * count] = bx;
+    keys[3 * count + 1] = by;
+    keys[3 * count + 2] = bz;
     cornerVertex[c] = count++;
   }
   return keys.subarray(0, 3 * count);
@@ -234,7 +258,9 @@ export function weldSoup(soup: TriangleSoup, frame: WeldFrame): WeldedMesh {
     const firstCorner: number[] = [];
     for (let c = 0; c < corners; c++) {
       toZUpMm(p[3 * c]!, p[3 * c + 1]!, p[3 * c + 2]!, frame.up, frame.scale, scratch, 0);
-      const kx = Math.round(scratch[0]! * inv) >>> 0, ky = Math.round(scratch[1]! * inv) >>> 0, kz = Math.round(scratch[2]! * inv) >>> 0;
+      const kx = Math.round(scratch[0]! * inv) >>> 0,
+        ky = Math.round(scratch[1]! * inv) >>> 0,
+        kz = Math.round(scratch[2]! * inv) >>> 0;
       const before = table.count;
       cornerVertex[c] = table.idOf(kx, ky, kz, mix(kx, ky, kz));
       if (table.count > before) firstCorner.push(c);
@@ -259,10 +285,14 @@ export function weldSoup(soup: TriangleSoup, frame: WeldFrame): WeldedMesh {
 
   let kept = 0;
   for (let t = 0; t < soup.triangleCount; t++) {
-    const a = cornerVertex[3 * t]!, b = cornerVertex[3 * t + 1]!, c = cornerVertex[3 * t + 2]!;
+    const a = cornerVertex[3 * t]!,
+      b = cornerVertex[3 * t + 1]!,
+      c = cornerVertex[3 * t + 2]!;
     if (a === b || b === c || a === c) continue;
     // Compacting in place: a kept triangle never lands ahead of where it was read.
-    cornerVertex[3 * kept] = a; cornerVertex[3 * kept + 1] = b; cornerVertex[3 * kept + 2] = c;
+    cornerVertex[3 * kept] = a;
+    cornerVertex[3 * kept + 1] = b;
+    cornerVertex[3 * kept + 2] = c;
     kept++;
   }
   return {

@@ -29,7 +29,10 @@ export function repairWinding(triangles: Uint32Array, topology: EdgeTopology): W
   for (let seed = 0; seed < count; seed++) {
     if (state[seed]) continue;
     state[seed] = 1;
-    let head = 0, tail = 0, patchSize = 0, turnCount = 0;
+    let head = 0,
+      tail = 0,
+      patchSize = 0,
+      turnCount = 0;
     queue[tail++] = seed;
     while (head < tail) {
       const t = queue[head++]!;

@@ -17,9 +17,13 @@ export async function loadManifold(): Promise<ManifoldKernel> {
 }
 
 export function solidOf(kernel: ManifoldKernel, mesh: ReferenceMesh) {
-  return kernel.Manifold.ofMesh(new kernel.Mesh({
-    numProp: 3, vertProperties: Float32Array.from(mesh.positionsMm), triVerts: Uint32Array.from(mesh.triangles),
-  }));
+  return kernel.Manifold.ofMesh(
+    new kernel.Mesh({
+      numProp: 3,
+      vertProperties: Float32Array.from(mesh.positionsMm),
+      triVerts: Uint32Array.from(mesh.triangles),
+    }),
+  );
 }
 
 /** Box dam: the bounding-box prism from the lowest z up to h, minus the mould. */
@@ -32,7 +36,10 @@ export function boxDamResin(kernel: ManifoldKernel, mesh: ReferenceMesh, levelMm
 /** Outline dam: the mould's own shadow extruded from the lowest z up to h, minus the mould. */
 export function outlineDamResin(kernel: ManifoldKernel, mesh: ReferenceMesh, levelMm: number) {
   const solid = solidOf(kernel, mesh);
-  const prism = solid.project().extrude(levelMm - mesh.bboxMm.min[2]).translate([0, 0, mesh.bboxMm.min[2]]);
+  const prism = solid
+    .project()
+    .extrude(levelMm - mesh.bboxMm.min[2])
+    .translate([0, 0, mesh.bboxMm.min[2]]);
   return prism.subtract(solid);
 }
 

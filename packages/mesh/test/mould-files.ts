@@ -102,7 +102,8 @@ export function modelXml(spec: ThreeMfModelSpec): string {
     if (o.mesh) {
       const s = o.scale ?? 1;
       lines.push('      <mesh>', '        <vertices>');
-      for (const v of o.mesh.vertices) lines.push(`          <vertex x="${float32Text(v[0]! * s)}" y="${float32Text(v[1]! * s)}" z="${float32Text(v[2]! * s)}" />`);
+      for (const v of o.mesh.vertices)
+        lines.push(`          <vertex x="${float32Text(v[0]! * s)}" y="${float32Text(v[1]! * s)}" z="${float32Text(v[2]! * s)}" />`);
       lines.push('        </vertices>', '        <triangles>');
       for (const [a, b, c] of o.mesh.triangles) lines.push(`          <triangle v1="${a}" v2="${b}" v3="${c}" />`);
       lines.push('        </triangles>', '      </mesh>');
@@ -119,13 +120,16 @@ export function modelXml(spec: ThreeMfModelSpec): string {
   return lines.join('\n');
 }
 
-const contentTypes = '<?xml version="1.0" encoding="UTF-8"?>\n<Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types">'
-  + '<Default Extension="rels" ContentType="application/vnd.openxmlformats-package.relationships+xml"/>'
-  + '<Default Extension="model" ContentType="application/vnd.ms-package.3dmanufacturing-3dmodel+xml"/></Types>';
+const contentTypes =
+  '<?xml version="1.0" encoding="UTF-8"?>\n<Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types">' +
+  '<Default Extension="rels" ContentType="application/vnd.openxmlformats-package.relationships+xml"/>' +
+  '<Default Extension="model" ContentType="application/vnd.ms-package.3dmanufacturing-3dmodel+xml"/></Types>';
 
 export function relsXml(target: string): string {
-  return '<?xml version="1.0" encoding="UTF-8"?>\n<Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships">'
-    + `<Relationship Target="${target}" Id="rel0" Type="http://schemas.microsoft.com/3dmanufacturing/2013/01/3dmodel"/></Relationships>`;
+  return (
+    '<?xml version="1.0" encoding="UTF-8"?>\n<Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships">' +
+    `<Relationship Target="${target}" Id="rel0" Type="http://schemas.microsoft.com/3dmanufacturing/2013/01/3dmodel"/></Relationships>`
+  );
 }
 
 export interface PackageOptions {
@@ -152,11 +156,13 @@ export function package3mf(model: string, options: PackageOptions = {}): Uint8Ar
 
 /** The mould as a one-object 3MF in the given unit; coordinates are converted from mm. */
 export function encode3mf(mesh: GeneratedMesh, unit = 'millimeter', mmPerFileUnit = 1): Uint8Array {
-  return package3mf(modelXml({
-    unit,
-    objects: [{ id: 1, mesh: indexed(mesh), scale: 1 / mmPerFileUnit }],
-    items: [{ objectId: 1 }],
-  }));
+  return package3mf(
+    modelXml({
+      unit,
+      objects: [{ id: 1, mesh: indexed(mesh), scale: 1 / mmPerFileUnit }],
+      items: [{ objectId: 1 }],
+    }),
+  );
 }
 
 // ---------------------------------------------------------------- OBJ

@@ -3,9 +3,9 @@
  * answer of the very mesh it feeds the engine. Shared by the tests and the benchmark.
  */
 export interface GeneratedMesh {
-    /** Nine coordinates per triangle. */
-    positions: Float64Array;
-    triangleCount: number;
+  /** Nine coordinates per triangle. */
+  positions: Float64Array;
+  triangleCount: number;
 }
 /** Same triangles, every one wound the other way (normals into the solid). */
 export declare function inverted(mesh: GeneratedMesh): GeneratedMesh;
@@ -16,17 +16,17 @@ export declare function combined(...meshes: GeneratedMesh[]): GeneratedMesh;
 /** Maps every point through f (f must be a proper rotation/translation to keep the winding). */
 export declare function mapped(mesh: GeneratedMesh, f: (x: number, y: number, z: number) => [number, number, number]): GeneratedMesh;
 export interface RevolvedPocketBlock {
-    /** Half the side of the square block, centred on the z axis. */
-    halfSide: number;
-    bottomZ: number;
-    topZ: number;
-    /**
-     * The pocket's profile as [radius, z] from the floor centre (radius 0) out to the rim, whose
-     * z must be topZ. Each point becomes a ring of `segments` vertices.
-     */
-    profile: [number, number][];
-    /** Around the axis; a multiple of 8 so the square's corners fall on ring directions. */
-    segments: number;
+  /** Half the side of the square block, centred on the z axis. */
+  halfSide: number;
+  bottomZ: number;
+  topZ: number;
+  /**
+   * The pocket's profile as [radius, z] from the floor centre (radius 0) out to the rim, whose
+   * z must be topZ. Each point becomes a ring of `segments` vertices.
+   */
+  profile: [number, number][];
+  /** Around the axis; a multiple of 8 so the square's corners fall on ring directions. */
+  segments: number;
 }
 /**
  * A square block with a pocket of revolution cut into its top (bowl, cylinder, frustum). Every
@@ -41,14 +41,14 @@ export declare function revolvedPocketBlock(spec: RevolvedPocketBlock): Generate
  */
 export declare function revolvedSolid(profile: [number, number][], segments: number): GeneratedMesh;
 export interface HeightFieldBlock {
-    width: number;
-    depth: number;
-    bottomZ: number;
-    /** Grid cells along x and y; the top gets 2 × nx × ny triangles. */
-    nx: number;
-    ny: number;
-    /** Height of the top surface at (x, y), 0 ≤ x ≤ width, 0 ≤ y ≤ depth. */
-    top: (x: number, y: number) => number;
+  width: number;
+  depth: number;
+  bottomZ: number;
+  /** Grid cells along x and y; the top gets 2 × nx × ny triangles. */
+  nx: number;
+  ny: number;
+  /** Height of the top surface at (x, y), 0 ≤ x ≤ width, 0 ≤ y ≤ depth. */
+  top: (x: number, y: number) => number;
 }
 /** A block whose top is the surface z = top(x, y) on a regular grid: a height-field cavity. */
 export declare function heightFieldBlock(spec: HeightFieldBlock): GeneratedMesh;

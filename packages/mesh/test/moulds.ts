@@ -57,7 +57,9 @@ export function mapped(mesh: GeneratedMesh, f: (x: number, y: number, z: number)
   const p = new Float64Array(mesh.positions.length);
   for (let v = 0; v < mesh.positions.length / 3; v++) {
     const [x, y, z] = f(mesh.positions[3 * v]!, mesh.positions[3 * v + 1]!, mesh.positions[3 * v + 2]!);
-    p[3 * v] = x; p[3 * v + 1] = y; p[3 * v + 2] = z;
+    p[3 * v] = x;
+    p[3 * v + 1] = y;
+    p[3 * v + 2] = z;
   }
   return { positions: p, triangleCount: mesh.triangleCount };
 }
@@ -92,7 +94,8 @@ export function revolvedPocketBlock(spec: RevolvedPocketBlock): GeneratedMesh {
   };
   const square = (j: number, z: number): number[] => {
     const phi = (2 * Math.PI * (j % n)) / n;
-    const c = Math.cos(phi), s = Math.sin(phi);
+    const c = Math.cos(phi),
+      s = Math.sin(phi);
     const scale = L / Math.max(Math.abs(c), Math.abs(s));
     // Snap the corners and axis points onto the exact square so faces stay planar.
     const x = Math.abs(Math.abs(c * scale) - L) < 1e-12 * L ? Math.sign(c) * L : c * scale;
@@ -127,7 +130,8 @@ export function revolvedSolid(profile: [number, number][], segments: number): Ge
     return r === 0 ? [0, 0, z] : [r * Math.cos(phi), r * Math.sin(phi), z];
   };
   for (let k = 0; k + 1 < profile.length; k++) {
-    const r0 = profile[k]![0], r1 = profile[k + 1]![0];
+    const r0 = profile[k]![0],
+      r1 = profile[k + 1]![0];
     for (let j = 0; j < n; j++) {
       if (r0 === 0) w.triangle(at(k, j), at(k + 1, j + 1), at(k + 1, j));
       else if (r1 === 0) w.triangle(at(k, j), at(k, j + 1), at(k + 1, j));
@@ -153,7 +157,8 @@ export function heightFieldBlock(spec: HeightFieldBlock): GeneratedMesh {
   const { width, depth, bottomZ, nx, ny, top } = spec;
   const w = new MeshWriter();
   const p = (i: number, j: number): number[] => {
-    const x = (width * i) / nx, y = (depth * j) / ny;
+    const x = (width * i) / nx,
+      y = (depth * j) / ny;
     return [x, y, top(x, y)];
   };
   const b = (i: number, j: number): number[] => [(width * i) / nx, (depth * j) / ny, bottomZ];
@@ -168,7 +173,8 @@ export function heightFieldBlock(spec: HeightFieldBlock): GeneratedMesh {
   for (let j = ny; j > 0; j--) rim.push([0, j]);
   const centre = [width / 2, depth / 2, bottomZ];
   for (let k = 0; k < rim.length; k++) {
-    const [i0, j0] = rim[k]!, [i1, j1] = rim[(k + 1) % rim.length]!;
+    const [i0, j0] = rim[k]!,
+      [i1, j1] = rim[(k + 1) % rim.length]!;
     w.quad(p(i0, j0), b(i0, j0), b(i1, j1), p(i1, j1));
     w.triangle(centre, b(i1, j1), b(i0, j0));
   }
@@ -181,13 +187,12 @@ export function heightFieldBlock(spec: HeightFieldBlock): GeneratedMesh {
  * emitted between solid and empty cells only, so the surface is closed; avoid cells that touch
  * only along an edge (that edge would be shared by four triangles).
  */
-export function cellSolid(
-  xs: number[], ys: number[], zs: number[], solid: (i: number, j: number, k: number) => boolean,
-): GeneratedMesh {
+export function cellSolid(xs: number[], ys: number[], zs: number[], solid: (i: number, j: number, k: number) => boolean): GeneratedMesh {
   const w = new MeshWriter();
-  const nx = xs.length - 1, ny = ys.length - 1, nz = zs.length - 1;
-  const filled = (i: number, j: number, k: number): boolean =>
-    i >= 0 && j >= 0 && k >= 0 && i < nx && j < ny && k < nz && solid(i, j, k);
+  const nx = xs.length - 1,
+    ny = ys.length - 1,
+    nz = zs.length - 1;
+  const filled = (i: number, j: number, k: number): boolean => i >= 0 && j >= 0 && k >= 0 && i < nx && j < ny && k < nz && solid(i, j, k);
   const grids = [xs, ys, zs];
   // For a face normal along axis a (sign s) at grid line g, spanning cell (u, v) of the other two
   // axes b = a + 1, c = a + 2 (cyclic): the quad (b0,c0) (b1,c0) (b1,c1) (b0,c1) faces +a.
@@ -200,16 +205,20 @@ export function cellSolid(
   };
   const dims = [nx, ny, nz];
   for (let a = 0; a < 3; a++) {
-    const bAxis = (a + 1) % 3, cAxis = (a + 2) % 3;
+    const bAxis = (a + 1) % 3,
+      cAxis = (a + 2) % 3;
     for (let g = 0; g <= dims[a]!; g++) {
       for (let u = 0; u < dims[bAxis]!; u++) {
         for (let v = 0; v < dims[cAxis]!; v++) {
           const cell = (along: number): boolean => {
             const idx = [0, 0, 0];
-            idx[a] = along; idx[bAxis] = u; idx[cAxis] = v;
+            idx[a] = along;
+            idx[bAxis] = u;
+            idx[cAxis] = v;
             return filled(idx[0]!, idx[1]!, idx[2]!);
           };
-          const below = cell(g - 1), above = cell(g);
+          const below = cell(g - 1),
+            above = cell(g);
           if (below === above) continue;
           const q = [point(a, g, u, v), point(a, g, u + 1, v), point(a, g, u + 1, v + 1), point(a, g, u, v + 1)];
           if (below) w.quad(q[0]!, q[1]!, q[2]!, q[3]!);
@@ -225,7 +234,8 @@ export function cellSolid(
 export function torus(R: number, r: number, n: number, m: number): GeneratedMesh {
   const w = new MeshWriter();
   const at = (i: number, j: number): number[] => {
-    const phi = (2 * Math.PI * (i % n)) / n, theta = (2 * Math.PI * (j % m)) / m;
+    const phi = (2 * Math.PI * (i % n)) / n,
+      theta = (2 * Math.PI * (j % m)) / m;
     const rho = R + r * Math.cos(theta);
     return [rho * Math.cos(phi), rho * Math.sin(phi), r * Math.sin(theta)];
   };
@@ -241,8 +251,12 @@ export function torus(R: number, r: number, n: number, m: number): GeneratedMesh
  * of the slot are flat at z 30: air under them slides to the slot and out.
  */
 export function tSlotBlock(): GeneratedMesh {
-  return cellSolid([0, 70, 90, 110, 130, 200], [0, 20, 100, 120], [0, 10, 30, 50],
-    (i, j, k) => !((k === 1 && j === 1 && i >= 1 && i <= 3) || (k === 2 && j === 1 && i === 2)));
+  return cellSolid(
+    [0, 70, 90, 110, 130, 200],
+    [0, 20, 100, 120],
+    [0, 10, 30, 50],
+    (i, j, k) => !((k === 1 && j === 1 && i >= 1 && i <= 3) || (k === 2 && j === 1 && i === 2)),
+  );
 }
 
 /**
@@ -271,11 +285,32 @@ export function boardRecess(): GeneratedMesh {
  * plate (z 0 to 4) centred under it. Both are closed surfaces of `segments` sides.
  */
 export function bellOverPlate(segments: number): GeneratedMesh {
-  const cup = revolvedSolid([[0, 30], [12, 30], [15, 10], [20, 10], [20, 35], [0, 35]], segments);
-  return combined(cellSolid([-30, 30], [-30, 30], [0, 4], () => true), cup);
+  const cup = revolvedSolid(
+    [
+      [0, 30],
+      [12, 30],
+      [15, 10],
+      [20, 10],
+      [20, 35],
+      [0, 35],
+    ],
+    segments,
+  );
+  return combined(
+    cellSolid([-30, 30], [-30, 30], [0, 4], () => true),
+    cup,
+  );
 }
 
 /** The held-air pocket of bellOverPlate: the frustum inside the cup, from the rim (z 10) to its ceiling. */
 export function bellInside(segments: number): GeneratedMesh {
-  return revolvedSolid([[0, 10], [15, 10], [12, 30], [0, 30]], segments);
+  return revolvedSolid(
+    [
+      [0, 10],
+      [15, 10],
+      [12, 30],
+      [0, 30],
+    ],
+    segments,
+  );
 }

@@ -13,9 +13,16 @@ export interface VoxelFill {
 }
 
 export function voxelFill(
-  xs: number[], ys: number[], zs: number[], solid: (i: number, j: number, k: number) => boolean, levelMm: number, dam: 'outline' | 'box',
+  xs: number[],
+  ys: number[],
+  zs: number[],
+  solid: (i: number, j: number, k: number) => boolean,
+  levelMm: number,
+  dam: 'outline' | 'box',
 ): VoxelFill {
-  const nx = xs.length - 1, ny = ys.length - 1, nz = zs.length - 1;
+  const nx = xs.length - 1,
+    ny = ys.length - 1,
+    nz = zs.length - 1;
   const at = (i: number, j: number, k: number): number => (k * ny + j) * nx + i;
   const cells = nx * ny * nz;
   const escape = new Float64Array(cells).fill(-Infinity);
@@ -39,11 +46,15 @@ export function voxelFill(
     queue.sort((a, b) => a[0] - b[0]);
     const [height, cell] = queue.pop()!;
     if (height < escape[cell]!) continue;
-    const i = cell % nx, j = ((cell - i) / nx) % ny, k = Math.floor(cell / (nx * ny));
+    const i = cell % nx,
+      j = ((cell - i) / nx) % ny,
+      k = Math.floor(cell / (nx * ny));
     for (let dk = -1; dk <= 1; dk++) {
       for (let dj = -1; dj <= 1; dj++) {
         for (let di = -1; di <= 1; di++) {
-          const a = i + di, b = j + dj, c = k + dk;
+          const a = i + di,
+            b = j + dj,
+            c = k + dk;
           if (a < 0 || b < 0 || c < 0 || a >= nx || b >= ny || c >= nz || solid(a, b, c)) continue;
           offer(at(a, b, c), Math.min(height, zs[c + 1]!));
         }
@@ -62,11 +73,15 @@ export function voxelFill(
   }
   while (stack.length > 0) {
     const cell = stack.pop()!;
-    const i = cell % nx, j = ((cell - i) / nx) % ny, k = Math.floor(cell / (nx * ny));
+    const i = cell % nx,
+      j = ((cell - i) / nx) % ny,
+      k = Math.floor(cell / (nx * ny));
     for (let dk = -1; dk <= 1; dk++) {
       for (let dj = -1; dj <= 1; dj++) {
         for (let di = -1; di <= 1; di++) {
-          const a = i + di, b = j + dj, c = k + dk;
+          const a = i + di,
+            b = j + dj,
+            c = k + dk;
           if (a < 0 || b < 0 || c < 0 || a >= nx || b >= ny || c >= nz || solid(a, b, c) || escape[at(a, b, c)] !== -Infinity) continue;
           escape[at(a, b, c)] = zMin;
           stack.push(at(a, b, c));
@@ -80,14 +95,18 @@ export function voxelFill(
     for (let k = 0; k < nz; k++) if (solid(i, j, k)) return true;
     return false;
   };
-  let resin = 0, trapped = 0, sealed = 0;
+  let resin = 0,
+    trapped = 0,
+    sealed = 0;
   for (let j = 0; j < ny; j++) {
     for (let i = 0; i < nx; i++) {
       if (!inDam(i, j)) continue;
       const area = (xs[i + 1]! - xs[i]!) * (ys[j + 1]! - ys[j]!);
       for (let k = 0; k < nz; k++) {
         if (solid(i, j, k)) continue;
-        const bottom = zs[k]!, top = zs[k + 1]!, e = escape[at(i, j, k)]!;
+        const bottom = zs[k]!,
+          top = zs[k + 1]!,
+          e = escape[at(i, j, k)]!;
         const below = Math.max(0, Math.min(levelMm, top) - bottom);
         if (e === -Infinity) {
           sealed += area * below;

@@ -42,7 +42,10 @@ export function withFlagsAndMethod(zip: Uint8Array, name: string, flags: number,
 export function zip64Stored(files: Record<string, Uint8Array>): Uint8Array {
   const chunks: Uint8Array[] = [];
   let offset = 0;
-  const push = (b: Uint8Array): void => { chunks.push(b); offset += b.length; };
+  const push = (b: Uint8Array): void => {
+    chunks.push(b);
+    offset += b.length;
+  };
   const entries: { name: Uint8Array; offset: number; size: number }[] = [];
   for (const [name, data] of Object.entries(files)) {
     const n = new TextEncoder().encode(name);
@@ -102,6 +105,9 @@ export function zip64Stored(files: Record<string, Uint8Array>): Uint8Array {
   push(new Uint8Array(end.buffer));
   const out = new Uint8Array(offset);
   let at = 0;
-  for (const c of chunks) { out.set(c, at); at += c.length; }
+  for (const c of chunks) {
+    out.set(c, at);
+    at += c.length;
+  }
   return out;
 }

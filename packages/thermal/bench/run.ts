@@ -107,12 +107,18 @@ const perColumnWholeMs = (perColumn.ms / sample) * wetColumns;
 const classes = mould.layers.map((l) => l.classes);
 const fmt = (ms: number) => `${ms.toFixed(1)} ms`;
 console.log(`exotherm forecast benchmark (node ${process.version})`);
-console.log(`map ${n} × ${n} columns of ${cellMm} mm, ${wetColumns} wet, deepest ${maxDepth.toFixed(1)} mm, layers ${layers.map(([b, t]) => `${b.toFixed(1)}–${t.toFixed(1)}`).join(', ')} mm`);
+console.log(
+  `map ${n} × ${n} columns of ${cellMm} mm, ${wetColumns} wet, deepest ${maxDepth.toFixed(1)} mm, layers ${layers.map(([b, t]) => `${b.toFixed(1)}–${t.toFixed(1)}`).join(', ')} mm`,
+);
 console.log(`calibration to ${sheet.maxLayerMm} mm at ${sheet.tempC} °C         ${fmt(calibration.ms)}  (${calibration.out.sentence})`);
 console.log(`one 40 mm layer with its series (median of 7)  ${fmt(median(single))}`);
-console.log(`layer proposal for ${maxDepth.toFixed(1)} mm at 24 °C          ${fmt(proposal.ms)}  (${proposal.out.layers.length} layers of ${proposal.out.layers[0]?.thicknessMm.toFixed(1)} mm)`);
+console.log(
+  `layer proposal for ${maxDepth.toFixed(1)} mm at 24 °C          ${fmt(proposal.ms)}  (${proposal.out.layers.length} layers of ${proposal.out.layers[0]?.thicknessMm.toFixed(1)} mm)`,
+);
 console.log(`whole mould, depth classes (median of ${runs})    ${fmt(median(mouldMs))}  (classes per layer: ${classes.join(', ')}; budget 200 ms)`);
 console.log(`reference, every column on its own             ${fmt(perColumnWholeMs)}  (scaled from ${sample} sampled columns, ${fmt(perColumn.ms)})`);
 console.log(`ratio reference / classes                      ${(perColumnWholeMs / median(mouldMs)).toFixed(0)}×`);
 console.log(`classes minus per-column peak on the sample    ${minGapK.toFixed(3)} to ${worstGapK.toFixed(3)} K (never below 0: classes err hot)`);
-console.log(`hottest spot: layer ${mould.hottest!.layerIndex + 1}, column (${mould.hottest!.i}, ${mould.hottest!.j}), ${mould.hottest!.tempC.toFixed(1)} °C at ${(mould.hottest!.timeToPeakMin / 60).toFixed(1)} h`);
+console.log(
+  `hottest spot: layer ${mould.hottest!.layerIndex + 1}, column (${mould.hottest!.i}, ${mould.hottest!.j}), ${mould.hottest!.tempC.toFixed(1)} °C at ${(mould.hottest!.timeToPeakMin / 60).toFixed(1)} h`,
+);

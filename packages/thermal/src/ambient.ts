@@ -30,10 +30,16 @@ export function checkAmbient(schedule: AmbientSchedule): Result<AmbientSchedule>
   for (let i = 0; i < schedule.length; i++) {
     const p = schedule[i]!;
     if (!Number.isFinite(p.timeMin) || p.timeMin < 0 || !Number.isFinite(p.tempC) || p.tempC < -40 || p.tempC > 80) {
-      return fail('ambient_reading_invalid', `Shop temperature reading ${i + 1} must have a time of 0 minutes or more and a temperature between −40 and 80 °C.`);
+      return fail(
+        'ambient_reading_invalid',
+        `Shop temperature reading ${i + 1} must have a time of 0 minutes or more and a temperature between −40 and 80 °C.`,
+      );
     }
     if (i > 0 && p.timeMin <= schedule[i - 1]!.timeMin) {
-      return fail('ambient_not_in_order', `Shop temperature readings must be in time order: reading ${i + 1} (${p.timeMin} min) does not come after reading ${i}.`);
+      return fail(
+        'ambient_not_in_order',
+        `Shop temperature readings must be in time order: reading ${i + 1} (${p.timeMin} min) does not come after reading ${i}.`,
+      );
     }
   }
   return ok(schedule);

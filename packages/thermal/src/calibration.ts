@@ -53,7 +53,10 @@ export function calibrateToDataSheet(resin: ResinThermal, sheet: DataSheetLimit,
   const prepared = prepareLayerModel({ ...resin, heatScale: 1 }, { ...setting, ambient: sheet.tempC });
   if (!prepared.ok) return prepared;
   if (limitC <= sheet.tempC) {
-    return fail('accepted_peak_not_above_sheet', `The accepted peak (${num(limitC)} °C) must be above the data sheet's pouring temperature (${num(sheet.tempC)} °C).`);
+    return fail(
+      'accepted_peak_not_above_sheet',
+      `The accepted peak (${num(limitC)} °C) must be above the data sheet's pouring temperature (${num(sheet.tempC)} °C).`,
+    );
   }
   const model = prepared.value;
   const peak = (s: number) => peakWithScale(model, s, sheet.maxLayerMm, limitC, options);
@@ -65,7 +68,10 @@ export function calibrateToDataSheet(resin: ResinThermal, sheet: DataSheetLimit,
       lo = hi;
       hi *= 2;
       if (hi > highestScale) {
-        return fail('calibration_out_of_reach', `Even ${highestScale} times the heat of reaction keeps a ${num(sheet.maxLayerMm)} mm layer at ${num(sheet.tempC)} °C under ${num(limitC)} °C in the model; check the gel time and the accepted peak against the data sheet.`);
+        return fail(
+          'calibration_out_of_reach',
+          `Even ${highestScale} times the heat of reaction keeps a ${num(sheet.maxLayerMm)} mm layer at ${num(sheet.tempC)} °C under ${num(limitC)} °C in the model; check the gel time and the accepted peak against the data sheet.`,
+        );
       }
       p = peak(hi);
     }
@@ -74,7 +80,10 @@ export function calibrateToDataSheet(resin: ResinThermal, sheet: DataSheetLimit,
       hi = lo;
       lo /= 2;
       if (lo < lowestScale) {
-        return fail('calibration_out_of_reach', `Even a thousandth of the heat of reaction takes a ${num(sheet.maxLayerMm)} mm layer at ${num(sheet.tempC)} °C over ${num(limitC)} °C in the model; check the gel time, the accepted peak and the data sheet's maximum layer.`);
+        return fail(
+          'calibration_out_of_reach',
+          `Even a thousandth of the heat of reaction takes a ${num(sheet.maxLayerMm)} mm layer at ${num(sheet.tempC)} °C over ${num(limitC)} °C in the model; check the gel time, the accepted peak and the data sheet's maximum layer.`,
+        );
       }
       p = peak(lo);
     }
@@ -161,5 +170,8 @@ export function proposeLayers(
     const layers = layersUnderLimit(model, totalDepthMm, count, options);
     if (layers.every((l) => l.peakC <= limitC)) return ok({ maxLayerMm, limitedBy, layers, limitC });
   }
-  return fail('no_layer_under_limit', `No split of ${num(totalDepthMm)} mm keeps every layer under ${num(limitC)} °C; pour when the shop is cooler or choose a slower product.`);
+  return fail(
+    'no_layer_under_limit',
+    `No split of ${num(totalDepthMm)} mm keeps every layer under ${num(limitC)} °C; pour when the shop is cooler or choose a slower product.`,
+  );
 }

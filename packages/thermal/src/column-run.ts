@@ -205,8 +205,7 @@ export function runColumn(input: ColumnRunInput): ColumnRun {
       // Nothing can heat beyond the hottest node plus what the least-cured resin can still release.
       const bounded = maxAll + maxRise * (1 - minAlpha) < peak.c && airAhead < peak.c;
       // Past gel everywhere, well past the peak, and cooled half-way back to the air: the reaction is spent.
-      const spent =
-        t >= 1.5 * peak.timeS && minAlpha >= law.kinetics.gelConversion && now.c <= air + 0.5 * (peak.c - air) && airAhead <= peak.c;
+      const spent = t >= 1.5 * peak.timeS && minAlpha >= law.kinetics.gelConversion && now.c <= air + 0.5 * (peak.c - air) && airAhead <= peak.c;
       if (bounded || spent) break;
     }
   }

@@ -53,7 +53,7 @@ describe('conduction alone against analytic solutions', () => {
     }
   });
 
-  it('a plane wall with a convective surface follows Incropera\'s series solution (Bi = 1)', () => {
+  it("a plane wall with a convective surface follows Incropera's series solution (Bi = 1)", () => {
     // Incropera §5.5.1, eqs. 5.39–5.42: θ* = Σ Cn·exp(−ζn²·Fo)·cos(ζn·x*), ζn·tan ζn = Bi,
     // Cn = 4 sin ζn / (2ζn + sin 2ζn). The insulated base of the layer is the wall's midplane.
     const L = 0.02;
@@ -72,7 +72,7 @@ describe('conduction alone against analytic solutions', () => {
     }
   });
 
-  it('a sphere with a convective surface follows Incropera\'s series solution (Bi = 1)', () => {
+  it("a sphere with a convective surface follows Incropera's series solution (Bi = 1)", () => {
     // Incropera eqs. 5.50–5.52: θ* = Σ Cn·exp(−ζn²·Fo)·sin(ζn r*)/(ζn r*), 1 − ζn cot ζn = Bi,
     // Cn = 4[sin ζn − ζn cos ζn]/(2ζn − sin 2ζn). For Bi = 1, ζ1 = π/2 and C1 = 4/π (Table 5.1: 1.5708, 1.2732).
     const R = 0.03;

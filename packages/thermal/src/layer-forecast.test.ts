@@ -90,12 +90,39 @@ describe('one layer', () => {
 
   it('follows the shop temperature over time', () => {
     // A flat schedule is the same shop as its one temperature.
-    const flat = peak(slow, { ambient: [{ timeMin: 0, tempC: 18 }, { timeMin: 900, tempC: 18 }] }, 30);
+    const flat = peak(
+      slow,
+      {
+        ambient: [
+          { timeMin: 0, tempC: 18 },
+          { timeMin: 900, tempC: 18 },
+        ],
+      },
+      30,
+    );
     expect(flat.peakC).toBeCloseTo(peak(slow, { ambient: 18 }, 30).peakC, 9);
     // Morning heating from 15 to 28 °C over 4 h: hotter than a shop that stays at 15 °C.
-    const warming = peak(slow, { ambient: [{ timeMin: 0, tempC: 15 }, { timeMin: 240, tempC: 28 }] }, 30);
+    const warming = peak(
+      slow,
+      {
+        ambient: [
+          { timeMin: 0, tempC: 15 },
+          { timeMin: 240, tempC: 28 },
+        ],
+      },
+      30,
+    );
     expect(warming.peakC).toBeGreaterThan(peak(slow, { ambient: 15 }, 30).peakC);
-    const backwards = forecastLayer(slow, { ambient: [{ timeMin: 60, tempC: 15 }, { timeMin: 30, tempC: 20 }] }, 30);
+    const backwards = forecastLayer(
+      slow,
+      {
+        ambient: [
+          { timeMin: 60, tempC: 15 },
+          { timeMin: 30, tempC: 20 },
+        ],
+      },
+      30,
+    );
     if (backwards.ok) throw new Error('accepted readings out of order');
     expect(backwards.error.message).toMatch(/in time order/);
   });

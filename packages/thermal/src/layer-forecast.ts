@@ -46,9 +46,7 @@ function f(n: number, digits = 3): string {
 export function describeModel(model: LayerModel): string {
   const kin = model.law.kinetics;
   const base =
-    model.base === 'insulated'
-      ? 'an insulated base (no heat flows down)'
-      : `${model.wood.name} (USDA Wood Handbook, ch. 4) as a semi-infinite solid`;
+    model.base === 'insulated' ? 'an insulated base (no heat flows down)' : `${model.wood.name} (USDA Wood Handbook, ch. 4) as a semi-infinite solid`;
   const cured = (model.conditions.curedResinBelowMm ?? 0) > 0 ? ` under ${f(model.conditions.curedResinBelowMm!, 1)} mm of cured resin` : '';
   const top =
     model.conditions.surfaceHeatTransferWPerM2K !== undefined
@@ -121,7 +119,12 @@ export function forecastPrepared(model: LayerModel, depthMm: number, options: Nu
 }
 
 /** How hot one layer of `depthMm` gets, where and when, poured under these conditions. */
-export function forecastLayer(resin: ResinThermal, conditions: PourConditions, depthMm: number, options: Numerics & { series?: boolean } = {}): Result<LayerForecast> {
+export function forecastLayer(
+  resin: ResinThermal,
+  conditions: PourConditions,
+  depthMm: number,
+  options: Numerics & { series?: boolean } = {},
+): Result<LayerForecast> {
   const depth = checkDepthMm(depthMm);
   if (!depth.ok) return depth;
   const model = prepareLayerModel(resin, conditions);
@@ -148,7 +151,10 @@ const depthToleranceMm = 0.05;
 export function maxLayerPrepared(model: LayerModel, limitC: number, capMm: number, options: Numerics = {}): Result<MaxLayer> {
   const startC = Math.max(model.mixTempC, model.baseTempC, model.ambient.atS(0));
   if (limitC <= startC) {
-    return fail('limit_below_start', `The limit of ${f(limitC, 1)} °C is not above the starting temperature of ${f(startC, 1)} °C, so no layer can stay under it; pour when it is cooler or raise the limit.`);
+    return fail(
+      'limit_below_start',
+      `The limit of ${f(limitC, 1)} °C is not above the starting temperature of ${f(startC, 1)} °C, so no layer can stay under it; pour when it is cooler or raise the limit.`,
+    );
   }
   const peakOf = (d: number) => runLayer(model, d, { ...options, stopAboveC: limitC }).run.peakC;
   let lo = 0;

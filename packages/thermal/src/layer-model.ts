@@ -70,7 +70,10 @@ function conditionsError(conditions: PourConditions): string | null {
   }
   if (conditions.wood) {
     const w = conditions.wood;
-    const bad = positive(w.conductivityWPerMK, 'The wood\'s conductivity', 'W/(m·K)') ?? positive(w.densityGPerMl, 'The wood\'s density', 'g/mL') ?? positive(w.heatCapacityJPerGK, 'The wood\'s heat capacity', 'J/(g·K)');
+    const bad =
+      positive(w.conductivityWPerMK, "The wood's conductivity", 'W/(m·K)') ??
+      positive(w.densityGPerMl, "The wood's density", 'g/mL') ??
+      positive(w.heatCapacityJPerGK, "The wood's heat capacity", 'J/(g·K)');
     if (bad) return bad;
   }
   return (
@@ -135,7 +138,9 @@ export function runLayer(model: LayerModel, depthMm: number, options: LayerRunOp
   const r = options.resolution ?? 1;
   const depthM = depthMm / 1000;
   const cellM = depthM / (resinCellsAtResolution1 * r);
-  const segments: GridSegment[] = [{ material: model.resinMaterial, thicknessM: depthM, reacting: true, cellsM: uniformCells(depthM, resinCellsAtResolution1 * r) }];
+  const segments: GridSegment[] = [
+    { material: model.resinMaterial, thicknessM: depthM, reacting: true, cellsM: uniformCells(depthM, resinCellsAtResolution1 * r) },
+  ];
   const curedM = (options.curedResinBelowMm ?? model.conditions.curedResinBelowMm ?? 0) / 1000;
   if (curedM > 0) segments.push({ material: model.resinMaterial, thicknessM: curedM, reacting: false, cellsM: geometricCells(curedM, cellM, substrateGrowth) });
   if (model.base === 'wood') {

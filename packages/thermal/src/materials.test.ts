@@ -11,7 +11,7 @@ describe('wood under the cavity', () => {
     expect(woodHeatCapacityJPerGK(0, 20)).toBeCloseTo(1.2367, 4);
   });
 
-  it('conductivity follows eq. 4-15 and lands within the Handbook\'s 20 % of its tabulated sugar maple', () => {
+  it("conductivity follows eq. 4-15 and lands within the Handbook's 20 % of its tabulated sugar maple", () => {
     // 0.63 × (0.1941 + 0.004064 × 12) + 0.01864 = 0.17165 W/(m·K); Table 4-7 lists 0.18 for sugar maple at 12 %.
     expect(woodConductivityWPerMK(0.63, 12)).toBeCloseTo(0.17165, 5);
     expect(Math.abs(woodConductivityWPerMK(0.63, 12) - sugarMaple12Pct.conductivityWPerMK) / 0.18).toBeLessThan(0.2);
@@ -20,7 +20,7 @@ describe('wood under the cavity', () => {
 });
 
 describe('surface heat transfer', () => {
-  it('natural convection from a hot plate facing up, Incropera\'s correlations', () => {
+  it("natural convection from a hot plate facing up, Incropera's correlations", () => {
     // 40 °C surface, 20 °C air, L = 0.05 m, air at 300 K: Ra = 9.80665 × (1/303.15) × 20 × 0.05³ /
     // (15.89e−6 × 22.5e−6) = 2.2620e5 → Nu = 0.54 Ra^¼ = 11.777 → h = 11.777 × 0.0263 / 0.05 = 6.194 W/(m²·K).
     expect(upwardPlateConvectionWPerM2K(40, 20, 0.05)).toBeCloseTo(6.194, 2);

@@ -48,16 +48,20 @@ export interface MouldOptions extends Numerics {
 type MouldConditions = Omit<PourConditions, 'curedResinBelowMm' | 'surfaceLengthMm'>;
 
 function checkInput(map: DepthGrid, layers: PlannedLayer[], step: number): string | null {
-  if (!Number.isInteger(map.nx) || !Number.isInteger(map.ny) || map.nx <= 0 || map.ny <= 0) return `The depth map needs whole positive column counts, got ${map.nx} × ${map.ny}.`;
-  if (!(map.depthsMm instanceof Float32Array) || map.depthsMm.length !== map.nx * map.ny) return `The depth map must hold nx × ny = ${map.nx * map.ny} depths, got ${map.depthsMm?.length ?? 0}.`;
+  if (!Number.isInteger(map.nx) || !Number.isInteger(map.ny) || map.nx <= 0 || map.ny <= 0)
+    return `The depth map needs whole positive column counts, got ${map.nx} × ${map.ny}.`;
+  if (!(map.depthsMm instanceof Float32Array) || map.depthsMm.length !== map.nx * map.ny)
+    return `The depth map must hold nx × ny = ${map.nx * map.ny} depths, got ${map.depthsMm?.length ?? 0}.`;
   const [cx, cy] = typeof map.cellMm === 'number' ? [map.cellMm, map.cellMm] : map.cellMm;
-  if (!(cx > 0 && cy > 0 && Number.isFinite(cx) && Number.isFinite(cy))) return 'The depth map\'s column size must be above zero (mm).';
+  if (!(cx > 0 && cy > 0 && Number.isFinite(cx) && Number.isFinite(cy))) return "The depth map's column size must be above zero (mm).";
   if (!(step >= 0 && Number.isFinite(step))) return `The depth class width must be zero or more mm, got ${String(step)}.`;
   if (layers.length === 0) return 'Plan at least one layer ([bottomMm, topMm] above the cavity floor).';
   for (let k = 0; k < layers.length; k++) {
     const [b, t] = layers[k]!;
-    if (!(Number.isFinite(b) && Number.isFinite(t) && b >= 0 && t > b)) return `Layer ${k + 1} must run from a level of 0 mm or more up to a higher level, got [${b}, ${t}].`;
-    if (k > 0 && b < layers[k - 1]![1] - 1e-9) return `Layer ${k + 1} starts at ${b} mm, below the top of layer ${k} (${layers[k - 1]![1]} mm); layers go up in order without overlapping.`;
+    if (!(Number.isFinite(b) && Number.isFinite(t) && b >= 0 && t > b))
+      return `Layer ${k + 1} must run from a level of 0 mm or more up to a higher level, got [${b}, ${t}].`;
+    if (k > 0 && b < layers[k - 1]![1] - 1e-9)
+      return `Layer ${k + 1} starts at ${b} mm, below the top of layer ${k} (${layers[k - 1]![1]} mm); layers go up in order without overlapping.`;
   }
   return null;
 }
@@ -96,7 +100,13 @@ function curedEdges(bottomMm: number, step: number): number[] {
  * up to a class); one below gets the full layer on cured resin, forecast at the class edges on
  * either side of its cured depth, keeping the hotter (the peak moves steadily between them).
  */
-export function forecastMould(resin: ResinThermal, conditions: MouldConditions, map: DepthGrid, layers: PlannedLayer[], options: MouldOptions = {}): Result<MouldForecast> {
+export function forecastMould(
+  resin: ResinThermal,
+  conditions: MouldConditions,
+  map: DepthGrid,
+  layers: PlannedLayer[],
+  options: MouldOptions = {},
+): Result<MouldForecast> {
   const step = options.classStepMm ?? 1;
   const bad = checkInput(map, layers, step);
   if (bad) return fail('mould_forecast_invalid', bad);

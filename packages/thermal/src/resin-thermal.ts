@@ -50,7 +50,7 @@ const ranges: Range[] = [
   { field: 'reactionHeatJPerG', label: 'The heat of reaction', unit: 'J/g', min: 0, max: 1500 },
   { field: 'activationEnergyKJPerMol', label: 'The activation energy', unit: 'kJ/mol', min: 10, max: 200 },
   { field: 'gelTimeMin', label: 'The gel time', unit: 'min', min: 0, max: 60 * 24 * 30, minOpen: true },
-  { field: 'refTempC', label: 'The gel time\'s temperature', unit: '°C', min: -10, max: 80 },
+  { field: 'refTempC', label: "The gel time's temperature", unit: '°C', min: -10, max: 80 },
   { field: 'densityGPerMl', label: 'The mixed density', unit: 'g/mL', min: 0.5, max: 3 },
   { field: 'heatCapacityJPerGK', label: 'The heat capacity', unit: 'J/(g·K)', min: 0.5, max: 4 },
   { field: 'conductivityWPerMK', label: 'The thermal conductivity', unit: 'W/(m·K)', min: 0.05, max: 5 },

@@ -45,16 +45,38 @@ async function freshPiece(w: World, shop: 'own' | 'other'): Promise<string> {
 
 async function freshInvitation(w: World, shop: 'own' | 'other'): Promise<string> {
   const lead = shop === 'own' ? await sessionFor('lead') : w.other.lead;
-  return (await h.http().post('/api/shop/invitations').set(bearer(lead)).send({ email: uniqueEmail('mx'), role: 'maker' }).expect(201)).body.id;
+  return (
+    await h
+      .http()
+      .post('/api/shop/invitations')
+      .set(bearer(lead))
+      .send({ email: uniqueEmail('mx'), role: 'maker' })
+      .expect(201)
+  ).body.id;
 }
 
 const leadOf = async (w: World, shop: 'own' | 'other') => (shop === 'own' ? sessionFor('lead') : w.other.lead);
 const created = async (w: World, shop: 'own' | 'other', path: string, body: object) =>
-  (await h.http().post(path).set(bearer(await leadOf(w, shop))).send(body).expect(201)).body.id as string;
+  (
+    await h
+      .http()
+      .post(path)
+      .set(bearer(await leadOf(w, shop)))
+      .send(body)
+      .expect(201)
+  ).body.id as string;
 
 const freshResin = (w: World, shop: 'own' | 'other') => created(w, shop, '/api/shelf/resin-systems', resinInput());
 const freshPigment = (w: World, shop: 'own' | 'other') =>
-  created(w, shop, '/api/shelf/pigments', { name: 'Matrix teal', kind: 'powder', densityGPerMl: 2.8, recommendedPct: 1, maxPct: 3, pricePerPack: 9, packSizeG: 25 });
+  created(w, shop, '/api/shelf/pigments', {
+    name: 'Matrix teal',
+    kind: 'powder',
+    densityGPerMl: 2.8,
+    recommendedPct: 1,
+    maxPct: 3,
+    pricePerPack: 9,
+    packSizeG: 25,
+  });
 const freshLot = async (w: World, shop: 'own' | 'other') =>
   created(w, shop, '/api/shelf/lots', { part: 'A', resinSystemId: await freshResin(w, shop), lotNumber: 'MX-1', quantityG: 3000, receivedOn: '2026-11-01' });
 const planBody = (pieceId: string, resinSystemId: string) => ({
@@ -65,9 +87,12 @@ const planBody = (pieceId: string, resinSystemId: string) => ({
   deepPour: { resinSystemId },
   shopTempC: 21,
 });
-const freshPlan = async (w: World, shop: 'own' | 'other') => created(w, shop, '/api/pour-plans', planBody(await freshPiece(w, shop), await freshResin(w, shop)));
+const freshPlan = async (w: World, shop: 'own' | 'other') =>
+  created(w, shop, '/api/pour-plans', planBody(await freshPiece(w, shop), await freshResin(w, shop)));
 const freshPour = async (w: World, shop: 'own' | 'other') => created(w, shop, '/api/pours', { pourPlanId: await freshPlan(w, shop) });
-const ownOrOther = (fresh: (w: World, shop: 'own') => Promise<string>, key: keyof World['otherIds']): Params => async (w, shop) => ({ id: shop === 'own' ? await fresh(w, 'own') : w.otherIds[key] });
+const ownOrOther =
+  (fresh: (w: World, shop: 'own') => Promise<string>, key: keyof World['otherIds']): Params =>
+  async (w, shop) => ({ id: shop === 'own' ? await fresh(w, 'own') : w.otherIds[key] });
 
 async function membershipOf(lead: SessionResponse, userId: string): Promise<string> {
   const members = (await h.http().get('/api/shop/members').set(bearer(lead)).expect(200)).body as { id: string; userId: string }[];
@@ -89,19 +114,27 @@ const table: Record<string, Rule> = {
   'GET /api/shop': { allowed: 'member' },
   'PATCH /api/shop': { allowed: 'shop:manage', body: () => ({ unitSystem: 'metric' }) },
   'GET /api/shop/members': { allowed: 'member' },
-  'PATCH /api/shop/members/:id': { allowed: 'team:manage',
+  'PATCH /api/shop/members/:id': {
+    allowed: 'team:manage',
     body: () => ({ role: 'apprentice' }),
     params: async (w, shop) => ({ id: shop === 'own' ? await membershipOf(await sessionFor('lead'), w.people.apprentice.user.id) : w.otherIds.membership }),
   },
   'GET /api/shop/invitations': { allowed: 'team:manage' },
   'POST /api/shop/invitations': { allowed: 'team:manage', body: () => ({ email: uniqueEmail('mx'), role: 'maker' }) },
-  'DELETE /api/shop/invitations/:id': { allowed: 'team:manage', params: async (w, shop) => ({ id: shop === 'own' ? await freshInvitation(w, 'own') : w.otherIds.invitation }) },
+  'DELETE /api/shop/invitations/:id': {
+    allowed: 'team:manage',
+    params: async (w, shop) => ({ id: shop === 'own' ? await freshInvitation(w, 'own') : w.otherIds.invitation }),
+  },
   'GET /api/invitations/:token': { allowed: 'public' },
   'POST /api/invitations/:token/accept': { allowed: 'public' },
   'GET /api/pieces': { allowed: 'member' },
   'POST /api/pieces': { allowed: 'piece:create', body: () => ({ name: 'matrix piece' }) },
   'GET /api/pieces/:id': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
-  'PATCH /api/pieces/:id': { allowed: 'piece:edit', body: () => ({ notes: 'checked' }), params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
+  'PATCH /api/pieces/:id': {
+    allowed: 'piece:edit',
+    body: () => ({ notes: 'checked' }),
+    params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }),
+  },
   'DELETE /api/pieces/:id': { allowed: 'piece:delete', params: async (w, shop) => ({ id: shop === 'own' ? await freshPiece(w, 'own') : w.otherIds.piece }) },
   'GET /api/audit': { allowed: 'audit:read' },
   'GET /api/audit/export': { allowed: 'audit:read' },
@@ -111,12 +144,22 @@ const table: Record<string, Rule> = {
   'PUT /api/shelf/resin-systems/:id': { allowed: 'shelf:keep', body: () => resinInput({ name: 'Renamed' }), params: ownOrOther(freshResin, 'resin') },
   'DELETE /api/shelf/resin-systems/:id': { allowed: 'shelf:keep', params: ownOrOther(freshResin, 'resin') },
   'GET /api/shelf/pigments': { allowed: 'member' },
-  'POST /api/shelf/pigments': { allowed: 'shelf:keep', body: () => ({ name: 'Matrix ochre', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }) },
+  'POST /api/shelf/pigments': {
+    allowed: 'shelf:keep',
+    body: () => ({ name: 'Matrix ochre', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }),
+  },
   'GET /api/shelf/pigments/:id': { allowed: 'member', params: ownOrOther(freshPigment, 'pigment') },
-  'PUT /api/shelf/pigments/:id': { allowed: 'shelf:keep', body: () => ({ name: 'Matrix ochre', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }), params: ownOrOther(freshPigment, 'pigment') },
+  'PUT /api/shelf/pigments/:id': {
+    allowed: 'shelf:keep',
+    body: () => ({ name: 'Matrix ochre', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 }),
+    params: ownOrOther(freshPigment, 'pigment'),
+  },
   'DELETE /api/shelf/pigments/:id': { allowed: 'shelf:keep', params: ownOrOther(freshPigment, 'pigment') },
   'GET /api/shelf/lots': { allowed: 'member' },
-  'POST /api/shelf/lots': { allowed: 'shelf:keep', body: (w) => ({ part: 'pigment', pigmentId: w.ownPigment, lotNumber: 'MX-2', quantityG: 25, receivedOn: '2026-11-02' }) },
+  'POST /api/shelf/lots': {
+    allowed: 'shelf:keep',
+    body: (w) => ({ part: 'pigment', pigmentId: w.ownPigment, lotNumber: 'MX-2', quantityG: 25, receivedOn: '2026-11-02' }),
+  },
   'GET /api/shelf/lots/:id': { allowed: 'member', params: ownOrOther(freshLot, 'lot') },
   'PATCH /api/shelf/lots/:id': { allowed: 'shelf:keep', body: () => ({ notes: 'checked' }), params: ownOrOther(freshLot, 'lot') },
   'DELETE /api/shelf/lots/:id': { allowed: 'shelf:keep', params: ownOrOther(freshLot, 'lot') },
@@ -124,7 +167,11 @@ const table: Record<string, Rule> = {
   'POST /api/molds': { allowed: 'mold:change' },
   'GET /api/molds': { allowed: 'member' },
   'GET /api/molds/:id': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
-  'PATCH /api/molds/:id': { allowed: 'mold:change', body: () => ({ name: 'matrix mould' }), params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
+  'PATCH /api/molds/:id': {
+    allowed: 'mold:change',
+    body: () => ({ name: 'matrix mould' }),
+    params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }),
+  },
   'GET /api/molds/:id/fill': { allowed: 'member', query: 'level=5', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'GET /api/molds/:id/layers': { allowed: 'member', query: 'levels=4,6', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
   'GET /api/molds/:id/stl': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownMold : w.otherIds.mold }) },
@@ -142,16 +189,35 @@ const table: Record<string, Rule> = {
   'POST /api/pours': { allowed: 'member', body: (w) => ({ pourPlanId: w.ownPlan }) },
   'GET /api/pours/:id': { allowed: 'member', params: ownOrOther(freshPour, 'pour') },
   'POST /api/pours/:id/batches': { allowed: 'member', body: () => ({ planBatchIndex: 0, weighedAG: 10, weighedBG: 5 }), params: ownOrOther(freshPour, 'pour') },
-  'POST /api/pours/:id/readings': { allowed: 'member', body: () => ({ readings: [{ at: '2026-11-01T10:00:00Z', tempC: 20 }] }), params: ownOrOther(freshPour, 'pour') },
-  'POST /api/pours/:id/readings/csv': { allowed: 'member', raw: (r) => r.set('Content-Type', 'text/csv').send('2026-11-01T10:00:00Z,20\n'), params: ownOrOther(freshPour, 'pour') },
+  'POST /api/pours/:id/readings': {
+    allowed: 'member',
+    body: () => ({ readings: [{ at: '2026-11-01T10:00:00Z', tempC: 20 }] }),
+    params: ownOrOther(freshPour, 'pour'),
+  },
+  'POST /api/pours/:id/readings/csv': {
+    allowed: 'member',
+    raw: (r) => r.set('Content-Type', 'text/csv').send('2026-11-01T10:00:00Z,20\n'),
+    params: ownOrOther(freshPour, 'pour'),
+  },
   'POST /api/pours/:id/checks': { allowed: 'member', raw: (r) => r.field('stage', 'gelled'), params: ownOrOther(freshPour, 'pour') },
   'GET /api/pours/:id/batches.csv': { allowed: 'member', params: ownOrOther(freshPour, 'pour') },
   'GET /api/pours/:id/readings.csv': { allowed: 'member', params: ownOrOther(freshPour, 'pour') },
-  'GET /api/pours/:id/checks/:checkId/photo': { allowed: 'member', params: async (w, shop) => ({ id: shop === 'own' ? w.ownPour : w.otherIds.pour, checkId: '00000000-0000-4000-8000-000000000000' }) },
+  'GET /api/pours/:id/checks/:checkId/photo': {
+    allowed: 'member',
+    params: async (w, shop) => ({ id: shop === 'own' ? w.ownPour : w.otherIds.pour, checkId: '00000000-0000-4000-8000-000000000000' }),
+  },
   'GET /api/pours/:id/readings': { allowed: 'member', params: ownOrOther(freshPour, 'pour') },
   // Voids are also the logger's or a lead's own right per entry; an id nobody logged tests the role rule alone.
-  'DELETE /api/pours/:id/readings/:readingId': { allowed: 'member', body: () => ({ reason: 'matrix' }), params: async (w, shop) => ({ id: shop === 'own' ? w.ownPour : w.otherIds.pour, readingId: '00000000-0000-4000-8000-000000000000' }) },
-  'POST /api/pours/:id/batches/:batchId/void': { allowed: 'member', body: () => ({ reason: 'matrix' }), params: async (w, shop) => ({ id: shop === 'own' ? w.ownPour : w.otherIds.pour, batchId: '00000000-0000-4000-8000-000000000000' }) },
+  'DELETE /api/pours/:id/readings/:readingId': {
+    allowed: 'member',
+    body: () => ({ reason: 'matrix' }),
+    params: async (w, shop) => ({ id: shop === 'own' ? w.ownPour : w.otherIds.pour, readingId: '00000000-0000-4000-8000-000000000000' }),
+  },
+  'POST /api/pours/:id/batches/:batchId/void': {
+    allowed: 'member',
+    body: () => ({ reason: 'matrix' }),
+    params: async (w, shop) => ({ id: shop === 'own' ? w.ownPour : w.otherIds.pour, batchId: '00000000-0000-4000-8000-000000000000' }),
+  },
   'POST /api/reminders/:id/done': { allowed: 'member', params: async () => ({ id: '00000000-0000-4000-8000-000000000000' }) },
   'POST /api/pours/:id/release': { allowed: 'pour:release', params: ownOrOther(freshPour, 'pour') },
   'POST /api/pours/:id/machined': { allowed: 'pour:machined', body: () => ({ finishCoats: 1, hoursBetweenCoats: 12 }), params: ownOrOther(freshPour, 'pour') },
@@ -161,7 +227,12 @@ const table: Record<string, Rule> = {
 };
 
 async function uploadMold(w: World, shop: 'own' | 'other'): Promise<string> {
-  const res = await h.http().post('/api/molds').set(bearer(await leadOf(w, shop))).attach('file', binaryStl(pocketMouldTriangles({ outer: [40, 30, 10], pocket: [5, 5, 35, 25], floorZ: 4 })), 'm.stl').expect(202);
+  const res = await h
+    .http()
+    .post('/api/molds')
+    .set(bearer(await leadOf(w, shop)))
+    .attach('file', binaryStl(pocketMouldTriangles({ outer: [40, 30, 10], pocket: [5, 5, 35, 25], floorZ: 4 })), 'm.stl')
+    .expect(202);
   return res.body.id;
 }
 

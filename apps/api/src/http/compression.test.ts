@@ -155,4 +155,3 @@ describe('API answers', () => {
     expect(photo.body.equals(PNG_BYTES)).toBe(true);
   });
 });
-

@@ -29,7 +29,11 @@ describe('HTTP edge', () => {
   });
 
   it('refuses a body over the limit with 413', async () => {
-    const res = await h.http().post('/api/auth/login').send({ email: 'a@b.test', password: 'x'.repeat(200_000) }).expect(413);
+    const res = await h
+      .http()
+      .post('/api/auth/login')
+      .send({ email: 'a@b.test', password: 'x'.repeat(200_000) })
+      .expect(413);
     expect(res.body.error.code).toBe('body_too_large');
   });
 

@@ -94,8 +94,14 @@ const PG_OUT_OF_RANGE = new Set(['22003', '22008', '22009']);
 function fromUnstorableInput(err: unknown): AppError | undefined {
   const e = err as { code?: string } | undefined;
   if (!e?.code) return undefined;
-  if (PG_UNSTORABLE_TEXT.has(e.code)) return new AppError('bad_request', 'invalid_text', 'the request contains a NUL character (U+0000), which text cannot hold; remove it and send again');
-  if (PG_OUT_OF_RANGE.has(e.code)) return new AppError('bad_request', 'value_out_of_range', 'a number or time in the request is outside what can be stored; check its size, its year and its time-zone offset');
+  if (PG_UNSTORABLE_TEXT.has(e.code))
+    return new AppError('bad_request', 'invalid_text', 'the request contains a NUL character (U+0000), which text cannot hold; remove it and send again');
+  if (PG_OUT_OF_RANGE.has(e.code))
+    return new AppError(
+      'bad_request',
+      'value_out_of_range',
+      'a number or time in the request is outside what can be stored; check its size, its year and its time-zone offset',
+    );
   // 23505: two requests at once made the same unique thing; the services check first, this is the race.
   if (e.code === '23505') return new AppError('conflict', 'already_exists', 'that already exists (another request made it a moment ago); reload and try again');
   return undefined;
@@ -120,10 +126,12 @@ function fromHttpLayer(err: unknown): AppError | undefined {
   const e = err as { status?: unknown; statusCode?: unknown; expose?: unknown; code?: unknown } | undefined;
   const status = typeof e?.status === 'number' ? e.status : typeof e?.statusCode === 'number' ? e.statusCode : undefined;
   // The router marks a path parameter it cannot decode with status 400 but without expose.
-  if (err instanceof URIError && status === 400) return new AppError('bad_request', 'bad_path', 'the address holds a broken %-escape (a % must be followed by two hex digits); fix the link');
+  if (err instanceof URIError && status === 400)
+    return new AppError('bad_request', 'bad_path', 'the address holds a broken %-escape (a % must be followed by two hex digits); fix the link');
   if (status === undefined || status < 400 || status >= 500 || e?.expose !== true) return undefined;
   if (status === 403 || status === 404) return new AppError('not_found', 'not_found', 'there is nothing to serve at this address');
-  if (typeof e?.code === 'string' && e.code.startsWith('Z_')) return new AppError('bad_request', 'bad_encoding', 'the body does not match its Content-Encoding; send it uncompressed, or compressed as the header says');
+  if (typeof e?.code === 'string' && e.code.startsWith('Z_'))
+    return new AppError('bad_request', 'bad_encoding', 'the body does not match its Content-Encoding; send it uncompressed, or compressed as the header says');
   return new AppError('bad_request', 'bad_request', 'the request could not be read; check its headers and body');
 }
 

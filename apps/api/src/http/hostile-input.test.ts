@@ -3,7 +3,18 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { ZodObject, type ZodType } from 'zod';
 import { bearer, useHarness } from '../test-support/harness';
 import { judge, sendAll, type Answer, type Attempt } from '../test-support/hostile-requests';
-import { PNG_BYTES, fillPath, newMarker, pathParams, routeKey, stockShop, stockedMould, validParts, type StockedShop, type ValidParts } from '../test-support/stocked-shop';
+import {
+  PNG_BYTES,
+  fillPath,
+  newMarker,
+  pathParams,
+  routeKey,
+  stockShop,
+  stockedMould,
+  validParts,
+  type StockedShop,
+  type ValidParts,
+} from '../test-support/stocked-shop';
 import { tenantRowCounts } from '../test-support/tenant-rows';
 import type { RegisteredRoute } from './route-registry';
 
@@ -79,15 +90,18 @@ function refusedBatch(): Attempt[] {
     const url = urlOf(route, p);
     const base = { method: route.method, url, headers: headersOf(p), expect: 'reject' as const };
     out.push({ ...base, label: 'malformed JSON', raw: '{"name": "unterminated', status: 400, code: 'malformed_json' });
-    if (route.method !== 'get') out.push({ ...base, label: '1 MB string', raw: JSON.stringify({ name: 'x'.repeat(ONE_MB) }), status: 413, code: 'body_too_large' });
+    if (route.method !== 'get')
+      out.push({ ...base, label: '1 MB string', raw: JSON.stringify({ name: 'x'.repeat(ONE_MB) }), status: 413, code: 'body_too_large' });
 
     if (route.body && p.body) {
       for (const raw of ['[]', '"text"', 'null', '42']) out.push({ ...base, label: `body is ${raw}`, raw });
       for (const leaf of leaves(p.body)) {
-        for (const raw of wrongTypesFor(leaf.value)) out.push({ ...base, label: `${leaf.path} = ${raw}`, raw: withLeaf(p.body, leaf.path, raw), field: leaf.path });
+        for (const raw of wrongTypesFor(leaf.value))
+          out.push({ ...base, label: `${leaf.path} = ${raw}`, raw: withLeaf(p.body, leaf.path, raw), field: leaf.path });
         if (typeof leaf.value === 'string') {
           out.push({ ...base, label: `${leaf.path} = 10 kB`, raw: withLeaf(p.body, leaf.path, JSON.stringify(TEN_KB)), field: leaf.path });
-          if (!isPassword(leaf.path)) out.push({ ...base, label: `${leaf.path} has NUL`, raw: withLeaf(p.body, leaf.path, JSON.stringify(`a\u0000${leaf.value}`)) });
+          if (!isPassword(leaf.path))
+            out.push({ ...base, label: `${leaf.path} has NUL`, raw: withLeaf(p.body, leaf.path, JSON.stringify(`a\u0000${leaf.value}`)) });
         }
       }
     }
@@ -107,7 +121,12 @@ function refusedBatch(): Attempt[] {
       for (const bad of BAD_PARAMS) {
         // Sent as written: the router decodes what the client sent, so %00 arrives as a NUL.
         const path = route.fullPath.replace(/:([A-Za-z]+)/g, (_m, k: string) => (k === name ? bad : encodeURIComponent(own[k]!)));
-        out.push({ ...base, url: path + url.slice(fillPath(route.fullPath, own).length), label: `:${name} = ${bad.slice(0, 30)}`, raw: p.body ? JSON.stringify(p.body) : undefined });
+        out.push({
+          ...base,
+          url: path + url.slice(fillPath(route.fullPath, own).length),
+          label: `:${name} = ${bad.slice(0, 30)}`,
+          raw: p.body ? JSON.stringify(p.body) : undefined,
+        });
       }
     }
     if (route.query) {
@@ -134,9 +153,12 @@ function toleratedBatch(): Attempt[] {
     if (route.body && p.body) {
       out.push({ ...base, label: 'unknown top-level key', raw: JSON.stringify({ ...p.body, hostileExtra: 1 }) });
       for (const leaf of leaves(p.body)) {
-        if (typeof leaf.value === 'string') for (const s of ODD_TEXT) out.push({ ...base, label: `${leaf.path} = ${s}`, raw: withLeaf(p.body, leaf.path, JSON.stringify(s)), field: leaf.path });
-        if (typeof leaf.value === 'number') for (const n of ODD_NUMBERS) out.push({ ...base, label: `${leaf.path} = ${n}`, raw: withLeaf(p.body, leaf.path, n), field: leaf.path });
-        if (isPassword(leaf.path)) out.push({ ...base, label: `${leaf.path} has NUL`, raw: withLeaf(p.body, leaf.path, JSON.stringify('a\u0000 long secret')) });
+        if (typeof leaf.value === 'string')
+          for (const s of ODD_TEXT) out.push({ ...base, label: `${leaf.path} = ${s}`, raw: withLeaf(p.body, leaf.path, JSON.stringify(s)), field: leaf.path });
+        if (typeof leaf.value === 'number')
+          for (const n of ODD_NUMBERS) out.push({ ...base, label: `${leaf.path} = ${n}`, raw: withLeaf(p.body, leaf.path, n), field: leaf.path });
+        if (isPassword(leaf.path))
+          out.push({ ...base, label: `${leaf.path} has NUL`, raw: withLeaf(p.body, leaf.path, JSON.stringify('a\u0000 long secret')) });
       }
     }
     if (route.body && p.form) {
@@ -148,7 +170,8 @@ function toleratedBatch(): Attempt[] {
     }
     if (route.query) {
       const query = p.query ?? {};
-      for (const k of shapeKeys(route.query)) for (const v of ODD_QUERY) out.push({ ...base, url: urlOf(route, p, undefined, { ...query, [k]: v }), label: `?${k} = ${JSON.stringify(v)}` });
+      for (const k of shapeKeys(route.query))
+        for (const v of ODD_QUERY) out.push({ ...base, url: urlOf(route, p, undefined, { ...query, [k]: v }), label: `?${k} = ${JSON.stringify(v)}` });
     }
   }
   return out;
@@ -196,10 +219,20 @@ describe('hostile input on every route', () => {
   it('stores SQL-looking and unicode text literally and finds it again by search', async () => {
     const names = [SQL_TEXT, '🪵 walnut 🙂', '\u202Eטקסט\u202C', "Robert'); DELETE FROM pieces WHERE ('1'='1"];
     for (const name of names) {
-      const created = await h.http().post('/api/pieces').set(bearer(shop.lead)).send({ name, notes: `${shop.marker} ${name}` }).expect(201);
+      const created = await h
+        .http()
+        .post('/api/pieces')
+        .set(bearer(shop.lead))
+        .send({ name, notes: `${shop.marker} ${name}` })
+        .expect(201);
       const read = await h.http().get(`/api/pieces/${created.body.id}`).set(bearer(shop.lead)).expect(200);
       expect(read.body.name).toBe(name.trim());
-      const found = await h.http().get('/api/pieces').query({ q: name.trim().slice(0, 100) }).set(bearer(shop.lead)).expect(200);
+      const found = await h
+        .http()
+        .get('/api/pieces')
+        .query({ q: name.trim().slice(0, 100) })
+        .set(bearer(shop.lead))
+        .expect(200);
       expect(found.body.items.map((i: { id: string }) => i.id)).toContain(created.body.id);
     }
     const pieces: { n: number }[] = await h.ds.query('SELECT count(*)::int AS n FROM pieces WHERE shop_id = $1', [shop.shopId]);
@@ -215,10 +248,26 @@ describe('hostile files', () => {
   const zipBomb = Buffer.from(zipSync({ '3D/3dmodel.model': new Uint8Array(32 * 2 ** 20).fill(0x20) }));
 
   function upload(path: string, files: { part: string; bytes: Buffer; name: string; type?: string }[], fields: [string, string][] = [], label = ''): Attempt {
-    return { label: label || files.map((f) => `${f.part}:${f.name}`).join('+'), method: 'post', url: path, headers: bearer(shop.lead), form: { fields, files }, expect: 'reject' };
+    return {
+      label: label || files.map((f) => `${f.part}:${f.name}`).join('+'),
+      method: 'post',
+      url: path,
+      headers: bearer(shop.lead),
+      form: { fields, files },
+      expect: 'reject',
+    };
   }
   function csv(body: string | Buffer, label: string, contentType = 'text/csv', status?: number): Attempt {
-    return { label, method: 'post', url: `/api/pours/${shop.ids.pour}/readings/csv`, headers: bearer(shop.lead), raw: body as string, contentType, expect: 'reject', status };
+    return {
+      label,
+      method: 'post',
+      url: `/api/pours/${shop.ids.pour}/readings/csv`,
+      headers: bearer(shop.lead),
+      raw: body as string,
+      contentType,
+      expect: 'reject',
+      status,
+    };
   }
 
   it('refuses files that are not what they claim with a 4xx, and writes nothing', async () => {
@@ -235,12 +284,22 @@ describe('hostile files', () => {
       upload('/api/molds', [{ part: 'file', bytes: zipBomb, name: 'bomb.3mf' }]),
       upload('/api/molds', [{ part: 'file', bytes: html, name: 'page.obj' }]),
       upload('/api/molds', [{ part: 'file', bytes: Buffer.from('v 0 0 0\nf 1 1 1 9\n'), name: 'broken.obj' }]),
-      upload('/api/molds', [{ part: 'file', bytes: stockedMould(), name: 'a.stl' }, { part: 'file', bytes: stockedMould(), name: 'b.stl' }]),
+      upload('/api/molds', [
+        { part: 'file', bytes: stockedMould(), name: 'a.stl' },
+        { part: 'file', bytes: stockedMould(), name: 'b.stl' },
+      ]),
       upload('/api/molds', [{ part: 'photo', bytes: stockedMould(), name: 'm.stl' }]),
       upload(checks, [{ part: 'photo', bytes: html, name: 'check.png', type: 'image/png' }], [['stage', 'gelled']]),
       upload(checks, [{ part: 'photo', bytes: svg, name: 'check.svg', type: 'image/svg+xml' }], [['stage', 'gelled']]),
       upload(checks, [{ part: 'photo', bytes: Buffer.alloc(0), name: 'empty.jpg', type: 'image/jpeg' }], [['stage', 'gelled']]),
-      upload(checks, [{ part: 'photo', bytes: PNG_BYTES, name: 'a.png' }, { part: 'photo', bytes: PNG_BYTES, name: 'b.png' }], [['stage', 'gelled']]),
+      upload(
+        checks,
+        [
+          { part: 'photo', bytes: PNG_BYTES, name: 'a.png' },
+          { part: 'photo', bytes: PNG_BYTES, name: 'b.png' },
+        ],
+        [['stage', 'gelled']],
+      ),
       upload(checks, [{ part: 'file', bytes: PNG_BYTES, name: 'a.png' }], [['stage', 'gelled']], 'photo in the wrong part'),
       upload(checks, [{ part: 'photo', bytes: PNG_BYTES, name: 'a.png' }], [['stage', 'rock hard']], 'bad stage with a good photo'),
       csv('', 'empty CSV', 'text/csv', 400),
@@ -273,7 +332,13 @@ describe('hostile files', () => {
       expect(stl.headers['x-content-type-options']).toBe('nosniff');
       expect(stl.headers['set-cookie']).toBeUndefined();
     }
-    const check = await h.http().post(`/api/pours/${shop.ids.pour}/checks`).set(bearer(shop.lead)).field('stage', 'gelled').attach('photo', PNG_BYTES, { filename: 'page.html', contentType: 'text/html' }).expect(201);
+    const check = await h
+      .http()
+      .post(`/api/pours/${shop.ids.pour}/checks`)
+      .set(bearer(shop.lead))
+      .field('stage', 'gelled')
+      .attach('photo', PNG_BYTES, { filename: 'page.html', contentType: 'text/html' })
+      .expect(201);
     const photo = await h.http().get(`/api/pours/${shop.ids.pour}/checks/${check.body.id}/photo`).set(bearer(shop.lead)).buffer(true).expect(200);
     expect(photo.headers['content-type']).toBe('image/png');
     expect(photo.headers['x-content-type-options']).toBe('nosniff');

@@ -12,21 +12,40 @@ const h = useHarness();
 
 // A 1 × 1 PNG (PNG specification, ISO/IEC 15948: signature, IHDR, IDAT, IEND), and the same file with one more byte
 // after its end, so two uploads differ only in the file part.
-const png = Buffer.from('89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d49444154789c6360000002000154a24f5d0000000049454e44ae426082', 'hex');
+const png = Buffer.from(
+  '89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000d49444154789c6360000002000154a24f5d0000000049454e44ae426082',
+  'hex',
+);
 const otherPng = Buffer.concat([png, Buffer.from([0])]);
 
 async function pourUnderWay() {
   const shop = await createShop(h);
   const maker = await shop.member('maker');
   const apprentice = await shop.member('apprentice');
-  const product = (await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ mixRatio: { a: 2, b: 1, basis: 'weight' }, maxLayerMm: 25 })).expect(201)).body;
+  const product = (
+    await h
+      .http()
+      .post('/api/shelf/resin-systems')
+      .set(bearer(shop.lead))
+      .send(resinInput({ mixRatio: { a: 2, b: 1, basis: 'weight' }, maxLayerMm: 25 }))
+      .expect(201)
+  ).body;
   const piece = (await h.http().post('/api/pieces').set(bearer(maker)).send({ name: 'Cherry board' }).expect(201)).body;
   const plan = (
     await h
       .http()
       .post('/api/pour-plans')
       .set(bearer(maker))
-      .send({ pieceId: piece.id, name: 'Two layers', cavity: { source: 'shape', shape: { kind: 'rectangle', lengthMm: 200, widthMm: 100, depthMm: 40 } }, fillLevelMm: 40, deepPour: { resinSystemId: product.id }, overPourPct: 0, cupWaste: { massG: 0 }, shopTempC: 20 })
+      .send({
+        pieceId: piece.id,
+        name: 'Two layers',
+        cavity: { source: 'shape', shape: { kind: 'rectangle', lengthMm: 200, widthMm: 100, depthMm: 40 } },
+        fillLevelMm: 40,
+        deepPour: { resinSystemId: product.id },
+        overPourPct: 0,
+        cupWaste: { massG: 0 },
+        shopTempC: 20,
+      })
       .expect(201)
   ).body;
   const cups = plan.result.layers.flatMap((l: { batches: unknown[] }) => l.batches) as { index: number; partA: { grams: number }; partB: { grams: number } }[];
@@ -74,7 +93,12 @@ describe('Idempotency-Key on creates', () => {
     const cup = w.cups[1]!;
     const batchKey = randomUUID();
     const logCup = () =>
-      h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).set('Idempotency-Key', batchKey).send({ planBatchIndex: cup.index, weighedAG: cup.partA.grams, weighedBG: cup.partB.grams });
+      h
+        .http()
+        .post(`/api/pours/${w.pour.id}/batches`)
+        .set(bearer(w.apprentice))
+        .set('Idempotency-Key', batchKey)
+        .send({ planBatchIndex: cup.index, weighedAG: cup.partA.grams, weighedBG: cup.partB.grams });
     const cups = await Promise.all([logCup(), logCup()]);
     expect(cups.map((a) => a.status)).toEqual([201, 201]);
     expect(cups[0]!.text).toBe(cups[1]!.text);
@@ -86,7 +110,13 @@ describe('Idempotency-Key on creates', () => {
     const readingKey = randomUUID();
     // A reading taken after the pour started (an earlier one is refused as outside the pour).
     const at = new Date(Date.parse(w.pour.startedAt) + 1000).toISOString();
-    const reading = () => h.http().post(`/api/pours/${w.pour.id}/readings`).set(bearer(w.apprentice)).set('Idempotency-Key', readingKey).send({ readings: [{ at, tempC: 21.5 }] });
+    const reading = () =>
+      h
+        .http()
+        .post(`/api/pours/${w.pour.id}/readings`)
+        .set(bearer(w.apprentice))
+        .set('Idempotency-Key', readingKey)
+        .send({ readings: [{ at, tempC: 21.5 }] });
     const r1 = await reading().expect(200);
     const r2 = await reading().expect(200);
     // Without the key a second send would answer "1 duplicate"; the replay answers what the first send did.
@@ -95,7 +125,14 @@ describe('Idempotency-Key on creates', () => {
 
     const checkKey = randomUUID();
     const check = (photo: Buffer) =>
-      h.http().post(`/api/pours/${w.pour.id}/checks`).set(bearer(w.apprentice)).set('Idempotency-Key', checkKey).field('stage', 'liquid').field('note', 'pressed with a glove').attach('photo', photo, 'check.png');
+      h
+        .http()
+        .post(`/api/pours/${w.pour.id}/checks`)
+        .set(bearer(w.apprentice))
+        .set('Idempotency-Key', checkKey)
+        .field('stage', 'liquid')
+        .field('note', 'pressed with a glove')
+        .attach('photo', photo, 'check.png');
     const c1 = await check(png).expect(201);
     const c2 = await check(png).expect(201);
     expect(c2.body).toEqual(c1.body);
@@ -106,7 +143,12 @@ describe('Idempotency-Key on creates', () => {
     expect(other.body.error.code).toBe('idempotency_key_reused');
 
     const cup = w.cups[0]!;
-    await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).send({ planBatchIndex: cup.index, weighedAG: cup.partA.grams, weighedBG: cup.partB.grams }).expect(201);
+    await h
+      .http()
+      .post(`/api/pours/${w.pour.id}/batches`)
+      .set(bearer(w.apprentice))
+      .send({ planBatchIndex: cup.index, weighedAG: cup.partA.grams, weighedBG: cup.partB.grams })
+      .expect(201);
     const pour = (await h.http().get(`/api/pours/${w.pour.id}`).set(bearer(w.apprentice)).expect(200)).body as { reminders: { id: string; done: unknown }[] };
     const reminder = pour.reminders.find((r) => r.done === null)!;
     const tickKey = randomUUID();
@@ -140,7 +182,8 @@ describe('Idempotency-Key on creates', () => {
     const key = randomUUID();
     const pocket = binaryStl(pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 10, 90, 50], floorZ: 10 }));
     const deeper = binaryStl(pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 10, 90, 50], floorZ: 5 }));
-    const send = (bytes: Buffer) => h.http().post('/api/molds').set(bearer(w.maker)).set('Idempotency-Key', key).attach('file', bytes, 'pocket.stl').field('name', 'Tray pocket');
+    const send = (bytes: Buffer) =>
+      h.http().post('/api/molds').set(bearer(w.maker)).set('Idempotency-Key', key).attach('file', bytes, 'pocket.stl').field('name', 'Tray pocket');
     const first = await send(pocket).expect(202);
     const again = await send(pocket).expect(202);
     expect(again.headers['idempotent-replayed']).toBe('true');
@@ -160,10 +203,17 @@ describe('Idempotency-Key on creates', () => {
     const key = randomUUID();
     const refused = await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).set('Idempotency-Key', key).send(entry).expect(409);
     expect(refused.body.error.code).toBe('batch_already_logged');
-    await h.http().post(`/api/pours/${w.pour.id}/batches/${theirs.batch.id}/void`).set(bearer(w.maker)).send({ reason: 'logged on the wrong pour' }).expect(200);
+    await h
+      .http()
+      .post(`/api/pours/${w.pour.id}/batches/${theirs.batch.id}/void`)
+      .set(bearer(w.maker))
+      .send({ reason: 'logged on the wrong pour' })
+      .expect(200);
     const retried = await h.http().post(`/api/pours/${w.pour.id}/batches`).set(bearer(w.apprentice)).set('Idempotency-Key', key).send(entry).expect(201);
     expect(retried.body.batch.mixedBy.id).toBe(w.apprentice.user.id);
-    expect(await count('SELECT count(*) AS n FROM idempotency_keys WHERE user_id = $1 AND key = $2 AND status_code = 201', [w.apprentice.user.id, key])).toBe(1);
+    expect(await count('SELECT count(*) AS n FROM idempotency_keys WHERE user_id = $1 AND key = $2 AND status_code = 201', [w.apprentice.user.id, key])).toBe(
+      1,
+    );
   });
 
   it('refuses a malformed key with a sentence and leaves requests without a key as they were', async () => {
@@ -177,9 +227,23 @@ describe('Idempotency-Key on creates', () => {
   });
 
   it('documents the header on every create route', async () => {
-    const doc = (await h.http().get('/api/openapi.json').expect(200)).body as { paths: Record<string, Record<string, { parameters?: { name: string; in: string }[] }>> };
-    for (const path of ['/api/pieces', '/api/molds', '/api/pour-plans', '/api/pours', '/api/pours/{id}/batches', '/api/pours/{id}/readings', '/api/pours/{id}/checks', '/api/shelf/lots']) {
-      expect(doc.paths[path]?.post?.parameters?.some((p) => p.name === 'Idempotency-Key' && p.in === 'header'), path).toBe(true);
+    const doc = (await h.http().get('/api/openapi.json').expect(200)).body as {
+      paths: Record<string, Record<string, { parameters?: { name: string; in: string }[] }>>;
+    };
+    for (const path of [
+      '/api/pieces',
+      '/api/molds',
+      '/api/pour-plans',
+      '/api/pours',
+      '/api/pours/{id}/batches',
+      '/api/pours/{id}/readings',
+      '/api/pours/{id}/checks',
+      '/api/shelf/lots',
+    ]) {
+      expect(
+        doc.paths[path]?.post?.parameters?.some((p) => p.name === 'Idempotency-Key' && p.in === 'header'),
+        path,
+      ).toBe(true);
     }
   });
 });
@@ -191,7 +255,9 @@ describe('request fingerprints', () => {
     expect(requestFingerprint('POST /x', base)).toBe(requestFingerprint('POST /x', { ...base, body: { b: 'x', a: 1 } }));
     expect(requestFingerprint('POST /x', base)).not.toBe(requestFingerprint('POST /x', { ...base, body: { a: 2, b: 'x' } }));
     expect(requestFingerprint('POST /x', base)).not.toBe(requestFingerprint('POST /y', base));
-    expect(requestFingerprint('POST /x', { ...base, file: { buffer: Buffer.from('a') } })).not.toBe(requestFingerprint('POST /x', { ...base, file: { buffer: Buffer.from('b') } }));
+    expect(requestFingerprint('POST /x', { ...base, file: { buffer: Buffer.from('a') } })).not.toBe(
+      requestFingerprint('POST /x', { ...base, file: { buffer: Buffer.from('b') } }),
+    );
     // A file hashed as it streamed counts the same as the same bytes held whole (SHA-256 of "a", FIPS 180-4 via node:crypto).
     const shaOfA = 'ca978112ca1bbdcafac231b39a23dc4da786eff8147c4e72b9807785afee48bb';
     expect(requestFingerprint('POST /x', { ...base, fileSha256: shaOfA })).toBe(requestFingerprint('POST /x', { ...base, file: { buffer: Buffer.from('a') } }));

@@ -38,7 +38,10 @@ export function requestFingerprint(
   parts: { params: unknown; query: unknown; body: unknown; file?: { buffer: Buffer } | undefined; fileSha256?: string | undefined },
 ): string {
   const hash = createHash('sha256');
-  hash.update(route).update('\0').update(canonicalJson({ params: parts.params, query: parts.query, body: parts.body ?? null }));
+  hash
+    .update(route)
+    .update('\0')
+    .update(canonicalJson({ params: parts.params, query: parts.query, body: parts.body ?? null }));
   const fileDigest = parts.fileSha256 ?? (parts.file ? createHash('sha256').update(parts.file.buffer).digest('hex') : undefined);
   if (fileDigest) hash.update('\0file\0').update(fileDigest);
   return hash.digest('hex');
@@ -92,7 +95,11 @@ export class IdempotencyStore {
 
   constructor(private readonly ds: DataSource) {}
 
-  async run(scope: IdempotencyScope, create: () => Promise<{ status: number; body: unknown }>, onStoreFailure: (error: unknown) => void = () => undefined): Promise<IdempotentAnswer> {
+  async run(
+    scope: IdempotencyScope,
+    create: () => Promise<{ status: number; body: unknown }>,
+    onStoreFailure: (error: unknown) => void = () => undefined,
+  ): Promise<IdempotentAnswer> {
     this.sweepNowAndThen();
     const deadline = Date.now() + WAIT_FOR_FIRST_MS;
     for (;;) {
@@ -115,7 +122,11 @@ export class IdempotencyStore {
         );
       }
       if (Date.now() > deadline) {
-        throw new AppError('conflict', 'idempotency_in_progress', 'the first request with this Idempotency-Key is still being processed; send it again in a moment');
+        throw new AppError(
+          'conflict',
+          'idempotency_in_progress',
+          'the first request with this Idempotency-Key is still being processed; send it again in a moment',
+        );
       }
       await new Promise((resolve) => setTimeout(resolve, POLL_MS));
     }
@@ -164,7 +175,11 @@ export class IdempotencyStore {
   }
 
   private async release(scope: IdempotencyScope): Promise<void> {
-    await this.ds.query('DELETE FROM idempotency_keys WHERE shop_id = $1 AND user_id = $2 AND key = $3 AND status_code IS NULL', [scope.shopId, scope.userId, scope.key]);
+    await this.ds.query('DELETE FROM idempotency_keys WHERE shop_id = $1 AND user_id = $2 AND key = $3 AND status_code IS NULL', [
+      scope.shopId,
+      scope.userId,
+      scope.key,
+    ]);
   }
 
   private sweepNowAndThen(): void {

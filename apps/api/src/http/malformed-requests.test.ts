@@ -19,7 +19,14 @@ describe('requests the HTTP layer refuses', () => {
   });
 
   it('answers a body that does not match its Content-Encoding with a 400, and reads one that does', async () => {
-    const bad = await h.http().post('/api/pieces').set(bearer(shop.lead)).set('Content-Type', 'application/json').set('Content-Encoding', 'gzip').send('not gzip at all').expect(400);
+    const bad = await h
+      .http()
+      .post('/api/pieces')
+      .set(bearer(shop.lead))
+      .set('Content-Type', 'application/json')
+      .set('Content-Encoding', 'gzip')
+      .send('not gzip at all')
+      .expect(400);
     expect(bad.body.error.code).toBe('bad_encoding');
     const good = await h
       .http()

@@ -16,7 +16,10 @@ export function openApiDocument(routes: RegisteredRoute[], serverUrl: string) {
   for (const r of routes) {
     const path = r.fullPath.replace(/:([A-Za-z]+)/g, '{$1}');
     const parameters: unknown[] = [];
-    for (const [where, s] of [['path', r.params], ['query', r.query]] as const) {
+    for (const [where, s] of [
+      ['path', r.params],
+      ['query', r.query],
+    ] as const) {
       if (!s || !(s instanceof z.ZodObject)) continue;
       for (const [name, field] of Object.entries(s.shape as Record<string, z.ZodType>)) {
         parameters.push({ name, in: where, required: where === 'path' || !field.safeParse(undefined).success, schema: schema(field, 'input') });
@@ -27,13 +30,17 @@ export function openApiDocument(routes: RegisteredRoute[], serverUrl: string) {
         name: 'Idempotency-Key',
         in: 'header',
         required: false,
-        description: 'A key of your own (a UUID) for this one entry: sent again within 24 hours, it answers the first answer again (header Idempotent-Replayed: true) instead of creating a second record; the same key with a different request is a 422.',
+        description:
+          'A key of your own (a UUID) for this one entry: sent again within 24 hours, it answers the first answer again (header Idempotent-Replayed: true) instead of creating a second record; the same key with a different request is a 422.',
         schema: { type: 'string', minLength: 1, maxLength: 255 },
       });
     }
     const success = String(r.status ?? (r.response && !(r.response instanceof z.ZodUndefined) ? 200 : 204));
     const responses: Record<string, unknown> = {
-      [success]: r.response && success !== '204' ? { description: 'OK', content: { [r.contentType ?? 'application/json']: { schema: schema(r.response, 'output') } } } : { description: 'Done, no content' },
+      [success]:
+        r.response && success !== '204'
+          ? { description: 'OK', content: { [r.contentType ?? 'application/json']: { schema: schema(r.response, 'output') } } }
+          : { description: 'Done, no content' },
       ...(r.conditional ? { '304': { description: 'Not modified: the If-None-Match header named the current ETag' } } : {}),
       '4XX': { description: 'What was wrong, and how to fix it', content: { 'application/json': { schema: schema(ErrorBody, 'output') } } },
     };
@@ -52,7 +59,9 @@ export function openApiDocument(routes: RegisteredRoute[], serverUrl: string) {
     openapi: '3.0.3',
     info: { title: 'Gelpoint API', version: '0.1.0', description: 'Cavity reports, pour plans, cure logs and the shop behind them.' },
     servers: [{ url: serverUrl }],
-    components: { securitySchemes: { bearer: { type: 'http', scheme: 'bearer', bearerFormat: 'JWT' }, cookie: { type: 'apiKey', in: 'cookie', name: 'gp_session' } } },
+    components: {
+      securitySchemes: { bearer: { type: 'http', scheme: 'bearer', bearerFormat: 'JWT' }, cookie: { type: 'apiKey', in: 'cookie', name: 'gp_session' } },
+    },
     security: [{ bearer: [] }, { cookie: [] }],
     paths,
   };

@@ -28,7 +28,9 @@ export class PostgresRateLimitStore implements Store {
   }
 
   async get(key: string): Promise<ClientRateLimitInfo | undefined> {
-    const rows = (await this.ds.query('SELECT hits, reset_at FROM rate_limit_counters WHERE key = $1 AND reset_at > now()', [this.prefix + key])) as CounterRow[];
+    const rows = (await this.ds.query('SELECT hits, reset_at FROM rate_limit_counters WHERE key = $1 AND reset_at > now()', [
+      this.prefix + key,
+    ])) as CounterRow[];
     return rows[0] ? { totalHits: rows[0].hits, resetTime: rows[0].reset_at } : undefined;
   }
 

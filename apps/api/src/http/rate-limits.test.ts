@@ -20,8 +20,10 @@ const quota = useHarness({ GELPOINT_UPLOAD_QUOTA_MB: String((stl.length * 2.5) /
 const anAddress = () => `203.0.113.${randomInt(1, 255)}, 198.51.100.${randomInt(1, 255)}`;
 const instance = (i: number): Harness => (i % 2 === 0 ? first : second);
 
-const upload = (h: Harness, session: { token: string }) => h.http().post('/api/molds').set(bearer(session)).attach('file', stl, 'tray.stl').field('units', 'mm').field('up', 'z');
-const moldsOf = async (h: Harness, shopId: string) => ((await h.ds.query('SELECT count(*)::int AS n FROM molds WHERE shop_id = $1', [shopId])) as { n: number }[])[0]!.n;
+const upload = (h: Harness, session: { token: string }) =>
+  h.http().post('/api/molds').set(bearer(session)).attach('file', stl, 'tray.stl').field('units', 'mm').field('up', 'z');
+const moldsOf = async (h: Harness, shopId: string) =>
+  ((await h.ds.query('SELECT count(*)::int AS n FROM molds WHERE shop_id = $1', [shopId])) as { n: number }[])[0]!.n;
 
 describe('sign-in guard shared by every instance', () => {
   it('refuses the fourth wrong password for one account, whichever instance gets it, and says when to come back', async () => {
@@ -31,7 +33,12 @@ describe('sign-in guard shared by every instance', () => {
     for (let i = 0; i < 3; i++) {
       await instance(i).http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: 'not the password' }).expect(401);
     }
-    const blocked = await instance(3).http().post('/api/auth/login').set('X-Forwarded-For', anAddress()).send({ email: email.toUpperCase(), password: PASSWORD }).expect(429);
+    const blocked = await instance(3)
+      .http()
+      .post('/api/auth/login')
+      .set('X-Forwarded-For', anAddress())
+      .send({ email: email.toUpperCase(), password: PASSWORD })
+      .expect(429);
     expect(blocked.body.error.code).toBe('too_many_attempts');
     expect(blocked.body.error.message).toMatch(/wait \d+ minute/);
     const retryAfterS = Number(blocked.headers['retry-after']);
@@ -43,18 +50,38 @@ describe('sign-in guard shared by every instance', () => {
   it('does not count members who sign in correctly', async () => {
     const shop = await createShop(setup);
     for (let i = 0; i < 5; i++) {
-      await instance(i).http().post('/api/auth/login').set('X-Forwarded-For', anAddress()).send({ email: shop.lead.user.email, password: PASSWORD }).expect(200);
+      await instance(i)
+        .http()
+        .post('/api/auth/login')
+        .set('X-Forwarded-For', anAddress())
+        .send({ email: shop.lead.user.email, password: PASSWORD })
+        .expect(200);
     }
   });
 
   it('limits one address guessing at many accounts', async () => {
     const address = anAddress();
     for (let i = 0; i < 9; i++) {
-      await instance(i).http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email: `nobody-${i}-${randomInt(1e9)}@example.test`, password: 'guess' }).expect(401);
+      await instance(i)
+        .http()
+        .post('/api/auth/login')
+        .set('X-Forwarded-For', address)
+        .send({ email: `nobody-${i}-${randomInt(1e9)}@example.test`, password: 'guess' })
+        .expect(401);
     }
-    const blocked = await second.http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email: `fresh-${randomInt(1e9)}@example.test`, password: 'guess' }).expect(429);
+    const blocked = await second
+      .http()
+      .post('/api/auth/login')
+      .set('X-Forwarded-For', address)
+      .send({ email: `fresh-${randomInt(1e9)}@example.test`, password: 'guess' })
+      .expect(429);
     expect(blocked.body.error.code).toBe('too_many_attempts');
-    await first.http().post('/api/auth/login').set('X-Forwarded-For', anAddress()).send({ email: `fresh-${randomInt(1e9)}@example.test`, password: 'guess' }).expect(401);
+    await first
+      .http()
+      .post('/api/auth/login')
+      .set('X-Forwarded-For', anAddress())
+      .send({ email: `fresh-${randomInt(1e9)}@example.test`, password: 'guess' })
+      .expect(401);
   });
 
   it('counts every reset request, so one person cannot be flooded with mail', async () => {
@@ -83,7 +110,13 @@ describe('uploads per member', () => {
     const maker = await shop.member('maker');
     const pourId = '00000000-0000-4000-8000-000000000000';
     for (let i = 0; i < 3; i++) {
-      await instance(i).http().post(`/api/pours/${pourId}/readings/csv`).set(bearer(maker)).set('Content-Type', 'text/csv').send('2026-11-01T10:00:00Z,21\n').expect(404);
+      await instance(i)
+        .http()
+        .post(`/api/pours/${pourId}/readings/csv`)
+        .set(bearer(maker))
+        .set('Content-Type', 'text/csv')
+        .send('2026-11-01T10:00:00Z,21\n')
+        .expect(404);
     }
     await upload(first, maker).expect(429);
   });

@@ -81,7 +81,8 @@ export class RouteRegistry {
 
   private add<R extends RouteDef>(name: string, spec: R, handler: Handler<R>, middleware: RequestHandler[]): void {
     const fullPath = `/api${spec.path}`;
-    if (spec.idempotent && (spec.method !== 'post' || spec.access === 'public')) throw new Error(`${fullPath}: only a members' POST can be idempotent (the key belongs to a member)`);
+    if (spec.idempotent && (spec.method !== 'post' || spec.access === 'public'))
+      throw new Error(`${fullPath}: only a members' POST can be idempotent (the key belongs to a member)`);
     if (this.routes.some((r) => r.name === name)) throw new Error(`route ${name} is served twice`);
     const access = resolveAccess(spec.access);
     const action = spec.access === 'public' || spec.access === 'member' ? undefined : spec.access;
@@ -104,7 +105,13 @@ export class RouteRegistry {
       const key = spec.idempotent && auth ? idempotencyKeyOf(req) : undefined;
       if (key && auth) {
         const route = `POST ${fullPath}`;
-        const fingerprint = requestFingerprint(route, { params: params.seen, query: query.seen, body: body.value, file: req.file, fileSha256: res.locals[UPLOAD_SHA256_LOCAL] as string | undefined });
+        const fingerprint = requestFingerprint(route, {
+          params: params.seen,
+          query: query.seen,
+          body: body.value,
+          file: req.file,
+          fileSha256: res.locals[UPLOAD_SHA256_LOCAL] as string | undefined,
+        });
         const answer = await this.idempotency.run(
           { shopId: auth.shopId, userId: auth.userId, key, route, fingerprint },
           async () => ({ status: spec.status ?? 200, body: await handler(input) }),

@@ -53,7 +53,11 @@ describe('serving the installable app', () => {
 
   it('allows the worker and the manifest from our own origin only', async () => {
     const csp = (await http().get('/today').expect(200)).headers['content-security-policy'] as string;
-    const directive = (name: string) => csp.split(';').map((d) => d.trim()).find((d) => d.startsWith(`${name} `));
+    const directive = (name: string) =>
+      csp
+        .split(';')
+        .map((d) => d.trim())
+        .find((d) => d.startsWith(`${name} `));
     expect(directive('worker-src')?.split(' ')).toContain("'self'");
     expect(directive('manifest-src')).toBe("manifest-src 'self'");
   });

@@ -34,7 +34,10 @@ function request(route: RegisteredRoute, params: Record<string, string>, session
   const key = routeKey(route);
   const parts = validParts(b)[key] ?? {};
   const qs = parts.query ? `?${new URLSearchParams(parts.query)}` : '';
-  let req = h.http()[route.method](fillPath(route.fullPath, params) + qs).set(bearer(session));
+  let req = h
+    .http()
+    [route.method](fillPath(route.fullPath, params) + qs)
+    .set(bearer(session));
   const raw = RAW_BODIES[key];
   if (raw) return req.set('Content-Type', raw.type).send(raw.text);
   if (parts.form) {
@@ -46,7 +49,15 @@ function request(route: RegisteredRoute, params: Record<string, string>, session
 }
 
 /** Everything of shop A's that an answer must never show. */
-const secretsOf = (shop: StockedShop) => [shop.marker, shop.shopId, shop.invitationToken, ...Object.values(shop.ids), shop.lead.user.id, shop.maker.user.id, shop.apprentice.user.id];
+const secretsOf = (shop: StockedShop) => [
+  shop.marker,
+  shop.shopId,
+  shop.invitationToken,
+  ...Object.values(shop.ids),
+  shop.lead.user.id,
+  shop.maker.user.id,
+  shop.apprentice.user.id,
+];
 const leaks = (text: string) => secretsOf(a).filter((s) => text.includes(s));
 
 /**
@@ -71,11 +82,15 @@ async function aObjects(): Promise<Record<string, unknown>> {
     if (route.method !== 'get' || !route.fullPath.includes('/:') || !route.response || route.query || route.contentType || route.access === 'public') continue;
     const parts = validParts(a)[routeKey(route)] ?? {};
     const qs = parts.query ? `?${new URLSearchParams(parts.query)}` : '';
-    const res = await h.http().get(fillPath(route.fullPath, pathParams(route.fullPath, a)) + qs).set(bearer(a.lead));
+    const res = await h
+      .http()
+      .get(fillPath(route.fullPath, pathParams(route.fullPath, a)) + qs)
+      .set(bearer(a.lead));
     seen[routeKey(route)] = { status: res.status, body: settled(route.fullPath, res.body) };
   }
   // The shop and its people have no one-object route; their lists are the view.
-  for (const path of ['/api/shop', '/api/shop/members', '/api/shop/invitations']) seen[`GET ${path}`] = (await h.http().get(path).set(bearer(a.lead)).expect(200)).body;
+  for (const path of ['/api/shop', '/api/shop/members', '/api/shop/invitations'])
+    seen[`GET ${path}`] = (await h.http().get(path).set(bearer(a.lead)).expect(200)).body;
   return seen;
 }
 
@@ -106,7 +121,9 @@ describe('tenant isolation', () => {
         const want = allows(route, role) ? 404 : 403;
         if (theirs.status !== want) failures.push(`${key} as B's ${role} with A's ids → ${theirs.status}, want ${want}`);
         if (theirs.status !== nobodys.status || theirs.body?.error?.code !== nobodys.body?.error?.code)
-          failures.push(`${key} as B's ${role}: A's ids → ${theirs.status} ${theirs.body?.error?.code}, unknown ids → ${nobodys.status} ${nobodys.body?.error?.code}`);
+          failures.push(
+            `${key} as B's ${role}: A's ids → ${theirs.status} ${theirs.body?.error?.code}, unknown ids → ${nobodys.status} ${nobodys.body?.error?.code}`,
+          );
         const leaked = leaks(theirs.text ?? '');
         if (leaked.length) failures.push(`${key} as B's ${role} shows A's ${leaked.join(', ')}`);
         checked++;
@@ -135,7 +152,11 @@ describe('tenant isolation', () => {
       for (const role of ROLES) {
         if (!allows(route, role)) continue;
         for (const query of [{}, byA]) {
-          const res = await h.http().get(route.fullPath).query(query).set(bearer(sessionOf(b, role)));
+          const res = await h
+            .http()
+            .get(route.fullPath)
+            .query(query)
+            .set(bearer(sessionOf(b, role)));
           if (res.status !== 200) failures.push(`${key} ${JSON.stringify(query)} as B's ${role} → ${res.status}`);
           const leaked = leaks(res.text);
           if (leaked.length) failures.push(`${key} ${JSON.stringify(query)} as B's ${role} lists A's ${leaked.join(', ')}`);
@@ -145,7 +166,8 @@ describe('tenant isolation', () => {
     }
     expect(failures).toEqual([]);
     // The lists are not empty by accident: B's own objects are in them.
-    for (const id of [b.ids.piece, b.ids.resin, b.ids.pigment, b.ids.lot, b.ids.mold, b.ids.plan, b.ids.pour, b.ids.membership, b.ids.invitation]) expect(seenText).toContain(id);
+    for (const id of [b.ids.piece, b.ids.resin, b.ids.pigment, b.ids.lot, b.ids.mold, b.ids.plan, b.ids.pour, b.ids.membership, b.ids.invitation])
+      expect(seenText).toContain(id);
   }, 60_000);
 
   it("refuses shop A's ids inside shop B's request bodies as not found", async () => {
@@ -161,10 +183,33 @@ describe('tenant isolation', () => {
       ["pour of A's plan", post('/api/pours', { pourPlanId: a.ids.plan }), 404],
       ["pour notifying A's lead", post('/api/pours', { pourPlanId: b.ids.plan, notifyUserIds: [a.lead.user.id] }), 400],
       ["lot of A's resin", post('/api/shelf/lots', { part: 'A', resinSystemId: a.ids.resin, lotNumber: 'X', quantityG: 1, receivedOn: '2026-11-01' }), 404],
-      ["lot of A's pigment", post('/api/shelf/lots', { part: 'pigment', pigmentId: a.ids.pigment, lotNumber: 'X', quantityG: 1, receivedOn: '2026-11-01' }), 404],
-      ["batch from A's lot", post(`/api/pours/${b.ids.pour}/batches`, { planBatchIndex: 1, lotAId: a.ids.lot, weighedAG: 10, weighedBG: 5, weighedPigmentG: 0.2, confirmUnusual: true }), 404],
+      [
+        "lot of A's pigment",
+        post('/api/shelf/lots', { part: 'pigment', pigmentId: a.ids.pigment, lotNumber: 'X', quantityG: 1, receivedOn: '2026-11-01' }),
+        404,
+      ],
+      [
+        "batch from A's lot",
+        post(`/api/pours/${b.ids.pour}/batches`, {
+          planBatchIndex: 1,
+          lotAId: a.ids.lot,
+          weighedAG: 10,
+          weighedBG: 5,
+          weighedPigmentG: 0.2,
+          confirmUnusual: true,
+        }),
+        404,
+      ],
       ["mould for A's piece", h.http().post('/api/molds').set(lead).field('pieceId', a.ids.piece).attach('file', stockedMould(), 'm.stl'), 404],
-      ["readings into A's pour with B's thermometer", post('/api/ingest/readings', { pourId: a.ids.pour, readings: [{ at: '2026-11-01T10:00:00Z', tempC: 20 }] }, { 'X-Gelpoint-Ingest-Token': b.ingestToken }), 404],
+      [
+        "readings into A's pour with B's thermometer",
+        post(
+          '/api/ingest/readings',
+          { pourId: a.ids.pour, readings: [{ at: '2026-11-01T10:00:00Z', tempC: 20 }] },
+          { 'X-Gelpoint-Ingest-Token': b.ingestToken },
+        ),
+        404,
+      ],
       ['switch into A', post('/api/auth/switch-shop', { shopId: a.shopId }, bearer(b.spareLead)), 403],
       ["sign in to A with B's password", post('/api/auth/login', { email: b.lead.user.email, password: 'correct horse battery', shopId: a.shopId }), 403],
     ];
@@ -183,7 +228,7 @@ describe('tenant isolation', () => {
     expect(unknownPiece.body.error).toEqual((await post('/api/pour-plans', planBody(a.ids.piece, b.ids.resin))).body.error);
   });
 
-  it("leaves every row and object of shop A as it was", async () => {
+  it('leaves every row and object of shop A as it was', async () => {
     expect(await tenantRowCounts(h.ds, { shopIds: [a.shopId], marker: a.marker })).toEqual(aCountsBefore);
     expect(await aObjects()).toEqual(aObjectsBefore);
     expect(Object.keys(aObjectsBefore).length).toBeGreaterThanOrEqual(10);

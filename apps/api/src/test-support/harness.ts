@@ -69,7 +69,11 @@ export async function linkTokenFor(ds: DataSource, to: string, path: 'invitation
 
 /** A new shop with its lead; `member(role)` invites and signs in one more person through the real routes. */
 export async function createShop(h: Harness, name = 'Test shop'): Promise<ShopFixture> {
-  const res = await h.http().post('/api/auth/register').send({ shopName: name, name: 'Lead Person', email: uniqueEmail('lead'), password: PASSWORD }).expect(201);
+  const res = await h
+    .http()
+    .post('/api/auth/register')
+    .send({ shopName: name, name: 'Lead Person', email: uniqueEmail('lead'), password: PASSWORD })
+    .expect(201);
   const lead = res.body as SessionResponse;
   // Tests run at any hour of the day: a shop made here has no quiet hours, so each reminder keeps its own time.
   // The quiet-hours tests set them.
@@ -81,7 +85,11 @@ export async function createShop(h: Harness, name = 'Test shop'): Promise<ShopFi
       const email = uniqueEmail(role);
       await h.http().post('/api/shop/invitations').set(bearer(lead)).send({ email, role }).expect(201);
       const token = await linkTokenFor(h.ds, email, 'invitations');
-      const accepted = await h.http().post(`/api/invitations/${token}/accept`).send({ name: `${role} person`, password: PASSWORD }).expect(200);
+      const accepted = await h
+        .http()
+        .post(`/api/invitations/${token}/accept`)
+        .send({ name: `${role} person`, password: PASSWORD })
+        .expect(200);
       return accepted.body as SessionResponse;
     },
   };

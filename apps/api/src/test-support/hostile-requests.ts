@@ -43,7 +43,14 @@ export async function send(h: Harness, a: Attempt): Promise<Answer> {
     return { attempt: a, status: res.status, contentType: String(res.headers['content-type'] ?? ''), body: res.body, ms: performance.now() - started };
   } catch (err) {
     const e = err as { timeout?: number; code?: string; message?: string };
-    return { attempt: a, status: 0, contentType: '', body: null, ms: performance.now() - started, failure: e.timeout ? `no answer within ${PER_REQUEST_MS} ms` : `${e.code ?? ''} ${e.message ?? String(err)}` };
+    return {
+      attempt: a,
+      status: 0,
+      contentType: '',
+      body: null,
+      ms: performance.now() - started,
+      failure: e.timeout ? `no answer within ${PER_REQUEST_MS} ms` : `${e.code ?? ''} ${e.message ?? String(err)}`,
+    };
   }
 }
 
@@ -73,10 +80,12 @@ export function judge(ans: Answer): string | undefined {
   if (ans.status < 400) return undefined;
   if (!ans.contentType.startsWith('application/json')) return `${where} → ${ans.status} as ${ans.contentType}, want JSON`;
   const err = (ans.body as { error?: { code?: unknown; message?: unknown; fields?: Record<string, string> } } | null)?.error;
-  if (typeof err?.code !== 'string' || !/^[a-z][a-z0-9_]*$/.test(err.code)) return `${where} → ${ans.status} without an error code: ${JSON.stringify(ans.body).slice(0, 200)}`;
+  if (typeof err?.code !== 'string' || !/^[a-z][a-z0-9_]*$/.test(err.code))
+    return `${where} → ${ans.status} without an error code: ${JSON.stringify(ans.body).slice(0, 200)}`;
   if (a.code !== undefined && err.code !== a.code) return `${where} → code ${err.code}, want ${a.code}`;
   // A sentence a person can act on: several words, not a bare code or an empty string.
-  if (typeof err.message !== 'string' || err.message.trim().split(/\s+/).length < 4) return `${where} → message ${JSON.stringify(err.message)} is not a sentence`;
+  if (typeof err.message !== 'string' || err.message.trim().split(/\s+/).length < 4)
+    return `${where} → message ${JSON.stringify(err.message)} is not a sentence`;
   if (a.expect === 'reject' && a.field && err.code === 'invalid_input' && err.fields) {
     const keys = Object.keys(err.fields);
     const f = a.field;

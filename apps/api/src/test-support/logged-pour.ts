@@ -35,12 +35,31 @@ export async function loggedPour(h: Harness, label: string): Promise<LoggedPour>
   const lead = bearer(shop.lead);
   const maker = await shop.member('maker');
   const apprentice = await shop.member('apprentice');
-  const post = async (path: string, body: object, who = lead) => (await h.http().post(path).set(who).send(body).expect(201)).body as { id: string } & Record<string, unknown>;
+  const post = async (path: string, body: object, who = lead) =>
+    (await h.http().post(path).set(who).send(body).expect(201)).body as { id: string } & Record<string, unknown>;
   const resin = await post('/api/shelf/resin-systems', resinInput({ name: `Deep ${label}`, mixRatio: { a: 2, b: 1, basis: 'weight' }, maxLayerMm: 25 }));
-  const pigment = await post('/api/shelf/pigments', { name: `Teal ${label}`, kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 5, pricePerPack: 12, packSizeG: 50 });
+  const pigment = await post('/api/shelf/pigments', {
+    name: `Teal ${label}`,
+    kind: 'paste',
+    densityGPerMl: 1.3,
+    recommendedPct: 2,
+    maxPct: 5,
+    pricePerPack: 12,
+    packSizeG: 50,
+  });
   const lot = (part: 'A' | 'B' | 'pigment', lotNumber: string) =>
-    post('/api/shelf/lots', part === 'pigment' ? { part, pigmentId: pigment.id, lotNumber, quantityG: 500, receivedOn: '2026-10-01' } : { part, resinSystemId: resin.id, lotNumber, quantityG: 20_000, receivedOn: '2026-10-01' });
-  const lots = { a: (await lot('A', `${label}-A-1`)).id, b: (await lot('B', `${label}-B-1`)).id, pigment: (await lot('pigment', `${label}-P-1`)).id, spareA: (await lot('A', `${label}-A-2`)).id };
+    post(
+      '/api/shelf/lots',
+      part === 'pigment'
+        ? { part, pigmentId: pigment.id, lotNumber, quantityG: 500, receivedOn: '2026-10-01' }
+        : { part, resinSystemId: resin.id, lotNumber, quantityG: 20_000, receivedOn: '2026-10-01' },
+    );
+  const lots = {
+    a: (await lot('A', `${label}-A-1`)).id,
+    b: (await lot('B', `${label}-B-1`)).id,
+    pigment: (await lot('pigment', `${label}-P-1`)).id,
+    spareA: (await lot('A', `${label}-A-2`)).id,
+  };
   const piece = await post('/api/pieces', { name: `Tray ${label}` }, bearer(maker));
   const plan = await post(
     '/api/pour-plans',
@@ -76,13 +95,32 @@ export async function loggedPour(h: Harness, label: string): Promise<LoggedPour>
       .http()
       .post(`/api/pours/${pour.id}/batches`)
       .set(bearer(mixedBy))
-      .send({ ...row, lotAId: lots.a, lotBId: lots.b, lotPigmentId: lots.pigment, ambientTempC: 20.5, surfaceTempC: 19.5, rhPct: 45, notes: i === 0 ? '=SUM(A1:A9) stirred 3 min' : '' })
+      .send({
+        ...row,
+        lotAId: lots.a,
+        lotBId: lots.b,
+        lotPigmentId: lots.pigment,
+        ambientTempC: 20.5,
+        surfaceTempC: 19.5,
+        rhPct: 45,
+        notes: i === 0 ? '=SUM(A1:A9) stirred 3 min' : '',
+      })
       .expect(201);
     logged.push({ ...row, mixedBy });
   }
-  const readings = Array.from({ length: 6 }, (_, k) => ({ at: new Date(start + k * 3_600_000).toISOString(), tempC: Math.round((19.5 + 0.7 * k - (k === 3 ? 1.9 : 0)) * 10) / 10 }));
+  const readings = Array.from({ length: 6 }, (_, k) => ({
+    at: new Date(start + k * 3_600_000).toISOString(),
+    tempC: Math.round((19.5 + 0.7 * k - (k === 3 ? 1.9 : 0)) * 10) / 10,
+  }));
   await h.http().post(`/api/pours/${pour.id}/readings`).set(bearer(apprentice)).send({ readings }).expect(200);
-  await h.http().post(`/api/pours/${pour.id}/checks`).set(bearer(apprentice)).field('stage', 'tack_free').field('hardnessShoreD', '62').field('note', 'firm at the rim').expect(201);
+  await h
+    .http()
+    .post(`/api/pours/${pour.id}/checks`)
+    .set(bearer(apprentice))
+    .field('stage', 'tack_free')
+    .field('hardnessShoreD', '62')
+    .field('note', 'firm at the rim')
+    .expect(201);
   return {
     shop,
     apprentice,

@@ -15,7 +15,15 @@ function quad(a: V, b: V, c: V, d: V, outward: V): V[][] {
   const w = [c[0] - a[0], c[1] - a[1], c[2] - a[2]];
   const n = [u[1]! * w[2]! - u[2]! * w[1]!, u[2]! * w[0]! - u[0]! * w[2]!, u[0]! * w[1]! - u[1]! * w[0]!];
   const facing = n[0]! * outward[0] + n[1]! * outward[1] + n[2]! * outward[2];
-  return facing >= 0 ? [[a, b, c], [a, c, d]] : [[a, c, b], [a, d, c]];
+  return facing >= 0
+    ? [
+        [a, b, c],
+        [a, c, d],
+      ]
+    : [
+        [a, c, b],
+        [a, d, c],
+      ];
 }
 
 export function pocketMouldTriangles(m: PocketMould): V[][] {

@@ -71,7 +71,8 @@ export async function stockShop(h: Harness, marker: string): Promise<StockedShop
   const maker = await shop.member('maker');
   const apprentice = await shop.member('apprentice');
   const http = () => h.http();
-  const post = async (path: string, body: object, who: SessionResponse = lead) => (await http().post(path).set(bearer(who)).send(body).expect(201)).body.id as string;
+  const post = async (path: string, body: object, who: SessionResponse = lead) =>
+    (await http().post(path).set(bearer(who)).send(body).expect(201)).body.id as string;
 
   const members = (await http().get('/api/shop/members').set(bearer(lead)).expect(200)).body as { id: string; userId: string }[];
   const invitationEmail = `${marker}-invited@example.test`;
@@ -83,15 +84,35 @@ export async function stockShop(h: Harness, marker: string): Promise<StockedShop
   const piece = await post('/api/pieces', { name: `Piece ${marker}` });
   const plan = await post('/api/pour-plans', planBody(piece, resin, { pigmentId: pigment, sealResinId: sealResin }));
   const pour = await post('/api/pours', { pourPlanId: plan });
-  const mold = (await http().post('/api/molds').set(bearer(lead)).field('name', `Mould ${marker}`).attach('file', stockedMould(), 'hostile.stl').expect(202)).body.id as string;
+  const mold = (await http().post('/api/molds').set(bearer(lead)).field('name', `Mould ${marker}`).attach('file', stockedMould(), 'hostile.stl').expect(202))
+    .body.id as string;
   const recent = (hoursAgo: number) => new Date(Date.now() - hoursAgo * 3_600_000).toISOString();
-  const batch = (await http().post(`/api/pours/${pour}/batches`).set(bearer(lead)).send({ planBatchIndex: 0, mixedAt: recent(2), weighedAG: 10, weighedBG: 5, weighedPigmentG: 0.2, confirmUnusual: true }).expect(201)).body.batch.id as string;
-  await http().post(`/api/pours/${pour}/readings`).set(bearer(lead)).send({ readings: [{ at: recent(1), tempC: 21 }] }).expect(200);
+  const batch = (
+    await http()
+      .post(`/api/pours/${pour}/batches`)
+      .set(bearer(lead))
+      .send({ planBatchIndex: 0, mixedAt: recent(2), weighedAG: 10, weighedBG: 5, weighedPigmentG: 0.2, confirmUnusual: true })
+      .expect(201)
+  ).body.batch.id as string;
+  await http()
+    .post(`/api/pours/${pour}/readings`)
+    .set(bearer(lead))
+    .send({ readings: [{ at: recent(1), tempC: 21 }] })
+    .expect(200);
   const reading = (await http().get(`/api/pours/${pour}/readings`).set(bearer(lead)).expect(200)).body.items[0].id as string;
   const reminder = (await http().get(`/api/pours/${pour}`).set(bearer(lead)).expect(200)).body.reminders[0].id as string;
-  const check = (await http().post(`/api/pours/${pour}/checks`).set(bearer(lead)).field('stage', 'gelled').field('note', `Check ${marker}`).attach('photo', PNG_BYTES, 'check.png').expect(201)).body.id as string;
+  const check = (
+    await http()
+      .post(`/api/pours/${pour}/checks`)
+      .set(bearer(lead))
+      .field('stage', 'gelled')
+      .field('note', `Check ${marker}`)
+      .attach('photo', PNG_BYTES, 'check.png')
+      .expect(201)
+  ).body.id as string;
   await http().post('/api/auth/password-reset').send({ email: maker.user.email }).expect(202);
-  const spareLead = (await http().post('/api/auth/login').send({ email: lead.user.email, password: PASSWORD, shopId: shop.shopId }).expect(200)).body as SessionResponse;
+  const spareLead = (await http().post('/api/auth/login').send({ email: lead.user.email, password: PASSWORD, shopId: shop.shopId }).expect(200))
+    .body as SessionResponse;
   const ingestToken = (await http().post('/api/shop/ingest-token').set(bearer(lead)).expect(201)).body.token as string;
   const calendarFeed = ((await http().get('/api/me').set(bearer(lead)).expect(200)).body.calendarUrl as string).split('/').pop()!;
 
@@ -102,7 +123,22 @@ export async function stockShop(h: Harness, marker: string): Promise<StockedShop
     spareLead,
     maker,
     apprentice,
-    ids: { membership: members.find((m) => m.userId === apprentice.user.id)!.id, invitation, piece, resin, sealResin, pigment, lot, plan, pour, mold, check, batch, reading, reminder },
+    ids: {
+      membership: members.find((m) => m.userId === apprentice.user.id)!.id,
+      invitation,
+      piece,
+      resin,
+      sealResin,
+      pigment,
+      lot,
+      plan,
+      pour,
+      mold,
+      check,
+      batch,
+      reading,
+      reminder,
+    },
     invitationToken: await linkTokenFor(h.ds, invitationEmail, 'invitations'),
     resetToken: await linkTokenFor(h.ds, maker.user.email, 'reset-password'),
     ingestToken,
@@ -167,7 +203,21 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
     'POST /api/auth/switch-shop': { body: { shopId: shop.shopId }, headers: bearer(shop.spareLead) },
     'POST /api/auth/password-reset': { body: { email: shop.maker.user.email } },
     'POST /api/auth/password-reset/confirm': { body: { token: shop.resetToken, password: 'a new long password' } },
-    'PATCH /api/shop': { body: { name: `Shop ${m}`, unitSystem: 'metric', scaleResolutionG: 1, offRatioTolerancePct: 5, readingCarryH: 2, windowCloseLeadMin: 30, currency: 'CAD', timeZone: 'America/Vancouver', temperatureProfile: { mode: 'day_night', dayTempC: 21, nightTempC: 15, dayStartHour: 8, nightStartHour: 20 }, dayStartHour: 7, quietFromHour: 21 } },
+    'PATCH /api/shop': {
+      body: {
+        name: `Shop ${m}`,
+        unitSystem: 'metric',
+        scaleResolutionG: 1,
+        offRatioTolerancePct: 5,
+        readingCarryH: 2,
+        windowCloseLeadMin: 30,
+        currency: 'CAD',
+        timeZone: 'America/Vancouver',
+        temperatureProfile: { mode: 'day_night', dayTempC: 21, nightTempC: 15, dayStartHour: 8, nightStartHour: 20 },
+        dayStartHour: 7,
+        quietFromHour: 21,
+      },
+    },
     'PATCH /api/shop/members/:id': { body: { role: 'apprentice', status: 'active' } },
     'POST /api/shop/invitations': { body: { email: `${m}-again@example.test`, role: 'maker' } },
     'POST /api/invitations/:token/accept': { body: { name: `Joiner ${m}`, password: PASSWORD } },
@@ -175,9 +225,28 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
     'POST /api/pieces': { body: { name: `Piece ${m}`, wood: 'walnut', notes: 'live edge', stage: 'planning' } },
     'PATCH /api/pieces/:id': { body: { name: `Piece ${m}`, wood: 'oak', notes: 'checked', stage: 'planning' } },
     'GET /api/audit': {
-      query: { objectType: 'piece', objectId: ids.piece, actorId: shop.lead.user.id, action: 'piece', from: '2026-01-01', to: '2099-01-01T00:00:00Z', limit: '10', before: '2099-01-01T00:00:00.000001Z', beforeId: ids.piece },
+      query: {
+        objectType: 'piece',
+        objectId: ids.piece,
+        actorId: shop.lead.user.id,
+        action: 'piece',
+        from: '2026-01-01',
+        to: '2099-01-01T00:00:00Z',
+        limit: '10',
+        before: '2099-01-01T00:00:00.000001Z',
+        beforeId: ids.piece,
+      },
     },
-    'GET /api/audit/export': { query: { objectType: 'piece', objectId: ids.piece, actorId: shop.lead.user.id, action: 'piece.create', from: '2026-01-01T00:00:00-05:00', to: '2099-01-01' } },
+    'GET /api/audit/export': {
+      query: {
+        objectType: 'piece',
+        objectId: ids.piece,
+        actorId: shop.lead.user.id,
+        action: 'piece.create',
+        from: '2026-01-01T00:00:00-05:00',
+        to: '2099-01-01',
+      },
+    },
     'GET /api/shelf/resin-systems': { query: { q: 'deep', includeArchived: 'false', limit: '10', offset: '0' } },
     'POST /api/shelf/resin-systems': { body: resinInput({ maker: 'Hostile works', readyToMachineH: 72, activationEnergyKJPerMol: 50 }) },
     'PUT /api/shelf/resin-systems/:id': { body: resinInput({ name: `Deep ${m}`, maker: 'Hostile works', readyToMachineH: 72, activationEnergyKJPerMol: 50 }) },
@@ -185,7 +254,18 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
     'POST /api/shelf/pigments': { body: pigmentBody() },
     'PUT /api/shelf/pigments/:id': { body: { ...pigmentBody(), name: `Teal ${m}` } },
     'GET /api/shelf/lots': { query: { q: 'lot', part: 'A', productId: ids.resin, status: 'all', limit: '10', offset: '0' } },
-    'POST /api/shelf/lots': { body: { part: 'A', resinSystemId: ids.resin, pigmentId: null, lotNumber: 'LOT-2', quantityG: 2000, receivedOn: '2026-11-02', expiresOn: '2027-11-02', notes: 'new' } },
+    'POST /api/shelf/lots': {
+      body: {
+        part: 'A',
+        resinSystemId: ids.resin,
+        pigmentId: null,
+        lotNumber: 'LOT-2',
+        quantityG: 2000,
+        receivedOn: '2026-11-02',
+        expiresOn: '2027-11-02',
+        notes: 'new',
+      },
+    },
     'GET /api/shelf/lots/:id/uses': { query: { limit: '10', offset: '0' } },
     'PATCH /api/shelf/lots/:id': { body: { lotNumber: `LOT-${m}`, remainingG: 2500, expiresOn: '2027-12-01', notes: 'counted' } },
     'POST /api/molds': { form: { units: 'mm', up: 'z', name: `Mould ${m}`, pieceId: ids.piece } },
@@ -197,7 +277,21 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
     'GET /api/pour-plans': { query: { pieceId: ids.piece, limit: '10', offset: '0' } },
     'POST /api/pour-plans': { body: planBody(ids.piece, ids.resin, { pigmentId: ids.pigment, sealResinId: ids.sealResin }) },
     'PUT /api/pour-plans/:id': { body: planBody(ids.piece, ids.resin, { pigmentId: ids.pigment, sealResinId: ids.sealResin }) },
-    'POST /api/exotherm': { body: { depthMm: 20, ambientC: 21, reactionHeatJG: 300, activationKJMol: 53, refTempC: 22, gelMin: 480, densityGMl: 1.1, heatCapacityJGK: 1.5, conductivityWMK: 0.2, base: 'wood', limitC: 55 } },
+    'POST /api/exotherm': {
+      body: {
+        depthMm: 20,
+        ambientC: 21,
+        reactionHeatJG: 300,
+        activationKJMol: 53,
+        refTempC: 22,
+        gelMin: 480,
+        densityGMl: 1.1,
+        heatCapacityJGK: 1.5,
+        conductivityWMK: 0.2,
+        base: 'wood',
+        limitC: 55,
+      },
+    },
     'GET /api/pours': { query: { status: 'all', readyToday: 'false', pieceId: ids.piece, limit: '10', offset: '0' } },
     'POST /api/pours': { body: { pourPlanId: ids.plan, notifyUserIds: [shop.lead.user.id] } },
     'POST /api/pours/:id/batches': {
@@ -227,6 +321,9 @@ export function validParts(shop: StockedShop): Record<string, ValidParts> {
     'POST /api/pours/:id/batches/:batchId/void': { body: { reason: 'logged against the wrong cup' } },
     'POST /api/pours/:id/checks': { form: { stage: 'gelled', checkedAt: '2026-11-01T12:00:00Z', hardnessShoreD: '40', note: 'firm' } },
     'POST /api/pours/:id/machined': { body: { machinedAt: '2026-11-09T10:00:00Z', finishCoats: 1, hoursBetweenCoats: 12 } },
-    'POST /api/ingest/readings': { body: { pourId: ids.pour, readings: [{ at: new Date(Date.now() - 900_000).toISOString(), tempC: 21 }], confirmUnusual: false }, headers: { 'X-Gelpoint-Ingest-Token': shop.ingestToken } },
+    'POST /api/ingest/readings': {
+      body: { pourId: ids.pour, readings: [{ at: new Date(Date.now() - 900_000).toISOString(), tempC: 21 }], confirmUnusual: false },
+      headers: { 'X-Gelpoint-Ingest-Token': shop.ingestToken },
+    },
   };
 }

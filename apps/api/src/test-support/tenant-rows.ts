@@ -46,7 +46,12 @@ export async function tenantRowCounts(ds: DataSource, scope: TenantScope): Promi
   for (const [table, cols] of [...byTable].sort(([a], [b]) => a.localeCompare(b))) {
     if (BOOKKEEPING_TABLES.has(table)) continue;
     const where = scopeOf(table, cols);
-    const rows: { n: string }[] = await ds.query(`SELECT count(*) AS n FROM "${table}" WHERE (${where}) AND ${TYPED_PLACEHOLDERS}`, [shopIds, userIds, emails, like]);
+    const rows: { n: string }[] = await ds.query(`SELECT count(*) AS n FROM "${table}" WHERE (${where}) AND ${TYPED_PLACEHOLDERS}`, [
+      shopIds,
+      userIds,
+      emails,
+      like,
+    ]);
     counts[table] = Number(rows[0]!.n);
   }
   return counts;

@@ -41,7 +41,12 @@ describe('gelpoint cure', () => {
     const rows = [15, 20, 25, 30, 35].map((t, i) => `${new Date(Date.UTC(2025, 0, 10, 3 * i)).toISOString()},${t}`);
     const out = JSON.parse(await command(['--readings', csv('ramp.csv', rows.join('\n')), '--ref-temp-c', '22', '--activation-kj-mol', '52', '--json']));
     expect(out.equivalentHoursAtRef).toBeCloseTo(15.9, 1);
-    expect(out.spans.map((s: { source: string; tempC: number }) => [s.source, s.tempC])).toEqual([['logged', 17.5], ['logged', 22.5], ['logged', 27.5], ['logged', 32.5]]);
+    expect(out.spans.map((s: { source: string; tempC: number }) => [s.source, s.tempC])).toEqual([
+      ['logged', 17.5],
+      ['logged', 22.5],
+      ['logged', 27.5],
+      ['logged', 32.5],
+    ]);
   });
 
   it('lists a gap longer than twice --carry-h and counts it at the lower neighbouring reading', async () => {
@@ -57,7 +62,9 @@ describe('gelpoint cure', () => {
     // 12 h at 10 °C (below 12 °C) then 12 h at 20 °C; intervals of 4 h, each at the average of its two readings.
     const temps = [10, 10, 10, 10, 20, 20, 20];
     const rows = temps.map((t, i) => `${new Date(Date.UTC(2025, 0, 10, 8 + 4 * i)).toISOString()},${t}`);
-    const out = JSON.parse(await command(['--readings', csv('slow.csv', rows.join('\n')), '--ref-temp-c', '20', '--activation-kj-mol', q5000KJ, '--min-temp-c', '12', '--json']));
+    const out = JSON.parse(
+      await command(['--readings', csv('slow.csv', rows.join('\n')), '--ref-temp-c', '20', '--activation-kj-mol', q5000KJ, '--min-temp-c', '12', '--json']),
+    );
     const rate = (t: number) => Math.exp(-5000 * (1 / (t + 273.15) - 1 / 293.15));
     expect(out.belowMinimumHours).toBe(12);
     expect(out.equivalentHoursAtRef).toBeCloseTo(12 * rate(10) + 4 * rate(15) + 8, 10);
@@ -67,7 +74,9 @@ describe('gelpoint cure', () => {
   it('takes negative temperatures as flag values', async () => {
     // 24 h at −2 °C, above a −5 °C minimum: 24 × exp(−5000 × (1/271.15 − 1/293.15)) = 24 × 0.25061 = 6.01 h.
     const file = csv('frost.csv', '2025-01-10T08:00:00Z,-2\n2025-01-11T08:00:00Z,-2\n');
-    const out = JSON.parse(await command(['--readings', file, '--ref-temp-c', '20', '--activation-kj-mol', q5000KJ, '--min-temp-c', '-5', '--carry-h', '12', '--json']));
+    const out = JSON.parse(
+      await command(['--readings', file, '--ref-temp-c', '20', '--activation-kj-mol', q5000KJ, '--min-temp-c', '-5', '--carry-h', '12', '--json']),
+    );
     expect(out.minTempC).toBe(-5);
     expect(out.belowMinimumHours).toBe(0);
     expect(out.equivalentHoursAtRef).toBeCloseTo(24 * Math.exp(-5000 * (1 / 271.15 - 1 / 293.15)), 9);
@@ -89,7 +98,10 @@ describe('gelpoint cure', () => {
   });
 
   it('refuses a bad file with one line naming the rows', async () => {
-    const file = csv('bad.csv', 'time,tempC\n2025-01-10T08:00:00Z,10\n2025-01-10T09:00:00Z,10\n2025-01-10T10:00:00Z,10\n2025-01-10T11:00:00Z,10\n2025-01-10T12:00:00Z,10\nyesterday,10\n2025-01-10T11:30:00Z,x\n');
+    const file = csv(
+      'bad.csv',
+      'time,tempC\n2025-01-10T08:00:00Z,10\n2025-01-10T09:00:00Z,10\n2025-01-10T10:00:00Z,10\n2025-01-10T11:00:00Z,10\n2025-01-10T12:00:00Z,10\nyesterday,10\n2025-01-10T11:30:00Z,x\n',
+    );
     const run = command(['--readings', file, '--ref-temp-c', '20', '--activation-kj-mol', '50']);
     await expect(run).rejects.toBeInstanceOf(CliError);
     await run.catch((err: Error) => {
@@ -101,7 +113,9 @@ describe('gelpoint cure', () => {
   });
 
   it('refuses a missing file and missing flags', async () => {
-    await expect(command(['--readings', join(dir, 'nope.csv'), '--ref-temp-c', '20', '--activation-kj-mol', '50'])).rejects.toThrow(/cannot read .*nope\.csv \(ENOENT\)/);
+    await expect(command(['--readings', join(dir, 'nope.csv'), '--ref-temp-c', '20', '--activation-kj-mol', '50'])).rejects.toThrow(
+      /cannot read .*nope\.csv \(ENOENT\)/,
+    );
     await expect(command(['--readings', 'x.csv', '--activation-kj-mol', '50'])).rejects.toThrow('--ref-temp-c is required');
   });
 

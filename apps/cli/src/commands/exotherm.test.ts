@@ -35,7 +35,20 @@ describe('gelpoint exotherm', () => {
   });
 
   it('with no heat of reaction the layer stays at the shop temperature', async () => {
-    const out = await json(['--depth-mm', '30', '--ambient-c', '18', '--reaction-heat-j-g', '0', '--activation-kj-mol', '53', '--ref-temp-c', '22', '--gel-min', '600']);
+    const out = await json([
+      '--depth-mm',
+      '30',
+      '--ambient-c',
+      '18',
+      '--reaction-heat-j-g',
+      '0',
+      '--activation-kj-mol',
+      '53',
+      '--ref-temp-c',
+      '22',
+      '--gel-min',
+      '600',
+    ]);
     expect(out.peakC).toBeCloseTo(18, 9);
   });
 
@@ -64,10 +77,18 @@ describe('gelpoint exotherm', () => {
 
   const bad: [string, string[], RegExp][] = [
     ['negative depth', ['--depth-mm', '-5', '--ambient-c', '22', ...system], /layer depth must be a number of mm above 0/],
-    ['negative heat', ['--depth-mm', '5', '--ambient-c', '22', '--reaction-heat-j-g', '-160', '--activation-kj-mol', '53', '--ref-temp-c', '22', '--gel-min', '600'], /heat of reaction must be a number from 0/],
+    [
+      'negative heat',
+      ['--depth-mm', '5', '--ambient-c', '22', '--reaction-heat-j-g', '-160', '--activation-kj-mol', '53', '--ref-temp-c', '22', '--gel-min', '600'],
+      /heat of reaction must be a number from 0/,
+    ],
     ['text for a number', ['--depth-mm', 'deep', '--ambient-c', '22', ...system], /--depth-mm must be a number, got "deep"/],
     ['unknown base', ['--depth-mm', '5', '--ambient-c', '22', ...system, '--base', 'stone'], /--base must be "wood" or "insulated"/],
-    ['missing gel time', ['--depth-mm', '5', '--ambient-c', '22', '--reaction-heat-j-g', '160', '--activation-kj-mol', '53', '--ref-temp-c', '22'], /--gel-min is required/],
+    [
+      'missing gel time',
+      ['--depth-mm', '5', '--ambient-c', '22', '--reaction-heat-j-g', '160', '--activation-kj-mol', '53', '--ref-temp-c', '22'],
+      /--gel-min is required/,
+    ],
     ['limit below the shop', ['--depth-mm', '5', '--ambient-c', '22', ...system, '--limit-c', '20'], /not above the starting temperature/],
   ];
   for (const [name, argv, message] of bad) {

@@ -31,7 +31,7 @@ describe('gelpoint mix', () => {
     expect(out.mixedDensityGPerMl).toBeCloseTo(329 / 300, 12);
   });
 
-  it('counts the pigment in the cup\'s volume: 300 mL with 3 % of a 1.0 g/mL colourant', async () => {
+  it("counts the pigment in the cup's volume: 300 mL with 3 % of a 1.0 g/mL colourant", async () => {
     // Volumes add: 300 = u·(2 + 1) + 0.03·(2·1.16 + 0.97)·u / 1.0, so u = 300 / 3.0987 mL per part of the ratio.
     const out = await json(['--volume-ml', '300', '--ratio', '2:1', '--by', 'volume', ...densities, '--pigment-pct', '3', '--pigment-density-g-ml', '1.0']);
     const u = 300 / (3 + 0.03 * 3.29);

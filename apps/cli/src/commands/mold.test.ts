@@ -26,7 +26,22 @@ beforeAll(async () => {
   await write('pocket-ascii.stl', encodeStlAscii(pocket, { lineEnding: '\r\n' }));
   // The same pocket drawn in inches with y up: file (x, y, z) = (x, z, −y) / 25.4 (NIST SP 811).
   await write('pocket-in-yup.stl', encodeStlBinary(mapped(pocket, (x, y, z) => [x / 25.4, z / 25.4, -y / 25.4])));
-  await write('bowl.stl', encodeStlBinary(revolvedPocketBlock({ halfSide: 15, bottomZ: 0, topZ: 20, profile: [[0, 12], [6, 12], [10, 20]], segments: 64 })));
+  await write(
+    'bowl.stl',
+    encodeStlBinary(
+      revolvedPocketBlock({
+        halfSide: 15,
+        bottomZ: 0,
+        topZ: 20,
+        profile: [
+          [0, 12],
+          [6, 12],
+          [10, 20],
+        ],
+        segments: 64,
+      }),
+    ),
+  );
   await write('broken.stl', encodeStlBinary(pocket).subarray(0, 300));
   // The same pocket as a 3MF that states inches (NIST SP 811: 1 in = 25.4 mm), as an OBJ of quads,
   // and as a binary STL whose writer left the triangle count at 0.
@@ -37,8 +52,17 @@ beforeAll(async () => {
   // A shaft into a wider chamber whose ceiling has a 5 × 5 × 2 mm recess away from the shaft:
   // resin fills the chamber, the recess holds its air (cuboid, CRC: 50 mm³).
   const xs = [0, 5, 10, 15, 25, 35, 40];
-  await write('undercut.stl', encodeStlBinary(cellSolid(xs, xs, [0, 5, 10, 12, 20], (i, j, k) =>
-    !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)))));
+  await write(
+    'undercut.stl',
+    encodeStlBinary(
+      cellSolid(
+        xs,
+        xs,
+        [0, 5, 10, 12, 20],
+        (i, j, k) => !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)),
+      ),
+    ),
+  );
 });
 
 interface Report {
@@ -49,7 +73,16 @@ interface Report {
   watertight: boolean;
   bboxMm: { min: number[]; max: number[] };
   enclosedVolumeMm3: number | null;
-  fill: { levelMm: number; dam: string; volumeMm3: number; wettedAreaMm2: number; maxDepthMm: number; trappedAirMm3: number; floorMm: number; levelAboveFloorMm: number };
+  fill: {
+    levelMm: number;
+    dam: string;
+    volumeMm3: number;
+    wettedAreaMm2: number;
+    maxDepthMm: number;
+    trappedAirMm3: number;
+    floorMm: number;
+    levelAboveFloorMm: number;
+  };
   curve?: { levelMm: number; volumeMm3: number }[];
   method: string;
   estimatedErrorPct: number;
@@ -63,7 +96,19 @@ async function json(argv: string[]): Promise<Report> {
 describe('gelpoint mold --json', () => {
   it('prints exactly the report fields', async () => {
     const out = await json([files['pocket.stl']!, '--level', '10']);
-    expect(Object.keys(out)).toEqual(['format', 'units', 'fileUnits', 'triangles', 'watertight', 'bboxMm', 'enclosedVolumeMm3', 'fill', 'method', 'estimatedErrorPct', 'warnings']);
+    expect(Object.keys(out)).toEqual([
+      'format',
+      'units',
+      'fileUnits',
+      'triangles',
+      'watertight',
+      'bboxMm',
+      'enclosedVolumeMm3',
+      'fill',
+      'method',
+      'estimatedErrorPct',
+      'warnings',
+    ]);
     expect(out).toMatchObject({ format: 'stl', units: 'mm', fileUnits: null });
     expect(Object.keys(out.fill)).toEqual(['levelMm', 'dam', 'volumeMm3', 'wettedAreaMm2', 'maxDepthMm', 'trappedAirMm3', 'floorMm', 'levelAboveFloorMm']);
     expect(out.triangles).toBe(pocket.triangleCount);
@@ -134,7 +179,9 @@ describe('gelpoint mold, readable', () => {
   it('names the format and the unit the numbers were read in', async () => {
     expect(await command([files['pocket.stl']!, '--level', '10'])).toMatch(/file +STL, read in millimetres \(mm\); STL carries no unit/);
     expect(await command([files['pocket-in.3mf']!, '--level', '0.4'])).toMatch(/file +3MF, read in inches \(in\), as the file states/);
-    expect(await command([files['pocket-in.3mf']!, '--level', '10', '--units', 'mm'])).toMatch(/file +3MF, read in millimetres \(mm\), as asked; the file states inches/);
+    expect(await command([files['pocket-in.3mf']!, '--level', '10', '--units', 'mm'])).toMatch(
+      /file +3MF, read in millimetres \(mm\), as asked; the file states inches/,
+    );
     expect(await command([files['pocket.obj']!, '--level', '10', '--units', 'cm'])).toMatch(/file +OBJ, read in centimetres \(cm\); OBJ carries no unit/);
   });
 

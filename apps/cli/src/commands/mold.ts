@@ -1,7 +1,21 @@
 import { readFile } from 'node:fs/promises';
 import {
-  analyzeCavity, cavityFloorMm, curve, fillAt, mmPerUnit, prepareMesh, readAnalysis, readMouldFile,
-  type CavityFill, type CavityModel, type CurvePoint, type Dam, type FileUnits, type MeshWarning, type MouldFormat, type UpAxis,
+  analyzeCavity,
+  cavityFloorMm,
+  curve,
+  fillAt,
+  mmPerUnit,
+  prepareMesh,
+  readAnalysis,
+  readMouldFile,
+  type CavityFill,
+  type CavityModel,
+  type CurvePoint,
+  type Dam,
+  type FileUnits,
+  type MeshWarning,
+  type MouldFormat,
+  type UpAxis,
 } from '@gelpoint/mesh';
 import { CliError, numberOption, parseOptions, type Command } from '../command';
 
@@ -30,9 +44,15 @@ interface MoldReport {
   bboxMm: { min: [number, number, number]; max: [number, number, number] };
   enclosedVolumeMm3: number | null;
   fill: {
-    levelMm: number; dam: Dam; volumeMm3: number; wettedAreaMm2: number; maxDepthMm: number; trappedAirMm3: number;
+    levelMm: number;
+    dam: Dam;
+    volumeMm3: number;
+    wettedAreaMm2: number;
+    maxDepthMm: number;
+    trappedAirMm3: number;
     /** The cavity floor with this dam, in the file's frame, and the level as a height above it (what the web app's fill level means). */
-    floorMm: number; levelAboveFloorMm: number;
+    floorMm: number;
+    levelAboveFloorMm: number;
   };
   curve?: CurvePoint[];
   method: CavityFill['method'];
@@ -82,8 +102,8 @@ function readable(file: string, report: MoldReport, up: UpAxis): string {
   const lines = [
     `Cavity report for ${file}`,
     `  file          ${formatName[report.format]}, read in ${unitsText(report)}`,
-    `  mesh          ${report.triangles} triangles, ${report.watertight ? 'watertight' : 'not watertight'}`
-      + (report.enclosedVolumeMm3 === null ? '' : `, encloses ${volumeText(report.enclosedVolumeMm3, units)}`),
+    `  mesh          ${report.triangles} triangles, ${report.watertight ? 'watertight' : 'not watertight'}` +
+      (report.enclosedVolumeMm3 === null ? '' : `, encloses ${volumeText(report.enclosedVolumeMm3, units)}`),
     `  size          ${[0, 1, 2].map((k) => length(max[k]! - min[k]!)).join(' × ')} (x × y × z, ${up === 'z' ? 'z up' : `file axis ${up} turned to point up`})`,
     `  fill level    ${length(f.levelMm)} (${f.dam === 'box' ? 'box dam around the bounding box' : 'dams along the outline'})`,
     `  cavity floor  ${length(f.floorMm)}: the level stands ${length(f.levelAboveFloorMm)} above it`,
@@ -110,7 +130,10 @@ function readable(file: string, report: MoldReport, up: UpAxis): string {
  */
 export const command: Command = async (argv) => {
   const { values, positionals } = parseOptions(argv, options, true);
-  if (positionals.length !== 1) throw new CliError(positionals.length === 0 ? 'give the mould file, STL, 3MF or OBJ (gelpoint mold FILE --level L)' : `give one mould file, got ${positionals.length}`);
+  if (positionals.length !== 1)
+    throw new CliError(
+      positionals.length === 0 ? 'give the mould file, STL, 3MF or OBJ (gelpoint mold FILE --level L)' : `give one mould file, got ${positionals.length}`,
+    );
   const file = positionals[0]!;
   const chosenUnits = values.units === undefined ? undefined : oneOf(values.units, 'units', ['mm', 'cm', 'in'] as const, 'mm');
   const up = oneOf(values.up, 'up', ['x', 'y', 'z'] as const, 'z');
@@ -147,9 +170,14 @@ export const command: Command = async (argv) => {
     bboxMm: a.bboxMm,
     enclosedVolumeMm3: a.enclosedVolumeMm3,
     fill: {
-      levelMm: fill.levelMm, dam: fill.dam, volumeMm3: fill.volumeMm3,
-      wettedAreaMm2: fill.wettedAreaMm2, maxDepthMm: fill.maxDepthMm, trappedAirMm3: fill.trappedAirMm3,
-      floorMm, levelAboveFloorMm: fill.levelMm - floorMm,
+      levelMm: fill.levelMm,
+      dam: fill.dam,
+      volumeMm3: fill.volumeMm3,
+      wettedAreaMm2: fill.wettedAreaMm2,
+      maxDepthMm: fill.maxDepthMm,
+      trappedAirMm3: fill.trappedAirMm3,
+      floorMm,
+      levelAboveFloorMm: fill.levelMm - floorMm,
     },
     ...(curveCount === undefined ? {} : { curve: unwrap(curve(model, curveCount, dam)) }),
     method: fill.method,

@@ -74,83 +74,93 @@ async function todaysPour(): Promise<{ pourId: string; deepCup: PlannedCup }> {
 }
 
 describe("an apprentice's day on a phone", () => {
-  it("opens today's pour, logs a cup with its lots and grams (warned while off ratio), a temperature and a cure check with a photo", { timeout: 60_000 }, async () => {
-    const { pourId, deepCup } = await todaysPour();
-    const context = await e2e.browser().newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
-    const { page, watch } = await watchedPage(context, stack.baseUrl);
-    page.setDefaultTimeout(10_000);
-    await signInThroughPage(page, stack.baseUrl, 'apprentice@gelpoint.test');
+  it(
+    "opens today's pour, logs a cup with its lots and grams (warned while off ratio), a temperature and a cure check with a photo",
+    { timeout: 60_000 },
+    async () => {
+      const { pourId, deepCup } = await todaysPour();
+      const context = await e2e.browser().newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+      const { page, watch } = await watchedPage(context, stack.baseUrl);
+      page.setDefaultTimeout(10_000);
+      await signInThroughPage(page, stack.baseUrl, 'apprentice@gelpoint.test');
 
-    await expect.poll(() => page.getByText(`Pour window opens: ${pieceName}, seal coat`, { exact: false }).isVisible()).toBe(true);
-    await page.getByRole('link', { name: `Open the pour of ${pieceName}` }).first().click();
-    await page.waitForURL(new RegExp(`/pours/${pourId}$`));
-    await expect.poll(() => page.getByRole('heading', { level: 1, name: pieceName }).isVisible()).toBe(true);
+      await expect.poll(() => page.getByText(`Pour window opens: ${pieceName}, seal coat`, { exact: false }).isVisible()).toBe(true);
+      await page
+        .getByRole('link', { name: `Open the pour of ${pieceName}` })
+        .first()
+        .click();
+      await page.waitForURL(new RegExp(`/pours/${pourId}$`));
+      await expect.poll(() => page.getByRole('heading', { level: 1, name: pieceName }).isVisible()).toBe(true);
 
-    // The seal coat is logged; the layer's cup is next, with the plan's grams at the shop's 0.1 g scale.
-    expect(await page.getByRole('region', { name: /^Cup 1 of 2/ }).textContent()).toMatch(/Logged[\s\S]*Mixed by Mika Hale/);
-    const card = page.getByRole('region', { name: /^Cup 2 of 2/ });
-    await expect.poll(() => card.getByText(`${deepCup.partA.grams.toFixed(1)} g`, { exact: true }).isVisible()).toBe(true);
-    expect(await card.getByText(`${deepCup.partB.grams.toFixed(1)} g`, { exact: true }).isVisible()).toBe(true);
-    await saveScreenshot(page, 'pour-on-a-phone', { from: card });
+      // The seal coat is logged; the layer's cup is next, with the plan's grams at the shop's 0.1 g scale.
+      expect(await page.getByRole('region', { name: /^Cup 1 of 2/ }).textContent()).toMatch(/Logged[\s\S]*Mixed by Mika Hale/);
+      const card = page.getByRole('region', { name: /^Cup 2 of 2/ });
+      await expect.poll(() => card.getByText(`${deepCup.partA.grams.toFixed(1)} g`, { exact: true }).isVisible()).toBe(true);
+      expect(await card.getByText(`${deepCup.partB.grams.toFixed(1)} g`, { exact: true }).isVisible()).toBe(true);
+      await saveScreenshot(page, 'pour-on-a-phone', { from: card });
 
-    await card.getByRole('button', { name: 'Start mixing' }).click();
-    await expect.poll(() => card.getByText(/min of pot life left/).isVisible()).toBe(true);
-    const form = card.getByRole('form', { name: 'Log cup 2' });
-    const pick = async (label: string, lotNumber: string) => {
-      const select = form.getByLabel(label, { exact: true });
-      await select.selectOption((await select.locator('option', { hasText: lotNumber }).getAttribute('value'))!);
-    };
-    await pick('Lot of part A', 'KDP-A-2611');
-    await pick('Lot of part B', 'KDP-B-2611');
-    await pick('Lot of pigment', 'PWP-1102');
+      await card.getByRole('button', { name: 'Start mixing' }).click();
+      await expect.poll(() => card.getByText(/min of pot life left/).isVisible()).toBe(true);
+      const form = card.getByRole('form', { name: 'Log cup 2' });
+      const pick = async (label: string, lotNumber: string) => {
+        const select = form.getByLabel(label, { exact: true });
+        await select.selectOption((await select.locator('option', { hasText: lotNumber }).getAttribute('value'))!);
+      };
+      await pick('Lot of part A', 'KDP-A-2611');
+      await pick('Lot of part B', 'KDP-B-2611');
+      await pick('Lot of pigment', 'PWP-1102');
 
-    // 10 % too much part A: beyond the demo shop's 3 % off-ratio tolerance.
-    await form.getByLabel('Part A weighed (g)').fill((deepCup.partA.grams * 1.1).toFixed(1));
-    await form.getByLabel('Part B weighed (g)').fill(deepCup.partB.grams.toFixed(1));
-    await expect.poll(() => form.getByText('Off ratio', { exact: true }).isVisible()).toBe(true);
-    await form.getByLabel('Part A weighed (g)').fill(deepCup.partA.grams.toFixed(1));
-    await expect.poll(() => form.getByText(/^On ratio/).isVisible()).toBe(true);
-    expect(await form.getByText('Off ratio', { exact: true }).count()).toBe(0);
-    await form.getByLabel('Pigment weighed (g)').fill(deepCup.pigment.grams.toFixed(1));
-    await form.getByLabel('Air temperature (°C)').fill('21');
-    await form.getByLabel('Surface temperature (°C)').fill('20');
-    await form.getByLabel('Relative humidity (%)').fill('50');
-    const submit = form.getByRole('button', { name: 'Log this batch' });
-    // Gloved fingers: the main buttons are at least 48 px tall.
-    expect((await submit.boundingBox())?.height).toBeGreaterThanOrEqual(48);
-    await submit.click();
-    // The demo shop's night is cooler than the plan assumed, so the seal coat's window may still be a few minutes
-    // from opening: then the form names the window and asks, and the apprentice, told the coat is tacky, logs it.
-    const asIs = form.getByRole('button', { name: 'Log this cup as it is' });
-    await expect.poll(async () => (await asIs.isVisible()) || /Logged/.test((await card.textContent()) ?? '')).toBe(true);
-    if (await asIs.isVisible()) {
-      expect(await form.getByText(/whose window for the next pour opens/).textContent()).toMatch(/ (PST|PDT)\b/);
-      await asIs.click();
-    }
-    await expect.poll(() => card.textContent()).toMatch(/Logged[\s\S]*Mixed by Mika Hale/);
-    for (const lot of ['KDP-A-2611', 'KDP-B-2611', 'PWP-1102']) expect(await card.getByText(`Lot ${lot}`).isVisible()).toBe(true);
+      // 10 % too much part A: beyond the demo shop's 3 % off-ratio tolerance.
+      await form.getByLabel('Part A weighed (g)').fill((deepCup.partA.grams * 1.1).toFixed(1));
+      await form.getByLabel('Part B weighed (g)').fill(deepCup.partB.grams.toFixed(1));
+      await expect.poll(() => form.getByText('Off ratio', { exact: true }).isVisible()).toBe(true);
+      await form.getByLabel('Part A weighed (g)').fill(deepCup.partA.grams.toFixed(1));
+      await expect.poll(() => form.getByText(/^On ratio/).isVisible()).toBe(true);
+      expect(await form.getByText('Off ratio', { exact: true }).count()).toBe(0);
+      await form.getByLabel('Pigment weighed (g)').fill(deepCup.pigment.grams.toFixed(1));
+      await form.getByLabel('Air temperature (°C)').fill('21');
+      await form.getByLabel('Surface temperature (°C)').fill('20');
+      await form.getByLabel('Relative humidity (%)').fill('50');
+      const submit = form.getByRole('button', { name: 'Log this batch' });
+      // Gloved fingers: the main buttons are at least 48 px tall.
+      expect((await submit.boundingBox())?.height).toBeGreaterThanOrEqual(48);
+      await submit.click();
+      // The demo shop's night is cooler than the plan assumed, so the seal coat's window may still be a few minutes
+      // from opening: then the form names the window and asks, and the apprentice, told the coat is tacky, logs it.
+      const asIs = form.getByRole('button', { name: 'Log this cup as it is' });
+      await expect.poll(async () => (await asIs.isVisible()) || /Logged/.test((await card.textContent()) ?? '')).toBe(true);
+      if (await asIs.isVisible()) {
+        expect(await form.getByText(/whose window for the next pour opens/).textContent()).toMatch(/ (PST|PDT)\b/);
+        await asIs.click();
+      }
+      await expect.poll(() => card.textContent()).toMatch(/Logged[\s\S]*Mixed by Mika Hale/);
+      for (const lot of ['KDP-A-2611', 'KDP-B-2611', 'PWP-1102']) expect(await card.getByText(`Lot ${lot}`).isVisible()).toBe(true);
 
-    const reading = page.getByRole('form', { name: 'Add a temperature reading' });
-    await reading.getByLabel('Temperature (°C)').fill('21.5');
-    await reading.getByRole('button', { name: 'Add reading' }).click();
-    await expect.poll(() => reading.getByText('Reading saved.').isVisible()).toBe(true);
-    await expect.poll(() => page.getByRole('img', { name: 'Temperature log' }).isVisible()).toBe(true);
+      const reading = page.getByRole('form', { name: 'Add a temperature reading' });
+      await reading.getByLabel('Temperature (°C)').fill('21.5');
+      await reading.getByRole('button', { name: 'Add reading' }).click();
+      await expect.poll(() => reading.getByText('Reading saved.').isVisible()).toBe(true);
+      await expect.poll(() => page.getByRole('img', { name: 'Temperature log' }).isVisible()).toBe(true);
 
-    const check = page.getByRole('form', { name: 'Add a cure check' });
-    await check.getByLabel('What the resin was like').selectOption('liquid');
-    await check.getByLabel('Photo').setInputFiles({ name: 'check.png', mimeType: 'image/png', buffer: tinyPng });
-    await check.getByRole('button', { name: 'Save the check' }).click();
-    await expect.poll(() => check.getByText('Cure check saved.').isVisible()).toBe(true);
-    const photo = page.getByRole('img', { name: 'Cure check photo: still liquid' });
-    await expect.poll(() => photo.evaluate((img) => (img as HTMLImageElement).complete && (img as HTMLImageElement).naturalWidth)).toBe(1);
+      const check = page.getByRole('form', { name: 'Add a cure check' });
+      await check.getByLabel('What the resin was like').selectOption('liquid');
+      await check.getByLabel('Photo').setInputFiles({ name: 'check.png', mimeType: 'image/png', buffer: tinyPng });
+      await check.getByRole('button', { name: 'Save the check' }).click();
+      await expect.poll(() => check.getByText('Cure check saved.').isVisible()).toBe(true);
+      const photo = page.getByRole('img', { name: 'Cure check photo: still liquid' });
+      await expect.poll(() => photo.evaluate((img) => (img as HTMLImageElement).complete && (img as HTMLImageElement).naturalWidth)).toBe(1);
 
-    // Every cup is in, so the pour shows on the board as curing with both cups logged.
-    await page.getByRole('link', { name: 'Back to the cure board' }).click();
-    await page.waitForURL(/\/cure-board$/);
-    const entry = page.getByRole('list', { name: 'Pours' }).getByRole('listitem').filter({ has: page.getByRole('link', { name: pieceName, exact: true }) });
-    await expect.poll(() => entry.getByText('2 of 2 cups logged', { exact: false }).isVisible()).toBe(true);
+      // Every cup is in, so the pour shows on the board as curing with both cups logged.
+      await page.getByRole('link', { name: 'Back to the cure board' }).click();
+      await page.waitForURL(/\/cure-board$/);
+      const entry = page
+        .getByRole('list', { name: 'Pours' })
+        .getByRole('listitem')
+        .filter({ has: page.getByRole('link', { name: pieceName, exact: true }) });
+      await expect.poll(() => entry.getByText('2 of 2 cups logged', { exact: false }).isVisible()).toBe(true);
 
-    expect(watch.problems).toEqual([]);
-    await context.close();
-  });
+      expect(watch.problems).toEqual([]);
+      await context.close();
+    },
+  );
 });

@@ -123,10 +123,19 @@ describe("a maker's day in the browser", () => {
     // A layer: 384 mL with 5 % over-pour.
     const layerMl = 384 * 1.05;
     const layerCupG = ((layerMl * 2) / 3) * 1.15 + (layerMl / 3) * 0.97 + 5;
-    expect(await page.getByRole('article', { name: 'Cup 1 of 3' }).getByText(`${sealCupG.toFixed(1)} g`, { exact: true }).isVisible()).toBe(true);
+    expect(
+      await page
+        .getByRole('article', { name: 'Cup 1 of 3' })
+        .getByText(`${sealCupG.toFixed(1)} g`, { exact: true })
+        .isVisible(),
+    ).toBe(true);
     // Core rounds a cup on ratio to the 0.1 g scale (the smaller part to a whole step, the larger from the ratio), which
     // moves a 444 g cup by a few tenths of a gram at most.
-    const layerCupShown = await page.getByRole('article', { name: 'Cup 2 of 3' }).getByText(/^\d+\.\d g$/).last().textContent();
+    const layerCupShown = await page
+      .getByRole('article', { name: 'Cup 2 of 3' })
+      .getByText(/^\d+\.\d g$/)
+      .last()
+      .textContent();
     expect(Math.abs(Number.parseFloat(layerCupShown ?? '') - layerCupG)).toBeLessThan(0.5);
     expect(await page.getByRole('article', { name: 'Cup 3 of 3' }).getByText('Layer 2 · batch 1 of 1').isVisible()).toBe(true);
     expect(await page.getByRole('navigation', { name: 'Main' }).count()).toBe(0);

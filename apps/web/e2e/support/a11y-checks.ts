@@ -20,7 +20,13 @@ export interface Finding {
 export async function axeFindings(page: Page, where: { page: string; role: string }): Promise<Finding[]> {
   await page.evaluate(axeSource);
   const violations = await page.evaluate(async () => {
-    const result = await (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[] }> } }).axe.run(document, {
+    const result = await (
+      window as unknown as {
+        axe: {
+          run: (ctx: Document, opts: object) => Promise<{ violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[] }>;
+        };
+      }
+    ).axe.run(document, {
       runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] },
       resultTypes: ['violations'],
     });
@@ -66,7 +72,8 @@ export async function focusProblems(page: Page, name: string, maxStops = 60): Pr
       const outlineShown = outlineWidth >= 2 && (before === undefined || `${s.outlineStyle} ${s.outlineWidth} ${s.outlineColor}` !== before.outline);
       const label = `${el.tagName.toLowerCase()}${el.id ? `#${el.id}` : ''} "${(el.getAttribute('aria-label') ?? el.textContent ?? '').trim().slice(0, 40)}"`;
       const path: string[] = [];
-      for (let node: Element | null = el; node && node !== document.body; node = node.parentElement) path.push(`${node.tagName}:${[...(node.parentElement?.children ?? [])].indexOf(node)}`);
+      for (let node: Element | null = el; node && node !== document.body; node = node.parentElement)
+        path.push(`${node.tagName}:${[...(node.parentElement?.children ?? [])].indexOf(node)}`);
       return { key: path.join('/'), label, visible: outlineShown || shadowChanged };
     });
     if (!stop) continue;

@@ -17,12 +17,19 @@ async function answer<T>(res: Response, what: string): Promise<T> {
  * else did before the day starts).
  */
 export async function apiSession(baseUrl: string, email: string): Promise<ApiSession> {
-  const login = await fetch(`${baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password: demoPassword }) });
+  const login = await fetch(`${baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password: demoPassword }),
+  });
   const { token } = await answer<{ token: string }>(login, `signing in ${email}`);
   const auth = { Authorization: `Bearer ${token}` };
   const get = async <T>(path: string) => answer<T>(await fetch(`${baseUrl}/api${path}`, { headers: auth }), `GET ${path}`);
   const post = async <T>(path: string, body: unknown) =>
-    answer<T>(await fetch(`${baseUrl}/api${path}`, { method: 'POST', headers: { ...auth, 'Content-Type': 'application/json' }, body: JSON.stringify(body) }), `POST ${path}`);
+    answer<T>(
+      await fetch(`${baseUrl}/api${path}`, { method: 'POST', headers: { ...auth, 'Content-Type': 'application/json' }, body: JSON.stringify(body) }),
+      `POST ${path}`,
+    );
   const me = await get<{ user: { id: string } }>('/me');
   return { userId: me.user.id, get, post };
 }

@@ -52,7 +52,12 @@ export async function demoIds(page: Page, baseUrl: string): Promise<DemoIds> {
 export async function uploadMeasuredMould(page: Page, baseUrl: string, name: string): Promise<string> {
   const answer = await page.request.post(`${baseUrl}/api/molds`, {
     headers: { 'X-Gelpoint-Csrf': '1' },
-    multipart: { units: 'mm', up: 'z', name, file: { name: 'pocket-block.stl', mimeType: 'model/stl', buffer: pocketBlockStl({ block: [100, 60, 30], pocket: [80, 40, 20] }).bytes } },
+    multipart: {
+      units: 'mm',
+      up: 'z',
+      name,
+      file: { name: 'pocket-block.stl', mimeType: 'model/stl', buffer: pocketBlockStl({ block: [100, 60, 30], pocket: [80, 40, 20] }).bytes },
+    },
   });
   if (answer.status() !== 202) throw new Error(`the mould upload answered ${answer.status()}: ${await answer.text()}`);
   const { id } = (await answer.json()) as { id: string };

@@ -14,8 +14,7 @@ export async function saveScreenshot(page: Page, name: string, options: { from?:
       // A little of what is above, so the picture does not start on the element's border.
       window.scrollBy({ top: -24, behavior: 'instant' });
     });
-  }
-  else await page.evaluate(() => window.scrollTo({ top: 0, behavior: 'instant' }));
+  } else await page.evaluate(() => window.scrollTo({ top: 0, behavior: 'instant' }));
   // No hover left on the last thing clicked, and the shipped fonts loaded, or the picture shows fallback text.
   await page.mouse.move(0, 0);
   await page.evaluate(() => document.fonts.ready.then(() => undefined));

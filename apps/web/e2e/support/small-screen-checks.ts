@@ -29,7 +29,8 @@ export async function smallScreenReport(page: Page, minTargetPx = 44): Promise<S
     for (const el of document.querySelectorAll<HTMLElement>(selector)) {
       const box = el.getBoundingClientRect();
       const style = getComputedStyle(el);
-      const shown = box.width > 0 && box.height > 0 && style.visibility !== 'hidden' && el.closest('[aria-hidden="true"], [inert], dialog:not([open])') === null;
+      const shown =
+        box.width > 0 && box.height > 0 && style.visibility !== 'hidden' && el.closest('[aria-hidden="true"], [inert], dialog:not([open])') === null;
       // Visually hidden until focused (the skip link): it is measured when it shows.
       const clipped = style.position === 'absolute' && box.width <= 1 && box.height <= 1;
       if (!shown || clipped) continue;
@@ -70,7 +71,11 @@ export async function smallScreenReport(page: Page, minTargetPx = 44): Promise<S
       // Half a pixel of rounding: 2.75rem is 44 px, but borders and sub-pixel layout can land at 43.99.
       if (width < min - 0.5 || height < min - 0.5) {
         const name = (el.getAttribute('aria-label') ?? el.textContent ?? input.name ?? '').trim().replace(/\s+/g, ' ').slice(0, 40);
-        smallTargets.push({ element: `${el.tagName.toLowerCase()}${input.type ? `[${input.type}]` : ''} "${name}"`, widthPx: Math.round(width), heightPx: Math.round(height) });
+        smallTargets.push({
+          element: `${el.tagName.toLowerCase()}${input.type ? `[${input.type}]` : ''} "${name}"`,
+          widthPx: Math.round(width),
+          heightPx: Math.round(height),
+        });
       }
     }
     return { scrollWidthPx: scroller.scrollWidth, viewportWidthPx: window.innerWidth, smallTargets, targetsMeasured };

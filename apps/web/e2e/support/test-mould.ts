@@ -35,24 +35,100 @@ export function pocketBlockStl({ block: [L, W, H], pocket: [l, w, d] }: PocketBl
   const floor = H - d;
   const quads: Quad[] = [
     // Underside and the four outer walls.
-    [[0, 0, 0], [0, W, 0], [L, W, 0], [L, 0, 0]],
-    [[0, 0, 0], [L, 0, 0], [L, 0, H], [0, 0, H]],
-    [[L, 0, 0], [L, W, 0], [L, W, H], [L, 0, H]],
-    [[L, W, 0], [0, W, 0], [0, W, H], [L, W, H]],
-    [[0, W, 0], [0, 0, 0], [0, 0, H], [0, W, H]],
+    [
+      [0, 0, 0],
+      [0, W, 0],
+      [L, W, 0],
+      [L, 0, 0],
+    ],
+    [
+      [0, 0, 0],
+      [L, 0, 0],
+      [L, 0, H],
+      [0, 0, H],
+    ],
+    [
+      [L, 0, 0],
+      [L, W, 0],
+      [L, W, H],
+      [L, 0, H],
+    ],
+    [
+      [L, W, 0],
+      [0, W, 0],
+      [0, W, H],
+      [L, W, H],
+    ],
+    [
+      [0, W, 0],
+      [0, 0, 0],
+      [0, 0, H],
+      [0, W, H],
+    ],
     // The top face as a frame around the pocket's opening.
-    [[0, 0, H], [L, 0, H], [x1, y0, H], [x0, y0, H]],
-    [[L, 0, H], [L, W, H], [x1, y1, H], [x1, y0, H]],
-    [[L, W, H], [0, W, H], [x0, y1, H], [x1, y1, H]],
-    [[0, W, H], [0, 0, H], [x0, y0, H], [x0, y1, H]],
+    [
+      [0, 0, H],
+      [L, 0, H],
+      [x1, y0, H],
+      [x0, y0, H],
+    ],
+    [
+      [L, 0, H],
+      [L, W, H],
+      [x1, y1, H],
+      [x1, y0, H],
+    ],
+    [
+      [L, W, H],
+      [0, W, H],
+      [x0, y1, H],
+      [x1, y1, H],
+    ],
+    [
+      [0, W, H],
+      [0, 0, H],
+      [x0, y0, H],
+      [x0, y1, H],
+    ],
     // The pocket's walls face into the pocket, and its floor faces up.
-    [[x1, y0, floor], [x0, y0, floor], [x0, y0, H], [x1, y0, H]],
-    [[x1, y1, floor], [x1, y0, floor], [x1, y0, H], [x1, y1, H]],
-    [[x0, y1, floor], [x1, y1, floor], [x1, y1, H], [x0, y1, H]],
-    [[x0, y0, floor], [x0, y1, floor], [x0, y1, H], [x0, y0, H]],
-    [[x0, y0, floor], [x1, y0, floor], [x1, y1, floor], [x0, y1, floor]],
+    [
+      [x1, y0, floor],
+      [x0, y0, floor],
+      [x0, y0, H],
+      [x1, y0, H],
+    ],
+    [
+      [x1, y1, floor],
+      [x1, y0, floor],
+      [x1, y0, H],
+      [x1, y1, H],
+    ],
+    [
+      [x0, y1, floor],
+      [x1, y1, floor],
+      [x1, y1, H],
+      [x0, y1, H],
+    ],
+    [
+      [x0, y0, floor],
+      [x0, y1, floor],
+      [x0, y1, H],
+      [x0, y0, H],
+    ],
+    [
+      [x0, y0, floor],
+      [x1, y0, floor],
+      [x1, y1, floor],
+      [x0, y1, floor],
+    ],
   ];
-  const triangles = quads.flatMap(([a, b, c, e]) => [[a, b, c], [a, c, e]] as [Vec3, Vec3, Vec3][]);
+  const triangles = quads.flatMap(
+    ([a, b, c, e]) =>
+      [
+        [a, b, c],
+        [a, c, e],
+      ] as [Vec3, Vec3, Vec3][],
+  );
   // Binary STL layout: 80-byte header, uint32 count, then 50 bytes a facet (normal, three vertices, attribute).
   const bytes = Buffer.alloc(84 + 50 * triangles.length);
   bytes.write('gelpoint e2e routed blank', 0, 'latin1');

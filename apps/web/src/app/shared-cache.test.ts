@@ -37,7 +37,18 @@ const moldOf = (id: string, name: string): MoldView => ({
 const planId = '00000000-0000-4000-8000-0000000000b1';
 const planOf = (name: string): PourPlanView => {
   const saved = testPlan();
-  return { id: planId, pieceId, moldId: null, name, inputs: { name }, productSnapshot: saved.productSnapshot, result: PourPlanView.shape.result.parse(saved.result), createdBy: null, createdAt: '2026-11-01T10:00:00.000Z', updatedAt: '2026-11-01T10:00:00.000Z' };
+  return {
+    id: planId,
+    pieceId,
+    moldId: null,
+    name,
+    inputs: { name },
+    productSnapshot: saved.productSnapshot,
+    result: PourPlanView.shape.result.parse(saved.result),
+    createdBy: null,
+    createdAt: '2026-11-01T10:00:00.000Z',
+    updatedAt: '2026-11-01T10:00:00.000Z',
+  };
 };
 
 /** The API as far as these screens use it, kept in memory. */
@@ -53,7 +64,8 @@ function fakeApi() {
       const items = [...molds.values()].filter((m) => !url.searchParams.get('pieceId') || m.pieceId === url.searchParams.get('pieceId'));
       return json({ items: items.map((m) => ({ ...m, report: undefined, fillVolumeToTopMm3: null })), total: items.length });
     }
-    if (mold && method === 'GET') return molds.has(mold[1]!) ? json(molds.get(mold[1]!)) : json({ error: { code: 'not_found', message: 'no such mould' } }, 404);
+    if (mold && method === 'GET')
+      return molds.has(mold[1]!) ? json(molds.get(mold[1]!)) : json({ error: { code: 'not_found', message: 'no such mould' } }, 404);
     if (mold && method === 'DELETE') {
       molds.delete(mold[1]!);
       return new Response(null, { status: 204 });

@@ -37,12 +37,27 @@ describe('paths', () => {
   });
 
   it('ranks the new-piece page above a piece id, as the router does', () => {
-    const routes = [{ path: paths.piece.path, id: 'piece' }, { path: paths.newPiece.path, id: 'new' }];
+    const routes = [
+      { path: paths.piece.path, id: 'piece' },
+      { path: paths.newPiece.path, id: 'new' },
+    ];
     expect(matchRoutes(routes, paths.newPiece.getHref())?.[0]?.route.id).toBe('new');
   });
 
   it('builds every parameterless link so its own pattern matches it', () => {
-    const simple = [paths.home, paths.createShop, paths.forgotPassword, paths.today, paths.newPiece, paths.moulds, paths.pourPlans, paths.cureBoard, paths.shelf, paths.team, paths.shopSettings];
+    const simple = [
+      paths.home,
+      paths.createShop,
+      paths.forgotPassword,
+      paths.today,
+      paths.newPiece,
+      paths.moulds,
+      paths.pourPlans,
+      paths.cureBoard,
+      paths.shelf,
+      paths.team,
+      paths.shopSettings,
+    ];
     for (const entry of simple) {
       expect(matchPath(entry.path, entry.getHref())).not.toBeNull();
     }

@@ -180,7 +180,14 @@ export const paths = {
   audit: {
     path: '/audit',
     getHref: (link: AuditLink = {}) =>
-      withSearch('/audit', { who: link.who, kind: link.kind, from: link.from, to: link.to, before: link.before, beforeId: link.before ? link.beforeId : undefined }),
+      withSearch('/audit', {
+        who: link.who,
+        kind: link.kind,
+        from: link.from,
+        to: link.to,
+        before: link.before,
+        beforeId: link.before ? link.beforeId : undefined,
+      }),
   },
 } as const;
 

@@ -17,8 +17,7 @@ function fakeFetch(answer: () => Response) {
   return { sent, fetchImpl };
 }
 
-const json = (status: number, body: unknown) =>
-  new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 
 const Thing = z.object({ id: z.string(), n: z.number() });
 
@@ -38,9 +37,7 @@ describe('isSafeMethod', () => {
 
 describe('buildUrl', () => {
   it('joins the base path and leaves out empty filters', () => {
-    expect(buildUrl('/api/', 'pieces', { stage: 'curing', q: '', limit: 25, offset: undefined })).toBe(
-      '/api/pieces?stage=curing&limit=25',
-    );
+    expect(buildUrl('/api/', 'pieces', { stage: 'curing', q: '', limit: 25, offset: undefined })).toBe('/api/pieces?stage=curing&limit=25');
   });
 
   it('encodes values so the WHATWG URL parser reads back exactly what was given', () => {

@@ -3,10 +3,7 @@ import { errorFromResponse } from './api-error';
 
 describe('errorFromResponse', () => {
   it('keeps the API error body as it is', () => {
-    const error = errorFromResponse(
-      401,
-      JSON.stringify({ error: { code: 'invalid_credentials', message: 'That e-mail and password do not match.' } }),
-    );
+    const error = errorFromResponse(401, JSON.stringify({ error: { code: 'invalid_credentials', message: 'That e-mail and password do not match.' } }));
     expect(error).toMatchObject({ status: 401, code: 'invalid_credentials', message: 'That e-mail and password do not match.', fields: {} });
   });
 

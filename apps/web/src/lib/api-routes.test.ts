@@ -13,7 +13,16 @@ function recordingClient(answer: unknown, status = 200) {
   return { client: createApiClient({ basePath: '/api', fetch }), seen };
 }
 
-const piece = { id: '00000000-0000-4000-8000-000000000001', name: 'Table', wood: 'walnut', notes: '', stage: 'planning', createdBy: null, createdAt: '2026-11-01T10:00:00.000Z', updatedAt: '2026-11-01T10:00:00.000Z' };
+const piece = {
+  id: '00000000-0000-4000-8000-000000000001',
+  name: 'Table',
+  wood: 'walnut',
+  notes: '',
+  stage: 'planning',
+  createdBy: null,
+  createdAt: '2026-11-01T10:00:00.000Z',
+  updatedAt: '2026-11-01T10:00:00.000Z',
+};
 
 describe('callRoute', () => {
   it('fills the path from the params and sends the body with the route’s method', async () => {

@@ -1,4 +1,12 @@
-import { apiRoutes, type ApiRoutes, type RouteBodyInput, type RouteDef, type RouteParamsInput, type RouteQueryInput, type RouteResponse } from '@gelpoint/contracts';
+import {
+  apiRoutes,
+  type ApiRoutes,
+  type RouteBodyInput,
+  type RouteDef,
+  type RouteParamsInput,
+  type RouteQueryInput,
+  type RouteResponse,
+} from '@gelpoint/contracts';
 import type { z } from 'zod';
 import { api, type ApiClient, type QueryValue, type RequestOptions } from './api-client';
 
@@ -33,7 +41,12 @@ function queryOf(query: unknown): Record<string, QueryValue> {
  * Calls one route of the contracts' table: the path, method, body and answer are the table's, so a change to a
  * route's contract shows up here as a type error rather than at run time.
  */
-export async function callRoute<K extends JsonRouteName>(name: K, args: RouteArgs<ApiRoutes[K]>, options: RequestOptions = {}, client: ApiClient = api): Promise<RouteResponse<ApiRoutes[K]>> {
+export async function callRoute<K extends JsonRouteName>(
+  name: K,
+  args: RouteArgs<ApiRoutes[K]>,
+  options: RequestOptions = {},
+  client: ApiClient = api,
+): Promise<RouteResponse<ApiRoutes[K]>> {
   const route: RouteDef = apiRoutes[name];
   const path = routePath(route.path, args.params);
   const query = queryOf(args.query);

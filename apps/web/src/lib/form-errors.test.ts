@@ -4,10 +4,7 @@ import { applyServerErrors, splitFieldErrors } from './form-errors';
 
 describe('splitFieldErrors', () => {
   it('keeps messages for shown fields and collects the rest', () => {
-    const split = splitFieldErrors({ email: 'email must look like name@example.com', shopId: 'must be an id (a UUID)' }, [
-      'email',
-      'password',
-    ] as const);
+    const split = splitFieldErrors({ email: 'email must look like name@example.com', shopId: 'must be an id (a UUID)' }, ['email', 'password'] as const);
     expect(split.byField).toEqual({ email: 'email must look like name@example.com' });
     expect(split.other).toEqual(['must be an id (a UUID)']);
   });
@@ -20,10 +17,7 @@ describe('applyServerErrors', () => {
       password: 'password must be at least 8 characters',
       email: 'email must look like name@example.com',
     });
-    const rest = applyServerErrors(error, (name, e, options) => calls.push([name, e.message, options?.shouldFocus]), [
-      'email',
-      'password',
-    ] as const);
+    const rest = applyServerErrors(error, (name, e, options) => calls.push([name, e.message, options?.shouldFocus]), ['email', 'password'] as const);
     expect(rest).toBeNull();
     expect(calls).toEqual([
       ['email', 'email must look like name@example.com', true],

@@ -7,10 +7,7 @@ export interface SplitFieldErrors<F extends string> {
   other: string[];
 }
 
-export function splitFieldErrors<F extends string>(
-  fields: Readonly<Record<string, string>>,
-  formFields: readonly F[],
-): SplitFieldErrors<F> {
+export function splitFieldErrors<F extends string>(fields: Readonly<Record<string, string>>, formFields: readonly F[]): SplitFieldErrors<F> {
   const known = new Set<string>(formFields);
   const byField: Partial<Record<F, string>> = {};
   const other: string[] = [];
@@ -27,11 +24,7 @@ export type SetFieldError<F extends string> = (name: F, error: { type: string; m
  * Puts the server's field messages under their fields and returns what is left for the form-level alert,
  * or null when every message found a field.
  */
-export function applyServerErrors<F extends string>(
-  error: unknown,
-  setError: SetFieldError<F>,
-  formFields: readonly F[],
-): string | null {
+export function applyServerErrors<F extends string>(error: unknown, setError: SetFieldError<F>, formFields: readonly F[]): string | null {
   if (!isApiError(error)) return errorNotice(error).message;
   const { byField, other } = splitFieldErrors(error.fields, formFields);
   let first = true;

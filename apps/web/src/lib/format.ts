@@ -9,7 +9,15 @@ onDisplayTimeZoneChange(() => {
 
 /** Date and time in the shop's zone, with the zone's abbreviation (PST, CET…). */
 function dateTimeFormat(): Intl.DateTimeFormat {
-  dateTime ??= new Intl.DateTimeFormat(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit', timeZoneName: 'short', timeZone: displayTimeZone() });
+  dateTime ??= new Intl.DateTimeFormat(undefined, {
+    year: 'numeric',
+    month: 'short',
+    day: 'numeric',
+    hour: 'numeric',
+    minute: '2-digit',
+    timeZoneName: 'short',
+    timeZone: displayTimeZone(),
+  });
   return dateTime;
 }
 

@@ -34,10 +34,14 @@ async function queue(to: string, n = 1): Promise<string[]> {
   const ids: string[] = [];
   for (let i = 0; i < n; i++) {
     const id = randomUUID();
-    await ds.query(
-      `INSERT INTO outbound_mail (id, dedupe_key, message_id, to_address, subject, body_text) VALUES ($1, $2, $3, $4, $5, $6)`,
-      [id, `test:${id}`, `<${id}@gelpoint.test>`, to, `Demold check ${i + 1}`, `Check the pour, mail ${i + 1}.`],
-    );
+    await ds.query(`INSERT INTO outbound_mail (id, dedupe_key, message_id, to_address, subject, body_text) VALUES ($1, $2, $3, $4, $5, $6)`, [
+      id,
+      `test:${id}`,
+      `<${id}@gelpoint.test>`,
+      to,
+      `Demold check ${i + 1}`,
+      `Check the pour, mail ${i + 1}.`,
+    ]);
     ids.push(id);
   }
   return ids;

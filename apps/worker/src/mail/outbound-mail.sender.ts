@@ -99,7 +99,13 @@ export async function releaseClaimedMail(ds: DataSource, ids: string[]): Promise
  * Sends everything due now, batch after batch, until nothing is left that this worker can claim.
  * When `stop` is aborted, the send under way finishes and is recorded; the rest is released.
  */
-export async function drainOutboundMail(ds: DataSource, transport: Transporter, s: MailSenderSettings, logger: Logger, stop?: AbortSignal): Promise<DrainResult> {
+export async function drainOutboundMail(
+  ds: DataSource,
+  transport: Transporter,
+  s: MailSenderSettings,
+  logger: Logger,
+  stop?: AbortSignal,
+): Promise<DrainResult> {
   const result: DrainResult = { sent: 0, failed: 0 };
   while (!stop?.aborted) {
     const claimed = await claimDueMail(ds, s);

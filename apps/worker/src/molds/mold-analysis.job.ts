@@ -57,7 +57,12 @@ function spawnAnalysisThread(): AnalysisThread {
   return thread;
 }
 
-function runThread(thread: AnalysisThread, req: AnalysisRequest, onProgress: (v: number) => void, stop?: AbortSignal): Promise<Extract<AnalysisMessage, { type: 'done' | 'refused' }>> {
+function runThread(
+  thread: AnalysisThread,
+  req: AnalysisRequest,
+  onProgress: (v: number) => void,
+  stop?: AbortSignal,
+): Promise<Extract<AnalysisMessage, { type: 'done' | 'refused' }>> {
   const w = thread.worker;
   return new Promise((resolve, reject) => {
     if (thread.failed) return reject(thread.failed);
@@ -114,11 +119,16 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
       void thread.worker.terminate();
       throw err;
     }
-    const outcome = await runThread(thread, { bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes }, (value) => {
-      // Sent without waiting, so two may reach the database out of order on different connections: progress only
-      // ever rises, and a late, lower one changes nothing (and announces nothing).
-      void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing' AND progress < $2`, [mold.id, value]).catch(() => undefined);
-    }, stop);
+    const outcome = await runThread(
+      thread,
+      { bytes, units: mold.units, up: mold.up_axis, maxTriangles: s.maxTriangles, maxUnpackedBytes: s.maxUnpackedBytes },
+      (value) => {
+        // Sent without waiting, so two may reach the database out of order on different connections: progress only
+        // ever rises, and a late, lower one changes nothing (and announces nothing).
+        void ds.query(`UPDATE molds SET progress = $2 WHERE id = $1 AND status = 'analysing' AND progress < $2`, [mold.id, value]).catch(() => undefined);
+      },
+      stop,
+    );
     // Units or up axis corrected while this ran: the mould is queued again and this outcome is of the old reading.
     const sameReading = 'AND units = $2 AND up_axis = $3';
     if (outcome.type === 'refused') {
@@ -139,7 +149,10 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
   } catch (err) {
     if (err instanceof AnalysisStopped) {
       // Not the mould's fault: queued again as it was, for whichever worker runs next.
-      await ds.query(`UPDATE molds SET status = 'queued', attempts = attempts - 1, progress = 0, locked_until = NULL, updated_at = now() WHERE id = $1 AND status = 'analysing'`, [mold.id]);
+      await ds.query(
+        `UPDATE molds SET status = 'queued', attempts = attempts - 1, progress = 0, locked_until = NULL, updated_at = now() WHERE id = $1 AND status = 'analysing'`,
+        [mold.id],
+      );
       log.info('stopping: mould analysis handed back to the queue');
       return false;
     }
@@ -147,7 +160,9 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
     const message = err instanceof Error ? err.message : String(err);
     await ds.query(
       `UPDATE molds SET status = $2, error_code = $3, error_message = $4, locked_until = NULL, updated_at = now() WHERE id = $1`,
-      giveUp ? [mold.id, 'failed', 'analysis_failed', `the analysis failed ${mold.attempts} times (${message}); upload the mould again or simplify it`] : [mold.id, 'queued', null, null],
+      giveUp
+        ? [mold.id, 'failed', 'analysis_failed', `the analysis failed ${mold.attempts} times (${message}); upload the mould again or simplify it`]
+        : [mold.id, 'queued', null, null],
     );
     log.error({ err: message, attempts: mold.attempts }, giveUp ? 'mould analysis failed for good' : 'mould analysis failed; queued again');
   }

@@ -32,7 +32,16 @@ parentPort!.once('message', (req: AnalysisRequest) => {
   if (!analysis.ok) return post({ type: 'refused', code: analysis.error.code, message: analysis.error.message });
   post({ type: 'progress', value: 0.9 });
   // Typed as the contract's report, so the shape the engine writes and the one the API answers cannot drift apart.
-  const { fillToTop: { depthMap, ...fillToTop }, ...summary } = cavityReport(analysis.value);
+  const {
+    fillToTop: { depthMap, ...fillToTop },
+    ...summary
+  } = cavityReport(analysis.value);
   const report: CavityReport = { ...summary, fillToTop };
-  post({ type: 'done', analysisJson: JSON.stringify(analysis.value), reportJson: JSON.stringify(report), depthMapJson: JSON.stringify(depthMap), triangles: analysis.value.triangles });
+  post({
+    type: 'done',
+    analysisJson: JSON.stringify(analysis.value),
+    reportJson: JSON.stringify(report),
+    depthMapJson: JSON.stringify(depthMap),
+    triangles: analysis.value.triangles,
+  });
 });

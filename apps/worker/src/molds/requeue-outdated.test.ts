@@ -20,11 +20,13 @@ describe('moulds analysed by an older engine', () => {
   it('go back in the queue, and current ones stay as they are', async () => {
     const [{ id: shop }] = (await ds.query(`INSERT INTO shops (name) VALUES ('Requeue shop') RETURNING id`)) as [{ id: string }];
     const mould = async (version: number) =>
-      ((await ds.query(
-        `INSERT INTO molds (shop_id, name, file_name, units, up_axis, size_bytes, sha256, status, analysis, analysed_at)
+      (
+        (await ds.query(
+          `INSERT INTO molds (shop_id, name, file_name, units, up_axis, size_bytes, sha256, status, analysis, analysed_at)
          VALUES ($1, 'm', 'm.stl', 'mm', 'z', 84, 'x', 'ready', $2, now()) RETURNING id`,
-        [shop, { kind: 'gelpoint-cavity-analysis', version }],
-      )) as [{ id: string }])[0].id;
+          [shop, { kind: 'gelpoint-cavity-analysis', version }],
+        )) as [{ id: string }]
+      )[0].id;
     const old = await mould(cavityAnalysisVersion - 1);
     const current = await mould(cavityAnalysisVersion);
     expect(await requeueOutdatedMolds(ds, pino({ level: 'silent' }))).toBeGreaterThanOrEqual(1);

@@ -33,7 +33,12 @@ export function digestDue(s: ShopRow, nowMs: number): string | null {
  * The shop row is locked while its digest is written and its day is recorded in the same transaction, and each mail
  * has the dedupe key digest:{shop}:{member}:{date}, so a restart or a second worker never sends one twice.
  */
-export async function sendMorningDigests(ds: DataSource, publicUrl: string, logger: Logger, options: { now?: () => Date; shopIds?: string[] } = {}): Promise<number> {
+export async function sendMorningDigests(
+  ds: DataSource,
+  publicUrl: string,
+  logger: Logger,
+  options: { now?: () => Date; shopIds?: string[] } = {},
+): Promise<number> {
   const domain = mailDomainOf(publicUrl);
   const now = options.now ?? (() => new Date());
   // A first look without locks (the zone arithmetic is luxon's, the same as everywhere else); each due shop is then

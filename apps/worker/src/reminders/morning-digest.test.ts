@@ -33,16 +33,30 @@ const at = (isoZ: string) => new Date(isoZ);
 /** A West Coast shop (day from 07:00, quiet from 21:00) with a pour naming two of its three active members. */
 async function westCoastShop() {
   const one = async (sql: string, params: unknown[]) => ((await ds.query(sql, params)) as { id: string }[])[0]!.id;
-  const shop = await one(`INSERT INTO shops (name, time_zone, day_start_hour, quiet_from_hour) VALUES ('Harbour Slab Works', 'America/Vancouver', 7, 21) RETURNING id`, []);
+  const shop = await one(
+    `INSERT INTO shops (name, time_zone, day_start_hour, quiet_from_hour) VALUES ('Harbour Slab Works', 'America/Vancouver', 7, 21) RETURNING id`,
+    [],
+  );
   const user = async (label: string, status = 'active') => {
-    const id = await one(`INSERT INTO users (email, name, password_hash) VALUES ($1, $2, 'x') RETURNING id`, [`${label}-${randomUUID().slice(0, 8)}@example.test`, label]);
+    const id = await one(`INSERT INTO users (email, name, password_hash) VALUES ($1, $2, 'x') RETURNING id`, [
+      `${label}-${randomUUID().slice(0, 8)}@example.test`,
+      label,
+    ]);
     await ds.query(`INSERT INTO memberships (user_id, shop_id, role, status) VALUES ($1, $2, 'maker', $3)`, [id, shop, status]);
     return id;
   };
   const [ana, ben, cy, dee] = [await user('ana'), await user('ben'), await user('cy', 'disabled'), await user('dee')];
   const piece = await one(`INSERT INTO pieces (shop_id, name) VALUES ($1, 'Walnut river table') RETURNING id`, [shop]);
-  const plan = await one(`INSERT INTO pour_plans (shop_id, piece_id, name, inputs, product_snapshot, result) VALUES ($1, $2, 'Deep pour', '{}', '{}', '{}') RETURNING id`, [shop, piece]);
-  const pour = await one(`INSERT INTO pours (shop_id, piece_id, pour_plan_id, assumed_temp_c, notify_user_ids) VALUES ($1, $2, $3, 21, $4) RETURNING id`, [shop, piece, plan, [ana, ben, cy]]);
+  const plan = await one(
+    `INSERT INTO pour_plans (shop_id, piece_id, name, inputs, product_snapshot, result) VALUES ($1, $2, 'Deep pour', '{}', '{}', '{}') RETURNING id`,
+    [shop, piece],
+  );
+  const pour = await one(`INSERT INTO pours (shop_id, piece_id, pour_plan_id, assumed_temp_c, notify_user_ids) VALUES ($1, $2, $3, 21, $4) RETURNING id`, [
+    shop,
+    piece,
+    plan,
+    [ana, ben, cy],
+  ]);
   const reminder = (kind: string, step: string, dueAt: Date, eventAt: Date, viaDigest: boolean, extra = '') =>
     one(
       `INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, event_at, lead_min, title, via_digest${extra ? ', done_at, status' : ''})
@@ -67,7 +81,10 @@ async function westCoastShop() {
 }
 
 type Mail = { dedupe_key: string; to_address: string; subject: string; body_text: string };
-const mailOf = (shop: string): Promise<Mail[]> => ds.query(`SELECT dedupe_key, to_address, subject, body_text FROM outbound_mail WHERE shop_id = $1 AND dedupe_key LIKE 'digest:%' ORDER BY to_address`, [shop]);
+const mailOf = (shop: string): Promise<Mail[]> =>
+  ds.query(`SELECT dedupe_key, to_address, subject, body_text FROM outbound_mail WHERE shop_id = $1 AND dedupe_key LIKE 'digest:%' ORDER BY to_address`, [
+    shop,
+  ]);
 
 describe('the morning digest', () => {
   it('waits for the start of the shop’s day by its own clock', async () => {
@@ -93,7 +110,9 @@ describe('the morning digest', () => {
     expect(text).not.toMatch(/GMT|UTC/);
     expect(text).toContain(`${url}/pours/${f.pour}`);
     expect(text).toMatch(/SDS and TDS/);
-    const status: { id: string; status: string; sent_at: Date | null }[] = await ds.query(`SELECT id, status, sent_at FROM reminders WHERE pour_id = $1`, [f.pour]);
+    const status: { id: string; status: string; sent_at: Date | null }[] = await ds.query(`SELECT id, status, sent_at FROM reminders WHERE pour_id = $1`, [
+      f.pour,
+    ]);
     const byId = new Map(status.map((r) => [r.id, r.status]));
     expect(byId.get(f.held)).toBe('sent');
     expect(byId.get(f.coming)).toBe('pending');

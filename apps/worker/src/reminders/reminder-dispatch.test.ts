@@ -29,17 +29,38 @@ async function pourWithReminders() {
   const one = async (sql: string, params: unknown[]) => ((await ds.query(sql, params)) as { id: string }[])[0]!.id;
   const shop = await one(`INSERT INTO shops (name) VALUES ('Reminder shop') RETURNING id`, []);
   const user = async (label: string, status: string) => {
-    const id = await one(`INSERT INTO users (email, name, password_hash) VALUES ($1, $2, 'x') RETURNING id`, [`${label}-${randomUUID().slice(0, 8)}@example.test`, label]);
+    const id = await one(`INSERT INTO users (email, name, password_hash) VALUES ($1, $2, 'x') RETURNING id`, [
+      `${label}-${randomUUID().slice(0, 8)}@example.test`,
+      label,
+    ]);
     await ds.query(`INSERT INTO memberships (user_id, shop_id, role, status) VALUES ($1, $2, 'maker', $3)`, [id, shop, status]);
     return id;
   };
   const people = [await user('ana', 'active'), await user('ben', 'active'), await user('cy', 'disabled')];
   const piece = await one(`INSERT INTO pieces (shop_id, name) VALUES ($1, 'Burl bowl') RETURNING id`, [shop]);
-  const plan = await one(`INSERT INTO pour_plans (shop_id, piece_id, name, inputs, product_snapshot, result) VALUES ($1, $2, 'Void fill', '{}', '{}', '{}') RETURNING id`, [shop, piece]);
-  const pour = await one(`INSERT INTO pours (shop_id, piece_id, pour_plan_id, assumed_temp_c, notify_user_ids) VALUES ($1, $2, $3, 21, $4) RETURNING id`, [shop, piece, plan, people]);
+  const plan = await one(
+    `INSERT INTO pour_plans (shop_id, piece_id, name, inputs, product_snapshot, result) VALUES ($1, $2, 'Void fill', '{}', '{}', '{}') RETURNING id`,
+    [shop, piece],
+  );
+  const pour = await one(`INSERT INTO pours (shop_id, piece_id, pour_plan_id, assumed_temp_c, notify_user_ids) VALUES ($1, $2, $3, 21, $4) RETURNING id`, [
+    shop,
+    piece,
+    plan,
+    people,
+  ]);
   const reminder = (kind: string, step: string, dueSql: string) =>
-    one(`INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, event_at, title) VALUES ($1, $2, $3, $4, ${dueSql}, ${dueSql}, $5) RETURNING id`, [shop, pour, kind, step, `Title ${kind}`]);
-  const due = [await reminder('demold_check', 'layer:2', `now() - interval '5 minutes'`), await reminder('next_layer_window_opens', 'layer:1', `now() - interval '2 hours'`), await reminder('ready_to_machine', 'layer:2', `now() - interval '1 minute'`)];
+    one(`INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, event_at, title) VALUES ($1, $2, $3, $4, ${dueSql}, ${dueSql}, $5) RETURNING id`, [
+      shop,
+      pour,
+      kind,
+      step,
+      `Title ${kind}`,
+    ]);
+  const due = [
+    await reminder('demold_check', 'layer:2', `now() - interval '5 minutes'`),
+    await reminder('next_layer_window_opens', 'layer:1', `now() - interval '2 hours'`),
+    await reminder('ready_to_machine', 'layer:2', `now() - interval '1 minute'`),
+  ];
   const later = await reminder('finish_coat_due', 'finish:1', `now() + interval '3 days'`);
   return { shop, people, pour, due, later };
 }
@@ -49,7 +70,10 @@ describe('reminder dispatch', () => {
     const f = await pourWithReminders();
     await Promise.all([dispatchDueReminders(ds, 'http://127.0.0.1:8080', logger, 1), dispatchDueReminders(second, 'http://127.0.0.1:8080', logger, 1)]);
     await dispatchDueReminders(ds, 'http://127.0.0.1:8080', logger);
-    const mail: { dedupe_key: string; subject: string; body_text: string }[] = await ds.query(`SELECT dedupe_key, subject, body_text FROM outbound_mail WHERE shop_id = $1 ORDER BY dedupe_key`, [f.shop]);
+    const mail: { dedupe_key: string; subject: string; body_text: string }[] = await ds.query(
+      `SELECT dedupe_key, subject, body_text FROM outbound_mail WHERE shop_id = $1 ORDER BY dedupe_key`,
+      [f.shop],
+    );
     expect(mail).toHaveLength(f.due.length * 2);
     expect(new Set(mail.map((m) => m.dedupe_key)).size).toBe(mail.length);
     expect(mail.every((m) => !m.dedupe_key.endsWith(f.people[2]!))).toBe(true);
@@ -63,12 +87,25 @@ describe('reminder dispatch', () => {
 describe('reminder mail', () => {
   it('writes the step’s time in the shop’s zone with its abbreviation, and says why a night window comes the evening before', async () => {
     const one = async (sql: string, params: unknown[]) => ((await ds.query(sql, params)) as { id: string }[])[0]!.id;
-    const shop = await one(`INSERT INTO shops (name, time_zone, day_start_hour, quiet_from_hour) VALUES ('Pacific shop', 'America/Vancouver', 7, 21) RETURNING id`, []);
-    const user = await one(`INSERT INTO users (email, name, password_hash) VALUES ($1, 'Ana', 'x') RETURNING id`, [`ana-${randomUUID().slice(0, 8)}@example.test`]);
+    const shop = await one(
+      `INSERT INTO shops (name, time_zone, day_start_hour, quiet_from_hour) VALUES ('Pacific shop', 'America/Vancouver', 7, 21) RETURNING id`,
+      [],
+    );
+    const user = await one(`INSERT INTO users (email, name, password_hash) VALUES ($1, 'Ana', 'x') RETURNING id`, [
+      `ana-${randomUUID().slice(0, 8)}@example.test`,
+    ]);
     await ds.query(`INSERT INTO memberships (user_id, shop_id, role, status) VALUES ($1, $2, 'maker', 'active')`, [user, shop]);
     const piece = await one(`INSERT INTO pieces (shop_id, name) VALUES ($1, 'Cedar slab') RETURNING id`, [shop]);
-    const plan = await one(`INSERT INTO pour_plans (shop_id, piece_id, name, inputs, product_snapshot, result) VALUES ($1, $2, 'Fill', '{}', '{}', '{}') RETURNING id`, [shop, piece]);
-    const pour = await one(`INSERT INTO pours (shop_id, piece_id, pour_plan_id, assumed_temp_c, notify_user_ids) VALUES ($1, $2, $3, 21, $4) RETURNING id`, [shop, piece, plan, [user]]);
+    const plan = await one(
+      `INSERT INTO pour_plans (shop_id, piece_id, name, inputs, product_snapshot, result) VALUES ($1, $2, 'Fill', '{}', '{}', '{}') RETURNING id`,
+      [shop, piece],
+    );
+    const pour = await one(`INSERT INTO pours (shop_id, piece_id, pour_plan_id, assumed_temp_c, notify_user_ids) VALUES ($1, $2, $3, 21, $4) RETURNING id`, [
+      shop,
+      piece,
+      plan,
+      [user],
+    ]);
     // Closes 02:00 PST on 4 December 2026 (10:00Z); announced as quiet hours began, 21:00 PST (05:00Z), 5 h ahead.
     const id = await one(
       `INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, event_at, lead_min, title) VALUES ($1, $2, 'next_layer_window_closes', 'layer:1', '2026-12-04T05:00:00Z', '2026-12-04T10:00:00Z', 300, 'Next layer window closes: Cedar slab, layer 1') RETURNING id`,

@@ -19,7 +19,11 @@ export interface DueReminder {
   quiet_from_hour: number;
 }
 
-export const hoursOfRow = (r: Pick<DueReminder, 'time_zone' | 'day_start_hour' | 'quiet_from_hour'>): ShopHours => ({ zone: r.time_zone, dayStartHour: r.day_start_hour, quietFromHour: r.quiet_from_hour });
+export const hoursOfRow = (r: Pick<DueReminder, 'time_zone' | 'day_start_hour' | 'quiet_from_hour'>): ShopHours => ({
+  zone: r.time_zone,
+  dayStartHour: r.day_start_hour,
+  quietFromHour: r.quiet_from_hour,
+});
 
 /** "45 min", "5 h", "5 h 30 min". */
 export function durationWords(min: number): string {

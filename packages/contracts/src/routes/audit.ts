@@ -11,5 +11,13 @@ export const auditRoutes = {
     query: AuditListQuery,
     response: AuditList,
   }),
-  exportAudit: route({ method: 'get', path: '/audit/export', tag: 'audit', summary: 'The audit as CSV (text/csv), with the same filters as the list', access: 'audit:read', query: AuditExportQuery, raw: true }),
+  exportAudit: route({
+    method: 'get',
+    path: '/audit/export',
+    tag: 'audit',
+    summary: 'The audit as CSV (text/csv), with the same filters as the list',
+    access: 'audit:read',
+    query: AuditExportQuery,
+    raw: true,
+  }),
 };

@@ -15,5 +15,12 @@ export const calendarRoutes = {
     params: CalendarFeedParams,
     raw: true,
   }),
-  rotateCalendar: route({ method: 'post', path: '/me/calendar/rotate', tag: 'calendar', summary: 'Replace your calendar feed URL: the old one answers 404 from now on', access: 'member', response: CalendarUrl }),
+  rotateCalendar: route({
+    method: 'post',
+    path: '/me/calendar/rotate',
+    tag: 'calendar',
+    summary: 'Replace your calendar feed URL: the old one answers 404 from now on',
+    access: 'member',
+    response: CalendarUrl,
+  }),
 };

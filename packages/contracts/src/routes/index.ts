@@ -12,7 +12,21 @@ import { shopRoutes } from './shop';
 import { teamRoutes } from './team';
 
 export * from './route';
-export { auditRoutes, authRoutes, calendarRoutes, exothermRoutes, healthRoutes, moldRoutes, pieceRoutes, pourPlanRoutes, pourExportRoutes, pourRoutes, shelfRoutes, shopRoutes, teamRoutes };
+export {
+  auditRoutes,
+  authRoutes,
+  calendarRoutes,
+  exothermRoutes,
+  healthRoutes,
+  moldRoutes,
+  pieceRoutes,
+  pourPlanRoutes,
+  pourExportRoutes,
+  pourRoutes,
+  shelfRoutes,
+  shopRoutes,
+  teamRoutes,
+};
 export { CalendarFeedParams, CalendarUrl } from './calendar';
 export { CureCheckParams, LoggedBatch } from './pours';
 

@@ -1,4 +1,16 @@
-import { FillQuery, LayerVolumes, LayerVolumesQuery, MoldDepthMap, MoldFill, MoldList, MoldListQuery, MoldProgressEvent, MoldUploadFields, MoldView, UpdateMoldRequest } from '../molds';
+import {
+  FillQuery,
+  LayerVolumes,
+  LayerVolumesQuery,
+  MoldDepthMap,
+  MoldFill,
+  MoldList,
+  MoldListQuery,
+  MoldProgressEvent,
+  MoldUploadFields,
+  MoldView,
+  UpdateMoldRequest,
+} from '../molds';
 import { IdParams, route } from './route';
 
 export const moldRoutes = {
@@ -6,20 +18,38 @@ export const moldRoutes = {
     method: 'post',
     path: '/molds',
     tag: 'molds',
-    summary: "Upload a mould file, STL, 3MF or OBJ told apart by content (multipart: file, units, up, name, pieceId; without units a 3MF is read in its own unit, other files in mm); the analysis runs in the background",
+    summary:
+      'Upload a mould file, STL, 3MF or OBJ told apart by content (multipart: file, units, up, name, pieceId; without units a 3MF is read in its own unit, other files in mm); the analysis runs in the background',
     access: 'mold:change',
     body: MoldUploadFields,
     response: MoldView,
     status: 202,
     idempotent: true,
   }),
-  listMolds: route({ method: 'get', path: '/molds', tag: 'molds', summary: 'Moulds of the shop, newest first', access: 'member', query: MoldListQuery, response: MoldList }),
-  getMold: route({ method: 'get', path: '/molds/:id', tag: 'molds', summary: 'A mould: analysis status and progress, and its cavity report when ready', access: 'member', params: IdParams, response: MoldView }),
+  listMolds: route({
+    method: 'get',
+    path: '/molds',
+    tag: 'molds',
+    summary: 'Moulds of the shop, newest first',
+    access: 'member',
+    query: MoldListQuery,
+    response: MoldList,
+  }),
+  getMold: route({
+    method: 'get',
+    path: '/molds/:id',
+    tag: 'molds',
+    summary: 'A mould: analysis status and progress, and its cavity report when ready',
+    access: 'member',
+    params: IdParams,
+    response: MoldView,
+  }),
   updateMold: route({
     method: 'patch',
     path: '/molds/:id',
     tag: 'molds',
-    summary: "Rename a mould, attach it to a piece (pieceId) or detach it (null), or correct its units or up axis: a new frame reads the stored file again in the background, as an upload does",
+    summary:
+      'Rename a mould, attach it to a piece (pieceId) or detach it (null), or correct its units or up axis: a new frame reads the stored file again in the background, as an upload does',
     access: 'mold:change',
     params: IdParams,
     body: UpdateMoldRequest,
@@ -29,7 +59,8 @@ export const moldRoutes = {
     method: 'get',
     path: '/molds/:id/fill',
     tag: 'molds',
-    summary: "Fill at a level with a dam, from the stored analysis. The level is the height of the resin surface above the cavity floor (from=floor, the default) or in the mould's own frame (from=mould); the answer gives it both ways",
+    summary:
+      "Fill at a level with a dam, from the stored analysis. The level is the height of the resin surface above the cavity floor (from=floor, the default) or in the mould's own frame (from=mould); the answer gives it both ways",
     access: 'member',
     params: IdParams,
     query: FillQuery,
@@ -60,13 +91,22 @@ export const moldRoutes = {
     method: 'get',
     path: '/molds/:id/depth-map',
     tag: 'molds',
-    summary: "The depth map of the report's fill to the top (resin thickness per column, with the report's dam). Carries a strong ETag: send it back in If-None-Match and an unchanged map answers 304 with no body",
+    summary:
+      "The depth map of the report's fill to the top (resin thickness per column, with the report's dam). Carries a strong ETag: send it back in If-None-Match and an unchanged map answers 304 with no body",
     access: 'member',
     params: IdParams,
     response: MoldDepthMap,
     conditional: true,
   }),
-  moldFile: route({ method: 'get', path: '/molds/:id/stl', tag: 'molds', summary: 'The uploaded mould file (STL, 3MF or OBJ) as it came, as a download', access: 'member', params: IdParams, raw: true }),
+  moldFile: route({
+    method: 'get',
+    path: '/molds/:id/stl',
+    tag: 'molds',
+    summary: 'The uploaded mould file (STL, 3MF or OBJ) as it came, as a download',
+    access: 'member',
+    params: IdParams,
+    raw: true,
+  }),
   deleteMold: route({
     method: 'delete',
     path: '/molds/:id',

@@ -22,7 +22,10 @@ const stamp = Date.now();
 const cls = `${name}${stamp}`;
 const q = (s: string) => '`' + s.replace(/\\/g, '\\\\').replace(/`/g, '\\`').replace(/\$\{/g, '\\${') + '`';
 const up = sql.upQueries.map((x) => `    await queryRunner.query(${q(x.query)});`).join('\n');
-const down = [...sql.downQueries].reverse().map((x) => `    await queryRunner.query(${q(x.query)});`).join('\n');
+const down = [...sql.downQueries]
+  .reverse()
+  .map((x) => `    await queryRunner.query(${q(x.query)});`)
+  .join('\n');
 const file = `${stamp}-${name.charAt(0).toLowerCase()}${name.slice(1)}`;
 const dir = fileURLToPath(new URL('../migrations/', import.meta.url));
 writeFileSync(
@@ -45,9 +48,13 @@ ${down}
 const indexPath = `${dir}index.ts`;
 const index = readFileSync(indexPath, 'utf8')
   .replace(/^(\/\/.*\n)/, `$1import { ${cls} } from './${file}';\n`)
-  .replace(/export const migrations: Function\[\] = \[(.*)\];/, (_m, list: string) => {
-    const items = list.split(',').map((s) => s.trim()).filter(Boolean);
-    return `export const migrations: Function[] = [${[...items, cls].join(', ')}];`;
+  // The list may span lines (the formatter wraps it): read it whole, write it one class per line.
+  .replace(/export const migrations: Function\[\] = \[([^\]]*)\];/, (_m, list: string) => {
+    const items = list
+      .split(',')
+      .map((s) => s.trim())
+      .filter(Boolean);
+    return `export const migrations: Function[] = [\n${[...items, cls].map((c) => `  ${c},`).join('\n')}\n];`;
   });
 writeFileSync(indexPath, index);
 console.log(`wrote packages/db/src/migrations/${file}.ts`);

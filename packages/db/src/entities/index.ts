@@ -21,7 +21,30 @@ import { Reminder } from './reminder.entity';
 import { RateLimitCounter } from './rate-limit-counter.entity';
 import { IdempotencyKey } from './idempotency-key.entity';
 
-export { AuditEvent, CureCheck, IdempotencyKey, Invitation, Lot, Pour, PourBatch, Reminder, TemperatureReading, Membership, Mold, MoldFile, OutboundMail, PasswordReset, Piece, Pigment, PourPlan, RateLimitCounter, ResinSystem, Session, Shop, User };
+export {
+  AuditEvent,
+  CureCheck,
+  IdempotencyKey,
+  Invitation,
+  Lot,
+  Pour,
+  PourBatch,
+  Reminder,
+  TemperatureReading,
+  Membership,
+  Mold,
+  MoldFile,
+  OutboundMail,
+  PasswordReset,
+  Piece,
+  Pigment,
+  PourPlan,
+  RateLimitCounter,
+  ResinSystem,
+  Session,
+  Shop,
+  User,
+};
 export type { MoldFormat, MoldStatus, MoldUnits, UpAxis } from './mold.entity';
 export type { ResinUse } from './resin-system.entity';
 export type { LotPart } from './lot.entity';
@@ -33,4 +56,27 @@ export type { PieceStage } from './piece.entity';
 export type { OutboundMailStatus } from './outbound-mail.entity';
 export type { ShopTemperatureProfile } from './shop.entity';
 
-export const entities = [Shop, User, Membership, Invitation, PasswordReset, Session, Piece, AuditEvent, OutboundMail, Mold, MoldFile, ResinSystem, Pigment, Lot, PourPlan, Pour, PourBatch, TemperatureReading, CureCheck, Reminder, RateLimitCounter, IdempotencyKey];
+export const entities = [
+  Shop,
+  User,
+  Membership,
+  Invitation,
+  PasswordReset,
+  Session,
+  Piece,
+  AuditEvent,
+  OutboundMail,
+  Mold,
+  MoldFile,
+  ResinSystem,
+  Pigment,
+  Lot,
+  PourPlan,
+  Pour,
+  PourBatch,
+  TemperatureReading,
+  CureCheck,
+  Reminder,
+  RateLimitCounter,
+  IdempotencyKey,
+];

@@ -9,7 +9,10 @@ export type LotPart = 'A' | 'B' | 'pigment';
 /** A received container of part A, part B or a pigment: traced into batches, drawn down by them. */
 @Entity({ name: 'lots' })
 @Check('lots_part_check', `part IN ('A', 'B', 'pigment')`)
-@Check('lots_product_check', `(part = 'pigment' AND pigment_id IS NOT NULL AND resin_system_id IS NULL) OR (part IN ('A', 'B') AND resin_system_id IS NOT NULL AND pigment_id IS NULL)`)
+@Check(
+  'lots_product_check',
+  `(part = 'pigment' AND pigment_id IS NOT NULL AND resin_system_id IS NULL) OR (part IN ('A', 'B') AND resin_system_id IS NOT NULL AND pigment_id IS NULL)`,
+)
 @Check('lots_quantity_check', `quantity_g > 0`)
 @Index('lots_shop_expires_idx', ['shopId', 'expiresOn'])
 @Index('lots_shop_number_idx', ['shopId', 'lotNumber'])

@@ -8,7 +8,10 @@ export type ResinUse = 'seal' | 'deep_pour' | 'casting' | 'coating';
 @Entity({ name: 'resin_systems' })
 @Check('resin_systems_use_check', `use IN ('seal', 'deep_pour', 'casting', 'coating')`)
 @Check('resin_systems_ratio_basis_check', `ratio_basis IN ('weight', 'volume')`)
-@Check('resin_systems_exotherm_check', `(reaction_heat_j_per_g IS NULL OR reaction_heat_j_per_g > 0) AND (thin_film_gel_min IS NULL OR thin_film_gel_min > 0) AND (heat_capacity_j_per_gk IS NULL OR heat_capacity_j_per_gk > 0) AND (conductivity_w_per_mk IS NULL OR conductivity_w_per_mk > 0) AND (accepted_peak_c IS NULL OR accepted_peak_c > reference_temp_c)`)
+@Check(
+  'resin_systems_exotherm_check',
+  `(reaction_heat_j_per_g IS NULL OR reaction_heat_j_per_g > 0) AND (thin_film_gel_min IS NULL OR thin_film_gel_min > 0) AND (heat_capacity_j_per_gk IS NULL OR heat_capacity_j_per_gk > 0) AND (conductivity_w_per_mk IS NULL OR conductivity_w_per_mk > 0) AND (accepted_peak_c IS NULL OR accepted_peak_c > reference_temp_c)`,
+)
 @Index('resin_systems_shop_name_idx', ['shopId', 'name'])
 export class ResinSystem {
   @PrimaryGeneratedColumn('uuid', { primaryKeyConstraintName: 'resin_systems_pkey' }) id!: string;

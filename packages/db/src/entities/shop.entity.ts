@@ -2,9 +2,7 @@ import { Check, Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
 import { CreatedAt, UpdatedAt } from './columns';
 
 export type ShopTemperatureProfile =
-  | { mode: 'plan' }
-  | { mode: 'day_night'; dayTempC: number; nightTempC: number; dayStartHour: number; nightStartHour: number }
-  | { mode: 'learned' };
+  { mode: 'plan' } | { mode: 'day_night'; dayTempC: number; nightTempC: number; dayStartHour: number; nightStartHour: number } | { mode: 'learned' };
 
 @Entity({ name: 'shops' })
 @Check('shops_unit_system_check', `unit_system IN ('metric', 'us')`)

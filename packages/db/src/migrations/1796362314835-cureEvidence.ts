@@ -17,7 +17,9 @@ export class CureEvidence1796362314835 implements MigrationInterface {
     await queryRunner.query(`UPDATE "reminders" SET "event_at" = "due_at"`);
     await queryRunner.query(`ALTER TABLE "reminders" ALTER COLUMN "event_at" SET NOT NULL`);
     await queryRunner.query(`ALTER TABLE "reminders" ADD "lead_min" integer NOT NULL DEFAULT '0'`);
-    await queryRunner.query(`ALTER TABLE "shops" ADD CONSTRAINT "shops_window_close_lead_check" CHECK (window_close_lead_min >= 0 AND window_close_lead_min <= 720)`);
+    await queryRunner.query(
+      `ALTER TABLE "shops" ADD CONSTRAINT "shops_window_close_lead_check" CHECK (window_close_lead_min >= 0 AND window_close_lead_min <= 720)`,
+    );
     await queryRunner.query(`ALTER TABLE "shops" ADD CONSTRAINT "shops_reading_carry_check" CHECK (reading_carry_h >= 0 AND reading_carry_h <= 48)`);
   }
 

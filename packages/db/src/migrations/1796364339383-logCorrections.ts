@@ -18,7 +18,9 @@ export class LogCorrections1796364339383 implements MigrationInterface {
     await queryRunner.query(`ALTER TABLE "reminders" ADD CONSTRAINT "reminders_done_how_check" CHECK (done_how IN ('logged', 'marked'))`);
     // One live row per moment and per run-sheet place; voided rows stay beside it as history.
     await queryRunner.query(`DROP INDEX "public"."temperature_readings_pour_time_key"`);
-    await queryRunner.query(`CREATE UNIQUE INDEX "temperature_readings_pour_time_key" ON "temperature_readings" ("pour_id", "taken_at") WHERE voided_at IS NULL`);
+    await queryRunner.query(
+      `CREATE UNIQUE INDEX "temperature_readings_pour_time_key" ON "temperature_readings" ("pour_id", "taken_at") WHERE voided_at IS NULL`,
+    );
     await queryRunner.query(`DROP INDEX "public"."pour_batches_pour_index_key"`);
     await queryRunner.query(`CREATE UNIQUE INDEX "pour_batches_pour_index_key" ON "pour_batches" ("pour_id", "plan_batch_index") WHERE voided_at IS NULL`);
   }

@@ -7,11 +7,15 @@ export class PlansKeepTheirMould1796368426009 implements MigrationInterface {
 
   async up(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query(`ALTER TABLE "pour_plans" DROP CONSTRAINT "pour_plans_mold_fk"`);
-    await queryRunner.query(`ALTER TABLE "pour_plans" ADD CONSTRAINT "pour_plans_mold_fk" FOREIGN KEY ("mold_id") REFERENCES "molds"("id") ON DELETE NO ACTION ON UPDATE NO ACTION`);
+    await queryRunner.query(
+      `ALTER TABLE "pour_plans" ADD CONSTRAINT "pour_plans_mold_fk" FOREIGN KEY ("mold_id") REFERENCES "molds"("id") ON DELETE NO ACTION ON UPDATE NO ACTION`,
+    );
   }
 
   async down(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query(`ALTER TABLE "pour_plans" DROP CONSTRAINT "pour_plans_mold_fk"`);
-    await queryRunner.query(`ALTER TABLE "pour_plans" ADD CONSTRAINT "pour_plans_mold_fk" FOREIGN KEY ("mold_id") REFERENCES "molds"("id") ON DELETE SET NULL ON UPDATE NO ACTION`);
+    await queryRunner.query(
+      `ALTER TABLE "pour_plans" ADD CONSTRAINT "pour_plans_mold_fk" FOREIGN KEY ("mold_id") REFERENCES "molds"("id") ON DELETE SET NULL ON UPDATE NO ACTION`,
+    );
   }
 }

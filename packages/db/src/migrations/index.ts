@@ -13,4 +13,19 @@ import { RateLimitCounters1796175582050 } from './1796175582050-rateLimitCounter
 import { PoursCureLogReminders1796169088290 } from './1796169088290-poursCureLogReminders';
 import { MoldsShelfPourPlans1796168546354 } from './1796168546354-moldsShelfPourPlans';
 import { Foundation1796166861733 } from './1796166861733-foundation';
-export const migrations: Function[] = [Foundation1796166861733, MoldsShelfPourPlans1796168546354, PoursCureLogReminders1796169088290, RateLimitCounters1796175582050, CureEvidence1796362314835, LogCorrections1796364339383, AddMouldFormat1796364415007, ShopCurrency1796364505780, PlansKeepTheirMould1796368426009, ShopClock1796369837636, MorningDigest1796370824938, IdempotencyKeys1796371067731, ExothermSettings1796375729058, MouldDepthMapApart1796375915921];
+export const migrations: Function[] = [
+  Foundation1796166861733,
+  MoldsShelfPourPlans1796168546354,
+  PoursCureLogReminders1796169088290,
+  RateLimitCounters1796175582050,
+  CureEvidence1796362314835,
+  LogCorrections1796364339383,
+  AddMouldFormat1796364415007,
+  ShopCurrency1796364505780,
+  PlansKeepTheirMould1796368426009,
+  ShopClock1796369837636,
+  MorningDigest1796370824938,
+  IdempotencyKeys1796371067731,
+  ExothermSettings1796375729058,
+  MouldDepthMapApart1796375915921,
+];

@@ -38,7 +38,10 @@ export async function seedDemoMould(m: EntityManager, shopId: string, people: Ma
   const read = valueOf(analyzeMouldFile(bytes, { units: 'mm', up: 'z' }));
   // Stored and read back as the worker and the API do, so the plan comes from what the database holds.
   const storedAnalysis = JSON.parse(JSON.stringify(read.analysis)) as Record<string, unknown>;
-  const { fillToTop: { depthMap, ...fillToTop }, ...summary } = cavityReport(read.analysis);
+  const {
+    fillToTop: { depthMap, ...fillToTop },
+    ...summary
+  } = cavityReport(read.analysis);
   // The depth map is kept apart from the report, as the worker keeps it.
   const report = JSON.parse(JSON.stringify({ ...summary, fillToTop })) as Record<string, unknown>;
   const mold = await m.save(
@@ -107,7 +110,14 @@ export async function seedDemoMould(m: EntityManager, shopId: string, people: Ma
   );
   await m.save(
     m.create(PourPlan, {
-      shopId, pieceId: piece.id, moldId: mold.id, name: demoMould.planName, inputs, productSnapshot: snapshot, result: result as unknown as Record<string, unknown>, createdById: maker.id,
+      shopId,
+      pieceId: piece.id,
+      moldId: mold.id,
+      name: demoMould.planName,
+      inputs,
+      productSnapshot: snapshot,
+      result: result as unknown as Record<string, unknown>,
+      createdById: maker.id,
     }),
   );
 }

@@ -72,13 +72,15 @@ export function demoMouldMesh(spec: DemoMouldSpec = demoMouldSpec): DemoMouldMes
   };
   const floor: { x: number; y: number; raw: number }[][] = [];
   const centreRaw = heightAt(0, 0, 0);
-  let lowRaw = centreRaw, highRaw = centreRaw;
+  let lowRaw = centreRaw,
+    highRaw = centreRaw;
   for (let k = 1; k <= spec.floorRings; k++) {
     const fraction = k / spec.floorRings;
     floor.push(
       angles.map((phi, j) => {
         const r = shoreRadius[j]! * fraction;
-        const x = r * Math.cos(phi), y = r * Math.sin(phi);
+        const x = r * Math.cos(phi),
+          y = r * Math.sin(phi);
         const raw = heightAt(x, y, fraction);
         lowRaw = Math.min(lowRaw, raw);
         highRaw = Math.max(highRaw, raw);

@@ -1,5 +1,15 @@
 import type { EntityManager } from 'typeorm';
-import { buildPourPlan, channelCavity, cureState, plannedBatches, planSteps, rectangleCavity, stepKeyOf, wantedReminders, type PlanSnapshot } from '@gelpoint/core';
+import {
+  buildPourPlan,
+  channelCavity,
+  cureState,
+  plannedBatches,
+  planSteps,
+  rectangleCavity,
+  stepKeyOf,
+  wantedReminders,
+  type PlanSnapshot,
+} from '@gelpoint/core';
 import { Lot, Pigment, Piece, Pour, PourBatch, PourPlan, Reminder, ResinSystem, TemperatureReading, User } from '../entities';
 import { toCorePigment, toCoreResinSystem } from '../shelf-values';
 
@@ -93,9 +103,28 @@ export async function seedDemoPours(m: EntityManager, shopId: string, people: Ma
     });
     if (!planned.ok) throw new Error(planned.error.message);
     const plan = await m.save(
-      m.create(PourPlan, { shopId, pieceId: piece.id, moldId: null, name: d.planName, inputs, productSnapshot: snapshot, result: planned.value as unknown as Record<string, unknown>, createdById: maker.id }),
+      m.create(PourPlan, {
+        shopId,
+        pieceId: piece.id,
+        moldId: null,
+        name: d.planName,
+        inputs,
+        productSnapshot: snapshot,
+        result: planned.value as unknown as Record<string, unknown>,
+        createdById: maker.id,
+      }),
     );
-    const pour = await m.save(m.create(Pour, { shopId, pieceId: piece.id, pourPlanId: plan.id, status: 'open', assumedTempC: d.tempC, notifyUserIds: [maker.id, lead.id], startedById: apprentice.id }));
+    const pour = await m.save(
+      m.create(Pour, {
+        shopId,
+        pieceId: piece.id,
+        pourPlanId: plan.id,
+        status: 'open',
+        assumedTempC: d.tempC,
+        notifyUserIds: [maker.id, lead.id],
+        startedById: apprentice.id,
+      }),
+    );
 
     const logged: { step: string; mixedAt: Date }[] = [];
     for (const b of plannedBatches(planned.value)) {
@@ -105,11 +134,31 @@ export async function seedDemoPours(m: EntityManager, shopId: string, people: Ma
       const [lotA, lotB] = [await lotOf('A', product.id), await lotOf('B', product.id)];
       await m.save(
         m.create(PourBatch, {
-          shopId, pourId: pour.id, planBatchIndex: b.index, step: stepKeyOf(b), mixedById: apprentice.id, mixedAt,
-          lotAId: lotA.id, lotBId: lotB.id, lotPigmentId: null, lotANumber: lotA.lotNumber, lotBNumber: lotB.lotNumber, lotPigmentNumber: b.pigment.grams > 0 ? 'STM-0917' : '',
-          targetAG: b.partA.grams, targetBG: b.partB.grams, targetPigmentG: b.pigment.grams,
-          weighedAG: b.partA.grams, weighedBG: b.partB.grams, weighedPigmentG: b.pigment.grams, offRatioPct: 0,
-          ambientTempC: d.tempC, surfaceTempC: d.tempC - 0.5, rhPct: 45, dewPointC: null, warnings: [], notes: '',
+          shopId,
+          pourId: pour.id,
+          planBatchIndex: b.index,
+          step: stepKeyOf(b),
+          mixedById: apprentice.id,
+          mixedAt,
+          lotAId: lotA.id,
+          lotBId: lotB.id,
+          lotPigmentId: null,
+          lotANumber: lotA.lotNumber,
+          lotBNumber: lotB.lotNumber,
+          lotPigmentNumber: b.pigment.grams > 0 ? 'STM-0917' : '',
+          targetAG: b.partA.grams,
+          targetBG: b.partB.grams,
+          targetPigmentG: b.pigment.grams,
+          weighedAG: b.partA.grams,
+          weighedBG: b.partB.grams,
+          weighedPigmentG: b.pigment.grams,
+          offRatioPct: 0,
+          ambientTempC: d.tempC,
+          surfaceTempC: d.tempC - 0.5,
+          rhPct: 45,
+          dewPointC: null,
+          warnings: [],
+          notes: '',
         }),
       );
       logged.push({ step: stepKeyOf(b), mixedAt });
@@ -126,7 +175,21 @@ export async function seedDemoPours(m: EntityManager, shopId: string, people: Ma
     for (const w of wantedReminders(state, piece.name, new Date(now), null)) {
       const past = w.dueAt.getTime() <= now;
       const status = past ? d.pastReminders : 'pending';
-      await m.save(m.create(Reminder, { shopId, pourId: pour.id, kind: w.kind, step: w.step, dueAt: w.dueAt, eventAt: w.eventAt, leadMin: w.leadMin, assumed: w.assumed, title: w.title, status, sentAt: status === 'sent' ? w.dueAt : null }));
+      await m.save(
+        m.create(Reminder, {
+          shopId,
+          pourId: pour.id,
+          kind: w.kind,
+          step: w.step,
+          dueAt: w.dueAt,
+          eventAt: w.eventAt,
+          leadMin: w.leadMin,
+          assumed: w.assumed,
+          title: w.title,
+          status,
+          sentAt: status === 'sent' ? w.dueAt : null,
+        }),
+      );
     }
   }
 }

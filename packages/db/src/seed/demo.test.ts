@@ -138,7 +138,12 @@ describe('the demo mould', () => {
 
   it('has a pour plan made from it: sealed, filled to the rim, its layers and seal coat consistent with the curve', async () => {
     const plan = await ds.getRepository(PourPlan).findOneByOrFail({ moldId: mold.id });
-    const inputs = plan.inputs as { cavity: unknown; fillLevelMm: number; levelFrom: string; sealCoat: { filmThicknessMm: number; coats: number; absorptionFactor: number } };
+    const inputs = plan.inputs as {
+      cavity: unknown;
+      fillLevelMm: number;
+      levelFrom: string;
+      sealCoat: { filmThicknessMm: number; coats: number; absorptionFactor: number };
+    };
     expect(plan.pieceId).toBe(mold.pieceId);
     expect(inputs.cavity).toEqual({ source: 'mold', moldId: mold.id, dam: 'outline' });
     // The level is stored with its datum: the rim (z = 60 mm) above the floor (z = 20 mm, the file's lowest floor corner).

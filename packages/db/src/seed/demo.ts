@@ -57,7 +57,11 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
     // On the Pacific coast: its clock is Vancouver's, and its unheated nights cool the shop by three degrees.
     const shop = await m.save(
       m.create(Shop, {
-        name: 'Kettle Creek Woodworks', unitSystem: 'metric', scaleResolutionG: 0.1, currency: 'CAD', timeZone: 'America/Vancouver',
+        name: 'Kettle Creek Woodworks',
+        unitSystem: 'metric',
+        scaleResolutionG: 0.1,
+        currency: 'CAD',
+        timeZone: 'America/Vancouver',
         temperatureProfile: { mode: 'day_night', dayTempC: 21.5, nightTempC: 18.5, dayStartHour: 7, nightStartHour: 19 },
       }),
     );
@@ -69,9 +73,7 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
       await m.save(m.create(Membership, { userId: user.id, shopId: shop.id, role: p.role, status: 'active' }));
     }
     for (const p of pieces) {
-      await m.save(
-        m.create(Piece, { shopId: shop.id, name: p.name, wood: p.wood, notes: p.notes, stage: p.stage, createdById: users.get(p.by)!.id }),
-      );
+      await m.save(m.create(Piece, { shopId: shop.id, name: p.name, wood: p.wood, notes: p.notes, stage: p.stage, createdById: users.get(p.by)!.id }));
     }
     await seedDemoShelf(m, shop.id);
     await seedDemoPours(m, shop.id, users);

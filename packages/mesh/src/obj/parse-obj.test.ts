@@ -13,10 +13,14 @@ const text = (s: string): Uint8Array => new TextEncoder().encode(s);
 // A five-pointed star, outer radius 20, inner 8, counter-clockwise seen from +z. It is 2n
 // triangles from its centre, each with sides Ro and Ri at angle π/n, so by the triangle area
 // ½ab sin C (CRC Concise Encyclopedia of Mathematics) its area is n·Ro·Ri·sin(π/n).
-const n = 5, Ro = 20, Ri = 8, H = 12;
+const n = 5,
+  Ro = 20,
+  Ri = 8,
+  H = 12;
 const starArea = n * Ro * Ri * Math.sin(Math.PI / n);
 const star: [number, number][] = Array.from({ length: 2 * n }, (_, k) => {
-  const rho = k % 2 === 0 ? Ro : Ri, phi = (Math.PI * k) / n;
+  const rho = k % 2 === 0 ? Ro : Ri,
+    phi = (Math.PI * k) / n;
   return [rho * Math.cos(phi), rho * Math.sin(phi)];
 });
 
@@ -37,7 +41,8 @@ function starPrismStl(): Uint8Array {
   const data: number[] = [];
   const m = star.length;
   for (let k = 0; k < m; k++) {
-    const [ax, ay] = star[k]!, [bx, by] = star[(k + 1) % m]!;
+    const [ax, ay] = star[k]!,
+      [bx, by] = star[(k + 1) % m]!;
     data.push(0, 0, H, ax, ay, H, bx, by, H);
     data.push(0, 0, 0, bx, by, 0, ax, ay, 0);
     data.push(ax, ay, 0, bx, by, 0, bx, by, H, ax, ay, 0, bx, by, H, ax, ay, H);
@@ -47,10 +52,12 @@ function starPrismStl(): Uint8Array {
 
 /** Sum of |area| and of signed area along +z of triangles given by corner numbers into a flat 3D list. */
 function areas(vertices: Float64Array, triangles: number[], normal: [number, number, number]) {
-  let unsigned = 0, signed = 0;
+  let unsigned = 0,
+    signed = 0;
   for (let t = 0; t < triangles.length; t += 3) {
     const [a, b, c] = [triangles[t]!, triangles[t + 1]!, triangles[t + 2]!].map((i) => [vertices[3 * i]!, vertices[3 * i + 1]!, vertices[3 * i + 2]!]);
-    const u = [b![0]! - a![0]!, b![1]! - a![1]!, b![2]! - a![2]!], v = [c![0]! - a![0]!, c![1]! - a![1]!, c![2]! - a![2]!];
+    const u = [b![0]! - a![0]!, b![1]! - a![1]!, b![2]! - a![2]!],
+      v = [c![0]! - a![0]!, c![1]! - a![1]!, c![2]! - a![2]!];
     const cross = [u[1]! * v[2]! - u[2]! * v[1]!, u[2]! * v[0]! - u[0]! * v[2]!, u[0]! * v[1]! - u[1]! * v[0]!];
     unsigned += Math.hypot(...cross) / 2;
     signed += (cross[0]! * normal[0] + cross[1]! * normal[1] + cross[2]! * normal[2]) / 2;
@@ -62,7 +69,11 @@ describe('triangulatePolygon: concave faces split without overlap, keeping their
   it('splits the star into 8 triangles covering exactly its area', () => {
     const vertices = Float64Array.from(star.flatMap(([x, y]) => [x, y, 0]));
     const out: number[] = [];
-    triangulatePolygon(vertices, star.map((_, k) => k), out);
+    triangulatePolygon(
+      vertices,
+      star.map((_, k) => k),
+      out,
+    );
     expect(out.length).toBe(3 * (star.length - 2));
     const a = areas(vertices, out, [0, 0, 1]);
     // Overlapping or folded triangles would make |area| exceed the signed area.
@@ -81,16 +92,22 @@ describe('triangulatePolygon: concave faces split without overlap, keeping their
   });
 
   it('works in any plane: the star tilted and turned, faces still along the polygon’s normal', () => {
-    const tilt = 0.7, turn = 1.9;
+    const tilt = 0.7,
+      turn = 1.9;
     // Rotation about x by tilt, then about z by turn (linear algebra): the normal (0,0,1) maps to w.
     const rotate = ([x, y, z]: number[]): number[] => {
-      const y1 = y! * Math.cos(tilt) - z! * Math.sin(tilt), z1 = y! * Math.sin(tilt) + z! * Math.cos(tilt);
+      const y1 = y! * Math.cos(tilt) - z! * Math.sin(tilt),
+        z1 = y! * Math.sin(tilt) + z! * Math.cos(tilt);
       return [x! * Math.cos(turn) - y1 * Math.sin(turn), x! * Math.sin(turn) + y1 * Math.cos(turn), z1 + 5];
     };
     const w = rotate([0, 0, 1]).map((v, i) => v - [0, 0, 5][i]!) as [number, number, number];
     const vertices = Float64Array.from(star.flatMap(([x, y]) => rotate([x, y, 0])));
     const out: number[] = [];
-    triangulatePolygon(vertices, star.map((_, k) => k), out);
+    triangulatePolygon(
+      vertices,
+      star.map((_, k) => k),
+      out,
+    );
     const a = areas(vertices, out, w);
     expect(a.unsigned).toBeCloseTo(starArea, 9);
     expect(a.signed).toBeCloseTo(starArea, 9);
@@ -130,7 +147,11 @@ describe('parseObj: the grammar shops meet', () => {
   const triangle = 'v 0 0 0\nv 1 0 0\nv 0 1 0\n';
 
   it('takes comments, groups, objects, smoothing, materials, vertex colours and w', () => {
-    const r = unwrap(read(`# a\r\nmtllib a.mtl\r\no part\r\ng one two\r\ns 1\r\nv 0 0 0 1\r\nv 1 0 0 0.5 0.2 0.1\r\nv 0 1 0\r\nvt 0 0\r\nvn 0 0 1\r\nusemtl oak\r\nf 1/1/1 2/1/1 3/1/1 # tail comment\r\nl 1 2\r\np 1\r\n`));
+    const r = unwrap(
+      read(
+        `# a\r\nmtllib a.mtl\r\no part\r\ng one two\r\ns 1\r\nv 0 0 0 1\r\nv 1 0 0 0.5 0.2 0.1\r\nv 0 1 0\r\nvt 0 0\r\nvn 0 0 1\r\nusemtl oak\r\nf 1/1/1 2/1/1 3/1/1 # tail comment\r\nl 1 2\r\np 1\r\n`,
+      ),
+    );
     expect(r.triangleCount).toBe(1);
     expect(Array.from(r.positions)).toEqual([0, 0, 0, 1, 0, 0, 0, 1, 0]);
   });

@@ -16,7 +16,20 @@ export interface ParseObjOptions {
 
 const freeFormKeywords = new Set(['cstype', 'curv', 'curv2', 'surf', 'deg', 'bmat', 'step', 'parm', 'trim', 'hole', 'scrv', 'sp', 'con']);
 
-const enum Char { Tab = 9, LineFeed = 10, Return = 13, Space = 32, Hash = 35, Plus = 43, Minus = 45, Dot = 46, Slash = 47, Zero = 48, Nine = 57, Backslash = 92 }
+const enum Char {
+  Tab = 9,
+  LineFeed = 10,
+  Return = 13,
+  Space = 32,
+  Hash = 35,
+  Plus = 43,
+  Minus = 45,
+  Dot = 46,
+  Slash = 47,
+  Zero = 48,
+  Nine = 57,
+  Backslash = 92,
+}
 
 function isBlank(c: number): boolean {
   return c === Char.Space || (c >= Char.Tab && c <= Char.Return && c !== Char.LineFeed);
@@ -24,7 +37,10 @@ function isBlank(c: number): boolean {
 
 class GrowingArray<T extends Float64Array | Int32Array> {
   length = 0;
-  constructor(public data: T, private readonly make: (n: number) => T) {}
+  constructor(
+    public data: T,
+    private readonly make: (n: number) => T,
+  ) {}
   push(v: number): void {
     if (this.length === this.data.length) {
       const grown = this.make(2 * this.data.length);
@@ -55,10 +71,16 @@ class ObjReader {
   private i = 0;
   private end = 0;
 
-  constructor(private readonly maxTriangles: number, private readonly maxVertices: number) {}
+  constructor(
+    private readonly maxTriangles: number,
+    private readonly maxVertices: number,
+  ) {}
 
   refuse(what: string): never {
-    throw new Refusal({ code: 'obj_invalid', message: `Line ${this.lineNumber} of the OBJ ${what}; export the mould again as OBJ (or STL) and upload that file.` });
+    throw new Refusal({
+      code: 'obj_invalid',
+      message: `Line ${this.lineNumber} of the OBJ ${what}; export the mould again as OBJ (or STL) and upload that file.`,
+    });
   }
 
   /** The next word of the statement as [start, end) in the string, or false at its end. */
@@ -88,13 +110,16 @@ class ObjReader {
     const length = keyEnd - this.i;
     this.i = keyEnd;
     if (length === 1 && k0 === 118 /* v */) this.vertex();
-    else if (k0 === 102 /* f */ && (length === 1 || (length === 2 && s.charCodeAt(keyEnd - 1) === 111 /* fo */))) this.face();
+    else if (k0 === 102 /* f */ && (length === 1 || (length === 2 && s.charCodeAt(keyEnd - 1) === 111) /* fo */)) this.face();
     else if (freeFormKeywords.has(s.slice(keyEnd - length, keyEnd))) this.freeForm = true;
   }
 
   private vertex(): void {
     if (this.vertices.length / 3 >= this.maxVertices) {
-      throw new Refusal({ code: 'too_many_triangles', message: `The OBJ holds more than ${this.maxVertices} vertices, more than this service reads; decimate the mesh in your CAD program and upload it again.` });
+      throw new Refusal({
+        code: 'too_many_triangles',
+        message: `The OBJ holds more than ${this.maxVertices} vertices, more than this service reads; decimate the mesh in your CAD program and upload it again.`,
+      });
     }
     const s = this.s;
     for (let k = 0; k < 3; k++) {
@@ -133,7 +158,9 @@ class ObjReader {
         v = 10 * v + (c - Char.Zero);
       }
       if (j === digitsFrom || (j < stop && s.charCodeAt(j) !== Char.Slash) || v === 0 || !Number.isSafeInteger(v)) {
-        this.refuse(`has the face corner "${s.slice(start, stop).slice(0, 40)}"; corners are vertex numbers from 1 (or negative, counting back from the latest vertex)`);
+        this.refuse(
+          `has the face corner "${s.slice(start, stop).slice(0, 40)}"; corners are vertex numbers from 1 (or negative, counting back from the latest vertex)`,
+        );
       }
       let index: number;
       if (negative) {
@@ -142,7 +169,10 @@ class ObjReader {
       } else {
         index = v - 1;
         if (index > 0x7fffffff) this.refuse(`has the face corner ${v}, beyond any vertex this service reads`);
-        if (index > this.largestIndex) { this.largestIndex = index; this.largestIndexLine = this.lineNumber; }
+        if (index > this.largestIndex) {
+          this.largestIndex = index;
+          this.largestIndexLine = this.lineNumber;
+        }
       }
       this.faces.push(index);
       corners++;
@@ -152,7 +182,10 @@ class ObjReader {
     this.faceCount++;
     this.triangleCount += corners - 2;
     if (this.triangleCount > this.maxTriangles) {
-      throw new Refusal({ code: 'too_many_triangles', message: `The OBJ holds more than ${this.maxTriangles} triangles, the most this service accepts; decimate the mesh in your CAD program and upload it again.` });
+      throw new Refusal({
+        code: 'too_many_triangles',
+        message: `The OBJ holds more than ${this.maxTriangles} triangles, the most this service accepts; decimate the mesh in your CAD program and upload it again.`,
+      });
     }
   }
 }
@@ -209,13 +242,23 @@ export function parseObj(bytes: Uint8Array, options: ParseObjOptions = {}): Resu
 
   const vertexCount = reader.vertices.length / 3;
   if (reader.faceCount === 0) {
-    if (reader.freeForm) return fail('obj_no_faces', 'The OBJ describes its shape with free-form curves and surfaces, which Gelpoint does not read; export the mould as a polygon mesh (OBJ with faces, or STL).');
-    return fail('obj_no_faces', vertexCount > 0
-      ? `The OBJ has ${vertexCount} vertices but no faces (a point cloud); export the mould as a closed surface with its faces.`
-      : 'The OBJ has no vertices and no faces; export the mould again with its surface included.');
+    if (reader.freeForm)
+      return fail(
+        'obj_no_faces',
+        'The OBJ describes its shape with free-form curves and surfaces, which Gelpoint does not read; export the mould as a polygon mesh (OBJ with faces, or STL).',
+      );
+    return fail(
+      'obj_no_faces',
+      vertexCount > 0
+        ? `The OBJ has ${vertexCount} vertices but no faces (a point cloud); export the mould as a closed surface with its faces.`
+        : 'The OBJ has no vertices and no faces; export the mould again with its surface included.',
+    );
   }
   if (reader.largestIndex >= vertexCount) {
-    return fail('obj_invalid', `Line ${reader.largestIndexLine} of the OBJ uses vertex ${reader.largestIndex + 1}, but the file has only ${vertexCount} vertices; export the mould again as OBJ (or STL) and upload that file.`);
+    return fail(
+      'obj_invalid',
+      `Line ${reader.largestIndexLine} of the OBJ uses vertex ${reader.largestIndex + 1}, but the file has only ${vertexCount} vertices; export the mould again as OBJ (or STL) and upload that file.`,
+    );
   }
 
   const v = reader.vertices.data;
@@ -230,7 +273,9 @@ export function parseObj(bytes: Uint8Array, options: ParseObjOptions = {}): Resu
     for (let k = 0; k < triangles.length; k++) {
       const p = 3 * triangles[k]!;
       const out = 3 * written++;
-      positions[out] = v[p]!; positions[out + 1] = v[p + 1]!; positions[out + 2] = v[p + 2]!;
+      positions[out] = v[p]!;
+      positions[out + 1] = v[p + 1]!;
+      positions[out + 2] = v[p + 2]!;
     }
     at += 1 + corners;
   }

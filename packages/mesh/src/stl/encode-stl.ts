@@ -11,9 +11,15 @@ export interface StlSource {
 }
 
 function facetNormal(p: ArrayLike<number>, at: number): [number, number, number] {
-  const ux = p[at + 3]! - p[at]!, uy = p[at + 4]! - p[at + 1]!, uz = p[at + 5]! - p[at + 2]!;
-  const vx = p[at + 6]! - p[at]!, vy = p[at + 7]! - p[at + 1]!, vz = p[at + 8]! - p[at + 2]!;
-  const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
+  const ux = p[at + 3]! - p[at]!,
+    uy = p[at + 4]! - p[at + 1]!,
+    uz = p[at + 5]! - p[at + 2]!;
+  const vx = p[at + 6]! - p[at]!,
+    vy = p[at + 7]! - p[at + 1]!,
+    vz = p[at + 8]! - p[at + 2]!;
+  const nx = uy * vz - uz * vy,
+    ny = uz * vx - ux * vz,
+    nz = ux * vy - uy * vx;
   const len = Math.hypot(nx, ny, nz);
   return len > 0 ? [nx / len, ny / len, nz / len] : [0, 0, 0];
 }

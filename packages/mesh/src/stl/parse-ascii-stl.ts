@@ -2,8 +2,19 @@ import { fail, ok, type Result } from '../result';
 import type { TriangleSoup } from './triangle-soup';
 
 const enum Byte {
-  Tab = 9, LineFeed = 10, VerticalTab = 11, FormFeed = 12, Return = 13, Space = 32,
-  Plus = 43, Minus = 45, Dot = 46, Zero = 48, Nine = 57, UpperE = 69, LowerE = 101,
+  Tab = 9,
+  LineFeed = 10,
+  VerticalTab = 11,
+  FormFeed = 12,
+  Return = 13,
+  Space = 32,
+  Plus = 43,
+  Minus = 45,
+  Dot = 46,
+  Zero = 48,
+  Nine = 57,
+  UpperE = 69,
+  LowerE = 101,
 }
 
 function isSpace(b: number): boolean {
@@ -77,10 +88,16 @@ export function parseAsciiStl(bytes: Uint8Array, maxTriangles: number): Result<T
   };
 
   const truncated = (what: string): Result<TriangleSoup> =>
-    fail('stl_truncated', `The ASCII STL ends before ${what} (after ${triangleCount} complete facets); the upload or export was cut short, so send the whole file.`);
+    fail(
+      'stl_truncated',
+      `The ASCII STL ends before ${what} (after ${triangleCount} complete facets); the upload or export was cut short, so send the whole file.`,
+    );
 
   const unexpected = (what: string): Result<TriangleSoup> =>
-    fail('stl_not_stl', `Line ${lineAt(tokenStart)} of the ASCII STL has "${tokenText()}" where ${what} was expected; this is not a valid STL file, so export the mould as STL again.`);
+    fail(
+      'stl_not_stl',
+      `Line ${lineAt(tokenStart)} of the ASCII STL has "${tokenText()}" where ${what} was expected; this is not a valid STL file, so export the mould as STL again.`,
+    );
 
   const expectWord = (word: Uint8Array, label: string): Result<TriangleSoup> | null => {
     if (!nextToken()) return truncated(`"${label}"`);
@@ -93,10 +110,16 @@ export function parseAsciiStl(bytes: Uint8Array, maxTriangles: number): Result<T
     let i = tokenStart;
     if (i < tokenEnd && (bytes[i] === Byte.Plus || bytes[i] === Byte.Minus)) i++;
     let digits = 0;
-    while (i < tokenEnd && bytes[i]! >= Byte.Zero && bytes[i]! <= Byte.Nine) { i++; digits++; }
+    while (i < tokenEnd && bytes[i]! >= Byte.Zero && bytes[i]! <= Byte.Nine) {
+      i++;
+      digits++;
+    }
     if (i < tokenEnd && bytes[i] === Byte.Dot) {
       i++;
-      while (i < tokenEnd && bytes[i]! >= Byte.Zero && bytes[i]! <= Byte.Nine) { i++; digits++; }
+      while (i < tokenEnd && bytes[i]! >= Byte.Zero && bytes[i]! <= Byte.Nine) {
+        i++;
+        digits++;
+      }
     }
     if (digits === 0) {
       const word = tokenText().replace(/^[+-]/, '').toLowerCase();
@@ -106,7 +129,10 @@ export function parseAsciiStl(bytes: Uint8Array, maxTriangles: number): Result<T
       i++;
       if (i < tokenEnd && (bytes[i] === Byte.Plus || bytes[i] === Byte.Minus)) i++;
       let expDigits = 0;
-      while (i < tokenEnd && bytes[i]! >= Byte.Zero && bytes[i]! <= Byte.Nine) { i++; expDigits++; }
+      while (i < tokenEnd && bytes[i]! >= Byte.Zero && bytes[i]! <= Byte.Nine) {
+        i++;
+        expDigits++;
+      }
       if (expDigits === 0) return undefined;
     }
     if (i !== tokenEnd) return undefined;
@@ -122,11 +148,17 @@ export function parseAsciiStl(bytes: Uint8Array, maxTriangles: number): Result<T
     if (v === undefined) return unexpected(`a number (${label})`);
     if (ignoreNonFinite) return v;
     if (!Number.isFinite(v)) {
-      return fail('stl_non_finite', `Line ${lineAt(tokenStart)} of the ASCII STL has the coordinate "${tokenText()}", which is not a finite number; repair or re-export the mesh.`);
+      return fail(
+        'stl_non_finite',
+        `Line ${lineAt(tokenStart)} of the ASCII STL has the coordinate "${tokenText()}", which is not a finite number; repair or re-export the mesh.`,
+      );
     }
     // Corners are kept as float32 like a binary STL's, and 1e39 is finite only in float64.
     if (!Number.isFinite(Math.fround(v))) {
-      return fail('stl_non_finite', `Line ${lineAt(tokenStart)} of the ASCII STL has the coordinate "${tokenText()}", beyond the ±3.4e38 an STL coordinate can hold; check the units and re-export the mesh.`);
+      return fail(
+        'stl_non_finite',
+        `Line ${lineAt(tokenStart)} of the ASCII STL has the coordinate "${tokenText()}", beyond the ±3.4e38 an STL coordinate can hold; check the units and re-export the mesh.`,
+      );
     }
     return v;
   };
@@ -155,7 +187,10 @@ export function parseAsciiStl(bytes: Uint8Array, maxTriangles: number): Result<T
       const badLoop = expectWord(words.outer, 'outer') ?? expectWord(words.loop, 'loop');
       if (badLoop) return badLoop;
       if (triangleCount >= maxTriangles) {
-        return fail('stl_too_many_triangles', `The STL holds more than ${maxTriangles} triangles, the most this service accepts; decimate the mesh in your CAD program and upload it again.`);
+        return fail(
+          'stl_too_many_triangles',
+          `The STL holds more than ${maxTriangles} triangles, the most this service accepts; decimate the mesh in your CAD program and upload it again.`,
+        );
       }
       if ((triangleCount + 1) * 9 > positions.length) {
         const grown = new Float32Array(positions.length * 2);

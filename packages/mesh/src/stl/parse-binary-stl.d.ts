@@ -6,12 +6,12 @@ export declare const binaryRecordBytes = 50;
 export declare function announcedTriangleCount(bytes: Uint8Array): number | null;
 /** What the size of a file says about it as a binary STL. */
 export interface BinaryLayout {
-    /** The count in the header. */
-    announced: number;
-    /** Whole 50-byte records after the header. */
-    records: number;
-    /** Bytes after the last whole record (0..49). */
-    trailing: number;
+  /** The count in the header. */
+  announced: number;
+  /** Whole 50-byte records after the header. */
+  records: number;
+  /** Bytes after the last whole record (0..49). */
+  trailing: number;
 }
 export declare function binaryLayout(bytes: Uint8Array): BinaryLayout | null;
 /** True when the header's count and the file's size agree exactly (the size rule of binary STL). */

@@ -41,7 +41,10 @@ export function isExactBinary(layout: BinaryLayout | null): boolean {
 export function parseBinaryStl(bytes: Uint8Array, maxTriangles: number, consumeBytes = false): Result<TriangleSoup> {
   const layout = binaryLayout(bytes);
   if (layout === null) {
-    return fail('stl_truncated', `The file is only ${bytes.length} bytes, shorter than the 84-byte header of a binary STL; the upload or export was cut short.`);
+    return fail(
+      'stl_truncated',
+      `The file is only ${bytes.length} bytes, shorter than the 84-byte header of a binary STL; the upload or export was cut short.`,
+    );
   }
   const { announced, records, trailing } = layout;
   const expected = binaryHeaderBytes + binaryRecordBytes * announced;
@@ -49,10 +52,16 @@ export function parseBinaryStl(bytes: Uint8Array, maxTriangles: number, consumeB
     return fail('stl_no_triangles', 'The binary STL announces 0 triangles and holds none; export the mould again with its surface included.');
   }
   if (announced > records && (trailing > 0 || records === 0)) {
-    return fail('stl_truncated', `The binary STL announces ${announced} triangles (${expected} bytes) but the file has only ${bytes.length} bytes; the upload or export was cut short, so send the whole file.`);
+    return fail(
+      'stl_truncated',
+      `The binary STL announces ${announced} triangles (${expected} bytes) but the file has only ${bytes.length} bytes; the upload or export was cut short, so send the whole file.`,
+    );
   }
   if (records > maxTriangles) {
-    return fail('stl_too_many_triangles', `The STL holds ${records} triangles, more than the ${maxTriangles} this service accepts; decimate the mesh in your CAD program and upload it again.`);
+    return fail(
+      'stl_too_many_triangles',
+      `The STL holds ${records} triangles, more than the ${maxTriangles} this service accepts; decimate the mesh in your CAD program and upload it again.`,
+    );
   }
   const exact = announced === records && trailing === 0;
   // In place only when the normals need no check afterwards (the file's count and size agree) and
@@ -62,20 +71,35 @@ export function parseBinaryStl(bytes: Uint8Array, maxTriangles: number, consumeB
   const positions = inPlace ? new Float32Array(bytes.buffer, bytes.byteOffset, records * 9) : new Float32Array(records * 9);
   const bad = readCorners(bytes, records, positions, !exact);
   if (bad >= 0) {
-    return fail('stl_non_finite', exact
-      ? `Triangle ${bad + 1} of the STL has a coordinate that is not a finite number (NaN or infinity); repair or re-export the mesh.`
-      : `Triangle ${bad + 1} of the file has a number that is not finite (NaN or infinity), and its header's count (${announced}) does not match its size either, so it is a damaged STL or not an STL at all; export the mould as STL again.`);
+    return fail(
+      'stl_non_finite',
+      exact
+        ? `Triangle ${bad + 1} of the STL has a coordinate that is not a finite number (NaN or infinity); repair or re-export the mesh.`
+        : `Triangle ${bad + 1} of the file has a number that is not finite (NaN or infinity), and its header's count (${announced}) does not match its size either, so it is a damaged STL or not an STL at all; export the mould as STL again.`,
+    );
   }
   const warnings: MeshWarning[] = [];
   if (announced === 0) {
-    warnings.push({ code: 'stl_count_mismatch', message: `The STL's header gives its triangle count as 0, as some writers leave it; the ${records} triangles the file holds were read.` });
+    warnings.push({
+      code: 'stl_count_mismatch',
+      message: `The STL's header gives its triangle count as 0, as some writers leave it; the ${records} triangles the file holds were read.`,
+    });
   } else if (announced < records) {
-    warnings.push({ code: 'stl_count_mismatch', message: `The STL's header announces ${announced} triangles but the file holds ${records}; all ${records} were read.` });
+    warnings.push({
+      code: 'stl_count_mismatch',
+      message: `The STL's header announces ${announced} triangles but the file holds ${records}; all ${records} were read.`,
+    });
   } else if (announced > records) {
-    warnings.push({ code: 'stl_count_mismatch', message: `The STL's header announces ${announced} triangles but the file holds only ${records}; those were read. If the export was cut short, upload the whole file.` });
+    warnings.push({
+      code: 'stl_count_mismatch',
+      message: `The STL's header announces ${announced} triangles but the file holds only ${records}; those were read. If the export was cut short, upload the whole file.`,
+    });
   }
   if (trailing > 0) {
-    warnings.push({ code: 'stl_trailing_bytes', message: `The STL has ${trailing} stray byte${trailing === 1 ? '' : 's'} after its last triangle; ${trailing === 1 ? 'it was' : 'they were'} ignored.` });
+    warnings.push({
+      code: 'stl_trailing_bytes',
+      message: `The STL has ${trailing} stray byte${trailing === 1 ? '' : 's'} after its last triangle; ${trailing === 1 ? 'it was' : 'they were'} ignored.`,
+    });
   }
   return ok({ positions, triangleCount: records, format: 'binary', warnings, ...(inPlace ? { spareBytes: bytes } : {}) });
 }

@@ -39,7 +39,10 @@ export function parseStl(bytes: Uint8Array, options: ParseStlOptions = {}): Resu
   }
   if (ascii) return parseAsciiStl(withoutByteOrderMark(bytes), maxTriangles);
   if (looksLikeText(bytes)) {
-    return fail('stl_not_stl', 'The file is text but does not begin with "solid" or "facet", so it is not an ASCII STL; export the mould as STL and upload that file.');
+    return fail(
+      'stl_not_stl',
+      'The file is text but does not begin with "solid" or "facet", so it is not an ASCII STL; export the mould as STL and upload that file.',
+    );
   }
   const other = otherFormatOf(bytes) ?? (bytes[0] === 0x50 && bytes[1] === 0x4b ? 'a zip archive (a 3MF, perhaps)' : null);
   if (other !== null) return fail('stl_not_stl', `The file is ${other}, not an STL; export the mould as STL and upload that file.`);

@@ -75,14 +75,18 @@ describe('3MF zip-bomb limits', () => {
     expect(unpacked).toBeGreaterThan(8 * 2 ** 20);
     expect(unpacked).toBeLessThan(8 * 2 ** 20 + 17 * 2 ** 20);
     const viaReader = read3mf(liar, { archiveLimits: { maxPartBytes: 8 * 2 ** 20, maxRatio: 1e9 } });
-    expect(viaReader.ok ? '' : viaReader.error.message).toMatch(/unpacks to more than 8 MB, more than Gelpoint reads from one file \(a guard against zip bombs\)/);
+    expect(viaReader.ok ? '' : viaReader.error.message).toMatch(
+      /unpacks to more than 8 MB, more than Gelpoint reads from one file \(a guard against zip bombs\)/,
+    );
   });
 
   it('caps the packed size of a part and the total over all parts', () => {
     const packed = unpackModel(bomb, { maxPackedPartBytes: 1024 });
     expect(packed.result.ok ? '' : packed.result.error.message).toMatch(/is larger than 1 kB packed/);
     const two = zipSync({
-      '3D/3dmodel.model': new TextEncoder().encode(`<model xmlns="http://schemas.microsoft.com/3dmanufacturing/core/2015/02" xmlns:p="http://schemas.microsoft.com/3dmanufacturing/production/2015/06"><resources><object id="1"><components><component objectid="1" p:path="/3D/other.model"/></components></object></resources><build><item objectid="1"/></build></model>${' '.repeat(5 * 2 ** 20)}`),
+      '3D/3dmodel.model': new TextEncoder().encode(
+        `<model xmlns="http://schemas.microsoft.com/3dmanufacturing/core/2015/02" xmlns:p="http://schemas.microsoft.com/3dmanufacturing/production/2015/06"><resources><object id="1"><components><component objectid="1" p:path="/3D/other.model"/></components></object></resources><build><item objectid="1"/></build></model>${' '.repeat(5 * 2 ** 20)}`,
+      ),
       '3D/other.model': new Uint8Array(5 * 2 ** 20).fill(0x20),
     });
     const r = read3mf(two, { archiveLimits: { maxTotalBytes: 8 * 2 ** 20, maxRatio: 1e9 } });

@@ -50,7 +50,10 @@ export class ArchiveBudget {
 }
 
 function tooLarge(part: string, limit: string): Result<never> {
-  return fail('threemf_too_large', `The 3MF's part "${part.slice(0, 60)}" unpacks to more than ${limit}, more than Gelpoint reads from one file (a guard against zip bombs); simplify the mesh or export it as binary STL.`);
+  return fail(
+    'threemf_too_large',
+    `The 3MF's part "${part.slice(0, 60)}" unpacks to more than ${limit}, more than Gelpoint reads from one file (a guard against zip bombs); simplify the mesh or export it as binary STL.`,
+  );
 }
 
 function checkStated(entry: ZipEntry, budget: ArchiveBudget): Result<void> {
@@ -59,19 +62,29 @@ function checkStated(entry: ZipEntry, budget: ArchiveBudget): Result<void> {
     return fail('threemf_unsupported', `The 3MF's part "${entry.name.slice(0, 60)}" is encrypted; export the mould again without protection.`);
   }
   if (entry.method !== 0 && entry.method !== 8) {
-    return fail('threemf_unsupported', `The 3MF's part "${entry.name.slice(0, 60)}" is packed with zip method ${entry.method}, but a 3MF may only store or deflate its parts; export the mould again.`);
+    return fail(
+      'threemf_unsupported',
+      `The 3MF's part "${entry.name.slice(0, 60)}" is packed with zip method ${entry.method}, but a 3MF may only store or deflate its parts; export the mould again.`,
+    );
   }
   if (entry.compressedSize > limits.maxPackedPartBytes) {
-    return fail('threemf_too_large', `The 3MF's part "${entry.name.slice(0, 60)}" is larger than ${megabytes(limits.maxPackedPartBytes)} packed, more than Gelpoint reads from one file; simplify the mesh or export it as binary STL.`);
+    return fail(
+      'threemf_too_large',
+      `The 3MF's part "${entry.name.slice(0, 60)}" is larger than ${megabytes(limits.maxPackedPartBytes)} packed, more than Gelpoint reads from one file; simplify the mesh or export it as binary STL.`,
+    );
   }
   if (entry.uncompressedSize > limits.maxPartBytes) return tooLarge(entry.name, megabytes(limits.maxPartBytes));
-  if (budget.unpackedBytes + entry.uncompressedSize > limits.maxTotalBytes) return tooLarge(entry.name, `${megabytes(limits.maxTotalBytes)} with the other parts`);
+  if (budget.unpackedBytes + entry.uncompressedSize > limits.maxTotalBytes)
+    return tooLarge(entry.name, `${megabytes(limits.maxTotalBytes)} with the other parts`);
   if (entry.uncompressedSize > ratioSlackBytes && entry.uncompressedSize > limits.maxRatio * entry.compressedSize) return tooDense(entry.name, limits.maxRatio);
   return ok(undefined);
 }
 
 function tooDense(part: string, ratio: number): Result<never> {
-  return fail('threemf_compression_ratio', `The 3MF's part "${part.slice(0, 60)}" unpacks to more than ${ratio} times its packed size, far more than any real model packs, so it was refused as a possible zip bomb; export the mould again from your CAD program.`);
+  return fail(
+    'threemf_compression_ratio',
+    `The 3MF's part "${part.slice(0, 60)}" unpacks to more than ${ratio} times its packed size, far more than any real model packs, so it was refused as a possible zip bomb; export the mould again from your CAD program.`,
+  );
 }
 
 /**
@@ -115,7 +128,10 @@ export function unpackEntry(bytes: Uint8Array, entry: ZipEntry, budget: ArchiveB
     }
     if (packed.length === 0) inflater.push(new Uint8Array(0), true);
   } catch {
-    return fail('threemf_invalid', `The 3MF's part "${entry.name.slice(0, 60)}" cannot be unpacked (its deflate data is damaged); export the mould again and upload the whole file.`);
+    return fail(
+      'threemf_invalid',
+      `The 3MF's part "${entry.name.slice(0, 60)}" cannot be unpacked (its deflate data is damaged); export the mould again and upload the whole file.`,
+    );
   }
   return refusal ?? ok(undefined);
 }
@@ -126,13 +142,20 @@ export function unpackSmallEntry(bytes: Uint8Array, entry: ZipEntry, budget: Arc
   let size = 0;
   const read = unpackEntry(bytes, entry, budget, (chunk) => {
     size += chunk.length;
-    if (size > maxBytes) return fail('threemf_invalid', `The 3MF's part "${entry.name.slice(0, 60)}" is larger than ${megabytes(maxBytes)}, far more than such a part holds; export the mould again.`);
+    if (size > maxBytes)
+      return fail(
+        'threemf_invalid',
+        `The 3MF's part "${entry.name.slice(0, 60)}" is larger than ${megabytes(maxBytes)}, far more than such a part holds; export the mould again.`,
+      );
     pieces.push(chunk.slice());
     return ok(undefined);
   });
   if (!read.ok) return read;
   const all = new Uint8Array(size);
   let at = 0;
-  for (const p of pieces) { all.set(p, at); at += p.length; }
+  for (const p of pieces) {
+    all.set(p, at);
+    at += p.length;
+  }
   return ok(all);
 }

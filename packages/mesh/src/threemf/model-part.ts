@@ -12,16 +12,18 @@ export type ThreeMfUnit = 'micron' | 'millimeter' | 'centimeter' | 'inch' | 'foo
 
 /** The core specification's ST_Unit values, as the engine's file units. */
 export const fileUnitsOf3mf: Record<ThreeMfUnit, FileUnits> = {
-  micron: 'um', millimeter: 'mm', centimeter: 'cm', inch: 'in', foot: 'ft', meter: 'm',
+  micron: 'um',
+  millimeter: 'mm',
+  centimeter: 'cm',
+  inch: 'in',
+  foot: 'ft',
+  meter: 'm',
 };
 
 export const coreNamespace = 'http://schemas.microsoft.com/3dmanufacturing/core/2015/02';
 export const productionNamespace = 'http://schemas.microsoft.com/3dmanufacturing/production/2015/06';
 /** Extensions that may be required without changing the geometry this reader takes in. */
-const harmlessExtensions = new Set([
-  productionNamespace,
-  'http://schemas.microsoft.com/3dmanufacturing/material/2015/02',
-]);
+const harmlessExtensions = new Set([productionNamespace, 'http://schemas.microsoft.com/3dmanufacturing/material/2015/02']);
 
 /** An affine map in the specification's row form: x' = m00·x + m10·y + m20·z + m30, and so on. */
 export type Matrix3mf = Float64Array;
@@ -62,7 +64,10 @@ const units = new Set<string>(Object.keys(fileUnitsOf3mf));
 
 class Growing<T extends Float64Array | Uint32Array> {
   length = 0;
-  constructor(public data: T, private readonly make: (n: number) => T) {}
+  constructor(
+    public data: T,
+    private readonly make: (n: number) => T,
+  ) {}
   reserve(extra: number): T {
     if (this.length + extra > this.data.length) {
       const grown = this.make(Math.max(2 * this.data.length, this.length + extra));
@@ -90,7 +95,10 @@ export class ModelPartReader {
   private object: ModelObject | null = null;
   private totalTriangles = 0;
 
-  constructor(private readonly part: string, private readonly limits: ModelLimits) {
+  constructor(
+    private readonly part: string,
+    private readonly limits: ModelLimits,
+  ) {
     this.xml = new XmlStream(part, { open: (tag) => this.open(tag), close: (name) => this.close(name) });
   }
 
@@ -180,7 +188,10 @@ export class ModelPartReader {
     for (const required of (tag.attributes.requiredextensions ?? '').split(/\s+/).filter(Boolean)) {
       const uri = bindings.get(required) ?? required;
       if (!harmlessExtensions.has(uri)) {
-        XmlStream.stop('threemf_unsupported', `The 3MF requires the extension "${uri.slice(0, 100)}", which changes the geometry in a way Gelpoint does not read; export the mould as a plain 3MF mesh or as STL.`);
+        XmlStream.stop(
+          'threemf_unsupported',
+          `The 3MF requires the extension "${uri.slice(0, 100)}", which changes the geometry in a way Gelpoint does not read; export the mould as a plain 3MF mesh or as STL.`,
+        );
       }
     }
     this.sawModel = true;
@@ -191,9 +202,12 @@ export class ModelPartReader {
     const id = this.resourceId(a.id, 'object id');
     if (this.objects.has(id)) this.invalid(`defines object ${id} twice`);
     this.object = {
-      id, type: (a.type ?? 'model').trim(),
-      vertexStart: this.vertices.length, vertexCount: 0,
-      triangleStart: this.triangles.length, triangleCount: 0,
+      id,
+      type: (a.type ?? 'model').trim(),
+      vertexStart: this.vertices.length,
+      vertexCount: 0,
+      triangleStart: this.triangles.length,
+      triangleCount: 0,
       components: null,
     };
   }
@@ -202,7 +216,10 @@ export class ModelPartReader {
     const object = this.object;
     if (!object) return;
     if (this.vertices.length / 3 >= this.limits.maxVertices) {
-      XmlStream.stop('too_many_triangles', `The 3MF holds more than ${this.limits.maxVertices} vertices, more than this service reads; decimate the mesh in your CAD program and upload it again.`);
+      XmlStream.stop(
+        'too_many_triangles',
+        `The 3MF holds more than ${this.limits.maxVertices} vertices, more than this service reads; decimate the mesh in your CAD program and upload it again.`,
+      );
     }
     const data = this.vertices.reserve(3);
     const at = this.vertices.length;
@@ -224,7 +241,10 @@ export class ModelPartReader {
     const object = this.object;
     if (!object) return;
     if (this.totalTriangles >= this.limits.maxTriangles) {
-      XmlStream.stop('too_many_triangles', `The 3MF holds more than ${this.limits.maxTriangles} triangles, the most this service accepts; decimate the mesh in your CAD program and upload it again.`);
+      XmlStream.stop(
+        'too_many_triangles',
+        `The 3MF holds more than ${this.limits.maxTriangles} triangles, the most this service accepts; decimate the mesh in your CAD program and upload it again.`,
+      );
     }
     const data = this.triangles.reserve(3);
     const at = this.triangles.length;
@@ -241,13 +261,15 @@ export class ModelPartReader {
     if (text === undefined || !Number.isInteger(v) || v < 0 || (v === 0 && !/\d/.test(text))) {
       this.invalid(`has a triangle of object ${object.id} whose corner is "${String(text).slice(0, 40)}", not a vertex number`);
     }
-    if (v >= object.vertexCount) this.invalid(`has a triangle of object ${object.id} that uses vertex ${v}, but the object has only ${object.vertexCount} vertices`);
+    if (v >= object.vertexCount)
+      this.invalid(`has a triangle of object ${object.id} that uses vertex ${v}, but the object has only ${object.vertexCount} vertices`);
     return v;
   }
 
   private resourceId(text: string | undefined, what: string): number {
     const v = Number(text);
-    if (text === undefined || !Number.isInteger(v) || v < 1 || v >= 2 ** 31) this.invalid(`has an ${what} "${String(text).slice(0, 40)}", not a whole number from 1 up`);
+    if (text === undefined || !Number.isInteger(v) || v < 1 || v >= 2 ** 31)
+      this.invalid(`has an ${what} "${String(text).slice(0, 40)}", not a whole number from 1 up`);
     return v;
   }
 

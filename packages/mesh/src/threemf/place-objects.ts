@@ -100,12 +100,19 @@ export function placeObjects(parts: Map<string, ModelPart>, keyOf: (path: string
     items.push(r);
     total += n;
     if (total > maxTriangles) {
-      return fail('too_many_triangles', `The 3MF places more than ${maxTriangles} triangles, the most this service accepts; decimate the mesh in your CAD program and upload it again.`);
+      return fail(
+        'too_many_triangles',
+        `The 3MF places more than ${maxTriangles} triangles, the most this service accepts; decimate the mesh in your CAD program and upload it again.`,
+      );
     }
   }
-  if (root.build.length === 0) return fail('threemf_no_model', 'The 3MF builds no object (its <build> is empty); export the mould again with the mould placed on the build plate.');
+  if (root.build.length === 0)
+    return fail('threemf_no_model', 'The 3MF builds no object (its <build> is empty); export the mould again with the mould placed on the build plate.');
   if (total === 0) {
-    return fail('stl_no_triangles', 'The objects the 3MF builds have no triangles (they may be supports or made by an extension Gelpoint does not read); export the mould again as a mesh.');
+    return fail(
+      'stl_no_triangles',
+      'The objects the 3MF builds have no triangles (they may be supports or made by an extension Gelpoint does not read); export the mould again as a mesh.',
+    );
   }
 
   const positions = new Float32Array(total * 9);
@@ -125,7 +132,9 @@ export function placeObjects(parts: Map<string, ModelPart>, keyOf: (path: string
     const v = part.vertices;
     for (let i = 0; i < n; i++) {
       const at = object.vertexStart + 3 * i;
-      const x = v[at]!, y = v[at + 1]!, z = v[at + 2]!;
+      const x = v[at]!,
+        y = v[at + 1]!,
+        z = v[at + 2]!;
       placed[3 * i] = x * m[0]! + y * m[3]! + z * m[6]! + m[9]!;
       placed[3 * i + 1] = x * m[1]! + y * m[4]! + z * m[7]! + m[10]!;
       placed[3 * i + 2] = x * m[2]! + y * m[5]! + z * m[8]! + m[11]!;
@@ -170,12 +179,18 @@ export function placeObjects(parts: Map<string, ModelPart>, keyOf: (path: string
     emit(r, m);
   }
   if (nonFinite) {
-    return fail('stl_non_finite', 'A transform in the 3MF places a corner beyond the ±3.4e38 a coordinate can hold; check the transforms and units and export the mould again.');
+    return fail(
+      'stl_non_finite',
+      'A transform in the 3MF places a corner beyond the ±3.4e38 a coordinate can hold; check the transforms and units and export the mould again.',
+    );
   }
   const warnings: MeshWarning[] = [];
   if (skippedObjects > 0) {
     const one = skippedObjects === 1;
-    warnings.push({ code: 'threemf_objects_skipped', message: `${skippedObjects} object${one ? '' : 's'} the 3MF marks as support (or as not part of the body) ${one ? 'was' : 'were'} left out of the mould.` });
+    warnings.push({
+      code: 'threemf_objects_skipped',
+      message: `${skippedObjects} object${one ? '' : 's'} the 3MF marks as support (or as not part of the body) ${one ? 'was' : 'were'} left out of the mould.`,
+    });
   }
   return ok({ positions: written === total ? positions : positions.slice(0, 9 * written), triangleCount: written, warnings });
 }

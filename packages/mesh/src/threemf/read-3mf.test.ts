@@ -8,7 +8,17 @@ import { encodeStlBinary } from '../stl/encode-stl';
 import { readMouldFile } from '../mould-file';
 import { read3mf } from './read-3mf';
 
-const mould = revolvedPocketBlock({ halfSide: 15, bottomZ: 0, topZ: 18, profile: [[0, 10], [6, 10], [10, 18]], segments: 32 });
+const mould = revolvedPocketBlock({
+  halfSide: 15,
+  bottomZ: 0,
+  topZ: 18,
+  profile: [
+    [0, 10],
+    [6, 10],
+    [10, 18],
+  ],
+  segments: 32,
+});
 const mouldMesh = indexed(mould);
 const plainVolume = meshOf(mould).enclosedVolumeMm3!;
 const text = (s: string): Uint8Array => new TextEncoder().encode(s);
@@ -22,7 +32,10 @@ function meshOfSpec(spec: ThreeMfModelSpec) {
   return { mesh: unwrap(prepareMesh(r.soup, { units: r.fileUnits })), soup: r.soup };
 }
 
-const one = (transform?: number[]): ThreeMfModelSpec => ({ objects: [{ id: 1, mesh: mouldMesh }], items: [{ objectId: 1, ...(transform ? { transform } : {}) }] });
+const one = (transform?: number[]): ThreeMfModelSpec => ({
+  objects: [{ id: 1, mesh: mouldMesh }],
+  items: [{ objectId: 1, ...(transform ? { transform } : {}) }],
+});
 
 describe('read3mf: build items and their transforms (3MF core specification §3.3, §3.4.3)', () => {
   it('reads the mesh as the STL of the same mould, corner for corner', () => {
@@ -40,11 +53,14 @@ describe('read3mf: build items and their transforms (3MF core specification §3.
   });
 
   it('rotates with the row form: a point is the row [x y z 1] times the matrix', () => {
-    const a = Math.PI / 6, c = Math.cos(a), s = Math.sin(a);
+    const a = Math.PI / 6,
+      c = Math.cos(a),
+      s = Math.sin(a);
     // Rotation by a about z (linear algebra): x' = x cos a − y sin a, y' = x sin a + y cos a.
     const soup = unwrap(read(one([c, s, 0, -s, c, 0, 0, 0, 1, 0, 0, 0]))).soup;
     for (const k of [0, 7, 100]) {
-      const x = Math.fround(mould.positions[3 * k]!), y = Math.fround(mould.positions[3 * k + 1]!);
+      const x = Math.fround(mould.positions[3 * k]!),
+        y = Math.fround(mould.positions[3 * k + 1]!);
       expect(soup.positions[3 * k]).toBeCloseTo(x * c - y * s, 4);
       expect(soup.positions[3 * k + 1]).toBeCloseTo(x * s + y * c, 4);
     }
@@ -69,7 +85,10 @@ describe('read3mf: build items and their transforms (3MF core specification §3.
 describe('read3mf: components (§4.2), nested and from other parts (Production extension)', () => {
   it('places an object twice through components', () => {
     const { mesh } = meshOfSpec({
-      objects: [{ id: 1, mesh: mouldMesh }, { id: 2, components: [{ objectId: 1 }, { objectId: 1, transform: [1, 0, 0, 0, 1, 0, 0, 0, 1, 40, 0, 0] }] }],
+      objects: [
+        { id: 1, mesh: mouldMesh },
+        { id: 2, components: [{ objectId: 1 }, { objectId: 1, transform: [1, 0, 0, 0, 1, 0, 0, 0, 1, 40, 0, 0] }] },
+      ],
       items: [{ objectId: 2 }],
     });
     expect(relative(mesh.enclosedVolumeMm3!, 2 * plainVolume)).toBeLessThan(1e-6);
@@ -80,7 +99,10 @@ describe('read3mf: components (§4.2), nested and from other parts (Production e
     // The component moves the mould 40 mm along x; the item then turns it a quarter about z, so
     // the mould ends up 40 mm along y (x' = −y, y' = x). In the other order it would stay on x.
     const { mesh } = meshOfSpec({
-      objects: [{ id: 1, mesh: mouldMesh }, { id: 2, components: [{ objectId: 1, transform: [1, 0, 0, 0, 1, 0, 0, 0, 1, 40, 0, 0] }] }],
+      objects: [
+        { id: 1, mesh: mouldMesh },
+        { id: 2, components: [{ objectId: 1, transform: [1, 0, 0, 0, 1, 0, 0, 0, 1, 40, 0, 0] }] },
+      ],
       items: [{ objectId: 2, transform: [0, 1, 0, -1, 0, 0, 0, 0, 1, 0, 0, 0] }],
     });
     expect(mesh.bboxMm.min[1]).toBeCloseTo(25, 5);
@@ -104,7 +126,15 @@ describe('read3mf: components (§4.2), nested and from other parts (Production e
   });
 
   it('leaves supports out, and says so', () => {
-    const r = unwrap(read({ objects: [{ id: 1, mesh: mouldMesh }, { id: 2, type: 'support', mesh: mouldMesh }], items: [{ objectId: 1 }, { objectId: 2 }] }));
+    const r = unwrap(
+      read({
+        objects: [
+          { id: 1, mesh: mouldMesh },
+          { id: 2, type: 'support', mesh: mouldMesh },
+        ],
+        items: [{ objectId: 1 }, { objectId: 2 }],
+      }),
+    );
     expect(r.soup.triangleCount).toBe(mould.triangleCount);
     expect(r.soup.warnings.map((w) => w.code)).toEqual(['threemf_objects_skipped']);
   });
@@ -139,13 +169,67 @@ describe('read3mf: refusals, each a sentence about the 3MF', () => {
   const refusal = (r: ReturnType<typeof read3mf>) => (r.ok ? null : r.error);
 
   const cases: [string, () => ReturnType<typeof read3mf>, string, RegExp][] = [
-    ['a relationship to a part that is not there', () => read3mf(package3mf(modelXml(one()), { rels: false, extraParts: { '_rels/.rels': relsXml('/3D/missing.model') } })), 'threemf_no_model', /names "\/3D\/missing.model" as its model/],
-    ['a zip with an STL inside', () => readMouldFile(package3mf('x', { modelPath: 'mould.stl', rels: false })) as never, 'file_not_mould', /zip archive holding "mould.stl", not a 3MF; unzip it/],
+    [
+      'a relationship to a part that is not there',
+      () => read3mf(package3mf(modelXml(one()), { rels: false, extraParts: { '_rels/.rels': relsXml('/3D/missing.model') } })),
+      'threemf_no_model',
+      /names "\/3D\/missing.model" as its model/,
+    ],
+    [
+      'a zip with an STL inside',
+      () => readMouldFile(package3mf('x', { modelPath: 'mould.stl', rels: false })) as never,
+      'file_not_mould',
+      /zip archive holding "mould.stl", not a 3MF; unzip it/,
+    ],
     ['a DOCTYPE', () => read(modelXml(one()).replace('<model', '<!DOCTYPE model [<!ENTITY a "aaaa">]>\n<model')), 'threemf_invalid', /DOCTYPE/],
-    ['an extension it cannot read', () => read({ ...one(), modelAttributes: 'xmlns:b="http://schemas.microsoft.com/3dmanufacturing/beamlattice/2017/02" requiredextensions="b"' }), 'threemf_unsupported', /beamlattice/],
-    ['a triangle that uses a vertex the object lacks', () => read({ objects: [{ id: 1, mesh: { vertices: [[0, 0, 0], [1, 0, 0], [0, 1, 0]], triangles: [[0, 1, 3]] } }], items: [{ objectId: 1 }] }), 'threemf_invalid', /uses vertex 3, but the object has only 3 vertices/],
-    ['an item for an object not defined', () => read({ objects: [{ id: 1, mesh: mouldMesh }], items: [{ objectId: 9 }] }), 'threemf_invalid', /object 9, which is not defined/],
-    ['components that contain themselves', () => read({ objects: [{ id: 1, mesh: mouldMesh }, { id: 2, components: [{ objectId: 3 }] }, { id: 3, components: [{ objectId: 2 }] }], items: [{ objectId: 2 }] }), 'threemf_invalid', /among its own components/],
+    [
+      'an extension it cannot read',
+      () => read({ ...one(), modelAttributes: 'xmlns:b="http://schemas.microsoft.com/3dmanufacturing/beamlattice/2017/02" requiredextensions="b"' }),
+      'threemf_unsupported',
+      /beamlattice/,
+    ],
+    [
+      'a triangle that uses a vertex the object lacks',
+      () =>
+        read({
+          objects: [
+            {
+              id: 1,
+              mesh: {
+                vertices: [
+                  [0, 0, 0],
+                  [1, 0, 0],
+                  [0, 1, 0],
+                ],
+                triangles: [[0, 1, 3]],
+              },
+            },
+          ],
+          items: [{ objectId: 1 }],
+        }),
+      'threemf_invalid',
+      /uses vertex 3, but the object has only 3 vertices/,
+    ],
+    [
+      'an item for an object not defined',
+      () => read({ objects: [{ id: 1, mesh: mouldMesh }], items: [{ objectId: 9 }] }),
+      'threemf_invalid',
+      /object 9, which is not defined/,
+    ],
+    [
+      'components that contain themselves',
+      () =>
+        read({
+          objects: [
+            { id: 1, mesh: mouldMesh },
+            { id: 2, components: [{ objectId: 3 }] },
+            { id: 3, components: [{ objectId: 2 }] },
+          ],
+          items: [{ objectId: 2 }],
+        }),
+      'threemf_invalid',
+      /among its own components/,
+    ],
     ['an empty build', () => read({ objects: [{ id: 1, mesh: mouldMesh }], items: [] }), 'threemf_no_model', /builds no object/],
     ['an unknown unit', () => read({ ...one(), unit: 'furlong' }), 'threemf_invalid', /unit "furlong"/],
     ['a coordinate that is not a number', () => read(modelXml(one()).replace(/x="[^"]*"/, 'x="1,5"')), 'threemf_invalid', /whose x is "1,5", not a number/],
@@ -153,7 +237,12 @@ describe('read3mf: refusals, each a sentence about the 3MF', () => {
     ['another XML document', () => read('<?xml version="1.0"?><svg xmlns="http://www.w3.org/2000/svg"/>'), 'threemf_invalid', /opens with <svg>/],
     ['XML cut short', () => read(modelXml(one()).slice(0, 2000)), 'threemf_invalid', /not well-formed XML/],
     ['an encrypted part', () => read3mf(withFlagsAndMethod(package3mf(modelXml(one())), '3D/3dmodel.model', 1, 8)), 'threemf_unsupported', /encrypted/],
-    ['a part packed with another method', () => read3mf(withFlagsAndMethod(package3mf(modelXml(one())), '3D/3dmodel.model', 0, 12)), 'threemf_unsupported', /zip method 12/],
+    [
+      'a part packed with another method',
+      () => read3mf(withFlagsAndMethod(package3mf(modelXml(one())), '3D/3dmodel.model', 0, 12)),
+      'threemf_unsupported',
+      /zip method 12/,
+    ],
     ['more triangles than allowed', () => read3mf(package3mf(modelXml(one())), { maxTriangles: 100 }), 'too_many_triangles', /more than 100 triangles/],
     ['a zip cut short', () => read3mf(package3mf(modelXml(one())).subarray(0, 1000)), 'threemf_invalid', /zip structure is damaged/],
   ];

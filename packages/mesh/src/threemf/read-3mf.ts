@@ -44,7 +44,10 @@ export function read3mf(bytes: Uint8Array, options: Read3mfOptions = {}): Result
     if (target.value !== null) {
       rootKey = partKey(target.value);
       if (!entries.has(rootKey)) {
-        return fail('threemf_no_model', `The 3MF names "${target.value.slice(0, 80)}" as its model, but the file does not hold that part; export the mould again and upload the whole file.`);
+        return fail(
+          'threemf_no_model',
+          `The 3MF names "${target.value.slice(0, 80)}" as its model, but the file does not hold that part; export the mould again and upload the whole file.`,
+        );
       }
     }
   }
@@ -93,5 +96,8 @@ function notA3mf(entries: Map<string, ZipEntry>): Result<never> {
   if (inside) {
     return fail('file_not_mould', `The file is a zip archive holding "${inside.slice(0, 80)}", not a 3MF; unzip it and upload the mould file inside.`);
   }
-  return fail('threemf_no_model', 'The file is a zip archive without a 3D model part, so it is not a 3MF; export the mould as 3MF, STL or OBJ and upload that file.');
+  return fail(
+    'threemf_no_model',
+    'The file is a zip archive without a 3D model part, so it is not a 3MF; export the mould as 3MF, STL or OBJ and upload that file.',
+  );
 }

@@ -21,11 +21,17 @@ export class XmlStream {
   private readonly decoder = new TextDecoder('utf-8');
   private failure: MeshError | null = null;
 
-  constructor(private readonly part: string, handlers: XmlHandlers) {
+  constructor(
+    private readonly part: string,
+    handlers: XmlHandlers,
+  ) {
     this.parser.on('opentag', (tag) => handlers.open(tag));
     this.parser.on('closetag', (tag) => handlers.close(tag.name));
     this.parser.on('doctype', () => {
-      throw new Stop({ code: 'threemf_invalid', message: `The 3MF's part "${this.part}" declares a DOCTYPE, which a 3MF must not; export the mould again from your CAD program.` });
+      throw new Stop({
+        code: 'threemf_invalid',
+        message: `The 3MF's part "${this.part}" declares a DOCTYPE, which a 3MF must not; export the mould again from your CAD program.`,
+      });
     });
   }
 
@@ -43,7 +49,10 @@ export class XmlStream {
       if (err instanceof Stop) this.failure = err.error;
       else {
         const detail = err instanceof Error ? err.message.replace(/\s+/g, ' ').slice(0, 120) : 'unreadable';
-        this.failure = { code: 'threemf_invalid', message: `The 3MF's part "${this.part}" is not well-formed XML (${detail}); export the mould again and upload the whole file.` };
+        this.failure = {
+          code: 'threemf_invalid',
+          message: `The 3MF's part "${this.part}" is not well-formed XML (${detail}); export the mould again and upload the whole file.`,
+        };
       }
       return fail(this.failure.code, this.failure.message);
     }

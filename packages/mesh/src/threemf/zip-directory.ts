@@ -28,7 +28,10 @@ const maxEntries = 100_000;
 const endSearchSpan = 22 + 0xffff;
 
 const broken = (what: string): Result<never> =>
-  fail('threemf_invalid', `The 3MF's zip structure is damaged (${what}); the upload or export was probably cut short, so export the mould again and upload the whole file.`);
+  fail(
+    'threemf_invalid',
+    `The 3MF's zip structure is damaged (${what}); the upload or export was probably cut short, so export the mould again and upload the whole file.`,
+  );
 
 function u64(view: DataView, at: number): number {
   const value = view.getUint32(at, true) + view.getUint32(at + 4, true) * 2 ** 32;
@@ -50,7 +53,10 @@ export function readZipDirectory(bytes: Uint8Array): Result<Map<string, ZipEntry
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   let end = -1;
   for (let at = bytes.length - 22; at >= 0 && at >= bytes.length - endSearchSpan; at--) {
-    if (view.getUint32(at, true) === endOfDirectorySignature) { end = at; break; }
+    if (view.getUint32(at, true) === endOfDirectorySignature) {
+      end = at;
+      break;
+    }
   }
   if (end < 0) return broken('no end-of-directory record');
   let entryCount = view.getUint16(end + 10, true);

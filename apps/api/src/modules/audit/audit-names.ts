@@ -11,13 +11,25 @@ const objectLookups: Record<string, { sql: string; link: (id: string) => string 
   pour_plan: { sql: 'SELECT id::text AS id, name FROM pour_plans WHERE shop_id = $1 AND id = ANY($2::uuid[])', link: (id) => `/pour-plans/${id}` },
   mold: { sql: 'SELECT id::text AS id, name FROM molds WHERE shop_id = $1 AND id = ANY($2::uuid[])', link: (id) => `/moulds/${id}` },
   lot: { sql: 'SELECT id::text AS id, lot_number AS name FROM lots WHERE shop_id = $1 AND id = ANY($2::uuid[])', link: (id) => `/shelf/lots/${id}` },
-  resin_system: { sql: 'SELECT id::text AS id, name FROM resin_systems WHERE shop_id = $1 AND id = ANY($2::uuid[])', link: (id) => `/shelf/resin-systems/${id}` },
+  resin_system: {
+    sql: 'SELECT id::text AS id, name FROM resin_systems WHERE shop_id = $1 AND id = ANY($2::uuid[])',
+    link: (id) => `/shelf/resin-systems/${id}`,
+  },
   pigment: { sql: 'SELECT id::text AS id, name FROM pigments WHERE shop_id = $1 AND id = ANY($2::uuid[])', link: (id) => `/shelf/pigments/${id}` },
   // A pour is known by its piece.
-  pour: { sql: 'SELECT p.id::text AS id, pc.name FROM pours p JOIN pieces pc ON pc.id = p.piece_id WHERE p.shop_id = $1 AND p.id = ANY($2::uuid[])', link: (id) => `/pours/${id}` },
-  membership: { sql: 'SELECT m.id::text AS id, u.name FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.shop_id = $1 AND m.id = ANY($2::uuid[])', link: () => '/team' },
+  pour: {
+    sql: 'SELECT p.id::text AS id, pc.name FROM pours p JOIN pieces pc ON pc.id = p.piece_id WHERE p.shop_id = $1 AND p.id = ANY($2::uuid[])',
+    link: (id) => `/pours/${id}`,
+  },
+  membership: {
+    sql: 'SELECT m.id::text AS id, u.name FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.shop_id = $1 AND m.id = ANY($2::uuid[])',
+    link: () => '/team',
+  },
   invitation: { sql: 'SELECT id::text AS id, email AS name FROM invitations WHERE shop_id = $1 AND id = ANY($2::uuid[])', link: () => '/team' },
-  user: { sql: 'SELECT u.id::text AS id, u.name FROM users u JOIN memberships m ON m.user_id = u.id AND m.shop_id = $1 WHERE u.id = ANY($2::uuid[])', link: () => '/team' },
+  user: {
+    sql: 'SELECT u.id::text AS id, u.name FROM users u JOIN memberships m ON m.user_id = u.id AND m.shop_id = $1 WHERE u.id = ANY($2::uuid[])',
+    link: () => '/team',
+  },
   shop: { sql: 'SELECT id::text AS id, name FROM shops WHERE id = $1 AND id = ANY($2::uuid[])', link: () => '/shop-settings' },
 };
 
@@ -51,7 +63,12 @@ export async function namedEvents(m: EntityManager, shopId: string, rows: readon
   }
   const actorIds = [...new Set(rows.map((r) => r.actorUserId).filter((id): id is string => id !== null))];
   const actors = new Map<string, string>(
-    actorIds.length ? ((await m.query('SELECT id::text AS id, name FROM users WHERE id = ANY($1::uuid[])', [actorIds])) as { id: string; name: string }[]).map((u) => [u.id, u.name]) : [],
+    actorIds.length
+      ? ((await m.query('SELECT id::text AS id, name FROM users WHERE id = ANY($1::uuid[])', [actorIds])) as { id: string; name: string }[]).map((u) => [
+          u.id,
+          u.name,
+        ])
+      : [],
   );
   return rows.map((e) => {
     const key = `${e.objectType}:${e.objectId}`;

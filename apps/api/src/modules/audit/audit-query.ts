@@ -13,7 +13,12 @@ export interface AuditFilters {
 
 /** The shop's events that pass the filters, newest first; ties in time are broken by id so paging is stable. */
 export function auditQuery(ds: DataSource, shopId: string, f: AuditFilters): SelectQueryBuilder<AuditEventRow> {
-  const qb = ds.getRepository(AuditEventRow).createQueryBuilder('e').where('e.shop_id = :shopId', { shopId }).orderBy('e.created_at', 'DESC').addOrderBy('e.id', 'DESC');
+  const qb = ds
+    .getRepository(AuditEventRow)
+    .createQueryBuilder('e')
+    .where('e.shop_id = :shopId', { shopId })
+    .orderBy('e.created_at', 'DESC')
+    .addOrderBy('e.id', 'DESC');
   if (f.objectType) qb.andWhere('e.object_type = :t', { t: f.objectType });
   if (f.objectId) qb.andWhere('e.object_id = :o', { o: f.objectId });
   if (f.actorId) qb.andWhere('e.actor_user_id = :actorId', { actorId: f.actorId });
@@ -38,7 +43,10 @@ export function olderThan(qb: SelectQueryBuilder<AuditEventRow>, before: string,
 }
 
 /** A page of events with the cursor of its last one. */
-export async function pageOf(qb: SelectQueryBuilder<AuditEventRow>, limit: number): Promise<{ rows: AuditEventRow[]; last: { before: string; beforeId: string } | null }> {
+export async function pageOf(
+  qb: SelectQueryBuilder<AuditEventRow>,
+  limit: number,
+): Promise<{ rows: AuditEventRow[]; last: { before: string; beforeId: string } | null }> {
   const { entities, raw } = await qb.addSelect(CURSOR_AT, 'cursor_at').limit(limit).getRawAndEntities();
   const lastRaw = raw.at(-1) as { cursor_at: string } | undefined;
   const lastRow = entities.at(-1);

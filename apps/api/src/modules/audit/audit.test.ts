@@ -17,7 +17,10 @@ interface Event {
   detail: Record<string, unknown>;
 }
 
-async function list(shop: ShopFixture, query: Record<string, string | number> = {}): Promise<{ items: Event[]; next: { before: string; beforeId: string } | null }> {
+async function list(
+  shop: ShopFixture,
+  query: Record<string, string | number> = {},
+): Promise<{ items: Event[]; next: { before: string; beforeId: string } | null }> {
   return (await h.http().get('/api/audit').query(query).set(bearer(shop.lead)).expect(200)).body;
 }
 
@@ -33,13 +36,32 @@ describe('the audit log', () => {
     const maker = await shop.member('maker');
     const piece = (await h.http().post('/api/pieces').set(bearer(maker)).send({ name: 'Walnut tray' }).expect(201)).body;
     await h.http().patch(`/api/pieces/${piece.id}`).set(bearer(maker)).send({ name: 'Walnut serving tray' }).expect(200);
-    const resin = (await h.http().post('/api/shelf/resin-systems').set(lead).send(resinInput({ name: 'Deep 50' })).expect(201)).body;
-    const lot = (await h.http().post('/api/shelf/lots').set(lead).send({ part: 'A', resinSystemId: resin.id, lotNumber: 'BRI-A-0412', quantityG: 1000, receivedOn: '2026-11-01' }).expect(201)).body;
+    const resin = (
+      await h
+        .http()
+        .post('/api/shelf/resin-systems')
+        .set(lead)
+        .send(resinInput({ name: 'Deep 50' }))
+        .expect(201)
+    ).body;
+    const lot = (
+      await h
+        .http()
+        .post('/api/shelf/lots')
+        .set(lead)
+        .send({ part: 'A', resinSystemId: resin.id, lotNumber: 'BRI-A-0412', quantityG: 1000, receivedOn: '2026-11-01' })
+        .expect(201)
+    ).body;
     await h.http().delete(`/api/shelf/lots/${lot.id}`).set(lead).expect(204);
 
     const { items } = await list(shop);
     const byAction = (action: string) => items.find((e) => e.action === action)!;
-    expect(byAction('lot.delete')).toMatchObject({ objectId: lot.id, objectName: 'BRI-A-0412', link: null, actor: { id: shop.lead.user.id, name: 'Lead Person' } });
+    expect(byAction('lot.delete')).toMatchObject({
+      objectId: lot.id,
+      objectName: 'BRI-A-0412',
+      link: null,
+      actor: { id: shop.lead.user.id, name: 'Lead Person' },
+    });
     expect(byAction('lot.create')).toMatchObject({ objectName: 'BRI-A-0412', link: null });
     // The piece is named as it is called now, by every event about it, and linked.
     for (const action of ['piece.create', 'piece.update']) {
@@ -89,7 +111,13 @@ describe('the audit log', () => {
 
   it('pages through events of the same instant without skipping or repeating one', async () => {
     const shop = await createShop(h, 'Paging shop');
-    for (let i = 0; i < 6; i++) await h.http().post('/api/pieces').set(bearer(shop.lead)).send({ name: `Piece ${i}` }).expect(201);
+    for (let i = 0; i < 6; i++)
+      await h
+        .http()
+        .post('/api/pieces')
+        .set(bearer(shop.lead))
+        .send({ name: `Piece ${i}` })
+        .expect(201);
     const all = (await list(shop, { limit: 200 })).items;
     expect(all.length).toBeGreaterThanOrEqual(7);
     // Everything at one instant, as events written in one transaction are.

@@ -34,7 +34,10 @@ export function authRoutes(api: RouteRegistry, ds: DataSource, s: AuthSettings):
       clearSessionCookie(res, s);
       return undefined;
     },
-    me: ({ auth }) => ds.transaction(async (m) => describeMe(m, auth.userId, auth.shopId, auth.role, await calendarUrlOf(m, auth.userId, auth.shopId, s.jwtSecret, s.publicUrl))),
+    me: ({ auth }) =>
+      ds.transaction(async (m) =>
+        describeMe(m, auth.userId, auth.shopId, auth.role, await calendarUrlOf(m, auth.userId, auth.shopId, s.jwtSecret, s.publicUrl)),
+      ),
     switchShop: async ({ auth, body, req, res }) =>
       ds.transaction(async (m) => {
         const user = await m.findOneByOrFail(User, { id: auth.userId });

@@ -28,7 +28,14 @@ export async function register(ds: DataSource, s: AuthSettings, input: RegisterR
       const shop = await m.save(m.create(Shop, { name: input.shopName, ...(input.timeZone ? { timeZone: input.timeZone } : {}) }));
       const user = await m.save(m.create(User, { email: input.email, name: input.name, passwordHash }));
       await m.save(m.create(Membership, { userId: user.id, shopId: shop.id, role: 'lead', status: 'active' }));
-      await recordAudit(m, { shopId: shop.id, actor: { userId: user.id, userName: user.name }, action: 'shop.create', objectType: 'shop', objectId: shop.id, detail: { name: shop.name } });
+      await recordAudit(m, {
+        shopId: shop.id,
+        actor: { userId: user.id, userName: user.name },
+        action: 'shop.create',
+        objectType: 'shop',
+        objectId: shop.id,
+        detail: { name: shop.name },
+      });
       return openSession(m, s, user, shop.id, userAgent);
     });
   } catch (err) {
@@ -76,7 +83,11 @@ export async function requestPasswordReset(ds: DataSource, s: AuthSettings, emai
 export async function confirmPasswordReset(ds: DataSource, input: PasswordResetConfirm): Promise<void> {
   const passwordHash = await hashPassword(input.password);
   await ds.transaction(async (m) => {
-    const reset = await m.findOne(PasswordReset, { where: { tokenHash: tokenHash(input.token) }, relations: { user: true }, lock: { mode: 'pessimistic_write', tables: ['password_resets'] } });
+    const reset = await m.findOne(PasswordReset, {
+      where: { tokenHash: tokenHash(input.token) },
+      relations: { user: true },
+      lock: { mode: 'pessimistic_write', tables: ['password_resets'] },
+    });
     if (!reset) throw new AppError('not_found', 'reset_not_found', 'this reset link is not valid; ask for a new one');
     checkNewPassword(input.password, reset.user!);
     if (reset.usedAt) throw new AppError('gone', 'reset_used', 'this reset link was already used; ask for a new one');

@@ -7,7 +7,11 @@ const h = useHarness();
 describe('registration and sign-in', () => {
   it('creates a shop with its lead and signs in', async () => {
     const email = uniqueEmail('reg');
-    const res = await h.http().post('/api/auth/register').send({ shopName: 'Birch Hollow', name: 'Ada', email: email.toUpperCase(), password: PASSWORD }).expect(201);
+    const res = await h
+      .http()
+      .post('/api/auth/register')
+      .send({ shopName: 'Birch Hollow', name: 'Ada', email: email.toUpperCase(), password: PASSWORD })
+      .expect(201);
     expect(res.body.role).toBe('lead');
     expect(res.body.user.email).toBe(email);
     expect(res.body.shop).toMatchObject({ name: 'Birch Hollow', unitSystem: 'metric', scaleResolutionG: 0.1 });
@@ -18,7 +22,11 @@ describe('registration and sign-in', () => {
   it('refuses a second account with the same e-mail, whatever its case', async () => {
     const email = uniqueEmail('dup');
     await h.http().post('/api/auth/register').send({ shopName: 'One', name: 'A', email, password: PASSWORD }).expect(201);
-    const res = await h.http().post('/api/auth/register').send({ shopName: 'Two', name: 'B', email: ` ${email.toUpperCase()} `, password: PASSWORD }).expect(409);
+    const res = await h
+      .http()
+      .post('/api/auth/register')
+      .send({ shopName: 'Two', name: 'B', email: ` ${email.toUpperCase()} `, password: PASSWORD })
+      .expect(409);
     expect(res.body.error.code).toBe('email_taken');
     const shops = await h.ds.query(`SELECT count(*)::int AS n FROM shops WHERE name = 'Two'`);
     expect(shops[0].n).toBe(0);
@@ -32,7 +40,11 @@ describe('registration and sign-in', () => {
   });
 
   it('refuses common passwords and ones built from the e-mail (OWASP ASVS 6.2.4)', async () => {
-    for (const [password, why] of [['password1', 'commonly used'], ['qwertyuiop', 'commonly used'], ['sawdust-fan@example.test', 'e-mail']] as const) {
+    for (const [password, why] of [
+      ['password1', 'commonly used'],
+      ['qwertyuiop', 'commonly used'],
+      ['sawdust-fan@example.test', 'e-mail'],
+    ] as const) {
       const res = await h.http().post('/api/auth/register').send({ shopName: 'S', name: 'N', email: 'sawdust-fan@example.test', password }).expect(400);
       expect(res.body.error.code).toBe('weak_password');
       expect(res.body.error.fields.password).toMatch(why);
@@ -47,7 +59,11 @@ describe('registration and sign-in', () => {
   it('gives the same answer for a wrong password and an unknown e-mail', async () => {
     const shop = await createShop(h);
     const wrong = await h.http().post('/api/auth/login').send({ email: shop.lead.user.email, password: 'not the password' }).expect(401);
-    const unknown = await h.http().post('/api/auth/login').send({ email: uniqueEmail('nobody'), password: 'whatever it is' }).expect(401);
+    const unknown = await h
+      .http()
+      .post('/api/auth/login')
+      .send({ email: uniqueEmail('nobody'), password: 'whatever it is' })
+      .expect(401);
     expect(wrong.body).toEqual(unknown.body);
     const ok = await h.http().post('/api/auth/login').send({ email: shop.lead.user.email, password: PASSWORD }).expect(200);
     expect(ok.body.token).toEqual(expect.any(String));
@@ -70,10 +86,27 @@ describe('tokens', () => {
     const unsigned = `${b64({ alg: 'none', typ: 'JWT' })}.${b64(claims)}.`;
     const [head, , sig] = shop.lead.token.split('.');
     const tampered = `${head}.${b64({ ...claims, sub: '00000000-0000-4000-8000-000000000000' })}.${sig}`;
-    const foreign = jwt.sign({ sid: claims.sid }, 'some-other-secret-entirely-0123456789abcdef', { subject: claims.sub, issuer: 'gelpoint', audience: 'gelpoint-api' });
-    const expired = jwt.sign({ sid: claims.sid, exp: Math.floor(Date.now() / 1000) - 60 }, h.config.jwtSecret, { subject: claims.sub, issuer: 'gelpoint', audience: 'gelpoint-api' });
-    for (const [token, code] of [[unsigned, 'bad_token'], [tampered, 'bad_token'], [foreign, 'bad_token'], [expired, 'session_expired']] as const) {
-      const res = await h.http().get('/api/me').set({ Authorization: `Bearer ${token}` }).expect(401);
+    const foreign = jwt.sign({ sid: claims.sid }, 'some-other-secret-entirely-0123456789abcdef', {
+      subject: claims.sub,
+      issuer: 'gelpoint',
+      audience: 'gelpoint-api',
+    });
+    const expired = jwt.sign({ sid: claims.sid, exp: Math.floor(Date.now() / 1000) - 60 }, h.config.jwtSecret, {
+      subject: claims.sub,
+      issuer: 'gelpoint',
+      audience: 'gelpoint-api',
+    });
+    for (const [token, code] of [
+      [unsigned, 'bad_token'],
+      [tampered, 'bad_token'],
+      [foreign, 'bad_token'],
+      [expired, 'session_expired'],
+    ] as const) {
+      const res = await h
+        .http()
+        .get('/api/me')
+        .set({ Authorization: `Bearer ${token}` })
+        .expect(401);
       expect(res.body.error.code).toBe(code);
     }
     await h.http().get('/api/me').set({ Authorization: 'Basic abc' }).expect(401);
@@ -125,7 +158,11 @@ describe('password reset', () => {
     const shop = await createShop(h);
     const email = shop.lead.user.email;
     const res = await h.http().post('/api/auth/password-reset').send({ email }).expect(202);
-    const unknown = await h.http().post('/api/auth/password-reset').send({ email: uniqueEmail('ghost') }).expect(202);
+    const unknown = await h
+      .http()
+      .post('/api/auth/password-reset')
+      .send({ email: uniqueEmail('ghost') })
+      .expect(202);
     expect(unknown.body).toEqual(res.body);
     const rows = await h.ds.query(`SELECT body_text, subject, message_id FROM outbound_mail WHERE to_address = $1`, [email]);
     expect(rows).toHaveLength(1);

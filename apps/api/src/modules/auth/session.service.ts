@@ -15,13 +15,7 @@ export interface SessionSettings {
 export const userView = (u: User) => ({ id: u.id, email: u.email, name: u.name });
 
 /** Opens a session for the user in the shop and returns what sign-in answers with. */
-export async function openSession(
-  m: EntityManager,
-  s: SessionSettings,
-  user: User,
-  shopId: string,
-  userAgent: string,
-): Promise<SessionResponse> {
+export async function openSession(m: EntityManager, s: SessionSettings, user: User, shopId: string, userAgent: string): Promise<SessionResponse> {
   const membership = await m.findOneBy(Membership, { userId: user.id, shopId, status: 'active' });
   if (!membership) throw new AppError('forbidden', 'not_a_member', 'you are not an active member of that shop');
   const shop = await m.findOneByOrFail(Shop, { id: shopId });

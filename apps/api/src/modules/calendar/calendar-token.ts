@@ -15,7 +15,10 @@ export const feedUrl = (publicUrl: string, token: string) => `${publicUrl}/api/c
 
 /** The member's feed URL, made on first use. */
 export async function calendarUrlOf(m: EntityManager, userId: string, shopId: string, secret: string, publicUrl: string): Promise<string> {
-  const rows: { id: string; calendar_token_salt: string | null }[] = await m.query('SELECT id, calendar_token_salt FROM memberships WHERE user_id = $1 AND shop_id = $2', [userId, shopId]);
+  const rows: { id: string; calendar_token_salt: string | null }[] = await m.query(
+    'SELECT id, calendar_token_salt FROM memberships WHERE user_id = $1 AND shop_id = $2',
+    [userId, shopId],
+  );
   const row = rows[0];
   if (!row) throw new Error('the member has no membership in this shop');
   if (row.calendar_token_salt) return feedUrl(publicUrl, feedToken(secret, row.id, row.calendar_token_salt));

@@ -43,16 +43,25 @@ export class CalendarFeeds {
     const member = members[0];
     if (!member) throw notFound('calendar feed');
     const now = this.now();
-    const calendar = ical({ name: `${member.shop_name}: pours (Gelpoint)`, prodId: { company: 'Gelpoint', product: 'pour calendar', language: 'EN' }, method: ICalCalendarMethod.PUBLISH, ttl: 15 * 60 });
+    const calendar = ical({
+      name: `${member.shop_name}: pours (Gelpoint)`,
+      prodId: { company: 'Gelpoint', product: 'pour calendar', language: 'EN' },
+      method: ICalCalendarMethod.PUBLISH,
+      ttl: 15 * 60,
+    });
 
     const pours = await m.find(Pour, { where: { shopId: member.shop_id, status: 'open' } });
     const ids = pours.map((p) => p.id);
     const plans = new Map((await m.findBy(PourPlan, { id: In(pours.map((p) => p.pourPlanId)) })).map((p) => [p.id, p]));
     const pieces = new Map((await m.findBy(Piece, { id: In(pours.map((p) => p.pieceId)) })).map((p) => [p.id, p]));
     const reminders = ids.length ? await m.find(Reminder, { where: { pourId: In(ids) }, order: { eventAt: 'ASC' } }) : [];
-    const logged = groupByPour<{ pour_id: string; step: string; mixed_at: Date }>(ids.length ? await m.query('SELECT pour_id, step, mixed_at FROM pour_batches WHERE pour_id = ANY($1) AND voided_at IS NULL', [ids]) : []);
+    const logged = groupByPour<{ pour_id: string; step: string; mixed_at: Date }>(
+      ids.length ? await m.query('SELECT pour_id, step, mixed_at FROM pour_batches WHERE pour_id = ANY($1) AND voided_at IS NULL', [ids]) : [],
+    );
     const readings = groupByPour<{ pour_id: string; taken_at: Date; temp_c: number }>(
-      ids.length ? await m.query('SELECT pour_id, taken_at, temp_c FROM temperature_readings WHERE pour_id = ANY($1) AND voided_at IS NULL ORDER BY taken_at', [ids]) : [],
+      ids.length
+        ? await m.query('SELECT pour_id, taken_at, temp_c FROM temperature_readings WHERE pour_id = ANY($1) AND voided_at IS NULL ORDER BY taken_at', [ids])
+        : [],
     );
     const checks = groupByPour<{ pour_id: string; checked_at: Date; hardness_shore_d: number | null; stage: string }>(
       ids.length ? await m.query('SELECT pour_id, checked_at, hardness_shore_d, stage FROM cure_checks WHERE pour_id = ANY($1)', [ids]) : [],
@@ -78,7 +87,15 @@ export class CalendarFeeds {
       const l = loadedOf(pour, plans.get(pour.pourPlanId)!, piece);
       const log = (readings.get(pour.id) ?? []).map((x) => ({ at: x.taken_at.toISOString(), tempC: x.temp_c }));
       const assumed = await assumedTemperatureOf(m, member.shop_id, pour.assumedTempC, now);
-      const { state } = pourStateOf(l, settings, logged.get(pour.id) ?? [], log, (checks.get(pour.id) ?? []).map((c) => ({ checkedAt: c.checked_at, hardnessShoreD: c.hardness_shore_d, stage: c.stage })), now, assumed);
+      const { state } = pourStateOf(
+        l,
+        settings,
+        logged.get(pour.id) ?? [],
+        log,
+        (checks.get(pour.id) ?? []).map((c) => ({ checkedAt: c.checked_at, hardnessShoreD: c.hardness_shore_d, stage: c.stage })),
+        now,
+        assumed,
+      );
       if (!state.step || !state.status) continue;
       for (const stage of state.status.stages) {
         if (stage.reached || !stage.predictedAt || announcedByReminder.has(stage.key)) continue;

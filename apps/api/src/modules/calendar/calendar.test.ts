@@ -11,31 +11,57 @@ const iso = (msAgo: number) => new Date(Date.now() - msAgo).toISOString();
 async function pourUnderWay(pieceName = 'Walnut tray') {
   const shop = await createShop(h);
   const maker = await shop.member('maker');
-  const product = (await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ mixRatio: { a: 2, b: 1, basis: 'weight' }, referenceTempC: 20, minWorkTempC: 5, maxLayerMm: 25 })).expect(201)).body;
+  const product = (
+    await h
+      .http()
+      .post('/api/shelf/resin-systems')
+      .set(bearer(shop.lead))
+      .send(resinInput({ mixRatio: { a: 2, b: 1, basis: 'weight' }, referenceTempC: 20, minWorkTempC: 5, maxLayerMm: 25 }))
+      .expect(201)
+  ).body;
   const piece = (await h.http().post('/api/pieces').set(bearer(maker)).send({ name: pieceName }).expect(201)).body;
   const plan = (
     await h
       .http()
       .post('/api/pour-plans')
       .set(bearer(maker))
-      .send({ pieceId: piece.id, name: 'Two layers', cavity: { source: 'shape', shape: { kind: 'rectangle', lengthMm: 200, widthMm: 100, depthMm: 40 } }, fillLevelMm: 40, deepPour: { resinSystemId: product.id }, overPourPct: 0, cupWaste: { massG: 0 }, shopTempC: 20 })
+      .send({
+        pieceId: piece.id,
+        name: 'Two layers',
+        cavity: { source: 'shape', shape: { kind: 'rectangle', lengthMm: 200, widthMm: 100, depthMm: 40 } },
+        fillLevelMm: 40,
+        deepPour: { resinSystemId: product.id },
+        overPourPct: 0,
+        cupWaste: { massG: 0 },
+        shopTempC: 20,
+      })
       .expect(201)
   ).body;
   const cups = plan.result.layers[0].batches as { index: number; partA: { grams: number }; partB: { grams: number } }[];
   const pour = (await h.http().post('/api/pours').set(bearer(maker)).send({ pourPlanId: plan.id }).expect(201)).body;
-  for (const c of cups) await h.http().post(`/api/pours/${pour.id}/batches`).set(bearer(maker)).send({ planBatchIndex: c.index, mixedAt: iso(2 * hour), weighedAG: c.partA.grams, weighedBG: c.partB.grams }).expect(201);
+  for (const c of cups)
+    await h
+      .http()
+      .post(`/api/pours/${pour.id}/batches`)
+      .set(bearer(maker))
+      .send({ planBatchIndex: c.index, mixedAt: iso(2 * hour), weighedAG: c.partA.grams, weighedBG: c.partB.grams })
+      .expect(201);
   return { shop, maker, pour, piece };
 }
 
 const feedPath = (url: string) => new URL(url).pathname;
 
 async function feedOf(url: string) {
-  const res = await h.http().get(feedPath(url)).buffer(true).parse((r, done) => {
-    let text = '';
-    r.setEncoding('utf8');
-    r.on('data', (c: string) => (text += c));
-    r.on('end', () => done(null, text));
-  });
+  const res = await h
+    .http()
+    .get(feedPath(url))
+    .buffer(true)
+    .parse((r, done) => {
+      let text = '';
+      r.setEncoding('utf8');
+      r.on('data', (c: string) => (text += c));
+      r.on('end', () => done(null, text));
+    });
   return { status: res.status, type: res.headers['content-type'] as string | undefined, text: res.body as string };
 }
 
@@ -44,7 +70,14 @@ function events(text: string) {
   const calendar = new ICAL.Component(ICAL.parse(text));
   return calendar.getAllSubcomponents('vevent').map((v) => {
     const e = new ICAL.Event(v);
-    return { uid: e.uid, summary: e.summary, start: e.startDate.toJSDate().getTime(), description: e.description, url: v.getFirstPropertyValue('url'), alarms: v.getAllSubcomponents('valarm').length };
+    return {
+      uid: e.uid,
+      summary: e.summary,
+      start: e.startDate.toJSDate().getTime(),
+      description: e.description,
+      url: v.getFirstPropertyValue('url'),
+      alarms: v.getAllSubcomponents('valarm').length,
+    };
   });
 }
 
@@ -85,7 +118,11 @@ describe('calendar feeds', () => {
       expect(e.start).toBeGreaterThan(Date.now() - 60_000);
     }
     // The same events under the same UIDs on the next fetch, as a phone's calendar expects.
-    expect(events((await feedOf(me.calendarUrl)).text).map((e) => e.uid).sort()).toEqual(list.map((e) => e.uid).sort());
+    expect(
+      events((await feedOf(me.calendarUrl)).text)
+        .map((e) => e.uid)
+        .sort(),
+    ).toEqual(list.map((e) => e.uid).sort());
   });
 
   it('follows the cure model as readings arrive', async () => {

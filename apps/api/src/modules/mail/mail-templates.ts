@@ -2,7 +2,8 @@ import { shopTimeWords } from '@gelpoint/core';
 
 // Plain-text mail: it reads well in every client and carries the one link that matters. Times are the shop's own.
 
-const footer = '\n\n— Gelpoint, the pour planner and cure log of your shop\nYou get this because someone used your address in Gelpoint. If that was not you, ignore this message.';
+const footer =
+  '\n\n— Gelpoint, the pour planner and cure log of your shop\nYou get this because someone used your address in Gelpoint. If that was not you, ignore this message.';
 
 export function invitationMail(p: { shopName: string; inviterName: string; role: string; link: string; expiresAt: Date; timeZone: string }) {
   return {

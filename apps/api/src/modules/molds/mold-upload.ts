@@ -25,7 +25,11 @@ export function uploadedMould(res: Response): UploadedMould | undefined {
 }
 
 const tooLarge = (maxBytes: number) =>
-  new AppError('payload_too_large', 'file_too_large', `the mould file is larger than ${Math.round(maxBytes / 1024 / 1024)} MB; simplify the mesh (fewer triangles) or split the mould`);
+  new AppError(
+    'payload_too_large',
+    'file_too_large',
+    `the mould file is larger than ${Math.round(maxBytes / 1024 / 1024)} MB; simplify the mesh (fewer triangles) or split the mould`,
+  );
 
 // The HTML standard escapes LF, CR and " in multipart names as %0A, %0D and %22; nothing else is escaped.
 function decodeFormDataName(name: string): string {
@@ -41,7 +45,9 @@ function decodeFormDataName(name: string): string {
 export function stlUpload(maxBytes = MAX_STL_BYTES): RequestHandler {
   return (req, res, next) => {
     if (!req.is('multipart/form-data')) {
-      return next(new AppError('bad_request', 'multipart_required', 'send the mould as multipart/form-data with the file (STL, 3MF or OBJ) in a part named "file"'));
+      return next(
+        new AppError('bad_request', 'multipart_required', 'send the mould as multipart/form-data with the file (STL, 3MF or OBJ) in a part named "file"'),
+      );
     }
     const declared = Number(req.get('content-length'));
     if (Number.isFinite(declared) && declared > maxBytes + FORM_OVERHEAD_BYTES) return refuse(req, res, next, tooLarge(maxBytes));
@@ -49,7 +55,9 @@ export function stlUpload(maxBytes = MAX_STL_BYTES): RequestHandler {
     try {
       parser = busboy({ headers: req.headers, limits: { fileSize: maxBytes + 1, files: 1, fields: 8, fieldSize: 4096, parts: 12 } });
     } catch {
-      return next(new AppError('bad_request', 'bad_upload', 'the upload could not be read (the multipart boundary is missing); send it again as multipart/form-data'));
+      return next(
+        new AppError('bad_request', 'bad_upload', 'the upload could not be read (the multipart boundary is missing); send it again as multipart/form-data'),
+      );
     }
     // Sized from the declared length: the pages are only taken as bytes are written into them.
     const capacity = Math.min(Number.isFinite(declared) && declared > 0 ? declared : maxBytes, maxBytes);
@@ -82,7 +90,9 @@ export function stlUpload(maxBytes = MAX_STL_BYTES): RequestHandler {
         size += chunk.length;
       });
       upload = new Promise((resolve) =>
-        stream.on('end', () => resolve({ originalname: decodeFormDataName(info.filename ?? ''), bytes: store.subarray(0, size), size, sha256: hash.digest('hex') })),
+        stream.on('end', () =>
+          resolve({ originalname: decodeFormDataName(info.filename ?? ''), bytes: store.subarray(0, size), size, sha256: hash.digest('hex') }),
+        ),
       );
     });
     parser.on('field', (name, value, info) => {
@@ -92,8 +102,12 @@ export function stlUpload(maxBytes = MAX_STL_BYTES): RequestHandler {
       body[key] = value;
     });
     parser.on('filesLimit', () => fail(new AppError('bad_request', 'unexpected_file', 'send exactly one file, in the part named "file"')));
-    parser.on('fieldsLimit', () => fail(new AppError('bad_request', 'bad_upload', 'the upload has too many fields; send the file with units, up, name and pieceId only')));
-    parser.on('partsLimit', () => fail(new AppError('bad_request', 'bad_upload', 'the upload has too many parts; send the file with units, up, name and pieceId only')));
+    parser.on('fieldsLimit', () =>
+      fail(new AppError('bad_request', 'bad_upload', 'the upload has too many fields; send the file with units, up, name and pieceId only')),
+    );
+    parser.on('partsLimit', () =>
+      fail(new AppError('bad_request', 'bad_upload', 'the upload has too many parts; send the file with units, up, name and pieceId only')),
+    );
     parser.on('error', (err: Error) => fail(new AppError('bad_request', 'bad_upload', `the upload could not be read (${err.message}); send it again`)));
     parser.on('close', () => {
       void (upload ?? Promise.resolve(undefined)).then((file) => {

@@ -22,7 +22,13 @@ export interface MoldEventsSettings {
   heartbeatMs: number;
 }
 
-export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number, uploadLimit: RequestHandler, { ds, hub, heartbeatMs }: MoldEventsSettings): void {
+export function moldRoutes(
+  api: RouteRegistry,
+  molds: Molds,
+  maxStlBytes: number,
+  uploadLimit: RequestHandler,
+  { ds, hub, heartbeatMs }: MoldEventsSettings,
+): void {
   api.implement(
     routes,
     {
@@ -30,7 +36,8 @@ export function moldRoutes(api: RouteRegistry, molds: Molds, maxStlBytes: number
       listMolds: ({ auth, query }) => molds.list(auth.shopId, query),
       getMold: ({ auth, params }) => molds.get(auth.shopId, params.id),
       updateMold: ({ auth, params, body }) => molds.update(auth, params.id, body),
-      moldFill: ({ auth, params, query }) => molds.fill(auth.shopId, params.id, { levelMm: query.level, from: query.from, dam: query.dam, withDepthMap: query.depthMap === 'true' }),
+      moldFill: ({ auth, params, query }) =>
+        molds.fill(auth.shopId, params.id, { levelMm: query.level, from: query.from, dam: query.dam, withDepthMap: query.depthMap === 'true' }),
       moldLayers: ({ auth, params, query }) => molds.layers(auth.shopId, params.id, { levelsMm: query.levels, from: query.from, dam: query.dam }),
       moldEvents: async ({ auth, params, req, res }) => {
         await streamMoldEvents(ds, hub, heartbeatMs, { shopId: auth.shopId, moldId: params.id }, req, res);

@@ -51,9 +51,17 @@ export class Molds {
   };
 
   async upload(auth: AuthContext, file: UploadedMould | undefined, fields: UploadFields): Promise<MoldView> {
-    if (!file) throw new AppError('bad_request', 'file_missing', 'attach the mould file (STL, 3MF or OBJ) in the part named "file"', { file: 'choose an STL, 3MF or OBJ file' });
+    if (!file)
+      throw new AppError('bad_request', 'file_missing', 'attach the mould file (STL, 3MF or OBJ) in the part named "file"', {
+        file: 'choose an STL, 3MF or OBJ file',
+      });
     if (!mouldFileName.test(file.originalname)) {
-      throw new AppError('unprocessable', 'not_a_mould_file_name', `"${file.originalname.slice(0, 80)}" does not end in .stl, .3mf or .obj; export the mould from your CAD program in one of those formats`, { file: 'the file must be an .stl, .3mf or .obj' });
+      throw new AppError(
+        'unprocessable',
+        'not_a_mould_file_name',
+        `"${file.originalname.slice(0, 80)}" does not end in .stl, .3mf or .obj; export the mould from your CAD program in one of those formats`,
+        { file: 'the file must be an .stl, .3mf or .obj' },
+      );
     }
     // The file is read (to refuse a bad one with the reader's sentence) while it is written: a refusal cancels the
     // write and the transaction rolls back whole.
@@ -99,7 +107,14 @@ export class Molds {
       if (!checked.ok) throw refusal(checked);
       const units = fields.units ?? checked.fileUnits ?? 'mm';
       await m.update(Mold, { id: mold.id }, { format: checked.format, units, fileUnits: checked.fileUnits, triangleCount: checked.triangles });
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'mold.upload', objectType: 'mold', objectId: mold.id, detail: { name: mold.name, sha256: file.sha256, format: checked.format, units, triangles: checked.triangles } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: 'mold.upload',
+        objectType: 'mold',
+        objectId: mold.id,
+        detail: { name: mold.name, sha256: file.sha256, format: checked.format, units, triangles: checked.triangles },
+      });
       await m.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, mold.id]);
       return mold.id;
     });
@@ -148,11 +163,20 @@ export class Molds {
    * exactly those bytes, so a browser holding it revalidates without downloading it again.
    */
   async depthMap(shopId: string, id: string): Promise<{ json: string; etag: string }> {
-    const rows: { status: string; analysed_at: Date | null }[] = await this.ds.query('SELECT status, analysed_at FROM molds WHERE id = $1 AND shop_id = $2', [id, shopId]);
+    const rows: { status: string; analysed_at: Date | null }[] = await this.ds.query('SELECT status, analysed_at FROM molds WHERE id = $1 AND shop_id = $2', [
+      id,
+      shopId,
+    ]);
     const row = rows[0];
     if (!row) throw notFound('mould');
     const notReady = () =>
-      new AppError('conflict', 'mold_not_ready', row.status === 'failed' ? 'this mould could not be analysed; see its error and upload a corrected file' : 'the cavity report is not ready yet; try again in a moment');
+      new AppError(
+        'conflict',
+        'mold_not_ready',
+        row.status === 'failed'
+          ? 'this mould could not be analysed; see its error and upload a corrected file'
+          : 'the cavity report is not ready yet; try again in a moment',
+      );
     if (row.status !== 'ready' || !row.analysed_at) throw notReady();
     // Keyed by the analysis, so a mould read again (new units or up axis) is served anew.
     const key = `${id}@${row.analysed_at.toISOString()}`;
@@ -173,7 +197,12 @@ export class Molds {
   }
 
   async list(shopId: string, q: { pieceId?: string; limit: number; offset: number }) {
-    const qb = this.ds.getRepository(Mold).createQueryBuilder('m').select(summaryColumns.map((c) => `m.${c}`)).addSelect(`(m.report -> 'fillToTop' ->> 'volumeMm3')::float8`, 'fill_to_top').where('m.shop_id = :shopId', { shopId });
+    const qb = this.ds
+      .getRepository(Mold)
+      .createQueryBuilder('m')
+      .select(summaryColumns.map((c) => `m.${c}`))
+      .addSelect(`(m.report -> 'fillToTop' ->> 'volumeMm3')::float8`, 'fill_to_top')
+      .where('m.shop_id = :shopId', { shopId });
     if (q.pieceId) qb.andWhere('m.piece_id = :pieceId', { pieceId: q.pieceId });
     const total = await qb.getCount();
     const { entities, raw } = await qb.orderBy('m.createdAt', 'DESC').addOrderBy('m.id').offset(q.offset).limit(q.limit).getRawAndEntities();
@@ -199,7 +228,11 @@ export class Molds {
 
   async update(auth: AuthContext, id: string, change: UpdateMoldRequest): Promise<MoldView> {
     await this.ds.transaction(async (m) => {
-      const mold = await m.findOne(Mold, { where: { id, shopId: auth.shopId }, select: { id: true, name: true, pieceId: true, units: true, upAxis: true }, lock: { mode: 'pessimistic_write' } });
+      const mold = await m.findOne(Mold, {
+        where: { id, shopId: auth.shopId },
+        select: { id: true, name: true, pieceId: true, units: true, upAxis: true },
+        lock: { mode: 'pessimistic_write' },
+      });
       if (!mold) throw notFound('mould');
       if (change.pieceId && !(await m.findOneBy(Piece, { id: change.pieceId, shopId: auth.shopId }))) throw notFound('piece');
       const before = { name: mold.name, pieceId: mold.pieceId, units: mold.units, upAxis: mold.upAxis };
@@ -217,7 +250,14 @@ export class Molds {
         await m.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, id]);
       }
       const changed = Object.fromEntries(Object.entries(change).filter(([k, v]) => before[k as keyof typeof before] !== v));
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'mold.update', objectType: 'mold', objectId: id, detail: { before, change: changed, reanalysed: reread } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: 'mold.update',
+        objectType: 'mold',
+        objectId: id,
+        detail: { before, change: changed, reanalysed: reread },
+      });
     });
     return this.get(auth.shopId, id);
   }
@@ -259,7 +299,11 @@ export class Molds {
   async layers(shopId: string, id: string, q: { levelsMm: number[]; from: LevelFrom; dam: Dam }) {
     const model = await this.cache.model(this.ds.manager, shopId, id);
     const floorMm = floorOf(model, q.dam);
-    const v = layerVolumes(model, q.levelsMm.map((l) => inMouldFrame(l, q.from, floorMm)), q.dam);
+    const v = layerVolumes(
+      model,
+      q.levelsMm.map((l) => inMouldFrame(l, q.from, floorMm)),
+      q.dam,
+    );
     if (!v.ok) throw new AppError('bad_request', v.error.code, v.error.message, { levels: v.error.message });
     return { dam: q.dam, levelFrom: q.from, floorMm, layers: v.value.map((volumeMm3, i) => ({ fromMm: q.levelsMm[i]!, toMm: q.levelsMm[i + 1]!, volumeMm3 })) };
   }
@@ -271,10 +315,18 @@ export class Molds {
       const floor = floorOf(model, dam);
       const rim = model.analysis.bboxMm.max[2];
       if (!(levelAboveFloorMm > 0)) {
-        throw new AppError('unprocessable', 'fill_below_floor', `The fill level ${levelAboveFloorMm} mm is not above the cavity floor: no resin would be poured; give the height of the resin surface above the floor.`);
+        throw new AppError(
+          'unprocessable',
+          'fill_below_floor',
+          `The fill level ${levelAboveFloorMm} mm is not above the cavity floor: no resin would be poured; give the height of the resin surface above the floor.`,
+        );
       }
       if (floor + levelAboveFloorMm > rim + 1e-9) {
-        throw new AppError('unprocessable', 'fill_above_report', `The fill level ${levelAboveFloorMm} mm is above the top of the mould, ${aboveFloor(rim, floor)} mm above its cavity floor; choose a level inside the mould, or dam it higher and report again.`);
+        throw new AppError(
+          'unprocessable',
+          'fill_above_report',
+          `The fill level ${levelAboveFloorMm} mm is above the top of the mould, ${aboveFloor(rim, floor)} mm above its cavity floor; choose a level inside the mould, or dam it higher and report again.`,
+        );
       }
       const top = Math.min(rim, floor + levelAboveFloorMm);
       const facts = planCavityFacts(model, dam, floor, top);
@@ -287,5 +339,23 @@ export class Molds {
   };
 }
 
-const summaryColumns = ['id', 'shopId', 'pieceId', 'name', 'fileName', 'format', 'units', 'fileUnits', 'upAxis', 'sizeBytes', 'sha256', 'status', 'progress', 'errorCode', 'errorMessage', 'createdAt', 'analysedAt'] as const;
+const summaryColumns = [
+  'id',
+  'shopId',
+  'pieceId',
+  'name',
+  'fileName',
+  'format',
+  'units',
+  'fileUnits',
+  'upAxis',
+  'sizeBytes',
+  'sha256',
+  'status',
+  'progress',
+  'errorCode',
+  'errorMessage',
+  'createdAt',
+  'analysedAt',
+] as const;
 const summarySelect = Object.fromEntries(summaryColumns.map((c) => [c, true])) as Record<string, true>;

@@ -18,7 +18,6 @@ const pocket = pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 10, 90,
 const prism = (z: number) => 80 * 40 * (z - 10);
 const pocketMesh = { positions: Float64Array.from(pocket.flat(2)), triangleCount: pocket.length };
 
-
 let shop: ShopFixture;
 let maker: Awaited<ReturnType<ShopFixture['member']>>;
 beforeAll(async () => {
@@ -50,7 +49,8 @@ describe('mould upload and cavity report', { timeout: 90_000 }, () => {
     expect(mold.report.fillToTop.trappedAirMm3).toBeCloseTo(0, 3);
     // Wetted area: floor 80 × 40 plus walls 2 · (80 + 40) · 20 (rectangle areas).
     expect(mold.report.fillToTop.wettedAreaMm2).toBeCloseTo(80 * 40 + 2 * (80 + 40) * 20, -1);
-    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 20, from: 'mould', dam: 'outline' }).set(bearer(shop.lead)).expect(200)).body;
+    const fill = (await h.http().get(`/api/molds/${res.body.id}/fill`).query({ level: 20, from: 'mould', dam: 'outline' }).set(bearer(shop.lead)).expect(200))
+      .body;
     expect(fill.volumeMm3).toBeCloseTo(prism(20), -1);
     expect(fill).toMatchObject({ levelMm: 20, levelFrom: 'mould', floorMm: 10, levelAboveFloorMm: 10, levelInMouldMm: 20 });
     expect(fill.depthMap).toBeUndefined();
@@ -61,7 +61,10 @@ describe('mould upload and cavity report', { timeout: 90_000 }, () => {
     expect(Math.max(...withMap.depthMap.depthsMm)).toBeCloseTo(10, 3);
     const layers = (await h.http().get(`/api/molds/${res.body.id}/layers`).query({ levels: '0,10,20' }).set(bearer(maker)).expect(200)).body;
     expect(layers).toMatchObject({ levelFrom: 'floor', floorMm: 10 });
-    expect(layers.layers.map((l: { fromMm: number; toMm: number }) => [l.fromMm, l.toMm])).toEqual([[0, 10], [10, 20]]);
+    expect(layers.layers.map((l: { fromMm: number; toMm: number }) => [l.fromMm, l.toMm])).toEqual([
+      [0, 10],
+      [10, 20],
+    ]);
     expect(layers.layers.map((l: { volumeMm3: number }) => Math.round(l.volumeMm3))).toEqual([prism(20), prism(20)]);
     const list = (await h.http().get('/api/molds').set(bearer(maker)).expect(200)).body;
     expect(list.items.find((m: { id: string }) => m.id === res.body.id).fillVolumeToTopMm3).toBeCloseTo(prism(30), -1);
@@ -80,7 +83,10 @@ describe('mould upload and cavity report', { timeout: 90_000 }, () => {
     expect(first.status).toBe('ready');
     expect(await view()).toEqual(first);
     // What a fresh analysis leaves behind: another report and another analysed_at.
-    await h.ds.query(`UPDATE molds SET report = jsonb_set(report, '{fillToTop,maxDepthMm}', '21.5'), analysed_at = analysed_at + interval '1 second' WHERE id = $1`, [res.body.id]);
+    await h.ds.query(
+      `UPDATE molds SET report = jsonb_set(report, '{fillToTop,maxDepthMm}', '21.5'), analysed_at = analysed_at + interval '1 second' WHERE id = $1`,
+      [res.body.id],
+    );
     expect((await view()).report.fillToTop.maxDepthMm).toBe(21.5);
     await h.http().get(`/api/molds/${res.body.id}`).set(bearer(shop.lead)).expect(404);
   });

@@ -29,7 +29,14 @@ let pocketId: string;
 beforeAll(async () => {
   shop = await createShop(h, 'Datum shop');
   maker = await shop.member('maker');
-  resinId = (await h.http().post('/api/shelf/resin-systems').set(bearer(shop.lead)).send(resinInput({ maxLayerMm: 25 })).expect(201)).body.id;
+  resinId = (
+    await h
+      .http()
+      .post('/api/shelf/resin-systems')
+      .set(bearer(shop.lead))
+      .send(resinInput({ maxLayerMm: 25 }))
+      .expect(201)
+  ).body.id;
   pieceId = (await h.http().post('/api/pieces').set(bearer(maker)).send({ name: 'Bowl with a resin well' }).expect(201)).body.id;
   const upload = async (bytes: Buffer, name: string) =>
     (await h.http().post('/api/molds').set(bearer(maker)).attach('file', bytes, name).field('pieceId', pieceId).expect(202)).body.id as string;
@@ -39,7 +46,15 @@ beforeAll(async () => {
 }, 120_000);
 
 const plan = (cavity: object, fillLevelMm: number, extra: object = {}) => ({
-  pieceId, name: 'Datum walk', cavity, fillLevelMm, deepPour: { resinSystemId: resinId }, overPourPct: 0, cupWaste: { massG: 0 }, shopTempC: 21, ...extra,
+  pieceId,
+  name: 'Datum walk',
+  cavity,
+  fillLevelMm,
+  deepPour: { resinSystemId: resinId },
+  overPourPct: 0,
+  cupWaste: { massG: 0 },
+  shopTempC: 21,
+  ...extra,
 });
 
 describe('one datum for the fill level', () => {
@@ -64,28 +79,63 @@ describe('one datum for the fill level', () => {
     expect(relative(fromUnderside.volumeMm3, sphericalCapMm3(bowl.radiusMm, 10))).toBeLessThan(capTolerance);
 
     // Layers between heights above the floor: the lower half is the 10 mm cap, both together the 20 mm one.
-    const layers = (await h.http().get(`/api/molds/${bowlId}/layers`).query({ levels: `0,${depthMm / 2},${depthMm}` }).set(bearer(maker)).expect(200)).body;
+    const layers = (
+      await h
+        .http()
+        .get(`/api/molds/${bowlId}/layers`)
+        .query({ levels: `0,${depthMm / 2},${depthMm}` })
+        .set(bearer(maker))
+        .expect(200)
+    ).body;
     expect(layers).toMatchObject({ levelFrom: 'floor', floorMm: 10 });
     expect(relative(layers.layers[0].volumeMm3, sphericalCapMm3(bowl.radiusMm, depthMm / 2))).toBeLessThan(capTolerance);
     expect(relative(layers.layers[0].volumeMm3 + layers.layers[1].volumeMm3, cap)).toBeLessThan(capTolerance);
 
     // The planner's saved plan takes the same depth to the same resin: mL = mm³ / 1000 (NIST SP 811).
-    const saved = (await h.http().post('/api/pour-plans').set(bearer(maker)).send(plan({ source: 'mold', moldId: bowlId }, depthMm)).expect(201)).body;
+    const saved = (
+      await h
+        .http()
+        .post('/api/pour-plans')
+        .set(bearer(maker))
+        .send(plan({ source: 'mold', moldId: bowlId }, depthMm))
+        .expect(201)
+    ).body;
     expect(saved.inputs).toMatchObject({ fillLevelMm: depthMm, levelFrom: 'floor' });
     expect(relative(saved.result.fill.fillVolumeMl * 1000, cap)).toBeLessThan(capTolerance);
     expect(saved.result.fill.fillLevelMm).toBeCloseTo(depthMm, 9);
     expect(saved.result.layers).toHaveLength(1);
     expect(saved.result.fill.deepestResinMm).toBeCloseTo(depthMm, 6);
     // Given in the mould's frame instead, the plan is stored measured from the floor all the same.
-    const framed = (await h.http().post('/api/pour-plans').set(bearer(maker)).send(plan({ source: 'mold', moldId: bowlId }, 30, { levelFrom: 'mould' })).expect(201)).body;
+    const framed = (
+      await h
+        .http()
+        .post('/api/pour-plans')
+        .set(bearer(maker))
+        .send(plan({ source: 'mold', moldId: bowlId }, 30, { levelFrom: 'mould' }))
+        .expect(201)
+    ).body;
     expect(framed.inputs).toMatchObject({ fillLevelMm: depthMm, levelFrom: 'floor' });
     expect(framed.result.fill.fillVolumeMl).toBeCloseTo(saved.result.fill.fillVolumeMl, 9);
   });
 
   it('plans a box pocket from its mould exactly as the quick shape of the same pocket', async () => {
     // CRC Concise Encyclopedia of Mathematics, right prism: 80 × 40 × 15 mm³ = 48 mL.
-    const fromMould = (await h.http().post('/api/pour-plans').set(bearer(maker)).send(plan({ source: 'mold', moldId: pocketId }, 15)).expect(201)).body;
-    const fromShape = (await h.http().post('/api/pour-plans').set(bearer(maker)).send(plan({ source: 'shape', shape: { kind: 'rectangle', lengthMm: 80, widthMm: 40, depthMm: 20 } }, 15)).expect(201)).body;
+    const fromMould = (
+      await h
+        .http()
+        .post('/api/pour-plans')
+        .set(bearer(maker))
+        .send(plan({ source: 'mold', moldId: pocketId }, 15))
+        .expect(201)
+    ).body;
+    const fromShape = (
+      await h
+        .http()
+        .post('/api/pour-plans')
+        .set(bearer(maker))
+        .send(plan({ source: 'shape', shape: { kind: 'rectangle', lengthMm: 80, widthMm: 40, depthMm: 20 } }, 15))
+        .expect(201)
+    ).body;
     expect(fromMould.result.fill.fillVolumeMl).toBeCloseTo(boxPocketMm3(15) / 1000, 6);
     expect(fromShape.result.fill.fillVolumeMl).toBeCloseTo(boxPocketMm3(15) / 1000, 6);
     const fill = (await h.http().get(`/api/molds/${pocketId}/fill`).query({ level: 15 }).set(bearer(maker)).expect(200)).body;
@@ -93,12 +143,27 @@ describe('one datum for the fill level', () => {
   });
 
   it('refuses levels at the floor or above the rim, in floor heights, and a mould frame for a quick shape', async () => {
-    const low = await h.http().post('/api/pour-plans').set(bearer(maker)).send(plan({ source: 'mold', moldId: pocketId }, 0)).expect(422);
+    const low = await h
+      .http()
+      .post('/api/pour-plans')
+      .set(bearer(maker))
+      .send(plan({ source: 'mold', moldId: pocketId }, 0))
+      .expect(422);
     expect(low.body.error.code).toBe('fill_below_floor');
-    const high = await h.http().post('/api/pour-plans').set(bearer(maker)).send(plan({ source: 'mold', moldId: pocketId }, 25)).expect(422);
+    const high = await h
+      .http()
+      .post('/api/pour-plans')
+      .set(bearer(maker))
+      .send(plan({ source: 'mold', moldId: pocketId }, 25))
+      .expect(422);
     expect(high.body.error).toMatchObject({ code: 'fill_above_report' });
     expect(high.body.error.message).toContain('20 mm above its cavity floor');
-    const shape = await h.http().post('/api/pour-plans').set(bearer(maker)).send(plan({ source: 'shape', shape: { kind: 'cylinder', diameterMm: 50, depthMm: 10 } }, 10, { levelFrom: 'mould' })).expect(400);
+    const shape = await h
+      .http()
+      .post('/api/pour-plans')
+      .set(bearer(maker))
+      .send(plan({ source: 'shape', shape: { kind: 'cylinder', diameterMm: 50, depthMm: 10 } }, 10, { levelFrom: 'mould' }))
+      .expect(400);
     expect(shape.body.error.code).toBe('level_from_invalid');
   });
 

@@ -25,17 +25,40 @@ const upload = async (bytes: Buffer, fields: Record<string, string> = {}) => {
   return (await req.expect(202)).body.id as string;
 };
 const planOn = (pieceId: string, moldId: string, name: string) => ({
-  pieceId, name, cavity: { source: 'mold', moldId }, fillLevelMm: 10, deepPour: { resinSystemId: resinId }, shopTempC: 21,
+  pieceId,
+  name,
+  cavity: { source: 'mold', moldId },
+  fillLevelMm: 10,
+  deepPour: { resinSystemId: resinId },
+  shopTempC: 21,
 });
-const auditOf = async (moldId: string) => (await h.http().get('/api/audit').query({ objectType: 'mold', objectId: moldId }).set(bearer(shop.lead)).expect(200)).body.items as { action: string; detail: Record<string, unknown> }[];
+const auditOf = async (moldId: string) =>
+  (await h.http().get('/api/audit').query({ objectType: 'mold', objectId: moldId }).set(bearer(shop.lead)).expect(200)).body.items as {
+    action: string;
+    detail: Record<string, unknown>;
+  }[];
 
 describe('a mould that plans use', () => {
   it('is not deleted: 409 names the plans, and it goes once they are gone', async () => {
     const pieceId = await newPiece('Tray');
     const moldId = await upload(binaryStl(pocket), { pieceId });
     analyseQueuedMoulds();
-    const first = (await h.http().post('/api/pour-plans').set(bearer(maker)).send(planOn(pieceId, moldId, 'First pour')).expect(201)).body;
-    const second = (await h.http().post('/api/pour-plans').set(bearer(maker)).send(planOn(pieceId, moldId, 'Flood coat')).expect(201)).body;
+    const first = (
+      await h
+        .http()
+        .post('/api/pour-plans')
+        .set(bearer(maker))
+        .send(planOn(pieceId, moldId, 'First pour'))
+        .expect(201)
+    ).body;
+    const second = (
+      await h
+        .http()
+        .post('/api/pour-plans')
+        .set(bearer(maker))
+        .send(planOn(pieceId, moldId, 'Flood coat'))
+        .expect(201)
+    ).body;
 
     const refused = await h.http().delete(`/api/molds/${moldId}`).set(bearer(maker)).expect(409);
     expect(refused.body.error.code).toBe('mold_in_use');
@@ -68,7 +91,10 @@ describe('PATCH /api/molds/:id', () => {
     expect(detached.pieceId).toBeNull();
     expect(detached.status).toBe('queued');
     const events = await auditOf(moldId);
-    expect(events.filter((e) => e.action === 'mold.update').map((e) => e.detail.change)).toEqual([{ pieceId: null }, { name: 'Table top, left pocket', pieceId }]);
+    expect(events.filter((e) => e.action === 'mold.update').map((e) => e.detail.change)).toEqual([
+      { pieceId: null },
+      { name: 'Table top, left pocket', pieceId },
+    ]);
   });
 
   it('reads the stored file again when the units are corrected, without an upload', async () => {
@@ -110,7 +136,9 @@ describe('PATCH /api/molds/:id', () => {
 
   it('refuses an empty change, a name of nothing and another shop’s piece', async () => {
     const moldId = await upload(binaryStl(pocket));
-    expect((await h.http().patch(`/api/molds/${moldId}`).set(bearer(maker)).send({}).expect(400)).body.error.message).toMatch(/at least one of name, pieceId, units, upAxis/);
+    expect((await h.http().patch(`/api/molds/${moldId}`).set(bearer(maker)).send({}).expect(400)).body.error.message).toMatch(
+      /at least one of name, pieceId, units, upAxis/,
+    );
     await h.http().patch(`/api/molds/${moldId}`).set(bearer(maker)).send({ name: '  ' }).expect(400);
     await h.http().patch(`/api/molds/${moldId}`).set(bearer(maker)).send({ units: 'furlongs' }).expect(400);
     const other = await createShop(h, 'Other links shop');

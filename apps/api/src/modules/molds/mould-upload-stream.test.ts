@@ -39,7 +39,12 @@ const count = async (sql: string, params: unknown[]) => ((await h.ds.query(`SELE
 describe('a streamed mould upload', () => {
   it('stores the file once, under the SHA-256 of the very bytes sent, as PostgreSQL itself hashes what it stored', async () => {
     // A terrain block of 19 208 triangles (about 0.9 MB): the upload arrives in many chunks.
-    const bytes = Buffer.from(encodeStlBinary(heightFieldBlock({ width: 120, depth: 80, bottomZ: 0, nx: 96, ny: 96, top: (x, y) => 30 - 5 * Math.sin(x / 17) * Math.cos(y / 13) }), 'solid terrain'));
+    const bytes = Buffer.from(
+      encodeStlBinary(
+        heightFieldBlock({ width: 120, depth: 80, bottomZ: 0, nx: 96, ny: 96, top: (x, y) => 30 - 5 * Math.sin(x / 17) * Math.cos(y / 13) }),
+        'solid terrain',
+      ),
+    );
     expect(bytes.length).toBeGreaterThan(800_000);
     const res = await upload(bytes, 'terrain.stl').expect(202);
     // Node's own SHA-256 of what was sent, and PostgreSQL's sha256() of what was stored: two implementations apart from ours.

@@ -4,8 +4,7 @@ import { tsWorker } from '../../ts-worker';
 
 /** What reading an upload found: its format, triangles and (3MF) the unit it states, or the reader's refusal. */
 export type StlCheck =
-  | { ok: true; triangles: number; format: MouldFormat; fileUnits: FileUnits | null }
-  | { ok: false; error: { code: string; message: string } };
+  { ok: true; triangles: number; format: MouldFormat; fileUnits: FileUnits | null } | { ok: false; error: { code: string; message: string } };
 
 /**
  * One long-lived thread that reads uploads (STL, 3MF or OBJ) to check them, so a bad file is refused at once with the
@@ -16,7 +15,10 @@ export class StlChecker {
   private nextId = 1;
   private readonly waiting = new Map<number, (r: StlCheck) => void>();
 
-  constructor(private readonly maxTriangles: number, private readonly maxUnpackedBytes = defaultArchiveLimits.maxPartBytes) {}
+  constructor(
+    private readonly maxTriangles: number,
+    private readonly maxUnpackedBytes = defaultArchiveLimits.maxPartBytes,
+  ) {}
 
   private thread(): Worker {
     if (this.worker) return this.worker;

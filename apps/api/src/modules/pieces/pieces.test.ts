@@ -19,7 +19,12 @@ describe('pieces', () => {
     const page = await h.http().get('/api/pieces').query({ limit: 1, offset: 1 }).set(bearer(shop.lead)).expect(200);
     expect(page.body).toMatchObject({ total: 2, items: [expect.any(Object)] });
 
-    const updated = await h.http().patch(`/api/pieces/${a.body.id}`).set(bearer(shop.lead)).send({ stage: 'pouring', notes: 'first layer tonight' }).expect(200);
+    const updated = await h
+      .http()
+      .patch(`/api/pieces/${a.body.id}`)
+      .set(bearer(shop.lead))
+      .send({ stage: 'pouring', notes: 'first layer tonight' })
+      .expect(200);
     expect(updated.body).toMatchObject({ stage: 'pouring', notes: 'first layer tonight', name: 'Walnut tray' });
     await h.http().delete(`/api/pieces/${a.body.id}`).set(bearer(shop.lead)).expect(204);
     await h.http().get(`/api/pieces/${a.body.id}`).set(bearer(shop.lead)).expect(404);
@@ -39,7 +44,12 @@ describe('pieces', () => {
       [[1, 2], 'body'],
     ];
     for (const [body, field] of cases) {
-      const res = await h.http().post('/api/pieces').set(bearer(shop.lead)).send(body as object).expect(400);
+      const res = await h
+        .http()
+        .post('/api/pieces')
+        .set(bearer(shop.lead))
+        .send(body as object)
+        .expect(400);
       expect(Object.keys(res.body.error.fields)).toContain(field);
     }
     await h.http().get('/api/pieces').query({ limit: 100000 }).set(bearer(shop.lead)).expect(400);
@@ -48,7 +58,7 @@ describe('pieces', () => {
     expect(n[0].n).toBe(0);
   });
 
-  it("stores text as given, SQL-looking or not", async () => {
+  it('stores text as given, SQL-looking or not', async () => {
     const shop = await createShop(h);
     const name = `Robert'); DROP TABLE pieces;-- 🌊 ñ`;
     const res = await h.http().post('/api/pieces').set(bearer(shop.lead)).send({ name }).expect(201);

@@ -38,7 +38,12 @@ function isRecord(value: unknown): value is Record<string, unknown> {
  * frame: those are converted with the mould's floor as its analysis gives it now. When the analysis cannot say (the
  * mould is being analysed again), they keep their number and say levelFrom: 'mould', never taken for a floor height.
  */
-export async function storedInputs(m: EntityManager, shopId: string, inputs: Record<string, unknown>, molds: MoldCavityLookup): Promise<Record<string, unknown>> {
+export async function storedInputs(
+  m: EntityManager,
+  shopId: string,
+  inputs: Record<string, unknown>,
+  molds: MoldCavityLookup,
+): Promise<Record<string, unknown>> {
   if (inputs.levelFrom !== undefined) return inputs;
   const cavity = inputs.cavity;
   // A quick shape's level was always its depth above its floor.

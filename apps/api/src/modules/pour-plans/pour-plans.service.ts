@@ -22,7 +22,13 @@ async function activeProduct<T extends ResinSystem | Pigment>(m: EntityManager, 
   return row;
 }
 
-async function compute(m: EntityManager, shopId: string, input: PlanInput, moldCavity: MoldCavityLookup, { scaleResolutionG, offRatioTolerancePct }: ShopScale) {
+async function compute(
+  m: EntityManager,
+  shopId: string,
+  input: PlanInput,
+  moldCavity: MoldCavityLookup,
+  { scaleResolutionG, offRatioTolerancePct }: ShopScale,
+) {
   const piece = await m.findOneBy(Piece, { id: input.pieceId, shopId });
   if (!piece) throw notFound('piece');
   const deep = await activeProduct(m, ResinSystem, shopId, input.deepPour.resinSystemId, 'resin system');
@@ -50,7 +56,14 @@ async function compute(m: EntityManager, shopId: string, input: PlanInput, moldC
     fillLevelMm,
     deepPour: { product: snapshot.deepPour, ...(snapshot.pigment ? { pigment: { pigment: snapshot.pigment, pct: input.deepPour.pigmentPct } } : {}) },
     ...(snapshot.sealCoat && input.sealCoat
-      ? { sealCoat: { product: snapshot.sealCoat, filmThicknessMm: input.sealCoat.filmThicknessMm, coats: input.sealCoat.coats, absorptionFactor: input.sealCoat.absorptionFactor } }
+      ? {
+          sealCoat: {
+            product: snapshot.sealCoat,
+            filmThicknessMm: input.sealCoat.filmThicknessMm,
+            coats: input.sealCoat.coats,
+            absorptionFactor: input.sealCoat.absorptionFactor,
+          },
+        }
       : {}),
     overPourPct: input.overPourPct,
     cupWaste: input.cupWaste,
@@ -93,7 +106,10 @@ interface ShopScale {
 }
 
 async function shopScale(m: EntityManager, shopId: string): Promise<ShopScale> {
-  const rows: { scale_resolution_g: number; off_ratio_tolerance_pct: number }[] = await m.query('SELECT scale_resolution_g, off_ratio_tolerance_pct FROM shops WHERE id = $1', [shopId]);
+  const rows: { scale_resolution_g: number; off_ratio_tolerance_pct: number }[] = await m.query(
+    'SELECT scale_resolution_g, off_ratio_tolerance_pct FROM shops WHERE id = $1',
+    [shopId],
+  );
   return { scaleResolutionG: rows[0]?.scale_resolution_g ?? 0.1, offRatioTolerancePct: rows[0]?.off_ratio_tolerance_pct ?? 3 };
 }
 
@@ -138,7 +154,14 @@ export class PourPlans {
           createdById: auth.userId,
         }),
       );
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'pour_plan.create', objectType: 'pour_plan', objectId: plan.id, detail: { name: plan.name, pieceId: plan.pieceId } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: 'pour_plan.create',
+        objectType: 'pour_plan',
+        objectId: plan.id,
+        detail: { name: plan.name, pieceId: plan.pieceId },
+      });
       return plan.id;
     });
     return this.get(auth.shopId, id);
@@ -159,7 +182,14 @@ export class PourPlans {
         result,
       });
       await m.save(plan);
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'pour_plan.update', objectType: 'pour_plan', objectId: id, detail: { name: plan.name } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: 'pour_plan.update',
+        objectType: 'pour_plan',
+        objectId: id,
+        detail: { name: plan.name },
+      });
     });
     return this.get(auth.shopId, id);
   }
@@ -169,7 +199,14 @@ export class PourPlans {
       const plan = await m.findOneBy(PourPlan, { id, shopId: auth.shopId });
       if (!plan) throw notFound('pour plan');
       await m.delete(PourPlan, { id });
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'pour_plan.delete', objectType: 'pour_plan', objectId: id, detail: { name: plan.name } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: 'pour_plan.delete',
+        objectType: 'pour_plan',
+        objectId: id,
+        detail: { name: plan.name },
+      });
     });
   }
 }

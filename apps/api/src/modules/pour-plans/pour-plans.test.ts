@@ -5,7 +5,6 @@ import { binaryStl, pocketMouldTriangles } from '../../test-support/pocket-mould
 
 const h = useHarness();
 
-
 async function setUp() {
   const shop = await createShop(h);
   const maker = await shop.member('maker');
@@ -48,7 +47,12 @@ describe('pour plans', () => {
       expect(layer.curve.length).toBeGreaterThan(2);
     }
 
-    await h.http().put(`/api/shelf/resin-systems/${product.id}`).set(bearer(shop.lead)).send(resin({ name: 'Renamed on the shelf', maxLayerMm: 50 })).expect(200);
+    await h
+      .http()
+      .put(`/api/shelf/resin-systems/${product.id}`)
+      .set(bearer(shop.lead))
+      .send(resin({ name: 'Renamed on the shelf', maxLayerMm: 50 }))
+      .expect(200);
     const again = (await h.http().get(`/api/pour-plans/${res.body.id}`).set(bearer(maker)).expect(200)).body;
     expect(again.productSnapshot.deepPour.name).toBe('Stillwater Deep 50');
     expect(again.result.layers).toHaveLength(2);
@@ -65,7 +69,15 @@ describe('pour plans', () => {
     const mold = (await h.http().post('/api/molds').set(bearer(maker)).attach('file', stl, 'pocket.stl').field('pieceId', piece.id).expect(202)).body;
     analyseQueuedMoulds();
     // The fill level is the resin's height above the pocket floor, as for a quick shape: 20 mm fills it to the rim.
-    const body = { pieceId: piece.id, name: 'From the mould', cavity: { source: 'mold', moldId: mold.id }, fillLevelMm: 20, deepPour: { resinSystemId: product.id }, overPourPct: 0, shopTempC: 22 };
+    const body = {
+      pieceId: piece.id,
+      name: 'From the mould',
+      cavity: { source: 'mold', moldId: mold.id },
+      fillLevelMm: 20,
+      deepPour: { resinSystemId: product.id },
+      overPourPct: 0,
+      shopTempC: 22,
+    };
     const plan = (await h.http().post('/api/pour-plans').set(bearer(maker)).send(body).expect(201)).body;
     // The pocket is a prism 80 × 40 × 20 mm = 64 mL (CRC, prism volume); 20 mm is one layer.
     expect(plan.result.fill.fillVolumeMl).toBeCloseTo(64, 1);
@@ -78,7 +90,12 @@ describe('pour plans', () => {
     expect(layer.hottest.yMm).toBeGreaterThan(10);
     expect(layer.hottest.yMm).toBeLessThan(50);
     // At or below the floor there is nothing to pour.
-    const tooLow = await h.http().post('/api/pour-plans').set(bearer(maker)).send({ ...body, fillLevelMm: -5 }).expect(422);
+    const tooLow = await h
+      .http()
+      .post('/api/pour-plans')
+      .set(bearer(maker))
+      .send({ ...body, fillLevelMm: -5 })
+      .expect(422);
     expect(tooLow.body.error.code).toBe('fill_below_floor');
     // The analysis runs in a worker process of its own, started cold: on a busy machine that alone can take most of
     // the default 30 s.
@@ -88,8 +105,20 @@ describe('pour plans', () => {
     const { shop, maker, product, piece } = await setUp();
     const other = await createShop(h);
     const foreignPiece = (await h.http().post('/api/pieces').set(bearer(other.lead)).send({ name: 'Not yours' }).expect(201)).body;
-    const body = { pieceId: piece.id, name: 'P', cavity: { source: 'shape', shape: { kind: 'cylinder', diameterMm: 100, depthMm: 10 } }, fillLevelMm: 10, deepPour: { resinSystemId: product.id }, shopTempC: 22 };
-    await h.http().post('/api/pour-plans').set(bearer(maker)).send({ ...body, pieceId: foreignPiece.id }).expect(404);
+    const body = {
+      pieceId: piece.id,
+      name: 'P',
+      cavity: { source: 'shape', shape: { kind: 'cylinder', diameterMm: 100, depthMm: 10 } },
+      fillLevelMm: 10,
+      deepPour: { resinSystemId: product.id },
+      shopTempC: 22,
+    };
+    await h
+      .http()
+      .post('/api/pour-plans')
+      .set(bearer(maker))
+      .send({ ...body, pieceId: foreignPiece.id })
+      .expect(404);
     await h.http().delete(`/api/shelf/resin-systems/${product.id}`).set(bearer(shop.lead)).expect(204);
     expect((await h.http().post('/api/pour-plans').set(bearer(maker)).send(body).expect(422)).body.error.code).toBe('product_archived');
     expect((await h.ds.query('SELECT count(*)::int AS n FROM pour_plans WHERE shop_id = $1', [shop.shopId]))[0].n).toBe(0);

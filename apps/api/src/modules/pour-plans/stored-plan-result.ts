@@ -9,7 +9,11 @@ const asCorePlan = (plan: PourPlanResult): CorePourPlan => plan;
 export function storedPlanResult(stored: unknown): CorePourPlan {
   const parsed = PourPlanResult.safeParse(stored);
   if (!parsed.success) {
-    throw new AppError('conflict', 'plan_unreadable', 'The stored result of this pour plan is not in a form Gelpoint can read; open the plan and save it again to recompute it.');
+    throw new AppError(
+      'conflict',
+      'plan_unreadable',
+      'The stored result of this pour plan is not in a form Gelpoint can read; open the plan and save it again to recompute it.',
+    );
   }
   return asCorePlan(parsed.data);
 }

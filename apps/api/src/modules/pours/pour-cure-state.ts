@@ -1,5 +1,15 @@
 import type { EntityManager } from 'typeorm';
-import { cureState, plannedBatches, planSteps, releaseEvidence, wantedReminders, type AssumedTemperature, type CureReading, type CureState, type ReleaseEvidence } from '@gelpoint/core';
+import {
+  cureState,
+  plannedBatches,
+  planSteps,
+  releaseEvidence,
+  wantedReminders,
+  type AssumedTemperature,
+  type CureReading,
+  type CureState,
+  type ReleaseEvidence,
+} from '@gelpoint/core';
 import { checksOf, cureSettingsOf, liveReadingsOf, loggedStepsOf, shopHoursOf, type CureSettings, type LoadedPour, type LoggedStep } from './pour-queries';
 import { syncReminders } from './pour-reminders';
 import { assumedTemperatureOf } from './shop-temperature-of';
@@ -14,9 +24,24 @@ export interface PourState {
 type Check = { checkedAt: Date; hardnessShoreD: number | null; stage: string };
 
 /** Where a pour's cure stands, from its logged cups, readings and checks, as of `now`. */
-export function pourStateOf(l: LoadedPour, settings: CureSettings, logged: LoggedStep[], readings: CureReading[], checks: Check[], now: Date, assumed: AssumedTemperature = l.pour.assumedTempC): PourState {
+export function pourStateOf(
+  l: LoadedPour,
+  settings: CureSettings,
+  logged: LoggedStep[],
+  readings: CureReading[],
+  checks: Check[],
+  now: Date,
+  assumed: AssumedTemperature = l.pour.assumedTempC,
+): PourState {
   const steps = planSteps(l.result, l.snapshot);
-  const state = cureState(steps, logged.map((b) => ({ step: b.step, mixedAt: b.mixed_at })), readings, assumed, now, { readingCarryH: settings.readingCarryH });
+  const state = cureState(
+    steps,
+    logged.map((b) => ({ step: b.step, mixedAt: b.mixed_at })),
+    readings,
+    assumed,
+    now,
+    { readingCarryH: settings.readingCarryH },
+  );
   return { state, release: releaseEvidence(state, checks), batchesLogged: logged.length, batchesPlanned: plannedBatches(l.result).length };
 }
 
@@ -35,9 +60,14 @@ export async function refreshReminders(m: EntityManager, l: LoadedPour, now: Dat
   const checks = await checksOf(m, l.pour.id);
   const assumed = await assumedTemperatureOf(m, l.pour.shopId, l.pour.assumedTempC, now);
   const { state } = pourStateOf(l, settings, await loggedStepsOf(m, l.pour.id), await liveReadingsOf(m, l.pour.id), checks, now, assumed);
-  const finish = l.pour.machinedAt && l.pour.finishCoats ? { machinedAt: l.pour.machinedAt, coats: l.pour.finishCoats, hoursBetween: l.pour.finishCoatIntervalH ?? 24 } : null;
+  const finish =
+    l.pour.machinedAt && l.pour.finishCoats
+      ? { machinedAt: l.pour.machinedAt, coats: l.pour.finishCoats, hoursBetween: l.pour.finishCoatIntervalH ?? 24 }
+      : null;
   const active = l.pour.status === 'open';
-  const wanted = wantedReminders(active ? state : { ...state, step: null, status: null }, l.piece.name, now, finish, { windowCloseLeadMin: settings.windowCloseLeadMin });
+  const wanted = wantedReminders(active ? state : { ...state, step: null, status: null }, l.piece.name, now, finish, {
+    windowCloseLeadMin: settings.windowCloseLeadMin,
+  });
   const pouredMs = state.pouredAt?.getTime() ?? Infinity;
   const demolded = checks.some((c) => demoldedStages.has(c.stage) && c.checkedAt.getTime() >= pouredMs);
   await syncReminders(

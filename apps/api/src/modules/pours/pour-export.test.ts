@@ -27,15 +27,36 @@ describe('a pour as CSV', () => {
       const row = rows[i]!;
       expect(row.batchId).toBe(batch.id);
       expect(row.cup).toBe((batch.planBatchIndex as number) + 1);
-      for (const key of ['targetAG', 'targetBG', 'targetPigmentG', 'weighedAG', 'weighedBG', 'weighedPigmentG', 'offRatioPct', 'ambientTempC', 'surfaceTempC', 'rhPct', 'dewPointC'] as const) {
+      for (const key of [
+        'targetAG',
+        'targetBG',
+        'targetPigmentG',
+        'weighedAG',
+        'weighedBG',
+        'weighedPigmentG',
+        'offRatioPct',
+        'ambientTempC',
+        'surfaceTempC',
+        'rhPct',
+        'dewPointC',
+      ] as const) {
         expect(row[key], `${key} of cup ${i + 1}`).toBe(batch[key]);
       }
       // ISO 8601 with the shop's offset (Vancouver: −08:00 in winter, −07:00 in summer, IANA tz), the same instant as the JSON's.
       expect(row.mixedAt).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{3})?-0[78]:00$/);
       expect(Date.parse(String(row.mixedAt))).toBe(Date.parse(batch.mixedAt as string));
-      const localHour = new Intl.DateTimeFormat('en-GB', { timeZone: 'America/Vancouver', hour: '2-digit', hourCycle: 'h23' }).format(new Date(batch.mixedAt as string));
+      const localHour = new Intl.DateTimeFormat('en-GB', { timeZone: 'America/Vancouver', hour: '2-digit', hourCycle: 'h23' }).format(
+        new Date(batch.mixedAt as string),
+      );
       expect(String(row.mixedAt).slice(11, 13)).toBe(localHour);
-      expect(row).toMatchObject({ step: batch.step, mixedBy: (batch.mixedBy as { name: string }).name, lotA: 'csvbatches-A-1', lotB: 'csvbatches-B-1', lotPigment: 'csvbatches-P-1', voided: 'false' });
+      expect(row).toMatchObject({
+        step: batch.step,
+        mixedBy: (batch.mixedBy as { name: string }).name,
+        lotA: 'csvbatches-A-1',
+        lotB: 'csvbatches-B-1',
+        lotPigment: 'csvbatches-P-1',
+        voided: 'false',
+      });
     }
     // The weighed grams are the ones logged, decimals and all.
     expect(rows.map((r) => r.weighedAG)).toEqual(w.logged.map((l) => l.weighedAG));

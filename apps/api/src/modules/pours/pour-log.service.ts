@@ -49,7 +49,6 @@ export interface LogBatchInput {
 
 type Warning = { code: string; message: string };
 
-
 /** How long before a pour was set up in Gelpoint its first cups may be logged (mixed first, logged later). */
 const retroLogWindowMs = 30 * 24 * 3_600_000;
 
@@ -75,7 +74,15 @@ export class PourLog {
     const newStep = steps.findIndex((s) => s.key === stepKeyOf(planned));
     const settings = await cureSettingsOf(m, l.pour.shopId);
     const assumed = await assumedTemperatureOf(m, l.pour.shopId, l.pour.assumedTempC, mixedAt);
-    const { state } = pourStateOf(l, settings, await loggedStepsOf(m, l.pour.id), await liveReadingsOf(m, l.pour.id), await checksOf(m, l.pour.id), mixedAt, assumed);
+    const { state } = pourStateOf(
+      l,
+      settings,
+      await loggedStepsOf(m, l.pour.id),
+      await liveReadingsOf(m, l.pour.id),
+      await checksOf(m, l.pour.id),
+      mixedAt,
+      assumed,
+    );
     if (!state.step || !state.status || steps.findIndex((s) => s.key === state.step!.key) >= newStep) return [];
     if (state.status.nextLayerWindow !== 'not_open') return [];
     const opens = state.status.stages.find((s) => s.key === 'next_layer_opens');
@@ -96,11 +103,27 @@ export class PourLog {
       const l = await loadPour(m, auth.shopId, pourId, true);
       if (l.pour.status !== 'open') throw new AppError('conflict', 'pour_closed', 'this pour is released; batches can no longer be added');
       const planned = plannedBatches(l.result).find((b) => b.index === input.planBatchIndex);
-      if (!planned) throw new AppError('bad_request', 'invalid_input', `the run sheet has no batch ${input.planBatchIndex + 1}`, { planBatchIndex: 'not on the run sheet' });
-      const live: unknown[] = await m.query('SELECT 1 FROM pour_batches WHERE pour_id = $1 AND plan_batch_index = $2 AND voided_at IS NULL', [pourId, input.planBatchIndex]);
-      if (live.length > 0) throw new AppError('conflict', 'batch_already_logged', `batch ${input.planBatchIndex + 1} of the run sheet is already logged; void it (with the reason) to log it again`);
+      if (!planned)
+        throw new AppError('bad_request', 'invalid_input', `the run sheet has no batch ${input.planBatchIndex + 1}`, {
+          planBatchIndex: 'not on the run sheet',
+        });
+      const live: unknown[] = await m.query('SELECT 1 FROM pour_batches WHERE pour_id = $1 AND plan_batch_index = $2 AND voided_at IS NULL', [
+        pourId,
+        input.planBatchIndex,
+      ]);
+      if (live.length > 0)
+        throw new AppError(
+          'conflict',
+          'batch_already_logged',
+          `batch ${input.planBatchIndex + 1} of the run sheet is already logged; void it (with the reason) to log it again`,
+        );
       if (planned.pigment.grams > 0 && input.weighedPigmentG === undefined) {
-        throw new AppError('bad_request', 'invalid_input', `this cup takes ${planned.pigment.grams} g of pigment: weigh it and enter the grams (0 if you left it out)`, { weighedPigmentG: 'weigh the pigment and enter its grams' });
+        throw new AppError(
+          'bad_request',
+          'invalid_input',
+          `this cup takes ${planned.pigment.grams} g of pigment: weigh it and enter the grams (0 if you left it out)`,
+          { weighedPigmentG: 'weigh the pigment and enter its grams' },
+        );
       }
       const weighedPigmentG = input.weighedPigmentG ?? 0;
       const mixedAt = input.mixedAt ? new Date(input.mixedAt) : now;
@@ -128,10 +151,17 @@ export class PourLog {
         if (!lotId) continue;
         const lot = await m.findOne(Lot, { where: { id: lotId, shopId: auth.shopId }, lock: { mode: 'pessimistic_write' } });
         if (!lot) throw new AppError('not_found', 'not_found', `no such lot (part ${part}) on this shop's shelf`);
-        if (lot.part !== part) throw new AppError('bad_request', 'invalid_input', `lot ${lot.lotNumber} is a part ${lot.part} lot, not part ${part}`, { [`lot${part === 'pigment' ? 'Pigment' : part}Id`]: 'wrong part' });
+        if (lot.part !== part)
+          throw new AppError('bad_request', 'invalid_input', `lot ${lot.lotNumber} is a part ${lot.part} lot, not part ${part}`, {
+            [`lot${part === 'pigment' ? 'Pigment' : part}Id`]: 'wrong part',
+          });
         if (lotExpired(lot.expiresOn, mixedAt.getTime(), shop.timeZone)) {
           if (!input.acknowledgeExpiredLot) {
-            throw new AppError('conflict', 'expired_lot_unacknowledged', `lot ${lot.lotNumber} expired on ${lot.expiresOn}; confirm that you want to use it (test a small cup first), or pick another lot`);
+            throw new AppError(
+              'conflict',
+              'expired_lot_unacknowledged',
+              `lot ${lot.lotNumber} expired on ${lot.expiresOn}; confirm that you want to use it (test a small cup first), or pick another lot`,
+            );
           }
           warnings.push({ code: 'expired_lot', message: `Lot ${lot.lotNumber} (part ${part}) was past its date (${lot.expiresOn}) when mixed.` });
         }
@@ -193,7 +223,14 @@ export class PourLog {
       );
       await this.settlePieceStage(m, l);
       await refreshReminders(m, l, now);
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'batch.log', objectType: 'pour', objectId: pourId, detail: { planBatchIndex: input.planBatchIndex, warnings: warnings.map((w) => w.code) } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: 'batch.log',
+        objectType: 'pour',
+        objectId: pourId,
+        detail: { planBatchIndex: input.planBatchIndex, warnings: warnings.map((w) => w.code) },
+      });
       return batch.id;
     });
     const batch = await this.ds.getRepository(PourBatch).findOneByOrFail({ id });
@@ -202,7 +239,9 @@ export class PourLog {
 
   /** When the pour started: its first cup mixed, or when it was set up if that came first. */
   private async startedMs(m: EntityManager, l: LoadedPour): Promise<number> {
-    const rows: { first: Date | null }[] = await m.query('SELECT min(mixed_at) AS first FROM pour_batches WHERE pour_id = $1 AND voided_at IS NULL', [l.pour.id]);
+    const rows: { first: Date | null }[] = await m.query('SELECT min(mixed_at) AS first FROM pour_batches WHERE pour_id = $1 AND voided_at IS NULL', [
+      l.pour.id,
+    ]);
     const first = rows[0]?.first?.getTime() ?? Infinity;
     return Math.min(first, l.pour.createdAt.getTime());
   }
@@ -220,7 +259,14 @@ export class PourLog {
    * another temperature is refused (void the first to correct it). Times out of the pour's life are refused;
    * temperatures far outside the product's range need the person's confirmation.
    */
-  async addReadings(shopId: string, pourId: string, readings: CureReading[], source: 'manual' | 'csv' | 'sensor', actor: AuthContext | null, confirmUnusual: boolean) {
+  async addReadings(
+    shopId: string,
+    pourId: string,
+    readings: CureReading[],
+    source: 'manual' | 'csv' | 'sensor',
+    actor: AuthContext | null,
+    confirmUnusual: boolean,
+  ) {
     return this.ds.transaction(async (m) => {
       const now = this.now();
       const l = await loadPour(m, shopId, pourId, true);
@@ -229,10 +275,17 @@ export class PourLog {
         if (!ms.ok) throw new AppError('bad_request', 'invalid_input', ms.error.message, { [`readings.${i}.at`]: 'not an ISO time with an offset' });
         return { ms: ms.value, tempC: r.tempC };
       });
-      refuseImpossibleTimes(instants.map((r, i) => ({ field: `readings.${i}.at`, atMs: r.ms })), await this.startedMs(m, l), now.getTime());
+      refuseImpossibleTimes(
+        instants.map((r, i) => ({ field: `readings.${i}.at`, atMs: r.ms })),
+        await this.startedMs(m, l),
+        now.getTime(),
+      );
       const steps = planSteps(l.result, l.snapshot);
       const latest: { step: string }[] = await m.query('SELECT step FROM pour_batches WHERE pour_id = $1 AND voided_at IS NULL', [pourId]);
-      const product = [...steps].reverse().find((s) => latest.some((b) => b.step === s.key))?.product ?? steps.find((s) => s.kind === 'layer')?.product ?? l.snapshot.deepPour;
+      const product =
+        [...steps].reverse().find((s) => latest.some((b) => b.step === s.key))?.product ??
+        steps.find((s) => s.kind === 'layer')?.product ??
+        l.snapshot.deepPour;
       requireConfirmation(readingConcerns(readings, product), confirmUnusual);
 
       let added = 0;
@@ -248,7 +301,10 @@ export class PourLog {
           added++;
           continue;
         }
-        const existing: { temp_c: number }[] = await m.query('SELECT temp_c FROM temperature_readings WHERE pour_id = $1 AND taken_at = $2 AND voided_at IS NULL', [pourId, at]);
+        const existing: { temp_c: number }[] = await m.query(
+          'SELECT temp_c FROM temperature_readings WHERE pour_id = $1 AND taken_at = $2 AND voided_at IS NULL',
+          [pourId, at],
+        );
         // A re-sent log repeats its values to the tenth of a degree a thermometer shows.
         if (existing[0] && Math.abs(existing[0].temp_c - r.tempC) < 0.05) {
           duplicates++;
@@ -261,7 +317,14 @@ export class PourLog {
         );
       }
       await refreshReminders(m, l, now);
-      await recordAudit(m, { shopId, actor, action: 'readings.add', objectType: 'pour', objectId: pourId, detail: { added, source, confirmedUnusual: confirmUnusual } });
+      await recordAudit(m, {
+        shopId,
+        actor,
+        action: 'readings.add',
+        objectType: 'pour',
+        objectId: pourId,
+        detail: { added, source, confirmedUnusual: confirmUnusual },
+      });
       return { added, duplicates };
     });
   }
@@ -270,7 +333,10 @@ export class PourLog {
     const m = this.ds.manager;
     await loadPour(m, shopId, pourId);
     const rows = await m.find(TemperatureReading, { where: { pourId }, order: { takenAt: 'ASC', createdAt: 'ASC' } });
-    const names = await namesOf(m, rows.flatMap((r) => [r.loggedById, r.voidedById]));
+    const names = await namesOf(
+      m,
+      rows.flatMap((r) => [r.loggedById, r.voidedById]),
+    );
     return rows.map((r) => readingView(r, names));
   }
 
@@ -288,7 +354,14 @@ export class PourLog {
       this.mayVoid(auth, reading.loggedById);
       await m.update(TemperatureReading, { id: readingId }, { voidedAt: this.now(), voidedById: auth.userId, voidReason: reason });
       await refreshReminders(m, l, this.now());
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'reading.void', objectType: 'pour', objectId: pourId, detail: { readingId, at: reading.takenAt.toISOString(), tempC: reading.tempC, reason } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: 'reading.void',
+        objectType: 'pour',
+        objectId: pourId,
+        detail: { readingId, at: reading.takenAt.toISOString(), tempC: reading.tempC, reason },
+      });
     });
     const row = await this.ds.getRepository(TemperatureReading).findOneByOrFail({ id: readingId });
     return readingView(row, await namesOf(this.ds.manager, [row.loggedById, row.voidedById]));
@@ -301,7 +374,8 @@ export class PourLog {
       if (!batch) throw notFound('batch');
       if (batch.voidedAt) throw new AppError('conflict', 'already_voided', 'this batch is already voided');
       this.mayVoid(auth, batch.mixedById);
-      if (l.pour.status !== 'open') throw new AppError('conflict', 'pour_closed', 'this pour is released; its cups can no longer be voided (the release rests on them)');
+      if (l.pour.status !== 'open')
+        throw new AppError('conflict', 'pour_closed', 'this pour is released; its cups can no longer be voided (the release rests on them)');
       await m.update(PourBatch, { id: batchId }, { voidedAt: this.now(), voidedById: auth.userId, voidReason: reason });
       // The grams go back to the lots they were drawn from, never above what the lot held.
       const giveBack = [
@@ -314,7 +388,14 @@ export class PourLog {
       }
       await this.settlePieceStage(m, l);
       await refreshReminders(m, l, this.now());
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'batch.void', objectType: 'pour', objectId: pourId, detail: { batchId, planBatchIndex: batch.planBatchIndex, reason } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: 'batch.void',
+        objectType: 'pour',
+        objectId: pourId,
+        detail: { batchId, planBatchIndex: batch.planBatchIndex, reason },
+      });
     });
     const row = await this.ds.getRepository(PourBatch).findOneByOrFail({ id: batchId });
     return batchView(row, await namesOf(this.ds.manager, [row.mixedById, row.voidedById]));

@@ -39,12 +39,18 @@ export async function loadPour(m: EntityManager, shopId: string, id: string, loc
 }
 
 export async function cureSettingsOf(m: EntityManager, shopId: string): Promise<CureSettings> {
-  return m.findOneOrFail(Shop, { where: { id: shopId }, select: { id: true, readingCarryH: true, windowCloseLeadMin: true, offRatioTolerancePct: true, timeZone: true, dayStartHour: true, quietFromHour: true } });
+  return m.findOneOrFail(Shop, {
+    where: { id: shopId },
+    select: { id: true, readingCarryH: true, windowCloseLeadMin: true, offRatioTolerancePct: true, timeZone: true, dayStartHour: true, quietFromHour: true },
+  });
 }
 
 /** The readings the cure counts (voided ones left out), in time order. */
 export async function liveReadingsOf(m: EntityManager, pourId: string): Promise<CureReading[]> {
-  const rows: { taken_at: Date; temp_c: number }[] = await m.query('SELECT taken_at, temp_c FROM temperature_readings WHERE pour_id = $1 AND voided_at IS NULL ORDER BY taken_at', [pourId]);
+  const rows: { taken_at: Date; temp_c: number }[] = await m.query(
+    'SELECT taken_at, temp_c FROM temperature_readings WHERE pour_id = $1 AND voided_at IS NULL ORDER BY taken_at',
+    [pourId],
+  );
   return rows.map((r) => ({ at: r.taken_at.toISOString(), tempC: r.temp_c }));
 }
 
@@ -54,7 +60,10 @@ export async function loggedStepsOf(m: EntityManager, pourId: string): Promise<L
 }
 
 export async function checksOf(m: EntityManager, pourId: string): Promise<(ReleaseCheck & { stage: string })[]> {
-  const rows: { checked_at: Date; hardness_shore_d: number | null; stage: string }[] = await m.query('SELECT checked_at, hardness_shore_d, stage FROM cure_checks WHERE pour_id = $1', [pourId]);
+  const rows: { checked_at: Date; hardness_shore_d: number | null; stage: string }[] = await m.query(
+    'SELECT checked_at, hardness_shore_d, stage FROM cure_checks WHERE pour_id = $1',
+    [pourId],
+  );
   return rows.map((r) => ({ checkedAt: r.checked_at, hardnessShoreD: r.hardness_shore_d, stage: r.stage }));
 }
 

@@ -11,7 +11,14 @@ import { cureReminderKinds, deliveryOf, type NoticeKind, type ShopHours, type Wa
  * Each goes out when the shop's quiet hours allow (deliveryOf): held for the morning digest, or, for a window closing
  * in the night, the evening before.
  */
-export async function syncReminders(m: EntityManager, shopId: string, pourId: string, hours: ShopHours, now: Date, wantedNow: (WantedReminder & { done: boolean })[]): Promise<void> {
+export async function syncReminders(
+  m: EntityManager,
+  shopId: string,
+  pourId: string,
+  hours: ShopHours,
+  now: Date,
+  wantedNow: (WantedReminder & { done: boolean })[],
+): Promise<void> {
   const wanted = wantedNow.map((w) => deliveryOf(w, hours, now.getTime()));
   for (const w of wanted) {
     await m.query(
@@ -48,7 +55,16 @@ export async function syncReminders(m: EntityManager, shopId: string, pourId: st
  * A notice of something done to a pour, mailed once by the worker to the people named, and shown on Today. One done in
  * the shop's quiet hours waits for the morning digest.
  */
-export async function queueNotice(m: EntityManager, shopId: string, pourId: string, hours: ShopHours, kind: NoticeKind, title: string, recipients: string[], at: Date): Promise<void> {
+export async function queueNotice(
+  m: EntityManager,
+  shopId: string,
+  pourId: string,
+  hours: ShopHours,
+  kind: NoticeKind,
+  title: string,
+  recipients: string[],
+  at: Date,
+): Promise<void> {
   const { viaDigest } = deliveryOf({ kind, dueAt: at, eventAt: at, leadMin: 0 }, hours, at.getTime());
   await m.query(
     `INSERT INTO reminders (shop_id, pour_id, kind, step, due_at, event_at, lead_min, assumed, title, recipient_user_ids, via_digest)

@@ -32,16 +32,41 @@ export function cureView(state: CureState, release: ReleaseEvidence, asOf: Date)
     assumedEquivalentHours: s?.age.assumedEquivalentHours ?? 0,
     readingCarryH: s?.age.readingCarryH ?? 0,
     gaps: s?.age.gaps ?? [],
-    spans: s?.age.spans.map((x) => ({ from: x.from, to: x.to, source: x.source, tempC: x.tempC, startTempC: x.startTempC, endTempC: x.endTempC, belowMinimum: x.belowMinimum })) ?? [],
-    ahead: s ? forecastTrack(s.ahead, s.stages, asOf.getTime()).map((p) => ({ from: new Date(p.fromMs).toISOString(), to: new Date(p.toMs).toISOString(), tempC: p.tempC })) : [],
+    spans:
+      s?.age.spans.map((x) => ({
+        from: x.from,
+        to: x.to,
+        source: x.source,
+        tempC: x.tempC,
+        startTempC: x.startTempC,
+        endTempC: x.endTempC,
+        belowMinimum: x.belowMinimum,
+      })) ?? [],
+    ahead: s
+      ? forecastTrack(s.ahead, s.stages, asOf.getTime()).map((p) => ({
+          from: new Date(p.fromMs).toISOString(),
+          to: new Date(p.toMs).toISOString(),
+          tempC: p.tempC,
+        }))
+      : [],
     readyToMachine: Boolean(state.isLastStep && s?.stages.find((x) => x.key === 'ready_to_machine')?.reached),
     release,
-    stages: s?.stages.map((x) => ({ key: x.key, equivalentHoursAtRef: x.equivalentHoursAtRef, reached: x.reached, reachedAt: x.reachedAt, predictedAt: x.predictedAt })) ?? [],
+    stages:
+      s?.stages.map((x) => ({
+        key: x.key,
+        equivalentHoursAtRef: x.equivalentHoursAtRef,
+        reached: x.reached,
+        reachedAt: x.reachedAt,
+        predictedAt: x.predictedAt,
+      })) ?? [],
     cautions: s?.cautions.map((c) => ({ code: c.code, severity: c.severity, message: c.message })) ?? [],
   };
 }
 
-type ReminderRow = Pick<Reminder, 'id' | 'kind' | 'step' | 'dueAt' | 'eventAt' | 'leadMin' | 'viaDigest' | 'status' | 'assumed' | 'title' | 'sentAt' | 'doneAt' | 'doneById' | 'doneHow'>;
+type ReminderRow = Pick<
+  Reminder,
+  'id' | 'kind' | 'step' | 'dueAt' | 'eventAt' | 'leadMin' | 'viaDigest' | 'status' | 'assumed' | 'title' | 'sentAt' | 'doneAt' | 'doneById' | 'doneHow'
+>;
 
 export const reminderView = (r: ReminderRow, names: Names = new Map()): ReminderView => ({
   id: r.id,
@@ -106,6 +131,7 @@ export function flagsOf(warningCodes: string[][], voidedEntries: number): Flag[]
   if (expired > 0) flags.push({ code: 'expired_lot', count: expired, message: `${cups(expired)} from an expired lot` });
   const dew = count('dew_point');
   if (dew > 0) flags.push({ code: 'dew_point', count: dew, message: `${cups(dew)} poured near the dew point` });
-  if (voidedEntries > 0) flags.push({ code: 'voided', count: voidedEntries, message: `${voidedEntries} voided entr${voidedEntries === 1 ? 'y' : 'ies'} in the log` });
+  if (voidedEntries > 0)
+    flags.push({ code: 'voided', count: voidedEntries, message: `${voidedEntries} voided entr${voidedEntries === 1 ? 'y' : 'ies'} in the log` });
   return flags;
 }

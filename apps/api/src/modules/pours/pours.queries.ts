@@ -57,11 +57,22 @@ export async function pourPageDetails(m: EntityManager, pours: Pour[]) {
   const ids = pours.map((p) => p.id);
   const plans = new Map((await m.findBy(PourPlan, { id: In(pours.map((p) => p.pourPlanId)) })).map((p) => [p.id, p]));
   const pieces = new Map((await m.findBy(Piece, { id: In(pours.map((p) => p.pieceId)) })).map((p) => [p.id, p]));
-  const batches = groupByPour<PageBatchRow>(ids.length ? await m.query('SELECT pour_id, step, mixed_at, warnings, voided_at IS NOT NULL AS voided FROM pour_batches WHERE pour_id = ANY($1)', [ids]) : []);
-  const readings = groupByPour<PageReadingRow>(
-    ids.length ? await m.query('SELECT pour_id, taken_at, temp_c, voided_at IS NOT NULL AS voided FROM temperature_readings WHERE pour_id = ANY($1) ORDER BY pour_id, taken_at', [ids]) : [],
+  const batches = groupByPour<PageBatchRow>(
+    ids.length
+      ? await m.query('SELECT pour_id, step, mixed_at, warnings, voided_at IS NOT NULL AS voided FROM pour_batches WHERE pour_id = ANY($1)', [ids])
+      : [],
   );
-  const checks = groupByPour<PageCheckRow>(ids.length ? await m.query('SELECT pour_id, checked_at, hardness_shore_d, stage FROM cure_checks WHERE pour_id = ANY($1)', [ids]) : []);
+  const readings = groupByPour<PageReadingRow>(
+    ids.length
+      ? await m.query(
+          'SELECT pour_id, taken_at, temp_c, voided_at IS NOT NULL AS voided FROM temperature_readings WHERE pour_id = ANY($1) ORDER BY pour_id, taken_at',
+          [ids],
+        )
+      : [],
+  );
+  const checks = groupByPour<PageCheckRow>(
+    ids.length ? await m.query('SELECT pour_id, checked_at, hardness_shore_d, stage FROM cure_checks WHERE pour_id = ANY($1)', [ids]) : [],
+  );
   const next = ids.length
     ? await m
         .getRepository(Reminder)
@@ -89,13 +100,19 @@ export async function pourLogOf(m: EntityManager, pourId: string) {
 
 /** Which of these users are active members of the shop. */
 export async function activeMembersAmong(m: EntityManager, shopId: string, userIds: string[]): Promise<string[]> {
-  const rows: { user_id: string }[] = await m.query(`SELECT user_id FROM memberships WHERE shop_id = $1 AND status = 'active' AND user_id = ANY($2)`, [shopId, userIds]);
+  const rows: { user_id: string }[] = await m.query(`SELECT user_id FROM memberships WHERE shop_id = $1 AND status = 'active' AND user_id = ANY($2)`, [
+    shopId,
+    userIds,
+  ]);
   return rows.map((r) => r.user_id);
 }
 
 /** A cure check's photo and its type, or null when the check has none (or is not this shop's). */
 export async function cureCheckPhoto(ds: DataSource, shopId: string, pourId: string, checkId: string): Promise<{ bytes: Buffer; type: string } | null> {
-  const rows: { photo: Buffer | null; photo_type: string | null }[] = await ds.query('SELECT photo, photo_type FROM cure_checks WHERE id = $1 AND pour_id = $2 AND shop_id = $3', [checkId, pourId, shopId]);
+  const rows: { photo: Buffer | null; photo_type: string | null }[] = await ds.query(
+    'SELECT photo, photo_type FROM cure_checks WHERE id = $1 AND pour_id = $2 AND shop_id = $3',
+    [checkId, pourId, shopId],
+  );
   return rows[0]?.photo && rows[0].photo_type ? { bytes: rows[0].photo, type: rows[0].photo_type } : null;
 }
 
@@ -144,7 +161,11 @@ export async function insertPour(m: EntityManager, pour: DeepPartial<Pour>): Pro
   return m.save(m.create(Pour, pour));
 }
 
-export async function updatePour(m: EntityManager, pourId: string, change: Partial<Pick<Pour, 'status' | 'releasedAt' | 'releasedById' | 'machinedAt' | 'finishCoats' | 'finishCoatIntervalH'>>): Promise<void> {
+export async function updatePour(
+  m: EntityManager,
+  pourId: string,
+  change: Partial<Pick<Pour, 'status' | 'releasedAt' | 'releasedById' | 'machinedAt' | 'finishCoats' | 'finishCoatIntervalH'>>,
+): Promise<void> {
   await m.update(Pour, { id: pourId }, change);
 }
 

@@ -21,9 +21,13 @@ const csvBody = express.text({ type: ['text/csv', 'text/plain'], limit: '2mb' })
 function photoUpload(): express.RequestHandler {
   const handler = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PHOTO_BYTES, files: 1, fields: 8, fieldSize: 4096 } }).single('photo');
   return (req, res, next) => {
-    if (!req.is('multipart/form-data')) return next(new AppError('bad_request', 'multipart_required', 'send the cure check as multipart/form-data (fields stage, note…, optional file part "photo")'));
+    if (!req.is('multipart/form-data'))
+      return next(
+        new AppError('bad_request', 'multipart_required', 'send the cure check as multipart/form-data (fields stage, note…, optional file part "photo")'),
+      );
     handler(req, res, (err?: unknown) => {
-      if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') return next(new AppError('payload_too_large', 'photo_too_large', 'the photo is larger than 8 MB; send a smaller picture'));
+      if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE')
+        return next(new AppError('payload_too_large', 'photo_too_large', 'the photo is larger than 8 MB; send a smaller picture'));
       if (err) return next(new AppError('bad_request', 'bad_upload', 'the upload could not be read; send it again'));
       next();
     });
@@ -44,7 +48,8 @@ export function pourRoutes(api: RouteRegistry, pours: Pours, log: PourLog, uploa
       voidBatch: ({ auth, params, body }) => log.voidBatch(auth, params.id, params.batchId, body.reason),
       importReadingsCsv: async ({ auth, params, query, req }) => {
         const text: unknown = req.body;
-        if (typeof text !== 'string' || text.trim() === '') throw new AppError('bad_request', 'csv_missing', 'send the log as text/csv with lines "time,tempC"');
+        if (typeof text !== 'string' || text.trim() === '')
+          throw new AppError('bad_request', 'csv_missing', 'send the log as text/csv with lines "time,tempC"');
         const parsed = readCureLog(text);
         if (!parsed.ok) {
           const fields = Object.fromEntries((parsed.error.issues ?? []).slice(0, 200).map((i) => [`row ${(i as { row?: number }).row ?? '?'}`, i.message]));
@@ -62,7 +67,12 @@ export function pourRoutes(api: RouteRegistry, pours: Pours, log: PourLog, uploa
             }),
           );
           const [where, what] = Object.entries(fields)[0]!;
-          throw new AppError('unprocessable', 'csv_invalid', `The temperature log was not imported: the reading ${where}: ${what}. Fix these rows and import it again.`, fields);
+          throw new AppError(
+            'unprocessable',
+            'csv_invalid',
+            `The temperature log was not imported: the reading ${where}: ${what}. Fix these rows and import it again.`,
+            fields,
+          );
         }
         const added = await log.addReadings(auth.shopId, params.id, checked.data.readings, 'csv', auth, query.confirmUnusual === 'true');
         return { ...added, unit: parsed.value.unit };
@@ -71,7 +81,8 @@ export function pourRoutes(api: RouteRegistry, pours: Pours, log: PourLog, uploa
         let photo: { bytes: Buffer; type: string } | null = null;
         if (req.file) {
           const type = sniffImageType(req.file.buffer);
-          if (!type) throw new AppError('unprocessable', 'photo_not_image', 'the photo must be a JPEG, PNG or WebP picture', { photo: 'JPEG, PNG or WebP only' });
+          if (!type)
+            throw new AppError('unprocessable', 'photo_not_image', 'the photo must be a JPEG, PNG or WebP picture', { photo: 'JPEG, PNG or WebP only' });
           photo = { bytes: req.file.buffer, type };
         }
         return pours.addCheck(auth, params.id, body, photo);
@@ -91,7 +102,8 @@ export function pourRoutes(api: RouteRegistry, pours: Pours, log: PourLog, uploa
       issueIngestToken: async ({ auth }) => ({ token: await pours.issueIngestToken(auth) }),
       ingestReadings: async ({ body, req }) => {
         const token = req.get('x-gelpoint-ingest-token');
-        if (!token || token.length > 200) throw new AppError('unauthorized', 'ingest_token_missing', 'send the shop thermometer token in the X-Gelpoint-Ingest-Token header');
+        if (!token || token.length > 200)
+          throw new AppError('unauthorized', 'ingest_token_missing', 'send the shop thermometer token in the X-Gelpoint-Ingest-Token header');
         const shopId = await pours.shopOfIngestToken(token);
         if (!shopId) throw new AppError('unauthorized', 'ingest_token_invalid', 'this thermometer token is not valid; issue a new one in the shop settings');
         return log.addReadings(shopId, body.pourId, body.readings, 'sensor', null, body.confirmUnusual);

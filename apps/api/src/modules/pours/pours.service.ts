@@ -41,7 +41,13 @@ export class Pours {
     private readonly quota = new UploadQuota(),
   ) {}
 
-  private summaryOf(l: LoadedPour, { state, release, batchesLogged, batchesPlanned }: PourState, next: Reminder | null, flags: PourSummary['flags'], names: Names): PourSummary {
+  private summaryOf(
+    l: LoadedPour,
+    { state, release, batchesLogged, batchesPlanned }: PourState,
+    next: Reminder | null,
+    flags: PourSummary['flags'],
+    names: Names,
+  ): PourSummary {
     return {
       id: l.pour.id,
       piece: { id: l.piece.id, name: l.piece.name, stage: l.piece.stage },
@@ -86,7 +92,15 @@ export class Pours {
       voidedBatches: batches.filter((b) => b.voidedAt).map((b) => batchView(b, names)),
       readings: readings.filter((r) => !r.voidedAt).map((r) => readingView(r, names)),
       voidedReadings: readings.filter((r) => r.voidedAt).map((r) => readingView(r, names)),
-      checks: checks.map((c) => ({ id: c.id, checkedAt: c.checkedAt.toISOString(), stage: c.stage, hardnessShoreD: c.hardnessShoreD, note: c.note, hasPhoto: c.photoType !== null, checkedBy: ref(c.checkedById) })),
+      checks: checks.map((c) => ({
+        id: c.id,
+        checkedAt: c.checkedAt.toISOString(),
+        stage: c.stage,
+        hardnessShoreD: c.hardnessShoreD,
+        note: c.note,
+        hasPhoto: c.photoType !== null,
+        checkedBy: ref(c.checkedById),
+      })),
       reminders: reminders.map((r) => reminderView(r, names)),
       releasedAt: l.pour.releasedAt?.toISOString() ?? null,
       releasedBy: ref(l.pour.releasedById),
@@ -125,9 +139,20 @@ export class Pours {
       if (!plan) throw notFound('pour plan');
       const wanted = notifyUserIds ?? [...new Set([auth.userId, plan.createdById].filter((x): x is string => Boolean(x)))];
       const members = await activeMembersAmong(m, auth.shopId, wanted);
-      if (members.length !== wanted.length) throw new AppError('bad_request', 'invalid_input', 'everyone to notify must be an active member of this shop', { notifyUserIds: 'not all are members' });
+      if (members.length !== wanted.length)
+        throw new AppError('bad_request', 'invalid_input', 'everyone to notify must be an active member of this shop', {
+          notifyUserIds: 'not all are members',
+        });
       const inputs = plan.inputs as { shopTempC?: number };
-      const pour = await insertPour(m, { shopId: auth.shopId, pieceId: plan.pieceId, pourPlanId: plan.id, status: 'open', assumedTempC: inputs.shopTempC ?? 20, notifyUserIds: wanted, startedById: auth.userId });
+      const pour = await insertPour(m, {
+        shopId: auth.shopId,
+        pieceId: plan.pieceId,
+        pourPlanId: plan.id,
+        status: 'open',
+        assumedTempC: inputs.shopTempC ?? 20,
+        notifyUserIds: wanted,
+        startedById: auth.userId,
+      });
       await setPieceStage(m, plan.pieceId, 'pouring');
       await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'pour.start', objectType: 'pour', objectId: pour.id, detail: { pourPlanId } });
       return pour.id;
@@ -135,25 +160,45 @@ export class Pours {
     return this.get(auth.shopId, id);
   }
 
-  async addCheck(auth: AuthContext, pourId: string, input: { stage: CureCheckStage; checkedAt?: string; hardnessShoreD?: number; note: string }, photo: { bytes: Buffer; type: string } | null) {
+  async addCheck(
+    auth: AuthContext,
+    pourId: string,
+    input: { stage: CureCheckStage; checkedAt?: string; hardnessShoreD?: number; note: string },
+    photo: { bytes: Buffer; type: string } | null,
+  ) {
     return this.ds.transaction(async (m) => {
       const l = await loadPour(m, auth.shopId, pourId, true);
       if (photo) await this.quota.reserve(m, auth.userId, photo.bytes.length);
       const check = await insertCureCheck(m, {
-          shopId: auth.shopId,
-          pourId,
-          checkedAt: input.checkedAt ? new Date(input.checkedAt) : this.now(),
-          stage: input.stage,
-          hardnessShoreD: input.hardnessShoreD ?? null,
-          note: input.note,
-          photoType: photo?.type ?? null,
-          photo: photo?.bytes ?? null,
-          checkedById: auth.userId,
+        shopId: auth.shopId,
+        pourId,
+        checkedAt: input.checkedAt ? new Date(input.checkedAt) : this.now(),
+        stage: input.stage,
+        hardnessShoreD: input.hardnessShoreD ?? null,
+        note: input.note,
+        photoType: photo?.type ?? null,
+        photo: photo?.bytes ?? null,
+        checkedById: auth.userId,
       });
       // A check at a stage is the logged step of that stage's reminder (a demold check).
       await refreshReminders(m, l, this.now());
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'cure_check.add', objectType: 'pour', objectId: pourId, detail: { stage: input.stage } });
-      return { id: check.id, checkedAt: check.checkedAt.toISOString(), stage: check.stage, hardnessShoreD: check.hardnessShoreD, note: check.note, hasPhoto: photo !== null, checkedBy: { id: auth.userId, name: auth.userName } };
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: 'cure_check.add',
+        objectType: 'pour',
+        objectId: pourId,
+        detail: { stage: input.stage },
+      });
+      return {
+        id: check.id,
+        checkedAt: check.checkedAt.toISOString(),
+        stage: check.stage,
+        hardnessShoreD: check.hardnessShoreD,
+        note: check.note,
+        hasPhoto: photo !== null,
+        checkedBy: { id: auth.userId, name: auth.userName },
+      };
     });
   }
 
@@ -177,14 +222,27 @@ export class Pours {
       l.pour.status = 'released';
       await refreshReminders(m, l, now);
       const recipients = await makerAndLeadsOf(m, auth.shopId, l.plan.createdById);
-      await queueNotice(m, auth.shopId, pourId, shopHoursOf(await cureSettingsOf(m, auth.shopId)), 'piece_released', `Released for machining: ${l.piece.name} (by ${auth.userName})`, recipients, now);
+      await queueNotice(
+        m,
+        auth.shopId,
+        pourId,
+        shopHoursOf(await cureSettingsOf(m, auth.shopId)),
+        'piece_released',
+        `Released for machining: ${l.piece.name} (by ${auth.userName})`,
+        recipients,
+        now,
+      );
       await recordAudit(m, {
         shopId: auth.shopId,
         actor: auth,
         action: 'pour.release',
         objectType: 'pour',
         objectId: pourId,
-        detail: { equivalentHoursAtRef: state.status?.age.equivalentHoursAtRef, loggedEquivalentHours: state.status?.age.loggedEquivalentHours, assumedEquivalentHours: state.status?.age.assumedEquivalentHours },
+        detail: {
+          equivalentHoursAtRef: state.status?.age.equivalentHoursAtRef,
+          loggedEquivalentHours: state.status?.age.loggedEquivalentHours,
+          assumedEquivalentHours: state.status?.age.assumedEquivalentHours,
+        },
       });
     });
     return this.get(auth.shopId, pourId);
@@ -202,7 +260,16 @@ export class Pours {
       await refreshReminders(m, l, now);
       const recipients = await makerAndLeadsOf(m, auth.shopId, l.plan.createdById);
       const coats = input.finishCoats > 0 ? `; ${input.finishCoats} finish coat${input.finishCoats === 1 ? '' : 's'} to go` : '';
-      await queueNotice(m, auth.shopId, pourId, shopHoursOf(await cureSettingsOf(m, auth.shopId)), 'piece_machined', `Machined: ${l.piece.name} (by ${auth.userName})${coats}`, recipients, now);
+      await queueNotice(
+        m,
+        auth.shopId,
+        pourId,
+        shopHoursOf(await cureSettingsOf(m, auth.shopId)),
+        'piece_machined',
+        `Machined: ${l.piece.name} (by ${auth.userName})${coats}`,
+        recipients,
+        now,
+      );
       await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'pour.machined', objectType: 'pour', objectId: pourId, detail: { ...input } });
     });
     return this.get(auth.shopId, pourId);

@@ -10,7 +10,10 @@ export type AssumedFor = (planTempC: number) => AssumedTemperature;
  * hour as the shop's readings of the last week showed it (the plan's constant while there are none).
  */
 export async function shopTemperatureFor(m: EntityManager, shopId: string, now: Date): Promise<AssumedFor> {
-  const rows: { time_zone: string; temperature_profile: ShopTemperatureProfile }[] = await m.query('SELECT time_zone, temperature_profile FROM shops WHERE id = $1', [shopId]);
+  const rows: { time_zone: string; temperature_profile: ShopTemperatureProfile }[] = await m.query(
+    'SELECT time_zone, temperature_profile FROM shops WHERE id = $1',
+    [shopId],
+  );
   const shop = rows[0];
   const profile = shop?.temperature_profile ?? { mode: 'plan' };
   if (!shop || profile.mode === 'plan') return (planTempC) => planTempC;
@@ -22,7 +25,11 @@ export async function shopTemperatureFor(m: EntityManager, shopId: string, now: 
     `SELECT taken_at, temp_c FROM temperature_readings WHERE shop_id = $1 AND voided_at IS NULL AND taken_at > $2 AND taken_at <= $3`,
     [shopId, new Date(now.getTime() - learnedProfileDays * 86_400_000), now],
   );
-  const learned = learnedShopTemperature(readings.map((r) => ({ ms: r.taken_at.getTime(), tempC: r.temp_c })), shop.time_zone, now.getTime());
+  const learned = learnedShopTemperature(
+    readings.map((r) => ({ ms: r.taken_at.getTime(), tempC: r.temp_c })),
+    shop.time_zone,
+    now.getTime(),
+  );
   return learned.ok ? () => learned.value : (planTempC) => planTempC;
 }
 

@@ -45,7 +45,10 @@ export class Catalogue<Row extends CatalogueRow, View, Sort extends string> {
     const qb = this.ds.getRepository(this.entity).createQueryBuilder('p').where('p.shop_id = :shopId', { shopId });
     if (q.includeArchived !== 'true') qb.andWhere('p.archived_at IS NULL');
     if (q.q) qb.andWhere('p.name ILIKE :like', { like: likePattern(q.q) });
-    const [rows, total] = await orderByColumn(qb, this.sortColumns[q.sort ?? 'name'], q.dir, 'p.id').offset(q.offset).limit(q.limit).getManyAndCount();
+    const [rows, total] = await orderByColumn(qb, this.sortColumns[q.sort ?? 'name'], q.dir, 'p.id')
+      .offset(q.offset)
+      .limit(q.limit)
+      .getManyAndCount();
     return { items: rows.map(this.view), total };
   }
 
@@ -62,7 +65,14 @@ export class Catalogue<Row extends CatalogueRow, View, Sort extends string> {
   async create(auth: AuthContext, columns: Partial<Row>): Promise<View> {
     return this.ds.transaction(async (m) => {
       const row = await m.save(m.create(this.entity, { ...columns, shopId: auth.shopId } as never));
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: `${this.objectType}.create`, objectType: this.objectType, objectId: (row as Row).id, detail: { name: (row as Row).name } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: `${this.objectType}.create`,
+        objectType: this.objectType,
+        objectId: (row as Row).id,
+        detail: { name: (row as Row).name },
+      });
       return this.view(row as Row);
     });
   }
@@ -73,7 +83,14 @@ export class Catalogue<Row extends CatalogueRow, View, Sort extends string> {
       if (!row) throw notFound(this.objectType.replace('_', ' '));
       Object.assign(row, columns);
       await m.save(row);
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: `${this.objectType}.update`, objectType: this.objectType, objectId: id, detail: { name: row.name } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: `${this.objectType}.update`,
+        objectType: this.objectType,
+        objectId: id,
+        detail: { name: row.name },
+      });
       return this.view(row);
     });
   }
@@ -82,7 +99,14 @@ export class Catalogue<Row extends CatalogueRow, View, Sort extends string> {
     await this.ds.transaction(async (m) => {
       const row = await this.find(m, auth.shopId, id);
       if (!row.archivedAt) await m.update(this.entity, { id } as never, { archivedAt: new Date() } as never);
-      await recordAudit(m, { shopId: auth.shopId, actor: auth, action: `${this.objectType}.archive`, objectType: this.objectType, objectId: id, detail: { name: row.name } });
+      await recordAudit(m, {
+        shopId: auth.shopId,
+        actor: auth,
+        action: `${this.objectType}.archive`,
+        objectType: this.objectType,
+        objectId: id,
+        detail: { name: row.name },
+      });
     });
   }
 }

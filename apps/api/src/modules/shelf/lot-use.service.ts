@@ -24,7 +24,12 @@ const weighedColumn: Record<LotPart, string> = { A: 'b.weighed_a_g', B: 'b.weigh
 const lotColumn: Record<LotPart, string> = { A: 'b.lot_a_id', B: 'b.lot_b_id', pigment: 'b.lot_pigment_id' };
 
 /** Every cup mixed from a lot of the shop, newest first: the batch, its pour and piece, the grams weighed, who mixed it. */
-export async function lotUses(ds: DataSource, shopId: string, lotId: string, page: { limit: number; offset: number }): Promise<{ items: LotUse[]; total: number }> {
+export async function lotUses(
+  ds: DataSource,
+  shopId: string,
+  lotId: string,
+  page: { limit: number; offset: number },
+): Promise<{ items: LotUse[]; total: number }> {
   const lots: { part: LotPart }[] = await ds.query('SELECT part FROM lots WHERE id = $1 AND shop_id = $2', [lotId, shopId]);
   const part = lots[0]?.part;
   if (!part) throw notFound('lot');

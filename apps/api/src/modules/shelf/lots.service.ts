@@ -70,7 +70,11 @@ export async function listLots(ds: DataSource, shopId: string, q: LotQuery, now 
   if (q.status === 'low') qb.andWhere('l.remaining_g < l.quantity_g * 0.1');
   if (q.status === 'in_stock') qb.andWhere('l.remaining_g > 0 AND (l.expires_on IS NULL OR l.expires_on >= :shopToday)');
   const total = await qb.getCount();
-  const rows = await withNames(orderByColumn(qb, lotSortColumns[q.sort ?? 'expires'], q.dir, 'l.id').offset(q.offset).limit(q.limit));
+  const rows = await withNames(
+    orderByColumn(qb, lotSortColumns[q.sort ?? 'expires'], q.dir, 'l.id')
+      .offset(q.offset)
+      .limit(q.limit),
+  );
   return { items: rows.map((row) => lotView(row, at)), total };
 }
 
@@ -81,10 +85,17 @@ export async function getLot(ds: DataSource, shopId: string, id: string, now = n
   return lotView(row, at);
 }
 
-export async function createLot(ds: DataSource, auth: AuthContext, input: LotInput & { resinSystemId: string | null; pigmentId: string | null }): Promise<LotView> {
+export async function createLot(
+  ds: DataSource,
+  auth: AuthContext,
+  input: LotInput & { resinSystemId: string | null; pigmentId: string | null },
+): Promise<LotView> {
   const id = await ds.transaction(async (m) => {
     // The product must be this shop's: another shop's id is "not found", as everywhere.
-    const owner = input.part === 'pigment' ? await m.findOneBy(Pigment, { id: input.pigmentId!, shopId: auth.shopId }) : await m.findOneBy(ResinSystem, { id: input.resinSystemId!, shopId: auth.shopId });
+    const owner =
+      input.part === 'pigment'
+        ? await m.findOneBy(Pigment, { id: input.pigmentId!, shopId: auth.shopId })
+        : await m.findOneBy(ResinSystem, { id: input.resinSystemId!, shopId: auth.shopId });
     if (!owner) throw new AppError('not_found', 'not_found', `no such ${input.part === 'pigment' ? 'pigment' : 'resin system'} on this shop's shelf`);
     const lot = await m.save(
       m.create(Lot, {
@@ -100,18 +111,32 @@ export async function createLot(ds: DataSource, auth: AuthContext, input: LotInp
         notes: input.notes ?? '',
       }),
     );
-    await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'lot.create', objectType: 'lot', objectId: lot.id, detail: { lotNumber: lot.lotNumber, part: lot.part } });
+    await recordAudit(m, {
+      shopId: auth.shopId,
+      actor: auth,
+      action: 'lot.create',
+      objectType: 'lot',
+      objectId: lot.id,
+      detail: { lotNumber: lot.lotNumber, part: lot.part },
+    });
     return lot.id;
   });
   return getLot(ds, auth.shopId, id);
 }
 
-export async function updateLot(ds: DataSource, auth: AuthContext, id: string, change: Partial<Pick<Lot, 'lotNumber' | 'remainingG' | 'expiresOn' | 'notes'>>): Promise<LotView> {
+export async function updateLot(
+  ds: DataSource,
+  auth: AuthContext,
+  id: string,
+  change: Partial<Pick<Lot, 'lotNumber' | 'remainingG' | 'expiresOn' | 'notes'>>,
+): Promise<LotView> {
   await ds.transaction(async (m) => {
     const lot = await m.findOne(Lot, { where: { id, shopId: auth.shopId }, lock: { mode: 'pessimistic_write' } });
     if (!lot) throw notFound('lot');
     if (change.remainingG !== undefined && change.remainingG > lot.quantityG) {
-      throw new AppError('bad_request', 'invalid_input', `remaining cannot exceed what was received (${lot.quantityG} g)`, { remainingG: `at most ${lot.quantityG} g` });
+      throw new AppError('bad_request', 'invalid_input', `remaining cannot exceed what was received (${lot.quantityG} g)`, {
+        remainingG: `at most ${lot.quantityG} g`,
+      });
     }
     if (change.expiresOn && change.expiresOn < lot.receivedOn) {
       throw new AppError('bad_request', 'invalid_input', 'a lot cannot expire before it was received', { expiresOn: `on or after ${lot.receivedOn}` });

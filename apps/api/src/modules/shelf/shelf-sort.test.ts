@@ -70,8 +70,19 @@ beforeAll(async () => {
   shop = await createShop(h, 'Sorted shelf');
   other = await createShop(h, 'Neighbour shelf');
   const resins = [];
-  for (const name of ['Stillwater Deep 50', 'amber cast', 'Tabletop Clear']) resins.push((await post<ResinSystemView>(shop, '/api/shelf/resin-systems', resinInput({ name }))).id);
-  const pigment = (await post<PigmentView>(shop, '/api/shelf/pigments', { name: 'Teal mica', kind: 'powder', densityGPerMl: 2.8, recommendedPct: 1, maxPct: 3, pricePerPack: 9, packSizeG: 25 })).id;
+  for (const name of ['Stillwater Deep 50', 'amber cast', 'Tabletop Clear'])
+    resins.push((await post<ResinSystemView>(shop, '/api/shelf/resin-systems', resinInput({ name }))).id);
+  const pigment = (
+    await post<PigmentView>(shop, '/api/shelf/pigments', {
+      name: 'Teal mica',
+      kind: 'powder',
+      densityGPerMl: 2.8,
+      recommendedPct: 1,
+      maxPct: 3,
+      pricePerPack: 9,
+      packSizeG: 25,
+    })
+  ).id;
   for (let i = 0; i < LOT_COUNT; i++) {
     const part = (['A', 'B', 'pigment'] as const)[i % 3]!;
     const expired = i % 11 === 3;
@@ -87,7 +98,13 @@ beforeAll(async () => {
       // Every seventh lot never expires; the others expire on one of 45 dates, several on the same day.
       expiresOn: i % 7 === 0 ? null : expired ? addDays('2020-01-01', i % 5) : addDays('2031-01-01', (i * 13) % 45),
     });
-    if (i % 9 === 4) await h.http().patch(`/api/shelf/lots/${lot.id}`).set(bearer(shop.lead)).send({ remainingG: i % 2 ? 0 : 40 + i }).expect(200);
+    if (i % 9 === 4)
+      await h
+        .http()
+        .patch(`/api/shelf/lots/${lot.id}`)
+        .set(bearer(shop.lead))
+        .send({ remainingG: i % 2 ? 0 : 40 + i })
+        .expect(200);
   }
   // The neighbour's lots would sort first in every direction (tiny, early, late) if they leaked in.
   const theirs = (await post<ResinSystemView>(other, '/api/shelf/resin-systems', resinInput({ name: 'AAA neighbour' }))).id;
@@ -96,7 +113,18 @@ beforeAll(async () => {
     [1, '2026-02-01'],
     [9_000_000, '2099-12-31'],
   ] as const) {
-    otherLotIds.add((await post<LotView>(other, '/api/shelf/lots', { part: 'A', resinSystemId: theirs, lotNumber: '000-neighbour', quantityG, receivedOn: '2026-01-01', expiresOn })).id);
+    otherLotIds.add(
+      (
+        await post<LotView>(other, '/api/shelf/lots', {
+          part: 'A',
+          resinSystemId: theirs,
+          lotNumber: '000-neighbour',
+          quantityG,
+          receivedOn: '2026-01-01',
+          expiresOn,
+        })
+      ).id,
+    );
   }
   shelf = (await lotPage({ limit: 500 })).items;
 }, 60_000);
@@ -112,12 +140,20 @@ describe('lots sorted on the server', () => {
   it('puts the globally smallest remaining stock on the first page, and the largest when descending', async () => {
     const up = await lotPage({ sort: 'remaining', dir: 'asc', limit: PAGE });
     expect(up.total).toBe(LOT_COUNT);
-    expect(up.items.map((l) => l.id)).toEqual(referenceOrder(shelf, lotKeys.remaining!, 'asc').slice(0, PAGE).map((l) => l.id));
+    expect(up.items.map((l) => l.id)).toEqual(
+      referenceOrder(shelf, lotKeys.remaining!, 'asc')
+        .slice(0, PAGE)
+        .map((l) => l.id),
+    );
     const smallest = Math.min(...shelf.map((l) => l.remainingG));
     expect(up.items[0]!.remainingG).toBe(smallest);
 
     const down = await lotPage({ sort: 'remaining', dir: 'desc', limit: PAGE });
-    expect(down.items.map((l) => l.id)).toEqual(referenceOrder(shelf, lotKeys.remaining!, 'desc').slice(0, PAGE).map((l) => l.id));
+    expect(down.items.map((l) => l.id)).toEqual(
+      referenceOrder(shelf, lotKeys.remaining!, 'desc')
+        .slice(0, PAGE)
+        .map((l) => l.id),
+    );
     expect(down.items[0]!.remainingG).toBe(Math.max(...shelf.map((l) => l.remainingG)));
   });
 
@@ -125,10 +161,19 @@ describe('lots sorted on the server', () => {
     const undated = shelf.filter((l) => l.expiresOn === null).length;
     for (const dir of ['asc', 'desc'] as const) {
       const all = await walk({ sort: 'expires', dir }, PAGE);
-      expect(all.slice(-undated).every((l) => l.expiresOn === null), dir).toBe(true);
-      expect(all.slice(0, -undated).every((l) => l.expiresOn !== null), dir).toBe(true);
+      expect(
+        all.slice(-undated).every((l) => l.expiresOn === null),
+        dir,
+      ).toBe(true);
+      expect(
+        all.slice(0, -undated).every((l) => l.expiresOn !== null),
+        dir,
+      ).toBe(true);
     }
-    const dated = shelf.map((l) => l.expiresOn).filter((d): d is string => d !== null).sort();
+    const dated = shelf
+      .map((l) => l.expiresOn)
+      .filter((d): d is string => d !== null)
+      .sort();
     expect((await lotPage({ sort: 'expires', dir: 'asc', limit: 1 })).items[0]!.expiresOn).toBe(dated[0]);
     expect((await lotPage({ sort: 'expires', dir: 'desc', limit: 1 })).items[0]!.expiresOn).toBe(dated.at(-1));
   });
@@ -138,7 +183,10 @@ describe('lots sorted on the server', () => {
       for (const dir of ['asc', 'desc'] as const) {
         const walked = await walk({ sort, dir }, 7);
         expect(new Set(walked.map((l) => l.id)).size, `${sort} ${dir}`).toBe(LOT_COUNT);
-        expect(walked.map((l) => l.id), `${sort} ${dir}`).toEqual(referenceOrder(shelf, keyOf, dir).map((l) => l.id));
+        expect(
+          walked.map((l) => l.id),
+          `${sort} ${dir}`,
+        ).toEqual(referenceOrder(shelf, keyOf, dir).map((l) => l.id));
       }
     }
   });
@@ -172,14 +220,23 @@ describe('lots sorted on the server', () => {
     ] as const) {
       const page = await lotPage({ sort, dir, limit: PAGE });
       expect(page.total).toBe(LOT_COUNT);
-      expect(page.items.filter((l) => otherLotIds.has(l.id)), `${sort} ${dir}`).toEqual([]);
+      expect(
+        page.items.filter((l) => otherLotIds.has(l.id)),
+        `${sort} ${dir}`,
+      ).toEqual([]);
     }
     const theirs = await lotPage({ sort: 'remaining', dir: 'asc' }, other);
     expect(theirs.items.map((l) => l.id).sort()).toEqual([...otherLotIds].sort());
   });
 
   it('refuses a column or direction it does not know, saying which are allowed', async () => {
-    for (const query of [{ sort: 'colour' }, { sort: 'name' }, { dir: 'sideways' }, { sort: 'remaining', dir: 'DESC' }, { sort: 'l.remaining_g; drop table lots' }]) {
+    for (const query of [
+      { sort: 'colour' },
+      { sort: 'name' },
+      { dir: 'sideways' },
+      { sort: 'remaining', dir: 'DESC' },
+      { sort: 'l.remaining_g; drop table lots' },
+    ]) {
       const res = await h.http().get('/api/shelf/lots').query(query).set(bearer(shop.lead)).expect(400);
       expect(res.body.error.code, JSON.stringify(query)).toBe('invalid_input');
       expect(res.body.error.message.length).toBeGreaterThan(10);
@@ -191,10 +248,28 @@ describe('products sorted on the server', () => {
   it('orders resin systems and pigments by the chosen column across pages, and refuses the other list’s columns', async () => {
     const maker = await createShop(h, 'Products shelf');
     for (let i = 0; i < 12; i++) {
-      await post(maker, '/api/shelf/resin-systems', resinInput({ name: `${i % 2 ? 'resin' : 'Resin'} ${String.fromCharCode(97 + ((i * 5) % 12))}`, potLifeMin: 20 + (i % 4) * 10, pricePerKit: 50 + i * 3, kitSizeG: 1000 + (i % 3) * 500 }));
-      await post(maker, '/api/shelf/pigments', { name: `Pigment ${i}`, kind: (['powder', 'paste', 'liquid'] as const)[i % 3], densityGPerMl: 1 + (i % 3), recommendedPct: 1, maxPct: 2 + (i % 5), pricePerPack: 5 + i, packSizeG: 10 + (i % 4) * 15 });
+      await post(
+        maker,
+        '/api/shelf/resin-systems',
+        resinInput({
+          name: `${i % 2 ? 'resin' : 'Resin'} ${String.fromCharCode(97 + ((i * 5) % 12))}`,
+          potLifeMin: 20 + (i % 4) * 10,
+          pricePerKit: 50 + i * 3,
+          kitSizeG: 1000 + (i % 3) * 500,
+        }),
+      );
+      await post(maker, '/api/shelf/pigments', {
+        name: `Pigment ${i}`,
+        kind: (['powder', 'paste', 'liquid'] as const)[i % 3],
+        densityGPerMl: 1 + (i % 3),
+        recommendedPct: 1,
+        maxPct: 2 + (i % 5),
+        pricePerPack: 5 + i,
+        packSizeG: 10 + (i % 4) * 15,
+      });
     }
-    const list = async <T>(path: string, query: Record<string, string | number>) => (await h.http().get(path).query(query).set(bearer(maker.lead)).expect(200)).body as { items: T[]; total: number };
+    const list = async <T>(path: string, query: Record<string, string | number>) =>
+      (await h.http().get(path).query(query).set(bearer(maker.lead)).expect(200)).body as { items: T[]; total: number };
     const walkProducts = async <T>(path: string, query: Record<string, string>) => {
       const out: T[] = [];
       for (let offset = 0; offset < 12; offset += 5) out.push(...(await list<T>(path, { ...query, limit: 5, offset })).items);
@@ -214,7 +289,10 @@ describe('products sorted on the server', () => {
     for (const [sort, keyOf] of Object.entries(resinKeys)) {
       for (const dir of ['asc', 'desc'] as const) {
         const walked = await walkProducts<ResinSystemView>('/api/shelf/resin-systems', { sort, dir });
-        expect(walked.map((r) => r.id), `${sort} ${dir}`).toEqual(referenceOrder(resins, keyOf, dir).map((r) => r.id));
+        expect(
+          walked.map((r) => r.id),
+          `${sort} ${dir}`,
+        ).toEqual(referenceOrder(resins, keyOf, dir).map((r) => r.id));
       }
     }
     const pigmentKeys: Record<string, (p: PigmentView) => Key> = {
@@ -227,10 +305,15 @@ describe('products sorted on the server', () => {
     for (const [sort, keyOf] of Object.entries(pigmentKeys)) {
       for (const dir of ['asc', 'desc'] as const) {
         const walked = await walkProducts<PigmentView>('/api/shelf/pigments', { sort, dir });
-        expect(walked.map((p) => p.id), `${sort} ${dir}`).toEqual(referenceOrder(pigments, keyOf, dir).map((p) => p.id));
+        expect(
+          walked.map((p) => p.id),
+          `${sort} ${dir}`,
+        ).toEqual(referenceOrder(pigments, keyOf, dir).map((p) => p.id));
       }
     }
-    expect((await walkProducts<ResinSystemView>('/api/shelf/resin-systems', {})).map((r) => r.id)).toEqual(referenceOrder(resins, resinKeys.name!, 'asc').map((r) => r.id));
+    expect((await walkProducts<ResinSystemView>('/api/shelf/resin-systems', {})).map((r) => r.id)).toEqual(
+      referenceOrder(resins, resinKeys.name!, 'asc').map((r) => r.id),
+    );
 
     await h.http().get('/api/shelf/resin-systems').query({ sort: 'kind' }).set(bearer(maker.lead)).expect(400);
     await h.http().get('/api/shelf/pigments').query({ sort: 'potLife' }).set(bearer(maker.lead)).expect(400);

@@ -82,7 +82,6 @@ export function resinSystemColumns(input: Required<Omit<ResinSystemInput, 'maker
   };
 }
 
-
 export function pigmentView(p: Pigment): PigmentView {
   return {
     id: p.id,

@@ -58,11 +58,34 @@ export async function createInvitation(ds: DataSource, s: InvitationSettings, au
     const token = newToken();
     const expiresAt = new Date(Date.now() + s.invitationDays * 86_400_000);
     const inv = await m.save(
-      m.create(Invitation, { shopId: auth.shopId, email: input.email, role: input.role, tokenHash: tokenHash(token), invitedById: auth.userId, expiresAt, acceptedAt: null, revokedAt: null }),
+      m.create(Invitation, {
+        shopId: auth.shopId,
+        email: input.email,
+        role: input.role,
+        tokenHash: tokenHash(token),
+        invitedById: auth.userId,
+        expiresAt,
+        acceptedAt: null,
+        revokedAt: null,
+      }),
     );
-    const mail = invitationMail({ shopName: shop.name, inviterName: auth.userName, role: input.role, link: `${s.publicUrl}/invitations/${token}`, expiresAt, timeZone: shop.timeZone });
+    const mail = invitationMail({
+      shopName: shop.name,
+      inviterName: auth.userName,
+      role: input.role,
+      link: `${s.publicUrl}/invitations/${token}`,
+      expiresAt,
+      timeZone: shop.timeZone,
+    });
     await queueMail(m, { shopId: auth.shopId, dedupeKey: `invitation:${inv.id}`, to: input.email, ...mail }, s.mailDomain);
-    await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'invitation.create', objectType: 'invitation', objectId: inv.id, detail: { email: input.email, role: input.role } });
+    await recordAudit(m, {
+      shopId: auth.shopId,
+      actor: auth,
+      action: 'invitation.create',
+      objectType: 'invitation',
+      objectId: inv.id,
+      detail: { email: input.email, role: input.role },
+    });
     inv.invitedBy = await m.findOneBy(User, { id: auth.userId });
     return invitationView(inv);
   });
@@ -74,12 +97,23 @@ export async function revokeInvitation(ds: DataSource, auth: AuthContext, id: st
     if (!inv) throw notFound('invitation');
     if (inv.acceptedAt) throw new AppError('conflict', 'invitation_accepted', 'this invitation was already accepted; disable the member instead');
     if (!inv.revokedAt) await m.update(Invitation, { id }, { revokedAt: new Date() });
-    await recordAudit(m, { shopId: auth.shopId, actor: auth, action: 'invitation.revoke', objectType: 'invitation', objectId: id, detail: { email: inv.email } });
+    await recordAudit(m, {
+      shopId: auth.shopId,
+      actor: auth,
+      action: 'invitation.revoke',
+      objectType: 'invitation',
+      objectId: id,
+      detail: { email: inv.email },
+    });
   });
 }
 
 async function usableInvitation(m: EntityManager, token: string, lock: boolean): Promise<Invitation> {
-  const inv = await m.findOne(Invitation, { where: { tokenHash: tokenHash(token) }, relations: { shop: true }, ...(lock ? { lock: { mode: 'pessimistic_write', tables: ['invitations'] } } : {}) });
+  const inv = await m.findOne(Invitation, {
+    where: { tokenHash: tokenHash(token) },
+    relations: { shop: true },
+    ...(lock ? { lock: { mode: 'pessimistic_write', tables: ['invitations'] } } : {}),
+  });
   if (!inv) throw new AppError('not_found', 'invitation_not_found', 'this invitation link is not valid; ask the shop lead for a new one');
   const status = statusOf(inv);
   if (status === 'accepted') throw new AppError('gone', 'invitation_used', 'this invitation was already accepted; sign in instead');
@@ -94,14 +128,22 @@ export async function previewInvitation(ds: DataSource, token: string): Promise<
   return { shopName: inv.shop!.name, email: inv.email, role: inv.role, expiresAt: inv.expiresAt.toISOString(), accountExists };
 }
 
-export async function acceptInvitation(ds: DataSource, s: InvitationSettings, token: string, input: AcceptInvitationRequest, userAgent: string): Promise<SessionResponse> {
+export async function acceptInvitation(
+  ds: DataSource,
+  s: InvitationSettings,
+  token: string,
+  input: AcceptInvitationRequest,
+  userAgent: string,
+): Promise<SessionResponse> {
   const newHash = await hashPassword(input.password);
   return ds.transaction(async (m) => {
     const inv = await usableInvitation(m, token, true);
     let user = await m.findOneBy(User, { email: inv.email });
     if (user) {
       if (!(await verifyPassword(input.password, user.passwordHash))) {
-        throw new AppError('unauthorized', 'invalid_credentials', `an account for ${inv.email} exists: enter its current password to join`, { password: 'not the password of this account' });
+        throw new AppError('unauthorized', 'invalid_credentials', `an account for ${inv.email} exists: enter its current password to join`, {
+          password: 'not the password of this account',
+        });
       }
     } else {
       if (!input.name) throw new AppError('bad_request', 'invalid_input', 'your name is required to create the account', { name: 'your name is required' });
@@ -112,7 +154,14 @@ export async function acceptInvitation(ds: DataSource, s: InvitationSettings, to
     if (existing) await m.update(Membership, { id: existing.id }, { role: inv.role, status: 'active' });
     else await m.save(m.create(Membership, { userId: user.id, shopId: inv.shopId, role: inv.role, status: 'active' }));
     await m.update(Invitation, { id: inv.id }, { acceptedAt: new Date() });
-    await recordAudit(m, { shopId: inv.shopId, actor: { userId: user.id, userName: user.name }, action: 'invitation.accept', objectType: 'invitation', objectId: inv.id, detail: { role: inv.role } });
+    await recordAudit(m, {
+      shopId: inv.shopId,
+      actor: { userId: user.id, userName: user.name },
+      action: 'invitation.accept',
+      objectType: 'invitation',
+      objectId: inv.id,
+      detail: { role: inv.role },
+    });
     return openSession(m, s, user, inv.shopId, userAgent);
   });
 }

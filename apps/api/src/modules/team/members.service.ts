@@ -42,7 +42,9 @@ export async function updateMember(ds: DataSource, auth: AuthContext, id: string
     if (!target) throw notFound('member');
     const losesLead = target.role === 'lead' && target.status === 'active' && ((change.role && change.role !== 'lead') || change.status === 'disabled');
     if (losesLead) {
-      const leads: { n: number }[] = await m.query(`SELECT count(*)::int AS n FROM memberships WHERE shop_id = $1 AND role = 'lead' AND status = 'active'`, [auth.shopId]);
+      const leads: { n: number }[] = await m.query(`SELECT count(*)::int AS n FROM memberships WHERE shop_id = $1 AND role = 'lead' AND status = 'active'`, [
+        auth.shopId,
+      ]);
       if ((leads[0]?.n ?? 0) <= 1) throw new AppError('conflict', 'last_lead', 'the shop needs at least one active lead; make someone else lead first');
     }
     if (target.userId === auth.userId && change.status === 'disabled') {

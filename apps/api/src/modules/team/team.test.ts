@@ -37,13 +37,22 @@ describe('invitations', () => {
     const latest = await linkTokenFor(h.ds, email, 'invitations');
     await h.ds.query(`UPDATE invitations SET expires_at = now() - interval '1 second' WHERE id = $1`, [second.body.id]);
     expect((await h.http().get(`/api/invitations/${latest}`).expect(410)).body.error.code).toBe('invitation_expired');
-    expect((await h.http().get(`/api/invitations/${'x'.repeat(43)}`).expect(404)).body.error.code).toBe('invitation_not_found');
+    expect(
+      (
+        await h
+          .http()
+          .get(`/api/invitations/${'x'.repeat(43)}`)
+          .expect(404)
+      ).body.error.code,
+    ).toBe('invitation_not_found');
     await h.http().get('/api/invitations/short').expect(400);
 
     const third = await h.http().post('/api/shop/invitations').set(bearer(shop.lead)).send({ email, role: 'maker' }).expect(201);
     await h.http().delete(`/api/shop/invitations/${third.body.id}`).set(bearer(shop.lead)).expect(204);
     const t3 = await linkTokenFor(h.ds, email, 'invitations');
-    expect((await h.http().post(`/api/invitations/${t3}/accept`).send({ name: 'X', password: PASSWORD }).expect(410)).body.error.code).toBe('invitation_revoked');
+    expect((await h.http().post(`/api/invitations/${t3}/accept`).send({ name: 'X', password: PASSWORD }).expect(410)).body.error.code).toBe(
+      'invitation_revoked',
+    );
   });
 
   it('does not invite someone who is already a member', async () => {

@@ -56,7 +56,10 @@ export function AppFrame({ navigation, shopArea, account, busy = false, children
       >
         Skip to the page
       </a>
-      <div aria-hidden="true" className={cx('fixed inset-x-0 top-0 z-40 h-1 bg-resin-400 transition-opacity', busy ? 'animate-pulse opacity-100' : 'opacity-0')} />
+      <div
+        aria-hidden="true"
+        className={cx('fixed inset-x-0 top-0 z-40 h-1 bg-resin-400 transition-opacity', busy ? 'animate-pulse opacity-100' : 'opacity-0')}
+      />
 
       <header className="border-b border-walnut-900 bg-walnut-800 text-paper">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">

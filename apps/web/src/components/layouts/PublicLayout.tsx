@@ -18,9 +18,7 @@ export function PublicLayout({ children }: { children: ReactNode }) {
       <main id="main" className="flex-1 px-4 pb-12">
         <div className="mx-auto w-full max-w-md rounded-2xl border border-line bg-white p-5 shadow-sm sm:p-8">{children}</div>
       </main>
-      <footer className="px-4 pb-6 text-center text-sm text-ink-soft">
-        Gelpoint keeps the numbers; the product&apos;s SDS and TDS keep the rules.
-      </footer>
+      <footer className="px-4 pb-6 text-center text-sm text-ink-soft">Gelpoint keeps the numbers; the product&apos;s SDS and TDS keep the rules.</footer>
     </div>
   );
 }

@@ -43,13 +43,7 @@ export function Button({
   ...rest
 }: ButtonProps) {
   return (
-    <button
-      type={type}
-      className={cx(buttonClasses(variant, fullWidth), className)}
-      disabled={disabled || busy}
-      aria-busy={busy || undefined}
-      {...rest}
-    >
+    <button type={type} className={cx(buttonClasses(variant, fullWidth), className)} disabled={disabled || busy} aria-busy={busy || undefined} {...rest}>
       {busy ? <Spinner size="sm" label={null} /> : icon}
       <span>{busy && busyLabel ? busyLabel : children}</span>
     </button>

@@ -36,14 +36,7 @@ export function ChoiceGroup({ legend, choices, error, inputProps }: ChoiceGroupP
                 'has-[:checked]:border-walnut-800 has-[:checked]:bg-walnut-50 has-[:checked]:ring-2 has-[:checked]:ring-walnut-800',
               )}
             >
-              <input
-                id={inputId}
-                type="radio"
-                value={choice.value}
-                aria-describedby={hintId}
-                className="mt-1 size-5 accent-walnut-800"
-                {...inputProps}
-              />
+              <input id={inputId} type="radio" value={choice.value} aria-describedby={hintId} className="mt-1 size-5 accent-walnut-800" {...inputProps} />
               <span className="flex flex-col">
                 <label htmlFor={inputId} className="cursor-pointer font-semibold after:absolute after:inset-0 after:content-['']">
                   {choice.label}

@@ -12,10 +12,7 @@ export interface ComingStateProps {
 export function ComingState({ summary, plans, children }: ComingStateProps) {
   const headingId = useId();
   return (
-    <section
-      aria-labelledby={headingId}
-      className="flex flex-col gap-4 rounded-xl border border-resin-300 bg-resin-50 p-5 sm:p-6"
-    >
+    <section aria-labelledby={headingId} className="flex flex-col gap-4 rounded-xl border border-resin-300 bg-resin-50 p-5 sm:p-6">
       <div className="flex items-start gap-3">
         <svg aria-hidden="true" viewBox="0 0 32 32" className="size-8 shrink-0 text-resin-600">
           <path d="M16 3c-3.6 5-9 10.6-9 16.2a9 9 0 0 0 18 0C25 13.6 19.6 8 16 3Z" fill="none" stroke="currentColor" strokeWidth="2.2" />
@@ -25,9 +22,7 @@ export function ComingState({ summary, plans, children }: ComingStateProps) {
           <h2 id={headingId} className="text-xl font-bold text-walnut-900">
             Still curing
           </h2>
-          <p className="text-base text-ink">
-            This part of Gelpoint is on its way. {summary}
-          </p>
+          <p className="text-base text-ink">This part of Gelpoint is on its way. {summary}</p>
         </div>
       </div>
       <div>

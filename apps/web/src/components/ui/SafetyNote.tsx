@@ -59,9 +59,7 @@ export function SafetyNote({ className, headingLevel = 2 }: SafetyNoteProps) {
         </svg>
         Before you mix
       </Heading>
-      <p className="mb-4 text-ink-soft">
-        Always follow the product&apos;s SDS and TDS and your local codes. They outrank anything here.
-      </p>
+      <p className="mb-4 text-ink-soft">Always follow the product&apos;s SDS and TDS and your local codes. They outrank anything here.</p>
       <ul className="grid gap-3 sm:grid-cols-2">
         {cautions.map((caution) => (
           <li key={caution.topic} className="flex gap-3 rounded-lg bg-paper p-3">

@@ -11,10 +11,7 @@ const sizeClasses = { sm: 'size-4 border-2', md: 'size-6 border-[3px]', lg: 'siz
 
 export function Spinner({ size = 'md', label = 'Loading…', className }: SpinnerProps) {
   const ring = (
-    <span
-      aria-hidden="true"
-      className={cx('inline-block animate-spin rounded-full border-current border-r-transparent', sizeClasses[size], className)}
-    />
+    <span aria-hidden="true" className={cx('inline-block animate-spin rounded-full border-current border-r-transparent', sizeClasses[size], className)} />
   );
   if (label === null) return ring;
   return (

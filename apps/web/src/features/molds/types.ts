@@ -1,4 +1,18 @@
-import type { CavityFill, CavityReport, LayerVolumes, MoldFileUnits, MoldFill, MoldFormat, MoldList, MoldStatus, MoldSummary, MoldUnits, MoldView, UpAxis, UpdateMoldRequest } from '@gelpoint/contracts';
+import type {
+  CavityFill,
+  CavityReport,
+  LayerVolumes,
+  MoldFileUnits,
+  MoldFill,
+  MoldFormat,
+  MoldList,
+  MoldStatus,
+  MoldSummary,
+  MoldUnits,
+  MoldView,
+  UpAxis,
+  UpdateMoldRequest,
+} from '@gelpoint/contracts';
 import type { z } from 'zod';
 
 export type { CavityFill, CavityReport, MoldFill, MoldView, UpdateMoldRequest };

@@ -16,5 +16,9 @@ export async function forgetRuntimeCaches(): Promise<void> {
  * worker cached and, on a deliberate sign-out, what was logged and not sent (the person was told and agreed).
  */
 export async function forgetDeviceData(outbox: Outbox, { unsent }: { unsent: boolean }): Promise<void> {
-  await Promise.all([forgetPersistedQueries().catch(() => undefined), forgetRuntimeCaches().catch(() => undefined), unsent ? outbox.clear() : Promise.resolve()]);
+  await Promise.all([
+    forgetPersistedQueries().catch(() => undefined),
+    forgetRuntimeCaches().catch(() => undefined),
+    unsent ? outbox.clear() : Promise.resolve(),
+  ]);
 }

@@ -157,7 +157,16 @@ export class Outbox {
     const owner = this.hooks.currentOwner();
     if (!owner) throw new ApiError(401, 'signed_out', 'You are not signed in any more. Sign in again, then log it once more.');
     this.lastSeq = Math.max(this.lastSeq + 1, Date.now());
-    return { ...draft, owner, id: newIdempotencyKey(), seq: this.lastSeq, createdAt: new Date().toISOString(), state: 'waiting', refusal: null, lastProblem: null };
+    return {
+      ...draft,
+      owner,
+      id: newIdempotencyKey(),
+      seq: this.lastSeq,
+      createdAt: new Date().toISOString(),
+      state: 'waiting',
+      refusal: null,
+      lastProblem: null,
+    };
   }
 
   private async keep(entry: OutboxEntry): Promise<void> {

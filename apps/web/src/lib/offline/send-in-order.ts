@@ -14,7 +14,8 @@ export type FailureVerdict =
  * all is about the moment too.
  */
 export function verdictOf(error: unknown): FailureVerdict {
-  if (!isApiError(error)) return { kind: 'refused', refusal: { status: 0, code: 'unreadable_answer', message: error instanceof Error ? error.message : String(error) } };
+  if (!isApiError(error))
+    return { kind: 'refused', refusal: { status: 0, code: 'unreadable_answer', message: error instanceof Error ? error.message : String(error) } };
   if (error.status === 0) return { kind: 'wait', problem: 'No connection to the server.' };
   if (error.status === 401) return { kind: 'wait', problem: 'The session has ended: sign in again to send it.' };
   if (error.status === 408 || error.status === 429 || error.status >= 500) return { kind: 'wait', problem: error.message };

@@ -47,7 +47,11 @@ export const getMold = (moldId: string, signal?: AbortSignal) => callRoute('getM
 export const getMolds = (query: MoldListQuery, signal?: AbortSignal) => callRoute('listMolds', { query }, withSignal(signal));
 
 export const getMoldFill = (moldId: string, key: FillKey, signal?: AbortSignal) =>
-  callRoute('moldFill', { params: { id: moldId }, query: { level: key.levelMm, from: 'floor', dam: key.dam, depthMap: key.depthMap ? 'true' : 'false' } }, withSignal(signal));
+  callRoute(
+    'moldFill',
+    { params: { id: moldId }, query: { level: key.levelMm, from: 'floor', dam: key.dam, depthMap: key.depthMap ? 'true' : 'false' } },
+    withSignal(signal),
+  );
 
 export const getMoldLayers = (moldId: string, key: LayersKey, signal?: AbortSignal) =>
   callRoute('moldLayers', { params: { id: moldId }, query: { levels: key.levelsMm.join(','), from: 'floor', dam: key.dam } }, withSignal(signal));

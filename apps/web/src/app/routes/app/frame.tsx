@@ -2,17 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useEffect, type ReactNode } from 'react';
 import { Link, Outlet, useNavigation, type LoaderFunctionArgs } from 'react-router';
 import { AppFrame } from '../../../components/layouts/AppFrame';
-import {
-  AuditIcon,
-  CureBoardIcon,
-  MouldsIcon,
-  PiecesIcon,
-  PourPlanIcon,
-  SettingsIcon,
-  ShelfIcon,
-  TeamIcon,
-  TodayIcon,
-} from '../../../components/ui/icons';
+import { AuditIcon, CureBoardIcon, MouldsIcon, PiecesIcon, PourPlanIcon, SettingsIcon, ShelfIcon, TeamIcon, TodayIcon } from '../../../components/ui/icons';
 import { PageSpinner } from '../../../components/ui/PageSpinner';
 import { useSession } from '../../../features/auth/api/get-session';
 import { authKeys } from '../../../lib/resources/session';

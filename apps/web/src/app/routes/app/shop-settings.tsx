@@ -39,21 +39,21 @@ function SettingsArea() {
   const shop = useShop();
   return (
     <div className="flex max-w-2xl flex-col gap-6">
-    <Card>
-      <QueryResult query={shop} loadingLabel="Loading the settings…">
-        {(current) => (
-          <ShopSettingsForm
-            key={current.id}
-            shop={current}
-            // The header shows the shop name from the session.
-            onSaved={() => queryClient.invalidateQueries({ queryKey: authKeys.session() })}
-          />
-        )}
-      </QueryResult>
-    </Card>
-    <Card>
-      <ThermometerToken />
-    </Card>
+      <Card>
+        <QueryResult query={shop} loadingLabel="Loading the settings…">
+          {(current) => (
+            <ShopSettingsForm
+              key={current.id}
+              shop={current}
+              // The header shows the shop name from the session.
+              onSaved={() => queryClient.invalidateQueries({ queryKey: authKeys.session() })}
+            />
+          )}
+        </QueryResult>
+      </Card>
+      <Card>
+        <ThermometerToken />
+      </Card>
     </div>
   );
 }

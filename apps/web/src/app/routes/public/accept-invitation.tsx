@@ -68,27 +68,27 @@ function OpenInvitation({ token }: { token: string }) {
         Date.parse(preview.expiresAt) <= Date.now() ? (
           <ClosedInvitation reason="The invitation has run out." />
         ) : (
-        <>
-          <PublicHeading title={`Join ${preview.shopName}`}>
-            You are invited as {roleLabel(preview.role).toLowerCase()}: {roleDuty(preview.role)}.
-          </PublicHeading>
-          <dl className="mb-6 grid grid-cols-[auto_minmax(0,1fr)] gap-x-4 gap-y-2 rounded-lg bg-paper p-4">
-            <dt className="font-semibold text-ink-soft">Shop</dt>
-            <dd>{preview.shopName}</dd>
-            <dt className="font-semibold text-ink-soft">Role</dt>
-            <dd>{roleLabel(preview.role)}</dd>
-            <dt className="font-semibold text-ink-soft">E-mail</dt>
-            <dd className="break-all">{preview.email}</dd>
-            <dt className="font-semibold text-ink-soft">Open until</dt>
-            <dd>
-              <DateTime iso={preview.expiresAt} />
-            </dd>
-          </dl>
-          {preview.accountExists ? (
-            <p className="mb-4 text-ink-soft">You already have a Gelpoint account with this e-mail. Enter its password to add this shop.</p>
-          ) : null}
-          <AcceptInvitationForm token={token} invitation={preview} onJoined={() => control.signedIn(landingPath)} />
-        </>
+          <>
+            <PublicHeading title={`Join ${preview.shopName}`}>
+              You are invited as {roleLabel(preview.role).toLowerCase()}: {roleDuty(preview.role)}.
+            </PublicHeading>
+            <dl className="mb-6 grid grid-cols-[auto_minmax(0,1fr)] gap-x-4 gap-y-2 rounded-lg bg-paper p-4">
+              <dt className="font-semibold text-ink-soft">Shop</dt>
+              <dd>{preview.shopName}</dd>
+              <dt className="font-semibold text-ink-soft">Role</dt>
+              <dd>{roleLabel(preview.role)}</dd>
+              <dt className="font-semibold text-ink-soft">E-mail</dt>
+              <dd className="break-all">{preview.email}</dd>
+              <dt className="font-semibold text-ink-soft">Open until</dt>
+              <dd>
+                <DateTime iso={preview.expiresAt} />
+              </dd>
+            </dl>
+            {preview.accountExists ? (
+              <p className="mb-4 text-ink-soft">You already have a Gelpoint account with this e-mail. Enter its password to add this shop.</p>
+            ) : null}
+            <AcceptInvitationForm token={token} invitation={preview} onJoined={() => control.signedIn(landingPath)} />
+          </>
         )
       }
     </QueryResult>

@@ -15,10 +15,7 @@ export function Component() {
     <>
       <PublicHeading title="Choose a new password" />
       {token.success ? (
-        <ResetPasswordForm
-          token={token.data}
-          onChanged={() => navigate(paths.signIn.getHref({ notice: 'password-changed' }), { replace: true })}
-        />
+        <ResetPasswordForm token={token.data} onChanged={() => navigate(paths.signIn.getHref({ notice: 'password-changed' }), { replace: true })} />
       ) : (
         <Alert tone="warning" title="This link is not complete" live="none">
           Open the link from the e-mail again, all of it. If it still fails, ask for a new one.

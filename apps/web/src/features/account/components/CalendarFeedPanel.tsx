@@ -52,13 +52,20 @@ export function CalendarFeedPanel({ calendarUrl }: { calendarUrl: string }) {
       <div className="flex flex-col gap-4 sm:flex-row sm:items-start sm:gap-6">
         <div className="flex min-w-0 flex-1 flex-col gap-4">
           <p>
-            The reminders and forecast cure stages of the shop&apos;s open pours can sit in your own calendar and keep themselves up to date.
-            Add the link below as a subscribed calendar: on this phone, press &quot;Subscribe on this device&quot;; from a computer, scan the code
-            with the phone&apos;s camera; in a calendar app, paste the link where it asks for a calendar address (URL).
+            The reminders and forecast cure stages of the shop&apos;s open pours can sit in your own calendar and keep themselves up to date. Add the link below
+            as a subscribed calendar: on this phone, press &quot;Subscribe on this device&quot;; from a computer, scan the code with the phone&apos;s camera; in
+            a calendar app, paste the link where it asks for a calendar address (URL).
           </p>
           <Field label="Your calendar link" hint="Private: anyone with this link can see the shop's planned steps. Keep it to yourself.">
             {(control) => (
-              <Input {...control} readOnly value={calendarUrl} spellCheck={false} className="font-mono text-sm" onFocus={(event) => event.currentTarget.select()} />
+              <Input
+                {...control}
+                readOnly
+                value={calendarUrl}
+                spellCheck={false}
+                className="font-mono text-sm"
+                onFocus={(event) => event.currentTarget.select()}
+              />
             )}
           </Field>
           <div className="flex flex-wrap items-center gap-2">
@@ -66,7 +73,10 @@ export function CalendarFeedPanel({ calendarUrl }: { calendarUrl: string }) {
               Copy the link
             </Button>
             {subscribeLink ? (
-              <a href={subscribeLink} className="inline-flex min-h-touch items-center px-2 font-semibold text-walnut-700 underline decoration-resin-400 decoration-2 underline-offset-4">
+              <a
+                href={subscribeLink}
+                className="inline-flex min-h-touch items-center px-2 font-semibold text-walnut-700 underline decoration-resin-400 decoration-2 underline-offset-4"
+              >
                 Subscribe on this device
               </a>
             ) : null}

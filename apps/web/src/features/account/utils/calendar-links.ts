@@ -22,7 +22,8 @@ export type CopyOutcome = { ok: true } | { ok: false; code: 'copy_unavailable' |
  * browser may refuse it; either way the person is told to copy by hand from the field.
  */
 export async function copyText(text: string, clipboard: Pick<Clipboard, 'writeText'> | undefined): Promise<CopyOutcome> {
-  if (!clipboard) return { ok: false, code: 'copy_unavailable', message: 'This browser cannot copy from here: select the link in the field and copy it yourself.' };
+  if (!clipboard)
+    return { ok: false, code: 'copy_unavailable', message: 'This browser cannot copy from here: select the link in the field and copy it yourself.' };
   try {
     await clipboard.writeText(text);
     return { ok: true };

@@ -56,9 +56,7 @@ export function AcceptInvitationForm({ token, invitation, onJoined }: AcceptInvi
         error={errors.password?.message}
         required
       >
-        {(control) => (
-          <Input {...control} type="password" autoComplete={newAccount ? 'new-password' : 'current-password'} {...form.register('password')} />
-        )}
+        {(control) => <Input {...control} type="password" autoComplete={newAccount ? 'new-password' : 'current-password'} {...form.register('password')} />}
       </Field>
       <Button type="submit" fullWidth busy={accept.isPending} busyLabel="Joining…">
         Join {invitation.shopName}

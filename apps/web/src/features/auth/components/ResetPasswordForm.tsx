@@ -10,12 +10,10 @@ import { Input } from '../../../components/ui/Input';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
 
-const NewPasswordFields = z
-  .object({ password: Password, confirmPassword: z.string() })
-  .refine((values) => values.password === values.confirmPassword, {
-    path: ['confirmPassword'],
-    message: 'the two passwords differ; type the same new password in both fields',
-  });
+const NewPasswordFields = z.object({ password: Password, confirmPassword: z.string() }).refine((values) => values.password === values.confirmPassword, {
+  path: ['confirmPassword'],
+  message: 'the two passwords differ; type the same new password in both fields',
+});
 type NewPasswordInput = z.input<typeof NewPasswordFields>;
 type NewPasswordValues = z.output<typeof NewPasswordFields>;
 const fieldNames = ['password'] as const;

@@ -31,7 +31,9 @@ export function FillFigures({ fill, heightMm, unitSystem, updating }: FillFigure
         <dt className="text-ink-soft">Deepest resin</dt>
         <dd className="text-right font-semibold tabular-nums">{formatLength(fill.maxDepthMm, unitSystem).text}</dd>
         <dt className="text-ink-soft">Trapped air</dt>
-        <dd className="text-right font-semibold tabular-nums">{fill.trappedAirMm3 > 0 ? formatVolume(mm3ToMl(fill.trappedAirMm3), unitSystem).text : 'None'}</dd>
+        <dd className="text-right font-semibold tabular-nums">
+          {fill.trappedAirMm3 > 0 ? formatVolume(mm3ToMl(fill.trappedAirMm3), unitSystem).text : 'None'}
+        </dd>
         <dt className="text-ink-soft">Held in by</dt>
         <dd className="text-right font-semibold">{damWords[fill.dam]}</dd>
       </dl>

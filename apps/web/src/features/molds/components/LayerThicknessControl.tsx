@@ -20,7 +20,14 @@ export function LayerThicknessControl({ text, error, unitSystem, onChange }: Lay
     >
       {(control) => (
         <div className="flex items-center gap-2">
-          <Input {...control} inputMode="decimal" autoComplete="off" className="max-w-40 tabular-nums" value={text} onChange={(e) => onChange(e.target.value)} />
+          <Input
+            {...control}
+            inputMode="decimal"
+            autoComplete="off"
+            className="max-w-40 tabular-nums"
+            value={text}
+            onChange={(e) => onChange(e.target.value)}
+          />
           <span className="text-ink-soft">{unit}</span>
         </div>
       )}

@@ -19,8 +19,11 @@ export function MeshFacts({ mold, report, unitSystem }: { mold: MoldView; report
       <dt className="font-semibold text-ink-soft">Read as</dt>
       <dd>
         {fileUnitWords[mold.units].plural}
-        {mold.fileUnits === null ? '' : mold.fileUnits === mold.units ? ' (as the file states)' : ` (the file states ${fileUnitWords[mold.fileUnits].plural})`},{' '}
-        {mold.upAxis.toUpperCase()} up
+        {mold.fileUnits === null
+          ? ''
+          : mold.fileUnits === mold.units
+            ? ' (as the file states)'
+            : ` (the file states ${fileUnitWords[mold.fileUnits].plural})`}, {mold.upAxis.toUpperCase()} up
       </dd>
       <dt className="font-semibold text-ink-soft">Method</dt>
       <dd>

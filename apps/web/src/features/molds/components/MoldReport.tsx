@@ -70,7 +70,12 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
   const mapped = useMoldFill(mold.id, { levelMm: mapLevel, dam, depthMap: true }, mold.analysedAt, undefined, !mapIsStored);
   const fill = numbers.data ?? stored;
   // Until the first map at another level arrives, the report's own stays on screen, marked as updating.
-  const drawn = mapIsStored || !mapped.data?.depthMap ? (storedMap.data ? { map: storedMap.data, levelMm: stored.levelMm } : undefined) : { map: mapped.data.depthMap, levelMm: mapped.data.levelMm };
+  const drawn =
+    mapIsStored || !mapped.data?.depthMap
+      ? storedMap.data
+        ? { map: storedMap.data, levelMm: stored.levelMm }
+        : undefined
+      : { map: mapped.data.depthMap, levelMm: mapped.data.levelMm };
   const depthMap = drawn?.map;
   const depthMapUpdating = !mapIsStored && (mapped.isPlaceholderData || !mapped.data?.depthMap);
   const depthMapError = mapIsStored ? storedMap.error : mapped.error;

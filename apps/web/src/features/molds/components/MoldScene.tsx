@@ -115,7 +115,10 @@ export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerL
   const geometry = useMemo(() => moldGeometry(file, upAxis, units), [file, upAxis, units]);
   useEffect(() => () => geometry.dispose(), [geometry]);
   // The floor is where the first layer starts, not a layer of its own: lines go at the layers' tops.
-  const layerLines = useMemo(() => layerLineGeometry(geometry, layerLevelsMm.slice(1), footprint, footprintLevelMm), [geometry, layerLevelsMm, footprint, footprintLevelMm]);
+  const layerLines = useMemo(
+    () => layerLineGeometry(geometry, layerLevelsMm.slice(1), footprint, footprintLevelMm),
+    [geometry, layerLevelsMm, footprint, footprintLevelMm],
+  );
   useEffect(() => () => layerLines.dispose(), [layerLines]);
   const surface = useMemo(() => resinSurface(bboxMm, footprint), [bboxMm, footprint]);
   useEffect(() => () => surface.texture?.dispose(), [surface]);

@@ -67,11 +67,15 @@ export function MoldSettingsForm({ mold, pieces }: MoldSettingsFormProps) {
         {(control) => <Input {...control} maxLength={120} value={values.name} onChange={(e) => set('name', e.target.value)} />}
       </Field>
       <Field label="Piece" hint="The piece this mould is for; its page lists the mould.">
-        {(control) => <Select {...control} options={pieceOptions} emptyOption="No piece" value={values.pieceId} onChange={(e) => set('pieceId', e.target.value)} />}
+        {(control) => (
+          <Select {...control} options={pieceOptions} emptyOption="No piece" value={values.pieceId} onChange={(e) => set('pieceId', e.target.value)} />
+        )}
       </Field>
       <div className="grid gap-5 sm:grid-cols-2">
         <Field label="Units in the file" hint="A different unit reads the stored file again.">
-          {(control) => <Select {...control} options={unitOptions} value={values.units} onChange={(e) => set('units', e.target.value as MoldSettingsValues['units'])} />}
+          {(control) => (
+            <Select {...control} options={unitOptions} value={values.units} onChange={(e) => set('units', e.target.value as MoldSettingsValues['units'])} />
+          )}
         </Field>
         <Field label="Up axis" hint="A different axis reads the stored file again.">
           {(control) => <Select {...control} options={upOptions} value={values.upAxis} onChange={(e) => set('upAxis', e.target.value as UpAxis)} />}

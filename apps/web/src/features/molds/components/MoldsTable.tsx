@@ -38,7 +38,11 @@ export function MoldsTable({ molds, pieceNames, unitSystem }: MoldsTableProps) {
               <MoldStatusBadge status={mold.status} />
             </Td>
             <Td className="text-right tabular-nums">
-              {mold.fillVolumeToTopMm3 === null ? <span className="text-ink-soft">Not measured yet</span> : formatVolume(mm3ToMl(mold.fillVolumeToTopMm3), unitSystem).text}
+              {mold.fillVolumeToTopMm3 === null ? (
+                <span className="text-ink-soft">Not measured yet</span>
+              ) : (
+                formatVolume(mm3ToMl(mold.fillVolumeToTopMm3), unitSystem).text
+              )}
             </Td>
             <Td>
               <DateTime iso={mold.createdAt} />

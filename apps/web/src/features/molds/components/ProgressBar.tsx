@@ -12,12 +12,6 @@ export interface ProgressBarProps {
 export function ProgressBar({ label, share, detail }: ProgressBarProps) {
   const percent = Math.round(Math.min(1, Math.max(0, share)) * 100);
   return (
-    <Bar
-      label={label}
-      percent={percent}
-      reading={`${percent} %${detail ? ` ${detail}` : ''}`}
-      readingClassName="text-ink-soft"
-      valueText={`${percent} %`}
-    />
+    <Bar label={label} percent={percent} reading={`${percent} %${detail ? ` ${detail}` : ''}`} readingClassName="text-ink-soft" valueText={`${percent} %`} />
   );
 }

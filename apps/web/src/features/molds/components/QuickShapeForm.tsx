@@ -22,9 +22,7 @@ export function QuickShapeForm({ unitSystem }: { unitSystem: UnitSystem }) {
   const fields = quickShapeFields[kind];
   const anyTyped = fields.some((spec) => (typed[spec.field] ?? '').trim() !== '');
   const result = quickShapeCavity(kind, typed, unitSystem);
-  const cautions = result.ok
-    ? moldCautions({ maxDepthMm: result.value.maxDepthMm, trappedAirMm3: 0, maxLayerMm: null, layersNeeded: null, unitSystem })
-    : [];
+  const cautions = result.ok ? moldCautions({ maxDepthMm: result.value.maxDepthMm, trappedAirMm3: 0, maxLayerMm: null, layersNeeded: null, unitSystem }) : [];
 
   return (
     <form aria-label="Measure the cavity" className="flex flex-col gap-5" onSubmit={(e) => e.preventDefault()}>
@@ -36,7 +34,14 @@ export function QuickShapeForm({ unitSystem }: { unitSystem: UnitSystem }) {
               key={shape.kind}
               className="flex min-h-touch cursor-pointer items-start gap-3 rounded-lg border border-line-strong bg-white px-3 py-2 has-[:checked]:border-walnut-800 has-[:checked]:bg-walnut-50 has-[:checked]:ring-2 has-[:checked]:ring-walnut-800"
             >
-              <input type="radio" name="quick-shape" value={shape.kind} checked={kind === shape.kind} onChange={() => setKind(shape.kind)} className="mt-1 size-5 accent-walnut-800" />
+              <input
+                type="radio"
+                name="quick-shape"
+                value={shape.kind}
+                checked={kind === shape.kind}
+                onChange={() => setKind(shape.kind)}
+                className="mt-1 size-5 accent-walnut-800"
+              />
               <span className="flex flex-col">
                 <span className="font-semibold">{shape.label}</span>
                 <span className="text-sm text-ink-soft">{shape.hint}</span>

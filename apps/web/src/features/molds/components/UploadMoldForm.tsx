@@ -189,7 +189,12 @@ export function UploadMoldForm({ pieces, defaultPieceId, unitSystem, onUploaded 
       </Field>
       <Field label="Piece" hint="The piece this mould is for, if it has one yet." error={errors.pieceId?.message}>
         {(control) => (
-          <Select {...control} emptyOption="No piece yet" options={pieces.map((piece) => ({ value: piece.id, label: piece.name }))} {...form.register('pieceId')} />
+          <Select
+            {...control}
+            emptyOption="No piece yet"
+            options={pieces.map((piece) => ({ value: piece.id, label: piece.name }))}
+            {...form.register('pieceId')}
+          />
         )}
       </Field>
       {upload.isPending ? (

@@ -58,7 +58,13 @@ export function VolumePlot({ curve, dam, levelMm, unitSystem }: VolumePlotProps)
         <text x={(box.left + box.width - box.right) / 2} y={box.height - 8} textAnchor="middle" className="fill-ink text-[13px] font-semibold">
           Fill level: height above the cavity floor ({plot.xUnit})
         </text>
-        <text x={14} y={(box.top + bottomY) / 2} textAnchor="middle" transform={`rotate(-90 14 ${(box.top + bottomY) / 2})`} className="fill-ink text-[13px] font-semibold">
+        <text
+          x={14}
+          y={(box.top + bottomY) / 2}
+          textAnchor="middle"
+          transform={`rotate(-90 14 ${(box.top + bottomY) / 2})`}
+          className="fill-ink text-[13px] font-semibold"
+        >
           Volume ({plot.yUnit})
         </text>
         <path d={plot.path} fill="none" className="stroke-walnut-800" strokeWidth="2.5" strokeLinejoin="round" />

@@ -40,7 +40,10 @@ export function readLengthInput(text: string, unitSystem: UnitSystem, bounds: Le
   const range = `between ${formatLength(bounds.minMm, unitSystem).text} and ${formatLength(bounds.maxMm, unitSystem).text}`;
   const value = readDecimal(text);
   if (value === null) {
-    return fail('length_unreadable', `${label} must be a number in ${unit}, ${range}; type digits only, such as ${lengthInputValue(bounds.maxMm, unitSystem)}.`);
+    return fail(
+      'length_unreadable',
+      `${label} must be a number in ${unit}, ${range}; type digits only, such as ${lengthInputValue(bounds.maxMm, unitSystem)}.`,
+    );
   }
   const lengthMm = shopLengthToMm(value, unitSystem);
   const slackMm = shopLengthToMm(0.5 * 10 ** -decimals[unitSystem], unitSystem);

@@ -33,12 +33,27 @@ describe('the floor datum on the mould page', () => {
   });
 
   it('adds layer volumes into a curve from the floor', () => {
-    const curve = curveFromLayers({ layers: [{ fromMm: 0, toMm: 10, volumeMm3: 32_000 }, { fromMm: 10, toMm: 20, volumeMm3: 32_000 }] });
-    expect(curve).toEqual([{ levelMm: 0, volumeMm3: 0 }, { levelMm: 10, volumeMm3: 32_000 }, { levelMm: 20, volumeMm3: 64_000 }]);
+    const curve = curveFromLayers({
+      layers: [
+        { fromMm: 0, toMm: 10, volumeMm3: 32_000 },
+        { fromMm: 10, toMm: 20, volumeMm3: 32_000 },
+      ],
+    });
+    expect(curve).toEqual([
+      { levelMm: 0, volumeMm3: 0 },
+      { levelMm: 10, volumeMm3: 32_000 },
+      { levelMm: 20, volumeMm3: 64_000 },
+    ]);
   });
 
   it('reads the stored fill to the top as a level above the floor', () => {
     const fillToTop = { levelMm: 30, dam: 'outline' as const, volumeMm3: 64_000, wettedAreaMm2: 8960, maxDepthMm: 20, trappedAirMm3: 0, warnings: [] };
-    expect(storedFillToTop({ fillToTop, floorMm: { outline: 10, box: 0 } })).toMatchObject({ levelMm: 20, levelFrom: 'floor', floorMm: 10, levelAboveFloorMm: 20, levelInMouldMm: 30 });
+    expect(storedFillToTop({ fillToTop, floorMm: { outline: 10, box: 0 } })).toMatchObject({
+      levelMm: 20,
+      levelFrom: 'floor',
+      floorMm: 10,
+      levelAboveFloorMm: 20,
+      levelInMouldMm: 30,
+    });
   });
 });

@@ -23,7 +23,10 @@ const queued: MoldView = {
 
 describe('the analysis events of a mould', () => {
   it('reads what the API sends, and knows its last event', () => {
-    expect(readProgressEvent('progress', '{"status":"analysing","progress":0.3,"error":null}')).toEqual({ event: { status: 'analysing', progress: 0.3, error: null }, last: false });
+    expect(readProgressEvent('progress', '{"status":"analysing","progress":0.3,"error":null}')).toEqual({
+      event: { status: 'analysing', progress: 0.3, error: null },
+      last: false,
+    });
     expect(readProgressEvent('ready', '{"status":"ready","progress":1,"error":null}')?.last).toBe(true);
     const failed = readProgressEvent('failed', '{"status":"failed","progress":1,"error":{"code":"stl_truncated","message":"The file ends early."}}');
     expect(failed).toEqual({ event: { status: 'failed', progress: 1, error: { code: 'stl_truncated', message: 'The file ends early.' } }, last: true });

@@ -23,7 +23,11 @@ describe('niceTicks', () => {
   });
 
   it('always encloses the data', () => {
-    for (const [min, max] of [[3, 97], [0.2, 7.7], [120, 980]] as const) {
+    for (const [min, max] of [
+      [3, 97],
+      [0.2, 7.7],
+      [120, 980],
+    ] as const) {
       const { ticks } = niceTicks(min, max);
       expect(ticks[0]).toBeLessThanOrEqual(min);
       expect(ticks[ticks.length - 1]).toBeGreaterThanOrEqual(max);

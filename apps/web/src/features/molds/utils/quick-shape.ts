@@ -1,14 +1,4 @@
-import {
-  areaDepthCavity,
-  channelCavity,
-  cylinderCavity,
-  fail,
-  ok,
-  rectangleCavity,
-  type QuickShapeCavity,
-  type Result,
-  type UnitSystem,
-} from '@gelpoint/core';
+import { areaDepthCavity, channelCavity, cylinderCavity, fail, ok, rectangleCavity, type QuickShapeCavity, type Result, type UnitSystem } from '@gelpoint/core';
 import { shopAreaToMm2 } from './area-format';
 import { shopLengthToMm } from './length-input';
 
@@ -24,7 +14,13 @@ export interface QuickShapeFieldSpec {
   hint?: string;
 }
 
-const length = (field: QuickShapeField, label: string, hint?: string): QuickShapeFieldSpec => ({ field, label, measure: 'length', required: true, ...(hint ? { hint } : {}) });
+const length = (field: QuickShapeField, label: string, hint?: string): QuickShapeFieldSpec => ({
+  field,
+  label,
+  measure: 'length',
+  required: true,
+  ...(hint ? { hint } : {}),
+});
 
 /** What to measure for each shape, in the order a tape measure meets it. */
 export const quickShapeFields: Record<QuickShapeKind, readonly QuickShapeFieldSpec[]> = {

@@ -64,7 +64,8 @@ const length = (flat: number[]) => segments(flat).reduce((sum, [x1, y1, , x2, y2
 
 /** Whether (x, y) lies on the rectangle's edge. */
 const onRectangle = (x: number, y: number, [x0, x1, y0, y1]: [number, number, number, number]) =>
-  ((Math.abs(x - x0) < 1e-9 || Math.abs(x - x1) < 1e-9) && y >= y0 - 1e-9 && y <= y1 + 1e-9) || ((Math.abs(y - y0) < 1e-9 || Math.abs(y - y1) < 1e-9) && x >= x0 - 1e-9 && x <= x1 + 1e-9);
+  ((Math.abs(x - x0) < 1e-9 || Math.abs(x - x1) < 1e-9) && y >= y0 - 1e-9 && y <= y1 + 1e-9) ||
+  ((Math.abs(y - y0) < 1e-9 || Math.abs(y - y1) < 1e-9) && x >= x0 - 1e-9 && x <= x1 + 1e-9);
 
 describe('resinOutline', () => {
   // The plane section of a box pocket between its floor and its rim is its 30 × 20 mm opening: a rectangle, whose

@@ -59,8 +59,12 @@ export function resinOutline(positions: ArrayLike<number>, levelMm: number, foot
     if (Math.hypot(x2 - x1, y2 - y1) < 1e-9) continue;
     // The face's normal, flattened: which way is off the wall, whatever the file's winding.
     const [p0, p1, p2] = corner;
-    const ux = p1![0] - p0![0], uy = p1![1] - p0![1], uz = p1![2] - p0![2];
-    const vx = p2![0] - p0![0], vy = p2![1] - p0![1], vz = p2![2] - p0![2];
+    const ux = p1![0] - p0![0],
+      uy = p1![1] - p0![1],
+      uz = p1![2] - p0![2];
+    const vx = p2![0] - p0![0],
+      vy = p2![1] - p0![1],
+      vz = p2![2] - p0![2];
     const nx = uy * vz - uz * vy;
     const ny = uz * vx - ux * vz;
     const nLength = Math.hypot(nx, ny);

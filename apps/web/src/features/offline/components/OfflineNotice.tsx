@@ -9,7 +9,13 @@ import { clockTime } from '../utils/clock-time';
  * With the network cut, says how old the page's data is ("offline — as of 14:32"), and that what is logged now is
  * kept on the phone; a page that was never opened before waits for the connection.
  */
-export function OfflineNotice({ pageLoading, notPageData }: { pageLoading: boolean; /** Who is signed in: on every page, not the page's data. */ notPageData: QueryKey }) {
+export function OfflineNotice({
+  pageLoading,
+  notPageData,
+}: {
+  pageLoading: boolean;
+  /** Who is signed in: on every page, not the page's data. */ notPageData: QueryKey;
+}) {
   const ignored = hashKey(notPageData);
   const online = useOnline();
   const queryClient = useQueryClient();

@@ -24,7 +24,8 @@ export function editableValues(entry: Pick<OutboxEntry, 'kind' | 'request'>): Ed
       { name: 'weighedAG', label: 'Part A weighed (g)', kind: 'number', value: jsonNumber(b, 'weighedAG') },
       { name: 'weighedBG', label: 'Part B weighed (g)', kind: 'number', value: jsonNumber(b, 'weighedBG') },
     ];
-    if (typeof b.weighedPigmentG === 'number') values.push({ name: 'weighedPigmentG', label: 'Pigment weighed (g)', kind: 'number', value: jsonNumber(b, 'weighedPigmentG') });
+    if (typeof b.weighedPigmentG === 'number')
+      values.push({ name: 'weighedPigmentG', label: 'Pigment weighed (g)', kind: 'number', value: jsonNumber(b, 'weighedPigmentG') });
     values.push(
       { name: 'notes', label: 'Notes', kind: 'text', value: typeof b.notes === 'string' ? b.notes : '' },
       { name: 'confirmUnusual', label: 'The grams are right as they are', kind: 'checkbox', value: b.confirmUnusual === true ? 'true' : '' },
@@ -51,7 +52,11 @@ export function editableValues(entry: Pick<OutboxEntry, 'kind' | 'request'>): Ed
 export type EditProblem = { name: string; message: string };
 
 /** The entry's request with the changed values, or the first value that is not a number where one is needed. */
-export function applyEdits(request: OutboxRequest, kind: OutboxEntry['kind'], edits: Readonly<Record<string, string>>): { ok: true; request: OutboxRequest } | { ok: false; problem: EditProblem } {
+export function applyEdits(
+  request: OutboxRequest,
+  kind: OutboxEntry['kind'],
+  edits: Readonly<Record<string, string>>,
+): { ok: true; request: OutboxRequest } | { ok: false; problem: EditProblem } {
   const numberOf = (name: string, required: boolean): number | null | EditProblem => {
     const raw = edits[name] ?? '';
     if (raw.trim() === '') return required ? { name, message: 'Enter a number.' } : null;

@@ -31,9 +31,7 @@ export function PieceFilterForm({ filters }: { filters: PieceFilters }) {
         {(control) => <Input {...control} type="search" value={q} onChange={(event) => setQ(event.target.value)} maxLength={120} />}
       </Field>
       <Field label="Stage">
-        {(control) => (
-          <Select {...control} value={stage} onChange={(event) => setStage(event.target.value)} options={stageOptions} emptyOption="All stages" />
-        )}
+        {(control) => <Select {...control} value={stage} onChange={(event) => setStage(event.target.value)} options={stageOptions} emptyOption="All stages" />}
       </Field>
       <div className="flex gap-2">
         <Button type="submit">Show</Button>

@@ -27,7 +27,13 @@ describe('readPieceFilters', () => {
     fc.assert(
       fc.property(
         fc.constantFrom(undefined, 'planning', 'pouring', 'curing', 'ready', 'released', 'finishing', 'done' as const),
-        fc.option(fc.string({ maxLength: 40 }).map((s) => s.trim()).filter((s) => s.length > 0), { nil: undefined }),
+        fc.option(
+          fc
+            .string({ maxLength: 40 })
+            .map((s) => s.trim())
+            .filter((s) => s.length > 0),
+          { nil: undefined },
+        ),
         fc.integer({ min: 1, max: 10_000 }),
         (stage, q, page) => {
           const filters = fromHref(paths.pieces.getHref({ stage, q, page }));

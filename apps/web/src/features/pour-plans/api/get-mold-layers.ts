@@ -12,5 +12,8 @@ export interface MoldLayersRequest {
 export function useMoldLayers(request: MoldLayersRequest | null) {
   const mold = useQuery({ ...moldQueryOptions(request?.moldId ?? ''), enabled: request !== null });
   const key = { levelsMm: request?.levelsMm ?? [], dam: request?.dam ?? 'outline' };
-  return useQuery({ ...moldLayersQueryOptions(request?.moldId ?? '', key, mold.data?.analysedAt ?? null), enabled: request !== null && key.levelsMm.length >= 2 && mold.data !== undefined });
+  return useQuery({
+    ...moldLayersQueryOptions(request?.moldId ?? '', key, mold.data?.analysedAt ?? null),
+    enabled: request !== null && key.levelsMm.length >= 2 && mold.data !== undefined,
+  });
 }

@@ -52,45 +52,46 @@ export function BatchCard({ batch, cautions, unitSystem, scaleResolutionG, link 
       <QrCode value={link.href} label={`QR code: opens ${link.opens} to log cup ${batch.order}`} sizePx={96} className="run-sheet-qr absolute top-4 right-4" />
       {/* At least as tall as the code, so the amounts below never run under it. */}
       <div className="run-sheet-top flex flex-col gap-3">
-      <header className="run-sheet-beside-qr flex flex-wrap items-baseline justify-between gap-2">
-        <h3 className="text-2xl font-bold">
-          Cup {batch.order} of {batch.of}
-        </h3>
-        <p className="text-lg font-semibold">
-          {batch.pourLabel} · batch {batch.batchInPour} of {batch.batchesInPour}
+        <header className="run-sheet-beside-qr flex flex-wrap items-baseline justify-between gap-2">
+          <h3 className="text-2xl font-bold">
+            Cup {batch.order} of {batch.of}
+          </h3>
+          <p className="text-lg font-semibold">
+            {batch.pourLabel} · batch {batch.batchInPour} of {batch.batchesInPour}
+          </p>
+        </header>
+        <p className="run-sheet-beside-qr text-lg">
+          <strong>{batch.product.name}</strong> · mix ratio {mixRatioWords(batch.product.mixRatio)} ·{' '}
+          <strong>
+            pot life {formatMinutes(batch.potLifeMin)} at {formatTemperature(batch.shopTempC, unitSystem).text}
+          </strong>
+          {batch.potLifeShortenedByHeat ? ' (shortened: a cup this size heats itself)' : ''}
         </p>
-      </header>
-      <p className="run-sheet-beside-qr text-lg">
-        <strong>{batch.product.name}</strong> · mix ratio {mixRatioWords(batch.product.mixRatio)} ·{' '}
-        <strong>
-          pot life {formatMinutes(batch.potLifeMin)} at {formatTemperature(batch.shopTempC, unitSystem).text}
-        </strong>
-        {batch.potLifeShortenedByHeat ? ' (shortened: a cup this size heats itself)' : ''}
-      </p>
-      {batch.targetLevelMm !== null || batch.window || batch.forecastPeakC !== null ? (
-        <p className="run-sheet-beside-qr text-lg" data-testid="pour-timing">
-          {[
-            batch.targetLevelMm !== null ? (
-              <span key="level">
-                Fill to <strong>{formatLength(batch.targetLevelMm, unitSystem).text}</strong> above the cavity floor
-              </span>
-            ) : null,
-            batch.window ? (
-              <span key="window">
-                pour <strong>{formatHours(batch.window.opensH)}</strong> to <strong>{formatHours(batch.window.closesH)}</strong> after {batch.window.afterLabel.toLowerCase()}
-              </span>
-            ) : null,
-            batch.forecastPeakC !== null ? (
-              <span key="peak" className={batch.forecastOverLimit ? 'font-semibold text-ember-700' : undefined}>
-                estimated peak {formatTemperature(batch.forecastPeakC, unitSystem).text}
-                {batch.forecastOverLimit ? ', over the accepted peak' : ''}
-              </span>
-            ) : null,
-          ]
-            .filter((part) => part !== null)
-            .flatMap((part, i) => (i === 0 ? [part] : [' · ', part]))}
-        </p>
-      ) : null}
+        {batch.targetLevelMm !== null || batch.window || batch.forecastPeakC !== null ? (
+          <p className="run-sheet-beside-qr text-lg" data-testid="pour-timing">
+            {[
+              batch.targetLevelMm !== null ? (
+                <span key="level">
+                  Fill to <strong>{formatLength(batch.targetLevelMm, unitSystem).text}</strong> above the cavity floor
+                </span>
+              ) : null,
+              batch.window ? (
+                <span key="window">
+                  pour <strong>{formatHours(batch.window.opensH)}</strong> to <strong>{formatHours(batch.window.closesH)}</strong> after{' '}
+                  {batch.window.afterLabel.toLowerCase()}
+                </span>
+              ) : null,
+              batch.forecastPeakC !== null ? (
+                <span key="peak" className={batch.forecastOverLimit ? 'font-semibold text-ember-700' : undefined}>
+                  estimated peak {formatTemperature(batch.forecastPeakC, unitSystem).text}
+                  {batch.forecastOverLimit ? ', over the accepted peak' : ''}
+                </span>
+              ) : null,
+            ]
+              .filter((part) => part !== null)
+              .flatMap((part, i) => (i === 0 ? [part] : [' · ', part]))}
+          </p>
+        ) : null}
       </div>
       <div className={batch.pigmentG > 0 ? 'grid grid-cols-2 gap-2 sm:grid-cols-4' : 'grid grid-cols-3 gap-2'}>
         <Amount part="Part A" grams={grams(batch.partAG)} />

@@ -33,7 +33,13 @@ export function CautionList({ cautions, className, label }: { cautions: readonly
   return (
     <ul aria-label={label} className={cx('flex flex-col gap-2', className)}>
       {cautions.map((c, i) => (
-        <li key={`${c.code}-${i}`} className={cx('flex flex-wrap items-start gap-x-2 gap-y-1 rounded-lg border-l-4 border px-3 py-2 print:border-black print:bg-white print:text-black', tint[c.severity])}>
+        <li
+          key={`${c.code}-${i}`}
+          className={cx(
+            'flex flex-wrap items-start gap-x-2 gap-y-1 rounded-lg border-l-4 border px-3 py-2 print:border-black print:bg-white print:text-black',
+            tint[c.severity],
+          )}
+        >
           <SeverityMark severity={c.severity} />
           <span className="min-w-0 flex-1">{c.message}</span>
         </li>

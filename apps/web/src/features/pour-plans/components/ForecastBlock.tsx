@@ -6,7 +6,15 @@ const width = 220;
 const height = 90;
 const pad = { left: 34, bottom: 16, top: 6, right: 6 };
 
-function ForecastCurve({ layer, limitC, unitSystem }: { layer: Extract<PlanForecast, { available: true }>['layers'][number]; limitC: number; unitSystem: UnitSystem }) {
+function ForecastCurve({
+  layer,
+  limitC,
+  unitSystem,
+}: {
+  layer: Extract<PlanForecast, { available: true }>['layers'][number];
+  limitC: number;
+  unitSystem: UnitSystem;
+}) {
   const plotW = width - pad.left - pad.right;
   const plotH = height - pad.top - pad.bottom;
   const g = forecastCurveGeometry(layer.curve, limitC, plotW, plotH);
@@ -39,7 +47,15 @@ function ForecastCurve({ layer, limitC, unitSystem }: { layer: Extract<PlanForec
 }
 
 /** The exotherm forecast of the plan's layers: peaks, curves, the limit in plain words, and what it rests on. */
-export function ForecastBlock({ forecast, unitSystem, spotWords }: { forecast: PlanForecast; unitSystem: UnitSystem; spotWords?: (xMm: number, yMm: number) => string }) {
+export function ForecastBlock({
+  forecast,
+  unitSystem,
+  spotWords,
+}: {
+  forecast: PlanForecast;
+  unitSystem: UnitSystem;
+  spotWords?: (xMm: number, yMm: number) => string;
+}) {
   if (!forecast.available) {
     return <p className="text-ink-soft">No heat forecast for this plan: {forecast.reason}</p>;
   }
@@ -68,8 +84,8 @@ export function ForecastBlock({ forecast, unitSystem, spotWords }: { forecast: P
         {words.calibration} {words.defaults ?? ''} The dashed line is the accepted peak.
       </p>
       <p className="text-sm text-ink-soft">
-        The model cannot see your product: follow its SDS and TDS for layer thickness, batch size and safe handling. An exotherm past its limit can crack the piece, smoke and
-        burn.
+        The model cannot see your product: follow its SDS and TDS for layer thickness, batch size and safe handling. An exotherm past its limit can crack the
+        piece, smoke and burn.
       </p>
     </div>
   );

@@ -22,7 +22,10 @@ export function LayerChart({ layers, curve, unitSystem }: LayerChartProps) {
   if (!geometry) return null;
   const { plot } = geometry;
   const summary = layers
-    .map((l) => `layer ${l.index + 1} from ${formatLength(l.fromLevelMm, unitSystem).text} to ${formatLength(l.toLevelMm, unitSystem).text}, ${formatVolume(l.fillVolumeMl, unitSystem).text}`)
+    .map(
+      (l) =>
+        `layer ${l.index + 1} from ${formatLength(l.fromLevelMm, unitSystem).text} to ${formatLength(l.toLevelMm, unitSystem).text}, ${formatVolume(l.fillVolumeMl, unitSystem).text}`,
+    )
     .join('; ');
 
   return (
@@ -36,7 +39,13 @@ export function LayerChart({ layers, curve, unitSystem }: LayerChartProps) {
         </defs>
         <rect x={plot.left} y={plot.top} width={plot.width} height={plot.height} className="fill-white stroke-line" />
         {geometry.bands.map((band) => (
-          <polygon key={band.index} points={band.points} fill={band.index % 2 === 0 ? `url(#${hatchId})` : undefined} className={band.index % 2 === 0 ? 'stroke-resin-600' : 'fill-resin-300 stroke-resin-600'} strokeWidth="1" />
+          <polygon
+            key={band.index}
+            points={band.points}
+            fill={band.index % 2 === 0 ? `url(#${hatchId})` : undefined}
+            className={band.index % 2 === 0 ? 'stroke-resin-600' : 'fill-resin-300 stroke-resin-600'}
+            strokeWidth="1"
+          />
         ))}
         <polyline points={geometry.curvePoints} fill="none" className="stroke-walnut-900" strokeWidth="2" />
         {geometry.levelTicks.map((tick) => (

@@ -19,7 +19,11 @@ export function LivePlanPanel({ live, unitSystem, currency }: { live: LivePlanSt
           Live numbers
         </h2>
         <p role="status" className="text-sm text-ink-soft">
-          {live.updating ? 'Updating…' : plan ? `Worked out in this browser for ${plan.plan.fill.layerCount === 1 ? '1 layer' : `${plan.plan.fill.layerCount} layers`}; saving recomputes on the server.` : ''}
+          {live.updating
+            ? 'Updating…'
+            : plan
+              ? `Worked out in this browser for ${plan.plan.fill.layerCount === 1 ? '1 layer' : `${plan.plan.fill.layerCount} layers`}; saving recomputes on the server.`
+              : ''}
         </p>
       </div>
       {live.moldProblem ? (

@@ -22,7 +22,13 @@ export function PlanPieceFilter({ pieces, pieceId }: { pieces: readonly Piece[];
     >
       <Field label="Piece" className="sm:min-w-72">
         {(control) => (
-          <Select {...control} value={chosen} onChange={(event) => setChosen(event.target.value)} options={pieces.map((p) => ({ value: p.id, label: p.name }))} emptyOption="Every piece" />
+          <Select
+            {...control}
+            value={chosen}
+            onChange={(event) => setChosen(event.target.value)}
+            options={pieces.map((p) => ({ value: p.id, label: p.name }))}
+            emptyOption="Every piece"
+          />
         )}
       </Field>
       <Button type="submit">Show</Button>

@@ -1,4 +1,14 @@
-import { formatLength, formatTemperature, formatVolume, formatWeighedMass, type PlannedBatch, type PourPlan, type TimesAtTemperature, type UnitSystem, type VolumeCurve } from '@gelpoint/core';
+import {
+  formatLength,
+  formatTemperature,
+  formatVolume,
+  formatWeighedMass,
+  type PlannedBatch,
+  type PourPlan,
+  type TimesAtTemperature,
+  type UnitSystem,
+  type VolumeCurve,
+} from '@gelpoint/core';
 import type { ReactNode } from 'react';
 import { Table, Td, Th, Thead, Tr } from '../../../components/ui/Table';
 import { cautionsFor } from '../utils/caution-words';
@@ -39,7 +49,19 @@ function Block({ title, children }: { title: string; children: ReactNode }) {
   );
 }
 
-function BatchTable({ caption, batches, plan, unitSystem, currency }: { caption: string; batches: readonly PlannedBatch[]; plan: PourPlan; unitSystem: UnitSystem; currency: string }) {
+function BatchTable({
+  caption,
+  batches,
+  plan,
+  unitSystem,
+  currency,
+}: {
+  caption: string;
+  batches: readonly PlannedBatch[];
+  plan: PourPlan;
+  unitSystem: UnitSystem;
+  currency: string;
+}) {
   const grams = (g: number) => formatWeighedMass(g, unitSystem, plan.resolution.grams).text;
   const millilitres = (ml: number) => formatVolume(ml, unitSystem).text;
   return (
@@ -61,7 +83,9 @@ function BatchTable({ caption, batches, plan, unitSystem, currency }: { caption:
             <Tr key={batch.index}>
               <Td className="font-semibold">
                 {batch.index + 1}
-                {cautions.length > 0 ? <CautionList cautions={cautions} className="mt-2 min-w-64 font-normal" label={`Cautions for cup ${batch.index + 1}`} /> : null}
+                {cautions.length > 0 ? (
+                  <CautionList cautions={cautions} className="mt-2 min-w-64 font-normal" label={`Cautions for cup ${batch.index + 1}`} />
+                ) : null}
               </Td>
               <Td>
                 {grams(batch.partA.grams)}
@@ -87,8 +111,8 @@ function TimesFacts({ times, unitSystem }: { times: TimesAtTemperature; unitSyst
     <>
       {times.belowMinimum ? (
         <p className="font-semibold text-ember-700">
-          Below this product&apos;s minimum working temperature: the cure goes on only slowly, and the data sheet does not promise it finishes.
-          The times below follow the chemistry; warm the shop and the resin before pouring.
+          Below this product&apos;s minimum working temperature: the cure goes on only slowly, and the data sheet does not promise it finishes. The times below
+          follow the chemistry; warm the shop and the resin before pouring.
         </p>
       ) : null}
       <Facts
@@ -184,7 +208,14 @@ export function PlanResult({ plan, unitSystem, currency, curve }: PlanResultProp
             ]}
           />
           {plan.sealCoat.coats.map((coat) => (
-            <BatchTable key={coat.index} caption={`Seal coat ${coat.index + 1}: cups to mix`} batches={coat.batches} plan={plan} unitSystem={unitSystem} currency={currency} />
+            <BatchTable
+              key={coat.index}
+              caption={`Seal coat ${coat.index + 1}: cups to mix`}
+              batches={coat.batches}
+              plan={plan}
+              unitSystem={unitSystem}
+              currency={currency}
+            />
           ))}
         </Block>
       ) : null}
@@ -225,15 +256,21 @@ export function PlanResult({ plan, unitSystem, currency, curve }: PlanResultProp
             { term: 'Seal coat', value: money(plan.cost.sealCoat) },
             { term: 'Deep pour', value: money(plan.cost.deepPour) },
             ...(plan.cost.wood
-              ? [{ term: `Wood, ${plan.cost.wood.boardFeet.toFixed(2)} board feet at ${money(plan.cost.wood.pricePerBoardFoot)}`, value: money(plan.cost.wood.shownCost) }]
+              ? [
+                  {
+                    term: `Wood, ${plan.cost.wood.boardFeet.toFixed(2)} board feet at ${money(plan.cost.wood.pricePerBoardFoot)}`,
+                    value: money(plan.cost.wood.shownCost),
+                  },
+                ]
               : []),
             { term: 'Piece', value: money(plan.cost.piece) },
           ]}
         />
         <p className="text-sm text-ink-soft">
-          Margins included: {plan.margins.overPour.label.toLowerCase()} {plan.margins.overPour.pct} % ({volume(plan.margins.overPour.volumeMl)}), {plan.margins.cupWaste.label.toLowerCase()}{' '}
-          {'massG' in plan.margins.cupWaste.perBatch ? grams(plan.margins.cupWaste.perBatch.massG) : volume(plan.margins.cupWaste.perBatch.volumeMl)} ({grams(plan.margins.cupWaste.resinG)} over{' '}
-          {plan.margins.cupWaste.batches} cups).
+          Margins included: {plan.margins.overPour.label.toLowerCase()} {plan.margins.overPour.pct} % ({volume(plan.margins.overPour.volumeMl)}),{' '}
+          {plan.margins.cupWaste.label.toLowerCase()}{' '}
+          {'massG' in plan.margins.cupWaste.perBatch ? grams(plan.margins.cupWaste.perBatch.massG) : volume(plan.margins.cupWaste.perBatch.volumeMl)} (
+          {grams(plan.margins.cupWaste.resinG)} over {plan.margins.cupWaste.batches} cups).
         </p>
       </Block>
 

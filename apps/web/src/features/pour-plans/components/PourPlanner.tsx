@@ -21,7 +21,16 @@ import { usePlannerDraft } from '../hooks/use-planner-draft';
 import { formDefaultsOf, valuesKey } from '../utils/form-defaults';
 import type { DraftPlace } from '../utils/planner-draft';
 import { optionalNumber, requiredNumber } from '../../../lib/form-input';
-import { absorptionOptions, goneMoldWords, moldChoices, moldOptions, pigmentOptions, productOptions, shapeOptions, type ChosenMold } from '../utils/planner-options';
+import {
+  absorptionOptions,
+  goneMoldWords,
+  moldChoices,
+  moldOptions,
+  pigmentOptions,
+  productOptions,
+  shapeOptions,
+  type ChosenMold,
+} from '../utils/planner-options';
 import { baseQuantity, shownPlannerValues, shownUnitNames, type PlannerUnits } from '../utils/planner-units';
 import { fieldOfIssuePath, plannerResolver } from '../utils/planner-validation';
 import type { PlannerValues, SavedPlanInput } from '../utils/planner-values';
@@ -67,7 +76,19 @@ function cupWasteUnits(unitSystem: UnitSystem) {
 
 /** The maker's pour planner: inputs on one side, the plan they make on the other, recomputed as they type. */
 export function PourPlanner({
-  pieceId, initialValues, resinSystems, pigments, unitSystem, currency, scaleResolutionG, offRatioTolerancePct, submitLabel, busy, save, draftPlace, basedOn,
+  pieceId,
+  initialValues,
+  resinSystems,
+  pigments,
+  unitSystem,
+  currency,
+  scaleResolutionG,
+  offRatioTolerancePct,
+  submitLabel,
+  busy,
+  save,
+  draftPlace,
+  basedOn,
 }: PourPlannerProps) {
   const [formError, setFormError] = useState<string | null>(null);
   // The form is filled once, in the units of the shop as it was then; what it started from lets untouched values go back unchanged.
@@ -85,7 +106,11 @@ export function PourPlanner({
   const molds = usePieceMolds(pieceId);
   const chosenMoldId = values.cavity?.source === 'mold' && values.cavity.moldId ? values.cavity.moldId : null;
   const chosenMold = useMold(chosenMoldId);
-  const chosen: ChosenMold = chosenMold.data ? { state: 'found', mold: chosenMold.data } : hasStatus(chosenMold.error, 404) ? { state: 'gone' } : { state: 'loading' };
+  const chosen: ChosenMold = chosenMold.data
+    ? { state: 'found', mold: chosenMold.data }
+    : hasStatus(chosenMold.error, 404)
+      ? { state: 'gone' }
+      : { state: 'loading' };
   const moldChoicesShown = molds.data ? moldChoices(molds.data.items, values.cavity?.moldId ?? '', chosen, pieceId) : [];
   const readyMolds = molds.data ? moldOptions(molds.data.items) : [];
   const report = chosenMold.data?.report ?? null;
@@ -200,7 +225,11 @@ export function PourPlanner({
                     <Field label={`Deepest point (${unit.length})`} hint="Leave empty for a flat floor." error={errors.cavity?.shape?.maxDepthMm?.message}>
                       {(control) => <Input {...control} inputMode="decimal" {...optional('cavity.shape.maxDepthMm')} />}
                     </Field>
-                    <Field label={`Outline perimeter (${unit.length})`} hint="Leave empty to estimate the walls from a circle of the same area." error={errors.cavity?.shape?.perimeterMm?.message}>
+                    <Field
+                      label={`Outline perimeter (${unit.length})`}
+                      hint="Leave empty to estimate the walls from a circle of the same area."
+                      error={errors.cavity?.shape?.perimeterMm?.message}
+                    >
                       {(control) => <Input {...control} inputMode="decimal" {...optional('cavity.shape.perimeterMm')} />}
                     </Field>
                   </>
@@ -214,7 +243,9 @@ export function PourPlanner({
           ) : (
             <>
               {molds.isError ? <p className="text-ember-700">The piece&apos;s moulds cannot be listed right now: {errorNotice(molds.error).message}</p> : null}
-              {molds.data && readyMolds.length === 0 ? <p className="text-ink-soft">This piece has no mould with a finished cavity report yet. Plan with a quick shape meanwhile.</p> : null}
+              {molds.data && readyMolds.length === 0 ? (
+                <p className="text-ink-soft">This piece has no mould with a finished cavity report yet. Plan with a quick shape meanwhile.</p>
+              ) : null}
               {/* The picker waits for the piece's moulds, so a plan's own mould is selected once there is an option for it. */}
               {molds.data ? (
                 <Field label="Mould" error={errors.cavity?.moldId?.message ?? (chosen.state === 'gone' ? goneMoldWords : undefined)} required>
@@ -223,7 +254,12 @@ export function PourPlanner({
               ) : molds.isPending ? (
                 <p className="text-ink-soft">Loading the piece&apos;s moulds…</p>
               ) : null}
-              <ChoiceGroup legend="How the pour is contained" choices={damChoices} error={errors.cavity?.dam?.message} inputProps={form.register('cavity.dam')} />
+              <ChoiceGroup
+                legend="How the pour is contained"
+                choices={damChoices}
+                error={errors.cavity?.dam?.message}
+                inputProps={form.register('cavity.dam')}
+              />
             </>
           )}
           <Field
@@ -251,12 +287,19 @@ export function PourPlanner({
         <PlannerSection legend="Deep pour" hint="The product decides how thick each layer and how heavy each cup may be.">
           <Field label="Deep-pour product" error={errors.deepPour?.resinSystemId?.message} required>
             {(control) => (
-              <Select {...control} options={productOptions(resinSystems, values.deepPour?.resinSystemId ?? '', unitSystem)} emptyOption="Choose from the shelf" {...form.register('deepPour.resinSystemId')} />
+              <Select
+                {...control}
+                options={productOptions(resinSystems, values.deepPour?.resinSystemId ?? '', unitSystem)}
+                emptyOption="Choose from the shelf"
+                {...form.register('deepPour.resinSystemId')}
+              />
             )}
           </Field>
           <FieldGrid>
             <Field label="Pigment" error={errors.deepPour?.pigmentId?.message}>
-              {(control) => <Select {...control} options={pigmentOptions(pigments, values.deepPour?.pigmentId ?? '')} emptyOption="No pigment" {...pigmentField} />}
+              {(control) => (
+                <Select {...control} options={pigmentOptions(pigments, values.deepPour?.pigmentId ?? '')} emptyOption="No pigment" {...pigmentField} />
+              )}
             </Field>
             {chosenPigment ? (
               <Field
@@ -272,27 +315,51 @@ export function PourPlanner({
         </PlannerSection>
 
         <PlannerSection legend="Seal coat">
-          <Switch label="Seal the wood first" hint="A thin coat that closes the pores, so the deep pour does not bubble out of the wood." inputProps={form.register('sealCoat.enabled')} />
+          <Switch
+            label="Seal the wood first"
+            hint="A thin coat that closes the pores, so the deep pour does not bubble out of the wood."
+            inputProps={form.register('sealCoat.enabled')}
+          />
           {sealOn ? (
             <>
               <Field label="Seal-coat product" error={errors.sealCoat?.resinSystemId?.message} required>
                 {(control) => (
-                  <Select {...control} options={productOptions(resinSystems, values.sealCoat?.resinSystemId ?? '', unitSystem)} emptyOption="Choose from the shelf" {...form.register('sealCoat.resinSystemId')} />
+                  <Select
+                    {...control}
+                    options={productOptions(resinSystems, values.sealCoat?.resinSystemId ?? '', unitSystem)}
+                    emptyOption="Choose from the shelf"
+                    {...form.register('sealCoat.resinSystemId')}
+                  />
                 )}
               </Field>
               <FieldGrid>
-                <Field label="Film thickness (mm)" hint="A seal coat is a few tenths of a millimetre." error={errors.sealCoat?.filmThicknessMm?.message} required>
+                <Field
+                  label="Film thickness (mm)"
+                  hint="A seal coat is a few tenths of a millimetre."
+                  error={errors.sealCoat?.filmThicknessMm?.message}
+                  required
+                >
                   {(control) => <Input {...control} inputMode="decimal" {...number('sealCoat.filmThicknessMm')} />}
                 </Field>
                 <Field label="Coats" error={errors.sealCoat?.coats?.message} required>
                   {(control) => <Input {...control} inputMode="numeric" {...number('sealCoat.coats')} />}
                 </Field>
               </FieldGrid>
-              <Field label="How much the wood soaks up" hint="Common-practice starting points; test scraps tell the truth for your wood." error={values.sealCoat?.absorption === 'custom' ? undefined : errors.sealCoat?.absorptionFactor?.message} required>
+              <Field
+                label="How much the wood soaks up"
+                hint="Common-practice starting points; test scraps tell the truth for your wood."
+                error={values.sealCoat?.absorption === 'custom' ? undefined : errors.sealCoat?.absorptionFactor?.message}
+                required
+              >
                 {(control) => <Select {...control} options={absorptionOptions} emptyOption="Choose the wood" {...form.register('sealCoat.absorption')} />}
               </Field>
               {values.sealCoat?.absorption === 'custom' ? (
-                <Field label="Absorption factor (× the film)" hint="1 means the wood takes up nothing; 2 means it drinks as much again." error={errors.sealCoat?.absorptionFactor?.message} required>
+                <Field
+                  label="Absorption factor (× the film)"
+                  hint="1 means the wood takes up nothing; 2 means it drinks as much again."
+                  error={errors.sealCoat?.absorptionFactor?.message}
+                  required
+                >
                   {(control) => <Input {...control} inputMode="decimal" {...number('sealCoat.absorptionFactor')} />}
                 </Field>
               ) : null}
@@ -315,10 +382,19 @@ export function PourPlanner({
         </PlannerSection>
 
         <PlannerSection legend="Shop">
-          <Field label={`Shop temperature (${unit.temperature})`} hint="The times of the data sheet are stretched or shortened for it." error={errors.shopTempC?.message} required>
+          <Field
+            label={`Shop temperature (${unit.temperature})`}
+            hint="The times of the data sheet are stretched or shortened for it."
+            error={errors.shopTempC?.message}
+            required
+          >
             {(control) => <Input {...control} inputMode="decimal" {...number('shopTempC')} />}
           </Field>
-          <Switch label="Check the dew point" hint="With the humidity and the wood's surface temperature, the plan warns about condensation and amine blush." inputProps={form.register('shopAir.enabled')} />
+          <Switch
+            label="Check the dew point"
+            hint="With the humidity and the wood's surface temperature, the plan warns about condensation and amine blush."
+            inputProps={form.register('shopAir.enabled')}
+          />
           {airOn ? (
             <FieldGrid>
               <Field label="Relative humidity (%)" error={errors.shopAir?.rhPct?.message} required>
@@ -358,7 +434,12 @@ export function PourPlanner({
         </div>
       </form>
       {/* On wide screens the numbers stay in view beside the form and scroll on their own. */}
-      <div tabIndex={0} role="region" aria-label="Live numbers of this plan" className="xl:sticky xl:top-4 xl:max-h-[calc(100dvh-2rem)] xl:overflow-y-auto xl:pr-1">
+      <div
+        tabIndex={0}
+        role="region"
+        aria-label="Live numbers of this plan"
+        className="xl:sticky xl:top-4 xl:max-h-[calc(100dvh-2rem)] xl:overflow-y-auto xl:pr-1"
+      >
         <LivePlanPanel live={live} unitSystem={unitSystem} currency={currency} />
       </div>
       <ConfirmDialog
@@ -370,8 +451,8 @@ export function PourPlanner({
         onConfirm={() => guard.blocker.proceed?.()}
         onCancel={() => guard.blocker.reset?.()}
       >
-        This plan has changes that are not saved. This browser keeps them as a draft and shows them again when you come back to the
-        planner; nobody else sees them until you save.
+        This plan has changes that are not saved. This browser keeps them as a draft and shows them again when you come back to the planner; nobody else sees
+        them until you save.
       </ConfirmDialog>
     </div>
   );

@@ -29,7 +29,10 @@ export function PourPlansTable({ plans, pieceNames, unitSystem }: PourPlansTable
         {plans.map((plan) => (
           <Tr key={plan.id}>
             <Td>
-              <Link to={paths.pourPlan.getHref(plan.id)} className="font-semibold text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4">
+              <Link
+                to={paths.pourPlan.getHref(plan.id)}
+                className="font-semibold text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4"
+              >
                 {plan.name}
               </Link>
               {plan.createdBy ? <span className="block text-sm text-ink-soft">by {plan.createdBy.name}</span> : null}

@@ -28,7 +28,16 @@ export function RunSheet({ planName, pieceName, plan, snapshot, unitSystem, curr
   const batches = runSheetBatches(plan, snapshot);
   const scale = plan.resolution.grams;
   const [first, ...rest] = batches;
-  const card = (batch: (typeof batches)[number]) => <BatchCard key={batch.order} batch={batch} cautions={cautionsFor(plan.cautions, 'batch', batch.index)} unitSystem={unitSystem} scaleResolutionG={scale} link={cupLink} />;
+  const card = (batch: (typeof batches)[number]) => (
+    <BatchCard
+      key={batch.order}
+      batch={batch}
+      cautions={cautionsFor(plan.cautions, 'batch', batch.index)}
+      unitSystem={unitSystem}
+      scaleResolutionG={scale}
+      link={cupLink}
+    />
+  );
   return (
     <div className="run-sheet flex flex-col gap-6">
       <header className="flex flex-col gap-1">
@@ -41,7 +50,10 @@ export function RunSheet({ planName, pieceName, plan, snapshot, unitSystem, curr
         <p>Resin and pigment for the whole pour cost {formatMoney(plan.cost.sealCoat + plan.cost.deepPour, currency)}.</p>
       </header>
       <SafetyNote headingLevel={2} />
-      <CautionList cautions={[...cautionsFor(plan.cautions, 'layer'), ...cautionsFor(plan.cautions, 'product'), ...cautionsFor(plan.cautions, 'pigment')]} label="Cautions for this pour" />
+      <CautionList
+        cautions={[...cautionsFor(plan.cautions, 'layer'), ...cautionsFor(plan.cautions, 'product'), ...cautionsFor(plan.cautions, 'pigment')]}
+        label="Cautions for this pour"
+      />
       <section aria-labelledby="run-sheet-cups" className="flex flex-col gap-4">
         {/* The heading travels with the first cup, so a page never ends on it. */}
         <div className="run-sheet-keep flex flex-col gap-4">

@@ -66,14 +66,23 @@ export function useLivePlan({ values, pieceId, units, resinSystems, pigments, sc
       curve: curveFromLayerVolumes(layers.data?.layers ?? []),
       wettedAreaMm2: fill.data.wettedAreaMm2,
       maxDepthMm: fill.data.maxDepthMm,
-      ...(depthMap ? { depthMap: { originMm: depthMap.originMm, cellMm: depthMap.cellMm, nx: depthMap.nx, ny: depthMap.ny, depthsMm: depthMap.depthsMm } } : {}),
+      ...(depthMap
+        ? { depthMap: { originMm: depthMap.originMm, cellMm: depthMap.cellMm, nx: depthMap.nx, ny: depthMap.ny, depthsMm: depthMap.depthsMm } }
+        : {}),
     };
   }, [fill.data, layers.data, levelMm, levelsMm, moldRequest?.dam]);
 
   const result = useMemo(
     () =>
       check.ok
-        ? livePourPlan(check.input, { resinSystems, pigments, scaleResolutionG, offRatioTolerancePct, moldFacts, ...(rimMm === undefined ? {} : { moldRimMm: rimMm }) })
+        ? livePourPlan(check.input, {
+            resinSystems,
+            pigments,
+            scaleResolutionG,
+            offRatioTolerancePct,
+            moldFacts,
+            ...(rimMm === undefined ? {} : { moldRimMm: rimMm }),
+          })
         : null,
     [check, resinSystems, pigments, scaleResolutionG, offRatioTolerancePct, moldFacts, rimMm],
   );

@@ -52,7 +52,8 @@ export function forecastWords(f: Available, unitSystem: UnitSystem, spotWords?: 
     f.limitedBy === 'forecast'
       ? `At ${temp(f.shopTempC)} the forecast keeps a single layer under ${temp(f.limitC)} only up to ${length(f.maxLayerMm)}, thinner than the data sheet's ${length(f.calibration.maxLayerMm)}; the layers follow the forecast.`
       : `At ${temp(f.shopTempC)} the data sheet's ${length(f.calibration.maxLayerMm)} is the tighter limit; the forecast never makes a layer thicker than that.`;
-  const defaults = f.defaultsUsed.length > 0 ? `Defaults used for what the shelf leaves empty: ${f.defaultsUsed.map((d) => settingWords[d]).join(', ')}.` : null;
+  const defaults =
+    f.defaultsUsed.length > 0 ? `Defaults used for what the shelf leaves empty: ${f.defaultsUsed.map((d) => settingWords[d]).join(', ')}.` : null;
   return { layers, warnings, basis, calibration: `An estimate. ${f.calibratedTo}`, defaults };
 }
 
@@ -67,7 +68,12 @@ export interface CurveGeometry {
 }
 
 /** Temperature against time in a box of width × height (y grows downwards), scaled to hold the curve and the limit. */
-export function forecastCurveGeometry(curve: readonly { timeMin: number; tempC: number }[], limitC: number, width: number, height: number): CurveGeometry | null {
+export function forecastCurveGeometry(
+  curve: readonly { timeMin: number; tempC: number }[],
+  limitC: number,
+  width: number,
+  height: number,
+): CurveGeometry | null {
   if (curve.length < 2) return null;
   const maxTimeMin = curve.at(-1)!.timeMin;
   if (!(maxTimeMin > 0)) return null;

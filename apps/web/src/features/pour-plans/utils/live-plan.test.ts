@@ -101,7 +101,10 @@ describe('livePourPlan refuses what it cannot plan', () => {
   });
 
   it('passes on core’s refusal of a fill above the shape', () => {
-    const checked = checkPlanner(trayValues((v) => (v.fillLevelMm = 31)), testPieceId);
+    const checked = checkPlanner(
+      trayValues((v) => (v.fillLevelMm = 31)),
+      testPieceId,
+    );
     if (!checked.ok) throw new Error('expected a complete form');
     const result = livePourPlan(checked.input, shelf);
     expect(!result.ok && result.error.code).toBe('fill_level_above_curve');
@@ -130,7 +133,15 @@ describe('livePourPlan refuses what it cannot plan', () => {
     );
     if (!checked.ok) throw new Error(JSON.stringify(checked.fieldErrors));
     // A straight-walled 300 × 200 pocket, its curve sampled from the floor up as the API answers it (prism, CRC).
-    const moldFacts = { curve: [{ levelMm: 0, volumeMm3: 0 }, { levelMm: 15, volumeMm3: 900_000 }, { levelMm: 30, volumeMm3: 1_800_000 }], wettedAreaMm2: 90_000, maxDepthMm: 30 };
+    const moldFacts = {
+      curve: [
+        { levelMm: 0, volumeMm3: 0 },
+        { levelMm: 15, volumeMm3: 900_000 },
+        { levelMm: 30, volumeMm3: 1_800_000 },
+      ],
+      wettedAreaMm2: 90_000,
+      maxDepthMm: 30,
+    };
     const result = livePourPlan(checked.input, { ...shelf, moldFacts, moldRimMm: 30 });
     expect(result.ok).toBe(true);
     if (!result.ok) return;

@@ -51,7 +51,14 @@ export function coreResinSystemOf(view: ResinSystemView): ResinSystem {
 }
 
 export function corePigmentOf(view: PigmentView): Pigment {
-  return { name: view.name, kind: view.kind, densityGPerMl: view.densityGPerMl, recommendedPct: view.recommendedPct, maxPct: view.maxPct, price: { pricePerPack: view.pricePerPack, packSizeG: view.packSizeG } };
+  return {
+    name: view.name,
+    kind: view.kind,
+    densityGPerMl: view.densityGPerMl,
+    recommendedPct: view.recommendedPct,
+    maxPct: view.maxPct,
+    price: { pricePerPack: view.pricePerPack, packSizeG: view.packSizeG },
+  };
 }
 
 /**
@@ -115,9 +122,13 @@ export function livePourPlan(input: SavedPlanInput, sources: LivePlanSources): R
     cavity = shaped.value;
   } else {
     if (sources.moldRimMm !== undefined && input.fillLevelMm > sources.moldRimMm + 1e-9) {
-      return fail('fill_above_report', `The fill level is above the top of the mould, ${Math.round(sources.moldRimMm * 1000) / 1000} mm above its cavity floor; choose a level inside the mould.`);
+      return fail(
+        'fill_above_report',
+        `The fill level is above the top of the mould, ${Math.round(sources.moldRimMm * 1000) / 1000} mm above its cavity floor; choose a level inside the mould.`,
+      );
     }
-    if (!(input.fillLevelMm > 0)) return fail('fill_below_floor', 'The fill level is the height of the resin surface above the cavity floor; give one above zero.');
+    if (!(input.fillLevelMm > 0))
+      return fail('fill_below_floor', 'The fill level is the height of the resin surface above the cavity floor; give one above zero.');
     if (!sources.moldFacts) return fail('mold_fill_pending', 'Waiting for the mould’s cavity report at this level.');
     const fromMold = planCavityFromMold(sources.moldFacts, input.fillLevelMm);
     if (!fromMold.ok) return fromMold;
@@ -129,7 +140,14 @@ export function livePourPlan(input: SavedPlanInput, sources: LivePlanSources): R
     fillLevelMm,
     deepPour: { product: coreResinSystemOf(deep), ...(pigment ? { pigment: { pigment: corePigmentOf(pigment), pct: input.deepPour.pigmentPct } } : {}) },
     ...(seal && input.sealCoat
-      ? { sealCoat: { product: coreResinSystemOf(seal), filmThicknessMm: input.sealCoat.filmThicknessMm, coats: input.sealCoat.coats, absorptionFactor: input.sealCoat.absorptionFactor } }
+      ? {
+          sealCoat: {
+            product: coreResinSystemOf(seal),
+            filmThicknessMm: input.sealCoat.filmThicknessMm,
+            coats: input.sealCoat.coats,
+            absorptionFactor: input.sealCoat.absorptionFactor,
+          },
+        }
       : {}),
     overPourPct: input.overPourPct,
     cupWaste: input.cupWaste,

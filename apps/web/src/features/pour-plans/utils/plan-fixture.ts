@@ -20,10 +20,32 @@ export function savedTrayPlan(): Pick<PourPlanView, 'inputs' | 'productSnapshot'
   const live = livePourPlan(checked.input, { resinSystems: [benchDeep, benchSeal], pigments: [benchTeal], scaleResolutionG: 0.1 });
   if (!live.ok) throw new Error(live.error.message);
   const product = (view: typeof benchDeep) => {
-    const { effectiveActivationEnergyKJPerMol: _e, exothermSettings: _x, reactionHeatJPerG: _h, thinFilmGelMin: _g, heatCapacityJPerGK: _c, conductivityWPerMK: _k2, acceptedPeakC: _p, archived: _a, updatedAt: _u, maker: _m, readyToMachineH: _r, activationEnergyKJPerMol: _k, ...core } = view;
+    const {
+      effectiveActivationEnergyKJPerMol: _e,
+      exothermSettings: _x,
+      reactionHeatJPerG: _h,
+      thinFilmGelMin: _g,
+      heatCapacityJPerGK: _c,
+      conductivityWPerMK: _k2,
+      acceptedPeakC: _p,
+      archived: _a,
+      updatedAt: _u,
+      maker: _m,
+      readyToMachineH: _r,
+      activationEnergyKJPerMol: _k,
+      ...core
+    } = view;
     return core;
   };
   const { archived: _a, updatedAt: _u, pricePerPack, packSizeG, ...pigment } = benchTeal;
-  const snapshot = { deepPour: product(benchDeep), pigment: { ...pigment, price: { pricePerPack, packSizeG } }, sealCoat: product(benchSeal), scaleResolutionG: 0.1 };
-  return JSON.parse(JSON.stringify({ inputs: checked.input, productSnapshot: snapshot, result: live.value.plan })) as Pick<PourPlanView, 'inputs' | 'productSnapshot' | 'result'>;
+  const snapshot = {
+    deepPour: product(benchDeep),
+    pigment: { ...pigment, price: { pricePerPack, packSizeG } },
+    sealCoat: product(benchSeal),
+    scaleResolutionG: 0.1,
+  };
+  return JSON.parse(JSON.stringify({ inputs: checked.input, productSnapshot: snapshot, result: live.value.plan })) as Pick<
+    PourPlanView,
+    'inputs' | 'productSnapshot' | 'result'
+  >;
 }

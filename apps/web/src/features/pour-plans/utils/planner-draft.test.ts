@@ -54,7 +54,17 @@ describe('planner drafts', () => {
   });
 
   it('goes on when storage refuses', () => {
-    const refusing = { getItem: () => { throw new Error('denied'); }, setItem: () => { throw new Error('full'); }, removeItem: () => { throw new Error('denied'); } };
+    const refusing = {
+      getItem: () => {
+        throw new Error('denied');
+      },
+      setItem: () => {
+        throw new Error('full');
+      },
+      removeItem: () => {
+        throw new Error('denied');
+      },
+    };
     expect(() => writeDraft(refusing, place, draftOf())).not.toThrow();
     expect(readDraft(refusing, place, { unitSystem: 'metric', basedOn: null })).toBeNull();
     expect(() => clearDraft(refusing, place)).not.toThrow();

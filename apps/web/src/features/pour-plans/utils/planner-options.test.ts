@@ -28,8 +28,22 @@ describe('planner options', () => {
 describe('moldChoices', () => {
   const pieceId = 'piece-1';
   const summary = (id: string, name: string, status: 'ready' | 'queued' = 'ready') => ({
-    id, name, fileName: `${name}.stl`, format: 'stl' as const, units: 'mm' as const, fileUnits: null, upAxis: 'z' as const, sizeBytes: 1, sha256: 'x', pieceId, status, progress: 1, error: null,
-    createdAt: '2026-11-01T10:00:00.000Z', analysedAt: null, fillVolumeToTopMm3: null,
+    id,
+    name,
+    fileName: `${name}.stl`,
+    format: 'stl' as const,
+    units: 'mm' as const,
+    fileUnits: null,
+    upAxis: 'z' as const,
+    sizeBytes: 1,
+    sha256: 'x',
+    pieceId,
+    status,
+    progress: 1,
+    error: null,
+    createdAt: '2026-11-01T10:00:00.000Z',
+    analysedAt: null,
+    fillVolumeToTopMm3: null,
   });
 
   it('offers the piece’s measured moulds, and keeps the plan’s own in view when it is among them', () => {
@@ -39,7 +53,12 @@ describe('moldChoices', () => {
 
   it('shows the plan’s mould that the piece no longer lists, or says it is gone', () => {
     const list = [summary('m-1', 'Left pocket')];
-    const moved = moldChoices(list, 'm-9', { state: 'found', mold: { id: 'm-9', name: 'Bowl blank', fileName: 'b.stl', status: 'queued', pieceId: 'other' } }, pieceId);
+    const moved = moldChoices(
+      list,
+      'm-9',
+      { state: 'found', mold: { id: 'm-9', name: 'Bowl blank', fileName: 'b.stl', status: 'queued', pieceId: 'other' } },
+      pieceId,
+    );
     expect(moved.at(-1)).toEqual({ value: 'm-9', label: 'Bowl blank (being measured, of another piece)' });
     expect(moldChoices(list, 'm-9', { state: 'gone' }, pieceId).at(-1)).toEqual({ value: 'm-9', label: 'No longer in the shop – choose another' });
     expect(moldChoices(list, '', { state: 'gone' }, pieceId)).toHaveLength(1);

@@ -45,7 +45,10 @@ const absorptionWords: Record<AbsorptionPreset, string> = {
 };
 
 export const absorptionOptions: readonly PickerOption[] = [
-  ...(Object.keys(absorptionPresets) as AbsorptionPreset[]).map((preset) => ({ value: preset, label: `${absorptionWords[preset]} (× ${absorptionPresets[preset].toFixed(2)})` })),
+  ...(Object.keys(absorptionPresets) as AbsorptionPreset[]).map((preset) => ({
+    value: preset,
+    label: `${absorptionWords[preset]} (× ${absorptionPresets[preset].toFixed(2)})`,
+  })),
   { value: 'custom', label: 'Our own factor, from test pieces' },
 ];
 

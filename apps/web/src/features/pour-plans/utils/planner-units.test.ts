@@ -91,7 +91,10 @@ describe('shownPlannerValues', () => {
   });
 
   it('keeps the seal coat’s film in mm, for lack of a thousandth-of-an-inch unit in core', () => {
-    const shown = shownPlannerValues(savedTray((v) => (v.sealCoat = { ...v.sealCoat, enabled: true, resinSystemId: benchSeal.id, filmThicknessMm: 0.2 })), 'us');
+    const shown = shownPlannerValues(
+      savedTray((v) => (v.sealCoat = { ...v.sealCoat, enabled: true, resinSystemId: benchSeal.id, filmThicknessMm: 0.2 })),
+      'us',
+    );
     expect(shown.sealCoat.filmThicknessMm).toBe(0.2);
     expect(quantityOfField('sealCoat.filmThicknessMm', shown)).toBeNull();
   });
@@ -189,7 +192,11 @@ describe('checkPlanner in a US shop', () => {
   });
 
   it('states the cup-waste range in ounces', () => {
-    const checked = checkPlanner(typedTray((v) => (v.cupWaste = { unit: 'g', amount: Number.NaN })), testPieceId, { unitSystem: 'us' });
+    const checked = checkPlanner(
+      typedTray((v) => (v.cupWaste = { unit: 'g', amount: Number.NaN })),
+      testPieceId,
+      { unitSystem: 'us' },
+    );
     // 500 g / 28.349523125 g/oz = 17.637… oz (NIST SP 811), shown inwards to hundredths.
     expect(!checked.ok && checked.fieldErrors['cupWaste.amount']).toBe(`cup waste must be a number from 0 to ${Math.floor((500 / gPerOz) * 100) / 100} oz`);
   });

@@ -47,7 +47,17 @@ export function newPlannerValues(name: string): PlannerValues {
     name,
     cavity: {
       source: 'shape',
-      shape: { kind: 'rectangle', lengthMm: empty, widthMm: empty, depthMm: empty, diameterMm: empty, areaMm2: empty, averageDepthMm: empty, maxDepthMm: null, perimeterMm: null },
+      shape: {
+        kind: 'rectangle',
+        lengthMm: empty,
+        widthMm: empty,
+        depthMm: empty,
+        diameterMm: empty,
+        areaMm2: empty,
+        averageDepthMm: empty,
+        maxDepthMm: null,
+        perimeterMm: null,
+      },
       moldId: '',
       dam: 'outline',
     },
@@ -122,7 +132,10 @@ export function pourPlanInputOf(values: PlannerValues, pieceId: string): PourPla
   return {
     pieceId,
     name: values.name,
-    cavity: values.cavity.source === 'shape' ? { source: 'shape', shape: shapeOf(values.cavity.shape) } : { source: 'mold', moldId: values.cavity.moldId, dam: values.cavity.dam },
+    cavity:
+      values.cavity.source === 'shape'
+        ? { source: 'shape', shape: shapeOf(values.cavity.shape) }
+        : { source: 'mold', moldId: values.cavity.moldId, dam: values.cavity.dam },
     fillLevelMm: values.fillLevelMm,
     deepPour: {
       resinSystemId: values.deepPour.resinSystemId,

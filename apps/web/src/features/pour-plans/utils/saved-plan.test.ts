@@ -29,7 +29,12 @@ describe('readSavedPlan', () => {
 
   it('never hands the planner a mould level still in the mould’s own frame as a height above the floor', () => {
     const saved = savedTrayPlan();
-    const inputs = { ...saved.inputs, cavity: { source: 'mold', moldId: '5f3c1c2e-0000-4000-8000-000000000003', dam: 'outline' }, fillLevelMm: 40, levelFrom: 'mould' };
+    const inputs = {
+      ...saved.inputs,
+      cavity: { source: 'mold', moldId: '5f3c1c2e-0000-4000-8000-000000000003', dam: 'outline' },
+      fillLevelMm: 40,
+      levelFrom: 'mould',
+    };
     const read = readSavedPlan({ ...saved, inputs });
     expect(read.ok && read.value.input).toBeNull();
     expect(read.ok && read.value.levelInMouldFrame).toBe(true);

@@ -45,7 +45,8 @@ export interface SavedPlan {
   levelInMouldFrame: boolean;
 }
 
-export const unreadableInputsMessage = 'The inputs stored with this plan no longer pass the current checks, so it cannot be opened in the planner. Plan the pour again from its piece.';
+export const unreadableInputsMessage =
+  'The inputs stored with this plan no longer pass the current checks, so it cannot be opened in the planner. Plan the pour again from its piece.';
 
 export const mouldFrameInputsMessage =
   'This plan was saved with its fill level in the mould file’s own frame, and its mould cannot say where its cavity floor is right now (it is being measured again, or it is gone). Open the plan again once the mould’s report is ready, or plan the pour again from its piece.';
@@ -53,9 +54,14 @@ export const mouldFrameInputsMessage =
 /** Reads a saved plan's stored result and snapshot (and its inputs when they still pass), or says what it cannot read. */
 export function readSavedPlan(view: { result: unknown; productSnapshot: unknown; inputs: unknown }): Result<SavedPlan> {
   const plan = SavedPourPlan.safeParse(view.result);
-  if (!plan.success) return fail('saved_result_unreadable', 'The stored result of this plan is not in a form this page can show. Save the plan again to recompute it.');
+  if (!plan.success)
+    return fail('saved_result_unreadable', 'The stored result of this plan is not in a form this page can show. Save the plan again to recompute it.');
   const snapshot = PlanSnapshot.safeParse(view.productSnapshot);
-  if (!snapshot.success) return fail('saved_snapshot_unreadable', 'The shelf values stored with this plan are not in a form this page can show. Save the plan again to take a new snapshot.');
+  if (!snapshot.success)
+    return fail(
+      'saved_snapshot_unreadable',
+      'The shelf values stored with this plan are not in a form this page can show. Save the plan again to take a new snapshot.',
+    );
   const levelInMouldFrame = typeof view.inputs === 'object' && view.inputs !== null && (view.inputs as { levelFrom?: unknown }).levelFrom === 'mould';
   const input = PourPlanInput.safeParse(view.inputs);
   return ok({ plan: plan.data, snapshot: snapshot.data, input: input.success && !levelInMouldFrame ? input.data : null, levelInMouldFrame });

@@ -25,7 +25,12 @@ export function cureCheckRequest(pourId: string, input: CureCheckInput): FormReq
   if (input.checkedAt) fields.checkedAt = input.checkedAt;
   if (input.hardnessShoreD !== null) fields.hardnessShoreD = String(input.hardnessShoreD);
   if (input.note) fields.note = input.note;
-  return { type: 'form', path: `/pours/${encodeURIComponent(pourId)}/checks`, fields, photo: input.photo ? { blob: input.photo, name: input.photo.name ?? 'check.jpg' } : null };
+  return {
+    type: 'form',
+    path: `/pours/${encodeURIComponent(pourId)}/checks`,
+    fields,
+    photo: input.photo ? { blob: input.photo, name: input.photo.name ?? 'check.jpg' } : null,
+  };
 }
 
 export function cureCheckBody(input: CureCheckInput): FormData {

@@ -24,7 +24,12 @@ export function useAddReading(pourId: string) {
     mutationFn: async ({ reading, confirmUnusual }: { reading: ReadingInput; confirmUnusual: boolean }): Promise<ReadingAnswer> => {
       const pieceName = queryClient.getQueryData<PourView>(pourKeys.detail(pourId))?.piece.name;
       const label = `Reading of ${reading.tempC} °C${pieceName ? `, ${pieceName}` : ''}`;
-      const done = await outbox.submit({ kind: 'reading', pourId, label, request: { type: 'json', path: readingsPath(pourId), body: { readings: [reading], confirmUnusual } } });
+      const done = await outbox.submit({
+        kind: 'reading',
+        pourId,
+        label,
+        request: { type: 'json', path: readingsPath(pourId), body: { readings: [reading], confirmUnusual } },
+      });
       if (done.queued) return { queued: true };
       const parsed = ReadingsAdded.safeParse(done.answer);
       if (!parsed.success) throw unexpectedResponse(200);

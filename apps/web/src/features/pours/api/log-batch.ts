@@ -27,7 +27,12 @@ export function useLogBatch(pourId: string, cup: { order: number; pourLabel: str
     networkMode: 'always',
     mutationFn: async (batch: LogBatchRequest): Promise<BatchLogAnswer> => {
       const pieceName = queryClient.getQueryData<PourView>(pourKeys.detail(pourId))?.piece.name;
-      const done = await outbox.submit({ kind: 'batch', pourId, label: cupLabel(cup, pieceName), request: { type: 'json', path: batchPath(pourId), body: batch } });
+      const done = await outbox.submit({
+        kind: 'batch',
+        pourId,
+        label: cupLabel(cup, pieceName),
+        request: { type: 'json', path: batchPath(pourId), body: batch },
+      });
       if (done.queued) return { queued: true };
       const parsed = BatchLogged.safeParse(done.answer);
       if (!parsed.success) throw unexpectedResponse(201);

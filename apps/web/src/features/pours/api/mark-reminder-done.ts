@@ -10,7 +10,12 @@ export function useMarkReminderDone() {
     // Runs with the network cut too: the outbox keeps the entry then, where a paused mutation would keep nothing.
     networkMode: 'always',
     mutationFn: async ({ reminderId, title, pourId }: { reminderId: string; title: string; pourId: string | null }): Promise<{ queued: boolean }> => {
-      const done = await outbox.submit({ kind: 'reminder-done', pourId, label: `Done: ${title}`, request: { type: 'json', path: `/reminders/${encodeURIComponent(reminderId)}/done`, body: {} } });
+      const done = await outbox.submit({
+        kind: 'reminder-done',
+        pourId,
+        label: `Done: ${title}`,
+        request: { type: 'json', path: `/reminders/${encodeURIComponent(reminderId)}/done`, body: {} },
+      });
       return { queued: done.queued };
     },
     onSuccess: (answer) =>

@@ -6,7 +6,9 @@ import { refreshPour } from './refresh-pour';
 
 /** The log goes as it is, `time,tempC` rows; the API either imports every row or names every bad one. */
 export function uploadReadingsCsv(pourId: string, csvText: string, confirmUnusual = false): Promise<ReadingsAddedAnswer> {
-  return api.postBody(`/pours/${encodeURIComponent(pourId)}/readings/csv`, csvText, 'text/csv', ReadingsAdded, { query: { confirmUnusual: String(confirmUnusual) } });
+  return api.postBody(`/pours/${encodeURIComponent(pourId)}/readings/csv`, csvText, 'text/csv', ReadingsAdded, {
+    query: { confirmUnusual: String(confirmUnusual) },
+  });
 }
 
 export function useUploadReadingsCsv(pourId: string) {

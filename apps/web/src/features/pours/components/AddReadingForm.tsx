@@ -33,7 +33,10 @@ export interface AddReadingFormProps {
 /** One reading off the shop thermometer; an unusual one is questioned (°F typed as °C, far out of range). */
 export function AddReadingForm({ pourId, unitSystem, product }: AddReadingFormProps) {
   const schema = useMemo(() => readingFormSchema(unitSystem), [unitSystem]);
-  const form = useForm<ReadingFormInput, unknown, ReadingFormValues>({ resolver: zodResolver(schema), defaultValues: { at: toLocalInput(new Date()), temp: '' } });
+  const form = useForm<ReadingFormInput, unknown, ReadingFormValues>({
+    resolver: zodResolver(schema),
+    defaultValues: { at: toLocalInput(new Date()), temp: '' },
+  });
   const { errors } = form.formState;
   const [formError, setFormError] = useState<string | null>(null);
   const [question, setQuestion] = useState<Question | null>(null);
@@ -97,7 +100,15 @@ export function AddReadingForm({ pourId, unitSystem, product }: AddReadingFormPr
           {(control) => <Input {...control} type="datetime-local" className="min-h-12!" {...form.register('at')} />}
         </Field>
         <Field label={`Temperature (${unit})`} error={errors.temp?.message} required>
-          {(control) => <Input {...control} inputMode="decimal" autoComplete="off" className="min-h-12! text-xl tabular-nums" {...form.register('temp', { onChange: () => setQuestion(null) })} />}
+          {(control) => (
+            <Input
+              {...control}
+              inputMode="decimal"
+              autoComplete="off"
+              className="min-h-12! text-xl tabular-nums"
+              {...form.register('temp', { onChange: () => setQuestion(null) })}
+            />
+          )}
         </Field>
         <div>
           <Button type="submit" className="min-h-12!" busy={add.isPending} busyLabel="Saving…">

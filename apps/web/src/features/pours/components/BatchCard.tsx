@@ -33,7 +33,9 @@ export function BatchCard({ pourId, cup, of, logged, shop, shopTempC, viewer, op
   const [logging, setLogging] = useState(false);
   const mixing = useMixingStart(pourId, cup.index);
   // A cup logged while the connection was down: kept on the phone until the server takes it.
-  const kept = useOutboxEntries().find((e) => e.kind === 'batch' && e.pourId === pourId && e.request.type === 'json' && e.request.body.planBatchIndex === cup.index);
+  const kept = useOutboxEntries().find(
+    (e) => e.kind === 'batch' && e.pourId === pourId && e.request.type === 'json' && e.request.body.planBatchIndex === cup.index,
+  );
 
   return (
     <section

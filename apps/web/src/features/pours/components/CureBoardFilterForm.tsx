@@ -25,7 +25,12 @@ export function CureBoardFilterForm({ filters }: { filters: CureBoardFilters }) 
     >
       <Field label="Pours">
         {(control) => (
-          <Select {...control} value={status} onChange={(event) => setStatus(boardStatuses.find((s) => s === event.target.value) ?? 'active')} options={statusOptions} />
+          <Select
+            {...control}
+            value={status}
+            onChange={(event) => setStatus(boardStatuses.find((s) => s === event.target.value) ?? 'active')}
+            options={statusOptions}
+          />
         )}
       </Field>
       <label className="flex min-h-touch items-center gap-3 font-semibold">

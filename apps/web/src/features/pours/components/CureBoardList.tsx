@@ -28,7 +28,9 @@ export function CureBoardList({ pours, role }: { pours: readonly PourSummary[]; 
                   {step ? ` · ${step}` : ''} · {pour.batchesLogged} of {pour.batchesPlanned} cups logged
                 </p>
               </div>
-              <span className="rounded-full border border-walnut-300 bg-paper px-2.5 py-1 text-sm font-semibold text-walnut-800">{pourStatusWords[pour.status]}</span>
+              <span className="rounded-full border border-walnut-300 bg-paper px-2.5 py-1 text-sm font-semibold text-walnut-800">
+                {pourStatusWords[pour.status]}
+              </span>
             </div>
             <p className="flex items-center gap-2 text-lg font-semibold">
               <CureStageIcon stage={pour.cure.stageReached} />
@@ -38,7 +40,10 @@ export function CureBoardList({ pours, role }: { pours: readonly PourSummary[]; 
             {pour.flags.length > 0 ? (
               <ul aria-label={`What needs a look on ${pour.piece.name}`} className="flex flex-wrap gap-2">
                 {pour.flags.map((flag) => (
-                  <li key={flag.code} className="inline-flex items-center gap-1 rounded-full border border-ember-600 bg-ember-50 px-2.5 py-0.5 text-sm font-semibold text-ember-700">
+                  <li
+                    key={flag.code}
+                    className="inline-flex items-center gap-1 rounded-full border border-ember-600 bg-ember-50 px-2.5 py-0.5 text-sm font-semibold text-ember-700"
+                  >
                     <span aria-hidden="true">!</span> {flag.message}
                   </li>
                 ))}

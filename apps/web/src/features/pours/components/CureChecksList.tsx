@@ -16,7 +16,12 @@ export function CureChecksList({ pourId, checks }: { pourId: string; checks: rea
           <li key={check.id} className="flex gap-4 rounded-lg border border-line bg-white p-3">
             {photo ? (
               <a href={photo} target="_blank" rel="noopener" className="shrink-0">
-                <img src={photo} alt={`Cure check photo: ${checkStageWords[check.stage].toLowerCase()}`} loading="lazy" className="size-20 rounded-md border border-line object-cover" />
+                <img
+                  src={photo}
+                  alt={`Cure check photo: ${checkStageWords[check.stage].toLowerCase()}`}
+                  loading="lazy"
+                  className="size-20 rounded-md border border-line object-cover"
+                />
               </a>
             ) : null}
             <div className="flex min-w-0 flex-col gap-0.5">

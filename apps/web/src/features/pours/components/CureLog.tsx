@@ -22,7 +22,8 @@ import { TemperaturePlotView } from './TemperaturePlotView';
 function forecastWords(shop: Shop, temp: (c: number) => string): string {
   const p = shop.temperatureProfile;
   const hour = (h: number) => `${String(h).padStart(2, '0')}:00`;
-  if (p.mode === 'day_night') return `forecast: ${temp(p.dayTempC)} from ${hour(p.dayStartHour)}, ${temp(p.nightTempC)} from ${hour(p.nightStartHour)} (the shop's day and night)`;
+  if (p.mode === 'day_night')
+    return `forecast: ${temp(p.dayTempC)} from ${hour(p.dayStartHour)}, ${temp(p.nightTempC)} from ${hour(p.nightStartHour)} (the shop's day and night)`;
   if (p.mode === 'learned') return "forecast: each hour as the shop's readings of the last 7 days showed it";
   return "forecast: the plan's shop temperature";
 }

@@ -35,7 +35,12 @@ export function CureProgressBar({ cure, label = 'Cure', showMarkers = false }: C
       }
       valueText={`${percent} % of full cure`}
       overlay={markers.map((marker) => (
-        <span key={marker.key} aria-hidden="true" className="absolute top-0 h-full w-0.5 bg-walnut-800" style={{ left: `calc(${(marker.at * 100).toFixed(2)}% - 1px)` }} />
+        <span
+          key={marker.key}
+          aria-hidden="true"
+          className="absolute top-0 h-full w-0.5 bg-walnut-800"
+          style={{ left: `calc(${(marker.at * 100).toFixed(2)}% - 1px)` }}
+        />
       ))}
       footer={
         markers.length > 0 ? (

@@ -40,19 +40,32 @@ function Block({ title, children }: { title: string; children: ReactNode }) {
 }
 
 function CupsTable({ record, grams, temp }: { record: PourRecord; grams: (g: number) => string; temp: (c: number) => string }) {
-  const planned = (target: number, weighed: number | undefined) => (weighed === undefined ? `${grams(target)} planned` : `${grams(weighed)} (plan ${grams(target)})`);
+  const planned = (target: number, weighed: number | undefined) =>
+    weighed === undefined ? `${grams(target)} planned` : `${grams(weighed)} (plan ${grams(target)})`;
   return (
     <Scroll label="Cups mixed">
       <table className="w-full min-w-[40rem] border-collapse text-sm tabular-nums print:min-w-0">
         <caption className="sr-only">Cups mixed, with lots, weights, who mixed them and when</caption>
         <thead>
           <tr>
-            <th scope="col" className={head}>Cup</th>
-            <th scope="col" className={head}>Product · lots A / B / pigment</th>
-            <th scope="col" className={head}>Part A</th>
-            <th scope="col" className={head}>Part B</th>
-            <th scope="col" className={head}>Pigment</th>
-            <th scope="col" className={head}>Mixed by, when, air</th>
+            <th scope="col" className={head}>
+              Cup
+            </th>
+            <th scope="col" className={head}>
+              Product · lots A / B / pigment
+            </th>
+            <th scope="col" className={head}>
+              Part A
+            </th>
+            <th scope="col" className={head}>
+              Part B
+            </th>
+            <th scope="col" className={head}>
+              Pigment
+            </th>
+            <th scope="col" className={head}>
+              Mixed by, when, air
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -125,7 +138,8 @@ function PourSection({ entry, number, shop, scale }: { entry: PieceRecordPour; n
           Pour {number}: {entry.plan.name}
         </h2>
         <p className="text-sm">
-          Started {formatDateTime(pour.startedAt)} · {pourStatusWords[pour.status]} · {pour.batchesLogged} of {pour.batchesPlanned} cups logged · planned at {temp(pour.assumedTempC)}
+          Started {formatDateTime(pour.startedAt)} · {pourStatusWords[pour.status]} · {pour.batchesLogged} of {pour.batchesPlanned} cups logged · planned at{' '}
+          {temp(pour.assumedTempC)}
         </p>
       </header>
       <Block title="Products and lots">
@@ -143,8 +157,8 @@ function PourSection({ entry, number, shop, scale }: { entry: PieceRecordPour; n
       <Block title="Temperatures">
         {t ? (
           <p className="text-sm">
-            {t.count === 1 ? '1 reading' : `${t.count} readings`} from {formatDateTime(t.firstAt)} to {formatDateTime(t.lastAt)}: lowest {temp(t.minC)} ({formatDateTime(t.minAt)}), highest {temp(t.maxC)} (
-            {formatDateTime(t.maxAt)}).
+            {t.count === 1 ? '1 reading' : `${t.count} readings`} from {formatDateTime(t.firstAt)} to {formatDateTime(t.lastAt)}: lowest {temp(t.minC)} (
+            {formatDateTime(t.minAt)}), highest {temp(t.maxC)} ({formatDateTime(t.maxAt)}).
           </p>
         ) : (
           <p className="text-sm">No temperature was logged; the cure was counted at the plan’s {temp(pour.assumedTempC)}.</p>
@@ -160,11 +174,21 @@ function PourSection({ entry, number, shop, scale }: { entry: PieceRecordPour; n
               <caption className="sr-only">Cure checks</caption>
               <thead>
                 <tr>
-                  <th scope="col" className={head}>When</th>
-                  <th scope="col" className={head}>Stage</th>
-                  <th scope="col" className={head}>Shore D</th>
-                  <th scope="col" className={head}>By</th>
-                  <th scope="col" className={head}>Note</th>
+                  <th scope="col" className={head}>
+                    When
+                  </th>
+                  <th scope="col" className={head}>
+                    Stage
+                  </th>
+                  <th scope="col" className={head}>
+                    Shore D
+                  </th>
+                  <th scope="col" className={head}>
+                    By
+                  </th>
+                  <th scope="col" className={head}>
+                    Note
+                  </th>
                 </tr>
               </thead>
               <tbody>
@@ -184,7 +208,9 @@ function PourSection({ entry, number, shop, scale }: { entry: PieceRecordPour; n
       </Block>
       <Block title="Release">
         <p className="text-sm">
-          {record.release ? `Released for machining by ${record.release.by ?? 'a former member'} on ${formatDateTime(record.release.at)}.` : 'Not released for machining yet.'}
+          {record.release
+            ? `Released for machining by ${record.release.by ?? 'a former member'} on ${formatDateTime(record.release.at)}.`
+            : 'Not released for machining yet.'}
           {record.machinedAt ? ` Machined on ${formatDateTime(record.machinedAt)}.` : ''}
         </p>
       </Block>

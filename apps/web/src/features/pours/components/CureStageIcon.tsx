@@ -21,7 +21,13 @@ const shapes: Record<string, ReactNode> = {
 
 export function CureStageIcon({ stage, className }: { stage: string | null; className?: string }) {
   return (
-    <svg aria-hidden="true" viewBox="0 0 20 20" className={cx('size-5 shrink-0 stroke-current stroke-[1.7]', className)} strokeLinecap="round" strokeLinejoin="round">
+    <svg
+      aria-hidden="true"
+      viewBox="0 0 20 20"
+      className={cx('size-5 shrink-0 stroke-current stroke-[1.7]', className)}
+      strokeLinecap="round"
+      strokeLinejoin="round"
+    >
       {shapes[stage ?? 'liquid'] ?? shapes.liquid}
     </svg>
   );

@@ -27,9 +27,8 @@ export function LiveMixWarnings(props: LiveMixWarningsProps) {
     <div className="flex flex-col gap-3" aria-live="polite">
       {ratio?.beyondTolerance ? (
         <Alert tone="warning" title="Off ratio" live="none">
-          Part A to part B is {ratio.pct.toFixed(1)} % away from the product’s ratio; the shop allows {tolerancePct} %. Off-ratio resin may stay soft or
-          tacky.{matchingB !== null ? ` With this part A, part B should be about ${shown(matchingB)}.` : ''} Correct the weight before you mix,
-          or start a fresh cup.
+          Part A to part B is {ratio.pct.toFixed(1)} % away from the product’s ratio; the shop allows {tolerancePct} %. Off-ratio resin may stay soft or tacky.
+          {matchingB !== null ? ` With this part A, part B should be about ${shown(matchingB)}.` : ''} Correct the weight before you mix, or start a fresh cup.
         </Alert>
       ) : ratio ? (
         <Alert tone="success" live="none">

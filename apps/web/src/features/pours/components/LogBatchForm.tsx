@@ -14,7 +14,16 @@ import { ApiError, isApiError } from '../../../lib/api-error';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useLotChoices } from '../api/get-lot-choices';
 import { useLogBatch, type BatchLogAnswer } from '../api/log-batch';
-import { batchFormFields, batchFormSchema, emptyBatchForm, formFieldsOf, liveReadings, logBatchRequest, type BatchFormInput, type BatchFormValues } from '../utils/batch-form';
+import {
+  batchFormFields,
+  batchFormSchema,
+  emptyBatchForm,
+  formFieldsOf,
+  liveReadings,
+  logBatchRequest,
+  type BatchFormInput,
+  type BatchFormValues,
+} from '../utils/batch-form';
 import type { RunSheetCup } from '../utils/plan-run-sheet';
 import { inputUnitsOf } from '../utils/shop-units';
 import { LiveMixWarnings } from './LiveMixWarnings';
@@ -56,14 +65,22 @@ export function LogBatchForm({ pourId, cup, shop, mixingStartedAtMs, onLogged, o
 
   const watched = useWatch({ control: form.control });
   const live = liveReadings(
-    { weighedA: watched.weighedA ?? '', weighedB: watched.weighedB ?? '', ambientTemp: watched.ambientTemp ?? '', surfaceTemp: watched.surfaceTemp ?? '', rh: watched.rh ?? '' },
+    {
+      weighedA: watched.weighedA ?? '',
+      weighedB: watched.weighedB ?? '',
+      ambientTemp: watched.ambientTemp ?? '',
+      surfaceTemp: watched.surfaceTemp ?? '',
+      rh: watched.rh ?? '',
+    },
     shop.unitSystem,
   );
 
   const save = async (values: BatchFormValues, confirmUnusual: boolean) => {
     setFormError(null);
     try {
-      const answer = await log.mutateAsync(logBatchRequest(values, cup.index, listed, mixingStartedAtMs === null ? null : new Date(mixingStartedAtMs).toISOString(), confirmUnusual));
+      const answer = await log.mutateAsync(
+        logBatchRequest(values, cup.index, listed, mixingStartedAtMs === null ? null : new Date(mixingStartedAtMs).toISOString(), confirmUnusual),
+      );
       setQuestion(null);
       onLogged(answer);
     } catch (error) {
@@ -101,7 +118,12 @@ export function LogBatchForm({ pourId, cup, shop, mixingStartedAtMs, onLogged, o
       <MixingCautions cup={cup} unitSystem={shop.unitSystem} />
       <FormAlert message={formError} title="The batch was not logged" />
       {question ? (
-        <UnusualValueQuestion message={question.message} confirmLabel="Log this cup as it is" busy={log.isPending} onConfirm={() => void save(question.values, true)} />
+        <UnusualValueQuestion
+          message={question.message}
+          confirmLabel="Log this cup as it is"
+          busy={log.isPending}
+          onConfirm={() => void save(question.values, true)}
+        />
       ) : null}
 
       <fieldset className="flex flex-col gap-4">

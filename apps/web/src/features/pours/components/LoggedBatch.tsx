@@ -17,7 +17,9 @@ export function LoggedBatch({ batch, unitSystem, scaleResolutionG }: LoggedBatch
   const rows = [
     { label: 'Part A', lot: batch.lotA, weighed: batch.weighedAG, target: batch.targetAG },
     { label: 'Part B', lot: batch.lotB, weighed: batch.weighedBG, target: batch.targetBG },
-    ...(batch.targetPigmentG > 0 || batch.weighedPigmentG > 0 ? [{ label: 'Pigment', lot: batch.lotPigment, weighed: batch.weighedPigmentG, target: batch.targetPigmentG }] : []),
+    ...(batch.targetPigmentG > 0 || batch.weighedPigmentG > 0
+      ? [{ label: 'Pigment', lot: batch.lotPigment, weighed: batch.weighedPigmentG, target: batch.targetPigmentG }]
+      : []),
   ];
   return (
     <div className="flex flex-col gap-3">

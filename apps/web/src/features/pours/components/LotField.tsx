@@ -32,17 +32,18 @@ export function LotField({ part, productName, lots, choice, unitSystem, choicePr
               {...control}
               className="min-h-12!"
               emptyOption="Choose a lot…"
-              options={[
-                ...options,
-                { value: typedLot, label: 'Not listed: type the number' },
-              ]}
+              options={[...options, { value: typedLot, label: 'Not listed: type the number' }]}
               {...choiceProps}
             />
           )}
         </Field>
       ) : null}
       {typing ? (
-        <Field label={`Lot number of ${part}`} hint={options.length === 0 ? `Copy it from the label of ${productName}; the shelf lists no lot of it with stock left.` : 'Copy it from the label.'} error={numberError}>
+        <Field
+          label={`Lot number of ${part}`}
+          hint={options.length === 0 ? `Copy it from the label of ${productName}; the shelf lists no lot of it with stock left.` : 'Copy it from the label.'}
+          error={numberError}
+        >
           {(control) => <Input {...control} className="min-h-12!" autoComplete="off" autoCapitalize="characters" maxLength={80} {...numberProps} />}
         </Field>
       ) : null}

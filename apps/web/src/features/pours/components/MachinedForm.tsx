@@ -35,7 +35,10 @@ const fieldNames = ['finishCoats', 'hoursBetweenCoats'] as const;
 
 /** Machining is done: the finish coats and their spacing set the reminders that follow. */
 export function MachinedForm({ pourId }: { pourId: string }) {
-  const form = useForm<MachinedInput, unknown, MachinedValues>({ resolver: zodResolver(MachinedFields), defaultValues: { finishCoats: '2', hoursBetweenCoats: '24' } });
+  const form = useForm<MachinedInput, unknown, MachinedValues>({
+    resolver: zodResolver(MachinedFields),
+    defaultValues: { finishCoats: '2', hoursBetweenCoats: '24' },
+  });
   const { errors } = form.formState;
   const [formError, setFormError] = useState<string | null>(null);
   const machined = useMarkMachined(pourId);

@@ -12,7 +12,14 @@ export function MarkDoneButton({ reminderId, title, pourId = null }: { reminderI
   return (
     <div className="flex flex-col gap-2">
       <div>
-        <Button variant="secondary" className="min-h-11!" busy={done.isPending} busyLabel="Marking…" aria-label={`Mark done: ${title}`} onClick={() => done.mutate({ reminderId, title, pourId })}>
+        <Button
+          variant="secondary"
+          className="min-h-11!"
+          busy={done.isPending}
+          busyLabel="Marking…"
+          aria-label={`Mark done: ${title}`}
+          onClick={() => done.mutate({ reminderId, title, pourId })}
+        >
           Mark done
         </Button>
       </div>

@@ -19,8 +19,8 @@ export function MixingCautions({ cup, unitSystem }: { cup: RunSheetCup; unitSyst
       ))}
       {heatsFast && !planSaysHeat ? (
         <Alert tone="warning" live="none" title="Exotherm">
-          This cup is {formatMass(cup.totalG, unitSystem).text}, at least half the {formatMass(cup.product.maxBatchG, unitSystem).text} most that
-          “{cup.product.name}” allows in one batch: it heats itself quickly. Mix it, then pour it out at once; never leave it standing in the cup.
+          This cup is {formatMass(cup.totalG, unitSystem).text}, at least half the {formatMass(cup.product.maxBatchG, unitSystem).text} most that “
+          {cup.product.name}” allows in one batch: it heats itself quickly. Mix it, then pour it out at once; never leave it standing in the cup.
         </Alert>
       ) : null}
       <Alert tone="info" live="none" title="Before you open the cans">

@@ -1,7 +1,8 @@
 import { env } from '../../../config/env';
 import { buildUrl } from '../../../lib/api-client';
 
-const linkClass = 'inline-flex min-h-touch items-center font-semibold text-walnut-700 underline decoration-resin-400 decoration-2 underline-offset-4 hover:text-walnut-900';
+const linkClass =
+  'inline-flex min-h-touch items-center font-semibold text-walnut-700 underline decoration-resin-400 decoration-2 underline-offset-4 hover:text-walnut-900';
 
 /** The pour's log as CSV files: plain links, which the browser downloads with the session cookie. */
 export function PourDownloads({ pourId }: { pourId: string }) {

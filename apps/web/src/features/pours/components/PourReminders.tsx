@@ -10,7 +10,13 @@ export function PourReminders({ reminders }: { reminders: readonly ReminderView[
   return (
     <ul className="flex flex-col gap-2" aria-label="Reminders of this pour">
       {shown.map((reminder) => (
-        <li key={reminder.id} className={cx('flex flex-wrap items-baseline gap-x-3 rounded-lg px-3 py-2', reminder.status === 'sent' ? 'bg-paper text-ink-soft' : reminder.done ? 'bg-moss-50' : 'bg-resin-50')}>
+        <li
+          key={reminder.id}
+          className={cx(
+            'flex flex-wrap items-baseline gap-x-3 rounded-lg px-3 py-2',
+            reminder.status === 'sent' ? 'bg-paper text-ink-soft' : reminder.done ? 'bg-moss-50' : 'bg-resin-50',
+          )}
+        >
           <span className="font-semibold text-ink">{reminder.title}</span>
           <span>
             {reminder.status === 'sent' ? (

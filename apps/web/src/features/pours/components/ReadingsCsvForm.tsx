@@ -55,8 +55,8 @@ export function ReadingsCsvForm({ pourId }: { pourId: string }) {
           Temperature log (CSV)
         </label>
         <p id={hintId} className="text-sm text-ink-soft">
-          One reading per row as <code>time,tempC</code>, e.g. <code>2026-03-01T18:30:00Z,21.5</code>; times with Z or an offset. A log whose header
-          says <code>tempF</code> is read in °F and converted.
+          One reading per row as <code>time,tempC</code>, e.g. <code>2026-03-01T18:30:00Z,21.5</code>; times with Z or an offset. A log whose header says{' '}
+          <code>tempF</code> is read in °F and converted.
         </p>
         <input
           ref={fileRef}
@@ -69,7 +69,12 @@ export function ReadingsCsvForm({ pourId }: { pourId: string }) {
         {problem ? <FieldError>{problem}</FieldError> : null}
       </div>
       {asked ? (
-        <UnusualValueQuestion message={asked.message} confirmLabel="Import it as it is" busy={upload.isPending} onConfirm={() => void send(asked.csvText, true)} />
+        <UnusualValueQuestion
+          message={asked.message}
+          confirmLabel="Import it as it is"
+          busy={upload.isPending}
+          onConfirm={() => void send(asked.csvText, true)}
+        />
       ) : rowProblems.length > 0 ? (
         <Alert tone="error" title="Nothing was imported" live="alert">
           <p>Every row must be readable before any is imported. Fix these rows in the file and import it again:</p>

@@ -46,7 +46,11 @@ export function ReadingsTable({ pourId, readings, voided, unitSystem, viewer }: 
                 {sourceWords[r.source]}
                 {r.loggedBy ? ` by ${r.loggedBy.name}` : ''}
               </Td>
-              <Td>{mayVoidEntry(viewer, r.loggedBy?.id ?? null) ? <VoidEntryButton pourId={pourId} kind="reading" id={r.id} what={`the reading of ${temp(r.tempC)}`} /> : null}</Td>
+              <Td>
+                {mayVoidEntry(viewer, r.loggedBy?.id ?? null) ? (
+                  <VoidEntryButton pourId={pourId} kind="reading" id={r.id} what={`the reading of ${temp(r.tempC)}`} />
+                ) : null}
+              </Td>
             </Tr>
           ))}
           {voided.map((r) => (

@@ -27,9 +27,8 @@ export function ReleaseButton({ pourId, pieceName }: { pourId: string; pieceName
         }}
         onConfirm={() => release.mutate(pourId)}
       >
-        The logged cure has reached the data sheet’s point{' '}
-        (gaps in the log counted at the lower temperature). Once released, the piece shows as ready for the machine. Check a test spot first if
-        anything about this pour was unusual.
+        The logged cure has reached the data sheet’s point (gaps in the log counted at the lower temperature). Once released, the piece shows as ready for the
+        machine. Check a test spot first if anything about this pour was unusual.
       </ConfirmDialog>
     </>
   );

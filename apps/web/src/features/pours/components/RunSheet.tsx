@@ -37,7 +37,8 @@ export function RunSheet({ pour, sheet, shop, viewer }: { pour: PourView; sheet:
           <ul className="flex flex-col gap-1">
             {pour.voidedBatches.map((b) => (
               <li key={b.id}>
-                Cup {(sheet.cups.find((c) => c.index === b.planBatchIndex)?.order ?? b.planBatchIndex + 1).toString()}, mixed by {b.mixedBy?.name ?? 'a former member'}: voided
+                Cup {(sheet.cups.find((c) => c.index === b.planBatchIndex)?.order ?? b.planBatchIndex + 1).toString()}, mixed by{' '}
+                {b.mixedBy?.name ?? 'a former member'}: voided
                 {b.voided?.by ? ` by ${b.voided.by.name}` : ''} — {b.voided?.reason}
               </li>
             ))}

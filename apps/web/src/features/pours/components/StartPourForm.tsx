@@ -65,7 +65,14 @@ export function StartPourForm({ plans, members, selfUserId, preselectedPlanId, u
               'has-[:checked]:border-walnut-800 has-[:checked]:bg-walnut-50 has-[:checked]:ring-2 has-[:checked]:ring-walnut-800',
             )}
           >
-            <input type="radio" name="pourPlanId" value={plan.id} checked={planId === plan.id} onChange={() => setPlanId(plan.id)} className="mt-1 size-5 accent-walnut-800" />
+            <input
+              type="radio"
+              name="pourPlanId"
+              value={plan.id}
+              checked={planId === plan.id}
+              onChange={() => setPlanId(plan.id)}
+              className="mt-1 size-5 accent-walnut-800"
+            />
             <span className="flex flex-col">
               <span className="font-semibold">{plan.name}</span>
               <span className="text-sm text-ink-soft">

@@ -40,13 +40,28 @@ export function TemperaturePlotView({ plot, minimumLabel, forecastLabel }: { plo
             </text>
           </g>
         ))}
-        <line x1={frame.left} x2={frame.width - frame.right} y1={plot.minimum.y} y2={plot.minimum.y} className="stroke-ember-600" strokeWidth={2} strokeDasharray="2 3" />
+        <line
+          x1={frame.left}
+          x2={frame.width - frame.right}
+          y1={plot.minimum.y}
+          y2={plot.minimum.y}
+          className="stroke-ember-600"
+          strokeWidth={2}
+          strokeDasharray="2 3"
+        />
         <text x={frame.width - frame.right} y={plot.minimum.y - 5} textAnchor="end" className="fill-ember-700 text-[11px] font-semibold">
           {minimumLabel}
         </text>
         {assumedSpans.map((span) => (
           <g key={`a-${span.from}`}>
-            <rect x={span.x1} y={frame.top} width={Math.max(0, span.x2 - span.x1)} height={frame.height - frame.top - frame.bottom} className="fill-paper-deep" opacity={0.7} />
+            <rect
+              x={span.x1}
+              y={frame.top}
+              width={Math.max(0, span.x2 - span.x1)}
+              height={frame.height - frame.top - frame.bottom}
+              className="fill-paper-deep"
+              opacity={0.7}
+            />
             <line x1={span.x1} x2={span.x2} y1={span.y1} y2={span.y2} className="stroke-walnut-500" strokeWidth={3} strokeDasharray="8 6" />
             {span.x2 - span.x1 > 48 ? (
               <text x={(span.x1 + span.x2) / 2} y={span.y1 - 7} textAnchor="middle" className="fill-walnut-700 text-[11px] font-semibold">
@@ -56,7 +71,15 @@ export function TemperaturePlotView({ plot, minimumLabel, forecastLabel }: { plo
           </g>
         ))}
         {readingSpans.map((span) => (
-          <line key={`r-${span.from}`} x1={span.x1} x2={span.x2} y1={span.y1} y2={span.y2} className={span.belowMinimum ? 'stroke-ember-600' : 'stroke-resin-600'} strokeWidth={3} />
+          <line
+            key={`r-${span.from}`}
+            x1={span.x1}
+            x2={span.x2}
+            y1={span.y1}
+            y2={span.y2}
+            className={span.belowMinimum ? 'stroke-ember-600' : 'stroke-resin-600'}
+            strokeWidth={3}
+          />
         ))}
         {plot.forecast.map((f, i) => {
           const next = plot.forecast[i + 1];
@@ -69,7 +92,15 @@ export function TemperaturePlotView({ plot, minimumLabel, forecastLabel }: { plo
         })}
         {plot.nowX !== null ? (
           <g>
-            <line x1={plot.nowX} x2={plot.nowX} y1={frame.top} y2={frame.height - frame.bottom} className="stroke-ink-soft" strokeWidth={1} strokeDasharray="4 3" />
+            <line
+              x1={plot.nowX}
+              x2={plot.nowX}
+              y1={frame.top}
+              y2={frame.height - frame.bottom}
+              className="stroke-ink-soft"
+              strokeWidth={1}
+              strokeDasharray="4 3"
+            />
             <text x={plot.nowX + 4} y={frame.height - frame.bottom - 6} className="fill-ink-soft text-[11px]">
               now
             </text>

@@ -15,7 +15,9 @@ export function TodayList({ today }: { today: Today }) {
   if (due.length === 0) {
     return (
       <EmptyState title="Nothing due in the next 24 hours">
-        {today.openPours === 0 ? 'No pour is curing right now.' : `${today.openPours === 1 ? '1 pour is' : `${today.openPours} pours are`} curing; the cure board shows how far.`}
+        {today.openPours === 0
+          ? 'No pour is curing right now.'
+          : `${today.openPours === 1 ? '1 pour is' : `${today.openPours} pours are`} curing; the cure board shows how far.`}
       </EmptyState>
     );
   }

@@ -21,7 +21,18 @@ describe('the mixing form', () => {
     expect(parsed.success).toBe(true);
     if (!parsed.success) return;
     const request = logBatchRequest(parsed.data, 3, new Set([lotId]), '2026-03-01T18:30:00.000Z');
-    expect(request).toMatchObject({ planBatchIndex: 3, lotAId: lotId, lotANumber: '', lotBId: null, lotBNumber: 'B-2291', weighedAG: 212.4, weighedBG: 106.2, weighedPigmentG: 0, ambientTempC: 21, rhPct: 55 });
+    expect(request).toMatchObject({
+      planBatchIndex: 3,
+      lotAId: lotId,
+      lotANumber: '',
+      lotBId: null,
+      lotBNumber: 'B-2291',
+      weighedAG: 212.4,
+      weighedBG: 106.2,
+      weighedPigmentG: 0,
+      ambientTempC: 21,
+      rhPct: 55,
+    });
     // Reference: the contract the API validates with (packages/contracts).
     expect(LogBatchRequest.safeParse(request).success).toBe(true);
   });
@@ -72,7 +83,9 @@ describe('the mixing form', () => {
   it('puts the server’s field messages under the form’s own fields', () => {
     // Every request field the form fills has a form field to carry its message (packages/contracts LogBatchRequest).
     // confirmUnusual is the answer to the log's question, not a field anyone types.
-    const requestFields = Object.keys(LogBatchRequest.shape).filter((k) => !['planBatchIndex', 'mixedAt', 'acknowledgeExpiredLot', 'confirmUnusual'].includes(k));
+    const requestFields = Object.keys(LogBatchRequest.shape).filter(
+      (k) => !['planBatchIndex', 'mixedAt', 'acknowledgeExpiredLot', 'confirmUnusual'].includes(k),
+    );
     const mapped = formFieldsOf(Object.fromEntries(requestFields.map((k) => [k, 'bad'])));
     for (const name of Object.keys(mapped)) expect(batchFormFields as readonly string[]).toContain(name);
     expect(formFieldsOf({ weighedBG: 'too light', other: 'x' })).toEqual({ weighedB: 'too light', other: 'x' });

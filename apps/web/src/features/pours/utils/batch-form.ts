@@ -23,7 +23,21 @@ export interface BatchFormInput {
   acknowledgeExpiredLot: boolean;
 }
 
-export const batchFormFields = ['lotA', 'lotANumber', 'lotB', 'lotBNumber', 'lotPigment', 'lotPigmentNumber', 'weighedA', 'weighedB', 'weighedPigment', 'ambientTemp', 'surfaceTemp', 'rh', 'notes'] as const;
+export const batchFormFields = [
+  'lotA',
+  'lotANumber',
+  'lotB',
+  'lotBNumber',
+  'lotPigment',
+  'lotPigmentNumber',
+  'weighedA',
+  'weighedB',
+  'weighedPigment',
+  'ambientTemp',
+  'surfaceTemp',
+  'rh',
+  'notes',
+] as const;
 
 export const emptyBatchForm: BatchFormInput = {
   lotA: '',
@@ -65,7 +79,10 @@ function weighedField(label: string, unitSystem: UnitSystem, rule: WeighedRule) 
     }
     const grams = massToGrams(value, unitSystem);
     if (required ? !(grams > 0) : grams < 0) {
-      ctx.addIssue({ code: 'custom', message: `The ${label} must be ${required ? 'above zero' : 'zero or more'}; weigh it again and enter what the scale shows.` });
+      ctx.addIssue({
+        code: 'custom',
+        message: `The ${label} must be ${required ? 'above zero' : 'zero or more'}; weigh it again and enter what the scale shows.`,
+      });
       return z.NEVER;
     }
     if (grams > maxGrams) {
@@ -87,7 +104,10 @@ function temperatureField(label: string, unitSystem: UnitSystem) {
     }
     const tempC = temperatureToC(value, unitSystem);
     if (tempC < tempRangeC.min || tempC > tempRangeC.max) {
-      ctx.addIssue({ code: 'custom', message: `The ${label} must be between ${unitSystem === 'us' ? '−22 °F and 176 °F' : '−30 °C and 80 °C'}; check the thermometer's unit.` });
+      ctx.addIssue({
+        code: 'custom',
+        message: `The ${label} must be between ${unitSystem === 'us' ? '−22 °F and 176 °F' : '−30 °C and 80 °C'}; check the thermometer's unit.`,
+      });
       return z.NEVER;
     }
     return tempC;
@@ -134,7 +154,13 @@ function lotOf(choice: string, typed: string, listedLotIds: ReadonlySet<string>)
 }
 
 /** The batch as the API takes it: a listed lot by its id, a typed one by its number. */
-export function logBatchRequest(values: BatchFormValues, planBatchIndex: number, listedLotIds: ReadonlySet<string>, mixedAt: string | null, confirmUnusual = false): LogBatchRequest {
+export function logBatchRequest(
+  values: BatchFormValues,
+  planBatchIndex: number,
+  listedLotIds: ReadonlySet<string>,
+  mixedAt: string | null,
+  confirmUnusual = false,
+): LogBatchRequest {
   const a = lotOf(values.lotA, values.lotANumber, listedLotIds);
   const b = lotOf(values.lotB, values.lotBNumber, listedLotIds);
   const pigment = lotOf(values.lotPigment, values.lotPigmentNumber, listedLotIds);
@@ -169,7 +195,13 @@ export function liveReadings(values: Pick<BatchFormInput, 'weighedA' | 'weighedB
     const v = readDecimal(text);
     return v === null ? null : temperatureToC(v, unitSystem);
   };
-  return { weighedAG: mass(values.weighedA), weighedBG: mass(values.weighedB), ambientTempC: temp(values.ambientTemp), surfaceTempC: temp(values.surfaceTemp), rhPct: readDecimal(values.rh) };
+  return {
+    weighedAG: mass(values.weighedA),
+    weighedBG: mass(values.weighedB),
+    ambientTempC: temp(values.ambientTemp),
+    surfaceTempC: temp(values.surfaceTemp),
+    rhPct: readDecimal(values.rh),
+  };
 }
 
 // The API names fields as the request does; the form names them as the person sees them.

@@ -5,7 +5,9 @@ describe('what a cure rests on, in words', () => {
   const base = { pouredAt: '2026-03-01T00:00:00Z', gaps: [] as { from: string; to: string; hours: number; tempC: number }[] };
 
   it('says when everything comes from readings', () => {
-    expect(evidenceWords({ ...base, equivalentHoursAtRef: 30, loggedEquivalentHours: 30, assumedEquivalentHours: 0 })?.basis).toBe('Cure: 30 h of 30 h logged, all of it from readings.');
+    expect(evidenceWords({ ...base, equivalentHoursAtRef: 30, loggedEquivalentHours: 30, assumedEquivalentHours: 0 })?.basis).toBe(
+      'Cure: 30 h of 30 h logged, all of it from readings.',
+    );
   });
 
   it('names the gaps and flags a cure that mostly rests on them', () => {

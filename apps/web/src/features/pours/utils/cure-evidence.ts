@@ -10,7 +10,9 @@ export interface EvidenceWords {
 const hours = (h: number) => (h >= 10 ? `${h.toFixed(0)} h` : `${h.toFixed(1)} h`);
 
 /** The board's line on what a cure rests on; null before anything is poured. */
-export function evidenceWords(cure: Pick<Cure, 'pouredAt' | 'equivalentHoursAtRef' | 'loggedEquivalentHours' | 'assumedEquivalentHours' | 'gaps'>): EvidenceWords | null {
+export function evidenceWords(
+  cure: Pick<Cure, 'pouredAt' | 'equivalentHoursAtRef' | 'loggedEquivalentHours' | 'assumedEquivalentHours' | 'gaps'>,
+): EvidenceWords | null {
   if (cure.pouredAt === null) return null;
   const total = cure.equivalentHoursAtRef;
   if (!(total > 0)) return { basis: 'No cure counted yet.', mostlyAssumed: false };

@@ -30,8 +30,20 @@ function cureAt10CFor24h(): Cure {
     assumedEquivalentHours: s.age.assumedEquivalentHours,
     readingCarryH: s.age.readingCarryH,
     gaps: s.age.gaps,
-    spans: s.age.spans.map((x) => ({ from: x.from, to: x.to, source: x.source, tempC: x.tempC, startTempC: x.startTempC, endTempC: x.endTempC, belowMinimum: x.belowMinimum })),
-    ahead: forecastTrack(s.ahead, s.stages, Date.parse('2026-03-02T00:00:00Z')).map((p) => ({ from: new Date(p.fromMs).toISOString(), to: new Date(p.toMs).toISOString(), tempC: p.tempC })),
+    spans: s.age.spans.map((x) => ({
+      from: x.from,
+      to: x.to,
+      source: x.source,
+      tempC: x.tempC,
+      startTempC: x.startTempC,
+      endTempC: x.endTempC,
+      belowMinimum: x.belowMinimum,
+    })),
+    ahead: forecastTrack(s.ahead, s.stages, Date.parse('2026-03-02T00:00:00Z')).map((p) => ({
+      from: new Date(p.fromMs).toISOString(),
+      to: new Date(p.toMs).toISOString(),
+      tempC: p.tempC,
+    })),
     readyToMachine: false,
     release: { allowed: false, reasons: ['Not ready yet.'] },
     stages: s.stages,
@@ -77,7 +89,20 @@ describe('cure progress on the board', () => {
 
   it('takes the next reminder first, and the next predicted stage without one', () => {
     const cure = cureAt10CFor24h();
-    const reminder = { id: '00000000-0000-4000-8000-000000000001', kind: 'demold_check' as const, done: null, step: 'layer:1', dueAt: '2026-03-05T00:00:00Z', eventAt: '2026-03-05T00:00:00Z', leadMin: 0, viaDigest: false, status: 'pending' as const, assumed: true, title: 'Demold check', sentAt: null };
+    const reminder = {
+      id: '00000000-0000-4000-8000-000000000001',
+      kind: 'demold_check' as const,
+      done: null,
+      step: 'layer:1',
+      dueAt: '2026-03-05T00:00:00Z',
+      eventAt: '2026-03-05T00:00:00Z',
+      leadMin: 0,
+      viaDigest: false,
+      status: 'pending' as const,
+      assumed: true,
+      title: 'Demold check',
+      sentAt: null,
+    };
     expect(nextEvent(cure, reminder, 'open')).toEqual({ source: 'reminder', title: 'Demold check', at: reminder.dueAt, assumed: true });
     const next = nextEvent(cure, null, 'open');
     expect(next?.source).toBe('stage');

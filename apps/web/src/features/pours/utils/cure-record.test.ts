@@ -42,7 +42,18 @@ function batch(planBatchIndex: number, step: string, over: Record<string, unknow
 }
 
 // Only the parts of a pour the record reads; the rest of the view is the cure board's.
-const pourOf = (parts: Partial<PourView>) => ({ batches: [], voidedBatches: [], readings: [], voidedReadings: [], checks: [], releasedAt: null, releasedBy: null, machinedAt: null, ...parts }) as unknown as PourView;
+const pourOf = (parts: Partial<PourView>) =>
+  ({
+    batches: [],
+    voidedBatches: [],
+    readings: [],
+    voidedReadings: [],
+    checks: [],
+    releasedAt: null,
+    releasedBy: null,
+    machinedAt: null,
+    ...parts,
+  }) as unknown as PourView;
 
 describe('temperatureSummary', () => {
   // Worked by hand from the readings below: lowest 16.5 °C at 02:00, highest 23.1 °C at 14:00, four readings.
@@ -87,9 +98,19 @@ describe('pourRecord', () => {
     expect(record.cups).toHaveLength(plan.cups.length);
     expect(record.cups.map((c) => c.order)).toEqual(plan.cups.map((_, i) => i + 1));
     const first = record.cups[seal.order - 1]!;
-    expect(first).toMatchObject({ pourLabel: 'Seal coat 1', productName: 'Test Seal 5', pigmentName: null, targetAG: seal.targetAG, logged: { lotA: 'S-A1', lotB: 'S-B1', weighedAG: 100.4, mixedBy: 'Ana Ruiz' } });
+    expect(first).toMatchObject({
+      pourLabel: 'Seal coat 1',
+      productName: 'Test Seal 5',
+      pigmentName: null,
+      targetAG: seal.targetAG,
+      logged: { lotA: 'S-A1', lotB: 'S-B1', weighedAG: 100.4, mixedBy: 'Ana Ruiz' },
+    });
     const layerCup = record.cups[layers[0]!.order - 1]!;
-    expect(layerCup).toMatchObject({ productName: 'Test Deep 40', pigmentName: 'Test Blue', logged: { lotPigment: 'P-9', weighedPigmentG: 6.1, mixedBy: 'Sam Lee' } });
+    expect(layerCup).toMatchObject({
+      productName: 'Test Deep 40',
+      pigmentName: 'Test Blue',
+      logged: { lotPigment: 'P-9', weighedPigmentG: 6.1, mixedBy: 'Sam Lee' },
+    });
     expect(record.cups.filter((c) => c.logged === null)).toHaveLength(plan.cups.length - 2);
   });
 
@@ -112,8 +133,24 @@ describe('pourRecord', () => {
 
   it('tells the release and the checks in time order', () => {
     const checks = [
-      { id: '00000000-0000-4000-8000-000000000c02', checkedAt: '2026-11-04T09:00:00Z', stage: 'machinable' as const, hardnessShoreD: 80, note: '', hasPhoto: false, checkedBy: person('Ana Ruiz') },
-      { id: '00000000-0000-4000-8000-000000000c01', checkedAt: '2026-11-03T09:00:00Z', stage: 'tack_free' as const, hardnessShoreD: null, note: 'rim firm', hasPhoto: true, checkedBy: null },
+      {
+        id: '00000000-0000-4000-8000-000000000c02',
+        checkedAt: '2026-11-04T09:00:00Z',
+        stage: 'machinable' as const,
+        hardnessShoreD: 80,
+        note: '',
+        hasPhoto: false,
+        checkedBy: person('Ana Ruiz'),
+      },
+      {
+        id: '00000000-0000-4000-8000-000000000c01',
+        checkedAt: '2026-11-03T09:00:00Z',
+        stage: 'tack_free' as const,
+        hardnessShoreD: null,
+        note: 'rim firm',
+        hasPhoto: true,
+        checkedBy: null,
+      },
     ];
     const record = pourRecord(pourOf({ checks, releasedAt: '2026-11-04T10:00:00Z', releasedBy: person('Lee Park') }), plan);
     expect(record.checks.map((c) => c.stage)).toEqual(['tack_free', 'machinable']);

@@ -125,7 +125,9 @@ export function pourRecord(pour: PourView, sheet: RunSheet): PourRecord {
   const sealCups = counted.filter((c) => c.pourLabel.startsWith('Seal'));
   const layerCups = counted.filter((c) => !c.pourLabel.startsWith('Seal'));
   const products: ProductUse[] = [
-    ...(sheet.sealCoat ? [{ role: 'Seal coat' as const, name: sheet.sealCoat.name, lots: distinct(sealCups.flatMap((c) => [c.logged!.lotA, c.logged!.lotB])) }] : []),
+    ...(sheet.sealCoat
+      ? [{ role: 'Seal coat' as const, name: sheet.sealCoat.name, lots: distinct(sealCups.flatMap((c) => [c.logged!.lotA, c.logged!.lotB])) }]
+      : []),
     { role: 'Deep pour', name: sheet.deepPour.name, lots: distinct(layerCups.flatMap((c) => [c.logged!.lotA, c.logged!.lotB])) },
   ];
   const pigmentName = sheet.cups.find((c) => c.pigment)?.pigment?.name;

@@ -13,19 +13,15 @@ export interface DewPointReadout {
  * The live dew-point check of the mixing form, once air, surface and humidity are all typed (all in °C and %).
  * Core does the physics; this only words it in the shop's units.
  */
-export function dewPointReadout(
-  airTempC: number | null,
-  surfaceTempC: number | null,
-  rhPct: number | null,
-  unitSystem: UnitSystem,
-): DewPointReadout | null {
+export function dewPointReadout(airTempC: number | null, surfaceTempC: number | null, rhPct: number | null, unitSystem: UnitSystem): DewPointReadout | null {
   if (airTempC === null || surfaceTempC === null || rhPct === null) return null;
   const check = surfaceDewPointCheck(surfaceTempC, airTempC, rhPct);
   if (!check.ok) return null;
   const { dewPointC, marginC, clear } = check.value;
   const shown = (tempC: number) => formatTemperature(tempC, unitSystem).text;
   // A difference of temperatures: the gap between two converted readings, not a converted reading.
-  const gap = (fromC: number, toC: number) => `${(temperatureFromC(toC, unitSystem) - temperatureFromC(fromC, unitSystem)).toFixed(1)} ${inputUnitsOf(unitSystem).temperature}`;
+  const gap = (fromC: number, toC: number) =>
+    `${(temperatureFromC(toC, unitSystem) - temperatureFromC(fromC, unitSystem)).toFixed(1)} ${inputUnitsOf(unitSystem).temperature}`;
   const marginShown = gap(dewPointC, surfaceTempC);
   const neededShown = gap(0, minSurfaceMarginC);
   const warning = clear

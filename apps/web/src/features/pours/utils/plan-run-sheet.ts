@@ -77,8 +77,22 @@ export function runSheetOf(plan: StoredPlan): Result<RunSheet> {
     return fail('plan_unreadable', 'The stored pour plan has a seal coat but no seal-coat product in its snapshot. Open the plan and save it again.');
   }
   const pours = [
-    ...(sealCoat?.coats ?? []).map((coat) => ({ kind: 'seal_coat' as const, label: `Seal coat ${coat.index + 1}`, stepKey: `seal_coat:${coat.index + 1}`, batches: coat.batches, product: seal!, pigment: null })),
-    ...layers.map((layer) => ({ kind: 'layer' as const, label: `Layer ${layer.index + 1}`, stepKey: `layer:${layer.index + 1}`, batches: layer.batches, product: snapshot.data.deepPour, pigment })),
+    ...(sealCoat?.coats ?? []).map((coat) => ({
+      kind: 'seal_coat' as const,
+      label: `Seal coat ${coat.index + 1}`,
+      stepKey: `seal_coat:${coat.index + 1}`,
+      batches: coat.batches,
+      product: seal!,
+      pigment: null,
+    })),
+    ...layers.map((layer) => ({
+      kind: 'layer' as const,
+      label: `Layer ${layer.index + 1}`,
+      stepKey: `layer:${layer.index + 1}`,
+      batches: layer.batches,
+      product: snapshot.data.deepPour,
+      pigment,
+    })),
   ];
   const cups = pours
     .flatMap((pour) =>

@@ -27,7 +27,9 @@ describe('reading and cure-check forms', () => {
     expect([...cureCheckStages]).toEqual(CureCheckFields.shape.stage.options);
     const parsed = cureCheckFormSchema.parse({ stage: 'tack_free', checkedAt: '2026-03-02T08:00', hardness: '62', note: ' firm at the edge ' });
     expect(parsed).toMatchObject({ stage: 'tack_free', hardness: 62, note: 'firm at the edge' });
-    expect(CureCheckFields.safeParse({ stage: parsed.stage, checkedAt: parsed.checkedAt, hardnessShoreD: String(parsed.hardness), note: parsed.note }).success).toBe(true);
+    expect(
+      CureCheckFields.safeParse({ stage: parsed.stage, checkedAt: parsed.checkedAt, hardnessShoreD: String(parsed.hardness), note: parsed.note }).success,
+    ).toBe(true);
   });
 
   it('holds Shore D to 0–100', () => {

@@ -28,7 +28,10 @@ export function readingFormSchema(unitSystem: UnitSystem) {
       }
       const tempC = temperatureToC(value, unitSystem);
       if (tempC < -30 || tempC > 80) {
-        ctx.addIssue({ code: 'custom', message: `The temperature must be between ${unitSystem === 'us' ? '−22 °F and 176 °F' : '−30 °C and 80 °C'}; check the thermometer's unit.` });
+        ctx.addIssue({
+          code: 'custom',
+          message: `The temperature must be between ${unitSystem === 'us' ? '−22 °F and 176 °F' : '−30 °C and 80 °C'}; check the thermometer's unit.`,
+        });
         return z.NEVER;
       }
       return tempC;

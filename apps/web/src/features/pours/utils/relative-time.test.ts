@@ -4,7 +4,10 @@ import { relativeWords, spanWords } from './relative-time';
 
 // Reference: luxon's Duration splits the same milliseconds into days, hours and minutes.
 const ms = (parts: { days?: number; hours?: number; minutes?: number; seconds?: number }) => Duration.fromObject(parts).as('milliseconds');
-const split = (value: number, units: ('days' | 'hours' | 'minutes')[]) => Duration.fromMillis(value).shiftTo(...units).toObject();
+const split = (value: number, units: ('days' | 'hours' | 'minutes')[]) =>
+  Duration.fromMillis(value)
+    .shiftTo(...units)
+    .toObject();
 
 describe('relative times', () => {
   it('writes 3 h 20 min ahead as "in 3 h 20 min"', () => {

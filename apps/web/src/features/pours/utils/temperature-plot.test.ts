@@ -81,7 +81,16 @@ describe('temperaturePlot', () => {
   });
 
   it('draws the assumed temperature alone before any reading is logged', () => {
-    const plot = temperaturePlot({ readings: [], pouredAt: '2026-03-01T00:00:00Z', asOf: '2026-03-01T03:00:00Z', assumedTempC: 19, readingCarryH: 2, product, unitSystem: 'metric', frame });
+    const plot = temperaturePlot({
+      readings: [],
+      pouredAt: '2026-03-01T00:00:00Z',
+      asOf: '2026-03-01T03:00:00Z',
+      assumedTempC: 19,
+      readingCarryH: 2,
+      product,
+      unitSystem: 'metric',
+      frame,
+    });
     expect(plot?.spans.map((s) => s.source)).toEqual(['assumed']);
     expect(plot?.dots).toEqual([]);
   });
@@ -108,7 +117,9 @@ describe('temperaturePlot', () => {
   });
 
   it('has nothing to plot with neither readings nor a pour', () => {
-    expect(temperaturePlot({ readings: [], pouredAt: null, asOf: '2026-03-01T03:00:00Z', assumedTempC: 19, readingCarryH: 2, product, unitSystem: 'metric', frame })).toBeNull();
+    expect(
+      temperaturePlot({ readings: [], pouredAt: null, asOf: '2026-03-01T03:00:00Z', assumedTempC: 19, readingCarryH: 2, product, unitSystem: 'metric', frame }),
+    ).toBeNull();
   });
 
   it('draws the forecast ahead as steps, the night dip lower on the plot, with now marked where it starts', () => {

@@ -89,17 +89,33 @@ export function temperaturePlot(input: TemperaturePlotInput): TemperaturePlot | 
   const readings = input.readings.filter((r) => Number.isFinite(toMs(r.at))).sort((p, q) => toMs(p.at) - toMs(q.at));
   if (readings.length === 0 && input.pouredAt === null) return null;
 
-  const ea = activationEnergyOf({ referenceTempC: input.product.referenceTempC, ...(input.product.activationEnergyKJPerMol === undefined ? {} : { activationEnergyKJPerMol: input.product.activationEnergyKJPerMol }) });
+  const ea = activationEnergyOf({
+    referenceTempC: input.product.referenceTempC,
+    ...(input.product.activationEnergyKJPerMol === undefined ? {} : { activationEnergyKJPerMol: input.product.activationEnergyKJPerMol }),
+  });
   const asOfMs = toMs(input.asOf);
   const pouredMs = input.pouredAt === null ? Number.NaN : toMs(input.pouredAt);
   // A page's clock can lag the server's by a moment: a pour logged "after now" still counts from its own time.
   const untilIso = asOfMs >= pouredMs ? input.asOf : input.pouredAt!;
-  const age =
-    Number.isFinite(pouredMs)
-      ? equivalentAge({ readings: [...readings], refTempC: input.product.referenceTempC, activationEnergyKJPerMol: ea, minTempC: input.product.minWorkTempC, window: { from: input.pouredAt!, to: untilIso }, assumedTempC: input.assumedTempC, readingCarryH: input.readingCarryH })
-      : readings.length > 1
-        ? equivalentAge({ readings: [...readings], refTempC: input.product.referenceTempC, activationEnergyKJPerMol: ea, minTempC: input.product.minWorkTempC, readingCarryH: input.readingCarryH })
-        : null;
+  const age = Number.isFinite(pouredMs)
+    ? equivalentAge({
+        readings: [...readings],
+        refTempC: input.product.referenceTempC,
+        activationEnergyKJPerMol: ea,
+        minTempC: input.product.minWorkTempC,
+        window: { from: input.pouredAt!, to: untilIso },
+        assumedTempC: input.assumedTempC,
+        readingCarryH: input.readingCarryH,
+      })
+    : readings.length > 1
+      ? equivalentAge({
+          readings: [...readings],
+          refTempC: input.product.referenceTempC,
+          activationEnergyKJPerMol: ea,
+          minTempC: input.product.minWorkTempC,
+          readingCarryH: input.readingCarryH,
+        })
+      : null;
   const coreSpans = input.history
     ? input.history
         .map((h) => ({ ...h, fromMs: toMs(h.from), toMs: Math.min(toMs(h.to), asOfMs) }))

@@ -67,11 +67,15 @@ export function LotForm({ resinSystems, pigments, busy, save }: LotFormProps) {
         </Field>
         {forPigment ? (
           <Field key="pigment" label="Pigment" error={errors.pigmentId?.message} required>
-            {(control) => <Select {...control} options={products} emptyOption="Choose the pigment" {...form.register('pigmentId', { setValueAs: optionalText })} />}
+            {(control) => (
+              <Select {...control} options={products} emptyOption="Choose the pigment" {...form.register('pigmentId', { setValueAs: optionalText })} />
+            )}
           </Field>
         ) : (
           <Field key="resin" label="Resin system" error={errors.resinSystemId?.message} required>
-            {(control) => <Select {...control} options={products} emptyOption="Choose the resin system" {...form.register('resinSystemId', { setValueAs: optionalText })} />}
+            {(control) => (
+              <Select {...control} options={products} emptyOption="Choose the resin system" {...form.register('resinSystemId', { setValueAs: optionalText })} />
+            )}
           </Field>
         )}
         <Field label="Lot number" hint="As printed on the container." error={errors.lotNumber?.message} required>

@@ -52,7 +52,10 @@ export function LotsTable({ lots, unitSystem, sort, onSort }: LotsTableProps) {
           return (
             <Tr key={lot.id}>
               <Td>
-                <Link to={paths.lot.getHref(lot.id)} className="inline-flex min-h-touch items-center font-semibold whitespace-nowrap text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4">
+                <Link
+                  to={paths.lot.getHref(lot.id)}
+                  className="inline-flex min-h-touch items-center font-semibold whitespace-nowrap text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4"
+                >
                   {lot.lotNumber}
                 </Link>
               </Td>

@@ -45,7 +45,10 @@ export function PigmentsTable({ pigments, unitSystem, currency, sort, onSort }: 
         {pigments.map((pigment) => (
           <Tr key={pigment.id}>
             <Td>
-              <Link to={paths.pigment.getHref(pigment.id)} className="font-semibold text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4">
+              <Link
+                to={paths.pigment.getHref(pigment.id)}
+                className="font-semibold text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4"
+              >
                 {pigment.name}
               </Link>
               {pigment.archived ? <ArchivedMark /> : null}

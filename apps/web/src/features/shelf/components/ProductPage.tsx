@@ -43,7 +43,13 @@ export function ProductPage({ product, kind, description, mayKeep, archive, save
         }
         actions={
           mayKeep && !product.archived ? (
-            <ArchiveProductButton name={product.name} busy={archive.isPending} error={archive.error} archive={() => archive.mutate(product.id)} reset={() => archive.reset()} />
+            <ArchiveProductButton
+              name={product.name}
+              busy={archive.isPending}
+              error={archive.error}
+              archive={() => archive.mutate(product.id)}
+              reset={() => archive.reset()}
+            />
           ) : null
         }
       />

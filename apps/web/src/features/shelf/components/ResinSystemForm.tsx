@@ -111,7 +111,12 @@ export function ResinSystemForm({ resinSystem, submitLabel, busyLabel, busy, sav
           {(control) => <Input {...control} inputMode="decimal" {...number('mixRatio.b')} />}
         </Field>
         <div className="sm:col-span-2">
-          <ChoiceGroup legend="The ratio is stated" choices={basisChoices} error={errors.mixRatio?.basis?.message} inputProps={form.register('mixRatio.basis')} />
+          <ChoiceGroup
+            legend="The ratio is stated"
+            choices={basisChoices}
+            error={errors.mixRatio?.basis?.message}
+            inputProps={form.register('mixRatio.basis')}
+          />
         </div>
         <Field label="Density of part A (g/mL)" hint="Liquid epoxy resin is typically about 1.1 to 1.2." error={errors.densityAGPerMl?.message} required>
           {(control) => <Input {...control} inputMode="decimal" {...number('densityAGPerMl')} />}

@@ -49,7 +49,10 @@ export function ResinSystemsTable({ resinSystems, unitSystem, currency, sort, on
         {resinSystems.map((product) => (
           <Tr key={product.id}>
             <Td>
-              <Link to={paths.resinSystem.getHref(product.id)} className="font-semibold text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4">
+              <Link
+                to={paths.resinSystem.getHref(product.id)}
+                className="font-semibold text-walnut-800 underline decoration-resin-400 decoration-2 underline-offset-4"
+              >
                 {product.name}
               </Link>
               {product.archived ? <ArchivedMark /> : null}

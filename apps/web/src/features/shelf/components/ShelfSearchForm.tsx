@@ -52,7 +52,9 @@ export function ShelfSearchForm({ filters }: { filters: ShelfFilters }) {
       {lots ? (
         <>
           <Field label="Stock">
-            {(control) => <Select {...control} value={status} onChange={(event) => setStatus(event.target.value)} options={statusOptions} emptyOption="Every lot" />}
+            {(control) => (
+              <Select {...control} value={status} onChange={(event) => setStatus(event.target.value)} options={statusOptions} emptyOption="Every lot" />
+            )}
           </Field>
           <Field label="Part">
             {(control) => <Select {...control} value={part} onChange={(event) => setPart(event.target.value)} options={partOptions} emptyOption="All parts" />}

@@ -45,7 +45,21 @@ function Count({ total, one, many, filtered }: { total: number; one: string; man
   );
 }
 
-function Empty({ filtered, title, addHref, addLabel, mayKeep, children }: { filtered: boolean; title: string; addHref: string; addLabel: string; mayKeep: boolean; children: ReactNode }) {
+function Empty({
+  filtered,
+  title,
+  addHref,
+  addLabel,
+  mayKeep,
+  children,
+}: {
+  filtered: boolean;
+  title: string;
+  addHref: string;
+  addLabel: string;
+  mayKeep: boolean;
+  children: ReactNode;
+}) {
   return filtered ? (
     <EmptyState headingLevel={2} title="Nothing matches">
       Try fewer words or another filter.
@@ -65,7 +79,13 @@ export function ResinSystemsSection({ filters, unitSystem, currency, mayKeep }: 
     <QueryResult query={list} loadingLabel="Loading resin systems…">
       {(page) =>
         page.items.length === 0 ? (
-          <Empty filtered={filtered} title="No resin systems yet" addHref={paths.newResinSystem.getHref()} addLabel="Add the first resin system" mayKeep={mayKeep}>
+          <Empty
+            filtered={filtered}
+            title="No resin systems yet"
+            addHref={paths.newResinSystem.getHref()}
+            addLabel="Add the first resin system"
+            mayKeep={mayKeep}
+          >
             A resin system is one product from its data sheet: mix ratio, densities, times, and the layer and batch limits.
           </Empty>
         ) : (

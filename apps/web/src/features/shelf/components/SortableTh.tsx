@@ -29,7 +29,13 @@ export function SortableTh<Column extends string>({ sortKey, sort, onSort, child
         className="-mx-2 inline-flex min-h-touch items-center gap-1.5 rounded px-2 font-semibold text-ink-soft hover:text-walnut-900"
       >
         <span>{children}</span>
-        <svg aria-hidden="true" viewBox="0 0 16 16" className="size-4 shrink-0 fill-none stroke-current stroke-[1.8]" strokeLinecap="round" strokeLinejoin="round">
+        <svg
+          aria-hidden="true"
+          viewBox="0 0 16 16"
+          className="size-4 shrink-0 fill-none stroke-current stroke-[1.8]"
+          strokeLinecap="round"
+          strokeLinejoin="round"
+        >
           {arrows[state]}
         </svg>
       </button>

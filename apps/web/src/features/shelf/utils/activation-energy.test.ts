@@ -4,7 +4,8 @@ import { activationEnergyUsed } from './activation-energy';
 // CODATA 2018: the molar gas constant is exact since the 2019 SI redefinition.
 const gasConstant = 8.314462618;
 // Arrhenius: k(T2)/k(T1) = exp(−Ea/R · (1/T2 − 1/T1)), temperatures in kelvin.
-const rateRatio = (eaKJPerMol: number, fromC: number, toC: number) => Math.exp((-(eaKJPerMol * 1000) / gasConstant) * (1 / (toC + 273.15) - 1 / (fromC + 273.15)));
+const rateRatio = (eaKJPerMol: number, fromC: number, toC: number) =>
+  Math.exp((-(eaKJPerMol * 1000) / gasConstant) * (1 / (toC + 273.15) - 1 / (fromC + 273.15)));
 
 describe('activationEnergyUsed', () => {
   it('uses the data sheet value when there is one', () => {

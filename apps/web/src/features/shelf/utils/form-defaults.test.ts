@@ -31,7 +31,14 @@ const resinSystem: ResinSystemView = {
   heatCapacityJPerGK: null,
   conductivityWPerMK: null,
   acceptedPeakC: null,
-  exothermSettings: exothermSettingsOf({ mixRatio: { a: 2, b: 1, basis: 'volume' }, densityAGPerMl: 1.16, densityBGPerMl: 0.97, gelTimeH: 8, referenceTempC: 22, maxLayerMm: 20 }).settings,
+  exothermSettings: exothermSettingsOf({
+    mixRatio: { a: 2, b: 1, basis: 'volume' },
+    densityAGPerMl: 1.16,
+    densityBGPerMl: 0.97,
+    gelTimeH: 8,
+    referenceTempC: 22,
+    maxLayerMm: 20,
+  }).settings,
   effectiveActivationEnergyKJPerMol: 51.6,
   pricePerKit: 180,
   kitSizeG: 6000,
@@ -46,7 +53,18 @@ describe('form values from saved entries', () => {
     const input = ResinSystemInput.safeParse(resinSystemInputOf(resinSystem));
     expect(input.success).toBe(true);
     expect(input.data).toMatchObject({ name: 'Bench Deep 40', activationEnergyKJPerMol: null, mixRatio: { a: 2, b: 1, basis: 'volume' } });
-    const pigment: PigmentView = { id: resinSystem.id, name: 'Test Teal', kind: 'paste', densityGPerMl: 1.3, recommendedPct: 2, maxPct: 6, pricePerPack: 12.5, packSizeG: 50, archived: true, updatedAt: resinSystem.updatedAt };
+    const pigment: PigmentView = {
+      id: resinSystem.id,
+      name: 'Test Teal',
+      kind: 'paste',
+      densityGPerMl: 1.3,
+      recommendedPct: 2,
+      maxPct: 6,
+      pricePerPack: 12.5,
+      packSizeG: 50,
+      archived: true,
+      updatedAt: resinSystem.updatedAt,
+    };
     expect(PigmentInput.safeParse(pigmentInputOf(pigment)).success).toBe(true);
   });
 

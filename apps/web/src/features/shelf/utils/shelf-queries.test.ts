@@ -38,19 +38,30 @@ describe('readShelfFilters', () => {
     expect(fromHref('/shelf?tab=lots&archived=true')).toEqual({ tab: 'lots', page: 1 });
   });
 
-  it.each(['/shelf?tab=drawers', '/shelf?page=0', '/shelf?page=1.5', '/shelf?tab=lots&status=mouldy&part=C'])('drops what the API would refuse in %s', (href) => {
-    const filters = fromHref(href);
-    expect(filters.page).toBe(1);
-    expect(filters.status).toBeUndefined();
-    expect(filters.part).toBeUndefined();
-  });
+  it.each(['/shelf?tab=drawers', '/shelf?page=0', '/shelf?page=1.5', '/shelf?tab=lots&status=mouldy&part=C'])(
+    'drops what the API would refuse in %s',
+    (href) => {
+      const filters = fromHref(href);
+      expect(filters.page).toBe(1);
+      expect(filters.status).toBeUndefined();
+      expect(filters.part).toBeUndefined();
+    },
+  );
 
   // Reference: the WHATWG URL parser reads back every link paths.shelf builds.
   it('reads back any shelf link', () => {
     fc.assert(
       fc.property(
-        fc.constantFrom('resin-systems', 'pigments', 'lots' as const).chain((tab) => fc.tuple(fc.constant(tab), fc.option(fc.constantFrom(...sortsOf[tab]), { nil: undefined }))),
-        fc.option(fc.string({ maxLength: 30 }).map((s) => s.trim()).filter(Boolean), { nil: undefined }),
+        fc
+          .constantFrom('resin-systems', 'pigments', 'lots' as const)
+          .chain((tab) => fc.tuple(fc.constant(tab), fc.option(fc.constantFrom(...sortsOf[tab]), { nil: undefined }))),
+        fc.option(
+          fc
+            .string({ maxLength: 30 })
+            .map((s) => s.trim())
+            .filter(Boolean),
+          { nil: undefined },
+        ),
         fc.integer({ min: 1, max: 5000 }),
         fc.constantFrom('ascending', 'descending' as const),
         ([tab, sort], q, page, dir) => {
@@ -83,8 +94,15 @@ describe('list queries', () => {
     expect(shelfKeys.lotList(lots)).toContainEqual(expect.objectContaining({ sort: 'remaining', dir: 'desc' }));
     const upward = lotListQuery({ tab: 'lots', page: 1, sort: { key: 'remaining', direction: 'ascending' } });
     expect(JSON.stringify(shelfKeys.lotList(upward))).not.toBe(JSON.stringify(shelfKeys.lotList(lots)));
-    expect(resinSystemListQuery({ tab: 'resin-systems', page: 2, sort: { key: 'pricePerKg', direction: 'ascending' } })).toEqual({ sort: 'pricePerKg', dir: 'asc', limit: 50, offset: 50 });
-    expect(shelfKeys.pigmentList(pigmentListQuery({ tab: 'pigments', page: 1, sort: { key: 'maxLoading', direction: 'descending' } }))).toContainEqual(expect.objectContaining({ sort: 'maxLoading', dir: 'desc' }));
+    expect(resinSystemListQuery({ tab: 'resin-systems', page: 2, sort: { key: 'pricePerKg', direction: 'ascending' } })).toEqual({
+      sort: 'pricePerKg',
+      dir: 'asc',
+      limit: 50,
+      offset: 50,
+    });
+    expect(shelfKeys.pigmentList(pigmentListQuery({ tab: 'pigments', page: 1, sort: { key: 'maxLoading', direction: 'descending' } }))).toContainEqual(
+      expect.objectContaining({ sort: 'maxLoading', dir: 'desc' }),
+    );
     // Nothing chosen: the server's own order (expiry for lots, name for products), and no sort in the key.
     expect(lotListQuery({ tab: 'lots', page: 1 })).toEqual({ limit: 50, offset: 0 });
     // A column of another table never reaches the API.
@@ -121,7 +139,14 @@ describe('list queries', () => {
 describe('shelfLinkOf', () => {
   // Reference: the WHATWG URL parser; a link built from filters reads back as the same filters.
   it('links back to the same filters', () => {
-    const filters = { tab: 'lots' as const, page: 3, q: 'A-1', sort: { key: 'expires', direction: 'descending' as const }, status: 'low' as const, part: 'A' as const };
+    const filters = {
+      tab: 'lots' as const,
+      page: 3,
+      q: 'A-1',
+      sort: { key: 'expires', direction: 'descending' as const },
+      status: 'low' as const,
+      part: 'A' as const,
+    };
     expect(fromHref(paths.shelf.getHref(shelfLinkOf(filters)))).toEqual(filters);
   });
 });

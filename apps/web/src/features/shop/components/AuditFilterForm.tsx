@@ -47,9 +47,7 @@ export function AuditFilterForm({ filters }: { filters: AuditFilters }) {
       <Field label="Kind of event">
         {(control) => <Select {...control} value={kind} onChange={(event) => setKind(event.target.value)} options={kindOptions} emptyOption="Every kind" />}
       </Field>
-      <Field label="From (day)">
-        {(control) => <Input {...control} type="date" value={from} onChange={(event) => setFrom(event.target.value)} />}
-      </Field>
+      <Field label="From (day)">{(control) => <Input {...control} type="date" value={from} onChange={(event) => setFrom(event.target.value)} />}</Field>
       <Field label="To (day)" error={rangeError}>
         {(control) => <Input {...control} type="date" value={to} min={from || undefined} onChange={(event) => setTo(event.target.value)} />}
       </Field>

@@ -19,7 +19,10 @@ export function AuditSentence({ event }: { event: AuditEvent }) {
         <>
           {' '}
           {event.link ? (
-            <Link to={event.link} className="font-semibold text-walnut-700 underline decoration-resin-400 decoration-2 underline-offset-4 hover:text-walnut-900">
+            <Link
+              to={event.link}
+              className="font-semibold text-walnut-700 underline decoration-resin-400 decoration-2 underline-offset-4 hover:text-walnut-900"
+            >
               {s.name}
             </Link>
           ) : (

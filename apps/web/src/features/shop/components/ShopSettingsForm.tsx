@@ -17,7 +17,8 @@ import { useUpdateShop } from '../api/update-shop';
 import { currencyOptions } from '../utils/currency-options';
 
 /** A typed number read as core reads every number, then checked by the contract's own rule and sentence. */
-const typedNumber = <T extends z.ZodType<number, number>>(rule: T, missing: string) => z.string().trim().min(1, { message: missing }).transform(requiredNumber).pipe(rule);
+const typedNumber = <T extends z.ZodType<number, number>>(rule: T, missing: string) =>
+  z.string().trim().min(1, { message: missing }).transform(requiredNumber).pipe(rule);
 
 const hourText = (label: string) => typedNumber(UpdateShopRequest.shape.dayStartHour.unwrap(), `${label} is required`);
 
@@ -44,10 +45,22 @@ const SettingsFields = UpdateShopRequest.required()
       const n = requiredNumber(text);
       return rest.unitSystem === 'us' && Number.isFinite(n) ? convertTemperature(n, 'F', 'C') : n;
     };
-    const parsed = ShopTemperatureProfile.safeParse({ mode: 'day_night', dayTempC: toC(dayTemp), nightTempC: toC(nightTemp), dayStartHour: requiredNumber(profileDayStart), nightStartHour: requiredNumber(profileNightStart) });
+    const parsed = ShopTemperatureProfile.safeParse({
+      mode: 'day_night',
+      dayTempC: toC(dayTemp),
+      nightTempC: toC(nightTemp),
+      dayStartHour: requiredNumber(profileDayStart),
+      nightStartHour: requiredNumber(profileNightStart),
+    });
     if (!parsed.success) {
-      const fieldOf: Record<string, string> = { dayTempC: 'dayTemp', nightTempC: 'nightTemp', dayStartHour: 'profileDayStart', nightStartHour: 'profileNightStart' };
-      for (const issue of parsed.error.issues) ctx.addIssue({ code: 'custom', message: issue.message, path: [fieldOf[String(issue.path[0])] ?? 'profileMode'] });
+      const fieldOf: Record<string, string> = {
+        dayTempC: 'dayTemp',
+        nightTempC: 'nightTemp',
+        dayStartHour: 'profileDayStart',
+        nightStartHour: 'profileNightStart',
+      };
+      for (const issue of parsed.error.issues)
+        ctx.addIssue({ code: 'custom', message: issue.message, path: [fieldOf[String(issue.path[0])] ?? 'profileMode'] });
       return z.NEVER;
     }
     return { ...rest, temperatureProfile: parsed.data };
@@ -72,7 +85,8 @@ const fieldNames = [
   'profileNightStart',
 ] as const;
 
-const shownTemp = (tempC: number, unitSystem: Shop['unitSystem']) => String(Math.round((unitSystem === 'us' ? convertTemperature(tempC, 'C', 'F') : tempC) * 10) / 10);
+const shownTemp = (tempC: number, unitSystem: Shop['unitSystem']) =>
+  String(Math.round((unitSystem === 'us' ? convertTemperature(tempC, 'C', 'F') : tempC) * 10) / 10);
 
 const formValuesOf = (shop: Shop): SettingsInput => {
   const profile = shop.temperatureProfile;
@@ -151,13 +165,13 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
       <Field label="Shop name" error={errors.name?.message} required>
         {(control) => <Input {...control} maxLength={120} autoComplete="organization" {...form.register('name')} />}
       </Field>
-      <ChoiceGroup legend="Units on screen and on run sheets" choices={unitChoices} error={errors.unitSystem?.message} inputProps={form.register('unitSystem')} />
       <ChoiceGroup
-        legend="Scale resolution"
-        choices={scaleChoices}
-        error={errors.scaleResolutionG?.message}
-        inputProps={form.register('scaleResolutionG')}
+        legend="Units on screen and on run sheets"
+        choices={unitChoices}
+        error={errors.unitSystem?.message}
+        inputProps={form.register('unitSystem')}
       />
+      <ChoiceGroup legend="Scale resolution" choices={scaleChoices} error={errors.scaleResolutionG?.message} inputProps={form.register('scaleResolutionG')} />
       <Field
         label="Off-ratio tolerance (%)"
         hint="A batch whose weighed A:B differs from the product's ratio by more than this is flagged when it is logged, and a run-sheet cup that rounding to the scale leaves further off says so."
@@ -173,11 +187,21 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
         <Field label="Working day starts (hour, 0–23)" hint="The morning digest goes out then; quiet hours end." error={errors.dayStartHour?.message} required>
           {(control) => <Input {...control} inputMode="numeric" {...form.register('dayStartHour')} />}
         </Field>
-        <Field label="Quiet hours start (hour, 0–23)" hint="Reminders due in the night wait for the morning digest." error={errors.quietFromHour?.message} required>
+        <Field
+          label="Quiet hours start (hour, 0–23)"
+          hint="Reminders due in the night wait for the morning digest."
+          error={errors.quietFromHour?.message}
+          required
+        >
           {(control) => <Input {...control} inputMode="numeric" {...form.register('quietFromHour')} />}
         </Field>
       </div>
-      <ChoiceGroup legend="The shop’s temperature where nothing is logged" choices={profileChoices} error={errors.profileMode?.message} inputProps={form.register('profileMode')} />
+      <ChoiceGroup
+        legend="The shop’s temperature where nothing is logged"
+        choices={profileChoices}
+        error={errors.profileMode?.message}
+        inputProps={form.register('profileMode')}
+      />
       {profileMode === 'day_night' ? (
         <div className="grid gap-4 sm:grid-cols-2">
           <Field label={`Day temperature (${tempUnit})`} error={errors.dayTemp?.message} required>
@@ -210,7 +234,12 @@ export function ShopSettingsForm({ shop, onSaved }: { shop: Shop; onSaved?: (sho
       >
         {(control) => <Input {...control} inputMode="numeric" {...form.register('windowCloseLeadMin')} />}
       </Field>
-      <Field label="Currency" hint="Prices on the shelf and the costs of pour plans and run sheets are in this currency." error={errors.currency?.message} required>
+      <Field
+        label="Currency"
+        hint="Prices on the shelf and the costs of pour plans and run sheets are in this currency."
+        error={errors.currency?.message}
+        required
+      >
         {(control) => <Select {...control} options={currencies} {...form.register('currency')} />}
       </Field>
       <div>

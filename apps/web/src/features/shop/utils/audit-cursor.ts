@@ -47,7 +47,10 @@ export function readAuditFilters(search: URLSearchParams): AuditFilters {
 /** The instant a calendar day starts in the shop's time zone (daylight-saving days are 23 or 25 hours long). */
 export function localDayStart(day: string, plusDays = 0): string {
   const [y, m, d] = day.split('-').map(Number) as [number, number, number];
-  return DateTime.fromObject({ year: y, month: m, day: d }, { zone: displayTimeZone() ?? 'local' }).plus({ days: plusDays }).toUTC().toISO()!;
+  return DateTime.fromObject({ year: y, month: m, day: d }, { zone: displayTimeZone() ?? 'local' })
+    .plus({ days: plusDays })
+    .toUTC()
+    .toISO()!;
 }
 
 /** The filters as the API takes them: the reader's days become instants, from the first day's start to the last day's end. */

@@ -75,7 +75,9 @@ export function Component() {
           }
         </QueryResult>
         <Card title="No CAD file? Measure the cavity">
-          <p className="mb-4 max-w-prose text-ink-soft">For a simple pocket, a few tape-measure readings give the same numbers a report would. Nothing is uploaded or saved.</p>
+          <p className="mb-4 max-w-prose text-ink-soft">
+            For a simple pocket, a few tape-measure readings give the same numbers a report would. Nothing is uploaded or saved.
+          </p>
           <QuickShapeForm unitSystem={unitSystem} />
         </Card>
       </div>

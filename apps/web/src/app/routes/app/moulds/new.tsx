@@ -36,7 +36,11 @@ export function Component() {
   return (
     <>
       <DocumentTitle title="Upload a mould" />
-      <PageHeader eyebrow="Moulds" title="Upload a mould" description="Send the mould file (STL, 3MF or OBJ); Gelpoint measures the cavity and writes its report." />
+      <PageHeader
+        eyebrow="Moulds"
+        title="Upload a mould"
+        description="Send the mould file (STL, 3MF or OBJ); Gelpoint measures the cavity and writes its report."
+      />
       {can(session.role, 'mold:change') ? (
         <Card className="max-w-2xl">
           <UploadMoldForm

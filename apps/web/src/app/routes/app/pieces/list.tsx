@@ -71,10 +71,7 @@ export function Component() {
                 Try another stage or fewer words.
               </EmptyState>
             ) : (
-              <EmptyState
-                title="No pieces yet"
-                actions={mayCreate ? <ButtonLink to={paths.newPiece.getHref()}>Start the first piece</ButtonLink> : null}
-              >
+              <EmptyState title="No pieces yet" actions={mayCreate ? <ButtonLink to={paths.newPiece.getHref()}>Start the first piece</ButtonLink> : null}>
                 A piece is one casting: a river table, a tray, an inlay. Its pours, batches and cure log hang off it.
               </EmptyState>
             )

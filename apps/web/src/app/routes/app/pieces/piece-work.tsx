@@ -48,7 +48,9 @@ export function PieceWork({ pieceId }: { pieceId: string }) {
         <ListState query={molds} empty={(d) => d.items.length === 0}>
           {(d) => <PieceMoldsList molds={d.items} unitSystem={unitSystem} />}
         </ListState>
-        {molds.data?.items.length === 0 ? <p className="text-ink-soft">No mould yet: upload its STL (“Upload its mould” above), or plan with a quick shape.</p> : null}
+        {molds.data?.items.length === 0 ? (
+          <p className="text-ink-soft">No mould yet: upload its STL (“Upload its mould” above), or plan with a quick shape.</p>
+        ) : null}
       </Card>
       <Card title="Pour plans">
         <ListState query={plans} empty={(d) => d.items.length === 0}>

@@ -19,7 +19,11 @@ export const createLoader =
   async ({ params, request }: LoaderFunctionArgs) => {
     await requireSession(queryClient, request);
     const pieceId = readId(params, 'pieceId', 'piece');
-    await Promise.all([queryClient.ensureQueryData(pieceQueryOptions(pieceId)), queryClient.ensureQueryData(pieceRecordQueryOptions(pieceId)), queryClient.ensureQueryData(shopQueryOptions())]);
+    await Promise.all([
+      queryClient.ensureQueryData(pieceQueryOptions(pieceId)),
+      queryClient.ensureQueryData(pieceRecordQueryOptions(pieceId)),
+      queryClient.ensureQueryData(shopQueryOptions()),
+    ]);
     return null;
   };
 

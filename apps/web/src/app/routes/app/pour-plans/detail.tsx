@@ -72,7 +72,11 @@ export function Component() {
                     Edit plan
                   </ButtonLink>
                 ) : null}
-                <DeletePourPlanButton planId={current.id} name={current.name} onDeleted={() => navigate(paths.pourPlans.getHref({ pieceId: current.pieceId }), { replace: true })} />
+                <DeletePourPlanButton
+                  planId={current.id}
+                  name={current.name}
+                  onDeleted={() => navigate(paths.pourPlans.getHref({ pieceId: current.pieceId }), { replace: true })}
+                />
               </>
             ) : null}
           </>

@@ -88,7 +88,11 @@ export function Component() {
   return (
     <>
       <DocumentTitle title="Plan a pour" />
-      <PageHeader eyebrow={piece.data ? `Pour plan · ${piece.data.name}` : 'Pour plan'} title="Plan a pour" description="The numbers on the right follow what you type; saving works them out again on the server." />
+      <PageHeader
+        eyebrow={piece.data ? `Pour plan · ${piece.data.name}` : 'Pour plan'}
+        title="Plan a pour"
+        description="The numbers on the right follow what you type; saving works them out again on the server."
+      />
       {body()}
       <p className="mt-6">
         <TextLink to={paths.pourPlans.getHref({ pieceId })}>Back to this piece&apos;s pour plans</TextLink>

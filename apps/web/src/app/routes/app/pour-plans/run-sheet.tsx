@@ -34,7 +34,9 @@ export function Component() {
     if (!plan.data || !shop.data || startedPour.isPending) return <PageSpinner label="Loading the run sheet…" />;
     const pourId = startedPour.data ?? null;
     // Once a pour is started, every cup's code opens it (to log the cup); before, the plan.
-    const cupLink = pourId ? { href: appLink(paths.pour.getHref(pourId)), opens: 'the pour' } : { href: appLink(paths.pourPlan.getHref(planId)), opens: 'the plan' };
+    const cupLink = pourId
+      ? { href: appLink(paths.pour.getHref(pourId)), opens: 'the pour' }
+      : { href: appLink(paths.pourPlan.getHref(planId)), opens: 'the plan' };
     const saved = readSavedPlan(plan.data);
     if (!saved.ok) {
       return (
@@ -43,7 +45,17 @@ export function Component() {
         </Alert>
       );
     }
-    return <RunSheet planName={plan.data.name} pieceName={piece.data?.name ?? 'Piece'} plan={saved.value.plan} snapshot={saved.value.snapshot} unitSystem={shop.data.unitSystem} currency={shop.data.currency} cupLink={cupLink} />;
+    return (
+      <RunSheet
+        planName={plan.data.name}
+        pieceName={piece.data?.name ?? 'Piece'}
+        plan={saved.value.plan}
+        snapshot={saved.value.snapshot}
+        unitSystem={shop.data.unitSystem}
+        currency={shop.data.currency}
+        cupLink={cupLink}
+      />
+    );
   };
 
   return (

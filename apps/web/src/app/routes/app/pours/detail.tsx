@@ -61,7 +61,9 @@ export function Component() {
               </>
             }
             actions={
-              current.status === 'open' && current.cure.release.allowed && can(session.role, 'pour:release') ? <ReleaseButton pourId={current.id} pieceName={current.piece.name} /> : null
+              current.status === 'open' && current.cure.release.allowed && can(session.role, 'pour:release') ? (
+                <ReleaseButton pourId={current.id} pieceName={current.piece.name} />
+              ) : null
             }
           />
           <nav aria-label="On this page" className="mb-6 flex flex-wrap gap-x-6">

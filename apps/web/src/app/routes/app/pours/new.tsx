@@ -37,7 +37,10 @@ export function Component() {
   return (
     <>
       <DocumentTitle title="Start a pour" />
-      <PageHeader title="Start a pour" description="Choose the plan to pour; its cups become the run sheet, and the cure clock starts with the first one logged." />
+      <PageHeader
+        title="Start a pour"
+        description="Choose the plan to pour; its cups become the run sheet, and the cure clock starts with the first one logged."
+      />
       <div className="flex flex-col gap-6">
         <Card className="max-w-3xl">
           <QueryResult query={plans} loadingLabel="Loading the pour plans…">

@@ -35,7 +35,11 @@ export const createLoader =
     await requireSession(queryClient, request);
     const id = readId(params, 'lotId', 'lot');
     const page = usesPageOf(new URL(request.url).searchParams);
-    await Promise.all([queryClient.ensureQueryData(lotQueryOptions(id)), queryClient.ensureQueryData(shopQueryOptions()), queryClient.ensureQueryData(lotUsesQueryOptions(id, page))]);
+    await Promise.all([
+      queryClient.ensureQueryData(lotQueryOptions(id)),
+      queryClient.ensureQueryData(shopQueryOptions()),
+      queryClient.ensureQueryData(lotUsesQueryOptions(id, page)),
+    ]);
     return null;
   };
 
@@ -70,7 +74,13 @@ export function Component() {
             {(s) => (
               <>
                 <LotSheet lot={current} unitSystem={s.unitSystem} />
-                <LotUses lotId={current.id} lotNumber={current.lotNumber} unitSystem={s.unitSystem} page={usesPage} hrefFor={(page) => paths.lot.getHref(current.id, { page })} />
+                <LotUses
+                  lotId={current.id}
+                  lotNumber={current.lotNumber}
+                  unitSystem={s.unitSystem}
+                  page={usesPage}
+                  hrefFor={(page) => paths.lot.getHref(current.id, { page })}
+                />
               </>
             )}
           </QueryResult>

@@ -21,7 +21,10 @@ export const createLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     await requireSession(queryClient, request);
-    await Promise.all([queryClient.ensureQueryData(resinSystemsQueryOptions(wholeShelfQuery)), queryClient.ensureQueryData(pigmentsQueryOptions(wholeShelfQuery))]);
+    await Promise.all([
+      queryClient.ensureQueryData(resinSystemsQueryOptions(wholeShelfQuery)),
+      queryClient.ensureQueryData(pigmentsQueryOptions(wholeShelfQuery)),
+    ]);
     return null;
   };
 

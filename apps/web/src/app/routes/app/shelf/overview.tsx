@@ -72,7 +72,10 @@ export function Component() {
         </Alert>
       ) : null}
       <ShelfTabs current={filters.tab} />
-      <ShelfSearchForm key={`${filters.tab}|${filters.q ?? ''}|${filters.status ?? ''}|${filters.part ?? ''}|${String(filters.includeArchived)}`} filters={filters} />
+      <ShelfSearchForm
+        key={`${filters.tab}|${filters.q ?? ''}|${filters.status ?? ''}|${filters.part ?? ''}|${String(filters.includeArchived)}`}
+        filters={filters}
+      />
       <QueryResult query={shop} loadingLabel="Loading the shop's units…">
         {(current) => {
           const props = { filters, unitSystem: current.unitSystem, currency: current.currency, mayKeep };
