@@ -1,4 +1,6 @@
 import { formatTemperature, type PlanForecast, type UnitSystem } from '@gelpoint/core';
+import { HeatMapView } from '../../../components/heat/HeatMapView';
+import type { HeatDepthMap } from '../../../components/heat/heat-colours';
 import { forecastCurveGeometry, forecastWords } from '../utils/forecast-words';
 import { formatHours } from '../utils/plan-format';
 
@@ -51,10 +53,13 @@ export function ForecastBlock({
   forecast,
   unitSystem,
   spotWords,
+  depthMap,
 }: {
   forecast: PlanForecast;
   unitSystem: UnitSystem;
   spotWords?: (xMm: number, yMm: number) => string;
+  /** The mould's resin depth per column at the fill level: with a peak map, the forecast is drawn over it. */
+  depthMap?: HeatDepthMap | undefined;
 }) {
   if (!forecast.available) {
     return <p className="text-ink-soft">No heat forecast for this plan: {forecast.reason}</p>;
@@ -72,6 +77,9 @@ export function ForecastBlock({
         <p>Every layer is forecast to stay under the accepted peak of {formatTemperature(forecast.limitC, unitSystem).text}.</p>
       )}
       <p>{words.basis}</p>
+      {forecast.peakMap && depthMap ? (
+        <HeatMapView map={depthMap} peakMap={forecast.peakMap} shopTempC={forecast.shopTempC} limitC={forecast.limitC} unitSystem={unitSystem} />
+      ) : null}
       <ul className="flex flex-col gap-3">
         {words.layers.map((l) => (
           <li key={l.index} className="flex flex-col gap-1">

@@ -46,7 +46,7 @@ export function LivePlanPanel({ live, unitSystem, currency }: { live: LivePlanSt
           {live.result.error.message}
         </Alert>
       ) : null}
-      {plan ? <PlanResult plan={plan.plan} unitSystem={unitSystem} currency={currency} curve={plan.cavity.curve} /> : null}
+      {plan ? <PlanResult plan={plan.plan} unitSystem={unitSystem} currency={currency} curve={plan.cavity.curve} depthMap={plan.cavity.depthMap} /> : null}
     </section>
   );
 }

@@ -15,6 +15,7 @@ import { cautionsFor } from '../utils/caution-words';
 import { formatMoney } from '../../../lib/money';
 import { formatArea, formatHours, formatMinutes } from '../utils/plan-format';
 import { CautionList } from './CautionList';
+import type { HeatDepthMap } from '../../../components/heat/heat-colours';
 import { ForecastBlock } from './ForecastBlock';
 import { LayerChart } from './LayerChart';
 
@@ -25,6 +26,8 @@ export interface PlanResultProps {
   currency: string;
   /** The cavity's own curve, when known, for the drawing; otherwise it runs straight between layer boundaries. */
   curve?: VolumeCurve;
+  /** A mould's resin depth per column at the fill level, to draw the forecast peak over it. */
+  depthMap?: HeatDepthMap | undefined;
 }
 
 function Facts({ rows }: { rows: readonly { term: string; value: ReactNode }[] }) {
@@ -142,7 +145,7 @@ function forecastRow(plan: PourPlan, index: number, unitSystem: UnitSystem): { t
 }
 
 /** A pour plan's numbers: the same view for the live planner and for a saved plan's stored result. */
-export function PlanResult({ plan, unitSystem, currency, curve }: PlanResultProps) {
+export function PlanResult({ plan, unitSystem, currency, curve, depthMap }: PlanResultProps) {
   const money = (amount: number) => formatMoney(amount, currency);
   const volume = (ml: number) => formatVolume(ml, unitSystem).text;
   const length = (mm: number) => formatLength(mm, unitSystem).text;
@@ -173,7 +176,7 @@ export function PlanResult({ plan, unitSystem, currency, curve }: PlanResultProp
       </Block>
 
       <Block title="Heat forecast (an estimate)">
-        <ForecastBlock forecast={plan.forecast} unitSystem={unitSystem} />
+        <ForecastBlock forecast={plan.forecast} unitSystem={unitSystem} depthMap={depthMap} />
       </Block>
 
       <Block title={`Deep pour: ${plan.deepPour.productName}`}>

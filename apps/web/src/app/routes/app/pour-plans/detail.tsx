@@ -22,6 +22,7 @@ import { useSignedInSession } from '../../../signed-in-session';
 import { createPlanPageLoader } from './plan-page-loader';
 import { readId } from './read-id';
 import { useShop } from '../../../../features/shop/api/get-shop';
+import { moldFillQueryOptions } from '../../../../lib/resources/molds';
 
 export const createLoader = createPlanPageLoader;
 
@@ -34,6 +35,16 @@ export function Component() {
   const piece = useQuery({ ...pieceQueryOptions(plan.data?.pieceId ?? ''), enabled: Boolean(plan.data) });
   const mold = useMold(plan.data?.moldId ?? null);
   const mayPlan = can(session.role, 'plan:change');
+  // A mould plan's depth map at its level, to draw the forecast peak over the mould.
+  const savedInput = plan.data ? readSavedPlan(plan.data) : null;
+  const cavity = savedInput?.ok ? savedInput.value.input?.cavity : undefined;
+  const fillLevelMm = savedInput?.ok ? savedInput.value.input?.fillLevelMm : undefined;
+  const mapKey = cavity?.source === 'mold' && typeof fillLevelMm === 'number' ? { levelMm: fillLevelMm, dam: cavity.dam ?? 'outline', depthMap: true } : null;
+  const fill = useQuery({
+    ...moldFillQueryOptions(plan.data?.moldId ?? '', mapKey ?? { levelMm: 0, dam: 'outline', depthMap: true }, mold.data?.analysedAt ?? null),
+    enabled: Boolean(mapKey && plan.data?.moldId && mold.data?.status === 'ready'),
+  });
+  const depthMap = mapKey ? (fill.data?.depthMap ?? undefined) : undefined;
 
   if (plan.error) return <ErrorAlert error={plan.error} />;
   if (shop.error) return <ErrorAlert error={shop.error} />;
@@ -89,7 +100,7 @@ export function Component() {
               The saved plan
             </h2>
             <p className="text-ink-soft">These are the numbers the server worked out and stored when the plan was saved.</p>
-            <PlanResult plan={saved.value.plan} unitSystem={shop.data.unitSystem} currency={shop.data.currency} />
+            <PlanResult plan={saved.value.plan} unitSystem={shop.data.unitSystem} currency={shop.data.currency} depthMap={depthMap} />
           </section>
           <Card title="Shelf values it was made with">
             <SnapshotDetails snapshot={saved.value.snapshot} unitSystem={shop.data.unitSystem} />
