@@ -53,7 +53,7 @@ describe("the demo shop's mould in a real browser", () => {
     // Floor to rim in one layer: the demo deep pour allows 50 mm, so ⌈depth / 50⌉ = 1 layer the whole depth thick.
     await expect.poll(() => stored.getByText(`1 × ${(topMm - floorMm).toFixed(1)} mm`).isVisible()).toBe(true);
     expect(await stored.getByRole('heading', { name: 'Seal coat: Kettle Seal & Coat 1:1' }).isVisible()).toBe(true);
-    // The heat forecast drawn over the mould: the map, and the hottest spot named in words where the resin is deepest.
+    // The heat forecast drawn over the mould: the map, and the hottest spot named in words.
     const heat = stored.getByRole('figure', { name: 'Forecast peak temperature over the mould' });
     await expect.poll(() => heat.getByRole('img', { name: /^Map of the forecast peak temperature seen from above/ }).count()).toBe(1);
     expect(await heat.getByText(/^Hottest spot: \d+(\.\d)? °C in layer 1/).isVisible()).toBe(true);

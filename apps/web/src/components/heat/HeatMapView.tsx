@@ -16,7 +16,7 @@ export function hottestSpotWords(peakMap: PlanPeakMap, limitC: number, unitSyste
   const temp = (c: number) => formatTemperature(c, unitSystem).text;
   const len = (mm: number) => formatLength(mm, unitSystem).text;
   const over = h.peakC > limitC ? `, over the accepted peak of ${temp(limitC)}` : '';
-  return `Hottest spot: ${temp(h.peakC)} in layer ${h.layerIndex + 1}${over}, at x ${len(h.xMm)}, y ${len(h.yMm)} in the mould file's frame, where the resin stands deepest.`;
+  return `Hottest spot: ${temp(h.peakC)} in layer ${h.layerIndex + 1}${over}, at x ${len(h.xMm)}, y ${len(h.yMm)} in the mould file's frame.`;
 }
 
 /**
