@@ -37,7 +37,7 @@ describe('pour plans', () => {
     expect(res.body.productSnapshot.deepPour).toMatchObject({ id: product.id, name: 'Stillwater Deep 50', maxLayerMm: 20 });
     // The forecast of each layer, calibrated to the data sheet's 20 mm at 22 °C; at 22 °C it never makes a layer thicker.
     const forecast = plan.forecast;
-    expect(forecast).toMatchObject({ version: 1, available: true, shopTempC: 22, calibration: { maxLayerMm: 20, tempC: 22 } });
+    expect(forecast).toMatchObject({ version: 2, available: true, shopTempC: 22, calibration: { maxLayerMm: 20, tempC: 22 } });
     expect(forecast.calibratedTo).toMatch(/20 mm layer poured at 22 °C/);
     expect(forecast.layers).toHaveLength(2);
     for (const layer of forecast.layers) {
