@@ -89,6 +89,6 @@ describe('a stored pour plan result', () => {
   it('refuses a row that is no version at all, and a forecast of an unknown version', () => {
     expect(PourPlanResult.safeParse({}).success).toBe(false);
     expect(PourPlanResult.safeParse({ ...versionOneRow, layers: 'one' }).success).toBe(false);
-    expect(PourPlanResult.safeParse({ ...versionOneRow, forecast: { ...notForecast, version: 2 } }).success).toBe(false);
+    expect(PourPlanResult.safeParse({ ...versionOneRow, forecast: { ...notForecast, version: 3 } }).success).toBe(false);
   });
 });
