@@ -110,7 +110,8 @@ class ObjReader {
     const length = keyEnd - this.i;
     this.i = keyEnd;
     if (length === 1 && k0 === 118 /* v */) this.vertex();
-    else if (k0 === 102 /* f */ && (length === 1 || (length === 2 && s.charCodeAt(keyEnd - 1) === 111) /* fo */)) this.face();
+    // f, or fo (an old spelling of a face)
+    else if (k0 === 102 && (length === 1 || (length === 2 && s.charCodeAt(keyEnd - 1) === 111))) this.face();
     else if (freeFormKeywords.has(s.slice(keyEnd - length, keyEnd))) this.freeForm = true;
   }
 
