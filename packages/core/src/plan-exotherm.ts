@@ -3,11 +3,14 @@ import {
   cupPotLife,
   forecastLayer,
   forecastMould,
+  peakBandsOf,
   proposeLayers,
   type Calibration,
+  type PeakBand,
   type ForecastPoint,
   type PlannedLayer,
 } from '@gelpoint/thermal';
+export { peakAtDepth, peakBandsOf, type PeakBand } from '@gelpoint/thermal';
 import { exothermSettingsOf, type ExothermSettingField, type ExothermSettings } from './exotherm-settings';
 import type { LayerSlice } from './layers';
 import { fail, ok, type Result } from './result';
@@ -54,7 +57,7 @@ export interface PlanLayerForecast {
  * or above its depth.
  */
 export interface PlanPeakMap {
-  bands: { upToMm: number; peakC: number }[];
+  bands: PeakBand[];
   /** The hottest column of the whole pour, in the mould's frame (mm). */
   hottest: { xMm: number; yMm: number; layerIndex: number; peakC: number; timeToPeakMin: number };
 }
@@ -151,50 +154,6 @@ interface LayerInput {
 export interface PlanLayersForecast {
   layers: PlanLayerForecast[];
   peakMap?: PlanPeakMap;
-}
-
-/** Depths to millimetre thousandths: finer than any depth map, coarse enough to keep the table short. */
-const bandDigits = 3;
-
-/**
- * The step table of a mould's peak map: columns sorted by depth, runs of equal peak merged, each band
- * ending half-way to the next band's shallowest column so a client's float depths fall on the right side.
- */
-export function peakBandsOf(depthsMm: Float32Array, peakMap: Float32Array): PlanPeakMap['bands'] {
-  const order: number[] = [];
-  for (let k = 0; k < depthsMm.length; k++) if (depthsMm[k]! > 0 && Number.isFinite(peakMap[k]!)) order.push(k);
-  order.sort((a, b) => depthsMm[a]! - depthsMm[b]!);
-  const bands: { upToMm: number; peakC: number }[] = [];
-  let lastDepth = 0;
-  for (const k of order) {
-    const peakC = round(peakMap[k]!, 2);
-    const d = depthsMm[k]!;
-    const open = bands.at(-1);
-    if (open && open.peakC === peakC) {
-      lastDepth = d;
-      continue;
-    }
-    if (open) open.upToMm = round((lastDepth + d) / 2, bandDigits);
-    bands.push({ upToMm: d, peakC });
-    lastDepth = d;
-  }
-  const closing = bands.at(-1);
-  if (closing) closing.upToMm = round(lastDepth, bandDigits) + 10 ** -bandDigits;
-  return bands;
-}
-
-/** The painted peak of a column of this resin depth; null where no resin stands or beyond the table. */
-export function peakAtDepth(bands: PlanPeakMap['bands'], depthMm: number): number | null {
-  if (!(depthMm > 0) || bands.length === 0) return null;
-  let lo = 0;
-  let hi = bands.length - 1;
-  if (depthMm > bands[hi]!.upToMm) return null;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (bands[mid]!.upToMm >= depthMm) hi = mid;
-    else lo = mid + 1;
-  }
-  return bands[lo]!.peakC;
 }
 
 /** Each planned layer's forecast: a quick shape's uniform depth, or a mould's depth map by depth classes (with its peak map). */

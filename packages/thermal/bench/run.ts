@@ -5,7 +5,16 @@
  * forecast (depth classes), and the same columns forecast one by one as the reference, measured in
  * the same run on a sample of columns and scaled to the whole map (all of them would take minutes).
  */
-import { calibrateToDataSheet, dgebaAmineDefaults, forecastLayer, forecastMould, proposeLayers, type PlannedLayer, type ResinThermal } from '../src/index';
+import {
+  calibrateToDataSheet,
+  dgebaAmineDefaults,
+  forecastLayer,
+  forecastMould,
+  peakBandsOf,
+  proposeLayers,
+  type PlannedLayer,
+  type ResinThermal,
+} from '../src/index';
 
 function must<T>(r: { ok: true; value: T } | { ok: false; error: { message: string } }): T {
   if (!r.ok) throw new Error(r.error.message);
@@ -57,6 +66,14 @@ for (let r = 0; r < runs; r++) {
   const t = time(() => must(forecastMould(resin, conditions, { depthsMm: depths, nx: n, ny: n, cellMm }, layers)));
   mouldMs.push(t.ms);
   mould = t.out;
+}
+// What a plan adds on top: the table from resin depth to peak that the screens paint.
+const bandsMs: number[] = [];
+let bandCount = 0;
+for (let r = 0; r < runs; r++) {
+  const t = time(() => peakBandsOf(depths, mould.peakMap));
+  bandsMs.push(t.ms);
+  bandCount = t.out.length;
 }
 
 // Reference: the same columns forecast one at a time (every column its own 1-D forecast per layer).
@@ -116,6 +133,9 @@ console.log(
   `layer proposal for ${maxDepth.toFixed(1)} mm at 24 °C          ${fmt(proposal.ms)}  (${proposal.out.layers.length} layers of ${proposal.out.layers[0]?.thicknessMm.toFixed(1)} mm)`,
 );
 console.log(`whole mould, depth classes (median of ${runs})    ${fmt(median(mouldMs))}  (classes per layer: ${classes.join(', ')}; budget 200 ms)`);
+console.log(
+  `peak table for the screens (median of ${runs})   ${fmt(median(bandsMs))}  (${bandCount} bands; with the mould ${fmt(median(mouldMs) + median(bandsMs))} of the 200 ms budget)`,
+);
 console.log(`reference, every column on its own             ${fmt(perColumnWholeMs)}  (scaled from ${sample} sampled columns, ${fmt(perColumn.ms)})`);
 console.log(`ratio reference / classes                      ${(perColumnWholeMs / median(mouldMs)).toFixed(0)}×`);
 console.log(`classes minus per-column peak on the sample    ${minGapK.toFixed(3)} to ${worstGapK.toFixed(3)} K (never below 0: classes err hot)`);

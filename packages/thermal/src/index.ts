@@ -26,5 +26,6 @@ export {
   type ProposedLayer,
 } from './calibration';
 export { forecastMould, type DepthGrid, type MouldForecast, type MouldLayerForecast, type MouldOptions, type PlannedLayer } from './mould-forecast';
+export { peakAtDepth, peakBandsOf, type PeakBand } from './peak-bands';
 export { cupPotLife, type CupInput, type CupPotLife } from './cup-pot-life';
 export { exothermCaution, forecastSingleLayer, type SingleLayerForecast, type SingleLayerInput } from './single-layer';
