@@ -38,12 +38,13 @@ export function HeatMapView({ map, peakMap, shopTempC, limitC, unitSystem }: Hea
   // The ring at the hottest column, in percent of the drawing (y flipped: the far edge is at the top).
   const ringX = ((peakMap.hottest.xMm - map.originMm[0]) / widthMm) * 100;
   const ringY = (1 - (peakMap.hottest.yMm - map.originMm[1]) / depthMm) * 100;
+  // The legend runs from the shop's temperature to the accepted peak, or on to the hottest spot when that is over it.
   const hottest = Math.max(limitC, peakMap.hottest.peakC);
-  const stops = [shopTempC, (shopTempC + limitC) / 2, limitC].map(
-    (c) => `${cssColour(heatColour(c, shopTempC, limitC))} ${(((c - shopTempC) / (hottest - shopTempC)) * 100).toFixed(1)}%`,
-  );
-  const gradient = `linear-gradient(to right, ${stops.join(', ')}${hottest > limitC ? `, ${cssColour(heatColour(hottest, shopTempC, limitC))} ${(((limitC - shopTempC) / (hottest - shopTempC)) * 100 + 0.1).toFixed(1)}%` : ''})`;
-  const limitAt = ((limitC - shopTempC) / (hottest - shopTempC)) * 100;
+  const at = (c: number) => ((c - shopTempC) / Math.max(1e-9, hottest - shopTempC)) * 100;
+  const stop = (c: number, pct = at(c)) => `${cssColour(heatColour(c, shopTempC, limitC))} ${pct.toFixed(1)}%`;
+  const stops = [stop(shopTempC), stop((shopTempC + limitC) / 2), stop(limitC), ...(hottest > limitC ? [stop(hottest, at(limitC) + 0.1)] : [])];
+  const gradient = `linear-gradient(to right, ${stops.join(', ')})`;
+  const limitAt = at(limitC);
 
   return (
     <figure className="flex flex-col gap-2" aria-label="Forecast peak temperature over the mould">
