@@ -1,13 +1,14 @@
 import jpeg from 'jpeg-js';
 import jsQR from 'jsqr';
-import type { BrowserContext, Locator, Page, Route } from 'playwright-core';
+import type { BrowserContext, Locator, Page } from 'playwright-core';
 import { PNG } from 'pngjs';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, onTestFinished } from 'vitest';
 import { watchedPage, type PageWatch } from './support/browser';
 import { apiSession, type ApiSession } from './support/api-session';
 import { deepPourProduct } from './support/deep-pour-product';
 import { signInThroughPage } from './support/sign-in';
 import { useBrowserStack } from './support/use-browser-stack';
+import { openWifiGap, type WifiGap } from './support/wifi-gap';
 
 // The shop floor: the app installed on a phone, logging through a Wi-Fi gap, QR codes on what is printed, photos
 // from the camera. Everything it pours is its own (a product, a piece and plans with unique names).
@@ -49,20 +50,20 @@ async function planToPour(label: string, start: boolean): Promise<PourSetup> {
 }
 
 /** The browser's own complaints about requests it could not make while offline are the point of the test. */
-const problemsBesidesOffline = (watch: PageWatch) => watch.problems.filter((p) => !/ERR_INTERNET_DISCONNECTED|Failed to fetch|net::ERR_FAILED/.test(p));
+const problemsBesidesOffline = (watch: PageWatch) =>
+  watch.problems.filter((p) => !/ERR_INTERNET_DISCONNECTED|ERR_CONNECTION_(REFUSED|RESET|CLOSED)|ERR_EMPTY_RESPONSE|Failed to fetch|net::ERR_FAILED/.test(p));
 
 /**
- * The Wi-Fi gone: the browser offline, and every request to the API refused as a dropped connection would refuse
- * it. Chromium's offline emulation alone lets some requests of a page that a service worker controls through after
- * a reload (Playwright issue 2311), which no phone would.
+ * The Wi-Fi gone: the browser told it is offline, and the relay the phone reaches the server through cut, so no request
+ * gets out, the service worker's included (the browser's offline emulation alone lets some of those through after a
+ * reload, which no phone would).
  */
-const refuseApi = (route: Route) => route.abort('internetdisconnected');
-async function cutNetwork(context: BrowserContext): Promise<void> {
+async function cutNetwork(context: BrowserContext, wifi: WifiGap): Promise<void> {
   await context.setOffline(true);
-  await context.route(`${stack.baseUrl}/api/**`, refuseApi);
+  await wifi.cut();
 }
-async function restoreNetwork(context: BrowserContext): Promise<void> {
-  await context.unroute(`${stack.baseUrl}/api/**`, refuseApi);
+async function restoreNetwork(context: BrowserContext, wifi: WifiGap): Promise<void> {
+  await wifi.restore();
   await context.setOffline(false);
 }
 
@@ -106,9 +107,9 @@ function storedQueryKeys(page: Page): Promise<unknown[]> {
   });
 }
 
-async function openPhone(): Promise<{ context: BrowserContext; page: Page; watch: PageWatch }> {
+async function openPhone(baseUrl = stack.baseUrl): Promise<{ context: BrowserContext; page: Page; watch: PageWatch }> {
   const context = await e2e.browser().newContext(phone);
-  const { page, watch } = await watchedPage(context, stack.baseUrl);
+  const { page, watch } = await watchedPage(context, baseUrl);
   return { context, page, watch };
 }
 
@@ -145,15 +146,17 @@ describe('the shop floor', () => {
 
   it('keeps a batch and a reading logged offline through a reload and sends each exactly once when the connection returns', { timeout: 120_000 }, async () => {
     const setup = await planToPour('offline', true);
-    const { context, page, watch } = await openPhone();
-    await signInThroughPage(page, stack.baseUrl, 'apprentice@gelpoint.test');
-    await page.goto(`${stack.baseUrl}/pours/${setup.pourId}`);
+    const wifi = await openWifiGap(stack.baseUrl);
+    onTestFinished(() => wifi.close());
+    const { context, page, watch } = await openPhone(wifi.url);
+    await signInThroughPage(page, wifi.url, 'apprentice@gelpoint.test');
+    await page.goto(`${wifi.url}/pours/${setup.pourId}`);
     await expect.poll(() => page.getByRole('heading', { level: 1, name: setup.pieceName }).isVisible(), firstLoad).toBe(true);
     await waitForServiceWorker(page);
     // The copy of the page's data is written to IndexedDB a moment after the page settles.
     await expect.poll(() => storedQueryKeys(page)).toContainEqual(['pours', 'detail', setup.pourId]);
 
-    await cutNetwork(context);
+    await cutNetwork(context, wifi);
     const card = page.getByRole('region', { name: /^Cup 1 of/ });
     await card.getByRole('button', { name: 'Start mixing' }).click();
     const form = card.getByRole('form', { name: 'Log cup 1' });
@@ -182,7 +185,7 @@ describe('the shop floor', () => {
     const before = await setup.apprentice.get<{ batches: unknown[]; readings: unknown[] }>(`/pours/${setup.pourId}`);
     expect([before.batches.length, before.readings.length]).toEqual([0, 0]);
 
-    await restoreNetwork(context);
+    await restoreNetwork(context, wifi);
     await expect.poll(() => waiting.isVisible(), { timeout: 30_000 }).toBe(false);
     await expect.poll(() => card.textContent(), { timeout: 15_000 }).toMatch(/Logged[\s\S]*Mixed by/);
     const pour = await setup.apprentice.get<{ batches: { lotA: string }[]; readings: { tempC: number }[] }>(`/pours/${setup.pourId}`);
@@ -195,11 +198,13 @@ describe('the shop floor', () => {
 
   it('keeps an entry the server refuses on the phone, in plain words, until the person discards it', { timeout: 90_000 }, async () => {
     const setup = await planToPour('refused', true);
-    const { context, page, watch } = await openPhone();
-    await signInThroughPage(page, stack.baseUrl, 'apprentice@gelpoint.test');
-    await page.goto(`${stack.baseUrl}/pours/${setup.pourId}`);
+    const wifi = await openWifiGap(stack.baseUrl);
+    onTestFinished(() => wifi.close());
+    const { context, page, watch } = await openPhone(wifi.url);
+    await signInThroughPage(page, wifi.url, 'apprentice@gelpoint.test');
+    await page.goto(`${wifi.url}/pours/${setup.pourId}`);
     await expect.poll(() => page.getByRole('heading', { level: 1, name: setup.pieceName }).isVisible(), firstLoad).toBe(true);
-    await cutNetwork(context);
+    await cutNetwork(context, wifi);
     const card = page.getByRole('region', { name: /^Cup 1 of/ });
     await card.getByRole('button', { name: 'Log this batch' }).click();
     const form = card.getByRole('form', { name: 'Log cup 1' });
@@ -212,7 +217,7 @@ describe('the shop floor', () => {
 
     // Meanwhile the maker logs the same cup from the bench computer.
     await setup.maker.post(`/pours/${setup.pourId}/batches`, { planBatchIndex: 0, weighedAG: setup.cup.partA.grams, weighedBG: setup.cup.partB.grams });
-    await restoreNetwork(context);
+    await restoreNetwork(context, wifi);
     const panel = page.getByRole('region', { name: 'Not sent yet' });
     await expect.poll(() => panel.getByText('1 entry needs you').isVisible(), { timeout: 30_000 }).toBe(true);
     await expect.poll(() => panel.getByText(/already logged/).isVisible()).toBe(true);

@@ -1,5 +1,6 @@
 import { can } from '@gelpoint/contracts';
 import { useQuery } from '@tanstack/react-query';
+import { useMemo } from 'react';
 import { useNavigate, useParams } from 'react-router';
 import { Alert } from '../../../../components/ui/Alert';
 import { ButtonLink } from '../../../../components/ui/ButtonLink';
@@ -36,9 +37,9 @@ export function Component() {
   const mold = useMold(plan.data?.moldId ?? null);
   const mayPlan = can(session.role, 'plan:change');
   // A mould plan's depth map at its level, to draw the forecast peak over the mould.
-  const savedInput = plan.data ? readSavedPlan(plan.data) : null;
-  const cavity = savedInput?.ok ? savedInput.value.input?.cavity : undefined;
-  const fillLevelMm = savedInput?.ok ? savedInput.value.input?.fillLevelMm : undefined;
+  const read = useMemo(() => (plan.data ? readSavedPlan(plan.data) : null), [plan.data]);
+  const cavity = read?.ok ? read.value.input?.cavity : undefined;
+  const fillLevelMm = read?.ok ? read.value.input?.fillLevelMm : undefined;
   const mapKey = cavity?.source === 'mold' && typeof fillLevelMm === 'number' ? { levelMm: fillLevelMm, dam: cavity.dam ?? 'outline', depthMap: true } : null;
   const fill = useQuery({
     ...moldFillQueryOptions(plan.data?.moldId ?? '', mapKey ?? { levelMm: 0, dam: 'outline', depthMap: true }, mold.data?.analysedAt ?? null),
@@ -50,7 +51,8 @@ export function Component() {
   if (shop.error) return <ErrorAlert error={shop.error} />;
   if (!plan.data || !shop.data) return <PageSpinner label="Loading the plan…" />;
   const current = plan.data;
-  const saved = readSavedPlan(current);
+  // Read once above (the stored result is parsed through its schema), for the depth map's key and for the page.
+  const saved = read ?? readSavedPlan(current);
 
   return (
     <>
