@@ -6,6 +6,7 @@
 // The next run hashes the same files again and skips the target when nothing changed and every
 // output is still there. `--force` rebuilds everything; target names pick some (`node build.mjs cli`).
 import { createHash } from 'node:crypto';
+import { createRequire } from 'node:module';
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
@@ -39,7 +40,7 @@ const nodeTargets = [
 
 // Everything the web build reads; its own dist, tests and benchmarks are left out.
 const webInputs = {
-  dirs: ['apps/web/src', 'apps/web/public', 'packages/core/src', 'packages/contracts/src'],
+  dirs: ['apps/web/src', 'apps/web/public', 'packages/core/src', 'packages/contracts/src', 'packages/mesh/src', 'packages/thermal/src'],
   files: [
     'apps/web/index.html',
     'apps/web/vite.config.ts',
@@ -48,6 +49,8 @@ const webInputs = {
     'apps/web/tsconfig.json',
     'packages/core/package.json',
     'packages/contracts/package.json',
+    'packages/mesh/package.json',
+    'packages/thermal/package.json',
   ],
   skip: /\.test\.tsx?$/,
 };
@@ -135,8 +138,14 @@ async function buildNode(target) {
   writeStamp(target.name, { hash: hashFiles(inputs), inputs, outputs });
 }
 
+/**
+ * The web app's own Vite, the version its package.json pins: the repository's root holds another one, which the test
+ * runner brought, and a different Vite splits the app into different chunks.
+ */
+const webVite = join(dirname(createRequire(join(root, 'apps/web/package.json')).resolve('vite/package.json')), 'bin/vite.js');
+
 function buildWeb() {
-  const r = spawnSync(process.execPath, [join(root, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], {
+  const r = spawnSync(process.execPath, [webVite, 'build', '--logLevel', 'warn'], {
     cwd: join(root, 'apps/web'),
     stdio: 'inherit',
   });
