@@ -61,6 +61,22 @@ describe('cup pot life', () => {
     expect(warm.sheetPotLifeAtAmbientMin).toBeLessThan(13);
   });
 
+  it('heats the middle of a big cup as an adiabatic mass would: ΔT = ΔH·α / cp', () => {
+    // First law for a mass that neither gains nor loses heat (Incropera, Fundamentals of Heat and Mass Transfer, ch. 1,
+    // energy balance with generation): cp·dT = ΔH·dα, so the rise is ΔH/cp times the conversion reached. The middle
+    // of a 20 kg cup is centimetres from its wall; the heat conducted in or out within one pot life is negligible
+    // (r²/α of hours for resin, α ≈ 1.2e−7 m²/s).
+    const big = cupPotLife(resin, { massG: 20_000, ambientC: 20, sheetPotLifeMin: 25, sheetPotLifeTempC: 25 });
+    if (!big.ok) throw new Error(big.error.message);
+    const { centreC, centreConversion } = big.value;
+    const adiabaticRiseK = resin.reactionHeatJPerG / resin.heatCapacityJPerGK;
+    expect(centreConversion).toBeGreaterThan(0.1);
+    expect(centreC - 20).toBeCloseTo(adiabaticRiseK * centreConversion, 0);
+    expect(Math.abs(centreC - 20 - adiabaticRiseK * centreConversion) / (adiabaticRiseK * centreConversion)).toBeLessThan(0.01);
+    // And never past the full adiabatic rise.
+    expect(big.value.peakC - 20).toBeLessThanOrEqual(adiabaticRiseK * (1 + 1e-9));
+  });
+
   it('refuses a cup without mass', () => {
     const r = cupPotLife(resin, { massG: 0, ambientC: 25, sheetPotLifeMin: 25 });
     if (r.ok) throw new Error('accepted an empty cup');

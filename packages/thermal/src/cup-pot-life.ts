@@ -27,6 +27,9 @@ export interface CupPotLife {
   limitedBy: 'cup_heating' | 'data_sheet';
   /** Hottest point of the cup (its centre) by the end of the pot life. */
   peakC: number;
+  /** The cup's centre when the pot life ends: its temperature and how far it has cured. */
+  centreC: number;
+  centreConversion: number;
   /** Conversion that ends the pot life: what a thin film reaches in the data sheet's pot life. */
   thresholdConversion: number;
   /** Radius of the sphere of the cup's volume. */
@@ -93,6 +96,9 @@ export function cupPotLife(resin: ResinThermal, cup: CupInput): Result<CupPotLif
     sheetPotLifeAtAmbientMin: sheetAtAmbientS / 60,
     limitedBy,
     peakC: Math.max(...run.finalTempC, run.peakC),
+    // Depth is measured in from the surface, so the last node is the centre.
+    centreC: run.finalTempC[run.finalTempC.length - 1]!,
+    centreConversion: run.finalConversion[run.finalConversion.length - 1]!,
     thresholdConversion: threshold,
     radiusMm: radiusM * 1000,
   });
