@@ -34,10 +34,7 @@ async function start(): Promise<void> {
     fail(isMailSinkError(error) ? startupLine(error) : `could not start (${String(error)})`);
   }
 
-  console.log(
-    `mail sink: SMTP on ${config.host}:${sink.smtpPort}, mail at http://${config.host}:${sink.httpPort}/ (${sink.messages().length} kept in ${config.dataDir})`,
-  );
-
+  // Listening for the stop signals before the line that says it is ready: whoever reads that line may stop it at once.
   let stopping = false;
   const stop = (signal: NodeJS.Signals) => {
     if (stopping) {
@@ -54,6 +51,10 @@ async function start(): Promise<void> {
   };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);
+
+  console.log(
+    `mail sink: SMTP on ${config.host}:${sink.smtpPort}, mail at http://${config.host}:${sink.httpPort}/ (${sink.messages().length} kept in ${config.dataDir})`,
+  );
 }
 
 void start();

@@ -62,6 +62,9 @@ const wakeAll = () => {
 };
 const task = cron.schedule(config.cron, wakeAll, { name: 'gelpoint-tick', noOverlap: true });
 const wakeup = listenForWork(config.databaseUrl, (channel) => (channel === MOLD_ANALYSIS_CHANNEL ? moulds : chores).wake(), logger);
+// Listening for the stop signals before the line that says it started: whoever reads that line may stop it at once.
+process.on('SIGTERM', () => void shutdown('SIGTERM'));
+process.on('SIGINT', () => void shutdown('SIGINT'));
 logger.info({ cron: config.cron }, 'worker started');
 wakeAll();
 
@@ -86,5 +89,3 @@ async function shutdown(signal: string) {
   logger.info('worker stopped');
   process.exit(finished ? 0 : 1);
 }
-process.on('SIGTERM', () => void shutdown('SIGTERM'));
-process.on('SIGINT', () => void shutdown('SIGINT'));
