@@ -188,8 +188,17 @@ export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerL
         <>
           <mesh position={[surface.centre[0], surface.centre[1], levelMm]}>
             <planeGeometry args={surface.size} />
-            {/* Unlit and opaque, so each column shows the scale's own colour; dry columns are cut out. */}
-            <meshBasicMaterial key={surface.texture?.uuid} map={surface.texture} alphaTest={0.5} side={DoubleSide} polygonOffset polygonOffsetFactor={-2} />
+            {/* Unlit, opaque and out of the renderer's tone mapping, so each column shows the scale's own colour, as on the
+                map seen from above and the legend; dry columns are cut out. */}
+            <meshBasicMaterial
+              key={surface.texture?.uuid}
+              map={surface.texture}
+              alphaTest={0.5}
+              toneMapped={false}
+              side={DoubleSide}
+              polygonOffset
+              polygonOffsetFactor={-2}
+            />
           </mesh>
           <mesh position={[surface.heat.hottestMm[0], surface.heat.hottestMm[1], levelMm + surface.heat.markerMm / 2]}>
             <torusGeometry args={[surface.heat.markerMm * 2, surface.heat.markerMm / 2, 8, 32]} />

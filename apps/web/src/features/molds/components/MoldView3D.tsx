@@ -81,8 +81,8 @@ export function MoldView3D({ mold, report, fill, floorMm, levelMm, layerLevelsMm
           <>
             <span className="font-semibold">{hottestSpotWords(heat.peakMap, heat.limitC, unitSystem)}</span>
             <span className="text-sm text-ink-soft">
-              The resin surface is coloured by the forecast peak of the resin below it, an estimate, from {temp(heat.shopTempC)} (pale) to{' '}
-              {temp(heat.limitC)} at the accepted peak (brick red); plum is over it. The hottest spot is ringed.
+              The resin surface is coloured by the forecast peak of the resin below it, an estimate, from {temp(heat.shopTempC)} (pale) to {temp(heat.limitC)}{' '}
+              at the accepted peak (brick red); plum is over it. The hottest spot is ringed.
             </span>
           </>
         ) : null}
