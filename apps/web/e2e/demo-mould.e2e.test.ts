@@ -57,6 +57,15 @@ describe("the demo shop's mould in a real browser", () => {
     const heat = stored.getByRole('figure', { name: 'Forecast peak temperature over the mould' });
     await expect.poll(() => heat.getByRole('img', { name: /^Map of the forecast peak temperature seen from above/ }).count()).toBe(1);
     expect(await heat.getByText(/^Hottest spot: \d+(\.\d)? °C in layer 1/).isVisible()).toBe(true);
+    // The same forecast on the mould in 3D, loaded only when chosen: its own legend, and the same hottest spot in words.
+    const hottestWords = (await heat.getByText(/^Hottest spot:/).textContent())!;
+    await stored.getByRole('radio', { name: 'On the mould in 3D' }).check();
+    const heat3d = stored.getByRole('figure', { name: 'Forecast peak temperature on the mould in 3D' });
+    await expect.poll(() => heat3d.locator('[data-testid="mold-3d"] canvas').count(), { timeout: 15_000 }).toBe(1);
+    expect(await heat3d.getByTestId('heat-legend').isVisible()).toBe(true);
+    expect(await heat3d.getByText(hottestWords, { exact: true }).isVisible()).toBe(true);
+    expect(await heat3d.getByText(/coloured by the forecast peak .*, an estimate,/).isVisible()).toBe(true);
+    expect(await heat.count()).toBe(0);
 
     expect(watch.problems).toEqual([]);
     await context.close();

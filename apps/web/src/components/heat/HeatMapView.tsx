@@ -1,6 +1,7 @@
 import { formatLength, formatTemperature, type PlanPeakMap, type UnitSystem } from '@gelpoint/core';
 import { useEffect, useRef } from 'react';
-import { cssColour, heatColour, heatPixels, type HeatDepthMap } from './heat-colours';
+import { heatPixels, type HeatDepthMap } from './heat-colours';
+import { HeatLegend } from './HeatLegend';
 
 export interface HeatMapViewProps {
   map: HeatDepthMap;
@@ -38,13 +39,6 @@ export function HeatMapView({ map, peakMap, shopTempC, limitC, unitSystem }: Hea
   // The ring at the hottest column, in percent of the drawing (y flipped: the far edge is at the top).
   const ringX = ((peakMap.hottest.xMm - map.originMm[0]) / widthMm) * 100;
   const ringY = (1 - (peakMap.hottest.yMm - map.originMm[1]) / depthMm) * 100;
-  // The legend runs from the shop's temperature to the accepted peak, or on to the hottest spot when that is over it.
-  const hottest = Math.max(limitC, peakMap.hottest.peakC);
-  const at = (c: number) => ((c - shopTempC) / Math.max(1e-9, hottest - shopTempC)) * 100;
-  const stop = (c: number, pct = at(c)) => `${cssColour(heatColour(c, shopTempC, limitC))} ${pct.toFixed(1)}%`;
-  const stops = [stop(shopTempC), stop((shopTempC + limitC) / 2), stop(limitC), ...(hottest > limitC ? [stop(hottest, at(limitC) + 0.1)] : [])];
-  const gradient = `linear-gradient(to right, ${stops.join(', ')})`;
-  const limitAt = at(limitC);
 
   return (
     <figure className="flex flex-col gap-2" aria-label="Forecast peak temperature over the mould">
@@ -63,16 +57,7 @@ export function HeatMapView({ map, peakMap, shopTempC, limitC, unitSystem }: Hea
           style={{ left: `${ringX}%`, top: `${ringY}%` }}
         />
       </div>
-      <div className="flex max-w-md flex-col gap-1" aria-hidden="true">
-        <div className="relative h-3 rounded border border-line" style={{ background: gradient }}>
-          <span className="absolute -top-1 h-5 border-l-2 border-dashed border-walnut-900" style={{ left: `${limitAt}%` }} />
-        </div>
-        <div className="flex justify-between text-sm text-ink-soft">
-          <span>{temp(shopTempC)}</span>
-          <span>accepted peak {temp(limitC)}</span>
-          {hottest > limitC ? <span>{temp(hottest)}</span> : null}
-        </div>
-      </div>
+      <HeatLegend shopTempC={shopTempC} limitC={limitC} hottestC={peakMap.hottest.peakC} unitSystem={unitSystem} />
       <figcaption className="font-semibold">{words}</figcaption>
     </figure>
   );

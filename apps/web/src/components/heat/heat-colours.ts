@@ -30,24 +30,37 @@ export function heatColour(peakC: number, shopTempC: number, limitC: number): Rg
 
 export const cssColour = ([r, g, b]: Rgb) => `rgb(${Math.round(r)} ${Math.round(g)} ${Math.round(b)})`;
 
+/** What it takes to paint the forecast over a mould: its depth map, the plan's peak table and the scale's two ends. */
+export interface ForecastHeat {
+  map: HeatDepthMap;
+  peakMap: PlanPeakMap;
+  shopTempC: number;
+  limitC: number;
+}
+
+/**
+ * The map painted as RGBA pixels in the depth map's own order: one per column, row 0 the mould's near edge (smallest
+ * y), x to the right. Columns without resin stay transparent.
+ */
+export function heatColumns(map: HeatDepthMap, bands: PlanPeakMap['bands'], shopTempC: number, limitC: number): Uint8ClampedArray<ArrayBuffer> {
+  const pixels = new Uint8ClampedArray(map.nx * map.ny * 4);
+  for (let k = 0; k < map.nx * map.ny; k++) {
+    const peak = peakAtDepth(bands, map.depthsMm[k]!);
+    if (peak === null) continue;
+    const [r, g, b] = heatColour(peak, shopTempC, limitC);
+    pixels.set([r, g, b, 255], k * 4);
+  }
+  return pixels;
+}
+
 /**
  * The map painted as RGBA pixels, one per column, row 0 at the top (the mould's far edge, largest y), so it reads as
  * seen from above with x to the right. Columns without resin stay transparent.
  */
 export function heatPixels(map: HeatDepthMap, bands: PlanPeakMap['bands'], shopTempC: number, limitC: number): Uint8ClampedArray<ArrayBuffer> {
-  const pixels = new Uint8ClampedArray(map.nx * map.ny * 4);
-  for (let j = 0; j < map.ny; j++) {
-    const row = map.ny - 1 - j;
-    for (let i = 0; i < map.nx; i++) {
-      const peak = peakAtDepth(bands, map.depthsMm[j * map.nx + i]!);
-      if (peak === null) continue;
-      const [r, g, b] = heatColour(peak, shopTempC, limitC);
-      const at = (row * map.nx + i) * 4;
-      pixels[at] = r;
-      pixels[at + 1] = g;
-      pixels[at + 2] = b;
-      pixels[at + 3] = 255;
-    }
-  }
+  const columns = heatColumns(map, bands, shopTempC, limitC);
+  const pixels = new Uint8ClampedArray(columns.length);
+  const rowBytes = map.nx * 4;
+  for (let j = 0; j < map.ny; j++) pixels.set(columns.subarray(j * rowBytes, (j + 1) * rowBytes), (map.ny - 1 - j) * rowBytes);
   return pixels;
 }

@@ -1,10 +1,22 @@
 import { Canvas, useThree } from '@react-three/fiber';
 import { useEffect, useMemo } from 'react';
-import { BufferGeometry, DataTexture, DoubleSide, Float32BufferAttribute, Matrix4, NearestFilter, RGBAFormat, type BufferGeometry as Geometry } from 'three';
+import {
+  BufferGeometry,
+  DataTexture,
+  DoubleSide,
+  Float32BufferAttribute,
+  Matrix4,
+  NearestFilter,
+  RGBAFormat,
+  SRGBColorSpace,
+  type BufferGeometry as Geometry,
+} from 'three';
 import { readMouldFile } from '@gelpoint/mesh';
 import { OrbitControls } from 'three-stdlib';
+import type { ForecastHeat } from '../../../components/heat/heat-colours';
 import type { CavityReport, DepthMap, MoldFileUnits, UpAxis } from '../types';
 import { mmPerFileUnit } from '../utils/file-units';
+import { heatSurface, mapPlane } from '../utils/heat-surface';
 import { resinOutlines } from '../utils/resin-outline';
 import { upAxisTurn } from '../utils/up-axis-turn';
 
@@ -22,6 +34,8 @@ export interface MoldSceneProps {
   footprint: DepthMap | undefined;
   /** The level the footprint's depths were measured at (it may trail the slider by a moment). */
   footprintLevelMm: number | undefined;
+  /** The forecast peak per column: when given, the resin surface is coloured by it instead of plain resin. */
+  heat?: ForecastHeat | undefined;
   describedBy: string;
 }
 
@@ -59,6 +73,15 @@ function layerLineGeometry(mold: Geometry, topsMm: readonly number[], footprint:
 
 const resinRgb = [214, 152, 36] as const;
 
+// Row iy of a map is row iy of the texture from the bottom, the plane's −y edge: the same way round.
+function columnTexture(pixels: Uint8Array, nx: number, ny: number): DataTexture {
+  const texture = new DataTexture(pixels, nx, ny, RGBAFormat);
+  texture.magFilter = NearestFilter;
+  texture.minFilter = NearestFilter;
+  texture.needsUpdate = true;
+  return texture;
+}
+
 /** The wet columns of the depth map as an opaque-or-clear texture, so the resin surface shows only where resin is. */
 function footprintTexture(map: DepthMap): DataTexture {
   const pixels = new Uint8Array(map.nx * map.ny * 4);
@@ -66,27 +89,32 @@ function footprintTexture(map: DepthMap): DataTexture {
     if (!(depthMm > 0)) return;
     pixels.set([...resinRgb, 255], i * 4);
   });
-  // Row iy of the map is row iy of the texture from the bottom, the plane's −y edge: the same way round.
-  const texture = new DataTexture(pixels, map.nx, map.ny, RGBAFormat);
-  texture.magFilter = NearestFilter;
-  texture.minFilter = NearestFilter;
-  texture.needsUpdate = true;
-  return texture;
+  return columnTexture(pixels, map.nx, map.ny);
 }
 
 interface ResinSurface {
   centre: [number, number];
   size: [number, number];
   texture: DataTexture | null;
+  /** With a forecast: the colours are the heat scale's own, and the hottest column is marked. */
+  heat: { hottestMm: [number, number]; markerMm: number } | null;
 }
 
-function resinSurface(bboxMm: CavityReport['bboxMm'], footprint: DepthMap | undefined): ResinSurface {
+function resinSurface(bboxMm: CavityReport['bboxMm'], footprint: DepthMap | undefined, heat: ForecastHeat | undefined): ResinSurface {
+  if (heat) {
+    const painted = heatSurface(heat);
+    const texture = columnTexture(painted.pixels, painted.nx, painted.ny);
+    // The scale's colours are sRGB, as the top-down map and the legend draw them; unlit, they come out the same.
+    texture.colorSpace = SRGBColorSpace;
+    const markerMm = Math.max(painted.sizeMm[0], painted.sizeMm[1]) / 60;
+    return { centre: painted.centreMm, size: painted.sizeMm, texture, heat: { hottestMm: painted.hottestMm, markerMm } };
+  }
   if (!footprint) {
     const size: [number, number] = [(bboxMm.max[0] - bboxMm.min[0]) * 1.02, (bboxMm.max[1] - bboxMm.min[1]) * 1.02];
-    return { centre: [(bboxMm.max[0] + bboxMm.min[0]) / 2, (bboxMm.max[1] + bboxMm.min[1]) / 2], size, texture: null };
+    return { centre: [(bboxMm.max[0] + bboxMm.min[0]) / 2, (bboxMm.max[1] + bboxMm.min[1]) / 2], size, texture: null, heat: null };
   }
-  const size: [number, number] = [footprint.nx * footprint.cellMm[0], footprint.ny * footprint.cellMm[1]];
-  return { centre: [footprint.originMm[0] + size[0] / 2, footprint.originMm[1] + size[1] / 2], size, texture: footprintTexture(footprint) };
+  const plane = mapPlane(footprint);
+  return { centre: plane.centreMm, size: plane.sizeMm, texture: footprintTexture(footprint), heat: null };
 }
 
 function Controls({ target }: { target: readonly [number, number, number] }) {
@@ -110,8 +138,11 @@ function Controls({ target }: { target: readonly [number, number, number] }) {
   return null;
 }
 
-/** The mould in 3D, Z up as the report measured it, with the resin surface at the fill level and the layer lines. */
-export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerLevelsMm, footprint, footprintLevelMm, describedBy }: MoldSceneProps) {
+/**
+ * The mould in 3D, Z up as the report measured it, with the resin surface at the fill level and the layer lines; with a
+ * forecast, the surface is coloured by each column's forecast peak and the hottest column is ringed.
+ */
+export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerLevelsMm, footprint, footprintLevelMm, heat, describedBy }: MoldSceneProps) {
   const geometry = useMemo(() => moldGeometry(file, upAxis, units), [file, upAxis, units]);
   useEffect(() => () => geometry.dispose(), [geometry]);
   // The floor is where the first layer starts, not a layer of its own: lines go at the layers' tops.
@@ -120,7 +151,7 @@ export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerL
     [geometry, layerLevelsMm, footprint, footprintLevelMm],
   );
   useEffect(() => () => layerLines.dispose(), [layerLines]);
-  const surface = useMemo(() => resinSurface(bboxMm, footprint), [bboxMm, footprint]);
+  const surface = useMemo(() => resinSurface(bboxMm, footprint, heat), [bboxMm, footprint, heat]);
   useEffect(() => () => surface.texture?.dispose(), [surface]);
 
   const size = [0, 1, 2].map((k) => bboxMm.max[k]! - bboxMm.min[k]!);
@@ -153,21 +184,44 @@ export default function MoldScene({ file, upAxis, units, bboxMm, levelMm, layerL
         {/* Pushed back a hair in depth so the layer lines drawn on its walls are never hidden inside them. */}
         <meshStandardMaterial color={woodColour} roughness={0.85} metalness={0} polygonOffset polygonOffsetFactor={1} polygonOffsetUnits={1} />
       </mesh>
-      <mesh position={[surface.centre[0], surface.centre[1], levelMm]}>
-        <planeGeometry args={surface.size} />
-        {/* Pulled forward in depth so a level at the rim is not hidden inside the rim's own face. */}
-        <meshStandardMaterial
-          key={surface.texture ? surface.texture.uuid : 'plain'}
-          color={surface.texture ? '#ffffff' : resinColour}
-          map={surface.texture}
-          transparent
-          opacity={0.7}
-          side={DoubleSide}
-          depthWrite={false}
-          polygonOffset
-          polygonOffsetFactor={-2}
-        />
-      </mesh>
+      {surface.heat ? (
+        <>
+          <mesh position={[surface.centre[0], surface.centre[1], levelMm]}>
+            <planeGeometry args={surface.size} />
+            {/* Unlit, opaque and out of the renderer's tone mapping, so each column shows the scale's own colour, as on the
+                map seen from above and the legend; dry columns are cut out. */}
+            <meshBasicMaterial
+              key={surface.texture?.uuid}
+              map={surface.texture}
+              alphaTest={0.5}
+              toneMapped={false}
+              side={DoubleSide}
+              polygonOffset
+              polygonOffsetFactor={-2}
+            />
+          </mesh>
+          <mesh position={[surface.heat.hottestMm[0], surface.heat.hottestMm[1], levelMm + surface.heat.markerMm / 2]}>
+            <torusGeometry args={[surface.heat.markerMm * 2, surface.heat.markerMm / 2, 8, 32]} />
+            <meshBasicMaterial color={lineColour} />
+          </mesh>
+        </>
+      ) : (
+        <mesh position={[surface.centre[0], surface.centre[1], levelMm]}>
+          <planeGeometry args={surface.size} />
+          {/* Pulled forward in depth so a level at the rim is not hidden inside the rim's own face. */}
+          <meshStandardMaterial
+            key={surface.texture ? surface.texture.uuid : 'plain'}
+            color={surface.texture ? '#ffffff' : resinColour}
+            map={surface.texture}
+            transparent
+            opacity={0.7}
+            side={DoubleSide}
+            depthWrite={false}
+            polygonOffset
+            polygonOffsetFactor={-2}
+          />
+        </mesh>
+      )}
       {layerLevelsMm.length > 1 ? (
         <lineSegments geometry={layerLines}>
           <lineBasicMaterial color={lineColour} />

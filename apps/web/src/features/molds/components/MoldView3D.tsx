@@ -1,5 +1,8 @@
-import { formatLength, formatVolume, mm3ToMl, type UnitSystem } from '@gelpoint/core';
+import { formatLength, formatTemperature, formatVolume, mm3ToMl, type UnitSystem } from '@gelpoint/core';
 import { lazy, Suspense, useId } from 'react';
+import type { ForecastHeat } from '../../../components/heat/heat-colours';
+import { HeatLegend } from '../../../components/heat/HeatLegend';
+import { hottestSpotWords } from '../../../components/heat/HeatMapView';
 import { ErrorAlert } from '../../../components/ui/ErrorAlert';
 import { Spinner } from '../../../components/ui/Spinner';
 import { useMoldStl } from '../api/get-mold-stl';
@@ -21,10 +24,14 @@ export interface MoldView3DProps {
   /** The level the footprint was measured at. */
   footprintLevelMm: number | undefined;
   unitSystem: UnitSystem;
+  /** A plan's forecast peak per column: the resin surface is coloured by it, with the legend and the hottest spot. */
+  heat?: ForecastHeat | undefined;
 }
 
-export function MoldView3D({ mold, report, fill, floorMm, levelMm, layerLevelsMm, footprint, footprintLevelMm, unitSystem }: MoldView3DProps) {
+/** The mould in 3D with its resin surface at the level; given a forecast, that surface shows the forecast peak. */
+export function MoldView3D({ mold, report, fill, floorMm, levelMm, layerLevelsMm, footprint, footprintLevelMm, unitSystem, heat }: MoldView3DProps) {
   const descriptionId = useId();
+  const temp = (c: number) => formatTemperature(c, unitSystem).text;
   const stl = useMoldStl(mold.id);
   const size = [0, 1, 2].map((k) => formatLength(report.bboxMm.max[k]! - report.bboxMm.min[k]!, unitSystem).text).join(' × ');
   const layers =
@@ -41,7 +48,7 @@ export function MoldView3D({ mold, report, fill, floorMm, levelMm, layerLevelsMm
   );
 
   return (
-    <figure className="flex flex-col gap-2">
+    <figure className="flex flex-col gap-2" {...(heat ? { 'aria-label': 'Forecast peak temperature on the mould in 3D' } : {})}>
       <div className="h-80 overflow-hidden rounded-xl border border-line bg-paper sm:h-96" data-testid="mold-3d">
         <SceneErrorBoundary>
           {stl.data ? (
@@ -55,6 +62,7 @@ export function MoldView3D({ mold, report, fill, floorMm, levelMm, layerLevelsMm
                 layerLevelsMm={layerLevelsMm}
                 footprint={footprint}
                 footprintLevelMm={footprintLevelMm}
+                heat={heat}
                 describedBy={descriptionId}
               />
             </Suspense>
@@ -67,9 +75,21 @@ export function MoldView3D({ mold, report, fill, floorMm, levelMm, layerLevelsMm
           )}
         </SceneErrorBoundary>
       </div>
-      <figcaption id={descriptionId} className="text-sm text-ink-soft">
-        The mould, {size}, Z up as measured. The resin surface stands {formatLength(levelMm - floorMm, unitSystem).text} above the cavity floor:{' '}
-        {formatVolume(mm3ToMl(fill.volumeMm3), unitSystem).text}, {formatLength(fill.maxDepthMm, unitSystem).text} deep at the deepest spot.{layers}
+      {heat ? <HeatLegend shopTempC={heat.shopTempC} limitC={heat.limitC} hottestC={heat.peakMap.hottest.peakC} unitSystem={unitSystem} /> : null}
+      <figcaption id={descriptionId} className="flex flex-col gap-1">
+        {heat ? (
+          <>
+            <span className="font-semibold">{hottestSpotWords(heat.peakMap, heat.limitC, unitSystem)}</span>
+            <span className="text-sm text-ink-soft">
+              The resin surface is coloured by the forecast peak of the resin below it, an estimate, from {temp(heat.shopTempC)} (pale) to {temp(heat.limitC)}{' '}
+              at the accepted peak (brick red); plum is over it. The hottest spot is ringed.
+            </span>
+          </>
+        ) : null}
+        <span className="text-sm text-ink-soft">
+          The mould, {size}, Z up as measured. The resin surface stands {formatLength(levelMm - floorMm, unitSystem).text} above the cavity floor:{' '}
+          {formatVolume(mm3ToMl(fill.volumeMm3), unitSystem).text}, {formatLength(fill.maxDepthMm, unitSystem).text} deep at the deepest spot.{layers}
+        </span>
       </figcaption>
     </figure>
   );

@@ -1,8 +1,10 @@
 import { formatTemperature, type PlanForecast, type UnitSystem } from '@gelpoint/core';
+import { useState, type ReactNode } from 'react';
 import { HeatMapView } from '../../../components/heat/HeatMapView';
-import type { HeatDepthMap } from '../../../components/heat/heat-colours';
+import type { ForecastHeat, HeatDepthMap } from '../../../components/heat/heat-colours';
 import { forecastCurveGeometry, forecastWords } from '../utils/forecast-words';
 import { formatHours } from '../utils/plan-format';
+import { HeatViewChoice, type HeatView } from './HeatViewChoice';
 
 const width = 220;
 const height = 90;
@@ -54,13 +56,17 @@ export function ForecastBlock({
   unitSystem,
   spotWords,
   depthMap,
+  renderMould3D,
 }: {
   forecast: PlanForecast;
   unitSystem: UnitSystem;
   spotWords?: (xMm: number, yMm: number) => string;
   /** The mould's resin depth per column at the fill level: with a peak map, the forecast is drawn over it. */
   depthMap?: HeatDepthMap | undefined;
+  /** The mould in 3D with its surface coloured by the forecast, offered beside the map seen from above. */
+  renderMould3D?: ((heat: ForecastHeat) => ReactNode) | undefined;
 }) {
+  const [view, setView] = useState<HeatView>('above');
   if (!forecast.available) {
     return <p className="text-ink-soft">No heat forecast for this plan: {forecast.reason}</p>;
   }
@@ -78,7 +84,14 @@ export function ForecastBlock({
       )}
       <p>{words.basis}</p>
       {forecast.peakMap && depthMap ? (
-        <HeatMapView map={depthMap} peakMap={forecast.peakMap} shopTempC={forecast.shopTempC} limitC={forecast.limitC} unitSystem={unitSystem} />
+        <div className="flex flex-col gap-3">
+          {renderMould3D ? <HeatViewChoice view={view} onChange={setView} /> : null}
+          {renderMould3D && view === 'mould3d' ? (
+            renderMould3D({ map: depthMap, peakMap: forecast.peakMap, shopTempC: forecast.shopTempC, limitC: forecast.limitC })
+          ) : (
+            <HeatMapView map={depthMap} peakMap={forecast.peakMap} shopTempC={forecast.shopTempC} limitC={forecast.limitC} unitSystem={unitSystem} />
+          )}
+        </div>
       ) : null}
       <ul className="flex flex-col gap-3">
         {words.layers.map((l) => (

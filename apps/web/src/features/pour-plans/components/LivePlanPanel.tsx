@@ -1,16 +1,32 @@
-import type { UnitSystem } from '@gelpoint/core';
-import { useId } from 'react';
+import type { MoldFill, MoldView } from '@gelpoint/contracts';
+import type { PourPlan, UnitSystem } from '@gelpoint/core';
+import { useId, type ReactNode } from 'react';
+import type { ForecastHeat } from '../../../components/heat/heat-colours';
 import { Alert } from '../../../components/ui/Alert';
 import type { LivePlanState } from '../hooks/use-live-plan';
 import { PlanResult } from './PlanResult';
 
 const shownMissing = 4;
 
+/** The mould in 3D coloured by the live forecast: drawn by the page, which may reach the moulds' 3D view. */
+export type RenderPlanMould3D = (view: { heat: ForecastHeat; mold: MoldView; fill: MoldFill; plan: PourPlan }) => ReactNode;
+
 /** The numbers for the form as it stands, or what is still missing before there can be any. */
-export function LivePlanPanel({ live, unitSystem, currency }: { live: LivePlanState; unitSystem: UnitSystem; currency: string }) {
+export function LivePlanPanel({
+  live,
+  unitSystem,
+  currency,
+  renderMould3D,
+}: {
+  live: LivePlanState;
+  unitSystem: UnitSystem;
+  currency: string;
+  renderMould3D?: RenderPlanMould3D | undefined;
+}) {
   const headingId = useId();
   const missing = live.check.ok ? [] : Object.values(live.check.fieldErrors);
   const plan = live.result?.ok ? live.result.value : null;
+  const mould = live.mould;
 
   return (
     <section aria-labelledby={headingId} className="flex flex-col gap-4">
@@ -46,7 +62,16 @@ export function LivePlanPanel({ live, unitSystem, currency }: { live: LivePlanSt
           {live.result.error.message}
         </Alert>
       ) : null}
-      {plan ? <PlanResult plan={plan.plan} unitSystem={unitSystem} currency={currency} curve={plan.cavity.curve} depthMap={plan.cavity.depthMap} /> : null}
+      {plan ? (
+        <PlanResult
+          plan={plan.plan}
+          unitSystem={unitSystem}
+          currency={currency}
+          curve={plan.cavity.curve}
+          depthMap={plan.cavity.depthMap}
+          renderMould3D={renderMould3D && mould ? (heat) => renderMould3D({ heat, plan: plan.plan, ...mould }) : undefined}
+        />
+      ) : null}
     </section>
   );
 }

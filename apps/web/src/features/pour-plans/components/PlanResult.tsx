@@ -15,7 +15,7 @@ import { cautionsFor } from '../utils/caution-words';
 import { formatMoney } from '../../../lib/money';
 import { formatArea, formatHours, formatMinutes } from '../utils/plan-format';
 import { CautionList } from './CautionList';
-import type { HeatDepthMap } from '../../../components/heat/heat-colours';
+import type { ForecastHeat, HeatDepthMap } from '../../../components/heat/heat-colours';
 import { ForecastBlock } from './ForecastBlock';
 import { LayerChart } from './LayerChart';
 
@@ -28,6 +28,8 @@ export interface PlanResultProps {
   curve?: VolumeCurve;
   /** A mould's resin depth per column at the fill level, to draw the forecast peak over it. */
   depthMap?: HeatDepthMap | undefined;
+  /** The mould in 3D coloured by the forecast peak, offered beside the map seen from above. */
+  renderMould3D?: ((heat: ForecastHeat) => ReactNode) | undefined;
 }
 
 function Facts({ rows }: { rows: readonly { term: string; value: ReactNode }[] }) {
@@ -145,7 +147,7 @@ function forecastRow(plan: PourPlan, index: number, unitSystem: UnitSystem): { t
 }
 
 /** A pour plan's numbers: the same view for the live planner and for a saved plan's stored result. */
-export function PlanResult({ plan, unitSystem, currency, curve, depthMap }: PlanResultProps) {
+export function PlanResult({ plan, unitSystem, currency, curve, depthMap, renderMould3D }: PlanResultProps) {
   const money = (amount: number) => formatMoney(amount, currency);
   const volume = (ml: number) => formatVolume(ml, unitSystem).text;
   const length = (mm: number) => formatLength(mm, unitSystem).text;
@@ -176,7 +178,7 @@ export function PlanResult({ plan, unitSystem, currency, curve, depthMap }: Plan
       </Block>
 
       <Block title="Heat forecast (an estimate)">
-        <ForecastBlock forecast={plan.forecast} unitSystem={unitSystem} depthMap={depthMap} />
+        <ForecastBlock forecast={plan.forecast} unitSystem={unitSystem} depthMap={depthMap} renderMould3D={renderMould3D} />
       </Block>
 
       <Block title={`Deep pour: ${plan.deepPour.productName}`}>

@@ -34,7 +34,7 @@ import {
 import { baseQuantity, shownPlannerValues, shownUnitNames, type PlannerUnits } from '../utils/planner-units';
 import { fieldOfIssuePath, plannerResolver } from '../utils/planner-validation';
 import type { PlannerValues, SavedPlanInput } from '../utils/planner-values';
-import { LivePlanPanel } from './LivePlanPanel';
+import { LivePlanPanel, type RenderPlanMould3D } from './LivePlanPanel';
 import { FieldGrid, PlannerSection, Switch } from './PlannerSection';
 
 export interface PourPlannerProps {
@@ -56,6 +56,8 @@ export interface PourPlannerProps {
   draftPlace: DraftPlace;
   /** The saved plan's updatedAt the form opened from; null for a new plan. */
   basedOn: string | null;
+  /** Draws the mould in 3D coloured by the live forecast, offered beside the map seen from above. */
+  renderMould3D?: RenderPlanMould3D | undefined;
 }
 
 const sourceChoices = [
@@ -89,6 +91,7 @@ export function PourPlanner({
   save,
   draftPlace,
   basedOn,
+  renderMould3D,
 }: PourPlannerProps) {
   const [formError, setFormError] = useState<string | null>(null);
   // The form is filled once, in the units of the shop as it was then; what it started from lets untouched values go back unchanged.
@@ -440,7 +443,7 @@ export function PourPlanner({
         aria-label="Live numbers of this plan"
         className="xl:sticky xl:top-4 xl:max-h-[calc(100dvh-2rem)] xl:overflow-y-auto xl:pr-1"
       >
-        <LivePlanPanel live={live} unitSystem={unitSystem} currency={currency} />
+        <LivePlanPanel live={live} unitSystem={unitSystem} currency={currency} renderMould3D={renderMould3D} />
       </div>
       <ConfirmDialog
         open={guard.blocker.state === 'blocked'}

@@ -1,4 +1,4 @@
-import type { PigmentView, ResinSystemView } from '@gelpoint/contracts';
+import type { MoldFill, MoldView, PigmentView, ResinSystemView } from '@gelpoint/contracts';
 import type { MoldFillFacts, Result } from '@gelpoint/core';
 import { useMemo } from 'react';
 import { hasStatus } from '../../../lib/api-error';
@@ -25,6 +25,8 @@ export interface LivePlanState {
   updating: boolean;
   /** Why the mould's numbers are missing, when they are. */
   moldProblem: string | null;
+  /** The mould and its fill the numbers were worked out from, when they come from a mould. */
+  mould: { mold: MoldView; fill: MoldFill } | null;
 }
 
 export interface UseLivePlanInput {
@@ -92,6 +94,7 @@ export function useLivePlan({ values, pieceId, units, resinSystems, pigments, sc
     result,
     updating: key !== settledKey || mold.isFetching || fill.isFetching || layers.isFetching,
     moldProblem: moldProblemOf(mold.error ?? fill.error ?? layers.error, Boolean(mold.data && !report)),
+    mould: moldFacts && mold.data && fill.data ? { mold: mold.data, fill: fill.data } : null,
   };
 }
 

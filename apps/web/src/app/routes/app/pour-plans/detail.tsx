@@ -21,6 +21,7 @@ import { SnapshotDetails } from '../../../../features/pour-plans/components/Snap
 import { readSavedPlan } from '../../../../features/pour-plans/utils/saved-plan';
 import { useSignedInSession } from '../../../signed-in-session';
 import { createPlanPageLoader } from './plan-page-loader';
+import { PlanMould3D } from './plan-mould-3d';
 import { readId } from './read-id';
 import { useShop } from '../../../../features/shop/api/get-shop';
 import { moldFillQueryOptions } from '../../../../lib/resources/molds';
@@ -102,7 +103,17 @@ export function Component() {
               The saved plan
             </h2>
             <p className="text-ink-soft">These are the numbers the server worked out and stored when the plan was saved.</p>
-            <PlanResult plan={saved.value.plan} unitSystem={shop.data.unitSystem} currency={shop.data.currency} depthMap={depthMap} />
+            <PlanResult
+              plan={saved.value.plan}
+              unitSystem={shop.data.unitSystem}
+              currency={shop.data.currency}
+              depthMap={depthMap}
+              renderMould3D={
+                mold.data && fill.data && depthMap
+                  ? (heat) => <PlanMould3D mold={mold.data} fill={fill.data} plan={saved.value.plan} heat={heat} unitSystem={shop.data.unitSystem} />
+                  : undefined
+              }
+            />
           </section>
           <Card title="Shelf values it was made with">
             <SnapshotDetails snapshot={saved.value.snapshot} unitSystem={shop.data.unitSystem} />

@@ -21,6 +21,7 @@ import { wholeShelfQuery } from '../../../../features/shelf/utils/shelf-queries'
 import { roleLabel } from '../../../../lib/roles';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { PlanMould3D } from './plan-mould-3d';
 import { readId } from './read-id';
 import { useShop } from '../../../../features/shop/api/get-shop';
 import { shopQueryOptions } from '../../../../lib/resources/shop';
@@ -82,6 +83,7 @@ export function Component() {
         currency={shop.data.currency}
         scaleResolutionG={shop.data.scaleResolutionG}
         offRatioTolerancePct={shop.data.offRatioTolerancePct}
+        renderMould3D={(view) => <PlanMould3D {...view} unitSystem={shop.data.unitSystem} />}
         submitLabel="Save changes"
         busy={update.isPending}
         save={(input) => update.mutateAsync({ planId, values: input })}

@@ -19,6 +19,7 @@ import { wholeShelfQuery } from '../../../../features/shelf/utils/shelf-queries'
 import { roleLabel } from '../../../../lib/roles';
 import { requireSession } from '../../../session-loaders';
 import { useSignedInSession } from '../../../signed-in-session';
+import { PlanMould3D } from './plan-mould-3d';
 import { readId } from './read-id';
 import { useShop } from '../../../../features/shop/api/get-shop';
 import { shopQueryOptions } from '../../../../lib/resources/shop';
@@ -76,6 +77,7 @@ export function Component() {
         currency={shop.data.currency}
         scaleResolutionG={shop.data.scaleResolutionG}
         offRatioTolerancePct={shop.data.offRatioTolerancePct}
+        renderMould3D={(view) => <PlanMould3D {...view} unitSystem={shop.data.unitSystem} />}
         submitLabel="Save pour plan"
         busy={create.isPending}
         save={(input) => create.mutateAsync(input)}
