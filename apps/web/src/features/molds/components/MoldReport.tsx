@@ -73,9 +73,9 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
   const drawn =
     mapIsStored || !mapped.data?.depthMap
       ? storedMap.data
-        ? { map: storedMap.data, levelMm: stored.levelMm }
+        ? { map: storedMap.data, levelInMouldMm: stored.levelInMouldMm }
         : undefined
-      : { map: mapped.data.depthMap, levelMm: mapped.data.levelMm };
+      : { map: mapped.data.depthMap, levelInMouldMm: mapped.data.levelInMouldMm };
   const depthMap = drawn?.map;
   const depthMapUpdating = !mapIsStored && (mapped.isPlaceholderData || !mapped.data?.depthMap);
   const depthMapError = mapIsStored ? storedMap.error : mapped.error;
@@ -121,7 +121,7 @@ export function MoldReport({ mold, report, unitSystem }: MoldReportProps) {
             levelMm={floorMm + levelMm}
             layerLevelsMm={lines?.ok ? lines.value.levelsMm.map((l) => floorMm + l) : []}
             footprint={depthMap}
-            footprintLevelMm={drawn?.levelMm}
+            footprintLevelMm={drawn?.levelInMouldMm}
             unitSystem={unitSystem}
           />
         </Card>
