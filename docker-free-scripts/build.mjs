@@ -147,6 +147,9 @@ const webVite = join(dirname(createRequire(join(root, 'apps/web/package.json')).
 function buildWeb() {
   const r = spawnSync(process.execPath, [webVite, 'build', '--logLevel', 'warn'], {
     cwd: join(root, 'apps/web'),
+    // Always the production build: a test runner calls this with NODE_ENV=test, which would bundle React's development
+    // build (twice the size) and leave it behind as the app that `npm start` serves.
+    env: { ...process.env, NODE_ENV: 'production' },
     stdio: 'inherit',
   });
   if (r.status !== 0) throw new Error('the web build failed (see above)');
