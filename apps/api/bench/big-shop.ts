@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import type { PlanProductSnapshot, PourPlanInput } from '@gelpoint/contracts';
 import type { DataSource, EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
 import {
   buildPourPlan,
@@ -9,7 +10,6 @@ import {
   rectangleCavity,
   stepKeyOf,
   wantedReminders,
-  type PlanSnapshot,
   type PourPlan as CorePourPlan,
 } from '@gelpoint/core';
 import {
@@ -80,8 +80,8 @@ async function insertChunked<T extends ObjectLiteral>(m: EntityManager, entity: 
 }
 
 interface BuiltTemplate extends PlanTemplate {
-  inputs: Record<string, unknown>;
-  snapshot: PlanSnapshot & Record<string, unknown>;
+  inputs: Omit<PourPlanInput, 'pieceId'>;
+  snapshot: PlanProductSnapshot;
   result: CorePourPlan;
 }
 
@@ -112,7 +112,7 @@ async function buildTemplates(m: EntityManager, shopId: string): Promise<BuiltTe
     if (!planned.ok) throw new Error(planned.error.message);
     const inputs = {
       name: t.label,
-      cavity: { source: 'shape', shape: t.shape },
+      cavity: { source: 'shape' as const, shape: t.shape },
       fillLevelMm: t.shape.depthMm,
       deepPour: { resinSystemId: deep.id, pigmentId: snapshot.pigment?.id ?? null, pigmentPct: t.pigmentPct },
       sealCoat: t.sealCoat ? { resinSystemId: seal.id, filmThicknessMm: 0.15, coats: 1, absorptionFactor: 1.3 } : null,
@@ -120,7 +120,7 @@ async function buildTemplates(m: EntityManager, shopId: string): Promise<BuiltTe
       cupWaste: { massG: 10 },
       shopTempC: t.tempC,
     };
-    return { ...t, inputs, snapshot: snapshot as PlanSnapshot & Record<string, unknown>, result: planned.value };
+    return { ...t, inputs, snapshot, result: planned.value };
   });
 }
 
@@ -177,7 +177,7 @@ export async function seedBigShop(ds: DataSource, size: BigShopSize, now = new D
         name: `${t.label} pour`,
         inputs: { ...t.inputs, pieceId },
         productSnapshot: t.snapshot,
-        result: t.result as unknown as Record<string, unknown>,
+        result: t.result,
         createdById: maker.id,
         createdAt: startedAt,
         updatedAt: startedAt,

@@ -11,6 +11,7 @@ export * from './molds';
 export * from './exotherm';
 export * from './plan-forecast';
 export * from './pour-plan-result';
+export * from './plan-snapshot';
 export * from './pour-plans';
 export * from './pours';
 export * from './permissions';

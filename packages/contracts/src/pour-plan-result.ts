@@ -126,6 +126,8 @@ export const PourPlanResult = z.object({
   cautions: z.array(PlanCaution),
 });
 export type PourPlanResult = z.output<typeof PourPlanResult>;
+/** What a pour_plans row's result column may hold: a result of any version, read as version 3 through PourPlanResult. */
+export type StoredPourPlanResult = z.input<typeof PourPlanResult>;
 
 /** Which version a stored result was written as (see POUR_PLAN_RESULT_VERSION), told by what it holds. */
 export function pourPlanResultVersionOf(stored: unknown): 1 | 2 | 3 {

@@ -1,6 +1,21 @@
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
+import type axe from 'axe-core';
 import type { Page } from 'playwright-core';
+
+interface RestLook {
+  outline: string;
+  shadow: string;
+}
+
+// What these checks put on the page's window: axe-core once its source is evaluated, and each focusable element's
+// look before anything was focused. Both are absent until then.
+declare global {
+  interface Window {
+    axe?: typeof axe;
+    __restLook?: Map<Element, RestLook>;
+  }
+}
 
 // axe-core is run from the installed file, not from a CDN. page.addScriptTag would add an inline <script> that the
 // API's CSP (script-src 'self') refuses; page.evaluate goes through the DevTools protocol, which CSP does not govern,
@@ -20,13 +35,8 @@ export interface Finding {
 export async function axeFindings(page: Page, where: { page: string; role: string }): Promise<Finding[]> {
   await page.evaluate(axeSource);
   const violations = await page.evaluate(async () => {
-    const result = await (
-      window as unknown as {
-        axe: {
-          run: (ctx: Document, opts: object) => Promise<{ violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[] }>;
-        };
-      }
-    ).axe.run(document, {
+    if (!window.axe) throw new Error('axe-core did not load into the page');
+    const result = await window.axe.run(document, {
       runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] },
       resultTypes: ['violations'],
     });
@@ -49,12 +59,12 @@ export interface FocusProblem {
 export async function focusProblems(page: Page, name: string, maxStops = 60): Promise<{ stops: number; problems: FocusProblem[] }> {
   await page.evaluate(() => {
     // No named helpers inside: the test runner's transform would wrap them in a helper the page does not have.
-    const rest = new Map<Element, { outline: string; shadow: string }>();
+    const rest = new Map<Element, RestLook>();
     for (const el of document.querySelectorAll('a[href], button, input, select, textarea, summary, [tabindex]')) {
       const s = getComputedStyle(el);
       rest.set(el, { outline: `${s.outlineStyle} ${s.outlineWidth} ${s.outlineColor}`, shadow: s.boxShadow });
     }
-    (window as unknown as { __restLook: typeof rest }).__restLook = rest;
+    window.__restLook = rest;
     (document.activeElement as HTMLElement | null)?.blur();
   });
   const problems: FocusProblem[] = [];
@@ -66,7 +76,8 @@ export async function focusProblems(page: Page, name: string, maxStops = 60): Pr
       const el = document.activeElement;
       if (!el || el === document.body) return null;
       const s = getComputedStyle(el);
-      const before = (window as unknown as { __restLook: Map<Element, { outline: string; shadow: string }> }).__restLook.get(el);
+      if (!window.__restLook) throw new Error('the look at rest was not taken before tabbing');
+      const before = window.__restLook.get(el);
       const outlineWidth = s.outlineStyle === 'none' ? 0 : parseFloat(s.outlineWidth);
       const shadowChanged = before !== undefined && s.boxShadow !== before.shadow && s.boxShadow !== 'none';
       const outlineShown = outlineWidth >= 2 && (before === undefined || `${s.outlineStyle} ${s.outlineWidth} ${s.outlineColor}` !== before.outline);

@@ -12,7 +12,7 @@ interface FakeLocation {
 function fakeRouter(location: FakeLocation, heading?: FakeLocation) {
   const moves: Array<{ href: string; sessionAtMove: unknown; piecesAtMove: unknown }> = [];
   let queryClient: QueryClient | undefined;
-  const router = {
+  const router: SessionRouter = {
     state: { location, navigation: { location: heading } },
     navigate: async (href: string) => {
       moves.push({
@@ -22,7 +22,7 @@ function fakeRouter(location: FakeLocation, heading?: FakeLocation) {
       });
     },
   };
-  return { router: router as unknown as SessionRouter, moves, attach: (client: QueryClient) => (queryClient = client) };
+  return { router, moves, attach: (client: QueryClient) => (queryClient = client) };
 }
 
 const someone = { user: { id: 'u', name: 'Ana', email: 'ana@example.com' } };

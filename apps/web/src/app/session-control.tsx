@@ -1,6 +1,5 @@
 import { hashKey, type QueryClient } from '@tanstack/react-query';
 import { createContext, useContext, type ReactNode } from 'react';
-import type { DataRouter } from 'react-router';
 import { paths } from '../config/paths';
 import { authKeys } from '../lib/resources/session';
 
@@ -17,9 +16,17 @@ export interface SessionControl {
 
 const publicPaths: readonly string[] = [paths.signIn.path, paths.createShop.path, paths.forgotPassword.path, paths.resetPassword.path];
 
-// Only what is used of the router that router.tsx creates; naming it here, instead of importing its type,
-// keeps router.tsx → route modules → this file free of a cycle.
-export type SessionRouter = Pick<DataRouter, 'navigate' | 'state'>;
+interface SessionPlace {
+  pathname: string;
+  search: string;
+}
+
+// Only what is used of the router that router.tsx creates (a DataRouter fits it); naming it here, instead of importing
+// its type, keeps router.tsx → route modules → this file free of a cycle, and a test's router can be this much.
+export interface SessionRouter {
+  navigate(href: string, options: { replace: boolean }): Promise<void>;
+  state: { location: SessionPlace; navigation: { location?: SessionPlace } };
+}
 
 export interface DeviceData {
   /** Deletes what the device keeps of the shop for offline use; `unsent` also what was logged and not sent. */

@@ -1,3 +1,4 @@
+import type { PourPlanInput, StoredPlanProductSnapshot, StoredPourPlanResult } from '@gelpoint/contracts';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { CreatedAt, UpdatedAt } from './columns';
 import { Mold } from './mold.entity';
@@ -7,7 +8,9 @@ import { User } from './user.entity';
 
 /**
  * A saved pour plan: the maker's inputs, a snapshot of the shelf values it used (a later edit of the
- * shelf does not rewrite it) and the result the server computed from both.
+ * shelf does not rewrite it) and the result the server computed from both. The jsonb columns are typed as what a row
+ * of any version may hold (the schemas' input types); a reader parses them with the schema (PourPlanResult,
+ * PlanProductSnapshot) to get today's shape.
  */
 @Entity({ name: 'pour_plans' })
 @Index('pour_plans_shop_piece_idx', ['shopId', 'pieceId'])
@@ -17,9 +20,10 @@ export class PourPlan {
   @Column({ name: 'piece_id', type: 'uuid' }) pieceId!: string;
   @Column({ name: 'mold_id', type: 'uuid', nullable: true }) moldId!: string | null;
   @Column({ type: 'text' }) name!: string;
-  @Column({ type: 'jsonb' }) inputs!: Record<string, unknown>;
-  @Column({ name: 'product_snapshot', type: 'jsonb' }) productSnapshot!: Record<string, unknown>;
-  @Column({ type: 'jsonb' }) result!: Record<string, unknown>;
+  // Inputs saved before levelFrom existed lack it; the API's storedInputs reads them in today's terms.
+  @Column({ type: 'jsonb' }) inputs!: PourPlanInput;
+  @Column({ name: 'product_snapshot', type: 'jsonb' }) productSnapshot!: StoredPlanProductSnapshot;
+  @Column({ type: 'jsonb' }) result!: StoredPourPlanResult;
   @Column({ name: 'created_by_id', type: 'uuid', nullable: true }) createdById!: string | null;
   @ManyToOne(() => Shop, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'shop_id', foreignKeyConstraintName: 'pour_plans_shop_fk' })

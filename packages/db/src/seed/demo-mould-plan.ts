@@ -88,7 +88,7 @@ export async function seedDemoMould(m: EntityManager, shopId: string, people: Ma
   const inputs = {
     pieceId: piece.id,
     name: demoMould.planName,
-    cavity: { source: 'mold', moldId: mold.id, dam: demoMould.dam },
+    cavity: { source: 'mold' as const, moldId: mold.id, dam: demoMould.dam },
     ...level.stored,
     deepPour: { resinSystemId: deep.id, pigmentId: teal.id, pigmentPct: demoMould.pigmentPct },
     sealCoat: { resinSystemId: seal.id, ...sealCoat },
@@ -116,7 +116,7 @@ export async function seedDemoMould(m: EntityManager, shopId: string, people: Ma
       name: demoMould.planName,
       inputs,
       productSnapshot: snapshot,
-      result: result as unknown as Record<string, unknown>,
+      result,
       createdById: maker.id,
     }),
   );

@@ -83,7 +83,7 @@ export async function seedDemoPours(m: EntityManager, shopId: string, people: Ma
     const inputs = {
       pieceId: piece.id,
       name: d.planName,
-      cavity: { source: 'shape', shape: d.shape },
+      cavity: { source: 'shape' as const, shape: d.shape },
       fillLevelMm: d.fillLevelMm,
       deepPour: { resinSystemId: deep.id, pigmentId: snapshot.pigment?.id ?? null, pigmentPct: d.pigmentPct },
       sealCoat: d.sealCoat ? { resinSystemId: seal.id, filmThicknessMm: 0.15, coats: 1, absorptionFactor: 1.3 } : null,
@@ -110,7 +110,7 @@ export async function seedDemoPours(m: EntityManager, shopId: string, people: Ma
         name: d.planName,
         inputs,
         productSnapshot: snapshot,
-        result: planned.value as unknown as Record<string, unknown>,
+        result: planned.value,
         createdById: maker.id,
       }),
     );

@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
+import { PourPlanResult } from '@gelpoint/contracts';
 import type { PourPlan as CorePourPlan } from '@gelpoint/core';
 import type { CavityReportRecord, DepthMapRecord } from '@gelpoint/mesh';
 import { loadManifold, outlineDamResin, wettedAreaOf, type ManifoldKernel } from '../../../mesh/test/manifold-reference';
@@ -149,7 +150,7 @@ describe('the demo mould', () => {
     // The level is stored with its datum: the rim (z = 60 mm) above the floor (z = 20 mm, the file's lowest floor corner).
     expect(inputs.levelFrom).toBe('floor');
     expect(inputs.fillLevelMm).toBeCloseTo(60 - 20, 9);
-    const result = plan.result as unknown as CorePourPlan;
+    const result: CorePourPlan = PourPlanResult.parse(plan.result);
     const frameLevelMm = 20 + inputs.fillLevelMm;
     const top = reference(frameLevelMm);
     const curveTop = report.curve[report.curve.length - 1]!;

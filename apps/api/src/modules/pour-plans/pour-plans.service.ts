@@ -148,9 +148,9 @@ export class PourPlans {
           pieceId: input.pieceId,
           moldId: input.cavity.source === 'mold' ? input.cavity.moldId : null,
           name: input.name,
-          inputs: input as unknown as Record<string, unknown>,
-          productSnapshot: snapshot as unknown as Record<string, unknown>,
-          result: result as unknown as Record<string, unknown>,
+          inputs: input,
+          productSnapshot: snapshot,
+          result,
           createdById: auth.userId,
         }),
       );
@@ -180,7 +180,7 @@ export class PourPlans {
         inputs: input,
         productSnapshot: snapshot,
         result,
-      });
+      } satisfies Partial<PourPlan>);
       await m.save(plan);
       await recordAudit(m, {
         shopId: auth.shopId,

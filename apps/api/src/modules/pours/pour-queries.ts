@@ -3,6 +3,7 @@ import type { CureReading, PlanSnapshot, PourPlan as CorePourPlan, ReleaseCheck,
 import { Piece, Pour, PourPlan, Shop } from '@gelpoint/db';
 import { notFound } from '../../http/errors';
 import { storedPlanResult } from '../pour-plans/stored-plan-result';
+import { storedPlanSnapshot } from '../pour-plans/stored-plan-snapshot';
 
 /** A pour with what its cure is worked out from: the piece, the plan, and the plan's stored result and products. */
 export interface LoadedPour {
@@ -27,7 +28,7 @@ export interface LoggedStep {
 }
 
 export function loadedOf(pour: Pour, plan: PourPlan, piece: Piece): LoadedPour {
-  return { pour, piece, plan, result: storedPlanResult(plan.result), snapshot: plan.productSnapshot as unknown as PlanSnapshot };
+  return { pour, piece, plan, result: storedPlanResult(plan.result), snapshot: storedPlanSnapshot(plan.productSnapshot) };
 }
 
 export async function loadPour(m: EntityManager, shopId: string, id: string, lock = false): Promise<LoadedPour> {

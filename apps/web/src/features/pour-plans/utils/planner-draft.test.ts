@@ -53,6 +53,28 @@ describe('planner drafts', () => {
     expect(parseDraft(JSON.stringify({ ...draftOf(), values: { name: 3 } }))).toBeNull();
   });
 
+  // A stored draft changed as a stale or foreign entry might be: serialized as the planner stores it, then edited.
+  type Stored = { unitSystem: unknown; values: Record<string, unknown> & { cavity: { shape: Record<string, unknown> }; sealCoat: Record<string, unknown> } };
+  const storedWith = (change: (stored: Stored) => void) => {
+    const stored: Stored = JSON.parse(serializeDraft(draftOf()));
+    change(stored);
+    return JSON.stringify(stored);
+  };
+
+  it('drops a draft whose boxes hold what the form never holds', () => {
+    expect(parseDraft(storedWith(() => {}))).not.toBeNull();
+    expect(parseDraft(storedWith((d) => (d.values.fillLevelMm = '24.5')))).toBeNull();
+    expect(parseDraft(storedWith((d) => (d.values.cavity.shape.kind = 'hexagon')))).toBeNull();
+    expect(parseDraft(storedWith((d) => (d.values.sealCoat.absorption = 'soaked')))).toBeNull();
+    expect(parseDraft(storedWith((d) => (d.unitSystem = 'imperial')))).toBeNull();
+  });
+
+  it('brings a box the form never touched back empty', () => {
+    const back = parseDraft(storedWith((d) => delete d.values.shopTempC));
+    expect(back?.values.shopTempC).toBeNaN();
+    expect(back?.values.fillLevelMm).toBe(24.5);
+  });
+
   it('goes on when storage refuses', () => {
     const refusing = {
       getItem: () => {

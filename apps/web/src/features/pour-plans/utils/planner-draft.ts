@@ -1,5 +1,6 @@
-import type { UnitSystem } from '@gelpoint/core';
-import type { PlannerValues } from './planner-values';
+import { absorptionPresets, type UnitSystem } from '@gelpoint/core';
+import { z } from 'zod';
+import type { AbsorptionChoice, PlannerValues } from './planner-values';
 
 /**
  * A plan being typed is kept in this browser's storage until it is saved, so a reload or a closed tab loses
@@ -39,9 +40,47 @@ export function serializeDraft(draft: PlannerDraft): string {
   return JSON.stringify(draft, (_key, value: unknown) => (typeof value === 'number' && Number.isNaN(value) ? emptyNumber : value));
 }
 
-function isRecord(value: unknown): value is Record<string, unknown> {
-  return typeof value === 'object' && value !== null && !Array.isArray(value);
-}
+// A number box as the form holds it: a number, or NaN when emptied; one never touched is left out of the JSON and
+// comes back empty, which the form shows the same way.
+const box = z.union([z.number(), z.nan()]).default(Number.NaN);
+const optionalBox = z.union([z.number(), z.nan()]).nullable().default(null);
+const absorption = z.custom<AbsorptionChoice | ''>((v) => v === '' || v === 'custom' || (typeof v === 'string' && Object.hasOwn(absorptionPresets, v)));
+
+const DraftValues = z.object({
+  name: z.string(),
+  cavity: z.object({
+    source: z.enum(['shape', 'mold']),
+    shape: z.object({
+      kind: z.enum(['rectangle', 'channel', 'cylinder', 'area_depth']),
+      lengthMm: box,
+      widthMm: box,
+      depthMm: box,
+      diameterMm: box,
+      areaMm2: box,
+      averageDepthMm: box,
+      maxDepthMm: optionalBox,
+      perimeterMm: optionalBox,
+    }),
+    moldId: z.string(),
+    dam: z.enum(['outline', 'box']),
+  }),
+  fillLevelMm: box,
+  deepPour: z.object({ resinSystemId: z.string(), pigmentId: z.string(), pigmentPct: box }),
+  sealCoat: z.object({ enabled: z.boolean(), resinSystemId: z.string(), filmThicknessMm: box, coats: box, absorption, absorptionFactor: box }),
+  overPourPct: box,
+  cupWaste: z.object({ unit: z.enum(['g', 'mL']), amount: box }),
+  shopTempC: box,
+  shopAir: z.object({ enabled: z.boolean(), rhPct: box, surfaceTempC: box }),
+  wood: z.object({ enabled: z.boolean(), lengthMm: box, widthMm: box, thicknessMm: box, pricePerBoardFoot: box }),
+});
+
+const Draft = z.object({
+  version: z.literal(1),
+  unitSystem: z.enum(['metric', 'us']),
+  basedOn: z.string().nullable(),
+  savedAt: z.string(),
+  values: DraftValues,
+});
 
 export function parseDraft(text: string): PlannerDraft | null {
   let parsed: unknown;
@@ -50,13 +89,9 @@ export function parseDraft(text: string): PlannerDraft | null {
   } catch {
     return null;
   }
-  if (!isRecord(parsed) || parsed.version !== 1 || !isRecord(parsed.values)) return null;
-  if ((parsed.unitSystem !== 'metric' && parsed.unitSystem !== 'us') || typeof parsed.savedAt !== 'string') return null;
-  if (parsed.basedOn !== null && typeof parsed.basedOn !== 'string') return null;
-  const values = parsed.values;
   // Only the form's own shape comes back: anything else is an old or foreign entry, dropped.
-  if (typeof values.name !== 'string' || !isRecord(values.cavity) || !isRecord(values.deepPour) || !isRecord(values.sealCoat)) return null;
-  return parsed as unknown as PlannerDraft;
+  const draft = Draft.safeParse(parsed);
+  return draft.success ? draft.data : null;
 }
 
 export function readDraft(storage: DraftStorage, place: DraftPlace, context: DraftContext): PlannerDraft | null {

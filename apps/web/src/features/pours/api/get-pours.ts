@@ -1,11 +1,12 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
+import { pourRefreshMs } from '../../../lib/resources/pours';
 import type { PourPage } from '../types';
 import type { CureBoardQuery } from '../utils/cure-board-filters';
 import { pourKeys } from './keys';
 
-/** The board moves on its own as pours cure; a minute is finer than any stage. */
-export const boardRefreshMs = 60_000;
+/** The board moves on its own as pours cure, as fast as each pour does. */
+export const boardRefreshMs = pourRefreshMs;
 
 export function getPours(query: CureBoardQuery, signal?: AbortSignal): Promise<PourPage> {
   return callRoute('listPours', { query: { ...query } }, signal ? { signal } : {});

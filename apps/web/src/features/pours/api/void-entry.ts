@@ -1,6 +1,7 @@
 import { BatchView, ReadingView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
+import { refreshLotLists } from '../../../lib/resources/lots';
 import { refreshPour } from './refresh-pour';
 
 export function voidReading(pourId: string, readingId: string, reason: string): Promise<ReadingView> {
@@ -11,7 +12,7 @@ export function voidBatch(pourId: string, batchId: string, reason: string): Prom
   return callRoute('voidBatch', { params: { id: pourId, batchId }, body: { reason } });
 }
 
-/** Voids a reading or a cup with its reason; the pour, the board and Today follow. */
+/** Voids a reading or a cup with its reason; the pour, the board and Today follow, and a voided cup's stock goes back to its lots. */
 export function useVoidEntry(pourId: string) {
   const queryClient = useQueryClient();
   return useMutation({
@@ -19,6 +20,8 @@ export function useVoidEntry(pourId: string) {
       if (kind === 'reading') await voidReading(pourId, id, reason);
       else await voidBatch(pourId, id, reason);
     },
-    onSuccess: () => refreshPour(queryClient, pourId),
+    onSuccess: async (_answer, { kind }) => {
+      await Promise.all([refreshPour(queryClient, pourId), kind === 'batch' ? refreshLotLists(queryClient) : undefined]);
+    },
   });
 }

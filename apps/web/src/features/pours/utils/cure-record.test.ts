@@ -1,12 +1,12 @@
 import type { PourView } from '@gelpoint/contracts';
 import { describe, expect, it } from 'vitest';
-import { pourRecord, temperatureSummary } from './cure-record';
+import { pourRecord, temperatureSummary, type PourLog } from './cure-record';
 import { runSheetOf } from './plan-run-sheet';
 import { testPlan } from './test-plan';
 
 function sheet() {
   const saved = testPlan();
-  const read = runSheetOf({ result: saved.result as unknown as Record<string, unknown>, productSnapshot: saved.productSnapshot });
+  const read = runSheetOf(saved);
   if (!read.ok) throw new Error(read.error.message);
   return read.value;
 }
@@ -42,18 +42,17 @@ function batch(planBatchIndex: number, step: string, over: Record<string, unknow
 }
 
 // Only the parts of a pour the record reads; the rest of the view is the cure board's.
-const pourOf = (parts: Partial<PourView>) =>
-  ({
-    batches: [],
-    voidedBatches: [],
-    readings: [],
-    voidedReadings: [],
-    checks: [],
-    releasedAt: null,
-    releasedBy: null,
-    machinedAt: null,
-    ...parts,
-  }) as unknown as PourView;
+const pourOf = (parts: Partial<PourLog>): PourLog => ({
+  batches: [],
+  voidedBatches: [],
+  readings: [],
+  voidedReadings: [],
+  checks: [],
+  releasedAt: null,
+  releasedBy: null,
+  machinedAt: null,
+  ...parts,
+});
 
 describe('temperatureSummary', () => {
   // Worked by hand from the readings below: lowest 16.5 °C at 02:00, highest 23.1 °C at 14:00, four readings.

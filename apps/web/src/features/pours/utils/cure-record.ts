@@ -4,6 +4,9 @@ import type { RunSheet } from './plan-run-sheet';
 
 type Batch = PourView['batches'][number];
 
+/** What of a pour its record is told from: the log (cups, readings, checks) and its release. */
+export type PourLog = Pick<PourView, 'batches' | 'voidedBatches' | 'readings' | 'voidedReadings' | 'checks' | 'releasedAt' | 'releasedBy' | 'machinedAt'>;
+
 /** One cup of the plan as the record shows it: what the plan asked for, and what was logged for it, if anything. */
 export interface RecordCup {
   order: number;
@@ -85,7 +88,7 @@ const distinct = (values: string[]) => [...new Set(values.filter((v) => v.trim()
  * A pour as its cure record tells it: each planned cup with the lots, grams, person and time logged for it, the
  * products and every lot number drawn from each, the temperatures in brief, the cure checks and the release.
  */
-export function pourRecord(pour: PourView, sheet: RunSheet): PourRecord {
+export function pourRecord(pour: PourLog, sheet: RunSheet): PourRecord {
   const byIndex = new Map<number, Batch>();
   for (const b of [...pour.batches, ...pour.voidedBatches]) {
     const held = byIndex.get(b.planBatchIndex);

@@ -4,7 +4,7 @@ import { testPlan } from './test-plan';
 
 describe('runSheetOf', () => {
   const saved = testPlan();
-  const sheet = runSheetOf({ result: saved.result as unknown as Record<string, unknown>, productSnapshot: saved.productSnapshot });
+  const sheet = runSheetOf(saved);
   if (!sheet.ok) throw new Error(sheet.error.message);
   const cups = sheet.value.cups;
 

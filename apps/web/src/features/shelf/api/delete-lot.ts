@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
+import { refreshLotLists } from '../../../lib/resources/lots';
 import { shelfKeys } from './keys';
 
 /** For a lot entered by mistake; a lot that was used up stays, with nothing remaining. */
@@ -14,7 +15,7 @@ export function useDeleteLot({ onSuccess }: { onSuccess?: () => unknown } = {}) 
     onSuccess: async (_result, lotId) => {
       await onSuccess?.();
       queryClient.removeQueries({ queryKey: shelfKeys.lot(lotId) });
-      await queryClient.invalidateQueries({ queryKey: shelfKeys.lotLists() });
+      await refreshLotLists(queryClient);
     },
   });
 }

@@ -1,6 +1,7 @@
-import type { LotListQuery, PigmentListQuery, ResinSystemListQuery } from '../utils/shelf-queries';
+import type { PigmentListQuery, ResinSystemListQuery } from '../utils/shelf-queries';
 
-// A list's key holds its whole query, sort column and direction included: each order is its own cache entry.
+// A list's key holds its whole query, sort column and direction included: each order is its own cache entry. The lists
+// of lots are not here: the mixing form reads them too, under lotListKeys (lib/resources/lots).
 
 export const shelfKeys = {
   all: ['shelf'] as const,
@@ -13,8 +14,6 @@ export const shelfKeys = {
   pigmentList: (query: PigmentListQuery) => [...shelfKeys.pigmentLists(), query] as const,
   pigment: (pigmentId: string) => [...shelfKeys.pigments(), 'detail', pigmentId] as const,
   lots: () => [...shelfKeys.all, 'lots'] as const,
-  lotLists: () => [...shelfKeys.lots(), 'list'] as const,
-  lotList: (query: LotListQuery) => [...shelfKeys.lotLists(), query] as const,
   lot: (lotId: string) => [...shelfKeys.lots(), 'detail', lotId] as const,
   lotUses: (lotId: string, page: number) => [...shelfKeys.lot(lotId), 'uses', page] as const,
 };

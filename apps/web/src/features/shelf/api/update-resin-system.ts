@@ -2,6 +2,7 @@ import { ResinSystemView, type ResinSystemInput } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { shelfKeys } from './keys';
 import { callRoute } from '../../../lib/api-routes';
+import { refreshLotLists } from '../../../lib/resources/lots';
 
 export interface UpdateResinSystemInput {
   resinSystemId: string;
@@ -21,7 +22,7 @@ export function useUpdateResinSystem({ onSuccess }: { onSuccess?: (resinSystem: 
       queryClient.setQueryData(shelfKeys.resinSystem(resinSystem.id), resinSystem);
       // Lots show the product's name.
       await queryClient.invalidateQueries({ queryKey: shelfKeys.resinSystemLists() });
-      await queryClient.invalidateQueries({ queryKey: shelfKeys.lotLists() });
+      await refreshLotLists(queryClient);
       await onSuccess?.(resinSystem);
     },
   });

@@ -3,6 +3,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { paths } from '../../../config/paths';
 import { shelfKeys } from '../api/keys';
+import { lotsQueryOptions } from '../api/get-lots';
 import { lotListQuery, pigmentListQuery, readShelfFilters, resinSystemListQuery, shelfLinkOf, shelfPageCount, shelfRowsPerPage } from './shelf-queries';
 
 const sortsOf = { 'resin-systems': ResinSystemSort.options, pigments: PigmentSort.options, lots: LotSort.options } as const;
@@ -91,9 +92,9 @@ describe('list queries', () => {
   it('asks the server for the chosen column and direction, which the list’s cache key holds', () => {
     const lots = lotListQuery({ tab: 'lots', page: 1, sort: { key: 'remaining', direction: 'descending' } });
     expect(lots).toEqual({ sort: 'remaining', dir: 'desc', limit: 50, offset: 0 });
-    expect(shelfKeys.lotList(lots)).toContainEqual(expect.objectContaining({ sort: 'remaining', dir: 'desc' }));
+    expect(lotsQueryOptions(lots).queryKey).toContainEqual(expect.objectContaining({ sort: 'remaining', dir: 'desc' }));
     const upward = lotListQuery({ tab: 'lots', page: 1, sort: { key: 'remaining', direction: 'ascending' } });
-    expect(JSON.stringify(shelfKeys.lotList(upward))).not.toBe(JSON.stringify(shelfKeys.lotList(lots)));
+    expect(JSON.stringify(lotsQueryOptions(upward).queryKey)).not.toBe(JSON.stringify(lotsQueryOptions(lots).queryKey));
     expect(resinSystemListQuery({ tab: 'resin-systems', page: 2, sort: { key: 'pricePerKg', direction: 'ascending' } })).toEqual({
       sort: 'pricePerKg',
       dir: 'asc',

@@ -7,9 +7,10 @@ import { moldsQueryOptions, useMolds } from '../../../../features/molds/api/get-
 import { PieceMoldsList } from '../../../../features/molds/components/PieceMoldsList';
 import { pourPlansQueryOptions, usePourPlans } from '../../../../features/pour-plans/api/get-pour-plans';
 import { PiecePlansList } from '../../../../features/pour-plans/components/PiecePlansList';
-import { piecePoursQueryOptions, usePiecePours } from '../../../../features/pours/api/get-piece-pours';
+import { usePiecePours } from '../../../../features/pours/api/get-piece-pours';
 import { PiecePoursList } from '../../../../features/pours/components/PiecePoursList';
 import { useShop } from '../../../../features/shop/api/get-shop';
+import { piecePoursQueryOptions } from '../../../../lib/resources/pours';
 
 // A piece has a handful of each; the lists' own limit is far above that.
 const pieceQuery = (pieceId: string) => ({ pieceId, limit: 200, offset: 0 });

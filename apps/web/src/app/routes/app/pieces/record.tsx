@@ -7,7 +7,7 @@ import { PageSpinner } from '../../../../components/ui/PageSpinner';
 import { TextLink } from '../../../../components/ui/TextLink';
 import { paths } from '../../../../config/paths';
 import { pieceQueryOptions, usePiece } from '../../../../features/pieces/api/get-piece';
-import { pieceRecordQueryOptions, usePieceRecord } from '../../../../features/pours/api/get-piece-record';
+import { ensurePieceRecord, usePieceRecord } from '../../../../features/pours/api/get-piece-record';
 import { CureRecord } from '../../../../features/pours/components/CureRecord';
 import { requireSession } from '../../../session-loaders';
 import { readId } from '../pour-plans/read-id';
@@ -21,7 +21,7 @@ export const createLoader =
     const pieceId = readId(params, 'pieceId', 'piece');
     await Promise.all([
       queryClient.ensureQueryData(pieceQueryOptions(pieceId)),
-      queryClient.ensureQueryData(pieceRecordQueryOptions(pieceId)),
+      ensurePieceRecord(queryClient, pieceId),
       queryClient.ensureQueryData(shopQueryOptions()),
     ]);
     return null;
