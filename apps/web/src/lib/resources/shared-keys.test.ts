@@ -4,8 +4,10 @@ import { ensurePieceRecord } from '../../features/pours/api/get-piece-record';
 import { lotChoicesQueryOptions } from '../../features/pours/api/get-lot-choices';
 import { refreshAfterSent } from '../../features/pours/api/refresh-after-sent';
 import { refreshPour } from '../../features/pours/api/refresh-pour';
+import { lotQueryOptions } from '../../features/shelf/api/get-lot';
+import { lotUsesQueryOptions } from '../../features/shelf/api/get-lot-uses';
 import { lotsQueryOptions } from '../../features/shelf/api/get-lots';
-import { lotListQueryOptions, refreshLotLists } from './lots';
+import { lotListQueryOptions, refreshLots } from './lots';
 import { pourPlanQueryOptions } from './pour-plans';
 import { piecePoursQueryOptions, pourQueryOptions } from './pours';
 
@@ -35,9 +37,23 @@ describe('lists of lots', () => {
     const client = new QueryClient();
     client.setQueryData(shelfTab.queryKey, noLots);
     client.setQueryData(lotPicker.queryKey, noLots);
-    await refreshLotLists(client);
+    await refreshLots(client);
     expect(isStale(client, shelfTab.queryKey)).toBe(true);
     expect(isStale(client, lotPicker.queryKey)).toBe(true);
+  });
+
+  it('take each lot’s own page and the batches that drew on it along, which a logged or voided cup changes too', async () => {
+    const client = new QueryClient();
+    const lotId = '5f3c1c2e-0000-4000-8000-0000000000e1';
+    const lotPage = lotQueryOptions(lotId);
+    const uses = lotUsesQueryOptions(lotId, 0);
+    // In the cache as a page that has asked for them would leave them.
+    client.getQueryCache().build(client, { queryKey: lotPage.queryKey });
+    client.getQueryCache().build(client, { queryKey: uses.queryKey });
+    expect([isStale(client, lotPage.queryKey), isStale(client, uses.queryKey)]).toEqual([false, false]);
+    await refreshLots(client);
+    expect(isStale(client, lotPage.queryKey)).toBe(true);
+    expect(isStale(client, uses.queryKey)).toBe(true);
   });
 
   it('are asked again at once where a page shows one', async () => {
@@ -51,7 +67,7 @@ describe('lists of lots', () => {
     const stop = observer.subscribe(() => {});
     await vi.waitFor(() => expect(observer.getCurrentResult().isSuccess).toBe(true));
     expect(asked).toBe(1);
-    await refreshLotLists(client);
+    await refreshLots(client);
     expect(asked).toBe(2);
     stop();
   });

@@ -3,7 +3,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { unexpectedResponse } from '../../../lib/api-error';
 import { useOutbox } from '../../../lib/offline/outbox-context';
-import { refreshLotLists } from '../../../lib/resources/lots';
+import { refreshLots } from '../../../lib/resources/lots';
 import { refreshPour } from './refresh-pour';
 import { pourKeys } from './keys';
 
@@ -43,7 +43,7 @@ export function useLogBatch(pourId: string, cup: { order: number; pourLabel: str
       if (answer.queued) return;
       await refreshPour(queryClient, pourId);
       // Logged cups draw stock down; the lot pickers and the shelf should show what is left.
-      await refreshLotLists(queryClient);
+      await refreshLots(queryClient);
     },
   });
 }

@@ -1,7 +1,7 @@
 import { BatchView, ReadingView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
-import { refreshLotLists } from '../../../lib/resources/lots';
+import { refreshLots } from '../../../lib/resources/lots';
 import { refreshPour } from './refresh-pour';
 
 export function voidReading(pourId: string, readingId: string, reason: string): Promise<ReadingView> {
@@ -21,7 +21,7 @@ export function useVoidEntry(pourId: string) {
       else await voidBatch(pourId, id, reason);
     },
     onSuccess: async (_answer, { kind }) => {
-      await Promise.all([refreshPour(queryClient, pourId), kind === 'batch' ? refreshLotLists(queryClient) : undefined]);
+      await Promise.all([refreshPour(queryClient, pourId), kind === 'batch' ? refreshLots(queryClient) : undefined]);
     },
   });
 }

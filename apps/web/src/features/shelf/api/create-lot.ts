@@ -1,7 +1,7 @@
 import { LotView, type LotInput } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
-import { refreshLotLists } from '../../../lib/resources/lots';
+import { refreshLots } from '../../../lib/resources/lots';
 import { shelfKeys } from './keys';
 
 export function createLot(body: LotInput): Promise<LotView> {
@@ -14,7 +14,7 @@ export function useCreateLot({ onSuccess }: { onSuccess?: (lot: LotView) => unkn
     mutationFn: createLot,
     onSuccess: async (lot) => {
       queryClient.setQueryData(shelfKeys.lot(lot.id), lot);
-      await refreshLotLists(queryClient);
+      await refreshLots(queryClient);
       await onSuccess?.(lot);
     },
   });

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { callRoute } from '../../../lib/api-routes';
-import { refreshLotLists } from '../../../lib/resources/lots';
+import { refreshLots } from '../../../lib/resources/lots';
 import { shelfKeys } from './keys';
 
 /** For a lot entered by mistake; a lot that was used up stays, with nothing remaining. */
@@ -15,7 +15,7 @@ export function useDeleteLot({ onSuccess }: { onSuccess?: () => unknown } = {}) 
     onSuccess: async (_result, lotId) => {
       await onSuccess?.();
       queryClient.removeQueries({ queryKey: shelfKeys.lot(lotId) });
-      await refreshLotLists(queryClient);
+      await refreshLots(queryClient);
     },
   });
 }

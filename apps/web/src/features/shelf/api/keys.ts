@@ -1,7 +1,8 @@
+import { lotListKeys } from '../../../lib/resources/lots';
 import type { PigmentListQuery, ResinSystemListQuery } from '../utils/shelf-queries';
 
-// A list's key holds its whole query, sort column and direction included: each order is its own cache entry. The lists
-// of lots are not here: the mixing form reads them too, under lotListKeys (lib/resources/lots).
+// A list's key holds its whole query, sort column and direction included: each order is its own cache entry. Lots are
+// not under the shelf's root: the mixing form reads them too, and a logged cup changes them (lib/resources/lots).
 
 export const shelfKeys = {
   all: ['shelf'] as const,
@@ -13,7 +14,6 @@ export const shelfKeys = {
   pigmentLists: () => [...shelfKeys.pigments(), 'list'] as const,
   pigmentList: (query: PigmentListQuery) => [...shelfKeys.pigmentLists(), query] as const,
   pigment: (pigmentId: string) => [...shelfKeys.pigments(), 'detail', pigmentId] as const,
-  lots: () => [...shelfKeys.all, 'lots'] as const,
-  lot: (lotId: string) => [...shelfKeys.lots(), 'detail', lotId] as const,
-  lotUses: (lotId: string, page: number) => [...shelfKeys.lot(lotId), 'uses', page] as const,
+  lot: lotListKeys.detail,
+  lotUses: lotListKeys.uses,
 };

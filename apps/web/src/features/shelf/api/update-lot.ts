@@ -2,7 +2,7 @@ import { LotUpdate, LotView } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { callRoute } from '../../../lib/api-routes';
-import { refreshLotLists } from '../../../lib/resources/lots';
+import { refreshLots } from '../../../lib/resources/lots';
 import { shelfKeys } from './keys';
 
 export interface UpdateLotInput {
@@ -20,7 +20,7 @@ export function useUpdateLot({ onSuccess }: { onSuccess?: (lot: LotView) => unkn
     mutationFn: updateLot,
     onSuccess: async (lot) => {
       queryClient.setQueryData(shelfKeys.lot(lot.id), lot);
-      await refreshLotLists(queryClient);
+      await refreshLots(queryClient);
       await onSuccess?.(lot);
     },
   });

@@ -2,7 +2,7 @@ import { PigmentView, type PigmentInput } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { shelfKeys } from './keys';
 import { callRoute } from '../../../lib/api-routes';
-import { refreshLotLists } from '../../../lib/resources/lots';
+import { refreshLots } from '../../../lib/resources/lots';
 
 export interface UpdatePigmentInput {
   pigmentId: string;
@@ -22,7 +22,7 @@ export function useUpdatePigment({ onSuccess }: { onSuccess?: (pigment: PigmentV
       queryClient.setQueryData(shelfKeys.pigment(pigment.id), pigment);
       // Lots show the product's name.
       await queryClient.invalidateQueries({ queryKey: shelfKeys.pigmentLists() });
-      await refreshLotLists(queryClient);
+      await refreshLots(queryClient);
       await onSuccess?.(pigment);
     },
   });

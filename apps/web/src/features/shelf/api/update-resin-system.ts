@@ -2,7 +2,7 @@ import { ResinSystemView, type ResinSystemInput } from '@gelpoint/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { shelfKeys } from './keys';
 import { callRoute } from '../../../lib/api-routes';
-import { refreshLotLists } from '../../../lib/resources/lots';
+import { refreshLots } from '../../../lib/resources/lots';
 
 export interface UpdateResinSystemInput {
   resinSystemId: string;
@@ -22,7 +22,7 @@ export function useUpdateResinSystem({ onSuccess }: { onSuccess?: (resinSystem: 
       queryClient.setQueryData(shelfKeys.resinSystem(resinSystem.id), resinSystem);
       // Lots show the product's name.
       await queryClient.invalidateQueries({ queryKey: shelfKeys.resinSystemLists() });
-      await refreshLotLists(queryClient);
+      await refreshLots(queryClient);
       await onSuccess?.(resinSystem);
     },
   });
