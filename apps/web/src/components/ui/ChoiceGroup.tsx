@@ -12,12 +12,14 @@ export interface ChoiceGroupProps {
   legend: ReactNode;
   choices: readonly Choice[];
   error?: string | undefined;
+  /** The chosen value, for a group held in a component's state rather than registered with a form. */
+  value?: string;
   /** Props for every radio input, e.g. what react-hook-form's register() returns. */
   inputProps: Omit<InputHTMLAttributes<HTMLInputElement>, 'type' | 'value' | 'id'>;
 }
 
 /** Radio buttons in a fieldset: each choice is its own labelled, full-height target. */
-export function ChoiceGroup({ legend, choices, error, inputProps }: ChoiceGroupProps) {
+export function ChoiceGroup({ legend, choices, error, value, inputProps }: ChoiceGroupProps) {
   const id = useId();
   const errorId = error ? `${id}-error` : undefined;
   return (
@@ -27,7 +29,8 @@ export function ChoiceGroup({ legend, choices, error, inputProps }: ChoiceGroupP
         {choices.map((choice) => {
           const inputId = `${id}-${choice.value}`;
           const hintId = choice.hint ? `${inputId}-hint` : undefined;
-          // The label stretches over the whole card, so the card is one big target while the name stays the label.
+          // The label stretches over the whole card, so the card is one big target while the name stays the label; the
+          // radio sits above that stretch, so a press on the dot itself lands on the radio.
           return (
             <div
               key={choice.value}
@@ -36,7 +39,15 @@ export function ChoiceGroup({ legend, choices, error, inputProps }: ChoiceGroupP
                 'has-[:checked]:border-walnut-800 has-[:checked]:bg-walnut-50 has-[:checked]:ring-2 has-[:checked]:ring-walnut-800',
               )}
             >
-              <input id={inputId} type="radio" value={choice.value} aria-describedby={hintId} className="mt-1 size-5 accent-walnut-800" {...inputProps} />
+              <input
+                id={inputId}
+                type="radio"
+                value={choice.value}
+                aria-describedby={hintId}
+                className="relative z-10 mt-1 size-5 accent-walnut-800"
+                {...inputProps}
+                {...(value === undefined ? {} : { checked: value === choice.value })}
+              />
               <span className="flex flex-col">
                 <label htmlFor={inputId} className="cursor-pointer font-semibold after:absolute after:inset-0 after:content-['']">
                   {choice.label}

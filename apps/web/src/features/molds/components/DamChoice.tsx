@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import { cx } from '../../../lib/cx';
+import { ChoiceGroup } from '../../../components/ui/ChoiceGroup';
 import type { Dam } from '../types';
 
 const choices: readonly { value: Dam; label: string; hint: string }[] = [
@@ -11,43 +11,19 @@ export const damWords: Record<Dam, string> = { outline: 'dams along the outline'
 
 /** How the pour is held in: radio buttons, each with one line that says what it means. */
 export function DamChoice({ dam, onChange }: { dam: Dam; onChange: (dam: Dam) => void }) {
-  const id = useId();
+  const name = useId();
   return (
-    <fieldset className="flex flex-col gap-2">
-      <legend className="mb-1 text-base font-semibold text-ink">What holds the resin in</legend>
-      <div className="flex flex-col gap-2 sm:flex-row sm:flex-wrap">
-        {choices.map((choice) => {
-          const inputId = `${id}-${choice.value}`;
-          return (
-            <div
-              key={choice.value}
-              className={cx(
-                'relative flex min-h-touch flex-1 items-start gap-3 rounded-lg border border-line-strong bg-white px-3 py-2',
-                'has-[:checked]:border-walnut-800 has-[:checked]:bg-walnut-50 has-[:checked]:ring-2 has-[:checked]:ring-walnut-800',
-              )}
-            >
-              <input
-                id={inputId}
-                type="radio"
-                name={`${id}-dam`}
-                value={choice.value}
-                checked={dam === choice.value}
-                onChange={() => onChange(choice.value)}
-                aria-describedby={`${inputId}-hint`}
-                className="relative z-10 mt-1 size-5 accent-walnut-800"
-              />
-              <span className="flex flex-col">
-                <label htmlFor={inputId} className="cursor-pointer font-semibold after:absolute after:inset-0 after:content-['']">
-                  {choice.label}
-                </label>
-                <span id={`${inputId}-hint`} className="text-sm text-ink-soft">
-                  {choice.hint}
-                </span>
-              </span>
-            </div>
-          );
-        })}
-      </div>
-    </fieldset>
+    <ChoiceGroup
+      legend="What holds the resin in"
+      choices={choices}
+      value={dam}
+      inputProps={{
+        name,
+        onChange: (event) => {
+          const picked = choices.find((c) => c.value === event.target.value);
+          if (picked) onChange(picked.value);
+        },
+      }}
+    />
   );
 }
