@@ -9,7 +9,7 @@ import { AppError, notFound } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { quickShapeCavity } from './plan-cavity';
 import { measuredFromFloor, storedInputs, type MoldCavityLookup } from './plan-level';
-import { storedPlanResult } from './stored-plan-result';
+import { storedPlanResult } from './stored-plan';
 
 export type { MoldCavityLookup };
 

@@ -2,8 +2,7 @@ import type { EntityManager } from 'typeorm';
 import type { CureReading, PlanSnapshot, PourPlan as CorePourPlan, ReleaseCheck, ShopHours } from '@gelpoint/core';
 import { Piece, Pour, PourPlan, Shop } from '@gelpoint/db';
 import { notFound } from '../../http/errors';
-import { storedPlanResult } from '../pour-plans/stored-plan-result';
-import { storedPlanSnapshot } from '../pour-plans/stored-plan-snapshot';
+import { storedPlanResult, storedPlanSnapshot } from '../pour-plans/stored-plan';
 
 /** A pour with what its cure is worked out from: the piece, the plan, and the plan's stored result and products. */
 export interface LoadedPour {
