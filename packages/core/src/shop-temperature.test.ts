@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
 import { activationEnergyFromKelvinQ, rateFactor } from './arrhenius';
@@ -113,5 +114,75 @@ describe("the shop's day and night", () => {
     expect(learned.value.at(Date.UTC(2026, 11, 9, 3))).toBe(15);
     expect(learned.value.nextChange(Date.UTC(2026, 11, 9, 3, 30))).toBe(Date.UTC(2026, 11, 9, 4));
     expect(learnedShopTemperature([], 'utc', now).ok).toBe(false);
+  });
+});
+
+describe("the shop's hours against luxon's wall clock (IANA tz database through Intl)", () => {
+  const zones = ['America/Vancouver', 'Europe/Berlin', 'Pacific/Auckland', 'Australia/Lord_Howe', 'America/St_Johns', 'Asia/Kathmandu', 'utc'];
+  const minute = 60_000;
+  const wallHour = (ms: number, zone: string) => DateTime.fromMillis(ms, { zone }).hour;
+  const wallTopOfHour = (ms: number, zone: string) => {
+    const t = DateTime.fromMillis(ms, { zone });
+    return t.minute === 0 && t.second === 0 && t.millisecond === 0;
+  };
+  // Every instant in 2026 at which a zone's offset changes, found minute by minute from luxon's offsets.
+  const changes = zones.flatMap((zone) => {
+    const out: number[] = [];
+    for (let day = Date.UTC(2026, 0, 1); day < Date.UTC(2027, 0, 1); day += 24 * hour) {
+      if (DateTime.fromMillis(day, { zone }).offset === DateTime.fromMillis(day + 24 * hour, { zone }).offset) continue;
+      let t = day;
+      while (DateTime.fromMillis(t, { zone }).offset === DateTime.fromMillis(day, { zone }).offset) t += minute;
+      out.push(t);
+    }
+    return out;
+  });
+  // Any instant of 2026, or one within a day and a half of a change of offset.
+  const instant = fc.oneof(
+    fc.integer({ min: Date.UTC(2026, 0, 1), max: Date.UTC(2026, 11, 31) }),
+    fc.tuple(fc.constantFrom(...changes), fc.integer({ min: -36 * hour, max: 36 * hour })).map(([c, d]) => c + d),
+  );
+
+  /** The temperature holds from ms until next, and changes there or a set hour starts there on the wall clock. */
+  function holdsUntilNext(shopAt: (ms: number) => number, truth: (ms: number) => number, ms: number, next: number, startsHour: (ms: number) => boolean) {
+    expect(next).toBeGreaterThan(ms);
+    expect(next - ms).toBeLessThanOrEqual(26 * hour);
+    expect(shopAt(ms)).toBe(truth(ms));
+    for (let t = Math.ceil(ms / minute) * minute; t < next; t += minute) expect(truth(t)).toBe(truth(ms));
+    expect(truth(next) !== truth(next - 1) || startsHour(next)).toBe(true);
+  }
+
+  it('day and night: the temperature and its next change, any hours, any zone', () => {
+    fc.assert(
+      fc.property(fc.constantFrom(...zones), fc.integer({ min: 0, max: 23 }), fc.integer({ min: 0, max: 23 }), instant, (zone, dayStart, nightStart, ms) => {
+        fc.pre(dayStart !== nightStart);
+        const shop = dayNightShopTemperature({ dayTempC: 22, nightTempC: 14, dayStartHour: dayStart, nightStartHour: nightStart, zone });
+        if (!shop.ok) throw new Error(shop.error.message);
+        const truth = (t: number) => {
+          const h = wallHour(t, zone);
+          const isDay = dayStart < nightStart ? h >= dayStart && h < nightStart : h >= dayStart || h < nightStart;
+          return isDay ? 22 : 14;
+        };
+        const startsHour = (t: number) => wallTopOfHour(t, zone) && [dayStart, nightStart].includes(wallHour(t, zone));
+        holdsUntilNext(shop.value.at, truth, ms, shop.value.nextChange(ms), startsHour);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('learned hour by hour: the temperature and its next change, any zone', () => {
+    fc.assert(
+      fc.property(fc.constantFrom(...zones), instant, (zone, ms) => {
+        // A week of readings, one each hour, each at 10 °C plus the hour the wall clock showed.
+        const readings = Array.from({ length: 7 * 24 }, (_, i) => {
+          const at = Date.UTC(2025, 11, 1) + i * hour;
+          return { ms: at, tempC: 10 + wallHour(at, zone) };
+        });
+        const learned = learnedShopTemperature(readings, zone, Date.UTC(2025, 11, 8));
+        if (!learned.ok) throw new Error(learned.error.message);
+        const truth = (t: number) => 10 + wallHour(t, zone);
+        holdsUntilNext(learned.value.at, truth, ms, learned.value.nextChange(ms), (t) => wallTopOfHour(t, zone));
+      }),
+      { numRuns: 300 },
+    );
   });
 });

@@ -1,6 +1,9 @@
 import { DateTime } from 'luxon';
-import { checkZone } from './iso-time';
+import { checkZone, msPerHour } from './iso-time';
 import { fail, ok, type Result } from './result';
+import { zoneOffsets } from './zone-offsets';
+
+const msPerDay = 24 * msPerHour;
 
 /**
  * The shop's temperature over time where nothing is logged: one constant, day and night, or each hour of the day as
@@ -34,18 +37,48 @@ function checkHour(hour: number, label: string): Result<number> {
   return ok(hour);
 }
 
-/** The next instant after ms at which the local clock in the zone shows one of the given whole hours. */
-function nextLocalHour(ms: number, hours: readonly number[], zone: string): number {
+/** The hour of the day (0–23) the shop's clock shows at an instant. */
+function localHourAt(ms: number, zone: string): number {
+  const localMs = ms + zoneOffsets(zone).offsetMinutes(ms) * 60_000;
+  return Math.floor(localMs / msPerHour) - Math.floor(localMs / msPerDay) * 24;
+}
+
+/**
+ * The next instant after ms at which the local clock in the zone shows one of the given whole hours. Where the
+ * offset holds from ms to that hour, local time runs with UTC and the hour is found by counting; across a change of
+ * offset, luxon resolves the wall-clock hour (see wallClockNextHour).
+ */
+function nextLocalHour(ms: number, hours: readonly boolean[], zone: string): number {
+  const offsets = zoneOffsets(zone);
+  const offsetMs = offsets.offsetMinutes(ms) * 60_000;
+  const hourNow = Math.floor((ms + offsetMs) / msPerHour);
+  for (let h = hourNow + 1; h <= hourNow + 25; h++) {
+    if (!hours[h - Math.floor(h / 24) * 24]) continue;
+    const candidate = h * msPerHour - offsetMs;
+    return offsets.changesBetween(ms, candidate) ? wallClockNextHour(ms, hours, zone) : candidate;
+  }
+  return Infinity;
+}
+
+/** The same answer from luxon's wall-clock arithmetic, for the stretches where the offset changes. */
+function wallClockNextHour(ms: number, hours: readonly boolean[], zone: string): number {
   const local = DateTime.fromMillis(ms, { zone });
   let best = Infinity;
   for (let day = 0; day <= 2; day++) {
-    for (const hour of hours) {
+    for (let hour = 0; hour < 24; hour++) {
+      if (!hours[hour]) continue;
       // Across a daylight-saving gap luxon moves a missing local hour forward, as the clock on the wall does.
       const candidate = local.startOf('day').plus({ days: day }).set({ hour }).toMillis();
       if (candidate > ms && candidate < best) best = candidate;
     }
   }
   return best;
+}
+
+function hourSet(hours: readonly number[]): boolean[] {
+  const set = new Array<boolean>(24).fill(false);
+  for (const h of hours) set[h] = true;
+  return set;
 }
 
 export interface DayNightInput {
@@ -74,13 +107,14 @@ export function dayNightShopTemperature(input: DayNightInput): Result<ShopTemper
   ] as const) {
     if (!Number.isFinite(t) || t <= -273.15) return fail('temperature_invalid', `${label} must be a number in °C, got ${String(t)}.`);
   }
+  const changes = hourSet([day.value, night.value]);
   const isDay = (ms: number) => {
-    const hour = DateTime.fromMillis(ms, { zone: zone.value }).hour;
+    const hour = localHourAt(ms, zone.value);
     return day.value < night.value ? hour >= day.value && hour < night.value : hour >= day.value || hour < night.value;
   };
   return ok({
     at: (ms) => (isDay(ms) ? input.dayTempC : input.nightTempC),
-    nextChange: (ms) => nextLocalHour(ms, [day.value, night.value], zone.value),
+    nextChange: (ms) => nextLocalHour(ms, changes, zone.value),
     words: `${round1(input.dayTempC)} °C by day from ${day.value}:00 and ${round1(input.nightTempC)} °C by night from ${night.value}:00 (the shop's day and night)`,
   });
 }
@@ -105,16 +139,16 @@ export function learnedShopTemperature(readings: { ms: number; tempC: number }[]
   const sums = new Array<number>(24).fill(0);
   const counts = new Array<number>(24).fill(0);
   for (const r of recent) {
-    const hour = DateTime.fromMillis(r.ms, { zone: checked.value }).hour;
+    const hour = localHourAt(r.ms, checked.value);
     sums[hour]! += r.tempC;
     counts[hour]! += 1;
   }
   const mean = recent.reduce((a, r) => a + r.tempC, 0) / recent.length;
   const byHour = sums.map((s, h) => (counts[h]! > 0 ? s / counts[h]! : mean));
-  const hours = Array.from({ length: 24 }, (_, h) => h);
+  const everyHour = new Array<boolean>(24).fill(true);
   return ok({
-    at: (ms) => byHour[DateTime.fromMillis(ms, { zone: checked.value }).hour]!,
-    nextChange: (ms) => nextLocalHour(ms, hours, checked.value),
+    at: (ms) => byHour[localHourAt(ms, checked.value)]!,
+    nextChange: (ms) => nextLocalHour(ms, everyHour, checked.value),
     words: `the shop's temperature hour by hour as the last ${learnedProfileDays} days of readings showed it (${round1(Math.min(...byHour))} to ${round1(Math.max(...byHour))} °C)`,
   });
 }
