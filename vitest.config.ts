@@ -36,6 +36,10 @@ export default defineConfig({
     // A poll waits for a page or a worker to catch up; on a shared 2-core machine 1 s (the default) is too short.
     expect: { poll: { timeout: 10_000, interval: 100 } },
     pool: 'forks',
+    // Vitest's own default (cores − 1 workers) unless GELPOINT_TEST_WORKERS says otherwise. Each worker has a test
+    // database of its own (docker-free-scripts/test-setup/provided-env.ts), so files may run side by side; on this
+    // 2-core machine two at a time saved only 8 % (the suite is CPU-bound; DEVELOPERS.md has the figures).
+    ...(process.env.GELPOINT_TEST_WORKERS ? { maxWorkers: Number(process.env.GELPOINT_TEST_WORKERS) } : {}),
     // mathjs is a thousand small modules: loading them costs a test file about a second. Pre-bundled once a run
     // (esbuild, into node_modules/.vite), every file that converts units loads one file instead; the code is mathjs's own.
     deps: { optimizer: { ssr: { enabled: process.env.GELPOINT_TEST_BUNDLE_MATHJS !== '0', include: ['mathjs'] } } },

@@ -10,7 +10,7 @@ ensure_node_deps
 ensure_apt_package chromium test -x /usr/bin/chromium
 # Tests never touch the development database (the set-up points DATABASE_URL at the test database), and get a
 # throwaway signing secret.
-export DATABASE_URL="$(db_url gelpoint_test)"
+export DATABASE_URL="$(db_url gelpoint_test_1)"
 export GELPOINT_JWT_SECRET="$(node -e 'process.stdout.write(require("crypto").randomBytes(48).toString("base64url"))')"
 export GELPOINT_LOG_LEVEL="${GELPOINT_LOG_LEVEL:-silent}"
 

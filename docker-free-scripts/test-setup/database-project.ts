@@ -1,17 +1,21 @@
+import { availableParallelism } from 'node:os';
 import type { TestProject } from 'vitest/node';
-import { demoDatabases, freshTestDatabase } from './databases';
+import { demoDatabases, freshTestDatabases } from './databases';
 
 declare module 'vitest' {
   export interface ProvidedContext {
-    testDatabaseUrl: string;
+    /** One test database per test worker; a file takes the one of the worker it runs in (VITEST_POOL_ID). */
+    testDatabaseUrls: string[];
     e2eDatabaseUrl: string;
     e2eTemplateDatabase: string;
   }
 }
 
-/** Global set-up of the database project: PostgreSQL, a fresh migrated test database, and the seeded demo. */
+/** Global set-up of the database project: PostgreSQL, a fresh migrated test database per worker, and the seeded demo. */
 export default function setup(project: TestProject): void {
-  project.provide('testDatabaseUrl', freshTestDatabase());
+  // As many as vitest starts workers: its maxWorkers, or its default of cores − 1.
+  const workers = project.vitest.config.maxWorkers || Math.max(availableParallelism() - 1, 1);
+  project.provide('testDatabaseUrls', freshTestDatabases(workers));
   // The seed's own test reads the demo as the seed wrote it.
   const demo = demoDatabases();
   project.provide('e2eDatabaseUrl', demo.url);

@@ -24,12 +24,19 @@ function dbScript(script: 'migrate' | 'seed', url: string): void {
 
 const urlOf = (name: string) => libSh('db_url "$1"', name);
 
-/** The database the API, worker and db integration tests use: dropped, created and migrated once a run. */
-export function freshTestDatabase(): string {
-  libSh('pg_start >&2 && ensure_database gelpoint_test --fresh');
-  const url = urlOf('gelpoint_test');
-  dbScript('migrate', url);
-  return url;
+/**
+ * The databases the API, worker and db integration tests use, one per test worker so that files running side by side
+ * never see each other's rows or jobs: a migrated template made once a run, copied for each worker.
+ */
+export function freshTestDatabases(workers: number): string[] {
+  const template = 'gelpoint_test_template';
+  libSh('pg_start >&2 && ensure_database "$1" --fresh', template);
+  dbScript('migrate', urlOf(template));
+  return Array.from({ length: workers }, (_, i) => {
+    const name = `gelpoint_test_${i + 1}`;
+    libSh('superuser_psql -c "DROP DATABASE IF EXISTS $1 WITH (FORCE)" -c "CREATE DATABASE $1 OWNER \\"$GELPOINT_DB_USER\\" TEMPLATE $2"', name, template);
+    return urlOf(name);
+  });
 }
 
 export interface DemoDatabases {
