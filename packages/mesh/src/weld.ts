@@ -107,7 +107,10 @@ export interface ExactWeld {
   keys: Uint32Array;
   /** The vertex of every corner, three per triangle. */
   cornerVertex: Uint32Array;
-  /** Memory the weld used and no longer needs (see SpareMemory); null when it kept none. */
+  /**
+   * Memory the weld wrote and needs no more once the keys, which it holds, have been read
+   * (framedWeld): lent on as SpareMemory; null when there is none.
+   */
   spare: Uint8Array | null;
 }
 
@@ -141,7 +144,8 @@ export class ExactWelder {
 
   /** `cornerVertex` has room for every corner that will be added. */
   constructor(private readonly cornerVertex: Uint32Array) {
-    this.missRecords = new Uint32Array(recordSize * Math.max(1024, Math.ceil(cornerVertex.length / 4)));
+    // Room for the sorted copy too (see finish): pages never written cost nothing.
+    this.missRecords = new Uint32Array(2 * recordSize * Math.max(1024, Math.ceil(cornerVertex.length / 4)));
   }
 
   /** Takes `count` corners, three float32 bit patterns each, from the start of `bits`. */
@@ -168,9 +172,9 @@ export class ExactWelder {
         cornerVertex[c] = cached;
         continue;
       }
-      if (recordSize * misses === missRecords.length) {
+      if (2 * recordSize * misses === missRecords.length) {
         const grown = new Uint32Array(2 * missRecords.length);
-        grown.set(missRecords);
+        grown.set(missRecords.subarray(0, recordSize * misses));
         missRecords = grown;
       }
       const at = recordSize * misses++;
@@ -203,7 +207,9 @@ export class ExactWelder {
     const start = new Uint32Array(partitions + 1);
     for (let m = 0; m < misses; m++) start[partitionOf(missRecords[recordSize * m + 1]!) + 1]!++;
     for (let q = 0; q < partitions; q++) start[q + 1]! += start[q]!;
-    const sorted = new Uint32Array(recordSize * misses);
+    // Behind the list when it fits, so the two make one stretch of memory to lend on.
+    const listEnd = recordSize * misses;
+    const sorted = missRecords.subarray(listEnd, 2 * listEnd);
     const next = start.slice(0, partitions);
     for (let m = 0; m < misses; m++) {
       const from = recordSize * m,
@@ -275,8 +281,8 @@ export class ExactWelder {
       keys[3 * count + 2] = kz;
       cornerVertex[c] = count++;
     }
-    // The sorted copy of the misses is spent: lend its bytes on.
-    const spare = sorted.length > 0 ? new Uint8Array(sorted.buffer, sorted.byteOffset, sorted.byteLength) : null;
+    // The list and its sorted copy are spent but for the keys at its start.
+    const spare = listEnd > 0 ? new Uint8Array(missRecords.buffer, missRecords.byteOffset, 8 * listEnd) : null;
     return { keys: keys.subarray(0, 3 * count), cornerVertex, spare };
   }
 }
