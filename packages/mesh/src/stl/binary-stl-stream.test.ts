@@ -155,7 +155,7 @@ describe('BinaryStlStream: files it leaves to readMouldFile, and refusals', () =
     expect(streamed(plain, [plain.length], pocketBlock.triangleCount)).not.toBeNull();
   });
 
-  it('refuses a corner that is not finite with the whole-file reader\'s sentence, at any chunking', () => {
+  it("refuses a corner that is not finite with the whole-file reader's sentence, at any chunking", () => {
     for (const bad of [Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY]) {
       const bytes = encodeStlBinary(pocketBlock);
       // Triangle 5, its second corner's y.

@@ -27,7 +27,6 @@ const blockRecords = 1024;
  * binary STL, its size and count in agreement; everything else goes to readMouldFile.
  */
 export class BinaryStlStream {
-  private readonly header = new Uint8Array(binaryHeaderBytes);
   private readonly record = new Uint8Array(binaryRecordBytes);
   private recordFill = 0;
   private received = 0;
@@ -65,12 +64,11 @@ export class BinaryStlStream {
 
   /** The file's next bytes, from its first on; chunks may split the header or a record anywhere. */
   push(chunk: Uint8Array): void {
-    let at = 0;
     const length = chunk.length;
     this.received += length;
     if (this.received > this.fileBytes) return;
-    const headerBytes = Math.min(length, Math.max(0, binaryHeaderBytes - (this.received - length)));
-    at = headerBytes;
+    // The header's bytes were read by `open`: skip those in this chunk.
+    let at = Math.min(length, Math.max(0, binaryHeaderBytes - (this.received - length)));
     if (at === length) return;
     if (this.recordFill > 0) {
       const take = Math.min(binaryRecordBytes - this.recordFill, length - at);
