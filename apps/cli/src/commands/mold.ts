@@ -184,6 +184,8 @@ export const command: Command = async (argv) => {
 
 /** Bytes read at a time: every fresh page costs, so one buffer is filled again and again. */
 const chunkBytes = 1 << 20;
+/** A binary STL's header, the least a file must hold to be read in chunks. */
+const binaryHeaderBytes = 84;
 
 interface ReadMould {
   format: MouldFormat;
@@ -203,16 +205,19 @@ function readMould(file: string): ReadMould {
   try {
     const fd = openSync(file, 'r');
     try {
-      const size = fstatSync(fd).size;
-      const buffer = new Uint8Array(Math.min(chunkBytes, Math.max(size, 1)));
-      let length = readSync(fd, buffer, 0, buffer.length, null);
-      const stream = length === size || length >= 84 ? BinaryStlStream.open(buffer.subarray(0, length), size) : null;
-      if (stream) {
-        while (length > 0) {
-          stream.push(buffer.subarray(0, length));
-          length = readSync(fd, buffer, 0, buffer.length, null);
+      const stat = fstatSync(fd);
+      // Only a regular file's size is known before reading it; a pipe is read whole, untouched.
+      if (stat.isFile() && stat.size >= binaryHeaderBytes) {
+        const buffer = new Uint8Array(Math.min(chunkBytes, stat.size));
+        let length = readSync(fd, buffer, 0, buffer.length, null);
+        const stream = BinaryStlStream.open(buffer.subarray(0, length), stat.size);
+        if (stream) {
+          while (length > 0) {
+            stream.push(buffer.subarray(0, length));
+            length = readSync(fd, buffer, 0, buffer.length, null);
+          }
+          return { format: 'stl', fileUnits: null, streamed: unwrap(stream.finish()) };
         }
-        return { format: 'stl', fileUnits: null, streamed: unwrap(stream.finish()) };
       }
       // A view, not a copy: the file can be tens of MB, and every fresh page costs.
       const whole = readFileSync(file);
