@@ -16,8 +16,8 @@ const expectedWetted = 20 * 16 + 2 * (20 + 16) * 5;
 
 let dir = '';
 const files: Record<string, string> = {};
-let gridBytes = new Uint8Array(0);
-let nanBytes = new Uint8Array(0);
+let gridBytes: Uint8Array = new Uint8Array(0);
+let nanBytes: Uint8Array = new Uint8Array(0);
 beforeAll(async () => {
   dir = await mkdtemp(join(tmpdir(), 'gelpoint-mold-'));
   const write = async (name: string, bytes: Uint8Array | string): Promise<void> => {
