@@ -1,4 +1,5 @@
 export { parseStl } from './stl/parse-stl';
+export { BinaryStlStream, type BinaryStlStreamOptions, type StreamedStl } from './stl/binary-stl-stream';
 export { readMouldFile, detectMouldFormat, type MouldFile, type MouldFormat, type ReadMouldFileOptions } from './mould-file';
 export { read3mf, type Read3mf, type Read3mfOptions } from './threemf/read-3mf';
 export { archiveLimitsFor, defaultArchiveLimits, type ArchiveLimits } from './threemf/archive-limits';
@@ -6,7 +7,7 @@ export { parseObj, type ParseObjOptions } from './obj/parse-obj';
 export { defaultMaxTriangles, type ParseStlOptions, type TriangleSoup } from './stl/triangle-soup';
 export { encodeStlAscii, encodeStlBinary, type AsciiStlOptions, type StlSource } from './stl/encode-stl';
 export { fileUnitsList, mmPerUnit, type ChosenUnits, type FileUnits, type UpAxis } from './frame';
-export { prepareMesh, relativeWeldTolerance, type CavityMesh, type MeshTopologyReport, type PrepareMeshOptions } from './prepare-mesh';
+export { prepareMesh, prepareStreamedStl, relativeWeldTolerance, type CavityMesh, type MeshTopologyReport, type PrepareMeshOptions } from './prepare-mesh';
 export type { BoundingBox } from './mesh-measures';
 export { analyzeCavity, analysisDefaults, type AnalyzeCavityOptions } from './analyze-cavity';
 export { analyzeMouldFile, analyzeStl, type AnalyzeStlOptions, type MouldFileAnalysis } from './analyze-stl';

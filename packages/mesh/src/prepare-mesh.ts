@@ -4,7 +4,8 @@ import { boundingBox, surfaceMeasures, type BoundingBox } from './mesh-measures'
 import { fail, ok, type MeshWarning, type Result } from './result';
 import type { TriangleSoup } from './stl/triangle-soup';
 import { cleanMesh } from './mesh-cleanup';
-import { weldSoup } from './weld';
+import type { StreamedStl } from './stl/binary-stl-stream';
+import { framedWeld, weldSoup, type WeldedMesh } from './weld';
 import { repairWinding, turnAllTriangles } from './winding';
 
 export interface PrepareMeshOptions {
@@ -97,7 +98,25 @@ export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}
       );
     }
   }
-  const welded = weldSoup(soup, { up: up.value, scale, toleranceMm });
+  // The soup's corners are read for the last time by the weld: a file read in place is spare then.
+  return preparedWeld(weldSoup(soup, { up: up.value, scale, toleranceMm }), toleranceMm, soup.warnings, soup.spareBytes ?? null);
+}
+
+/**
+ * prepareMesh for a binary STL whose corners were welded as it was read (BinaryStlStream): the
+ * same mesh prepareMesh gives the whole file's soup, bit for bit. Welds bit-identical corners only
+ * (no weldToleranceMm).
+ */
+export function prepareStreamedStl(read: StreamedStl, options: Omit<PrepareMeshOptions, 'weldToleranceMm'> = {}): Result<CavityMesh> {
+  const units = checkUnits(options.units ?? 'mm');
+  if (!units.ok) return units;
+  const up = checkUpAxis(options.up ?? 'z');
+  if (!up.ok) return up;
+  const welded = framedWeld(read.weld, read.triangleCount, { up: up.value, scale: mmPerUnit[units.value] });
+  return preparedWeld(welded, 0, read.warnings, read.weld.spare);
+}
+
+function preparedWeld(welded: WeldedMesh, toleranceMm: number, readWarnings: MeshWarning[], spare: Uint8Array | null): Result<CavityMesh> {
   if (welded.triangleCount === 0) {
     return fail(
       'mesh_degenerate',
@@ -107,8 +126,6 @@ export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}
   const weldedBox = boundingBox(welded.positionsMm, welded.vertexCount);
   const diagonalMm = Math.hypot(...[0, 1, 2].map((k) => weldedBox.max[k]! - weldedBox.min[k]!));
   const cleanToleranceMm = toleranceMm > 0 ? toleranceMm : relativeWeldTolerance * diagonalMm;
-  // The soup's corners were read for the last time by the weld: a file read in place is spare now.
-  const spare = soup.spareBytes ?? null;
   const cleaned = cleanMesh(welded.positionsMm, welded.triangles, welded.vertexCount, cleanToleranceMm, spare);
   const triangles = cleaned.triangles;
   const triangleCount = triangles.length / 3;
@@ -127,7 +144,7 @@ export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}
     );
   }
 
-  const warnings: MeshWarning[] = [...soup.warnings];
+  const warnings: MeshWarning[] = [...readWarnings];
   const edges = cleaned.edges;
   const vertexCount = cleaned.vertexCount;
   let turnedTriangles = 0;

@@ -99,17 +99,31 @@ class VertexTable {
 const partitionTarget = 8192;
 /** Words per listed miss: corner, hash, three keys. */
 const recordSize = 5;
+const recentMask = 16383;
+
+/** Bit-identical corners welded: the vertices' keys and every corner's vertex, in the file's frame. */
+export interface ExactWeld {
+  /** Three per vertex: the float32 bits of its coordinates (−0 read as +0), vertices numbered in the order their first corner appears. */
+  keys: Uint32Array;
+  /** The vertex of every corner, three per triangle. */
+  cornerVertex: Uint32Array;
+  /**
+   * Memory the weld wrote and needs no more once the keys, which it holds, have been read
+   * (framedWeld): lent on as SpareMemory; null when there is none.
+   */
+  spare: Uint8Array | null;
+}
 
 /**
- * Welds bit-identical corners and numbers the vertices in the order their first corner appears.
- * Writes the vertex of every corner into `cornerVertex` and returns the vertices' keys (their
- * float32 bits, −0 read as +0), three per vertex.
+ * Welds bit-identical corners and numbers the vertices in the order their first corner appears,
+ * taking the corners a block at a time as a reader finds them (`add`), so a file need never be
+ * held whole.
  *
  * A big hash table over every vertex would take one cache miss per new vertex, so the work is
  * done in passes that each stay in cache:
  *  1. files list neighbouring triangles one after another, so most corners were seen a moment
  *     ago: a small direct-mapped cache of recent corners points them at that earlier corner; the
- *     rest (misses) are listed with their keys and hash;
+ *     rest (misses) are listed with their keys and hash (this pass runs as the corners arrive);
  *  2. the misses are sorted stably into partitions by the top bits of the hash;
  *  3. each partition finds, with a small table of its own, the first corner with each key and
  *     points the later ones at it;
@@ -118,124 +132,197 @@ const recordSize = 5;
  * Every corner thus points at an earlier corner with the same key, or at itself when it is the
  * first, which gives the same numbering as one table consulted in corner order.
  */
-function weldExactBits(bits: Uint32Array, corners: number, cornerVertex: Uint32Array): Uint32Array {
-  const recentMask = 16383;
-  const recentCorner = new Int32Array(recentMask + 1).fill(-1);
-  const recentKey = new Uint32Array(3 * (recentMask + 1));
+export class ExactWelder {
+  /** Corners taken so far. */
+  corners = 0;
+  private readonly recentCorner = new Int32Array(recentMask + 1).fill(-1);
+  private readonly recentKey = new Uint32Array(3 * (recentMask + 1));
   // One record per miss: corner, hash, then the three keys, so each pass below reads and writes
   // one stream per partition instead of one per field.
-  let missRecords = new Uint32Array(recordSize * Math.max(1024, Math.ceil(corners / 4)));
-  let misses = 0;
-  for (let c = 0; c < corners; c++) {
-    // -0 and +0 are the same point; their bit patterns are not.
-    let bx = bits[3 * c]!,
-      by = bits[3 * c + 1]!,
-      bz = bits[3 * c + 2]!;
-    if (bx === 0x80000000) bx = 0;
-    if (by === 0x80000000) by = 0;
-    if (bz === 0x80000000) bz = 0;
-    const hash = mix(bx, by, bz);
-    const r = hash & recentMask;
-    const cached = recentCorner[r]!;
-    if (cached >= 0 && recentKey[3 * r] === bx && recentKey[3 * r + 1] === by && recentKey[3 * r + 2] === bz) {
-      cornerVertex[c] = cached;
-      continue;
-    }
-    if (recordSize * misses === missRecords.length) {
-      const grown = new Uint32Array(2 * missRecords.length);
-      grown.set(missRecords);
-      missRecords = grown;
-    }
-    const at = recordSize * misses++;
-    // A second mix, so the partitions and their slots do not follow the recent cache's bits.
-    missRecords[at] = c;
-    missRecords[at + 1] = spread(hash);
-    missRecords[at + 2] = bx;
-    missRecords[at + 3] = by;
-    missRecords[at + 4] = bz;
-    recentCorner[r] = c;
-    recentKey[3 * r] = bx;
-    recentKey[3 * r + 1] = by;
-    recentKey[3 * r + 2] = bz;
+  private missRecords: Uint32Array;
+  private misses = 0;
+
+  /** `cornerVertex` has room for every corner that will be added. */
+  constructor(private readonly cornerVertex: Uint32Array) {
+    // Room for the sorted copy too (see finish): pages never written cost nothing.
+    this.missRecords = new Uint32Array(2 * recordSize * Math.max(1024, Math.ceil(cornerVertex.length / 4)));
   }
 
-  let partitionBits = 0;
-  while (misses >>> partitionBits > partitionTarget && partitionBits < 16) partitionBits++;
-  const partitions = 1 << partitionBits;
-  const partitionOf = (hash: number): number => (partitionBits === 0 ? 0 : hash >>> (32 - partitionBits));
-  const start = new Uint32Array(partitions + 1);
-  for (let m = 0; m < misses; m++) start[partitionOf(missRecords[recordSize * m + 1]!) + 1]!++;
-  for (let q = 0; q < partitions; q++) start[q + 1]! += start[q]!;
-  const sorted = new Uint32Array(recordSize * misses);
-  const next = start.slice(0, partitions);
-  for (let m = 0; m < misses; m++) {
-    const from = recordSize * m,
-      to = recordSize * next[partitionOf(missRecords[from + 1]!)]!++;
-    sorted[to] = missRecords[from]!;
-    sorted[to + 1] = missRecords[from + 1]!;
-    sorted[to + 2] = missRecords[from + 2]!;
-    sorted[to + 3] = missRecords[from + 3]!;
-    sorted[to + 4] = missRecords[from + 4]!;
+  /** Takes `count` corners, three float32 bit patterns each, from the start of `bits`. */
+  add(bits: Uint32Array, count: number): void {
+    const recentCorner = this.recentCorner,
+      recentKey = this.recentKey,
+      cornerVertex = this.cornerVertex;
+    let missRecords = this.missRecords;
+    let misses = this.misses;
+    const first = this.corners;
+    for (let i = 0; i < count; i++) {
+      const c = first + i;
+      // -0 and +0 are the same point; their bit patterns are not.
+      let bx = bits[3 * i]!,
+        by = bits[3 * i + 1]!,
+        bz = bits[3 * i + 2]!;
+      if (bx === 0x80000000) bx = 0;
+      if (by === 0x80000000) by = 0;
+      if (bz === 0x80000000) bz = 0;
+      const hash = mix(bx, by, bz);
+      const r = hash & recentMask;
+      const cached = recentCorner[r]!;
+      if (cached >= 0 && recentKey[3 * r] === bx && recentKey[3 * r + 1] === by && recentKey[3 * r + 2] === bz) {
+        cornerVertex[c] = cached;
+        continue;
+      }
+      if (2 * recordSize * misses === missRecords.length) {
+        const grown = new Uint32Array(2 * missRecords.length);
+        grown.set(missRecords.subarray(0, recordSize * misses));
+        missRecords = grown;
+      }
+      const at = recordSize * misses++;
+      // A second mix, so the partitions and their slots do not follow the recent cache's bits.
+      missRecords[at] = c;
+      missRecords[at + 1] = spread(hash);
+      missRecords[at + 2] = bx;
+      missRecords[at + 3] = by;
+      missRecords[at + 4] = bz;
+      recentCorner[r] = c;
+      recentKey[3 * r] = bx;
+      recentKey[3 * r + 1] = by;
+      recentKey[3 * r + 2] = bz;
+    }
+    this.missRecords = missRecords;
+    this.misses = misses;
+    this.corners = first + count;
   }
 
-  let largest = 0;
-  for (let q = 0; q < partitions; q++) largest = Math.max(largest, start[q + 1]! - start[q]!);
-  let tableSize = 16;
-  while (tableSize < 2 * largest) tableSize *= 2;
-  // Slot → 1 + index in the sorted misses of the first corner with that key; 0 when empty.
-  const slots = new Int32Array(tableSize);
-  for (let q = 0; q < partitions; q++) {
-    const from = start[q]!,
-      to = start[q + 1]!;
-    let size = 16;
-    while (size < 2 * (to - from)) size *= 2;
-    const mask = size - 1;
-    slots.fill(0, 0, size);
-    for (let j = from; j < to; j++) {
-      const at = recordSize * j,
-        corner = sorted[at]!,
-        kx = sorted[at + 2]!,
-        ky = sorted[at + 3]!,
-        kz = sorted[at + 4]!;
-      let h = sorted[at + 1]! & mask;
-      for (;;) {
-        const slot = slots[h]!;
-        if (slot === 0) {
-          slots[h] = j + 1;
-          cornerVertex[corner] = corner;
-          break;
+  /** Passes 2 to 4 over the corners added; the welder is spent afterwards. */
+  finish(): ExactWeld {
+    const missRecords = this.missRecords,
+      misses = this.misses,
+      corners = this.corners,
+      cornerVertex = this.cornerVertex;
+    let partitionBits = 0;
+    while (misses >>> partitionBits > partitionTarget && partitionBits < 16) partitionBits++;
+    const partitions = 1 << partitionBits;
+    const partitionOf = (hash: number): number => (partitionBits === 0 ? 0 : hash >>> (32 - partitionBits));
+    const start = new Uint32Array(partitions + 1);
+    for (let m = 0; m < misses; m++) start[partitionOf(missRecords[recordSize * m + 1]!) + 1]!++;
+    for (let q = 0; q < partitions; q++) start[q + 1]! += start[q]!;
+    // Behind the list when it fits, so the two make one stretch of memory to lend on.
+    const listEnd = recordSize * misses;
+    const sorted = missRecords.subarray(listEnd, 2 * listEnd);
+    const next = start.slice(0, partitions);
+    for (let m = 0; m < misses; m++) {
+      const from = recordSize * m,
+        to = recordSize * next[partitionOf(missRecords[from + 1]!)]!++;
+      sorted[to] = missRecords[from]!;
+      sorted[to + 1] = missRecords[from + 1]!;
+      sorted[to + 2] = missRecords[from + 2]!;
+      sorted[to + 3] = missRecords[from + 3]!;
+      sorted[to + 4] = missRecords[from + 4]!;
+    }
+
+    let largest = 0;
+    for (let q = 0; q < partitions; q++) largest = Math.max(largest, start[q + 1]! - start[q]!);
+    let tableSize = 16;
+    while (tableSize < 2 * largest) tableSize *= 2;
+    // Slot → 1 + index in the sorted misses of the first corner with that key; 0 when empty.
+    const slots = new Int32Array(tableSize);
+    for (let q = 0; q < partitions; q++) {
+      const from = start[q]!,
+        to = start[q + 1]!;
+      let size = 16;
+      while (size < 2 * (to - from)) size *= 2;
+      const mask = size - 1;
+      slots.fill(0, 0, size);
+      for (let j = from; j < to; j++) {
+        const at = recordSize * j,
+          corner = sorted[at]!,
+          kx = sorted[at + 2]!,
+          ky = sorted[at + 3]!,
+          kz = sorted[at + 4]!;
+        let h = sorted[at + 1]! & mask;
+        for (;;) {
+          const slot = slots[h]!;
+          if (slot === 0) {
+            slots[h] = j + 1;
+            cornerVertex[corner] = corner;
+            break;
+          }
+          const first = recordSize * (slot - 1);
+          if (sorted[first + 2] === kx && sorted[first + 3] === ky && sorted[first + 4] === kz) {
+            cornerVertex[corner] = sorted[first]!;
+            break;
+          }
+          h = (h + 1) & mask;
         }
-        const first = recordSize * (slot - 1);
-        if (sorted[first + 2] === kx && sorted[first + 3] === ky && sorted[first + 4] === kz) {
-          cornerVertex[corner] = sorted[first]!;
-          break;
-        }
-        h = (h + 1) & mask;
       }
     }
-  }
 
-  // The list of misses is spent by now; its start holds the keys (at most one vertex per miss).
-  const keys = missRecords;
-  let count = 0;
-  for (let c = 0; c < corners; c++) {
-    const earlier = cornerVertex[c]!;
-    if (earlier !== c) {
-      cornerVertex[c] = cornerVertex[earlier]!;
-      continue;
+    // The first corner with a key is always a miss (nothing earlier could be cached under it), and
+    // the misses are listed in corner order: walking them alongside finds its keys. They are
+    // written over the list's start (vertex n at 3n, read from miss m ≥ n at 5m, and only later
+    // misses read after it), which is spent once read.
+    const keys = missRecords;
+    let count = 0;
+    let m = 0;
+    for (let c = 0; c < corners; c++) {
+      const earlier = cornerVertex[c]!;
+      if (earlier !== c) {
+        cornerVertex[c] = cornerVertex[earlier]!;
+        continue;
+      }
+      while (missRecords[recordSize * m] !== c) m++;
+      const at = recordSize * m++;
+      const kx = missRecords[at + 2]!,
+        ky = missRecords[at + 3]!,
+        kz = missRecords[at + 4]!;
+      keys[3 * count] = kx;
+      keys[3 * count + 1] = ky;
+      keys[3 * count + 2] = kz;
+      cornerVertex[c] = count++;
     }
-    let bx = bits[3 * c]!,
-      by = bits[3 * c + 1]!,
-      bz = bits[3 * c + 2]!;
-    if (bx === 0x80000000) bx = 0;
-    if (by === 0x80000000) by = 0;
-    if (bz === 0x80000000) bz = 0;
-    keys[3 * count] = bx;
-    keys[3 * count + 1] = by;
-    keys[3 * count + 2] = bz;
-    cornerVertex[c] = count++;
+    // The list and its sorted copy are spent but for the keys at its start.
+    const spare = listEnd > 0 ? new Uint8Array(missRecords.buffer, missRecords.byteOffset, 8 * listEnd) : null;
+    return { keys: keys.subarray(0, 3 * count), cornerVertex, spare };
   }
-  return keys.subarray(0, 3 * count);
+}
+
+/**
+ * The welded vertices in the Z-up millimetre frame, and the triangles without those whose corners
+ * fell on one vertex (compacted in the corner array itself).
+ */
+export function framedWeld(weld: ExactWeld, triangleCount: number, frame: Pick<WeldFrame, 'up' | 'scale'>): WeldedMesh {
+  const { keys, cornerVertex } = weld;
+  const vertexCount = keys.length / 3;
+  // The keys are the corners' float32 bits: read them back as coordinates.
+  const coordinates = new Float32Array(keys.buffer, keys.byteOffset, vertexCount * 3);
+  const positionsMm = new Float64Array(vertexCount * 3);
+  for (let v = 0; v < vertexCount; v++) {
+    toZUpMm(coordinates[3 * v]!, coordinates[3 * v + 1]!, coordinates[3 * v + 2]!, frame.up, frame.scale, positionsMm, 3 * v);
+  }
+  return withoutCollapsed(positionsMm, vertexCount, cornerVertex, triangleCount);
+}
+
+function withoutCollapsed(positionsMm: Float64Array, vertexCount: number, cornerVertex: Uint32Array, triangleCount: number): WeldedMesh {
+  let kept = 0;
+  for (let t = 0; t < triangleCount; t++) {
+    const a = cornerVertex[3 * t]!,
+      b = cornerVertex[3 * t + 1]!,
+      c = cornerVertex[3 * t + 2]!;
+    if (a === b || b === c || a === c) continue;
+    // Compacting in place: a kept triangle never lands ahead of where it was read.
+    cornerVertex[3 * kept] = a;
+    cornerVertex[3 * kept + 1] = b;
+    cornerVertex[3 * kept + 2] = c;
+    kept++;
+  }
+  return {
+    positionsMm,
+    triangles: kept === triangleCount ? cornerVertex : cornerVertex.slice(0, kept * 3),
+    vertexCount,
+    triangleCount: kept,
+    degenerateDropped: triangleCount - kept,
+  };
 }
 
 /**
@@ -246,8 +333,6 @@ export function weldSoup(soup: TriangleSoup, frame: WeldFrame): WeldedMesh {
   const corners = soup.triangleCount * 3;
   const cornerVertex = new Uint32Array(corners);
   const p = soup.positions;
-  let positionsMm: Float64Array;
-  let vertexCount: number;
 
   if (frame.toleranceMm > 0) {
     // Keys are the corner's cell on a grid of the tolerance; prepareMesh keeps cell numbers
@@ -265,41 +350,14 @@ export function weldSoup(soup: TriangleSoup, frame: WeldFrame): WeldedMesh {
       cornerVertex[c] = table.idOf(kx, ky, kz, mix(kx, ky, kz));
       if (table.count > before) firstCorner.push(c);
     }
-    positionsMm = new Float64Array(table.count * 3);
+    const positionsMm = new Float64Array(table.count * 3);
     for (let v = 0; v < table.count; v++) {
       const c = firstCorner[v]!;
       toZUpMm(p[3 * c]!, p[3 * c + 1]!, p[3 * c + 2]!, frame.up, frame.scale, positionsMm, 3 * v);
     }
-    vertexCount = table.count;
-  } else {
-    const bits = new Uint32Array(p.buffer, p.byteOffset, corners * 3);
-    const keys = weldExactBits(bits, corners, cornerVertex);
-    vertexCount = keys.length / 3;
-    // The keys are the corners' float32 bits: read them back as coordinates.
-    const coordinates = new Float32Array(keys.buffer, keys.byteOffset, vertexCount * 3);
-    positionsMm = new Float64Array(vertexCount * 3);
-    for (let v = 0; v < vertexCount; v++) {
-      toZUpMm(coordinates[3 * v]!, coordinates[3 * v + 1]!, coordinates[3 * v + 2]!, frame.up, frame.scale, positionsMm, 3 * v);
-    }
+    return withoutCollapsed(positionsMm, table.count, cornerVertex, soup.triangleCount);
   }
-
-  let kept = 0;
-  for (let t = 0; t < soup.triangleCount; t++) {
-    const a = cornerVertex[3 * t]!,
-      b = cornerVertex[3 * t + 1]!,
-      c = cornerVertex[3 * t + 2]!;
-    if (a === b || b === c || a === c) continue;
-    // Compacting in place: a kept triangle never lands ahead of where it was read.
-    cornerVertex[3 * kept] = a;
-    cornerVertex[3 * kept + 1] = b;
-    cornerVertex[3 * kept + 2] = c;
-    kept++;
-  }
-  return {
-    positionsMm,
-    triangles: kept === soup.triangleCount ? cornerVertex : cornerVertex.slice(0, kept * 3),
-    vertexCount,
-    triangleCount: kept,
-    degenerateDropped: soup.triangleCount - kept,
-  };
+  const welder = new ExactWelder(cornerVertex);
+  welder.add(new Uint32Array(p.buffer, p.byteOffset, corners * 3), corners);
+  return framedWeld(welder.finish(), soup.triangleCount, frame);
 }

@@ -1,7 +1,7 @@
 import { mkdtemp, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { encodeStlAscii, encodeStlBinary } from '@gelpoint/mesh';
+import { analyzeMouldFile, encodeStlAscii, encodeStlBinary, fillAt, readAnalysis, readMouldFile } from '@gelpoint/mesh';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { encode3mf, encodeObj, stlWithCount } from '../../../../packages/mesh/test/mould-files';
 import { cellSolid, mapped, revolvedPocketBlock } from '../../../../packages/mesh/test/moulds';
@@ -16,6 +16,8 @@ const expectedWetted = 20 * 16 + 2 * (20 + 16) * 5;
 
 let dir = '';
 const files: Record<string, string> = {};
+let gridBytes: Uint8Array = new Uint8Array(0);
+let nanBytes: Uint8Array = new Uint8Array(0);
 beforeAll(async () => {
   dir = await mkdtemp(join(tmpdir(), 'gelpoint-mold-'));
   const write = async (name: string, bytes: Uint8Array | string): Promise<void> => {
@@ -43,6 +45,15 @@ beforeAll(async () => {
     ),
   );
   await write('broken.stl', encodeStlBinary(pocket).subarray(0, 300));
+  // A pocket block cut into many cells: over 2 MB, so the command reads it in several 1 MB chunks.
+  const grid = Array.from({ length: 111 }, (_, i) => i);
+  gridBytes = encodeStlBinary(cellSolid(grid, grid, [0, 4, 10], (i, j, k) => !(k === 1 && i >= 5 && i < 105 && j >= 5 && j < 105)));
+  await write('grid.stl', gridBytes);
+  const nan = encodeStlBinary(pocket);
+  new DataView(nan.buffer).setFloat32(84 + 50 * 6 + 12 + 20, Number.NaN, true);
+  nanBytes = nan;
+  await write('nan.stl', nan);
+  await write('empty.stl', new Uint8Array(0));
   // The same pocket as a 3MF that states inches (NIST SP 811: 1 in = 25.4 mm), as an OBJ of quads,
   // and as a binary STL whose writer left the triangle count at 0.
   await write('pocket-in.3mf', encode3mf(pocket, 'inch', 25.4));
@@ -94,6 +105,23 @@ async function json(argv: string[]): Promise<Report> {
 }
 
 describe('gelpoint mold --json', () => {
+  it('reads a binary STL of several MB in chunks to the report of the whole file read at once', async () => {
+    expect(gridBytes.length).toBeGreaterThan(2 * 1024 * 1024);
+    const out = await json([files['grid.stl']!, '--level', '9', '--dam', 'box']);
+    const whole = analyzeMouldFile(gridBytes.slice(), { levelsMm: [9] });
+    if (!whole.ok) throw new Error(whole.error.message);
+    const model = readAnalysis(whole.value.analysis);
+    if (!model.ok) throw new Error(model.error.message);
+    const fill = fillAt(model.value, 9, 'box');
+    if (!fill.ok) throw new Error(fill.error.message);
+    expect(out.triangles).toBe(whole.value.analysis.triangles);
+    expect(out.enclosedVolumeMm3).toBe(whole.value.analysis.enclosedVolumeMm3);
+    expect(out.fill.volumeMm3).toBe(fill.value.volumeMm3);
+    expect(out.fill.wettedAreaMm2).toBe(fill.value.wettedAreaMm2);
+    // A 100 × 100 mm pocket from z = 4, filled to 9: 100 × 100 × 5 mm³.
+    expect(out.fill.volumeMm3).toBeCloseTo(100 * 100 * 5, 6);
+  });
+
   it('prints exactly the report fields', async () => {
     const out = await json([files['pocket.stl']!, '--level', '10']);
     expect(Object.keys(out)).toEqual([
@@ -235,5 +263,13 @@ describe('gelpoint mold, bad input', () => {
     expect(await failure([files['pocket.stl']!, '--level', '3', '--curve', '1'])).toMatch(/--curve/);
     expect(await failure(['--level', '3'])).toMatch(/mould file, STL, 3MF or OBJ/);
     expect(await failure([files['broken.3mf']!, '--level', '3'])).toMatch(/^The 3MF's zip structure is damaged/);
+    expect(await failure([files['empty.stl']!, '--level', '3'])).toMatch(/^The file is empty/);
+    expect(await failure([dir, '--level', '3'])).toMatch(/cannot read .*EISDIR/);
+  });
+
+  it('refuses a corner that is not a number with the sentence of the whole-file reader', async () => {
+    const whole = readMouldFile(nanBytes.slice());
+    expect(whole.ok).toBe(false);
+    if (!whole.ok) expect(await failure([files['nan.stl']!, '--level', '3'])).toBe(whole.error.message);
   });
 });

@@ -1,11 +1,13 @@
-import { readFile } from 'node:fs/promises';
+import { closeSync, fstatSync, openSync, readFileSync, readSync } from 'node:fs';
 import {
   analyzeCavity,
+  BinaryStlStream,
   cavityFloorMm,
   curve,
   fillAt,
   mmPerUnit,
   prepareMesh,
+  prepareStreamedStl,
   readAnalysis,
   readMouldFile,
   type CavityFill,
@@ -15,6 +17,8 @@ import {
   type FileUnits,
   type MeshWarning,
   type MouldFormat,
+  type StreamedStl,
+  type TriangleSoup,
   type UpAxis,
 } from '@gelpoint/mesh';
 import { CliError, numberOption, parseOptions, type Command } from '../command';
@@ -144,19 +148,10 @@ export const command: Command = async (argv) => {
     throw new CliError(`--curve must be a whole number of levels, at least 2, got "${values.curve}"`);
   }
 
-  let bytes: Uint8Array;
-  try {
-    // A view, not a copy: the file can be tens of MB, and every fresh page costs.
-    const buffer = await readFile(file);
-    bytes = new Uint8Array(buffer.buffer, buffer.byteOffset, buffer.byteLength);
-  } catch (err) {
-    const reason = err instanceof Error && 'code' in err ? String((err as NodeJS.ErrnoException).code) : 'unreadable';
-    throw new CliError(`cannot read "${file}" (${reason}); check the path`);
-  }
-  const mould = unwrap(readMouldFile(bytes, { consumeBytes: true }));
+  const mould = readMould(file);
   const units: FileUnits = chosenUnits ?? mould.fileUnits ?? 'mm';
   const levelMm = level * mmPerUnit[units];
-  const mesh = unwrap(prepareMesh(mould.soup, { units, up }));
+  const mesh = unwrap(mould.streamed ? prepareStreamedStl(mould.streamed, { units, up }) : prepareMesh(mould.soup!, { units, up }));
   const a = unwrap(analyzeCavity(mesh, { levelsMm: [levelMm] }));
   const model: CavityModel = unwrap(readAnalysis(a));
   const fill = unwrap(fillAt(model, levelMm, dam));
@@ -186,6 +181,58 @@ export const command: Command = async (argv) => {
   };
   return values.json ? JSON.stringify(report, null, 2) : readable(file, report, up);
 };
+
+/** Bytes read at a time: every fresh page costs, so one buffer is filled again and again. */
+const chunkBytes = 1 << 20;
+/** A binary STL's header, the least a file must hold to be read in chunks. */
+const binaryHeaderBytes = 84;
+
+interface ReadMould {
+  format: MouldFormat;
+  fileUnits: FileUnits | null;
+  /** A binary STL welded as it was read… */
+  streamed?: StreamedStl;
+  /** …or any other file, read whole. */
+  soup?: TriangleSoup;
+}
+
+/**
+ * A binary STL is read in chunks into one buffer and welded as they come, so its tens of MB are
+ * never held at once; any other file (or one the stream does not take) is read whole.
+ */
+function readMould(file: string): ReadMould {
+  let bytes: Uint8Array;
+  try {
+    const fd = openSync(file, 'r');
+    try {
+      const stat = fstatSync(fd);
+      // Only a regular file's size is known before reading it; a pipe is read whole, untouched.
+      if (stat.isFile() && stat.size >= binaryHeaderBytes) {
+        const buffer = new Uint8Array(Math.min(chunkBytes, stat.size));
+        let length = readSync(fd, buffer, 0, buffer.length, null);
+        const stream = BinaryStlStream.open(buffer.subarray(0, length), stat.size);
+        if (stream) {
+          while (length > 0) {
+            stream.push(buffer.subarray(0, length));
+            length = readSync(fd, buffer, 0, buffer.length, null);
+          }
+          return { format: 'stl', fileUnits: null, streamed: unwrap(stream.finish()) };
+        }
+      }
+      // A view, not a copy: the file can be tens of MB, and every fresh page costs.
+      const whole = readFileSync(file);
+      bytes = new Uint8Array(whole.buffer, whole.byteOffset, whole.byteLength);
+    } finally {
+      closeSync(fd);
+    }
+  } catch (err) {
+    if (err instanceof CliError) throw err;
+    const reason = err instanceof Error && 'code' in err ? String((err as NodeJS.ErrnoException).code) : 'unreadable';
+    throw new CliError(`cannot read "${file}" (${reason}); check the path`);
+  }
+  const mould = unwrap(readMouldFile(bytes, { consumeBytes: true }));
+  return { format: mould.format, fileUnits: mould.fileUnits, soup: mould.soup };
+}
 
 function unwrap<T>(result: { ok: true; value: T } | { ok: false; error: { message: string } }): T {
   if (!result.ok) throw new CliError(result.error.message);
