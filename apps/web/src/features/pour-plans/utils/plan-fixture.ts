@@ -6,7 +6,7 @@ import { benchDeep, benchSeal, benchTeal, testPieceId } from './test-fixtures';
 
 /**
  * A saved plan as the API stores it, for the tests: computed by core from invented shelf entries, snapshot in the
- * server's shape, and passed through JSON as the database column passes it.
+ * server's shape (no key for a value the shelf leaves empty), and passed through JSON as the database column passes it.
  */
 export function savedTrayPlan(): Pick<PourPlanView, 'inputs' | 'productSnapshot' | 'result'> {
   const values = newPlannerValues('Tray with a seal coat');
@@ -33,6 +33,7 @@ export function savedTrayPlan(): Pick<PourPlanView, 'inputs' | 'productSnapshot'
       maker: _m,
       readyToMachineH: _r,
       activationEnergyKJPerMol: _k,
+      hardnessShoreD: _hd,
       ...core
     } = view;
     return core;

@@ -1,4 +1,4 @@
-import { PourPlanInput, PourPlanResult } from '@gelpoint/contracts';
+import { PlanProductSnapshot, PourPlanInput, PourPlanResult } from '@gelpoint/contracts';
 import { fail, ok, type PourPlan, type Result } from '@gelpoint/core';
 import { z } from 'zod';
 import type { SavedPlanInput } from './planner-values';
@@ -7,31 +7,10 @@ import type { SavedPlanInput } from './planner-values';
 // the annotation makes the compiler hold that schema to core's PourPlan.
 export const SavedPourPlan: z.ZodType<PourPlan, unknown> = PourPlanResult;
 
-/** The shelf values a saved plan was made with; only what the pages show is checked. */
-const SnapshotProduct = z.looseObject({
-  id: z.string(),
-  name: z.string(),
-  mixRatio: z.object({ a: z.number(), b: z.number(), basis: z.enum(['weight', 'volume']) }),
-  densityAGPerMl: z.number(),
-  densityBGPerMl: z.number(),
-  potLifeMin: z.number(),
-  referenceTempC: z.number(),
-  maxLayerMm: z.number(),
-  maxBatchG: z.number(),
-  minWorkTempC: z.number(),
-  maxWorkTempC: z.number(),
-});
-export type SnapshotProduct = z.infer<typeof SnapshotProduct>;
-
-const SnapshotPigment = z.looseObject({ id: z.string(), name: z.string(), maxPct: z.number(), recommendedPct: z.number() });
-
-export const PlanSnapshot = z.looseObject({
-  deepPour: SnapshotProduct,
-  pigment: SnapshotPigment.nullable(),
-  sealCoat: SnapshotProduct.nullable(),
-  scaleResolutionG: z.number(),
-});
-export type PlanSnapshot = z.infer<typeof PlanSnapshot>;
+/** The shelf values a saved plan was made with, read through the same schema the server reads them with. */
+export const PlanSnapshot = PlanProductSnapshot;
+export type PlanSnapshot = PlanProductSnapshot;
+export type SnapshotProduct = PlanProductSnapshot['deepPour'];
 
 export interface SavedPlan {
   plan: PourPlan;
