@@ -25,7 +25,8 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor((xs.le
 function cliRun(file: string): Promise<number> {
   return new Promise((resolve, reject) => {
     const started = performance.now();
-    const child = spawn(process.execPath, ['apps/cli/bin/gelpoint.mjs', 'mold', file, '--level', String(BENCH_LEVEL_MM)], {
+    // The bin itself, through its #! line, as the installed command runs.
+    const child = spawn('apps/cli/bin/gelpoint.mjs', ['mold', file, '--level', String(BENCH_LEVEL_MM)], {
       cwd: repoRoot,
       stdio: ['ignore', 'ignore', 'pipe'],
     });

@@ -60,11 +60,14 @@ interface ProcessRun {
   stdout: string;
 }
 
-/** One whole process: wall time from spawn to exit, and its peak RSS as the kernel counted it. */
+/**
+ * One whole process: wall time from spawn to exit, and its peak RSS as the kernel counted it.
+ * `args` start with the program: an executable file runs as a user runs it (its #! line with it).
+ */
 function runProcess(dir: string, args: string[]): ProcessRun {
   const withTime = existsSync(timeBin);
   const rssFile = join(dir, 'peak-rss');
-  const [command, argv] = withTime ? [timeBin, ['-f', '%M', '-o', rssFile, process.execPath, ...args]] : [process.execPath, args];
+  const [command, argv] = withTime ? [timeBin, ['-f', '%M', '-o', rssFile, ...args]] : [args[0]!, args.slice(1)];
   const start = performance.now();
   const run = spawnSync(command, argv, { encoding: 'utf8', maxBuffer: 1 << 26 });
   const wallMs = performance.now() - start;
@@ -95,8 +98,9 @@ function wholeProcesses(dir: string, bytes: Uint8Array, mesh: CavityMesh, level:
     indexed = join(dir, 'mould.mesh');
   writeFileSync(stl, bytes);
   writeFileSync(indexed, indexedMeshFile(mesh));
+  // The command as installed: the bin runs through its own #! line (node, with the allocator's settings).
   const oursArgs = [gelpointBin, 'mold', stl, '--level', String(level), '--dam', 'box', '--json'];
-  const theirsArgs = [manifoldChild, indexed, String(level)];
+  const theirsArgs = [process.execPath, manifoldChild, indexed, String(level)];
   runProcess(dir, oursArgs);
   runProcess(dir, theirsArgs);
   const ours: ProcessRun[] = [],

@@ -1,0 +1,44 @@
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { encodeStlBinary } from '@gelpoint/mesh';
+import { describe, expect, it } from 'vitest';
+import { cellSolid } from '../../../packages/mesh/test/moulds';
+
+const repoRoot = fileURLToPath(new URL('../../..', import.meta.url));
+const bin = join(repoRoot, 'apps/cli/bin/gelpoint.mjs');
+
+// The installed `gelpoint` is the bin itself, run through its #! line, which also tells glibc's
+// allocator to ask for transparent huge pages for its big blocks (fewer page faults on a big mould).
+describe('the gelpoint bin', () => {
+  it('runs through its own #! line and reports what it reports through node', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'gelpoint-bin-'));
+    const file = join(dir, 'pocket.stl');
+    // A 30 × 30 × 10 mm block with a 10 × 10 mm pocket from z = 4 up.
+    writeFileSync(file, encodeStlBinary(cellSolid([0, 10, 20, 30], [0, 10, 20, 30], [0, 4, 10], (i, j, k) => !(i === 1 && j === 1 && k === 1))));
+    const args = ['mold', file, '--level', '10', '--json'];
+    const direct = spawnSync(bin, args, { cwd: repoRoot, encoding: 'utf8' });
+    const throughNode = spawnSync(process.execPath, [bin, ...args], { cwd: repoRoot, encoding: 'utf8' });
+    expect(direct.stderr).toBe('');
+    expect(direct.status).toBe(0);
+    expect(direct.stdout).toBe(throughNode.stdout);
+    expect((JSON.parse(direct.stdout) as { fill: { volumeMm3: number } }).fill.volumeMm3).toBeCloseTo(10 * 10 * 6, 6);
+  });
+
+  it('hands node the allocator setting on its #! line', () => {
+    const line = readFileSync(bin, 'utf8').split('\n')[0]!;
+    expect(line.startsWith('#!')).toBe(true);
+    // Run the #! line as the kernel does (its interpreter, the rest of the line as one argument),
+    // with a script in place of the bin's that prints what node was given.
+    const text = line.slice(2).trim();
+    const interpreter = text.split(' ')[0]!;
+    const run = spawnSync(interpreter, [text.slice(interpreter.length + 1), '-e', 'console.log(process.env.GLIBC_TUNABLES)'], {
+      encoding: 'utf8',
+      env: { PATH: process.env.PATH ?? '' },
+    });
+    expect(run.status).toBe(0);
+    expect(run.stdout.trim()).toBe('glibc.malloc.hugetlb=1');
+  });
+});
