@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { createInterface } from 'node:readline';
 import { demoSignIns } from '@gelpoint/db';
+import { allocatorSettings } from './allocator-settings';
 
 const built = !import.meta.url.endsWith('.ts');
 const root = fileURLToPath(new URL(built ? '../../' : '../', import.meta.url));
@@ -21,13 +22,6 @@ const services = [
   { name: 'api', app: 'api', colour: 36 },
   { name: 'worker', app: 'worker', colour: 33 },
 ];
-
-/**
- * glibc's allocator asks for transparent huge pages for its big blocks (glibc 2.35+; ignored
- * elsewhere): an analysis of a big mould touches tens of MB of fresh typed arrays, and a 2 MB page
- * faults once where 4 kB pages fault 512 times. The environment's own value wins.
- */
-const allocatorSettings = { GLIBC_TUNABLES: 'glibc.malloc.hugetlb=1' };
 
 const children = new Map<string, ChildProcess>();
 let stopping = false;

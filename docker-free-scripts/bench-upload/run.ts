@@ -9,6 +9,7 @@ import { signIn } from '../faults/api-client';
 import { AppProcess, freePort, GiveUp, repoRoot, waitUntil } from '../faults/processes';
 import { BENCH_LEVEL_MM, writeBenchMould } from './bench-mould';
 import { readEvents, type TimedEvent } from './event-reader';
+import { allocatorSettings } from '../allocator-settings';
 
 const runs = Number(process.env.GELPOINT_BENCH_RUNS ?? 3);
 
@@ -67,6 +68,8 @@ try {
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
   const env = {
+    // The allocator's settings npm start gives the API and the worker.
+    ...allocatorSettings,
     ...process.env,
     GELPOINT_API_PORT: String(port),
     GELPOINT_PUBLIC_URL: base,
