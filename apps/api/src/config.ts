@@ -37,6 +37,7 @@ const Env = z.object({
   GELPOINT_UPLOAD_QUOTA_MB: z.coerce.number().positive().default(1024),
   GELPOINT_SHUTDOWN_GRACE_S: z.coerce.number().positive().max(600).default(25),
   GELPOINT_EVENTS_HEARTBEAT_S: z.coerce.number().positive().max(300).default(15),
+  GELPOINT_ANALYSE_ON_UPLOAD: z.enum(['true', 'false'], 'GELPOINT_ANALYSE_ON_UPLOAD must be true or false').default('true'),
 });
 
 export interface Config {
@@ -64,6 +65,8 @@ export interface Config {
   shutdownGraceMs: number;
   /** How often an event stream with nothing to say sends a comment, so proxies and browsers keep it open. */
   eventsHeartbeatMs: number;
+  /** Analyse an upload in the checking thread while it is stored; false leaves every analysis to the workers. */
+  analyseOnUpload: boolean;
 }
 
 function jwtSecretFrom(env: z.infer<typeof Env>): string {
@@ -107,5 +110,6 @@ export function loadConfig(raw: NodeJS.ProcessEnv = process.env): Config {
     uploadQuotaBytes: Math.round(env.GELPOINT_UPLOAD_QUOTA_MB * 1024 * 1024),
     shutdownGraceMs: Math.round(env.GELPOINT_SHUTDOWN_GRACE_S * 1000),
     eventsHeartbeatMs: Math.round(env.GELPOINT_EVENTS_HEARTBEAT_S * 1000),
+    analyseOnUpload: env.GELPOINT_ANALYSE_ON_UPLOAD === 'true',
   };
 }

@@ -64,3 +64,29 @@ export function cavityReport(analysis: CavityAnalysis): CavityReportRecord {
     floorMm,
   };
 }
+
+/** An analysis as the database keeps it, each part as JSON text: written in the thread that analysed it. */
+export interface StoredAnalysisJson {
+  analysisJson: string;
+  /** The report without its depth map, which is kept (and served) apart. */
+  reportJson: string;
+  depthMapJson: string;
+  triangles: number;
+}
+
+/** The report without its depth map, as it is stored and answered. */
+export type StoredCavityReport = Omit<CavityReportRecord, 'fillToTop'> & { fillToTop: Omit<CavityReportRecord['fillToTop'], 'depthMap'> };
+
+export function storedAnalysisJson(analysis: CavityAnalysis): StoredAnalysisJson {
+  const {
+    fillToTop: { depthMap, ...fillToTop },
+    ...summary
+  } = cavityReport(analysis);
+  const report: StoredCavityReport = { ...summary, fillToTop };
+  return {
+    analysisJson: JSON.stringify(analysis),
+    reportJson: JSON.stringify(report),
+    depthMapJson: JSON.stringify(depthMap),
+    triangles: analysis.triangles,
+  };
+}

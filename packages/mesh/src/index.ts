@@ -17,7 +17,8 @@ export { fillAt, curve, layerVolumes, type CavitySource } from './fill-queries';
 export { cavityFloorMm } from './cavity-floor';
 export { planCavityFacts, PLAN_CURVE_POINTS, type PlanCavityFacts } from './plan-cavity-facts';
 export { fillRecord, type DepthMapRecord, type FillRecord } from './fill-record';
-export { cavityReport, type CavityReportRecord } from './cavity-report';
+export { cavityReport, storedAnalysisJson, type CavityReportRecord, type StoredAnalysisJson, type StoredCavityReport } from './cavity-report';
+export { readMouldForAnalysis, type MouldForAnalysis } from './read-for-analysis';
 export type { Dam } from './dam';
 export type {
   CavityAnalysis,

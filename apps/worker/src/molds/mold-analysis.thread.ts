@@ -1,6 +1,16 @@
 import { parentPort } from 'node:worker_threads';
 import type { CavityReport } from '@gelpoint/contracts';
-import { analyzeCavity, archiveLimitsFor, cavityReport, prepareMesh, readMouldFile, type FileUnits, type UpAxis } from '@gelpoint/mesh';
+import {
+  analyzeCavity,
+  archiveLimitsFor,
+  prepareMesh,
+  readMouldFile,
+  storedAnalysisJson,
+  type FileUnits,
+  type StoredAnalysisJson,
+  type StoredCavityReport,
+  type UpAxis,
+} from '@gelpoint/mesh';
 
 export interface AnalysisRequest {
   bytes: Uint8Array;
@@ -13,7 +23,7 @@ export interface AnalysisRequest {
 export type AnalysisMessage =
   | { type: 'progress'; value: number }
   /** As JSON text, written in the thread: the worker's event loop only passes the strings on to the database. */
-  | { type: 'done'; analysisJson: string; reportJson: string; depthMapJson: string; triangles: number }
+  | ({ type: 'done' } & StoredAnalysisJson)
   | { type: 'refused'; code: string; message: string };
 
 const post = (m: AnalysisMessage) => parentPort!.postMessage(m);
@@ -31,17 +41,9 @@ parentPort!.once('message', (req: AnalysisRequest) => {
   const analysis = analyzeCavity(mesh.value);
   if (!analysis.ok) return post({ type: 'refused', code: analysis.error.code, message: analysis.error.message });
   post({ type: 'progress', value: 0.9 });
-  // Typed as the contract's report, so the shape the engine writes and the one the API answers cannot drift apart.
-  const {
-    fillToTop: { depthMap, ...fillToTop },
-    ...summary
-  } = cavityReport(analysis.value);
-  const report: CavityReport = { ...summary, fillToTop };
-  post({
-    type: 'done',
-    analysisJson: JSON.stringify(analysis.value),
-    reportJson: JSON.stringify(report),
-    depthMapJson: JSON.stringify(depthMap),
-    triangles: analysis.value.triangles,
-  });
+  post({ type: 'done', ...storedAnalysisJson(analysis.value) });
 });
+
+// The report as stored is the contract's report, so the shape the engine writes and the one the API answers cannot
+// drift apart (this fails to compile if they do).
+export const storedReportIsTheContract = (report: StoredCavityReport): CavityReport => report;

@@ -17,7 +17,7 @@ import { fillView, moldView } from './mold-views';
 import { RecentlyUsed } from './recently-used';
 import { storeMoldFile } from './mold-file-store';
 import type { UploadedMould } from './mold-upload';
-import type { StlCheck, StlChecker } from './stl-check';
+import type { CheckUnderWay, StlCheck, StlChecker, UploadAnalysis } from './stl-check';
 
 export interface UploadFields {
   /** Absent: a 3MF is read in the unit it states, any other file in mm. */
@@ -33,6 +33,19 @@ const extensionOf: Record<MoldFormat, string> = { stl: 'stl', '3mf': '3mf', obj:
 /** Reader refusals that are about size: the file unpacks to more than the service reads. */
 const tooLargeCodes = new Set(['threemf_too_large']);
 
+/**
+ * An upload's own analysis, stored as the worker stores one: only while the mould is still queued in the reading it
+ * was made for (a worker that claimed it, or units or an up axis corrected meanwhile, win).
+ */
+async function storeUploadAnalysis(m: EntityManager, id: string, a: NonNullable<UploadAnalysis>): Promise<void> {
+  await m.query(
+    `UPDATE molds SET status = 'ready', progress = 1, analysis = $4, report = $5, depth_map = $6, triangle_count = $7, analysed_at = now(),
+            error_code = NULL, error_message = NULL, locked_until = NULL, updated_at = now()
+      WHERE id = $1 AND units = $2 AND up_axis = $3 AND status = 'queued'`,
+    [id, a.units, a.up, a.analysisJson, a.reportJson, a.depthMapJson, a.triangles],
+  );
+}
+
 export class Molds {
   private readonly cache = new AnalysisCache();
   private readonly reports = new RecentlyUsed<NonNullable<Mold['report']>>(64);
@@ -42,6 +55,8 @@ export class Molds {
     private readonly ds: DataSource,
     private readonly checker: StlChecker,
     private readonly quota = new UploadQuota(),
+    /** Analyse each upload in the checking thread while it is stored, instead of leaving all of it to a worker. */
+    private readonly analyseOnUpload = false,
   ) {}
 
   /** Called as an upload starts to arrive: the checking thread starts meanwhile rather than after the last byte. */
@@ -66,10 +81,16 @@ export class Molds {
     // The file is read (to refuse a bad one with the reader's sentence) while it is written: a refusal cancels the
     // write and the transaction rolls back whole.
     const stopWrite = new AbortController();
-    const checking = this.checker.check(file.bytes).then((checked) => {
+    const underWay: CheckUnderWay = this.analyseOnUpload
+      ? this.checker.checkAndAnalyse(file.bytes, { units: fields.units ?? null, up: fields.up })
+      : { check: this.checker.check(file.bytes), analysis: Promise.resolve(null) };
+    const checking = underWay.check.then((checked) => {
       if (!checked.ok) stopWrite.abort();
       return checked;
     });
+    // Whether the analysis came in time to be stored with the upload.
+    let analysed: UploadAnalysis = null;
+    void underWay.analysis.then((a) => (analysed = a));
     const refusal = (checked: Extract<StlCheck, { ok: false }>) => {
       const kind = tooLargeCodes.has(checked.error.code) ? 'payload_too_large' : 'unprocessable';
       return new AppError(kind, checked.error.code, checked.error.message, { file: checked.error.message });
@@ -115,9 +136,23 @@ export class Molds {
         objectId: mold.id,
         detail: { name: mold.name, sha256: file.sha256, format: checked.format, units, triangles: checked.triangles },
       });
-      await m.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, mold.id]);
+      if (analysed) {
+        await storeUploadAnalysis(m, mold.id, analysed);
+      } else if (!this.analyseOnUpload) {
+        await m.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, mold.id]);
+      }
       return mold.id;
     });
+    // Still analysing: stored when it is done, unless a worker took the mould first (its tick finds a queued mould
+    // within a minute, whatever becomes of this process); refused by the engine, it is the worker's to record.
+    if (this.analyseOnUpload && !analysed) {
+      void underWay.analysis
+        .then(async (late) => {
+          if (late) await storeUploadAnalysis(this.ds.manager, id, late);
+          else await this.ds.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, id]);
+        })
+        .catch(() => undefined);
+    }
     return this.get(auth.shopId, id);
   }
 

@@ -10,7 +10,8 @@ import { bearer, createShop, useHarness, type ShopFixture } from '../../test-sup
 import { binaryStl, pocketMouldTriangles } from '../../test-support/pocket-mould';
 
 // A 3MF may unpack to 4 MB here, so the zip-bomb limits can be reached with small uploads.
-const h = useHarness({ GELPOINT_MAX_STL_MB: '1', GELPOINT_MAX_UNPACKED_MB: '4' });
+// Uploads are left to the worker here (GELPOINT_ANALYSE_ON_UPLOAD=false): these tests follow its path.
+const h = useHarness({ GELPOINT_MAX_STL_MB: '1', GELPOINT_MAX_UNPACKED_MB: '4', GELPOINT_ANALYSE_ON_UPLOAD: 'false' });
 
 // Block 100 × 60 × 30 mm with an 80 × 40 mm pocket whose floor is at z = 10: a prism, so the fill to
 // level z is 80 · 40 · (z − 10) mm³ (CRC Concise Encyclopedia of Mathematics, prism volume = base × height).

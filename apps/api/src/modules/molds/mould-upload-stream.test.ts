@@ -10,7 +10,8 @@ import { bearer, createShop, PASSWORD, useHarness, type ShopFixture } from '../.
 import { binaryStl, pocketMouldTriangles } from '../../test-support/pocket-mould';
 
 // A 1 MB limit, so a file past it is quick to send; heartbeats five times a second, so a test can hear them.
-const h = useHarness({ GELPOINT_MAX_STL_MB: '1', GELPOINT_EVENTS_HEARTBEAT_S: '0.2' });
+// Uploads are left to the worker here (GELPOINT_ANALYSE_ON_UPLOAD=false), whose progress the stream follows.
+const h = useHarness({ GELPOINT_MAX_STL_MB: '1', GELPOINT_EVENTS_HEARTBEAT_S: '0.2', GELPOINT_ANALYSE_ON_UPLOAD: 'false' });
 
 // Block 100 × 60 × 30 mm with an 80 × 40 mm pocket whose floor is at z = 10: resin filled to the top stands 20 mm deep
 // over the whole pocket floor (a prism: CRC Concise Encyclopedia of Mathematics, volume = base × height).
