@@ -184,8 +184,6 @@ export const command: Command = async (argv) => {
 
 /** Bytes read at a time: every fresh page costs, so one buffer is filled again and again. */
 const chunkBytes = 1 << 20;
-/** A binary STL's header, the least a file must hold to be read in chunks. */
-const binaryHeaderBytes = 84;
 
 interface ReadMould {
   format: MouldFormat;
@@ -207,7 +205,8 @@ function readMould(file: string): ReadMould {
     try {
       const stat = fstatSync(fd);
       // Only a regular file's size is known before reading it; a pipe is read whole, untouched.
-      if (stat.isFile() && stat.size >= binaryHeaderBytes) {
+      // BinaryStlStream.open leaves anything it does not take (a file shorter than a header included) to the whole read.
+      if (stat.isFile() && stat.size > 0) {
         const buffer = new Uint8Array(Math.min(chunkBytes, stat.size));
         let length = readSync(fd, buffer, 0, buffer.length, null);
         const stream = BinaryStlStream.open(buffer.subarray(0, length), stat.size);

@@ -1,4 +1,5 @@
 import type { Worker } from 'node:worker_threads';
+import { storeMoldAnalysis } from '@gelpoint/db';
 import { cavityAnalysisVersion } from '@gelpoint/mesh';
 import { tsWorker } from '../ts-worker';
 import type { Logger } from 'pino';
@@ -139,12 +140,7 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
       log.info({ code: outcome.code }, 'mould refused by the engine');
       return true;
     }
-    await ds.query(
-      `UPDATE molds SET status = 'ready', progress = 1, analysis = $4, report = $5, depth_map = $6, triangle_count = $7, analysed_at = now(),
-              error_code = NULL, error_message = NULL, locked_until = NULL, updated_at = now()
-        WHERE id = $1 ${sameReading}`,
-      [mold.id, mold.units, mold.up_axis, outcome.analysisJson, outcome.reportJson, outcome.depthMapJson, outcome.triangles],
-    );
+    await storeMoldAnalysis(ds, mold.id, { ...outcome, units: mold.units, up: mold.up_axis });
     log.info('mould analysed');
   } catch (err) {
     if (err instanceof AnalysisStopped) {

@@ -1,5 +1,4 @@
 import { parentPort } from 'node:worker_threads';
-import type { CavityReport } from '@gelpoint/contracts';
 import {
   analyzeCavity,
   archiveLimitsFor,
@@ -8,7 +7,6 @@ import {
   storedAnalysisJson,
   type FileUnits,
   type StoredAnalysisJson,
-  type StoredCavityReport,
   type UpAxis,
 } from '@gelpoint/mesh';
 
@@ -43,7 +41,3 @@ parentPort!.once('message', (req: AnalysisRequest) => {
   post({ type: 'progress', value: 0.9 });
   post({ type: 'done', ...storedAnalysisJson(analysis.value) });
 });
-
-// The report as stored is the contract's report, so the shape the engine writes and the one the API answers cannot
-// drift apart (this fails to compile if they do).
-export const storedReportIsTheContract = (report: StoredCavityReport): CavityReport => report;

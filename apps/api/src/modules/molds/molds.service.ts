@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import type { RequestHandler } from 'express';
 import type { DataSource, EntityManager } from 'typeorm';
 import { planCavityFromMold } from '@gelpoint/core';
-import { MOLD_ANALYSIS_CHANNEL, Mold, Piece, type MoldFormat, type UpAxis } from '@gelpoint/db';
+import { MOLD_ANALYSIS_CHANNEL, Mold, Piece, storeMoldAnalysis, type MoldFormat, type UpAxis } from '@gelpoint/db';
 import type { CavityReport, Dam, LevelFrom, MoldDepthMap, MoldFill, MoldView, UpdateMoldRequest } from '@gelpoint/contracts';
 import { fillAt, layerVolumes, planCavityFacts, type CavityModel, type DepthMapRecord } from '@gelpoint/mesh';
 import type { AuthContext } from '../../http/auth-context';
@@ -17,7 +17,7 @@ import { fillView, moldView } from './mold-views';
 import { RecentlyUsed } from './recently-used';
 import { storeMoldFile } from './mold-file-store';
 import type { UploadedMould } from './mold-upload';
-import type { CheckUnderWay, StlCheck, StlChecker, UploadAnalysis } from './stl-check';
+import type { StlCheck, StlChecker, UploadAnalysis } from './stl-check';
 
 export interface UploadFields {
   /** Absent: a 3MF is read in the unit it states, any other file in mm. */
@@ -32,19 +32,6 @@ const mouldFileName = /\.(stl|3mf|obj)$/i;
 const extensionOf: Record<MoldFormat, string> = { stl: 'stl', '3mf': '3mf', obj: 'obj' };
 /** Reader refusals that are about size: the file unpacks to more than the service reads. */
 const tooLargeCodes = new Set(['threemf_too_large']);
-
-/**
- * An upload's own analysis, stored as the worker stores one: only while the mould is still queued in the reading it
- * was made for (a worker that claimed it, or units or an up axis corrected meanwhile, win).
- */
-async function storeUploadAnalysis(m: EntityManager, id: string, a: NonNullable<UploadAnalysis>): Promise<void> {
-  await m.query(
-    `UPDATE molds SET status = 'ready', progress = 1, analysis = $4, report = $5, depth_map = $6, triangle_count = $7, analysed_at = now(),
-            error_code = NULL, error_message = NULL, locked_until = NULL, updated_at = now()
-      WHERE id = $1 AND units = $2 AND up_axis = $3 AND status = 'queued'`,
-    [id, a.units, a.up, a.analysisJson, a.reportJson, a.depthMapJson, a.triangles],
-  );
-}
 
 export class Molds {
   private readonly cache = new AnalysisCache();
@@ -81,9 +68,7 @@ export class Molds {
     // The file is read (to refuse a bad one with the reader's sentence) while it is written: a refusal cancels the
     // write and the transaction rolls back whole.
     const stopWrite = new AbortController();
-    const underWay: CheckUnderWay = this.analyseOnUpload
-      ? this.checker.checkAndAnalyse(file.bytes, { units: fields.units ?? null, up: fields.up })
-      : { check: this.checker.check(file.bytes), analysis: Promise.resolve(null) };
+    const underWay = this.checker.check(file.bytes, this.analyseOnUpload ? { units: fields.units ?? null, up: fields.up } : undefined);
     const checking = underWay.check.then((checked) => {
       if (!checked.ok) stopWrite.abort();
       return checked;
@@ -137,7 +122,7 @@ export class Molds {
         detail: { name: mold.name, sha256: file.sha256, format: checked.format, units, triangles: checked.triangles },
       });
       if (analysed) {
-        await storeUploadAnalysis(m, mold.id, analysed);
+        await storeMoldAnalysis(m, mold.id, analysed, true);
       } else if (!this.analyseOnUpload) {
         await m.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, mold.id]);
       }
@@ -148,7 +133,7 @@ export class Molds {
     if (this.analyseOnUpload && !analysed) {
       void underWay.analysis
         .then(async (late) => {
-          if (late) await storeUploadAnalysis(this.ds.manager, id, late);
+          if (late) await storeMoldAnalysis(this.ds.manager, id, late, true);
           else await this.ds.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, id]);
         })
         .catch(() => undefined);

@@ -86,16 +86,11 @@ export class StlChecker {
     this.thread();
   }
 
-  check(bytes: Uint8Array): Promise<StlCheck> {
-    return this.start(bytes).check;
-  }
-
-  /** Checks the upload, then analyses it in the given reading (the analysis is null when the file was refused). */
-  checkAndAnalyse(bytes: Uint8Array, as: AnalyseAs): CheckUnderWay {
-    return this.start(bytes, as);
-  }
-
-  private start(bytes: Uint8Array, analyse?: AnalyseAs): CheckUnderWay {
+  /**
+   * Checks the upload and, given a reading, then analyses it in that reading; the analysis is null when none was
+   * asked for or the file was refused.
+   */
+  check(bytes: Uint8Array, analyse?: AnalyseAs): CheckUnderWay {
     const id = this.nextId++;
     const check = new Promise<StlCheck>((resolve) => this.checks.set(id, resolve));
     const analysis = analyse ? new Promise<UploadAnalysis>((resolve) => this.analyses.set(id, resolve)) : Promise.resolve(null);
