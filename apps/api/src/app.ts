@@ -93,7 +93,7 @@ export function createApp({ ds, config, logger = createLogger(config.logLevel) }
   shelfRoutes(registry, ds);
   const quota = new UploadQuota(config.uploadQuotaBytes);
   const uploadLimit = perMemberLimit(ds, config.uploadsPerHour);
-  const molds = new Molds(ds, new StlChecker(config.maxStlTriangles, config.maxUnpackedBytes), quota, config.analyseOnUpload);
+  const molds = new Molds(ds, new StlChecker(config.maxStlTriangles, config.maxUnpackedBytes), quota, config.analyseOnUpload, logger);
   const progress = new MoldProgressHub(config.databaseUrl, logger);
   moldRoutes(registry, molds, config.maxStlBytes, uploadLimit, { ds, hub: progress, heartbeatMs: config.eventsHeartbeatMs });
   pourPlanRoutes(registry, new PourPlans(ds, molds.cavityForPlan));

@@ -1,5 +1,6 @@
 import { createHash } from 'node:crypto';
 import type { RequestHandler } from 'express';
+import type { Logger } from 'pino';
 import type { DataSource, EntityManager } from 'typeorm';
 import { planCavityFromMold } from '@gelpoint/core';
 import { MOLD_ANALYSIS_CHANNEL, Mold, Piece, storeMoldAnalysis, type MoldFormat, type UpAxis } from '@gelpoint/db';
@@ -44,6 +45,8 @@ export class Molds {
     private readonly quota = new UploadQuota(),
     /** Analyse each upload in the checking thread while it is stored, instead of leaving all of it to a worker. */
     private readonly analyseOnUpload = false,
+    /** Where a late upload analysis that could not be stored is told (the worker's tick then takes the mould). */
+    private readonly logger?: Logger,
   ) {}
 
   /** Called as an upload starts to arrive: the checking thread starts meanwhile rather than after the last byte. */
@@ -136,7 +139,12 @@ export class Molds {
           if (late) await storeMoldAnalysis(this.ds.manager, id, late, true);
           else await this.ds.query('SELECT pg_notify($1, $2)', [MOLD_ANALYSIS_CHANNEL, id]);
         })
-        .catch(() => undefined);
+        .catch((err: unknown) =>
+          this.logger?.warn(
+            { moldId: id, err: err instanceof Error ? err.message : String(err) },
+            'upload analysis not stored; a worker takes the mould on its tick',
+          ),
+        );
     }
     return this.get(auth.shopId, id);
   }
