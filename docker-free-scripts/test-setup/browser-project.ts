@@ -1,7 +1,6 @@
-import { execFileSync } from 'node:child_process';
-import { fileURLToPath } from 'node:url';
 import type { TestProject } from 'vitest/node';
 import { E2eStack } from '../../apps/web/e2e/support/stack';
+import { buildTargets, serverTargets } from './build-targets';
 import { demoDatabases } from './databases';
 
 declare module 'vitest' {
@@ -11,15 +10,15 @@ declare module 'vitest' {
 }
 
 /**
- * Global set-up of the browser project: the demo databases, the web build the API serves, and one stack (API, worker,
+ * Global set-up of the browser project: the demo databases, the web build the API serves, the built processes, and one stack (API, worker,
  * mail sink) every browser test file shares; a file keeps it apart from the others by the names of what it makes.
  */
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
+  // No-ops when the builds are up to date (npm test has just built them): the web app the API serves, and the processes.
+  buildTargets('web', ...serverTargets);
   const demo = demoDatabases();
   project.provide('e2eDatabaseUrl', demo.url);
   project.provide('e2eTemplateDatabase', demo.template);
-  // A no-op when the web build is up to date (npm test has just built it).
-  execFileSync(process.execPath, [fileURLToPath(new URL('../build.mjs', import.meta.url)), 'web'], { stdio: ['ignore', 'ignore', 'inherit'] });
   const stack = new E2eStack();
   await stack.start(demo.url);
   project.provide('sharedStack', { apiPort: stack.apiPort, mailHttpPort: stack.mailHttpPort });

@@ -1,5 +1,6 @@
 import { availableParallelism } from 'node:os';
 import type { TestProject } from 'vitest/node';
+import { buildTargets, serverTargets } from './build-targets';
 import { demoDatabases, freshTestDatabases } from './databases';
 
 declare module 'vitest' {
@@ -11,8 +12,12 @@ declare module 'vitest' {
   }
 }
 
-/** Global set-up of the database project: PostgreSQL, a fresh migrated test database per worker, and the seeded demo. */
+/**
+ * Global set-up of the database project: PostgreSQL, a fresh migrated test database per worker, the seeded demo, and
+ * the built API, worker and mail sink its tests start as processes.
+ */
 export default function setup(project: TestProject): void {
+  buildTargets(...serverTargets);
   // As many as vitest starts workers: its maxWorkers, or its default of cores − 1.
   const workers = project.vitest.config.maxWorkers || Math.max(availableParallelism() - 1, 1);
   project.provide('testDatabaseUrls', freshTestDatabases(workers));

@@ -14,8 +14,9 @@ function libSh(script: string, ...args: string[]): string {
   });
 }
 
+/** The built migrate or seed script (the projects' set-up brings the db build up to date first; see build-targets.ts). */
 function dbScript(script: 'migrate' | 'seed', url: string): void {
-  execFileSync(process.execPath, ['--import', 'tsx', `packages/db/src/cli/${script}.ts`], {
+  execFileSync(process.execPath, [`packages/db/dist/cli/${script}.js`], {
     cwd: root,
     env: { ...process.env, DATABASE_URL: url },
     stdio: ['ignore', 'ignore', 'inherit'],

@@ -8,7 +8,7 @@ describe('the worker process', () => {
   it('starts its tick, and on SIGTERM finishes the pass it is in and exits cleanly', async () => {
     const url = process.env.GELPOINT_TEST_DATABASE_URL;
     if (!url) throw new Error('GELPOINT_TEST_DATABASE_URL is not set: run the tests through npm test');
-    const child = spawn(process.execPath, ['--import', 'tsx', 'apps/worker/src/main.ts'], {
+    const child = spawn(process.execPath, ['apps/worker/dist/main.js'], {
       cwd: root,
       env: { ...process.env, DATABASE_URL: url, GELPOINT_WORKER_JOBS: 'molds', GELPOINT_LOG_LEVEL: 'info' },
       stdio: ['ignore', 'pipe', 'pipe'],
@@ -28,7 +28,7 @@ describe('the worker process', () => {
   });
 
   it('refuses a bad cron expression with one line, not a stack trace', async () => {
-    const child = spawn(process.execPath, ['--import', 'tsx', 'apps/worker/src/main.ts'], {
+    const child = spawn(process.execPath, ['apps/worker/dist/main.js'], {
       cwd: root,
       env: { ...process.env, GELPOINT_WORKER_CRON: 'every tuesday', GELPOINT_LOG_LEVEL: 'silent' },
       stdio: ['ignore', 'pipe', 'pipe'],

@@ -35,8 +35,8 @@ async function fingerprint(db: string): Promise<Record<string, { rows: number; m
 describe('backup and restore scripts', () => {
   it('restore a pg_dump backup to the same rows, table by table', async () => {
     bash(`ensure_database gelpoint_backup_src --fresh
-      DATABASE_URL="$(db_url gelpoint_backup_src)" npx tsx packages/db/src/cli/migrate.ts >/dev/null
-      DATABASE_URL="$(db_url gelpoint_backup_src)" GELPOINT_SCRYPT_LOG_N=11 npx tsx packages/db/src/cli/seed.ts >/dev/null`);
+      DATABASE_URL="$(db_url gelpoint_backup_src)" node packages/db/dist/cli/migrate.js >/dev/null
+      DATABASE_URL="$(db_url gelpoint_backup_src)" GELPOINT_SCRYPT_LOG_N=11 node packages/db/dist/cli/seed.js >/dev/null`);
     const file = join(dir, 'shop.dump');
     bash(`bash docker-free-scripts/backup.sh gelpoint_backup_src "${file}" >/dev/null`);
     bash(`bash docker-free-scripts/restore.sh "${file}" gelpoint_backup_dst >/dev/null`);

@@ -16,8 +16,13 @@ const stl = binaryStl(pocketMouldTriangles({ outer: [100, 60, 30], pocket: [10, 
 // Room for two of these files and a half, so the third one does not fit.
 const quota = useHarness({ GELPOINT_UPLOAD_QUOTA_MB: String((stl.length * 2.5) / 1024 / 1024) });
 
-/** The loopback proxy is trusted, so each test gives itself an address of its own (RFC 5737 documentation range). */
-const anAddress = () => `203.0.113.${randomInt(1, 255)}, 198.51.100.${randomInt(1, 255)}`;
+/**
+ * The loopback proxy is trusted, so each test gives itself an address of its own (RFC 5737 documentation range). The
+ * API counts the last one, the proxy's client: those are handed out in turn, never twice, since two tests drawing the
+ * same one at random would share a count.
+ */
+let addressesMade = randomInt(0, 254);
+const anAddress = () => `203.0.113.${randomInt(1, 255)}, 198.51.100.${(addressesMade++ % 254) + 1}`;
 const instance = (i: number): Harness => (i % 2 === 0 ? first : second);
 
 const upload = (h: Harness, session: { token: string }) =>

@@ -28,7 +28,8 @@ export const resinInput = (over: Record<string, unknown> = {}) => ({
 });
 
 const workerOnce = {
-  args: ['--import', 'tsx', 'apps/worker/src/main.ts', '--once'],
+  // The built worker (the database project's set-up builds it), as npm start runs it.
+  args: ['apps/worker/dist/main.js', '--once'],
   options: () => ({
     cwd: join(import.meta.dirname, '../../../..'),
     env: { ...process.env, DATABASE_URL: testDatabaseUrl(), GELPOINT_WORKER_JOBS: 'molds', GELPOINT_LOG_LEVEL: 'silent' },

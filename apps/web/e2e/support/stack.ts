@@ -38,7 +38,7 @@ export interface SinkMail {
 }
 
 /**
- * The whole product as separate processes, as npm start runs it: the API serving the built web app,
+ * The whole product as separate built processes, as npm start runs it: the API serving the built web app,
  * the worker and the mail sink, on free ports, against the demo database that npm test seeded.
  */
 export class E2eStack {
@@ -79,8 +79,9 @@ export class E2eStack {
       MAILSINK_DATA_DIR: join(this.dataDir, 'mailsink'),
       SMTP_PORT: String(smtpPort),
     };
-    for (const entry of ['apps/mailsink/src/main.ts', 'apps/api/src/main.ts', 'apps/worker/src/main.ts']) {
-      const child = spawn(process.execPath, ['--import', 'tsx', entry], { cwd: root, env, stdio: ['ignore', 'pipe', 'pipe'] });
+    // The built processes (the browser project's set-up and bench-web.sh bring the builds up to date), as npm start runs them.
+    for (const entry of ['apps/mailsink/dist/main.js', 'apps/api/dist/main.js', 'apps/worker/dist/main.js']) {
+      const child = spawn(process.execPath, [entry], { cwd: root, env, stdio: ['ignore', 'pipe', 'pipe'] });
       const keep = (b: Buffer) => {
         this.output = (this.output + b.toString()).slice(-20_000);
       };
@@ -89,7 +90,7 @@ export class E2eStack {
       this.children.push(child);
     }
     try {
-      // The API compiles its TypeScript on start: on a busy 2-core machine that alone can take half a minute.
+      // Generous: a busy 2-core machine may be running a browser and another stack meanwhile.
       await Promise.all([waitFor(`${this.baseUrl}/api/health`, 60_000), waitFor(`http://127.0.0.1:${this.mailHttpPort}/api/messages`, 60_000)]);
     } catch (err) {
       throw new Error(`${(err as Error).message}\n${this.output}`, { cause: err });

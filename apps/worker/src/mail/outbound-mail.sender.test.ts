@@ -120,7 +120,7 @@ describe('outbound mail', () => {
 
   it('runs once from the command line and exits', () => {
     const root = join(import.meta.dirname, '../../../..');
-    const r = spawnSync(process.execPath, ['--import', 'tsx', 'apps/worker/src/main.ts', '--once'], {
+    const r = spawnSync(process.execPath, ['apps/worker/dist/main.js', '--once'], {
       cwd: root,
       env: { ...process.env, DATABASE_URL: testUrl(), SMTP_HOST: '127.0.0.1', SMTP_PORT: String(sink.smtpPort), GELPOINT_LOG_LEVEL: 'silent' },
       encoding: 'utf8',

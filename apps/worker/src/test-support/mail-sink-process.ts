@@ -37,7 +37,7 @@ export class MailSinkProcess {
       this.smtpPort = await freePort();
       this.httpPort = await freePort();
     }
-    this.child = spawn(process.execPath, ['--import', 'tsx', 'apps/mailsink/src/main.ts'], {
+    this.child = spawn(process.execPath, ['apps/mailsink/dist/main.js'], {
       cwd: root,
       env: { ...process.env, MAILSINK_SMTP_PORT: String(this.smtpPort), MAILSINK_HTTP_PORT: String(this.httpPort), MAILSINK_DATA_DIR: this.dataDir },
       stdio: 'ignore',
