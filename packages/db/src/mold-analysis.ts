@@ -10,6 +10,9 @@ export interface FinishedMoldAnalysis {
   triangles: number;
 }
 
+/** The mould is still in the reading ($2 units, $3 up axis) an outcome was made in. */
+const sameReading = 'AND units = $2 AND up_axis = $3';
+
 /**
  * Stores a finished analysis and marks the mould ready, only while the mould is still in the reading the analysis
  * was made in (units or an up axis corrected meanwhile queue it again, and this result is of the old reading).
@@ -20,7 +23,20 @@ export async function storeMoldAnalysis(m: Pick<EntityManager, 'query'>, id: str
   await m.query(
     `UPDATE molds SET status = 'ready', progress = 1, analysis = $4, report = $5, depth_map = $6, triangle_count = $7, analysed_at = now(),
             error_code = NULL, error_message = NULL, locked_until = NULL, updated_at = now()
-      WHERE id = $1 AND units = $2 AND up_axis = $3${whileQueued ? ` AND status = 'queued'` : ''}`,
+      WHERE id = $1 ${sameReading}${whileQueued ? ` AND status = 'queued'` : ''}`,
     [id, a.units, a.up, a.analysisJson, a.reportJson, a.depthMapJson, a.triangles],
+  );
+}
+
+/** The engine's refusal of a mould (a coded reason a person can act on), stored on the same condition of its reading. */
+export async function storeMoldRefusal(
+  m: Pick<EntityManager, 'query'>,
+  id: string,
+  reading: { units: string; up: string },
+  refusal: { code: string; message: string },
+): Promise<void> {
+  await m.query(
+    `UPDATE molds SET status = 'failed', error_code = $4, error_message = $5, progress = 1, locked_until = NULL, updated_at = now() WHERE id = $1 ${sameReading}`,
+    [id, reading.units, reading.up, refusal.code, refusal.message],
   );
 }

@@ -1,5 +1,5 @@
 import type { Worker } from 'node:worker_threads';
-import { storeMoldAnalysis } from '@gelpoint/db';
+import { storeMoldAnalysis, storeMoldRefusal } from '@gelpoint/db';
 import { cavityAnalysisVersion } from '@gelpoint/mesh';
 import { tsWorker } from '../ts-worker';
 import type { Logger } from 'pino';
@@ -130,17 +130,15 @@ export async function analyseNextMold(ds: DataSource, s: MoldAnalysisSettings, l
       },
       stop,
     );
-    // Units or up axis corrected while this ran: the mould is queued again and this outcome is of the old reading.
-    const sameReading = 'AND units = $2 AND up_axis = $3';
+    // Units or up axis corrected while this ran: the mould is queued again and this outcome is of the old reading,
+    // so both stores below change nothing then.
+    const reading = { units: mold.units, up: mold.up_axis };
     if (outcome.type === 'refused') {
-      await ds.query(
-        `UPDATE molds SET status = 'failed', error_code = $4, error_message = $5, progress = 1, locked_until = NULL, updated_at = now() WHERE id = $1 ${sameReading}`,
-        [mold.id, mold.units, mold.up_axis, outcome.code, outcome.message],
-      );
+      await storeMoldRefusal(ds, mold.id, reading, outcome);
       log.info({ code: outcome.code }, 'mould refused by the engine');
       return true;
     }
-    await storeMoldAnalysis(ds, mold.id, { ...outcome, units: mold.units, up: mold.up_axis });
+    await storeMoldAnalysis(ds, mold.id, { ...outcome, ...reading });
     log.info('mould analysed');
   } catch (err) {
     if (err instanceof AnalysisStopped) {
