@@ -10,8 +10,9 @@ declare module 'vitest' {
 }
 
 /**
- * Global set-up of the browser project: the demo databases, the web build the API serves, the built processes, and one stack (API, worker,
- * mail sink) every browser test file shares; a file keeps it apart from the others by the names of what it makes.
+ * Global set-up of the browser project: the web build the API serves and the built processes, the demo databases, and
+ * one stack (API, worker, mail sink) every browser test file shares; a file keeps it apart from the others by the
+ * names of what it makes.
  */
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
   // No-ops when the builds are up to date (npm test has just built them): the web app the API serves, and the processes.
