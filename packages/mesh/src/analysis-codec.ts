@@ -37,7 +37,27 @@ export function storeColumnGrid(grid: ColumnGrid): StoredColumnGrid {
 }
 
 /** Models of analyses made in this process, so reading one back skips the base64 round trip. */
-const madeHere = new WeakMap<object, { series: LevelSeries; grid: () => ColumnGrid }>();
+const madeHere = new WeakMap<object, Made>();
+
+/** What an analysis made here can still give: each part is worked out when first asked for. */
+interface Made {
+  series: () => LevelSeries;
+  grid: () => ColumnGrid;
+  valuesAt: (levelMm: number) => Float64Array | null;
+}
+
+/** Works `make` out once, when first called, then forgets it (it may hold the mesh and its tables). */
+function once<T>(make: () => T): () => T {
+  let pending: (() => T) | null = make;
+  let made: T | undefined;
+  return () => {
+    if (pending) {
+      made = pending();
+      pending = null;
+    }
+    return made as T;
+  };
+}
 
 /**
  * The stored form keeps only escape heights below their gap's ceiling (the rest read back as the
@@ -52,29 +72,26 @@ function asStored(grid: ColumnGrid): ColumnGrid {
 
 /**
  * The analysis as stored, with its two blobs encoded to base64 only when first read (JSON.stringify,
- * structured clone and spreading all read them), and the column grid built only when something
- * asks for it (a function is given for it): a caller that only queries the fill in memory, as the
- * command line does, pays for neither, and readAnalysis hands back the arrays it was made from.
- * Assigning a blob replaces it and makes the object an ordinary stored analysis again.
+ * structured clone and spreading all read them), and the level series and the column grid worked
+ * out only when something asks for them (functions are given for them): a caller that only asks
+ * about the levels it named when analysing, as the command line does, pays for neither, and
+ * readAnalysis hands back the arrays it was made from. Assigning a blob replaces it and makes the
+ * object an ordinary stored analysis again.
  */
-export function lazyAnalysis(header: Omit<CavityAnalysis, 'levels' | 'columns'>, series: LevelSeries, buildGrid: () => ColumnGrid): CavityAnalysis {
-  let built: ColumnGrid | null = null;
-  // Dropped once used: it holds the mesh and its triangle table, which the grid no longer needs.
-  let pending: (() => ColumnGrid) | null = buildGrid;
-  const grid = (): ColumnGrid => {
-    if (!built) {
-      built = asStored(pending!());
-      pending = null;
-    }
-    return built;
-  };
+export function lazyAnalysis(
+  header: Omit<CavityAnalysis, 'levels' | 'columns'>,
+  parts: { series: () => LevelSeries; grid: () => ColumnGrid; valuesAt: (levelMm: number) => Float64Array | null },
+): CavityAnalysis {
+  // Each dropped once used: they hold the mesh and its triangle table.
+  const series = once(parts.series);
+  const grid = once(() => asStored(parts.grid()));
   let levels: StoredLevelSeries | null = null;
   let columns: StoredColumnGrid | null = null;
   const { warnings, ...rest } = header;
   const analysis = {
     ...rest,
     get levels(): StoredLevelSeries {
-      return (levels ??= storeLevelSeries(series));
+      return (levels ??= storeLevelSeries(series()));
     },
     set levels(value: StoredLevelSeries) {
       levels = value;
@@ -89,7 +106,7 @@ export function lazyAnalysis(header: Omit<CavityAnalysis, 'levels' | 'columns'>,
     },
     warnings,
   } satisfies CavityAnalysis;
-  madeHere.set(analysis, { series, grid });
+  madeHere.set(analysis, { series, grid, valuesAt: parts.valuesAt });
   return analysis;
 }
 
@@ -116,10 +133,13 @@ export function readAnalysis(stored: unknown): Result<CavityModel> {
     return ok({
       kind: 'gelpoint-cavity-model',
       analysis: stored as unknown as CavityAnalysis,
-      series: made.series,
+      get series(): LevelSeries {
+        return made.series();
+      },
       get grid(): ColumnGrid {
         return made.grid();
       },
+      valuesAt: made.valuesAt,
     });
   }
   if (typeof stored.version === 'number' && Number.isInteger(stored.version) && stored.version >= 1 && stored.version < cavityAnalysisVersion) {

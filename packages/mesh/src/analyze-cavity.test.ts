@@ -27,8 +27,16 @@ describe('analyzeCavity: the stored analysis', () => {
       for (const dam of ['outline', 'box'] as const) {
         const before = unwrap(fillAt(analysis, level, dam));
         const after = unwrap(fillAt(stored, level, dam));
-        expect(after.volumeMm3).toBe(before.volumeMm3);
-        expect(after.wettedAreaMm2).toBe(before.wettedAreaMm2);
+        if (level === 20) {
+          // The level asked for: summed over the faces in the analysing process, read from the
+          // stored series (whose knot it is) afterwards; the two differ by rounding only.
+          expect(relative(after.volumeMm3, before.volumeMm3)).toBeLessThan(1e-13);
+          expect(relative(after.wettedAreaMm2, before.wettedAreaMm2)).toBeLessThan(1e-13);
+        } else {
+          expect(after.volumeMm3).toBe(before.volumeMm3);
+          expect(after.wettedAreaMm2).toBe(before.wettedAreaMm2);
+        }
+        expect(after.estimatedErrorPct).toBe(before.estimatedErrorPct);
         expect(Array.from(after.depthMap.depthsMm)).toEqual(Array.from(before.depthMap.depthsMm));
       }
     }

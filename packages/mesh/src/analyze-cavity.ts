@@ -6,7 +6,8 @@ import { buildColumnGrid, type ColumnGrid } from './column-grid';
 import { escapeHeights } from './escape-heights';
 import { checkHeightField } from './height-field';
 import { chooseKnots } from './level-knots';
-import { buildLevelSeries } from './level-series';
+import { buildLevelSeries, levelQuantityCount, type LevelSeries } from './level-series';
+import { levelValues, type LevelValues } from './level-values';
 import { outlineArea } from './outline-area';
 import type { CavityMesh } from './prepare-mesh';
 import { fail, ok, type Result } from './result';
@@ -14,7 +15,12 @@ import { buildTriangleTable, type TriangleTable } from './triangle-table';
 import { classifyWetting } from './wetting-classes';
 
 export interface AnalyzeCavityOptions {
-  /** Levels (mm, Z-up frame) the stored series must answer exactly, e.g. the planned pour levels. */
+  /**
+   * Levels (mm, Z-up frame) to answer exactly, e.g. the planned pour levels: fill questions at
+   * these levels are summed over the faces directly (without building the series, which only a
+   * question about another level or storing the analysis then needs), and the stored series has
+   * them among its knots.
+   */
   levelsMm?: number[];
   /** Accuracy the column method's resolution is chosen for, in percent of the fill. Default 0.5. */
   targetErrorPct?: number;
@@ -67,9 +73,10 @@ function surveyOverhangs(table: TriangleTable, zMin: number, height: number, tab
 }
 
 /**
- * The cavity report's groundwork: checks whether the exact method applies, builds the level
- * series and the column grid, and returns them as a plain-JSON analysis that later answers fill
- * questions without the mesh. Pure: typed arrays in, plain object out (worker friendly).
+ * The cavity report's groundwork: checks whether the exact method applies and returns a plain-JSON
+ * analysis that later answers fill questions without the mesh, through the level series and the
+ * column grid, each built when first read (storing the analysis reads both). Pure: typed arrays
+ * in, plain object out (worker friendly).
  */
 export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = {}): Result<CavityAnalysis> {
   const targetErrorPct = options.targetErrorPct ?? analysisDefaults.targetErrorPct;
@@ -133,8 +140,19 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
     };
   }
   const classes = classifyWetting(positions, triangles, table, box);
-  const knots = chooseKnots(table, classes, escape, zMin, zMax, levelsMm, maxKnots);
-  const series = buildLevelSeries(knots.knots, knots.complete, table, classes, escape, zMin);
+  const series = (): LevelSeries => {
+    const knots = chooseKnots(table, classes, escape, zMin, zMax, levelsMm, maxKnots);
+    return buildLevelSeries(knots.knots, knots.complete, table, classes, escape, zMin);
+  };
+  // The levels asked for are summed in one pass over the faces, all together, on the first question about one of them.
+  const asked = Float64Array.from(new Set(levelsMm.map((h) => h + 0)));
+  let summed: LevelValues | null = null;
+  const valuesAt = (levelMm: number): Float64Array | null => {
+    const k = asked.indexOf(levelMm);
+    if (k < 0) return null;
+    summed ??= levelValues(asked, table, classes, escape, zMin);
+    return Float64Array.from({ length: levelQuantityCount }, (_, q) => summed!.values[q * asked.length + k]!);
+  };
 
   const build = (count: number): ColumnGrid => {
     const built = buildColumnGrid(positions, triangles, table, rect, zMin, ...gridShape(count, width, depth), exact);
@@ -204,8 +222,7 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
         exact: facts,
         warnings: [...mesh.warnings],
       },
-      series,
-      gridOf,
+      { series, grid: gridOf, valuesAt },
     ),
   );
 }

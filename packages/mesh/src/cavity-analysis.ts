@@ -94,6 +94,11 @@ export interface CavityModel {
   analysis: CavityAnalysis;
   series: LevelSeries;
   grid: ColumnGrid;
+  /**
+   * For an analysis made in this process: every level quantity (indexed by LevelQuantity) at a
+   * level it was asked to answer exactly, summed over the faces; null at any other level.
+   */
+  valuesAt?: (levelMm: number) => Float64Array | null;
 }
 
 export interface DepthMap {

@@ -33,20 +33,33 @@ export function uncoveredAreaMm2(model: CavityModel, dam: Dam): number {
   return Math.abs(uncovered) > 1e-9 * area ? uncovered : 0;
 }
 
+/** The level quantities at h: summed exactly when the analysis was asked for h, otherwise read from the series. */
+interface LevelQuantities {
+  value: (q: LevelQuantity) => number;
+  /** Summed at h itself, so no interpolation error. */
+  summed: boolean;
+}
+
+function quantitiesAt(model: CavityModel, h: number): LevelQuantities {
+  const summed = model.valuesAt?.(h) ?? null;
+  if (summed) return { value: (q) => summed[q]!, summed: true };
+  const series = model.series;
+  return { value: (q) => seriesValue(series, q, h), summed: false };
+}
+
 /**
  * Resin by the exact series: the free space below h inside the dam (divergence theorem, see
  * level-series) less the air held in pockets and the hollows the pour never reaches.
  */
-function exactVolume(model: CavityModel, h: number, dam: Dam): number {
+function exactVolume(model: CavityModel, h: number, dam: Dam, at: LevelQuantities = quantitiesAt(model, h)): number {
   const zMin = model.analysis.bboxMm.min[2];
   if (!(h > zMin)) return 0;
-  const s = model.series;
-  const free = seriesValue(s, LevelQuantity.Up, h) + seriesValue(s, LevelQuantity.Down, h) + uncoveredAreaMm2(model, dam) * (h - zMin);
-  return Math.max(0, free - seriesValue(s, LevelQuantity.Trapped, h) - seriesValue(s, LevelQuantity.Sealed, h));
+  const free = at.value(LevelQuantity.Up) + at.value(LevelQuantity.Down) + uncoveredAreaMm2(model, dam) * (h - zMin);
+  return Math.max(0, free - at.value(LevelQuantity.Trapped) - at.value(LevelQuantity.Sealed));
 }
 
-function exactErrorMm3(model: CavityModel, h: number): number {
-  return seriesFillErrorMm3(model.series, h) + model.analysis.exact!.unseenMm3;
+function exactErrorMm3(model: CavityModel, h: number, at: LevelQuantities): number {
+  return (at.summed ? 0 : seriesFillErrorMm3(model.series, h)) + model.analysis.exact!.unseenMm3;
 }
 
 /**
@@ -60,23 +73,24 @@ export function fillAt(source: CavitySource, levelMm: number, dam: Dam = 'outlin
   if (!level.ok) return level;
   const damChecked = checkDam(dam);
   if (!damChecked.ok) return damChecked;
-  const { analysis, series } = model.value;
+  const { analysis } = model.value;
   const h = level.value;
+  const at = quantitiesAt(model.value, h);
   const zMin = analysis.bboxMm.min[2];
   // The columns are walked when something needs them: at once for the column method and for the
   // deepest resin under overhangs, otherwise only when the depth map or the cross-check is read.
   let walked: ReturnType<typeof columnFill> | null = null;
   const columns = (): ReturnType<typeof columnFill> => (walked ??= columnFill(model.value.grid, h, dam, zMin));
-  const wettedAreaMm2 = Math.max(0, seriesValue(series, LevelQuantity.Wetted, h) + (dam === 'box' ? seriesValue(series, LevelQuantity.WettedBox, h) : 0));
+  const wettedAreaMm2 = Math.max(0, at.value(LevelQuantity.Wetted) + (dam === 'box' ? at.value(LevelQuantity.WettedBox) : 0));
 
   let volumeMm3: number, trappedAirMm3: number, maxDepthMm: number, estimatedErrorPct: number;
   let exact: MethodFigures | null = null;
   if (analysis.method === 'exact') {
     const facts = analysis.exact!;
-    volumeMm3 = exactVolume(model.value, h, dam);
-    estimatedErrorPct = percent(exactErrorMm3(model.value, h), volumeMm3);
+    volumeMm3 = exactVolume(model.value, h, dam, at);
+    estimatedErrorPct = percent(exactErrorMm3(model.value, h, at), volumeMm3);
     exact = { volumeMm3, estimatedErrorPct };
-    trappedAirMm3 = h > zMin ? Math.max(0, seriesValue(series, LevelQuantity.Trapped, h)) : 0;
+    trappedAirMm3 = h > zMin ? Math.max(0, at.value(LevelQuantity.Trapped)) : 0;
     if (facts.overhangs) {
       // Resin under overhangs stacks in several gaps of one column: the depth map says where it is thickest.
       maxDepthMm = columns().maxDepthMm;

@@ -521,7 +521,7 @@ export function seriesValue(series: LevelSeries, q: LevelQuantity, h: number): n
   return c[at]! + t * (c[at + 1]! + t * (c[at + 2]! + t * c[at + 3]!));
 }
 
-/** Bound on the fill's interpolation error (mm³) on the piece holding h; 0 when the series is exact. */
+/** Bound on the fill's interpolation error (mm³) at h, from the piece holding it; 0 when the series is exact there (complete, or h a knot). */
 export function seriesFillErrorMm3(series: LevelSeries, h: number): number {
   const errors = series.fillPieceErrorMm3;
   if (!errors) return 0;
@@ -535,7 +535,8 @@ export function seriesFillErrorMm3(series: LevelSeries, h: number): number {
     if (knots[mid]! < h) lo = mid;
     else hi = mid;
   }
-  return errors[lo]!;
+  // At a knot the piece takes the value summed there: only rounding is left.
+  return h === knots[hi] ? 0 : errors[lo]!;
 }
 
 /**

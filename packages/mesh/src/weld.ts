@@ -297,8 +297,13 @@ export function framedWeld(weld: ExactWeld, triangleCount: number, frame: Pick<W
   // The keys are the corners' float32 bits: read them back as coordinates.
   const coordinates = new Float32Array(keys.buffer, keys.byteOffset, vertexCount * 3);
   const positionsMm = new Float64Array(vertexCount * 3);
-  for (let v = 0; v < vertexCount; v++) {
-    toZUpMm(coordinates[3 * v]!, coordinates[3 * v + 1]!, coordinates[3 * v + 2]!, frame.up, frame.scale, positionsMm, 3 * v);
+  if (frame.up === 'z' && frame.scale === 1) {
+    // Millimetres, z up: the coordinates as they are (x · 1 is x), widened in one native copy.
+    positionsMm.set(coordinates);
+  } else {
+    for (let v = 0; v < vertexCount; v++) {
+      toZUpMm(coordinates[3 * v]!, coordinates[3 * v + 1]!, coordinates[3 * v + 2]!, frame.up, frame.scale, positionsMm, 3 * v);
+    }
   }
   return withoutCollapsed(positionsMm, vertexCount, cornerVertex, triangleCount);
 }
