@@ -5,6 +5,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { encodeStlBinary } from '@gelpoint/mesh';
 import { describe, expect, it } from 'vitest';
+import { encode3mf, encodeObj } from '../../../packages/mesh/test/mould-files';
 import { cellSolid } from '../../../packages/mesh/test/moulds';
 
 const repoRoot = fileURLToPath(new URL('../../..', import.meta.url));
@@ -25,6 +26,22 @@ describe('the gelpoint bin', () => {
     expect(direct.status).toBe(0);
     expect(direct.stdout).toBe(throughNode.stdout);
     expect((JSON.parse(direct.stdout) as { fill: { volumeMm3: number } }).fill.volumeMm3).toBeCloseTo(10 * 10 * 6, 6);
+  });
+
+  it('reads a 3MF and an OBJ, whose readers the built command loads only for such a file', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'gelpoint-bin-'));
+    // The same pocket block as above: at 10 mm a 10 × 10 × 6 mm³ pocket (cuboid, CRC), the 3MF stating millimetres.
+    const pocket = cellSolid([0, 10, 20, 30], [0, 10, 20, 30], [0, 4, 10], (i, j, k) => !(i === 1 && j === 1 && k === 1));
+    const files = { '3mf': encode3mf(pocket, 'millimeter', 1), obj: encodeObj(pocket, { quads: true }) };
+    for (const [format, bytes] of Object.entries(files)) {
+      const file = join(dir, `pocket.${format}`);
+      writeFileSync(file, bytes);
+      const run = spawnSync(bin, ['mold', file, '--level', '10', '--json'], { cwd: repoRoot, encoding: 'utf8' });
+      expect(run.stderr).toBe('');
+      const report = JSON.parse(run.stdout) as { format: string; fill: { volumeMm3: number } };
+      expect(report.format).toBe(format);
+      expect(report.fill.volumeMm3).toBeCloseTo(10 * 10 * 6, 6);
+    }
   });
 
   it('hands node the allocator setting on its #! line', () => {

@@ -51,6 +51,12 @@ interface Overhangs {
   wallSliverMm3: number;
 }
 
+function takeSpare(mesh: CavityMesh): Uint8Array | null {
+  const spare = mesh.spareMemory ?? null;
+  mesh.spareMemory = null;
+  return spare;
+}
+
 /** One pass over the faces: whether anything hangs over free space, and the sums the exact fill needs. */
 function surveyOverhangs(table: TriangleTable, zMin: number, height: number, tableToleranceMm: number): Overhangs {
   let present = false,
@@ -98,10 +104,9 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
     depth = box.max[1] - box.min[1],
     height = zMax - zMin;
   const rect = { minX: box.min[0], minY: box.min[1], maxX: box.max[0], maxY: box.max[1] };
-  // Taken once: a second analysis of the mesh must not write over the table of the first.
-  const spare = mesh.spareMemory ?? null;
-  mesh.spareMemory = null;
-  const table = buildTriangleTable(positions, triangles, spare);
+  // The table preparing the mesh built, or one of its own: in the spare memory, taken once, since
+  // a second analysis of the mesh must not write over the table of the first.
+  const table = mesh.triangleTable ?? buildTriangleTable(positions, triangles, takeSpare(mesh));
   // A face counts as lying on the table within float32 rounding of its height (a file's corners
   // are float32: 2^-24 of their size) or 1e-7 of the mould's height, whichever is larger.
   const tableToleranceMm = Math.max(1e-7 * height, 4 * 2 ** -24 * Math.max(Math.abs(zMin), Math.abs(zMax)));

@@ -55,6 +55,36 @@ interface LevelSamples {
   slopeRight: Float64Array;
 }
 
+/** How one face takes part in the level quantities; one object is filled again face after face. */
+export interface LevelFace {
+  /** Its corner heights, lowest first. */
+  z0: number;
+  z1: number;
+  z2: number;
+  /** Where air held against it escapes: Infinity when nothing holds it, -Infinity in a hollow sealed from the pour. */
+  escape: number;
+  /** It looks up: resin stands on it. */
+  up: boolean;
+  /** A raised face that looks down: the column from the table up to it counts. */
+  down: boolean;
+  /** The wetted quantity it adds to (LevelQuantity.Wetted or WettedBox), or -1 when no resin can touch it. */
+  wetQ: number;
+}
+
+export function readLevelFace(table: TriangleTable, classes: WettingClasses, escape: Float64Array | null, zMin: number, t: number, face: LevelFace): void {
+  const facing = table.facing[t]!;
+  const e = escape ? escape[t]! : Infinity;
+  // A sealed hollow is never wetted.
+  const wet = e === -Infinity ? 0 : classes.wet[t]!;
+  face.z0 = table.sortedZ[3 * t]!;
+  face.z1 = table.sortedZ[3 * t + 1]!;
+  face.z2 = table.sortedZ[3 * t + 2]!;
+  face.escape = e;
+  face.up = facing > 0;
+  face.down = facing < 0 && face.z2 > zMin;
+  face.wetQ = wet & wetWithOutline ? LevelQuantity.Wetted : wet & wetWithBox ? LevelQuantity.WettedBox : -1;
+}
+
 /** Knots per block of the run arrays; each block keeps its own origin so sums stay small. */
 const blockSize = 32;
 /** Ranges this short are evaluated point by point instead of as a run. */
@@ -301,19 +331,13 @@ export function sampleLevels(
     depth[3] = -1 / (3 * upper);
   };
 
+  const face: LevelFace = { z0: 0, z1: 0, z2: 0, escape: 0, up: false, down: false, wetQ: -1 };
   for (let t = 0; t < table.count; t++) {
-    const facing = table.facing[t]!;
-    const e = escape ? escape[t]! : Infinity;
-    const wet = e === -Infinity ? 0 : classes.wet[t]!;
-    const z0 = table.sortedZ[3 * t]!,
-      z1 = table.sortedZ[3 * t + 1]!,
-      z2 = table.sortedZ[3 * t + 2]!;
-    const up = facing > 0,
-      down = facing < 0 && z2 > zMin;
-    if (!up && !down && wet === 0) continue;
+    readLevelFace(table, classes, escape, zMin, t, face);
+    const { z0, z1, z2, escape: e, up, down, wetQ } = face;
+    if (!up && !down && wetQ < 0) continue;
     const shadowArea = Math.abs(table.shadowArea[t]!),
       area = table.area[t]!;
-    const wetQ = wet & wetWithOutline ? LevelQuantity.Wetted : wet & wetWithBox ? LevelQuantity.WettedBox : -1;
     // i·a: first point at or above the corner; i·b: first point above it.
     const va = table.triangles[3 * t]!,
       vb = table.triangles[3 * t + 1]!,

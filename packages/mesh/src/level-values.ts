@@ -1,7 +1,7 @@
-import { LevelQuantity, levelQuantityCount } from './level-series';
+import { LevelQuantity, levelQuantityCount, readLevelFace, type LevelFace } from './level-series';
 import { triangleBelow, type TriangleBelow } from './triangle-fill';
 import type { TriangleTable } from './triangle-table';
-import { wetWithBox, wetWithOutline, type WettingClasses } from './wetting-classes';
+import type { WettingClasses } from './wetting-classes';
 
 /** The level quantities at a few levels, each summed exactly: what the series' knots hold at those levels. */
 export interface LevelValues {
@@ -22,21 +22,15 @@ export function levelValues(levels: Float64Array, table: TriangleTable, classes:
   const n = levels.length;
   const values = new Float64Array(levelQuantityCount * n);
   const at: TriangleBelow = { share: 0, shareSlope: 0, depth: 0 };
+  const face: LevelFace = { z0: 0, z1: 0, z2: 0, escape: 0, up: false, down: false, wetQ: -1 };
   for (let t = 0; t < table.count; t++) {
-    const facing = table.facing[t]!;
-    const e = escape ? escape[t]! : Infinity;
-    const wet = e === -Infinity ? 0 : classes.wet[t]!;
-    const z0 = table.sortedZ[3 * t]!,
-      z1 = table.sortedZ[3 * t + 1]!,
-      z2 = table.sortedZ[3 * t + 2]!;
-    const up = facing > 0,
-      down = facing < 0 && z2 > zMin,
-      held = e !== Infinity && facing !== 0;
-    if (!up && !down && wet === 0 && !held) continue;
+    readLevelFace(table, classes, escape, zMin, t, face);
+    const { z0, z1, z2, escape: e, up, down, wetQ } = face;
+    const held = e !== Infinity && table.facing[t] !== 0;
+    if (!up && !down && wetQ < 0 && !held) continue;
     const signedShadow = table.shadowArea[t]!,
       shadow = Math.abs(signedShadow),
       area = table.area[t]!;
-    const wetQ = wet & wetWithOutline ? LevelQuantity.Wetted : wet & wetWithBox ? LevelQuantity.WettedBox : -1;
     const mean = (z0 + z1 + z2) / 3;
     // Above its escape height a face is held dry by air: what was wet below it stays so.
     let frozen = area;

@@ -30,6 +30,25 @@ export const steepNormalZ = 1e-5;
  * that held something else will do), otherwise in fresh arrays.
  */
 export function buildTriangleTable(positions: Float64Array, triangles: Uint32Array, spare: Uint8Array | null = null): TriangleTable {
+  return fillTable(positions, triangles, spare, -1).table;
+}
+
+/**
+ * The table, and in the same pass the triangles whose height over their longest edge is at most
+ * `toleranceMm`: no area at the model's resolution (the mesh clean-up's test, which needs the same
+ * edge vectors and normal).
+ */
+export function tableWithFlats(
+  positions: Float64Array,
+  triangles: Uint32Array,
+  spare: Uint8Array | null,
+  toleranceMm: number,
+): { table: TriangleTable; flat: number[] } {
+  return fillTable(positions, triangles, spare, toleranceMm);
+}
+
+/** One pass over the triangles; flats are listed when `toleranceMm` is not negative. */
+function fillTable(positions: Float64Array, triangles: Uint32Array, spare: Uint8Array | null, toleranceMm: number): { table: TriangleTable; flat: number[] } {
   const count = triangles.length / 3;
   const memory = new SpareMemory(spare);
   const shadowArea = memory.float64(count);
@@ -37,6 +56,9 @@ export function buildTriangleTable(positions: Float64Array, triangles: Uint32Arr
   const sortedZ = memory.float64(count * 3);
   const facing = memory.int8(count);
   const steep = memory.uint8(count);
+  const listFlats = toleranceMm >= 0,
+    tol2 = toleranceMm * toleranceMm;
+  const flat: number[] = [];
   for (let t = 0; t < count; t++) {
     const a = 3 * triangles[3 * t]!,
       b = 3 * triangles[3 * t + 1]!,
@@ -53,11 +75,20 @@ export function buildTriangleTable(positions: Float64Array, triangles: Uint32Arr
     const nx = uy * vz - uz * vy,
       ny = uz * vx - ux * vz,
       nz = ux * vy - uy * vx;
-    const len = Math.sqrt(nx * nx + ny * ny + nz * nz);
+    const n2 = nx * nx + ny * ny + nz * nz;
+    const len = Math.sqrt(n2);
     shadowArea[t] = nz / 2;
     area[t] = len / 2;
     facing[t] = nz > 0 ? 1 : nz < 0 ? -1 : 0;
     steep[t] = Math.abs(nz) <= steepNormalZ * len ? 1 : 0;
+    if (listFlats) {
+      const wx = vx - ux,
+        wy = vy - uy,
+        wz = vz - uz;
+      const longest2 = Math.max(ux * ux + uy * uy + uz * uz, vx * vx + vy * vy + vz * vz, wx * wx + wy * wy + wz * wz);
+      // height = |n| / longest edge; compared squared to stay off square roots.
+      if (n2 <= tol2 * longest2) flat.push(t);
+    }
     let z0 = az,
       z1 = positions[b + 2]!,
       z2 = positions[c + 2]!;
@@ -80,5 +111,5 @@ export function buildTriangleTable(positions: Float64Array, triangles: Uint32Arr
     sortedZ[3 * t + 1] = z1;
     sortedZ[3 * t + 2] = z2;
   }
-  return { count, positions, triangles, shadowArea, area, sortedZ, facing, steep };
+  return { table: { count, positions, triangles, shadowArea, area, sortedZ, facing, steep }, flat };
 }

@@ -9,18 +9,17 @@ import {
   prepareMesh,
   prepareStreamedStl,
   readAnalysis,
-  readMouldFile,
   type CavityFill,
   type CavityModel,
   type CurvePoint,
   type Dam,
   type FileUnits,
   type MeshWarning,
-  type MouldFormat,
   type StreamedStl,
   type TriangleSoup,
   type UpAxis,
-} from '@gelpoint/mesh';
+} from '@gelpoint/mesh/cavity-engine';
+import type { MouldFormat } from '@gelpoint/mesh/mould-file';
 import { CliError, numberOption, parseOptions, type Command } from '../command';
 
 const options = {
@@ -148,7 +147,7 @@ export const command: Command = async (argv) => {
     throw new CliError(`--curve must be a whole number of levels, at least 2, got "${values.curve}"`);
   }
 
-  const mould = readMould(file);
+  const mould = await readMould(file);
   const units: FileUnits = chosenUnits ?? mould.fileUnits ?? 'mm';
   const levelMm = level * mmPerUnit[units];
   const mesh = unwrap(mould.streamed ? prepareStreamedStl(mould.streamed, { units, up }) : prepareMesh(mould.soup!, { units, up }));
@@ -196,9 +195,10 @@ interface ReadMould {
 
 /**
  * A binary STL is read in chunks into one buffer and welded as they come, so its tens of MB are
- * never held at once; any other file (or one the stream does not take) is read whole.
+ * never held at once; any other file (or one the stream does not take) is read whole, by the
+ * readers of every format, which are loaded only then.
  */
-function readMould(file: string): ReadMould {
+async function readMould(file: string): Promise<ReadMould> {
   let bytes: Uint8Array;
   try {
     const fd = openSync(file, 'r');
@@ -229,6 +229,7 @@ function readMould(file: string): ReadMould {
     const reason = err instanceof Error && 'code' in err ? String((err as NodeJS.ErrnoException).code) : 'unreadable';
     throw new CliError(`cannot read "${file}" (${reason}); check the path`);
   }
+  const { readMouldFile } = await import('@gelpoint/mesh/mould-file');
   const mould = unwrap(readMouldFile(bytes, { consumeBytes: true }));
   return { format: mould.format, fileUnits: mould.fileUnits, soup: mould.soup };
 }
