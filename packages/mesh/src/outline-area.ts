@@ -1,4 +1,5 @@
-import { Clipper, FillRule, type Path64, type Paths64 } from 'clipper2-ts';
+import type { Path64, Paths64 } from 'clipper2-ts';
+import { polygonLibrary } from './polygon-library';
 import type { PlaneRect } from './shadow-index';
 import type { TriangleTable } from './triangle-table';
 
@@ -61,6 +62,7 @@ function unionArea(table: TriangleTable, loops: number[][], rect: PlaneRect): nu
       })),
     );
   if (paths.length === 0) return 0;
+  const { Clipper, FillRule } = polygonLibrary();
   return Math.abs(Clipper.areaPaths(Clipper.union(paths, FillRule.NonZero))) / (scale * scale);
 }
 
