@@ -6,7 +6,7 @@ import { fileURLToPath } from 'node:url';
 import { encodeStlBinary } from '@gelpoint/mesh';
 import { describe, expect, it } from 'vitest';
 import { encode3mf, encodeObj } from '../../../packages/mesh/test/mould-files';
-import { cellSolid } from '../../../packages/mesh/test/moulds';
+import { cellSolid, recessedChamberBlock } from '../../../packages/mesh/test/moulds';
 
 const repoRoot = fileURLToPath(new URL('../../..', import.meta.url));
 const bin = join(repoRoot, 'apps/cli/bin/gelpoint.mjs');
@@ -49,15 +49,8 @@ describe('the gelpoint bin', () => {
     // A shaft (x, y 15 → 25) into a chamber (x, y 5 → 35, z 5 → 10) whose ceiling has a recess
     // (x, y 5 → 10, z 10 → 12) that holds its air. At 15 mm (cuboids, CRC): 30 × 30 × 5 + 10 × 10 × 5 mm³
     // of resin and 5 × 5 × 2 mm³ of air.
-    const xs = [0, 5, 10, 15, 25, 35, 40];
-    const undercut = cellSolid(
-      xs,
-      xs,
-      [0, 5, 10, 12, 20],
-      (i, j, k) => !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)),
-    );
     const file = join(dir, 'undercut.stl');
-    writeFileSync(file, encodeStlBinary(undercut));
+    writeFileSync(file, encodeStlBinary(recessedChamberBlock()));
     const run = spawnSync(bin, ['mold', file, '--level', '15', '--json'], { cwd: repoRoot, encoding: 'utf8' });
     expect(run.stderr).toBe('');
     const report = JSON.parse(run.stdout) as { fill: { volumeMm3: number; trappedAirMm3: number } };

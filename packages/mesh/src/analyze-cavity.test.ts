@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { cellSolid, heightFieldBlock, inverted, mapped, revolvedPocketBlock, withoutTriangles, type GeneratedMesh } from '../test/moulds';
+import { cellSolid, heightFieldBlock, inverted, mapped, recessedChamberBlock, revolvedPocketBlock, withoutTriangles, type GeneratedMesh } from '../test/moulds';
 import { meshOf, relative, unwrap } from '../test/pipeline';
 import { readAnalysis } from './analysis-codec';
 import { analyzeCavity } from './analyze-cavity';
@@ -72,13 +72,7 @@ describe('analyzeCavity: the stored analysis', () => {
 
   it('answers the same from the arrays it was made from as from its stored form, held air included', () => {
     // A shaft into a chamber whose ceiling has a recess (held air), closed (exact) and with a hole (columns).
-    const xs = [0, 5, 10, 15, 25, 35, 40];
-    const undercut = cellSolid(
-      xs,
-      xs,
-      [0, 5, 10, 12, 20],
-      (i, j, k) => !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)),
-    );
+    const undercut = recessedChamberBlock();
     for (const mesh of [undercut, withoutTriangles(undercut, [0])]) {
       const made = unwrap(analyzeCavity(meshOf(mesh), { levelsMm: [11] }));
       const stored = JSON.parse(JSON.stringify(made));

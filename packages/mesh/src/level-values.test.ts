@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { boxDamResin, loadManifold, type ManifoldKernel } from '../test/manifold-reference';
-import { bellOverPlate, cellSolid, heightFieldBlock, tSlotBlock, type GeneratedMesh } from '../test/moulds';
+import { bellOverPlate, cellSolid, heightFieldBlock, recessedChamberBlock, tSlotBlock, type GeneratedMesh } from '../test/moulds';
 import { meshOf, relative, unwrap } from '../test/pipeline';
 import { analyzeCavity } from './analyze-cavity';
 import { fillAt } from './fill-queries';
@@ -32,17 +32,8 @@ function bothWays(generated: GeneratedMesh, levels: number[]) {
 describe('fills at the levels asked for, summed over the faces', () => {
   // Trapped air under a ceiling recess (a shaft into a chamber: CRC cuboids), a hollow sealed in
   // the wood, a T-slot under an overhang and a bell over a plate (air held in a curved cup).
-  const xs = [0, 5, 10, 15, 25, 35, 40];
   const moulds: [string, GeneratedMesh][] = [
-    [
-      'a chamber whose ceiling recess holds air',
-      cellSolid(
-        xs,
-        xs,
-        [0, 5, 10, 12, 20],
-        (i, j, k) => !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)),
-      ),
-    ],
+    ['a chamber whose ceiling recess holds air', recessedChamberBlock()],
     [
       'a pocket over a sealed hollow',
       cellSolid(

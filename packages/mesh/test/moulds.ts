@@ -260,6 +260,21 @@ export function tSlotBlock(): GeneratedMesh {
 }
 
 /**
+ * A 40 × 40 × 20 block with a shaft (x, y 15 → 25, from z 10 up) into a chamber (x, y 5 → 35,
+ * z 5 → 10) whose ceiling has a recess (x, y 5 → 10, z 10 → 12) away from the shaft: resin fills
+ * the chamber through the shaft and the recess holds its air (5 × 5 × 2 = 50 mm³, cuboid).
+ */
+export function recessedChamberBlock(): GeneratedMesh {
+  const xs = [0, 5, 10, 15, 25, 35, 40];
+  return cellSolid(
+    xs,
+    xs,
+    [0, 5, 10, 12, 20],
+    (i, j, k) => !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)),
+  );
+}
+
+/**
  * A 100 × 80 base plate (z 0 to 3) with a 80 × 60 board (z 10 to 15) standing on four 10 × 10
  * legs at its corners. With `recess`, the board's underside has a 60 × 40 pocket 2 mm deep
  * (z 10 to 12) cut up into it: a concave underside.

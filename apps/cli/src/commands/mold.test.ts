@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { analyzeMouldFile, encodeStlAscii, encodeStlBinary, fillAt, readAnalysis, readMouldFile } from '@gelpoint/mesh';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { encode3mf, encodeObj, stlWithCount } from '../../../../packages/mesh/test/mould-files';
-import { cellSolid, mapped, revolvedPocketBlock } from '../../../../packages/mesh/test/moulds';
+import { cellSolid, mapped, recessedChamberBlock, revolvedPocketBlock } from '../../../../packages/mesh/test/moulds';
 import { CliError } from '../command';
 import { command } from './mold';
 
@@ -62,18 +62,7 @@ beforeAll(async () => {
   await write('broken.3mf', encode3mf(pocket).subarray(0, 500));
   // A shaft into a wider chamber whose ceiling has a 5 × 5 × 2 mm recess away from the shaft:
   // resin fills the chamber, the recess holds its air (cuboid, CRC: 50 mm³).
-  const xs = [0, 5, 10, 15, 25, 35, 40];
-  await write(
-    'undercut.stl',
-    encodeStlBinary(
-      cellSolid(
-        xs,
-        xs,
-        [0, 5, 10, 12, 20],
-        (i, j, k) => !((k === 1 && i >= 1 && i <= 4 && j >= 1 && j <= 4) || (k >= 2 && i === 3 && j === 3) || (k === 2 && i === 1 && j === 1)),
-      ),
-    ),
-  );
+  await write('undercut.stl', encodeStlBinary(recessedChamberBlock()));
 });
 
 interface Report {
