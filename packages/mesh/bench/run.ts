@@ -228,8 +228,8 @@ async function main(): Promise<void> {
     process.stdout.write(
       [
         `${size.name} mould: ${mesh.triangleCount} triangles (${(bytes.length / 2 ** 20).toFixed(1)} MB binary STL), method ${fill.method}, fastest of ${size.runs} runs`,
-        `  gelpoint   parse ${ms(stages.parse!)} | weld+checks ${ms(stages['weld+checks']!)} | analyse ${ms(stages.analyse!)} | read back ${ms(stages.decode!)}`,
-        `             fill + wetted + depth map ${ms(stages.fill!)} | 100-level curve ${ms(stages.curve!)} | whole report ${ms(total)}`,
+        `  gelpoint   parse ${ms(stages.parse!)} | weld+checks (and the triangle table) ${ms(stages['weld+checks']!)} | analyse (the series and the columns wait until read) ${ms(stages.analyse!)} | read back ${ms(stages.decode!)}`,
+        `             fill at the level asked for + wetted + depth map (builds the columns) ${ms(stages.fill!)} | 100-level curve (builds the series) ${ms(stages.curve!)} | whole report ${ms(total)}`,
         `             peak RSS ${peak.rssMb.toFixed(0)} MB, heap + array buffers ${peak.heapMb.toFixed(0)} MB | storing the analysis as JSON (API only) ${ms(stages.store!)}, ${storedMb.toFixed(2)} MB`,
         `  manifold   ofMesh ${ms(manifoldStages.ofMesh!)} | box prism minus mould + volume ${ms(manifoldStages.boolean!)} | together ${ms(bestManifold)} | peak RSS ${manifoldPeak.rssMb.toFixed(0)} MB`,
         `  fill at ${level} mm, box dam: gelpoint ${fill.volumeMm3.toFixed(3)} mm³ (estimated error ${fill.estimatedErrorPct.toExponential(1)} %), manifold ${reference.toFixed(3)} mm³, difference ${((100 * (fill.volumeMm3 - reference)) / reference).toExponential(1)} %`,
