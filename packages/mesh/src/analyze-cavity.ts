@@ -12,7 +12,9 @@ import { outlineArea } from './outline-area';
 import type { CavityMesh } from './prepare-mesh';
 import { fail, ok, type Result } from './result';
 import { buildTriangleTable, type TriangleTable } from './triangle-table';
-import { classifyWetting } from './wetting-classes';
+import { classifyWetting, wettingFrame } from './wetting-classes';
+import { levelsWithoutTable } from './levels-without-table';
+import { OverhangSurvey } from './overhang-survey';
 
 export interface AnalyzeCavityOptions {
   /**
@@ -41,16 +43,6 @@ function gridShape(columns: number, width: number, depth: number): [number, numb
   return [nx, Math.max(1, Math.round(columns / nx))];
 }
 
-interface Overhangs {
-  /** Some face that is not a wall looks down from above the table. */
-  present: boolean;
-  /** Σ of the shadows of faces that look down. */
-  coveredAreaMm2: number;
-  lowestFloorMm: number;
-  /** Raised wall-like faces that look down could hold at most this much air (shadow × height). */
-  wallSliverMm3: number;
-}
-
 function takeSpare(mesh: CavityMesh): Uint8Array | null {
   const spare = mesh.spareMemory ?? null;
   mesh.spareMemory = null;
@@ -58,24 +50,12 @@ function takeSpare(mesh: CavityMesh): Uint8Array | null {
 }
 
 /** One pass over the faces: whether anything hangs over free space, and the sums the exact fill needs. */
-function surveyOverhangs(table: TriangleTable, zMin: number, height: number, tableToleranceMm: number): Overhangs {
-  let present = false,
-    covered = 0,
-    lowestFloor = Infinity,
-    sliver = 0;
+function surveyOverhangs(table: TriangleTable, zMin: number, height: number, tableToleranceMm: number): OverhangSurvey {
+  const survey = new OverhangSurvey(zMin, height, tableToleranceMm);
   for (let t = 0; t < table.count; t++) {
-    const facing = table.facing[t]!;
-    if (facing > 0) {
-      lowestFloor = Math.min(lowestFloor, table.sortedZ[3 * t]!);
-    } else if (facing < 0) {
-      covered -= table.shadowArea[t]!;
-      if (table.sortedZ[3 * t + 2]! > zMin + tableToleranceMm) {
-        if (table.steep[t]) sliver -= table.shadowArea[t]! * height;
-        else present = true;
-      }
-    }
+    survey.add(table.facing[t]!, table.shadowArea[t]!, table.sortedZ[3 * t]!, table.sortedZ[3 * t + 2]!, table.steep[t] === 1);
   }
-  return { present, coveredAreaMm2: covered, lowestFloorMm: lowestFloor, wallSliverMm3: sliver };
+  return survey;
 }
 
 /**
@@ -104,26 +84,32 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
     depth = box.max[1] - box.min[1],
     height = zMax - zMin;
   const rect = { minX: box.min[0], minY: box.min[1], maxX: box.max[0], maxY: box.max[1] };
-  // The table preparing the mesh built, or one of its own: in the spare memory, taken once, since
-  // a second analysis of the mesh must not write over the table of the first.
-  const table = mesh.triangleTable ?? buildTriangleTable(positions, triangles, takeSpare(mesh));
   // A face counts as lying on the table within float32 rounding of its height (a file's corners
   // are float32: 2^-24 of their size) or 1e-7 of the mould's height, whichever is larger.
   const tableToleranceMm = Math.max(1e-7 * height, 4 * 2 ** -24 * Math.max(Math.abs(zMin), Math.abs(zMax)));
+  // The triangle table, built when first needed, in the spare memory: taken once, since a second
+  // analysis of the mesh must not write over the table of the first.
+  let madeTable: TriangleTable | null = null;
+  const tableOf = (): TriangleTable => (madeTable ??= buildTriangleTable(positions, triangles, takeSpare(mesh)));
 
   // The exact method needs a closed, consistently wound surface: the divergence theorem for the
   // free space below a level, and the escape analysis over its corners.
   const exact = mesh.topology.watertight && mesh.topology.windingConflicts === 0;
+  const asked = Float64Array.from(new Set(levelsMm.map((h) => h + 0)));
+  // Asked about a few levels, a closed mould that nothing hangs over needs no table: one pass over
+  // its faces answers those levels (the series and the columns build the table if they are read).
+  const quick = exact && asked.length > 0 ? levelsWithoutTable(positions, triangles, asked, height, tableToleranceMm, wettingFrame(box)) : null;
   let facts: ExactFacts | null = null;
   let escape: Float64Array | null = null;
   let heightField = false;
   if (exact) {
-    const survey = surveyOverhangs(table, zMin, height, tableToleranceMm);
+    const survey = quick ? quick.survey : surveyOverhangs(tableOf(), zMin, height, tableToleranceMm);
     const boxArea = width * depth;
     let outline = survey.coveredAreaMm2,
       heldAirFaces = 0;
     if (survey.present) {
       // Something hangs over free space: find where air is held, and the shadow the outline dams enclose.
+      const table = tableOf();
       const escapes = escapeHeights(table, mesh.vertexCount, rect);
       escape = escapes.triangleEscapeMm;
       heldAirFaces = escapes.trappedTriangles;
@@ -144,23 +130,23 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
       unseenMm3: survey.present ? 0 : survey.wallSliverMm3,
     };
   }
-  const classes = classifyWetting(positions, triangles, table, box);
+  const classes = quick ? quick.classes : classifyWetting(positions, triangles, tableOf(), box);
   const series = (): LevelSeries => {
+    const table = tableOf();
     const knots = chooseKnots(table, classes, escape, zMin, zMax, levelsMm, maxKnots);
     return buildLevelSeries(knots.knots, knots.complete, table, classes, escape, zMin);
   };
-  // The levels asked for are summed in one pass over the faces, all together, on the first question about one of them.
-  const asked = Float64Array.from(new Set(levelsMm.map((h) => h + 0)));
-  let summed: LevelValues | null = null;
+  // The levels asked for are summed over the faces, all together: above, or on the first question about one of them.
+  let summed: LevelValues | null = quick ? quick.values : null;
   const valuesAt = (levelMm: number): Float64Array | null => {
     const k = asked.indexOf(levelMm);
     if (k < 0) return null;
-    summed ??= levelValues(asked, table, classes, escape, zMin);
+    summed ??= levelValues(asked, tableOf(), classes, escape, zMin);
     return Float64Array.from({ length: levelQuantityCount }, (_, q) => summed!.values[q * asked.length + k]!);
   };
 
   const build = (count: number): ColumnGrid => {
-    const built = buildColumnGrid(positions, triangles, table, rect, zMin, ...gridShape(count, width, depth), exact);
+    const built = buildColumnGrid(positions, triangles, tableOf(), rect, zMin, ...gridShape(count, width, depth), exact);
     const grid = built.grid;
     if (!exact) {
       grid.escapeMm = columnEscape(grid, zMin);
@@ -187,7 +173,7 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
     // the fill's volume never does.
     gridOf = () => fitted(Math.min(maxColumns, 65_536)).grid;
   } else {
-    let { grid, columns } = fitted(Math.min(maxColumns, Math.max(65_536, 2 * table.count)));
+    let { grid, columns } = fitted(Math.min(maxColumns, Math.max(65_536, 2 * mesh.triangleCount)));
     if (columns > 0) {
       // Refine until the column estimate meets the target at the levels that matter, within the caps.
       const checkLevels = levelsMm.length > 0 ? levelsMm : [zMax];

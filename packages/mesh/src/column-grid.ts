@@ -198,7 +198,7 @@ export function buildColumnGrid(
       xs[r] = originX + (i + 0.5) * cellX + cellX * 1.3e-7;
       ys[r] = originY + (j + 0.5) * cellY + cellY * 0.7e-7;
     });
-    const nudged = castRays(xs, ys, positions, triangles, table, rect, floorZ);
+    const nudged = castRays(xs, ys, positions, triangles, table.facing, rect, floorZ);
     const replaced = new Map<number, number>();
     unbalanced.forEach((col, r) => {
       if (nudged.balanced[r]) replaced.set(col, r);

@@ -82,7 +82,12 @@ export function readLevelFace(table: TriangleTable, classes: WettingClasses, esc
   face.escape = e;
   face.up = facing > 0;
   face.down = facing < 0 && face.z2 > zMin;
-  face.wetQ = wet & wetWithOutline ? LevelQuantity.Wetted : wet & wetWithBox ? LevelQuantity.WettedBox : -1;
+  face.wetQ = wettedQuantity(wet);
+}
+
+/** The wetted quantity a face with these wetting bits adds to: with dams along the outline, only with the box dam, or none (-1). */
+export function wettedQuantity(wet: number): number {
+  return wet & wetWithOutline ? LevelQuantity.Wetted : wet & wetWithBox ? LevelQuantity.WettedBox : -1;
 }
 
 /** Knots per block of the run arrays; each block keeps its own origin so sums stay small. */

@@ -19,18 +19,35 @@ export interface LevelValues {
  * for any other level. Levels at or below the mould's lowest z read 0, as the series does there.
  */
 export function levelValues(levels: Float64Array, table: TriangleTable, classes: WettingClasses, escape: Float64Array | null, zMin: number): LevelValues {
-  const n = levels.length;
-  const values = new Float64Array(levelQuantityCount * n);
-  const at: TriangleBelow = { share: 0, shareSlope: 0, depth: 0 };
+  const sums = new LevelSums(levels, zMin);
   const face: LevelFace = { z0: 0, z1: 0, z2: 0, escape: 0, up: false, down: false, wetQ: -1 };
   for (let t = 0; t < table.count; t++) {
     readLevelFace(table, classes, escape, zMin, t, face);
+    sums.add(face, table.shadowArea[t]!, table.area[t]!, table.facing[t]!);
+  }
+  return { levels, values: sums.values };
+}
+
+/** The sums of levelValues, face by face, in any order. */
+export class LevelSums {
+  readonly values: Float64Array;
+  private readonly at: TriangleBelow = { share: 0, shareSlope: 0, depth: 0 };
+
+  constructor(
+    readonly levels: Float64Array,
+    private readonly zMin: number,
+  ) {
+    this.values = new Float64Array(levelQuantityCount * levels.length);
+  }
+
+  /** Adds one face: `face` as readLevelFace fills it, with the face's signed shadow, area and facing. */
+  add(face: LevelFace, signedShadow: number, area: number, facing: number): void {
     const { z0, z1, z2, escape: e, up, down, wetQ } = face;
-    const held = e !== Infinity && table.facing[t] !== 0;
-    if (!up && !down && wetQ < 0 && !held) continue;
-    const signedShadow = table.shadowArea[t]!,
-      shadow = Math.abs(signedShadow),
-      area = table.area[t]!;
+    const held = e !== Infinity && facing !== 0;
+    if (!up && !down && wetQ < 0 && !held) return;
+    const { levels, values, zMin, at } = this;
+    const n = levels.length;
+    const shadow = Math.abs(signedShadow);
     const mean = (z0 + z1 + z2) / 3;
     // Above its escape height a face is held dry by air: what was wet below it stays so.
     let frozen = area;
@@ -73,5 +90,4 @@ export function levelValues(levels: Float64Array, table: TriangleTable, classes:
       }
     }
   }
-  return { levels, values };
 }

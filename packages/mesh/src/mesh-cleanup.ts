@@ -1,5 +1,4 @@
 import { analyseEdges, type EdgeTopology } from './edge-topology';
-import { tableWithFlats, type TriangleTable } from './triangle-table';
 
 /**
  * Clean-up after the exact weld, for files as writers leave them:
@@ -17,12 +16,6 @@ export interface CleanedMesh {
   edges: EdgeTopology;
   /** Vertices merged into a neighbour within the tolerance. */
   verticesWelded: number;
-  /**
-   * The triangle table of the cleaned mesh, built in the pass that looks for triangles without
-   * area; in `spare` memory, so only until something else writes there. Null when a later step
-   * changed the triangles or took the spare memory back.
-   */
-  table: TriangleTable | null;
   /** Triangles dropped for having no area (counting those the weld collapsed). */
   zeroAreaDropped: number;
   duplicatesDropped: number;
@@ -116,6 +109,34 @@ function weldWithin(positionsMm: Float64Array, candidates: Uint32Array, vertexCo
 
 function cellHash(x: number, y: number, z: number, mask: number): number {
   return ((Math.imul(x | 0, 0x9e3779b1) ^ Math.imul(y | 0, 0x85ebca77) ^ Math.imul(z | 0, 0xc2b2ae3d)) >>> 0) & mask;
+}
+
+/** Triangles whose height over their longest edge is at most the tolerance: no area at the model's resolution. */
+function flatTriangles(positionsMm: Float64Array, triangles: Uint32Array, toleranceMm: number): number[] {
+  const tol2 = toleranceMm * toleranceMm;
+  const flat: number[] = [];
+  const p = positionsMm;
+  for (let t = 0; t < triangles.length / 3; t++) {
+    const a = 3 * triangles[3 * t]!,
+      b = 3 * triangles[3 * t + 1]!,
+      c = 3 * triangles[3 * t + 2]!;
+    const ux = p[b]! - p[a]!,
+      uy = p[b + 1]! - p[a + 1]!,
+      uz = p[b + 2]! - p[a + 2]!;
+    const vx = p[c]! - p[a]!,
+      vy = p[c + 1]! - p[a + 1]!,
+      vz = p[c + 2]! - p[a + 2]!;
+    const wx = vx - ux,
+      wy = vy - uy,
+      wz = vz - uz;
+    const nx = uy * vz - uz * vy,
+      ny = uz * vx - ux * vz,
+      nz = ux * vy - uy * vx;
+    const longest2 = Math.max(ux * ux + uy * uy + uz * uz, vx * vx + vy * vy + vz * vz, wx * wx + wy * wy + wz * wz);
+    // height = |n| / longest edge; compared squared to stay off square roots.
+    if (nx * nx + ny * ny + nz * nz <= tol2 * longest2) flat.push(t);
+  }
+  return flat;
 }
 
 /** Later copies of a face with the same three corners in the same cyclic order. */
@@ -226,13 +247,8 @@ export function cleanMesh(
     }
   }
 
-  // Triangles with no area at the tolerance: their height over their longest edge is at most it.
-  const surveyed = tableWithFlats(positionsMm, triangles, spare, toleranceMm);
-  let table: TriangleTable | null = surveyed.table;
-  const flat = surveyed.flat;
+  const flat = flatTriangles(positionsMm, triangles, toleranceMm);
   if (flat.length > 0) {
-    // The pairing below works in the spare memory the table is in.
-    table = null;
     const { neighbour } = analyseEdges(triangles, vertexCount, true, spare);
     const drop = new Uint8Array(triangles.length / 3);
     let dropped = 0;
@@ -261,7 +277,7 @@ export function cleanMesh(
     }
   }
 
-  if (!changed) return { positionsMm, triangles, vertexCount, edges, verticesWelded, table, zeroAreaDropped, duplicatesDropped };
+  if (!changed) return { positionsMm, triangles, vertexCount, edges, verticesWelded, zeroAreaDropped, duplicatesDropped };
   const compact = compacted(positionsMm, triangles, vertexCount);
   return {
     positionsMm: compact.positionsMm,
@@ -269,7 +285,6 @@ export function cleanMesh(
     vertexCount: compact.vertexCount,
     edges: analyseEdges(triangles, compact.vertexCount, false, spare),
     verticesWelded,
-    table: null,
     zeroAreaDropped,
     duplicatesDropped,
   };

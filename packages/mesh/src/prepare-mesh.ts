@@ -3,7 +3,6 @@ import { checkUnits, checkUpAxis, mmPerUnit, type FileUnits, type UpAxis } from 
 import { boundingBox, surfaceMeasures, type BoundingBox } from './mesh-measures';
 import { fail, ok, type MeshWarning, type Result } from './result';
 import type { TriangleSoup } from './stl/triangle-soup';
-import type { TriangleTable } from './triangle-table';
 import { cleanMesh } from './mesh-cleanup';
 import type { StreamedStl } from './stl/binary-stl-stream';
 import { framedWeld, weldSoup, type WeldedMesh } from './weld';
@@ -75,8 +74,6 @@ export interface CavityMesh {
    * is none or it has been taken.
    */
   spareMemory?: Uint8Array | null;
-  /** The per-triangle table every analysis reads, when preparing the mesh built it on the way (read only). */
-  triangleTable?: TriangleTable | null;
 }
 
 export function prepareMesh(soup: TriangleSoup, options: PrepareMeshOptions = {}): Result<CavityMesh> {
@@ -152,10 +149,7 @@ function preparedWeld(welded: WeldedMesh, toleranceMm: number, readWarnings: Mes
   const vertexCount = cleaned.vertexCount;
   let turnedTriangles = 0;
   let windingConflicts = 0;
-  // Built while cleaning, in the spare memory; kept while the triangles stay as they were then.
-  let table = cleaned.table;
   if (edges.misorientedEdges > 0) {
-    table = null;
     const repair = repairWinding(triangles, analyseEdges(triangles, vertexCount, true, spare));
     turnedTriangles = repair.turned;
     windingConflicts = repair.conflicts;
@@ -204,7 +198,6 @@ function preparedWeld(welded: WeldedMesh, toleranceMm: number, readWarnings: Mes
   const orientable = windingConflicts === 0;
   if (watertight && orientable && measures.signedVolumeMm3 < 0) {
     turnAllTriangles(triangles);
-    table = null;
     measures = { signedVolumeMm3: -measures.signedVolumeMm3, surfaceAreaMm2: measures.surfaceAreaMm2 };
     invertedFixed = true;
     warnings.push({
@@ -236,8 +229,7 @@ function preparedWeld(welded: WeldedMesh, toleranceMm: number, readWarnings: Mes
     enclosedVolumeMm3: watertight && orientable ? measures.signedVolumeMm3 : null,
     surfaceAreaMm2: measures.surfaceAreaMm2,
     warnings,
-    triangleTable: table,
-    spareMemory: table ? null : spare,
+    spareMemory: spare,
   });
 }
 

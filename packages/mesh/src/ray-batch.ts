@@ -1,7 +1,6 @@
 import { pairCrossings, planeZAt, type Pairing } from './column-intervals';
 import { shadowContains } from './plane-cover';
 import type { PlaneRect } from './shadow-index';
-import type { TriangleTable } from './triangle-table';
 
 /** Solid intervals along many vertical lines, found together. */
 export interface RayIntervals {
@@ -25,7 +24,8 @@ export function castRays(
   ys: Float64Array,
   positions: Float64Array,
   triangles: Uint32Array,
-  table: TriangleTable,
+  /** Per triangle, as TriangleTable.facing: 1 up, -1 down, 0 vertical (never crossed). */
+  facing: Int8Array,
   rect: PlaneRect,
   floorZ: number,
 ): RayIntervals {
@@ -55,8 +55,8 @@ export function castRays(
     hitTri = new Int32Array(capacity);
   let hits = 0;
   if (rays > 0) {
-    for (let t = 0; t < table.count; t++) {
-      if (table.facing[t] === 0) continue;
+    for (let t = 0; t < facing.length; t++) {
+      if (facing[t] === 0) continue;
       const a = 3 * triangles[3 * t]!,
         b = 3 * triangles[3 * t + 1]!,
         c = 3 * triangles[3 * t + 2]!;
@@ -96,7 +96,7 @@ export function castRays(
             hitTri[hits] = t;
             hitRay[hits] = r;
             hitZ[hits] = planeZAt(positions, triangles, t, px, py);
-            hitUp[hits] = table.facing[t]! > 0 ? 1 : 0;
+            hitUp[hits] = facing[t]! > 0 ? 1 : 0;
             hits++;
           }
         }

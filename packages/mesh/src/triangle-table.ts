@@ -25,30 +25,67 @@ export interface TriangleTable {
 /** Slope below which a face counts as a wall: float32 exports leave this much noise on vertical faces. */
 export const steepNormalZ = 1e-5;
 
+/** One face's entries of the table (see TriangleTable), worked out from its corners. */
+export interface FaceGeometry {
+  shadowArea: number;
+  area: number;
+  facing: number;
+  steep: boolean;
+  z0: number;
+  z1: number;
+  z2: number;
+}
+
+/** Fills `out` with triangle t's entries; one object is filled again face after face. */
+export function faceGeometry(positions: Float64Array, triangles: Uint32Array, t: number, out: FaceGeometry): void {
+  const a = 3 * triangles[3 * t]!,
+    b = 3 * triangles[3 * t + 1]!,
+    c = 3 * triangles[3 * t + 2]!;
+  const ax = positions[a]!,
+    ay = positions[a + 1]!,
+    az = positions[a + 2]!;
+  const ux = positions[b]! - ax,
+    uy = positions[b + 1]! - ay,
+    uz = positions[b + 2]! - az;
+  const vx = positions[c]! - ax,
+    vy = positions[c + 1]! - ay,
+    vz = positions[c + 2]! - az;
+  const nx = uy * vz - uz * vy,
+    ny = uz * vx - ux * vz,
+    nz = ux * vy - uy * vx;
+  const len = Math.sqrt(nx * nx + ny * ny + nz * nz);
+  out.shadowArea = nz / 2;
+  out.area = len / 2;
+  out.facing = nz > 0 ? 1 : nz < 0 ? -1 : 0;
+  out.steep = Math.abs(nz) <= steepNormalZ * len;
+  let z0 = az,
+    z1 = positions[b + 2]!,
+    z2 = positions[c + 2]!;
+  if (z0 > z1) {
+    const s = z0;
+    z0 = z1;
+    z1 = s;
+  }
+  if (z1 > z2) {
+    const s = z1;
+    z1 = z2;
+    z2 = s;
+  }
+  if (z0 > z1) {
+    const s = z0;
+    z0 = z1;
+    z1 = s;
+  }
+  out.z0 = z0;
+  out.z1 = z1;
+  out.z2 = z2;
+}
+
 /**
  * Builds the table, in `spare` memory when it is given (every entry is written below, so memory
  * that held something else will do), otherwise in fresh arrays.
  */
 export function buildTriangleTable(positions: Float64Array, triangles: Uint32Array, spare: Uint8Array | null = null): TriangleTable {
-  return fillTable(positions, triangles, spare, -1).table;
-}
-
-/**
- * The table, and in the same pass the triangles whose height over their longest edge is at most
- * `toleranceMm`: no area at the model's resolution (the mesh clean-up's test, which needs the same
- * edge vectors and normal).
- */
-export function tableWithFlats(
-  positions: Float64Array,
-  triangles: Uint32Array,
-  spare: Uint8Array | null,
-  toleranceMm: number,
-): { table: TriangleTable; flat: number[] } {
-  return fillTable(positions, triangles, spare, toleranceMm);
-}
-
-/** One pass over the triangles; flats are listed when `toleranceMm` is not negative. */
-function fillTable(positions: Float64Array, triangles: Uint32Array, spare: Uint8Array | null, toleranceMm: number): { table: TriangleTable; flat: number[] } {
   const count = triangles.length / 3;
   const memory = new SpareMemory(spare);
   const shadowArea = memory.float64(count);
@@ -56,60 +93,16 @@ function fillTable(positions: Float64Array, triangles: Uint32Array, spare: Uint8
   const sortedZ = memory.float64(count * 3);
   const facing = memory.int8(count);
   const steep = memory.uint8(count);
-  const listFlats = toleranceMm >= 0,
-    tol2 = toleranceMm * toleranceMm;
-  const flat: number[] = [];
+  const face: FaceGeometry = { shadowArea: 0, area: 0, facing: 0, steep: false, z0: 0, z1: 0, z2: 0 };
   for (let t = 0; t < count; t++) {
-    const a = 3 * triangles[3 * t]!,
-      b = 3 * triangles[3 * t + 1]!,
-      c = 3 * triangles[3 * t + 2]!;
-    const ax = positions[a]!,
-      ay = positions[a + 1]!,
-      az = positions[a + 2]!;
-    const ux = positions[b]! - ax,
-      uy = positions[b + 1]! - ay,
-      uz = positions[b + 2]! - az;
-    const vx = positions[c]! - ax,
-      vy = positions[c + 1]! - ay,
-      vz = positions[c + 2]! - az;
-    const nx = uy * vz - uz * vy,
-      ny = uz * vx - ux * vz,
-      nz = ux * vy - uy * vx;
-    const n2 = nx * nx + ny * ny + nz * nz;
-    const len = Math.sqrt(n2);
-    shadowArea[t] = nz / 2;
-    area[t] = len / 2;
-    facing[t] = nz > 0 ? 1 : nz < 0 ? -1 : 0;
-    steep[t] = Math.abs(nz) <= steepNormalZ * len ? 1 : 0;
-    if (listFlats) {
-      const wx = vx - ux,
-        wy = vy - uy,
-        wz = vz - uz;
-      const longest2 = Math.max(ux * ux + uy * uy + uz * uz, vx * vx + vy * vy + vz * vz, wx * wx + wy * wy + wz * wz);
-      // height = |n| / longest edge; compared squared to stay off square roots.
-      if (n2 <= tol2 * longest2) flat.push(t);
-    }
-    let z0 = az,
-      z1 = positions[b + 2]!,
-      z2 = positions[c + 2]!;
-    if (z0 > z1) {
-      const s = z0;
-      z0 = z1;
-      z1 = s;
-    }
-    if (z1 > z2) {
-      const s = z1;
-      z1 = z2;
-      z2 = s;
-    }
-    if (z0 > z1) {
-      const s = z0;
-      z0 = z1;
-      z1 = s;
-    }
-    sortedZ[3 * t] = z0;
-    sortedZ[3 * t + 1] = z1;
-    sortedZ[3 * t + 2] = z2;
+    faceGeometry(positions, triangles, t, face);
+    shadowArea[t] = face.shadowArea;
+    area[t] = face.area;
+    facing[t] = face.facing;
+    steep[t] = face.steep ? 1 : 0;
+    sortedZ[3 * t] = face.z0;
+    sortedZ[3 * t + 1] = face.z1;
+    sortedZ[3 * t + 2] = face.z2;
   }
-  return { table: { count, positions, triangles, shadowArea, area, sortedZ, facing, steep }, flat };
+  return { count, positions, triangles, shadowArea, area, sortedZ, facing, steep };
 }

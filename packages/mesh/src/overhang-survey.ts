@@ -1,0 +1,31 @@
+/**
+ * What the exact fill needs from the faces that look up or down, added face by face: whether
+ * anything hangs over free space (a face that looks down, is not a wall and stands above the
+ * table), the shadows of the faces that look down (the area they cover), the lowest floor, and
+ * what raised wall-like faces that look down could hold at most (shadow × height).
+ */
+export class OverhangSurvey {
+  present = false;
+  coveredAreaMm2 = 0;
+  lowestFloorMm = Infinity;
+  wallSliverMm3 = 0;
+
+  constructor(
+    private readonly zMin: number,
+    private readonly height: number,
+    private readonly tableToleranceMm: number,
+  ) {}
+
+  /** One face: its facing (1 up, -1 down), signed shadow, lowest and highest corner, and whether it is a wall. */
+  add(facing: number, signedShadow: number, z0: number, z2: number, steep: boolean): void {
+    if (facing > 0) {
+      this.lowestFloorMm = Math.min(this.lowestFloorMm, z0);
+    } else if (facing < 0) {
+      this.coveredAreaMm2 -= signedShadow;
+      if (z2 > this.zMin + this.tableToleranceMm) {
+        if (steep) this.wallSliverMm3 -= signedShadow * this.height;
+        else this.present = true;
+      }
+    }
+  }
+}
