@@ -115,6 +115,21 @@ describe('analyzeCavity: the stored analysis', () => {
     expect(JSON.parse(JSON.stringify(first))).toEqual(firstStored);
   });
 
+  it('sums up to 8 levels asked for without the table, and leaves more to the series', () => {
+    const levels = [10, 12, 14, 16, 18, 20, 22, 24, 26];
+    for (const [asked, tableBuilt] of [
+      [levels.slice(0, 8), false],
+      [levels, true],
+    ] as const) {
+      const mesh = unwrap(prepareMesh(unwrap(parseStl(encodeStlBinary(bowl), { consumeBytes: true }))));
+      const analysis = unwrap(analyzeCavity(mesh, { levelsMm: [...asked] }));
+      // The table takes the file's spare bytes when it is built.
+      expect(mesh.spareMemory === null).toBe(tableBuilt);
+      const stored = JSON.parse(JSON.stringify(analysis)) as typeof analysis;
+      expect(relative(unwrap(fillAt(analysis, 20)).volumeMm3, unwrap(fillAt(stored, 20)).volumeMm3)).toBeLessThan(1e-13);
+    }
+  });
+
   it('answers many queries from one decoded model', () => {
     const model = unwrap(readAnalysis(analysis));
     expect(unwrap(fillAt(model, 20)).volumeMm3).toBe(unwrap(fillAt(analysis, 20)).volumeMm3);

@@ -18,10 +18,9 @@ import { OverhangSurvey } from './overhang-survey';
 
 export interface AnalyzeCavityOptions {
   /**
-   * Levels (mm, Z-up frame) to answer exactly, e.g. the planned pour levels: fill questions at
-   * these levels are summed over the faces directly (without building the series, which only a
-   * question about another level or storing the analysis then needs), and the stored series has
-   * them among its knots.
+   * Levels (mm, Z-up frame) to answer exactly, e.g. the planned pour levels: the stored series has
+   * them among its knots, and up to 8 of them are summed over the faces directly, so a question
+   * about one of them needs no series (only another level, a curve or storing the analysis builds it).
    */
   levelsMm?: number[];
   /** Accuracy the column method's resolution is chosen for, in percent of the fill. Default 0.5. */
@@ -33,6 +32,9 @@ export interface AnalyzeCavityOptions {
 }
 
 export const analysisDefaults = { targetErrorPct: 0.5, maxColumns: 262_144, maxKnots: 512 };
+
+/** Most levels summed face by face (`levelsMm`); more are read from the series. */
+const maxSummedLevels = 8;
 
 /** Most solid intervals stored (8 bytes each): about 3 MB, 4 MB as base64. */
 const maxStoredIntervals = 393_216;
@@ -95,7 +97,9 @@ export function analyzeCavity(mesh: CavityMesh, options: AnalyzeCavityOptions = 
   // The exact method needs a closed, consistently wound surface: the divergence theorem for the
   // free space below a level, and the escape analysis over its corners.
   const exact = mesh.topology.watertight && mesh.topology.windingConflicts === 0;
-  const asked = Float64Array.from(new Set(levelsMm.map((h) => h + 0)));
+  // Summing costs a pass over the faces per level: beyond a few levels the series answers them instead.
+  const distinct = [...new Set(levelsMm.map((h) => h + 0))];
+  const asked = Float64Array.from(distinct.length <= maxSummedLevels ? distinct : []);
   // Asked about a few levels, a closed mould that nothing hangs over needs no table: one pass over
   // its faces answers those levels (the series and the columns build the table if they are read).
   const quick = exact && asked.length > 0 ? levelsWithoutTable(positions, triangles, asked, height, tableToleranceMm, wettingFrame(box)) : null;
