@@ -114,12 +114,14 @@ function isFresh(name) {
 function onFirstUse(target, outdir) {
   const entries = target.onFirstUse ?? [];
   const file = (entry) => `${entry.library.replace(/[^a-z0-9]+/gi, '-')}.cjs`;
+  // A regular expression matching `text` itself, at the end of a path.
+  const endingIn = (text) => new RegExp(`${text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`);
   const plugin = {
     name: 'load-on-first-use',
     setup(build) {
       for (const entry of entries) {
         const path = join(root, entry.module);
-        build.onLoad({ filter: new RegExp(`${entry.module.replace(/[.]/g, '\\.')}$`) }, (args) =>
+        build.onLoad({ filter: endingIn(entry.module) }, (args) =>
           args.path === path
             ? {
                 contents: `let loaded;\nexport function ${entry.exportName}() {\n  return (loaded ??= require('./${file(entry)}'));\n}\n`,
@@ -127,7 +129,9 @@ function onFirstUse(target, outdir) {
               }
             : undefined,
         );
-        build.onResolve({ filter: new RegExp(`^\\./${file(entry).replace(/[.]/g, '\\.')}$`) }, (args) => ({ path: args.path, external: true }));
+        build.onResolve({ filter: endingIn(`./${file(entry)}`) }, (args) =>
+          args.path === `./${file(entry)}` ? { path: args.path, external: true } : undefined,
+        );
       }
     },
   };
