@@ -1,4 +1,4 @@
-#!/usr/bin/env -S GLIBC_TUNABLES=glibc.malloc.hugetlb=1 node
+#!/usr/bin/env -S -u NODE_EXTRA_CA_CERTS GLIBC_TUNABLES=glibc.malloc.hugetlb=1 node
 // Runs the built command (npm run build writes apps/cli/dist); a checkout that has not been built
 // yet falls back to the TypeScript sources through tsx's loader.
 import { existsSync } from 'node:fs';

@@ -58,18 +58,23 @@ describe('the gelpoint bin', () => {
     expect(report.fill.trappedAirMm3).toBeCloseTo(5 * 5 * 2, 6);
   });
 
-  it('hands node the allocator setting on its #! line', () => {
+  it('hands node the allocator setting on its #! line, and no extra CA bundle to load', () => {
     const line = readFileSync(bin, 'utf8').split('\n')[0]!;
     expect(line.startsWith('#!')).toBe(true);
     // Run the #! line as the kernel does (its interpreter, the rest of the line as one argument),
     // with a script in place of the bin's that prints what node was given.
     const text = line.slice(2).trim();
     const interpreter = text.split(' ')[0]!;
-    const run = spawnSync(interpreter, [text.slice(interpreter.length + 1), '-e', 'console.log(process.env.GLIBC_TUNABLES)'], {
-      encoding: 'utf8',
-      env: { PATH: process.env.PATH ?? '' },
-    });
+    // A machine may point every Node process at an extra CA bundle, which node reads and parses
+    // as it starts; the command opens no TLS connection, so its #! line drops the setting.
+    const bundle = join(repoRoot, 'tsconfig.base.json');
+    const run = spawnSync(
+      interpreter,
+      [text.slice(interpreter.length + 1), '-e', 'console.log(process.env.GLIBC_TUNABLES, process.env.NODE_EXTRA_CA_CERTS ?? "unset")'],
+      { encoding: 'utf8', env: { PATH: process.env.PATH ?? '', NODE_EXTRA_CA_CERTS: bundle } },
+    );
     expect(run.status).toBe(0);
-    expect(run.stdout.trim()).toBe('glibc.malloc.hugetlb=1');
+    expect(run.stderr).toBe('');
+    expect(run.stdout.trim()).toBe('glibc.malloc.hugetlb=1 unset');
   });
 });

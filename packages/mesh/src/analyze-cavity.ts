@@ -14,7 +14,7 @@ import { fail, ok, type Result } from './result';
 import { buildTriangleTable, type TriangleTable } from './triangle-table';
 import { classifyWetting, wettingFrame } from './wetting-classes';
 import { levelsWithoutTable } from './levels-without-table';
-import { OverhangSurvey } from './overhang-survey';
+import { OverhangSurvey, type SurveyFace } from './overhang-survey';
 
 export interface AnalyzeCavityOptions {
   /**
@@ -54,8 +54,14 @@ function takeSpare(mesh: CavityMesh): Uint8Array | null {
 /** One pass over the faces: whether anything hangs over free space, and the sums the exact fill needs. */
 function surveyOverhangs(table: TriangleTable, zMin: number, height: number, tableToleranceMm: number): OverhangSurvey {
   const survey = new OverhangSurvey(zMin, height, tableToleranceMm);
+  const face: SurveyFace = { facing: 0, shadowArea: 0, z0: 0, z2: 0, steep: false };
   for (let t = 0; t < table.count; t++) {
-    survey.add(table.facing[t]!, table.shadowArea[t]!, table.sortedZ[3 * t]!, table.sortedZ[3 * t + 2]!, table.steep[t] === 1);
+    face.facing = table.facing[t]!;
+    face.shadowArea = table.shadowArea[t]!;
+    face.z0 = table.sortedZ[3 * t]!;
+    face.z2 = table.sortedZ[3 * t + 2]!;
+    face.steep = table.steep[t] === 1;
+    survey.add(face);
   }
   return survey;
 }

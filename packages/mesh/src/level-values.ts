@@ -21,11 +21,22 @@ export interface LevelValues {
 export function levelValues(levels: Float64Array, table: TriangleTable, classes: WettingClasses, escape: Float64Array | null, zMin: number): LevelValues {
   const sums = new LevelSums(levels, zMin);
   const face: LevelFace = { z0: 0, z1: 0, z2: 0, escape: 0, up: false, down: false, wetQ: -1 };
+  const measures: FaceMeasures = { shadowArea: 0, area: 0, facing: 0 };
   for (let t = 0; t < table.count; t++) {
     readLevelFace(table, classes, escape, zMin, t, face);
-    sums.add(face, table.shadowArea[t]!, table.area[t]!, table.facing[t]!);
+    measures.shadowArea = table.shadowArea[t]!;
+    measures.area = table.area[t]!;
+    measures.facing = table.facing[t]!;
+    sums.add(face, measures);
   }
   return { levels, values: sums.values };
+}
+
+/** A face's signed shadow (negative when it looks down), area and facing (1 up, -1 down, 0 a wall); a FaceGeometry has them. */
+export interface FaceMeasures {
+  shadowArea: number;
+  area: number;
+  facing: number;
 }
 
 /** The sums of levelValues, face by face, in any order. */
@@ -40,9 +51,14 @@ export class LevelSums {
     this.values = new Float64Array(levelQuantityCount * levels.length);
   }
 
-  /** Adds one face: `face` as readLevelFace fills it, with the face's signed shadow, area and facing. */
-  add(face: LevelFace, signedShadow: number, area: number, facing: number): void {
+  /**
+   * Adds one face: `face` as readLevelFace fills it, with the face's signed shadow, area and
+   * facing. Both are objects filled again face after face: numbers passed one by one would each be
+   * boxed on the heap where the call is not inlined.
+   */
+  add(face: LevelFace, measures: FaceMeasures): void {
     const { z0, z1, z2, escape: e, up, down, wetQ } = face;
+    const { shadowArea: signedShadow, area, facing } = measures;
     const held = e !== Infinity && facing !== 0;
     if (!up && !down && wetQ < 0 && !held) return;
     const { levels, values, zMin, at } = this;

@@ -44,13 +44,13 @@ export function levelsWithoutTable(
     face.up = columns && g.facing > 0;
     face.down = columns && g.facing < 0 && g.z2 > zMin;
     face.wetQ = wettedQuantity(wetting);
-    sums.add(face, g.shadowArea, g.area, g.facing);
+    sums.add(face, g);
     wet[t] = wetting;
   };
   for (let t = 0; t < count; t++) {
     faceGeometry(positions, triangles, t, g);
     facing[t] = g.facing;
-    survey.add(g.facing, g.shadowArea, g.z0, g.z2, g.steep);
+    survey.add(g);
     if (survey.present) return null;
     if (g.steep) walls.add(positions, triangles, t, frame);
     take(t, g.steep ? 0 : faceWetting(g.facing, g.z2, frame), true);

@@ -1,3 +1,13 @@
+/** What the survey reads of a face (a FaceGeometry has it all). */
+export interface SurveyFace {
+  facing: number;
+  /** Signed: negative for a face that looks down. */
+  shadowArea: number;
+  z0: number;
+  z2: number;
+  steep: boolean;
+}
+
 /**
  * What the exact fill needs from the faces that look up or down, added face by face: whether
  * anything hangs over free space (a face that looks down, is not a wall and stands above the
@@ -16,8 +26,13 @@ export class OverhangSurvey {
     private readonly tableToleranceMm: number,
   ) {}
 
-  /** One face: its facing (1 up, -1 down), signed shadow, lowest and highest corner, and whether it is a wall. */
-  add(facing: number, signedShadow: number, z0: number, z2: number, steep: boolean): void {
+  /**
+   * One face: its facing (1 up, -1 down), signed shadow, lowest and highest corner, and whether it
+   * is a wall. Read from an object filled again face after face: numbers passed one by one would
+   * each be boxed on the heap where the call is not inlined, a million times for a big mould.
+   */
+  add(face: SurveyFace): void {
+    const { facing, shadowArea: signedShadow, z0, z2, steep } = face;
     if (facing > 0) {
       this.lowestFloorMm = Math.min(this.lowestFloorMm, z0);
     } else if (facing < 0) {
