@@ -4,6 +4,29 @@ import { ExactWelder, type ExactWeld } from '../weld';
 import { binaryHeaderBytes, binaryRecordBytes } from './parse-binary-stl';
 import { defaultMaxTriangles } from './triangle-soup';
 
+/**
+ * Copies the corners of `count` records from `at` on (9 float32 bit patterns each, after the
+ * 12-byte normal, which is recomputed later) into `block` from record `fill` on. Returns the first
+ * of them with a coordinate that is not finite, or -1. A loop of its own, with nothing but
+ * reads and writes of arrays in it, so it is compiled once and stays so.
+ */
+function copyCorners(view: DataView, at: number, count: number, block: Uint32Array, fill: number): number {
+  let firstNonFinite = -1;
+  for (let r = 0; r < count; r++) {
+    const from = at + r * binaryRecordBytes + 12,
+      to = 9 * (fill + r);
+    let exponents = 0;
+    for (let k = 0; k < 9; k++) {
+      const bits = view.getUint32(from + 4 * k, true);
+      block[to + k] = bits;
+      // All exponent bits set: infinity or NaN (IEEE 754 binary32).
+      exponents |= (bits & 0x7f800000) === 0x7f800000 ? 1 : 0;
+    }
+    if (exponents !== 0 && firstNonFinite < 0) firstNonFinite = r;
+  }
+  return firstNonFinite;
+}
+
 /** A binary STL read in chunks, its corners welded as they came (see prepareStreamedStl). */
 export interface StreamedStl {
   weld: ExactWeld;
@@ -108,26 +131,14 @@ export class BinaryStlStream {
 
   private takeRecords(bytes: Uint8Array, from: number, count: number): void {
     const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
-    const block = this.block;
-    let fill = this.blockFill;
-    for (let r = 0; r < count; r++) {
-      // Each record: normal (12 bytes), 3 corners, 2 spare; the normal is recomputed later.
-      const at = from + r * binaryRecordBytes + 12;
-      let exponents = 0;
-      for (let k = 0; k < 9; k++) {
-        const bits = view.getUint32(at + 4 * k, true);
-        block[9 * fill + k] = bits;
-        // All exponent bits set: infinity or NaN (IEEE 754 binary32).
-        exponents |= (bits & 0x7f800000) === 0x7f800000 ? 1 : 0;
-      }
-      if (exponents !== 0 && this.firstNonFinite < 0) this.firstNonFinite = this.triangle + fill;
-      if (++fill === blockRecords) {
-        this.blockFill = fill;
-        this.flush();
-        fill = 0;
-      }
+    for (let r = 0; r < count;) {
+      const take = Math.min(count - r, blockRecords - this.blockFill);
+      const nonFinite = copyCorners(view, from + r * binaryRecordBytes, take, this.block, this.blockFill);
+      if (nonFinite >= 0 && this.firstNonFinite < 0) this.firstNonFinite = this.triangle + this.blockFill + nonFinite;
+      this.blockFill += take;
+      r += take;
+      if (this.blockFill === blockRecords) this.flush();
     }
-    this.blockFill = fill;
   }
 
   private flush(): void {
