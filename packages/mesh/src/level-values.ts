@@ -59,8 +59,13 @@ export class LevelSums {
   add(face: LevelFace, measures: FaceMeasures): void {
     const { z0, z1, z2, escape: e, up, down, wetQ } = face;
     const { shadowArea: signedShadow, area, facing } = measures;
-    const held = e !== Infinity && facing !== 0;
-    if (!up && !down && wetQ < 0 && !held) return;
+    // Every test is made on every face, none skipped by && (a test first met a million faces in
+    // would throw the compiled code away and box numbers on the heap until it is compiled again).
+    const escapes = e !== Infinity,
+      turned = facing !== 0,
+      dry = wetQ < 0;
+    const held = escapes && turned;
+    if (!up && !down && dry && !held) return;
     const { levels, values, zMin, at } = this;
     const n = levels.length;
     const shadow = Math.abs(signedShadow);

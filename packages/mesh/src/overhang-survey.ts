@@ -33,11 +33,16 @@ export class OverhangSurvey {
    */
   add(face: SurveyFace): void {
     const { facing, shadowArea: signedShadow, z0, z2, steep } = face;
-    if (facing > 0) {
+    // Every test is made on every face (a test first met deep into a file would throw the
+    // compiled code away): files often list all the faces that look up before any that look down.
+    const up = facing > 0,
+      down = facing < 0,
+      raised = z2 > this.zMin + this.tableToleranceMm;
+    if (up) {
       this.lowestFloorMm = Math.min(this.lowestFloorMm, z0);
-    } else if (facing < 0) {
+    } else if (down) {
       this.coveredAreaMm2 -= signedShadow;
-      if (z2 > this.zMin + this.tableToleranceMm) {
+      if (raised) {
         if (steep) this.wallSliverMm3 -= signedShadow * this.height;
         else this.present = true;
       }

@@ -101,6 +101,56 @@ const partitionTarget = 8192;
 const recordSize = 5;
 const recentMask = 16383;
 
+/** Corners handed to listMisses at a time, so the miss list grows by at most this many records between checks of its room. */
+const sliceCorners = 1 << 16;
+
+/**
+ * Pass 1 of ExactWelder over `count` corners from corner `first` on: a corner seen a moment ago
+ * points at that earlier corner, any other is listed as a miss (`missRecords` has room for all of
+ * them). Returns the number of misses listed. Arrays in, a number out and no other state, so it is
+ * compiled once, not thrown away when its caller's code first meets something new.
+ */
+function listMisses(
+  bits: Uint32Array,
+  count: number,
+  first: number,
+  recentCorner: Int32Array,
+  recentKey: Uint32Array,
+  cornerVertex: Uint32Array,
+  missRecords: Uint32Array,
+  misses: number,
+): number {
+  for (let i = 0; i < count; i++) {
+    const c = first + i;
+    // -0 and +0 are the same point; their bit patterns are not.
+    let bx = bits[3 * i]!,
+      by = bits[3 * i + 1]!,
+      bz = bits[3 * i + 2]!;
+    if (bx === 0x80000000) bx = 0;
+    if (by === 0x80000000) by = 0;
+    if (bz === 0x80000000) bz = 0;
+    const hash = mix(bx, by, bz);
+    const r = hash & recentMask;
+    const cached = recentCorner[r]!;
+    if (cached >= 0 && recentKey[3 * r] === bx && recentKey[3 * r + 1] === by && recentKey[3 * r + 2] === bz) {
+      cornerVertex[c] = cached;
+      continue;
+    }
+    const at = recordSize * misses++;
+    // A second mix, so the partitions and their slots do not follow the recent cache's bits.
+    missRecords[at] = c;
+    missRecords[at + 1] = spread(hash);
+    missRecords[at + 2] = bx;
+    missRecords[at + 3] = by;
+    missRecords[at + 4] = bz;
+    recentCorner[r] = c;
+    recentKey[3 * r] = bx;
+    recentKey[3 * r + 1] = by;
+    recentKey[3 * r + 2] = bz;
+  }
+  return misses;
+}
+
 /** Bit-identical corners welded: the vertices' keys and every corner's vertex, in the file's frame. */
 export interface ExactWeld {
   /** Three per vertex: the float32 bits of its coordinates (−0 read as +0), vertices numbered in the order their first corner appears. */
@@ -150,48 +200,19 @@ export class ExactWelder {
 
   /** Takes `count` corners, three float32 bit patterns each, from the start of `bits`. */
   add(bits: Uint32Array, count: number): void {
-    const recentCorner = this.recentCorner,
-      recentKey = this.recentKey,
-      cornerVertex = this.cornerVertex;
-    let missRecords = this.missRecords;
-    let misses = this.misses;
-    const first = this.corners;
-    for (let i = 0; i < count; i++) {
-      const c = first + i;
-      // -0 and +0 are the same point; their bit patterns are not.
-      let bx = bits[3 * i]!,
-        by = bits[3 * i + 1]!,
-        bz = bits[3 * i + 2]!;
-      if (bx === 0x80000000) bx = 0;
-      if (by === 0x80000000) by = 0;
-      if (bz === 0x80000000) bz = 0;
-      const hash = mix(bx, by, bz);
-      const r = hash & recentMask;
-      const cached = recentCorner[r]!;
-      if (cached >= 0 && recentKey[3 * r] === bx && recentKey[3 * r + 1] === by && recentKey[3 * r + 2] === bz) {
-        cornerVertex[c] = cached;
-        continue;
+    for (let from = 0; from < count; from += sliceCorners) {
+      const slice = Math.min(sliceCorners, count - from);
+      // Room for every corner of the slice to be a miss, with its sorted copy (see finish).
+      const needed = 2 * recordSize * (this.misses + slice);
+      if (needed > this.missRecords.length) {
+        const grown = new Uint32Array(Math.max(needed, 2 * this.missRecords.length));
+        grown.set(this.missRecords.subarray(0, recordSize * this.misses));
+        this.missRecords = grown;
       }
-      if (2 * recordSize * misses === missRecords.length) {
-        const grown = new Uint32Array(2 * missRecords.length);
-        grown.set(missRecords.subarray(0, recordSize * misses));
-        missRecords = grown;
-      }
-      const at = recordSize * misses++;
-      // A second mix, so the partitions and their slots do not follow the recent cache's bits.
-      missRecords[at] = c;
-      missRecords[at + 1] = spread(hash);
-      missRecords[at + 2] = bx;
-      missRecords[at + 3] = by;
-      missRecords[at + 4] = bz;
-      recentCorner[r] = c;
-      recentKey[3 * r] = bx;
-      recentKey[3 * r + 1] = by;
-      recentKey[3 * r + 2] = bz;
+      const sliced = from === 0 && slice === count ? bits : bits.subarray(3 * from, 3 * (from + slice));
+      this.misses = listMisses(sliced, slice, this.corners, this.recentCorner, this.recentKey, this.cornerVertex, this.missRecords, this.misses);
+      this.corners += slice;
     }
-    this.missRecords = missRecords;
-    this.misses = misses;
-    this.corners = first + count;
   }
 
   /** Passes 2 to 4 over the corners added; the welder is spent afterwards. */
