@@ -1,3 +1,4 @@
+import { pageSizedInt32, pageSizedUint8 } from './page-sized';
 import { SpareMemory } from './spare-memory';
 
 /**
@@ -60,8 +61,8 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
     }
   }
 
-  const neighbour = withNeighbours ? new Int32Array(halfEdges).fill(-1) : new Int32Array(0);
-  const sameDirection = new Uint8Array(withNeighbours ? halfEdges : 0);
+  const neighbour = withNeighbours ? pageSizedInt32(halfEdges).fill(-1) : new Int32Array(0);
+  const sameDirection = pageSizedUint8(withNeighbours ? halfEdges : 0);
   // Entries already paired are overwritten with this mark (no vertex has the largest index).
   const done = 0xffffffff;
   let edgeCount = 0,

@@ -1,7 +1,10 @@
+import { pageSizedFloat64, pageSizedInt8, pageSizedUint32, pageSizedUint8 } from './page-sized';
+
 /**
  * Typed arrays carved one after another out of memory nothing else uses any more (the bytes of a
  * file read in place), or fresh ones when there is none or it runs out. Fresh memory costs a page
- * fault per 4 kB at its first touch, which for a big mesh outweighs the arithmetic done in it.
+ * fault per 4 kB at its first touch, which for a big mesh outweighs the arithmetic done in it
+ * (fresh ones are page-sized, see page-sized.ts).
  * A carved array holds whatever was there: callers write every entry before reading it, or ask
  * for a cleared one.
  */
@@ -24,21 +27,21 @@ export class SpareMemory {
 
   float64(length: number): Float64Array {
     const at = this.take(length, 8);
-    return at === null ? new Float64Array(length) : new Float64Array(this.bytes!.buffer, at, length);
+    return at === null ? pageSizedFloat64(length) : new Float64Array(this.bytes!.buffer, at, length);
   }
 
   uint32(length: number): Uint32Array {
     const at = this.take(length, 4);
-    return at === null ? new Uint32Array(length) : new Uint32Array(this.bytes!.buffer, at, length);
+    return at === null ? pageSizedUint32(length) : new Uint32Array(this.bytes!.buffer, at, length);
   }
 
   int8(length: number): Int8Array {
     const at = this.take(length, 1);
-    return at === null ? new Int8Array(length) : new Int8Array(this.bytes!.buffer, at, length);
+    return at === null ? pageSizedInt8(length) : new Int8Array(this.bytes!.buffer, at, length);
   }
 
   uint8(length: number): Uint8Array {
     const at = this.take(length, 1);
-    return at === null ? new Uint8Array(length) : new Uint8Array(this.bytes!.buffer, at, length);
+    return at === null ? pageSizedUint8(length) : new Uint8Array(this.bytes!.buffer, at, length);
   }
 }

@@ -6,6 +6,7 @@ import {
   curve,
   fillAt,
   mmPerUnit,
+  pageSizedUint8,
   prepareMesh,
   prepareStreamedStl,
   readAnalysis,
@@ -181,7 +182,7 @@ export const command: Command = async (argv) => {
   return values.json ? JSON.stringify(report, null, 2) : readable(file, report, up);
 };
 
-/** Bytes read at a time: every fresh page costs, so one buffer is filled again and again. */
+/** Bytes read at a time: every fresh page costs, so one buffer (a single huge page) is filled again and again. */
 const chunkBytes = 1 << 20;
 
 interface ReadMould {
@@ -207,7 +208,7 @@ async function readMould(file: string): Promise<ReadMould> {
       // Only a regular file's size is known before reading it; a pipe is read whole, untouched.
       // BinaryStlStream.open leaves anything it does not take (a file shorter than a header included) to the whole read.
       if (stat.isFile() && stat.size > 0) {
-        const buffer = new Uint8Array(Math.min(chunkBytes, stat.size));
+        const buffer = pageSizedUint8(Math.min(chunkBytes, stat.size));
         let length = readSync(fd, buffer, 0, buffer.length, null);
         const stream = BinaryStlStream.open(buffer.subarray(0, length), stat.size);
         if (stream) {
