@@ -220,93 +220,121 @@ export class ExactWelder {
   finish(): ExactWeld {
     const missRecords = this.missRecords,
       misses = this.misses,
-      corners = this.corners,
       cornerVertex = this.cornerVertex;
     let partitionBits = 0;
     while (misses >>> partitionBits > partitionTarget && partitionBits < 16) partitionBits++;
-    const partitions = 1 << partitionBits;
-    const partitionOf = (hash: number): number => (partitionBits === 0 ? 0 : hash >>> (32 - partitionBits));
-    const start = new Uint32Array(partitions + 1);
-    for (let m = 0; m < misses; m++) start[partitionOf(missRecords[recordSize * m + 1]!) + 1]!++;
-    for (let q = 0; q < partitions; q++) start[q + 1]! += start[q]!;
+    const start = partitionStarts(missRecords, misses, partitionBits);
     // Behind the list when it fits, so the two make one stretch of memory to lend on.
     const listEnd = recordSize * misses;
     const sorted = missRecords.subarray(listEnd, 2 * listEnd);
-    const next = start.slice(0, partitions);
-    for (let m = 0; m < misses; m++) {
-      const from = recordSize * m,
-        to = recordSize * next[partitionOf(missRecords[from + 1]!)]!++;
-      sorted[to] = missRecords[from]!;
-      sorted[to + 1] = missRecords[from + 1]!;
-      sorted[to + 2] = missRecords[from + 2]!;
-      sorted[to + 3] = missRecords[from + 3]!;
-      sorted[to + 4] = missRecords[from + 4]!;
-    }
-
-    let largest = 0;
-    for (let q = 0; q < partitions; q++) largest = Math.max(largest, start[q + 1]! - start[q]!);
-    let tableSize = 16;
-    while (tableSize < 2 * largest) tableSize *= 2;
-    // Slot → 1 + index in the sorted misses of the first corner with that key; 0 when empty.
-    const slots = new Int32Array(tableSize);
-    for (let q = 0; q < partitions; q++) {
-      const from = start[q]!,
-        to = start[q + 1]!;
-      let size = 16;
-      while (size < 2 * (to - from)) size *= 2;
-      const mask = size - 1;
-      slots.fill(0, 0, size);
-      for (let j = from; j < to; j++) {
-        const at = recordSize * j,
-          corner = sorted[at]!,
-          kx = sorted[at + 2]!,
-          ky = sorted[at + 3]!,
-          kz = sorted[at + 4]!;
-        let h = sorted[at + 1]! & mask;
-        for (;;) {
-          const slot = slots[h]!;
-          if (slot === 0) {
-            slots[h] = j + 1;
-            cornerVertex[corner] = corner;
-            break;
-          }
-          const first = recordSize * (slot - 1);
-          if (sorted[first + 2] === kx && sorted[first + 3] === ky && sorted[first + 4] === kz) {
-            cornerVertex[corner] = sorted[first]!;
-            break;
-          }
-          h = (h + 1) & mask;
-        }
-      }
-    }
-
-    // The first corner with a key is always a miss (nothing earlier could be cached under it), and
-    // the misses are listed in corner order: walking them alongside finds its keys. They are
-    // written over the list's start (vertex n at 3n, read from miss m ≥ n at 5m, and only later
-    // misses read after it), which is spent once read.
-    const keys = missRecords;
-    let count = 0;
-    let m = 0;
-    for (let c = 0; c < corners; c++) {
-      const earlier = cornerVertex[c]!;
-      if (earlier !== c) {
-        cornerVertex[c] = cornerVertex[earlier]!;
-        continue;
-      }
-      while (missRecords[recordSize * m] !== c) m++;
-      const at = recordSize * m++;
-      const kx = missRecords[at + 2]!,
-        ky = missRecords[at + 3]!,
-        kz = missRecords[at + 4]!;
-      keys[3 * count] = kx;
-      keys[3 * count + 1] = ky;
-      keys[3 * count + 2] = kz;
-      cornerVertex[c] = count++;
-    }
+    sortIntoPartitions(missRecords, misses, partitionBits, start, sorted);
+    pointAtFirst(sorted, start, cornerVertex);
+    const count = numberVertices(missRecords, this.corners, cornerVertex);
     // The list and its sorted copy are spent but for the keys at its start.
     const spare = listEnd > 0 ? new Uint8Array(missRecords.buffer, missRecords.byteOffset, 8 * listEnd) : null;
-    return { keys: keys.subarray(0, 3 * count), cornerVertex, spare };
+    return { keys: missRecords.subarray(0, 3 * count), cornerVertex, spare };
   }
+}
+
+// Passes 2 to 4 of ExactWelder.finish, each a function of arrays and numbers only: a pass of its
+// own is compiled when its loop gets hot, not thrown away when the pass before it ends.
+
+/** The partition of a miss: the top `bits` bits of its hash (`>>> 32` would shift by 0). */
+function partitionOf(hash: number, bits: number): number {
+  return (hash >>> (31 - bits)) >>> 1;
+}
+
+/** Where each partition's misses start in the sorted list, and (last) where the list ends. */
+function partitionStarts(missRecords: Uint32Array, misses: number, bits: number): Uint32Array {
+  const partitions = 1 << bits;
+  const start = new Uint32Array(partitions + 1);
+  for (let m = 0; m < misses; m++) start[partitionOf(missRecords[recordSize * m + 1]!, bits) + 1]!++;
+  for (let q = 0; q < partitions; q++) start[q + 1]! += start[q]!;
+  return start;
+}
+
+/** Pass 2: the misses copied into `sorted` by partition, in corner order within each. */
+function sortIntoPartitions(missRecords: Uint32Array, misses: number, bits: number, start: Uint32Array, sorted: Uint32Array): void {
+  const next = start.slice(0, start.length - 1);
+  for (let m = 0; m < misses; m++) {
+    const from = recordSize * m,
+      to = recordSize * next[partitionOf(missRecords[from + 1]!, bits)]!++;
+    sorted[to] = missRecords[from]!;
+    sorted[to + 1] = missRecords[from + 1]!;
+    sorted[to + 2] = missRecords[from + 2]!;
+    sorted[to + 3] = missRecords[from + 3]!;
+    sorted[to + 4] = missRecords[from + 4]!;
+  }
+}
+
+/** Pass 3: in each partition, with a small table of its own, every miss points at the first corner with its keys. */
+function pointAtFirst(sorted: Uint32Array, start: Uint32Array, cornerVertex: Uint32Array): void {
+  const partitions = start.length - 1;
+  let largest = 0;
+  for (let q = 0; q < partitions; q++) largest = Math.max(largest, start[q + 1]! - start[q]!);
+  let tableSize = 16;
+  while (tableSize < 2 * largest) tableSize *= 2;
+  // Slot → 1 + index in the sorted misses of the first corner with that key; 0 when empty.
+  const slots = new Int32Array(tableSize);
+  for (let q = 0; q < partitions; q++) {
+    const from = start[q]!,
+      to = start[q + 1]!;
+    let size = 16;
+    while (size < 2 * (to - from)) size *= 2;
+    const mask = size - 1;
+    slots.fill(0, 0, size);
+    for (let j = from; j < to; j++) {
+      const at = recordSize * j,
+        corner = sorted[at]!,
+        kx = sorted[at + 2]!,
+        ky = sorted[at + 3]!,
+        kz = sorted[at + 4]!;
+      let h = sorted[at + 1]! & mask;
+      for (;;) {
+        const slot = slots[h]!;
+        if (slot === 0) {
+          slots[h] = j + 1;
+          cornerVertex[corner] = corner;
+          break;
+        }
+        const first = recordSize * (slot - 1);
+        if (sorted[first + 2] === kx && sorted[first + 3] === ky && sorted[first + 4] === kz) {
+          cornerVertex[corner] = sorted[first]!;
+          break;
+        }
+        h = (h + 1) & mask;
+      }
+    }
+  }
+}
+
+/**
+ * Pass 4: vertex numbers in corner order; returns how many. The first corner with a key is always
+ * a miss (nothing earlier could be cached under it), and the misses are listed in corner order:
+ * walking them alongside finds its keys. They are written over the list's start (vertex n at 3n,
+ * read from miss m ≥ n at 5m, and only later misses read after it), which is spent once read.
+ */
+function numberVertices(missRecords: Uint32Array, corners: number, cornerVertex: Uint32Array): number {
+  const keys = missRecords;
+  let count = 0;
+  let m = 0;
+  for (let c = 0; c < corners; c++) {
+    const earlier = cornerVertex[c]!;
+    if (earlier !== c) {
+      cornerVertex[c] = cornerVertex[earlier]!;
+      continue;
+    }
+    while (missRecords[recordSize * m] !== c) m++;
+    const at = recordSize * m++;
+    const kx = missRecords[at + 2]!,
+      ky = missRecords[at + 3]!,
+      kz = missRecords[at + 4]!;
+    keys[3 * count] = kx;
+    keys[3 * count + 1] = ky;
+    keys[3 * count + 2] = kz;
+    cornerVertex[c] = count++;
+  }
+  return count;
 }
 
 /**
