@@ -28,8 +28,34 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
   // The working arrays may live in spare memory; what is returned never does.
   const memory = new SpareMemory(spare);
   const start = memory.uint32(vertexCount + 1).fill(0);
+  countByLower(triangles, start, vertexCount);
+  const fill = memory.uint32(vertexCount);
+  fill.set(start.subarray(0, vertexCount));
+  // Each entry: the half-edge, and its upper vertex with the direction in the top bit, so the
+  // pairing pass below reads memory in order.
+  const grouped = memory.uint32(withNeighbours ? halfEdges : 0);
+  const upperWay = memory.uint32(halfEdges);
+  groupByLower(triangles, fill, upperWay, grouped, withNeighbours);
+  const neighbour = withNeighbours ? pageSizedInt32(halfEdges).fill(-1) : new Int32Array(0);
+  const sameDirection = pageSizedUint8(withNeighbours ? halfEdges : 0);
+  const counts = pairEdges(start, upperWay, grouped, vertexCount, withNeighbours, neighbour, sameDirection);
+  return {
+    edgeCount: counts[0]!,
+    openEdges: counts[1]!,
+    nonManifoldEdges: counts[2]!,
+    misorientedEdges: counts[3]!,
+    neighbour,
+    sameDirection,
+  };
+}
+
+// The passes of analyseEdges, each a function of arrays and numbers only, so each is compiled when
+// its loop gets hot instead of the whole being thrown away as a pass ends.
+
+/** How many half-edges each vertex is the lower end of, as running starts (a counting sort's first pass). */
+function countByLower(triangles: Uint32Array, start: Uint32Array, vertexCount: number): void {
   // Triangle by triangle, its three half-edges a→b, b→c, c→a (no modulo per half-edge).
-  for (let e = 0; e < halfEdges; e += 3) {
+  for (let e = 0; e < triangles.length; e += 3) {
     const a = triangles[e]!,
       b = triangles[e + 1]!,
       c = triangles[e + 2]!;
@@ -38,13 +64,11 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
     start[(c < a ? c : a) + 1]!++;
   }
   for (let v = 0; v < vertexCount; v++) start[v + 1]! += start[v]!;
-  const fill = memory.uint32(vertexCount);
-  fill.set(start.subarray(0, vertexCount));
-  // Each entry: the half-edge, and its upper vertex with the direction in the top bit, so the
-  // pairing pass below reads memory in order.
-  const grouped = memory.uint32(withNeighbours ? halfEdges : 0);
-  const upperWay = memory.uint32(halfEdges);
-  for (let e = 0; e < halfEdges; e += 3) {
+}
+
+/** Every half-edge's upper vertex and direction (and, when asked, the half-edge) in its lower vertex's group. */
+function groupByLower(triangles: Uint32Array, fill: Uint32Array, upperWay: Uint32Array, grouped: Uint32Array, withNeighbours: boolean): void {
+  for (let e = 0; e < triangles.length; e += 3) {
     const a = triangles[e]!,
       b = triangles[e + 1]!,
       c = triangles[e + 2]!;
@@ -60,16 +84,24 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
       grouped[at2] = e + 2;
     }
   }
+}
 
-  const neighbour = withNeighbours ? pageSizedInt32(halfEdges).fill(-1) : new Int32Array(0);
-  const sameDirection = pageSizedUint8(withNeighbours ? halfEdges : 0);
+/** Pairs the half-edges inside each group by their upper vertex: edges, open, non-manifold and misoriented ones, in that order. */
+function pairEdges(
+  start: Uint32Array,
+  upperWay: Uint32Array,
+  grouped: Uint32Array,
+  vertexCount: number,
+  withNeighbours: boolean,
+  neighbour: Int32Array,
+  sameDirection: Uint8Array,
+): [number, number, number, number] {
   // Entries already paired are overwritten with this mark (no vertex has the largest index).
   const done = 0xffffffff;
   let edgeCount = 0,
     openEdges = 0,
     nonManifoldEdges = 0,
     misorientedEdges = 0;
-
   for (let v = 0; v < vertexCount; v++) {
     const from = start[v]!,
       to = start[v + 1]!;
@@ -109,5 +141,5 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
       }
     }
   }
-  return { edgeCount, openEdges, nonManifoldEdges, misorientedEdges, neighbour, sameDirection };
+  return [edgeCount, openEdges, nonManifoldEdges, misorientedEdges];
 }
