@@ -16,6 +16,7 @@ const databaseTests = [
   'packages/db/src/seed/demo.test.ts',
   // Seeds, backs up and restores databases of its own on the cluster.
   'packages/db/src/backup.test.ts',
+  'packages/db/src/local-cluster.test.ts',
 ];
 // Tests of the API that build their own Express app or fake the database: no PostgreSQL.
 const apiUnitTests = [
@@ -53,7 +54,7 @@ export default defineConfig({
         test: {
           name: 'unit',
           include: ['packages/*/src/**/*.test.ts', 'apps/web/src/**/*.test.ts', 'apps/mailsink/src/**/*.test.ts', ...apiUnitTests],
-          exclude: [...excluded, 'packages/db/src/seed/demo.test.ts', 'packages/db/src/backup.test.ts'],
+          exclude: [...excluded, 'packages/db/src/seed/demo.test.ts', 'packages/db/src/backup.test.ts', 'packages/db/src/local-cluster.test.ts'],
         },
       },
       {
