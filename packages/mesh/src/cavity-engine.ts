@@ -7,7 +7,7 @@
 export { BinaryStlStream, type StreamedStl } from './stl/binary-stl-stream';
 export type { TriangleSoup } from './stl/triangle-soup';
 export { mmPerUnit, type FileUnits, type UpAxis } from './frame';
-export { pageSizedUint8 } from './page-sized';
+export { pageSized } from './page-sized';
 export { prepareMesh, prepareStreamedStl } from './prepare-mesh';
 export { analyzeCavity } from './analyze-cavity';
 export { readAnalysis } from './analysis-codec';

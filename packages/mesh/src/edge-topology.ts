@@ -1,4 +1,4 @@
-import { pageSizedInt32, pageSizedUint8 } from './page-sized';
+import { pageSized } from './page-sized';
 import { SpareMemory } from './spare-memory';
 
 /**
@@ -36,8 +36,8 @@ export function analyseEdges(triangles: Uint32Array, vertexCount: number, withNe
   const grouped = memory.uint32(withNeighbours ? halfEdges : 0);
   const upperWay = memory.uint32(halfEdges);
   groupByLower(triangles, fill, upperWay, grouped, withNeighbours);
-  const neighbour = withNeighbours ? pageSizedInt32(halfEdges).fill(-1) : new Int32Array(0);
-  const sameDirection = pageSizedUint8(withNeighbours ? halfEdges : 0);
+  const neighbour = pageSized(Int32Array, withNeighbours ? halfEdges : 0).fill(-1);
+  const sameDirection = pageSized(Uint8Array, withNeighbours ? halfEdges : 0);
   const counts = pairEdges(start, upperWay, grouped, vertexCount, withNeighbours, neighbour, sameDirection);
   return {
     edgeCount: counts[0]!,

@@ -1,4 +1,4 @@
-import { pageSizedInt8, pageSizedUint8 } from './page-sized';
+import { pageSized } from './page-sized';
 import { wettedQuantity, type LevelFace } from './level-series';
 import { LevelSums, type LevelValues } from './level-values';
 import { OverhangSurvey } from './overhang-survey';
@@ -30,8 +30,8 @@ export function levelsWithoutTable(
 ): LevelsWithoutTable | null {
   const count = triangles.length / 3;
   const zMin = frame.zMin;
-  const wet = pageSizedUint8(count);
-  const facing = pageSizedInt8(count);
+  const wet = pageSized(Uint8Array, count);
+  const facing = pageSized(Int8Array, count);
   const survey = new OverhangSurvey(zMin, height, tableToleranceMm);
   const sums = new LevelSums(levels, zMin);
   const walls = new WallRays();

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { pageSizedBytes, pageSizedFloat64, pageSizedInt8, pageSizedUint32 } from './page-sized';
+import { pageSized, pageSizedBytes } from './page-sized';
 
 const MB = 1024 * 1024;
 
@@ -27,12 +27,12 @@ describe('page-sized arrays', () => {
   });
 
   it('gives zeroed arrays of exactly the length asked for', () => {
-    const a = pageSizedUint32(3_000_001);
+    const a = pageSized(Uint32Array, 3_000_001);
     expect(a.length).toBe(3_000_001);
     expect(a.byteOffset).toBe(0);
     expect(a.buffer.byteLength).toBe(pageSizedBytes(4 * 3_000_001));
     expect(a.every((v) => v === 0)).toBe(true);
-    expect(pageSizedFloat64(5).length).toBe(5);
-    expect(pageSizedInt8(0).length).toBe(0);
+    expect(pageSized(Float64Array, 5).length).toBe(5);
+    expect(pageSized(Int8Array, 0).length).toBe(0);
   });
 });

@@ -27,26 +27,13 @@ export function pageSizedBytes(bytes: number, linux = onLinux): number {
   return Math.ceil((bytes + smallPage) / hugePage) * hugePage - smallPage;
 }
 
-function pageSizedBuffer(bytes: number): ArrayBuffer {
-  return new ArrayBuffer(pageSizedBytes(bytes));
+/** A typed array's constructor: Uint8Array, Int32Array, Float64Array and the like. */
+export interface TypedArrayKind<T> {
+  new (buffer: ArrayBufferLike, byteOffset: number, length: number): T;
+  readonly BYTES_PER_ELEMENT: number;
 }
 
-export function pageSizedUint32(length: number): Uint32Array {
-  return new Uint32Array(pageSizedBuffer(4 * length), 0, length);
-}
-
-export function pageSizedInt32(length: number): Int32Array {
-  return new Int32Array(pageSizedBuffer(4 * length), 0, length);
-}
-
-export function pageSizedFloat64(length: number): Float64Array {
-  return new Float64Array(pageSizedBuffer(8 * length), 0, length);
-}
-
-export function pageSizedUint8(length: number): Uint8Array {
-  return new Uint8Array(pageSizedBuffer(length), 0, length);
-}
-
-export function pageSizedInt8(length: number): Int8Array {
-  return new Int8Array(pageSizedBuffer(length), 0, length);
+/** A zeroed array of `length` elements of this kind, over a buffer of pageSizedBytes. */
+export function pageSized<T>(Kind: TypedArrayKind<T>, length: number): T {
+  return new Kind(new ArrayBuffer(pageSizedBytes(Kind.BYTES_PER_ELEMENT * length)), 0, length);
 }

@@ -1,4 +1,4 @@
-import { pageSizedFloat64, pageSizedInt8, pageSizedUint32, pageSizedUint8 } from './page-sized';
+import { pageSized, type TypedArrayKind } from './page-sized';
 
 /**
  * Typed arrays carved one after another out of memory nothing else uses any more (the bytes of a
@@ -25,23 +25,24 @@ export class SpareMemory {
     return at;
   }
 
+  private carve<T>(Kind: TypedArrayKind<T>, length: number): T {
+    const at = this.take(length, Kind.BYTES_PER_ELEMENT);
+    return at === null ? pageSized(Kind, length) : new Kind(this.bytes!.buffer, at, length);
+  }
+
   float64(length: number): Float64Array {
-    const at = this.take(length, 8);
-    return at === null ? pageSizedFloat64(length) : new Float64Array(this.bytes!.buffer, at, length);
+    return this.carve(Float64Array, length);
   }
 
   uint32(length: number): Uint32Array {
-    const at = this.take(length, 4);
-    return at === null ? pageSizedUint32(length) : new Uint32Array(this.bytes!.buffer, at, length);
+    return this.carve(Uint32Array, length);
   }
 
   int8(length: number): Int8Array {
-    const at = this.take(length, 1);
-    return at === null ? pageSizedInt8(length) : new Int8Array(this.bytes!.buffer, at, length);
+    return this.carve(Int8Array, length);
   }
 
   uint8(length: number): Uint8Array {
-    const at = this.take(length, 1);
-    return at === null ? pageSizedUint8(length) : new Uint8Array(this.bytes!.buffer, at, length);
+    return this.carve(Uint8Array, length);
   }
 }

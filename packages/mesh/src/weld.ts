@@ -1,4 +1,4 @@
-import { pageSizedFloat64, pageSizedUint32 } from './page-sized';
+import { pageSized } from './page-sized';
 import { toZUpMm, type UpAxis } from './frame';
 import type { TriangleSoup } from './stl/triangle-soup';
 
@@ -196,7 +196,7 @@ export class ExactWelder {
   /** `cornerVertex` has room for every corner that will be added. */
   constructor(private readonly cornerVertex: Uint32Array) {
     // Room for the sorted copy too (see finish): pages never written cost nothing.
-    this.missRecords = pageSizedUint32(2 * recordSize * Math.max(1024, Math.ceil(cornerVertex.length / 4)));
+    this.missRecords = pageSized(Uint32Array, 2 * recordSize * Math.max(1024, Math.ceil(cornerVertex.length / 4)));
   }
 
   /** Takes `count` corners, three float32 bit patterns each, from the start of `bits`. */
@@ -206,7 +206,7 @@ export class ExactWelder {
       // Room for every corner of the slice to be a miss, with its sorted copy (see finish).
       const needed = 2 * recordSize * (this.misses + slice);
       if (needed > this.missRecords.length) {
-        const grown = pageSizedUint32(Math.max(needed, 2 * this.missRecords.length));
+        const grown = pageSized(Uint32Array, Math.max(needed, 2 * this.missRecords.length));
         grown.set(this.missRecords.subarray(0, recordSize * this.misses));
         this.missRecords = grown;
       }
@@ -346,7 +346,7 @@ export function framedWeld(weld: ExactWeld, triangleCount: number, frame: Pick<W
   const vertexCount = keys.length / 3;
   // The keys are the corners' float32 bits: read them back as coordinates.
   const coordinates = new Float32Array(keys.buffer, keys.byteOffset, vertexCount * 3);
-  const positionsMm = pageSizedFloat64(vertexCount * 3);
+  const positionsMm = pageSized(Float64Array, vertexCount * 3);
   if (frame.up === 'z' && frame.scale === 1) {
     // Millimetres, z up: the coordinates as they are (x · 1 is x), widened in one native copy.
     positionsMm.set(coordinates);
@@ -373,7 +373,8 @@ function withoutCollapsed(positionsMm: Float64Array, vertexCount: number, corner
   }
   return {
     positionsMm,
-    triangles: kept === triangleCount ? cornerVertex : cornerVertex.slice(0, kept * 3),
+    // The kept triangles' view over the same memory: a copy would touch as much fresh memory again.
+    triangles: kept === triangleCount ? cornerVertex : cornerVertex.subarray(0, kept * 3),
     vertexCount,
     triangleCount: kept,
     degenerateDropped: triangleCount - kept,
@@ -386,7 +387,7 @@ function withoutCollapsed(positionsMm: Float64Array, vertexCount: number, corner
  */
 export function weldSoup(soup: TriangleSoup, frame: WeldFrame): WeldedMesh {
   const corners = soup.triangleCount * 3;
-  const cornerVertex = pageSizedUint32(corners);
+  const cornerVertex = pageSized(Uint32Array, corners);
   const p = soup.positions;
 
   if (frame.toleranceMm > 0) {
@@ -405,7 +406,7 @@ export function weldSoup(soup: TriangleSoup, frame: WeldFrame): WeldedMesh {
       cornerVertex[c] = table.idOf(kx, ky, kz, mix(kx, ky, kz));
       if (table.count > before) firstCorner.push(c);
     }
-    const positionsMm = pageSizedFloat64(table.count * 3);
+    const positionsMm = pageSized(Float64Array, table.count * 3);
     for (let v = 0; v < table.count; v++) {
       const c = firstCorner[v]!;
       toZUpMm(p[3 * c]!, p[3 * c + 1]!, p[3 * c + 2]!, frame.up, frame.scale, positionsMm, 3 * v);

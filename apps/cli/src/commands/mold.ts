@@ -6,7 +6,7 @@ import {
   curve,
   fillAt,
   mmPerUnit,
-  pageSizedUint8,
+  pageSized,
   prepareMesh,
   prepareStreamedStl,
   readAnalysis,
@@ -208,7 +208,7 @@ async function readMould(file: string): Promise<ReadMould> {
       // Only a regular file's size is known before reading it; a pipe is read whole, untouched.
       // BinaryStlStream.open leaves anything it does not take (a file shorter than a header included) to the whole read.
       if (stat.isFile() && stat.size > 0) {
-        const buffer = pageSizedUint8(Math.min(chunkBytes, stat.size));
+        const buffer = pageSized(Uint8Array, Math.min(chunkBytes, stat.size));
         let length = readSync(fd, buffer, 0, buffer.length, null);
         const stream = BinaryStlStream.open(buffer.subarray(0, length), stat.size);
         if (stream) {

@@ -1,4 +1,4 @@
-import { pageSizedUint32 } from '../page-sized';
+import { pageSized } from '../page-sized';
 import { onlyWhitespace, looksLikeText, opensWith } from '../text-bytes';
 import { fail, ok, type MeshWarning, type Result } from '../result';
 import { ExactWelder, type ExactWeld } from '../weld';
@@ -64,7 +64,7 @@ export class BinaryStlStream {
     private readonly fileBytes: number,
     private readonly triangleCount: number,
   ) {
-    this.welder = new ExactWelder(pageSizedUint32(3 * triangleCount));
+    this.welder = new ExactWelder(pageSized(Uint32Array, 3 * triangleCount));
   }
 
   /**
